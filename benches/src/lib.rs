@@ -1,0 +1,1 @@
+//! Benchmarks of hydrograde live in `benches/benches/`; this crate has no library code.

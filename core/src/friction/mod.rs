@@ -1,0 +1,614 @@
+//! The Darcy friction factor: laminar, transitional and turbulent.
+//!
+//! [`darcy_factor`] is the one entry point. It classifies the regime from the Reynolds
+//! number, evaluates the laminar law `f = C/Re` (C is the section's laminar constant, 64
+//! for a circle), the chosen turbulent correlation, or — between the two limits — a C¹
+//! blend of both, and returns `f` with `∂f/∂Re`, `∂f/∂(ε/D)`, the regime and warnings.
+//!
+//! Accuracy of each turbulent correlation, against the exact Colebrook solution:
+//!
+//! | correlation | published validity | published accuracy vs Colebrook | source |
+//! |---|---|---|---|
+//! | Colebrook (exact) | Re 4e3…1e8, ε/D 0…0.05 (chart range) | solved to ≤ 4 ulp | Colebrook 1939 |
+//! | Haaland | Re 4e3…1e8, ε/D 1e-6…0.05 | ±1.5 % | Haaland 1983 |
+//! | Swamee–Jain | Re 5e3…1e8, ε/D 1e-6…1e-2 | ±1 % | Swamee & Jain 1976 |
+//! | Churchill | all Re, ε/D 0…0.05 | ±2.5 % (turbulent) | Churchill 1977 |
+//! | Serghides | Re 4e3…1e8, ε/D 0…0.05 | ±0.003 % | Serghides 1984 |
+//! | Blasius | Re 4e3…1e5, smooth | ±3.5 % | Blasius 1913 |
+//! | fully rough | ε⁺ = Re (ε/D) √(f/8) ≥ 70 | exact limit of Colebrook | Nikuradse 1933 |
+//!
+//! The accuracy figures are typed from memory of the papers and are checked against
+//! exact Colebrook by `core/tests/explicit_vs_colebrook.rs` over each stated range.
+
+mod colebrook;
+mod explicit;
+
+use crate::error::{Error, Result, check};
+use crate::warning::Warnings;
+use rayon::prelude::*;
+use serde::{Deserialize, Serialize};
+use std::fmt;
+use std::str::FromStr;
+
+/// The largest relative roughness accepted; beyond it there is hardly a bore left.
+pub const MAX_REL_ROUGHNESS: f64 = 0.5;
+/// The largest Reynolds number accepted (no pipe flow comes near; the cheap start of the
+/// Colebrook solver needs the argument of its logarithm to stay a normal number).
+pub const MAX_REYNOLDS: f64 = 1e13;
+
+/// Which correlation gives the turbulent friction factor.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, Default, Serialize, Deserialize)]
+pub enum Correlation {
+    /// Colebrook–White, solved exactly (the default).
+    #[default]
+    Colebrook,
+    /// Haaland (1983), explicit.
+    Haaland,
+    /// Swamee and Jain (1976), explicit.
+    SwameeJain,
+    /// Churchill (1977), explicit, all regimes in one formula.
+    Churchill,
+    /// Serghides (1984), explicit.
+    Serghides,
+    /// Blasius (1913), smooth pipes only.
+    Blasius,
+    /// Fully rough wall (von Kármán, Nikuradse), independent of Re.
+    FullyRough,
+}
+
+/// Published validity range and accuracy of a correlation.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct Validity {
+    /// Smallest Reynolds number of the published range.
+    pub re_min: f64,
+    /// Largest Reynolds number of the published range.
+    pub re_max: f64,
+    /// Smallest relative roughness of the published range.
+    pub rel_roughness_min: f64,
+    /// Largest relative roughness of the published range.
+    pub rel_roughness_max: f64,
+    /// Published largest relative deviation from Colebrook inside the range (0 for
+    /// Colebrook itself), as a fraction.
+    pub accuracy: f64,
+}
+
+impl Correlation {
+    /// Every correlation, in a fixed order (the C constants follow this order).
+    pub const ALL: [Correlation; 7] = [
+        Correlation::Colebrook,
+        Correlation::Haaland,
+        Correlation::SwameeJain,
+        Correlation::Churchill,
+        Correlation::Serghides,
+        Correlation::Blasius,
+        Correlation::FullyRough,
+    ];
+
+    /// The name used by every binding: `"colebrook"`, `"haaland"`, `"swamee_jain"`,
+    /// `"churchill"`, `"serghides"`, `"blasius"`, `"fully_rough"`.
+    pub fn name(self) -> &'static str {
+        match self {
+            Correlation::Colebrook => "colebrook",
+            Correlation::Haaland => "haaland",
+            Correlation::SwameeJain => "swamee_jain",
+            Correlation::Churchill => "churchill",
+            Correlation::Serghides => "serghides",
+            Correlation::Blasius => "blasius",
+            Correlation::FullyRough => "fully_rough",
+        }
+    }
+
+    /// The published validity range and accuracy (typed from memory of each paper; see
+    /// the module table).
+    pub fn validity(self) -> Validity {
+        let v = |re_min, re_max, rr_min, rr_max, accuracy| Validity {
+            re_min,
+            re_max,
+            rel_roughness_min: rr_min,
+            rel_roughness_max: rr_max,
+            accuracy,
+        };
+        match self {
+            Correlation::Colebrook => v(4e3, 1e8, 0.0, 0.05, 0.0),
+            Correlation::Haaland => v(4e3, 1e8, 1e-6, 0.05, 0.015),
+            Correlation::SwameeJain => v(5e3, 1e8, 1e-6, 1e-2, 0.01),
+            Correlation::Churchill => v(0.0, 1e8, 0.0, 0.05, 0.025),
+            Correlation::Serghides => v(4e3, 1e8, 0.0, 0.05, 3e-5),
+            Correlation::Blasius => v(4e3, 1e5, 0.0, 0.0, 0.035),
+            Correlation::FullyRough => v(0.0, f64::INFINITY, 1e-6, 0.05, 0.0),
+        }
+    }
+
+    /// True for correlations that cover the laminar and transitional regimes themselves.
+    fn covers_all_regimes(self) -> bool {
+        matches!(self, Correlation::Churchill)
+    }
+}
+
+impl fmt::Display for Correlation {
+    fn fmt(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
+        f.write_str(self.name())
+    }
+}
+
+impl FromStr for Correlation {
+    type Err = Error;
+    fn from_str(s: &str) -> Result<Self> {
+        Correlation::ALL
+            .into_iter()
+            .find(|c| c.name() == s)
+            .ok_or_else(|| {
+                let names: Vec<&str> = Correlation::ALL.iter().map(|c| c.name()).collect();
+                Error::unknown_name("correlation", s, &names)
+            })
+    }
+}
+
+/// The flow regime.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, Serialize, Deserialize)]
+pub enum Regime {
+    /// Re below the laminar limit (2300 by default).
+    Laminar,
+    /// Re between the laminar and turbulent limits.
+    Transitional,
+    /// Re above the turbulent limit (4000 by default).
+    Turbulent,
+}
+
+impl Regime {
+    /// `"laminar"`, `"transitional"` or `"turbulent"`.
+    pub fn name(self) -> &'static str {
+        match self {
+            Regime::Laminar => "laminar",
+            Regime::Transitional => "transitional",
+            Regime::Turbulent => "turbulent",
+        }
+    }
+}
+
+/// What to do between the laminar and turbulent limits.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, Default, Serialize, Deserialize)]
+pub enum Transition {
+    /// A C¹ blend (smoothstep in Re) from the laminar value to the turbulent correlation:
+    /// values and slopes match at both limits, so solvers see no jump.
+    #[default]
+    Blend,
+    /// Use the turbulent correlation right down to the laminar limit.
+    Turbulent,
+    /// Refuse with [`Error::NoSolution`].
+    Refuse,
+}
+
+/// Options of [`darcy_factor`]. `Options::default()` is Colebrook with the common-practice
+/// regime limits 2300 and 4000 and the circle's laminar constant 64.
+#[derive(Debug, Clone, Copy, PartialEq, Serialize, Deserialize)]
+pub struct Options {
+    /// Turbulent correlation.
+    pub correlation: Correlation,
+    /// Laminar constant C = f·Re of the section (64 for a circle), dimensionless.
+    pub laminar_constant: f64,
+    /// Re below which flow is laminar (2300, common practice).
+    pub laminar_limit: f64,
+    /// Re above which flow is turbulent (4000, common practice).
+    pub turbulent_limit: f64,
+    /// Treatment of the transitional band.
+    pub transition: Transition,
+}
+
+impl Default for Options {
+    fn default() -> Self {
+        Options {
+            correlation: Correlation::Colebrook,
+            laminar_constant: 64.0,
+            laminar_limit: 2300.0,
+            turbulent_limit: 4000.0,
+            transition: Transition::Blend,
+        }
+    }
+}
+
+impl Options {
+    /// Default options with another correlation.
+    pub fn with_correlation(correlation: Correlation) -> Self {
+        Options {
+            correlation,
+            ..Options::default()
+        }
+    }
+
+    /// Checks the options themselves.
+    pub fn validate(&self) -> Result<()> {
+        check::positive("laminar_constant", self.laminar_constant)?;
+        check::positive("laminar_limit", self.laminar_limit)?;
+        check::positive("turbulent_limit", self.turbulent_limit)?;
+        if self.turbulent_limit < self.laminar_limit {
+            return Err(Error::out_of_range(
+                "turbulent_limit",
+                self.turbulent_limit,
+                format!(
+                    "must not be below laminar_limit ({})",
+                    self.laminar_limit
+                ),
+            ));
+        }
+        Ok(())
+    }
+}
+
+/// A friction factor with its sensitivities.
+#[derive(Debug, Clone, Copy, PartialEq, Serialize, Deserialize)]
+pub struct Friction {
+    /// Darcy friction factor, dimensionless.
+    pub f: f64,
+    /// ∂f/∂Re.
+    pub df_dre: f64,
+    /// ∂f/∂(ε/D).
+    pub df_drel_roughness: f64,
+    /// Flow regime.
+    pub regime: Regime,
+    /// Validity warnings.
+    pub warnings: Warnings,
+}
+
+/// Validates a Reynolds number and a relative roughness (shared by every entry point).
+#[inline]
+pub fn check_inputs(re: f64, rel_roughness: f64) -> Result<()> {
+    check::positive("re", re)?;
+    if re > MAX_REYNOLDS {
+        return Err(Error::out_of_range(
+            "re",
+            re,
+            format!("must not exceed {MAX_REYNOLDS:e}"),
+        ));
+    }
+    check::non_negative("rel_roughness", rel_roughness)?;
+    if rel_roughness > MAX_REL_ROUGHNESS {
+        return Err(Error::out_of_range(
+            "rel_roughness",
+            rel_roughness,
+            format!("must not exceed {MAX_REL_ROUGHNESS} (roughness half the bore)"),
+        ));
+    }
+    Ok(())
+}
+
+/// The Darcy friction factor at Reynolds number `re` and relative roughness
+/// `rel_roughness` = ε/D (both dimensionless).
+///
+/// Laminar (Re < `laminar_limit`): f = C/Re with C = `opts.laminar_constant`, exact for
+/// fully developed flow. Turbulent (Re > `turbulent_limit`): the chosen correlation.
+/// Between: per `opts.transition`. Churchill covers all regimes by itself.
+///
+/// # Errors
+/// [`Error::NotFinite`] for NaN or ±∞; [`Error::OutOfRange`] for Re ≤ 0, Re > 1e13,
+/// ε/D < 0 or ε/D > 0.5, invalid options, or ε/D = 0 with the fully rough law;
+/// [`Error::NoSolution`] for transitional flow with [`Transition::Refuse`].
+///
+/// # Example
+/// ```
+/// use hydrograde::friction::{darcy_factor, Options, Regime};
+/// let fr = darcy_factor(1e5, 1e-4, &Options::default()).unwrap();
+/// assert_eq!(fr.regime, Regime::Turbulent);
+/// assert!((fr.f - 0.01850).abs() < 1e-5); // Moody chart region, exact Colebrook
+/// ```
+pub fn darcy_factor(re: f64, rel_roughness: f64, opts: &Options) -> Result<Friction> {
+    check_inputs(re, rel_roughness)?;
+    opts.validate()?;
+    let corr = opts.correlation;
+    if corr == Correlation::FullyRough && rel_roughness == 0.0 {
+        return Err(Error::out_of_range(
+            "rel_roughness",
+            rel_roughness,
+            "must be greater than 0 for the fully rough law",
+        ));
+    }
+    let regime = if re < opts.laminar_limit {
+        Regime::Laminar
+    } else if re <= opts.turbulent_limit {
+        Regime::Transitional
+    } else {
+        Regime::Turbulent
+    };
+    let mut warnings = Warnings::NONE;
+    if regime == Regime::Transitional {
+        warnings.insert(Warnings::TRANSITIONAL_FLOW);
+    }
+    if corr.covers_all_regimes() {
+        let s = explicit::churchill(re, rel_roughness, opts.laminar_constant);
+        if regime == Regime::Turbulent {
+            warnings |= range_warnings(corr, re, rel_roughness, s.f);
+        }
+        return Ok(finish(s, regime, warnings));
+    }
+    match regime {
+        Regime::Laminar => Ok(finish(laminar(re, opts.laminar_constant), regime, warnings)),
+        Regime::Turbulent => {
+            let s = turbulent(corr, re, rel_roughness);
+            warnings |= range_warnings(corr, re, rel_roughness, s.f);
+            Ok(finish(s, regime, warnings))
+        }
+        Regime::Transitional => match opts.transition {
+            Transition::Refuse => Err(Error::NoSolution {
+                reason: format!(
+                    "re = {re} is transitional (between {} and {}) and the transition option is 'refuse'",
+                    opts.laminar_limit, opts.turbulent_limit
+                ),
+            }),
+            Transition::Turbulent => {
+                let s = turbulent(corr, re, rel_roughness);
+                Ok(finish(s, regime, warnings))
+            }
+            Transition::Blend => {
+                let s = blend(re, rel_roughness, opts);
+                Ok(finish(s, regime, warnings))
+            }
+        },
+    }
+}
+
+/// The laminar law f = C/Re.
+#[inline]
+fn laminar(re: f64, c: f64) -> colebrook::Solution {
+    let f = c / re;
+    colebrook::Solution {
+        f,
+        df_dre: -f / re,
+        df_drel_roughness: 0.0,
+    }
+}
+
+#[inline]
+fn turbulent(corr: Correlation, re: f64, rr: f64) -> colebrook::Solution {
+    match corr {
+        Correlation::Colebrook => colebrook::solve(re, rr),
+        Correlation::Haaland => explicit::haaland(re, rr),
+        Correlation::SwameeJain => explicit::swamee_jain(re, rr),
+        Correlation::Serghides => explicit::serghides(re, rr),
+        Correlation::Blasius => explicit::blasius(re),
+        Correlation::FullyRough => explicit::fully_rough(rr),
+        // Churchill is handled before the regime split; evaluating it here keeps the
+        // match total without a panic path.
+        Correlation::Churchill => explicit::churchill(re, rr, 64.0),
+    }
+}
+
+/// The smoothstep weight w(t) = 3t² − 2t³ on t = (Re − Re_lam)/(Re_turb − Re_lam), and
+/// dw/dRe. w and its slope are 0 at the laminar limit; w = 1 with zero slope at the
+/// turbulent limit, which makes the blend C¹.
+#[inline]
+pub fn blend_weight(re: f64, opts: &Options) -> (f64, f64) {
+    let span = opts.turbulent_limit - opts.laminar_limit;
+    if span <= 0.0 {
+        return (1.0, 0.0);
+    }
+    let t = ((re - opts.laminar_limit) / span).clamp(0.0, 1.0);
+    let w = t * t * (3.0 - 2.0 * t);
+    let dw = 6.0 * t * (1.0 - t) / span;
+    (w, dw)
+}
+
+#[inline]
+fn blend(re: f64, rr: f64, opts: &Options) -> colebrook::Solution {
+    let lam = laminar(re, opts.laminar_constant);
+    let tur = turbulent(opts.correlation, re, rr);
+    let (w, dw) = blend_weight(re, opts);
+    colebrook::Solution {
+        f: (1.0 - w) * lam.f + w * tur.f,
+        df_dre: (1.0 - w) * lam.df_dre + w * tur.df_dre + dw * (tur.f - lam.f),
+        df_drel_roughness: w * tur.df_drel_roughness,
+    }
+}
+
+/// The laminar and turbulent limiting values at a transitional Re (for bands that span
+/// both regimes): `(laminar f, turbulent f)`.
+pub fn transition_limits(re: f64, rel_roughness: f64, opts: &Options) -> Result<(f64, f64)> {
+    check_inputs(re, rel_roughness)?;
+    opts.validate()?;
+    Ok((
+        laminar(re, opts.laminar_constant).f,
+        turbulent(opts.correlation, re, rel_roughness).f,
+    ))
+}
+
+fn range_warnings(corr: Correlation, re: f64, rr: f64, f: f64) -> Warnings {
+    let v = corr.validity();
+    let mut w = Warnings::NONE;
+    if corr == Correlation::FullyRough {
+        // Nikuradse's fully rough threshold on the roughness Reynolds number (from memory).
+        if re * rr * (f / 8.0).sqrt() < 70.0 {
+            w.insert(Warnings::REYNOLDS_OUT_OF_RANGE);
+        }
+    } else if re < v.re_min || re > v.re_max {
+        w.insert(Warnings::REYNOLDS_OUT_OF_RANGE);
+    }
+    // A smooth wall (ε/D = 0) counts as inside every range that starts near zero.
+    if rr > v.rel_roughness_max || (rr > 0.0 && rr < v.rel_roughness_min) {
+        w.insert(Warnings::ROUGHNESS_OUT_OF_RANGE);
+    }
+    w
+}
+
+#[inline]
+fn finish(s: colebrook::Solution, regime: Regime, warnings: Warnings) -> Friction {
+    Friction {
+        f: s.f,
+        df_dre: s.df_dre,
+        df_drel_roughness: s.df_drel_roughness,
+        regime,
+        warnings,
+    }
+}
+
+/// Below this many elements a batch runs on the calling thread.
+pub const PARALLEL_THRESHOLD: usize = 16_384;
+
+/// Friction factors of many points at once: `out[i] = darcy_factor(re[i], rel_roughness[i]).f`.
+///
+/// Runs on all cores (rayon) above [`PARALLEL_THRESHOLD`] elements; the result is the
+/// same bit for bit either way.
+///
+/// # Errors
+/// [`Error::Invalid`] when the three slices differ in length; otherwise the error of the
+/// first failing element, wrapped in [`Error::AtIndex`].
+pub fn darcy_factor_batch(
+    re: &[f64],
+    rel_roughness: &[f64],
+    opts: &Options,
+    out: &mut [f64],
+) -> Result<()> {
+    if re.len() != rel_roughness.len() || re.len() != out.len() {
+        return Err(Error::invalid(
+            "rel_roughness",
+            format!(
+                "lengths differ: re has {}, rel_roughness {}, out {}",
+                re.len(),
+                rel_roughness.len(),
+                out.len()
+            ),
+        ));
+    }
+    opts.validate()?;
+    let one = |(i, ((o, &r), &e)): (usize, ((&mut f64, &f64), &f64))| -> Result<()> {
+        *o = darcy_factor(r, e, opts).map_err(|err| err.at_index(i))?.f;
+        Ok(())
+    };
+    let items = out.iter_mut().zip(re).zip(rel_roughness);
+    if re.len() < PARALLEL_THRESHOLD {
+        items.enumerate().try_for_each(one)
+    } else {
+        let res = out
+            .par_iter_mut()
+            .zip(re.par_iter())
+            .zip(rel_roughness.par_iter())
+            .enumerate()
+            .try_for_each(one);
+        match res {
+            Ok(()) => Ok(()),
+            // Report the first failing element, whichever thread saw an error first.
+            Err(_) => first_error(re, rel_roughness, opts),
+        }
+    }
+}
+
+fn first_error(re: &[f64], rr: &[f64], opts: &Options) -> Result<()> {
+    for (i, (&r, &e)) in re.iter().zip(rr).enumerate() {
+        darcy_factor(r, e, opts).map_err(|err| err.at_index(i))?;
+    }
+    Ok(())
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use approx::assert_relative_eq;
+
+    #[test]
+    fn laminar_is_64_over_re_for_a_circle() {
+        // Exact analytical solution: Hagen–Poiseuille, f = 64/Re.
+        let fr = darcy_factor(1000.0, 0.01, &Options::default()).unwrap();
+        assert_eq!(fr.regime, Regime::Laminar);
+        assert_relative_eq!(fr.f, 0.064, max_relative = 1e-15);
+        assert_relative_eq!(fr.df_dre, -64.0 / 1e6, max_relative = 1e-15);
+        assert_eq!(fr.df_drel_roughness, 0.0);
+    }
+
+    #[test]
+    fn laminar_uses_the_given_constant() {
+        // Exact analytical solution: parallel plates, f·Re = 96 (on the hydraulic diameter).
+        let opts = Options {
+            laminar_constant: 96.0,
+            ..Options::default()
+        };
+        let fr = darcy_factor(500.0, 0.0, &opts).unwrap();
+        assert_relative_eq!(fr.f, 96.0 / 500.0, max_relative = 1e-15);
+    }
+
+    #[test]
+    fn bad_inputs_name_the_parameter() {
+        let o = Options::default();
+        for (re, rr, needle) in [
+            (f64::NAN, 0.0, "re = NaN"),
+            (f64::INFINITY, 0.0, "re = inf"),
+            (-1.0, 0.0, "re = -1"),
+            (0.0, 0.0, "re = 0"),
+            (1e14, 0.0, "re = 100000000000000"),
+            (1e5, -1e-3, "rel_roughness = -0.001"),
+            (1e5, f64::NAN, "rel_roughness = NaN"),
+            (1e5, 0.9, "rel_roughness = 0.9"),
+        ] {
+            let e = darcy_factor(re, rr, &o).unwrap_err();
+            assert!(e.to_string().starts_with(needle), "{e}");
+        }
+        let fr = Options::with_correlation(Correlation::FullyRough);
+        assert!(darcy_factor(1e6, 0.0, &fr).is_err());
+        let bad = Options {
+            laminar_limit: 5000.0,
+            ..Options::default()
+        };
+        assert!(darcy_factor(1e5, 0.0, &bad).unwrap_err().to_string().contains("turbulent_limit"));
+    }
+
+    #[test]
+    fn names_round_trip_and_unknown_names_fail() {
+        for c in Correlation::ALL {
+            assert_eq!(c.name().parse::<Correlation>().unwrap(), c);
+        }
+        let e = "moody".parse::<Correlation>().unwrap_err();
+        assert!(e.to_string().contains("colebrook, haaland"));
+    }
+
+    #[test]
+    fn transition_options() {
+        let re = 3000.0;
+        let blend = darcy_factor(re, 1e-4, &Options::default()).unwrap();
+        assert_eq!(blend.regime, Regime::Transitional);
+        assert!(blend.warnings.contains(Warnings::TRANSITIONAL_FLOW));
+        let (lam, tur) = transition_limits(re, 1e-4, &Options::default()).unwrap();
+        assert!(blend.f > lam.min(tur) && blend.f < lam.max(tur));
+        let turb = Options {
+            transition: Transition::Turbulent,
+            ..Options::default()
+        };
+        assert_eq!(darcy_factor(re, 1e-4, &turb).unwrap().f, tur);
+        let refuse = Options {
+            transition: Transition::Refuse,
+            ..Options::default()
+        };
+        let e = darcy_factor(re, 1e-4, &refuse).unwrap_err();
+        assert_eq!(e.kind(), crate::ErrorKind::NoSolution);
+    }
+
+    #[test]
+    fn warnings_outside_published_ranges() {
+        let o = Options::with_correlation(Correlation::Blasius);
+        let w = darcy_factor(1e6, 0.0, &o).unwrap().warnings;
+        assert!(w.contains(Warnings::REYNOLDS_OUT_OF_RANGE));
+        let w = darcy_factor(5e4, 1e-3, &o).unwrap().warnings;
+        assert!(w.contains(Warnings::ROUGHNESS_OUT_OF_RANGE));
+        let w = darcy_factor(5e4, 0.0, &o).unwrap().warnings;
+        assert!(w.is_empty());
+        let o = Options::with_correlation(Correlation::FullyRough);
+        assert!(darcy_factor(1e4, 1e-5, &o).unwrap().warnings.contains(Warnings::REYNOLDS_OUT_OF_RANGE));
+        assert!(darcy_factor(1e9, 1e-2, &o).unwrap().warnings.is_empty());
+    }
+
+    #[test]
+    fn batch_matches_scalar_bit_for_bit_and_reports_first_error() {
+        let n = PARALLEL_THRESHOLD + 100;
+        let re: Vec<f64> = (0..n).map(|i| 1e3 + 37.0 * i as f64).collect();
+        let rr: Vec<f64> = (0..n).map(|i| 1e-6 * (i % 100) as f64).collect();
+        let mut out = vec![0.0; n];
+        let o = Options::default();
+        darcy_factor_batch(&re, &rr, &o, &mut out).unwrap();
+        for i in (0..n).step_by(997) {
+            assert_eq!(out[i].to_bits(), darcy_factor(re[i], rr[i], &o).unwrap().f.to_bits());
+        }
+        let mut bad = re.clone();
+        bad[n - 5] = -1.0;
+        bad[n - 2] = f64::NAN;
+        let e = darcy_factor_batch(&bad, &rr, &o, &mut out).unwrap_err();
+        assert!(e.to_string().starts_with(&format!("element {}: re = -1", n - 5)), "{e}");
+        let e = darcy_factor_batch(&re[..3], &rr, &o, &mut out).unwrap_err();
+        assert_eq!(e.kind(), crate::ErrorKind::Invalid);
+    }
+}

@@ -1,0 +1,36 @@
+//! # hydrograde
+//!
+//! Pipe-flow friction and head loss: the Darcy–Weisbach equation with the Colebrook
+//! equation solved exactly, explicit correlations, exact laminar solutions for
+//! non-circular sections, minor losses, fluid properties, lines of pipe and fittings,
+//! inverse solves, derivatives for solvers and uncertainty bands.
+//!
+//! Units are SI at every boundary: m, s, kg, Pa, K, m³/s, Pa·s, kg/m³. Flow is signed.
+//!
+//! **Safety.** Results are engineering estimates with stated uncertainty (the friction
+//! correlations are good to about ±10 %, fitting data scatter more). Designs must be
+//! checked by a competent engineer against the codes and standards that apply where
+//! they are built.
+
+#![forbid(unsafe_code)]
+#![warn(missing_docs)]
+
+// One module per domain; bindings mirror these names.
+pub mod band;
+pub mod error;
+pub mod fitting;
+pub mod fluid;
+pub mod friction;
+pub mod line;
+pub mod roughness;
+pub mod section;
+pub mod sizes;
+pub mod units;
+pub mod warning;
+
+pub use error::{Error, ErrorKind, Result};
+pub use friction::{Correlation, Friction, Options, Regime, Transition, darcy_factor};
+pub use warning::Warnings;
+
+/// The crate version, from Cargo.toml.
+pub const VERSION: &str = env!("CARGO_PKG_VERSION");
