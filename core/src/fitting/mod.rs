@@ -100,8 +100,10 @@ pub fn head_loss_dv(k: f64, velocity: f64) -> f64 {
 }
 
 /// A minor-loss element: a method giving K, the bore K refers to, the relative spread of
-/// K and (for catalogue fittings) its name.
+/// K and (for catalogue fittings) its name. Deserialising runs the same checks as the
+/// constructors.
 #[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+#[serde(try_from = "FittingData")]
 pub struct Fitting {
     method: Method,
     diameter: Option<f64>,
@@ -393,5 +395,51 @@ impl Fitting {
         check::positive("re", re)?;
         let r = self.resistance(bore, pipe_rel_roughness)?;
         Ok((r.k(re), r.dk_dre(re)))
+    }
+}
+
+/// The serialised form of a [`Fitting`], checked on the way in.
+#[derive(Deserialize)]
+struct FittingData {
+    method: Method,
+    diameter: Option<f64>,
+    k_spread: f64,
+    name: Option<String>,
+}
+
+impl TryFrom<FittingData> for Fitting {
+    type Error = Error;
+
+    fn try_from(d: FittingData) -> Result<Fitting> {
+        let mut f = match d.method {
+            Method::K { k } => Fitting::k(k)?,
+            Method::EquivalentLength { l_over_d } => Fitting::equivalent_length(l_over_d)?,
+            Method::TwoK { k1, k_inf } => Fitting::two_k(k1, k_inf)?,
+            Method::ThreeK { k1, k_inf, k_d } => Fitting::three_k(k1, k_inf, k_d)?,
+            Method::Expansion { d_in, d_out } => Fitting::expansion(d_in, d_out)?,
+            Method::Contraction { d_in, d_out } => Fitting::contraction(d_in, d_out)?,
+            Method::EntranceSharp => Fitting::entrance_sharp(),
+            Method::EntranceRounded { r_over_d } => Fitting::entrance_rounded(r_over_d)?,
+            Method::EntranceProjecting => Fitting::entrance_projecting(),
+            Method::Exit => Fitting::exit(),
+            Method::Bend {
+                angle_deg,
+                r_over_d,
+            } => Fitting::bend(angle_deg, r_over_d)?,
+            Method::Cv { cv } => Fitting::cv(cv)?,
+            Method::Kv { kv } => Fitting::kv(kv)?,
+        };
+        if let Some(dia) = d.diameter {
+            if f.diameter != Some(dia) {
+                f = f.with_diameter(dia)?;
+            }
+        } else if f.diameter.is_some() {
+            return Err(Error::invalid(
+                "diameter",
+                format!("an {} needs its own bore", f.method.name()),
+            ));
+        }
+        f.name = d.name;
+        f.with_k_spread(d.k_spread)
     }
 }
