@@ -225,10 +225,7 @@ impl Options {
             return Err(Error::out_of_range(
                 "turbulent_limit",
                 self.turbulent_limit,
-                format!(
-                    "must not be below laminar_limit ({})",
-                    self.laminar_limit
-                ),
+                format!("must not be below laminar_limit ({})", self.laminar_limit),
             ));
         }
         Ok(())
@@ -545,7 +542,12 @@ mod tests {
             laminar_limit: 5000.0,
             ..Options::default()
         };
-        assert!(darcy_factor(1e5, 0.0, &bad).unwrap_err().to_string().contains("turbulent_limit"));
+        assert!(
+            darcy_factor(1e5, 0.0, &bad)
+                .unwrap_err()
+                .to_string()
+                .contains("turbulent_limit")
+        );
     }
 
     #[test]
@@ -588,7 +590,12 @@ mod tests {
         let w = darcy_factor(5e4, 0.0, &o).unwrap().warnings;
         assert!(w.is_empty());
         let o = Options::with_correlation(Correlation::FullyRough);
-        assert!(darcy_factor(1e4, 1e-5, &o).unwrap().warnings.contains(Warnings::REYNOLDS_OUT_OF_RANGE));
+        assert!(
+            darcy_factor(1e4, 1e-5, &o)
+                .unwrap()
+                .warnings
+                .contains(Warnings::REYNOLDS_OUT_OF_RANGE)
+        );
         assert!(darcy_factor(1e9, 1e-2, &o).unwrap().warnings.is_empty());
     }
 
@@ -601,13 +608,20 @@ mod tests {
         let o = Options::default();
         darcy_factor_batch(&re, &rr, &o, &mut out).unwrap();
         for i in (0..n).step_by(997) {
-            assert_eq!(out[i].to_bits(), darcy_factor(re[i], rr[i], &o).unwrap().f.to_bits());
+            assert_eq!(
+                out[i].to_bits(),
+                darcy_factor(re[i], rr[i], &o).unwrap().f.to_bits()
+            );
         }
         let mut bad = re.clone();
         bad[n - 5] = -1.0;
         bad[n - 2] = f64::NAN;
         let e = darcy_factor_batch(&bad, &rr, &o, &mut out).unwrap_err();
-        assert!(e.to_string().starts_with(&format!("element {}: re = -1", n - 5)), "{e}");
+        assert!(
+            e.to_string()
+                .starts_with(&format!("element {}: re = -1", n - 5)),
+            "{e}"
+        );
         let e = darcy_factor_batch(&re[..3], &rr, &o, &mut out).unwrap_err();
         assert_eq!(e.kind(), crate::ErrorKind::Invalid);
     }
