@@ -393,3 +393,29 @@ fn deserialising_checks_like_the_constructors() {
     let back: Fitting = serde_json::from_str(&serde_json::to_string(&e).unwrap()).unwrap();
     assert_eq!(back, e);
 }
+
+#[test]
+fn check_and_foot_valves_block_reverse_flow() {
+    let blocking: Vec<&str> = catalogue_entries()
+        .iter()
+        .filter(|e| e.blocks_reverse_flow)
+        .map(|e| e.name)
+        .collect();
+    assert_eq!(
+        blocking,
+        [
+            "swing_check_valve",
+            "lift_check_valve",
+            "tilting_disc_check_valve",
+            "foot_valve_poppet",
+            "foot_valve_hinged"
+        ]
+    );
+    assert!(
+        Fitting::named("lift_check_valve")
+            .unwrap()
+            .blocks_reverse_flow()
+    );
+    assert!(!Fitting::named("gate_valve").unwrap().blocks_reverse_flow());
+    assert!(!Fitting::k(2.0).unwrap().blocks_reverse_flow());
+}

@@ -355,6 +355,16 @@ impl Fitting {
         Ok(self)
     }
 
+    /// True for a catalogue check valve or foot valve, which stops reverse flow; the
+    /// head loss formulas themselves stay odd in the flow, so a caller that needs the
+    /// valve's behaviour in reverse flow must ask this.
+    pub fn blocks_reverse_flow(&self) -> bool {
+        self.name
+            .as_deref()
+            .and_then(|n| catalogue::entry(n).ok())
+            .is_some_and(|e| e.blocks_reverse_flow)
+    }
+
     /// The catalogue name, or the method's name (`"k"`, `"three_k"`, `"expansion"`…).
     pub fn name(&self) -> String {
         match &self.name {
