@@ -419,3 +419,20 @@ fn check_and_foot_valves_block_reverse_flow() {
     assert!(!Fitting::named("gate_valve").unwrap().blocks_reverse_flow());
     assert!(!Fitting::k(2.0).unwrap().blocks_reverse_flow());
 }
+
+#[test]
+fn sources_are_reported() {
+    assert_eq!(
+        Fitting::named("gate_valve").unwrap().source(),
+        "Darby (2001) 3-K table, from memory"
+    );
+    assert!(
+        Fitting::expansion(0.05, 0.1)
+            .unwrap()
+            .source()
+            .contains("Borda–Carnot")
+    );
+    let e = hydrograde::fitting::catalogue_entry("globe_valve").unwrap();
+    assert!(matches!(e.method, Method::ThreeK { k1, .. } if k1 == 1500.0)); // Darby, from memory
+    assert!(hydrograde::fitting::catalogue_entry("nope").is_err());
+}

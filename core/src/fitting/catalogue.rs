@@ -408,8 +408,11 @@ pub fn catalogue_entries() -> &'static [CatalogueEntry] {
     &CATALOGUE
 }
 
-/// The entry called `name`.
-pub(crate) fn entry(name: &str) -> Result<&'static CatalogueEntry> {
+/// The entry called `name`, with its method, spread and source.
+///
+/// # Errors
+/// [`Error::UnknownName`] listing the catalogue when `name` is not in it.
+pub fn entry(name: &str) -> Result<&'static CatalogueEntry> {
     CATALOGUE.iter().find(|e| e.name == name).ok_or_else(|| {
         let names: Vec<&str> = CATALOGUE.iter().map(|e| e.name).collect();
         Error::unknown_name("fitting", name, &names)

@@ -30,6 +30,18 @@
 //! loss is K_b(Re_b) = (b/d)³ k_viscous / Re_b + (b/d)⁴ k_inertial: the familiar fourth
 //! power of the diameter ratio for the inertial part.
 //!
+//! # Example
+//! ```
+//! use hydrograde::fitting::{Fitting, head_loss};
+//! // A long-radius elbow (Darby 3-K) in a 2 in bore at Re = 5e4:
+//! // K = 800/5e4 + 0.056 (1 + 3.9/2^0.3) = 0.2494
+//! let elbow = Fitting::named("elbow_90_long_radius").unwrap();
+//! let (k, dk_dre) = elbow.k_at(5e4, 0.0508, 0.0).unwrap();
+//! assert!((k - 0.2494).abs() < 1e-4 && dk_dre < 0.0);
+//! let h = head_loss(k, 2.0); // m, at 2 m/s
+//! assert!((h - 0.0509).abs() < 1e-4);
+//! ```
+//!
 //! **Caution.** Published fitting data scatter widely (±20–50 %, common practice); each
 //! fitting carries a relative spread of K ([`Fitting::k_spread`]) that the uncertainty
 //! bands use. The catalogue constants were typed from memory of the published tables
@@ -38,7 +50,7 @@
 pub mod catalogue;
 pub mod method;
 
-pub use catalogue::{CatalogueEntry, catalogue_entries};
+pub use catalogue::{CatalogueEntry, catalogue_entries, entry as catalogue_entry};
 pub use method::Method;
 
 use crate::error::{Error, Result, check};
@@ -363,6 +375,14 @@ impl Fitting {
             .as_deref()
             .and_then(|n| catalogue::entry(n).ok())
             .is_some_and(|e| e.blocks_reverse_flow)
+    }
+
+    /// Where K comes from: the catalogue entry's source, or the method's publication.
+    pub fn source(&self) -> &'static str {
+        self.name
+            .as_deref()
+            .and_then(|n| catalogue::entry(n).ok())
+            .map_or_else(|| self.method.source(), |e| e.source)
     }
 
     /// The catalogue name, or the method's name (`"k"`, `"three_k"`, `"expansion"`…).
