@@ -2,6 +2,12 @@
 //! and the one-process ratio table `src/bin/ratios.rs` draw the same points from here, so
 //! their figures describe the same workload.
 
+use hydrograde::Result;
+use hydrograde::fitting::Fitting;
+use hydrograde::fluid::Fluid;
+use hydrograde::line::{Element, Line};
+use hydrograde::pipe::Pipe;
+
 /// Smallest Reynolds number of the turbulent benchmark range (common-practice turbulent
 /// limit).
 pub const RE_MIN: f64 = 4e3;
@@ -48,6 +54,50 @@ pub fn turbulent_points(n: usize, seed: u64) -> (Vec<f64>, Vec<f64>) {
     (re, rr)
 }
 
+/// An invented 20-element cooling-water route (9 pipes, 9 fittings, 2 rises) in two
+/// bores, the workload of the line benchmarks.
+pub fn line20() -> Result<Line> {
+    let (big, small, steel) = (0.1023, 0.0779, 4.5e-5); // m, m, m
+    let pipe = |d: f64, l: f64| Pipe::circular(d, l, steel).map(Element::Pipe);
+    let fit = |f: Result<Fitting>| f.map(Element::Fitting);
+    Line::new(vec![
+        Element::Fitting(Fitting::entrance_sharp()),
+        pipe(big, 35.0)?,
+        fit(Fitting::bend(90.0, 1.5))?,
+        pipe(big, 12.0)?,
+        Element::rise(6.0)?,
+        fit(Fitting::three_k(800.0, 0.14, 4.0))?,
+        pipe(big, 48.0)?,
+        fit(Fitting::contraction(big, small))?,
+        pipe(small, 20.0)?,
+        fit(Fitting::two_k(500.0, 0.25))?,
+        pipe(small, 15.0)?,
+        fit(Fitting::k(2.0))?,
+        pipe(small, 30.0)?,
+        fit(Fitting::bend(45.0, 1.0))?,
+        pipe(small, 22.0)?,
+        fit(Fitting::expansion(small, big))?,
+        pipe(big, 60.0)?,
+        Element::rise(-2.5)?,
+        pipe(big, 8.0)?,
+        Element::Fitting(Fitting::exit()),
+    ])
+}
+
+/// Water at 20 °C and atmospheric pressure, the fluid of the line benchmarks.
+pub fn water() -> Result<Fluid> {
+    Fluid::water(293.15, 101_325.0)
+}
+
+/// `n` flows (m³/s) evenly spaced over 0.1…20 L/s: laminar, transitional and turbulent
+/// in both bores of [`line20`].
+pub fn flows(n: usize) -> Vec<f64> {
+    let last = n.saturating_sub(1).max(1) as f64;
+    (0..n)
+        .map(|i| 1e-4 + (0.02 - 1e-4) * i as f64 / last)
+        .collect()
+}
+
 #[cfg(test)]
 mod tests {
     use super::*;
@@ -64,5 +114,18 @@ mod tests {
         let mid = (RE_MIN * RE_MAX).sqrt();
         let below = re.iter().filter(|&&r| r < mid).count();
         assert!((4_700..5_300).contains(&below), "{below}");
+    }
+
+    #[test]
+    fn the_benchmark_line_builds_and_has_twenty_elements() {
+        // Exact check: the route as written above.
+        let line = line20().unwrap();
+        assert_eq!(line.elements().len(), 20);
+        // Exact: the rises sum to 6 - 2.5 m.
+        assert_eq!(line.static_head(), 3.5);
+        let f = flows(100);
+        assert_eq!(f.len(), 100);
+        assert_eq!(f[0], 1e-4);
+        assert!((f[99] - 0.02).abs() < 1e-15);
     }
 }
