@@ -10,20 +10,27 @@ mod capi;
 mod table;
 
 use hydrograde::friction::{Correlation, Options, darcy_factor, darcy_factor_batch};
-use hydrograde_benches::turbulent_points;
+use hydrograde_benches::{flows, line20, turbulent_points, water};
 use std::hint::black_box;
 use std::time::{Duration, Instant};
 use table::{Row, Table};
 
 /// Points of the friction workloads.
 const N: usize = 1_000_000;
+/// Flows of the system-curve workload.
+const CURVE_POINTS: usize = 100_000;
 /// Repetitions of each workload; the fastest counts (the least disturbed by other work).
 const REPS: usize = 9;
 
 /// The fastest of `REPS` runs of `f`.
-fn best_of<F: FnMut()>(mut f: F) -> Duration {
+fn best_of<F: FnMut()>(f: F) -> Duration {
+    best_of_n(REPS, f)
+}
+
+/// The fastest of `reps` runs of `f`.
+fn best_of_n<F: FnMut()>(reps: usize, mut f: F) -> Duration {
     f(); // warm caches and the thread pool
-    (0..REPS)
+    (0..reps)
         .map(|_| {
             let t = Instant::now();
             f();
@@ -69,6 +76,75 @@ fn batch_in_pool(threads: usize, re: &[f64], rr: &[f64], out: &mut [f64]) -> f64
         })
     });
     per_item(d, re.len())
+}
+
+/// Rows of the 20-element line: its system curve over 1e5 flows on one thread and on all,
+/// against one exact Colebrook factor per flow, and single evaluations for scale.
+fn line_rows(t: &mut Table, exact: f64) {
+    let (line, water) = match (line20(), water()) {
+        (Ok(l), Ok(w)) => (l, w),
+        (Err(e), _) | (_, Err(e)) => {
+            eprintln!("line rows skipped: {e}");
+            return;
+        }
+    };
+    let q = flows(CURVE_POINTS);
+    let curve = |threads: usize| {
+        let pool = rayon::ThreadPoolBuilder::new().num_threads(threads).build();
+        pool.map(|p| {
+            p.install(|| {
+                per_item(
+                    best_of_n(3, || {
+                        if let Err(e) = line.system_curve(&water, black_box(&q)) {
+                            eprintln!("system curve failed: {e}");
+                        }
+                    }),
+                    CURVE_POINTS,
+                )
+            })
+        })
+        .unwrap_or(f64::NAN)
+    };
+    let one = curve(1);
+    t.push(Row::ratio(
+        "20-element line system curve, 1e5 flows, 1 thread, per flow",
+        one,
+        "exact Colebrook",
+        one / exact,
+        Some(("<= 30", one / exact <= 30.0)),
+    ));
+    let all = curve(0);
+    t.push(Row::ratio(
+        "same, all threads, per flow",
+        all,
+        "exact Colebrook",
+        all / exact,
+        None,
+    ));
+    let single = |f: &dyn Fn()| per_item(best_of_n(REPS, || for _ in 0..100 { f() }), 100);
+    let with_bands = single(&|| {
+        let _ = black_box(line.evaluate(&water, black_box(0.012)));
+    });
+    t.push(Row::ratio(
+        "20-element line evaluate (with bands), one flow",
+        with_bands,
+        "exact Colebrook",
+        with_bands / exact,
+        None,
+    ));
+    let solve = single(&|| {
+        let _ = black_box(line.flow_for_head(&water, black_box(25.0)));
+    });
+    let iterations = line
+        .flow_for_head(&water, 25.0)
+        .map_or(0, |s| s.iterations);
+    t.push(Row::ratio(
+        &format!("20-element line flow_for_head ({iterations} iterations)"),
+        solve,
+        "exact Colebrook",
+        solve / exact,
+        None,
+    ));
 }
 
 fn main() {
@@ -135,6 +211,8 @@ fn main() {
             Err(e) => eprintln!("C ABI not timed: {e}"),
         }
     }
+
+    line_rows(&mut t, exact);
 
     println!(
         "hydrograde speed ratios: {N} turbulent points (Re 4e3..1e8, eps/D 1e-6..0.05, \
