@@ -1,0 +1,66 @@
+#!/usr/bin/env bash
+# hydrograde's speed figures, one command (`./run.sh bench` calls this):
+#
+#   scripts/bench.sh            criterion suites, the Rust ratio table, the Python comparison
+#   scripts/bench.sh ratios     only the Rust ratio table (about 30 s once built)
+#   scripts/bench.sh compare    only the Python comparison
+#   scripts/bench.sh criterion  only the criterion suites
+#
+# The ratio table and the comparison each run in one process, so their ratios compare
+# like with like on a busy machine; the targets and whether they are met are printed at
+# the end of each. Benchmarks never fail on speed: a missed target is reported, not
+# raised. Needs cargo and python3; makes .venv (numpy, scipy, maturin) when missing and
+# builds the Python wheel into it when the py/ package is present.
+set -euo pipefail
+cd "$(dirname "${BASH_SOURCE[0]}")/.."
+export CARGO_BUILD_JOBS="${CARGO_BUILD_JOBS:-2}"
+what="${1:-all}"
+
+say() { printf '\n== %s\n' "$*"; }
+
+criterion() {
+  say "criterion benchmarks (benches/benches/*.rs)"
+  cargo bench -q -p hydrograde-benches -- --output-format bencher 2>&1 \
+    | grep -E '^test |Warning' || true
+}
+
+ratios() {
+  local args=()
+  if grep -qs 'fn hg_darcy_factor_batch' capi/src/*.rs; then
+    say "building the C library (release)"
+    cargo build -q --release -p hydrograde-capi
+    args=(--capi "$PWD/target/release/libhydrograde.so")
+  fi
+  say "Rust ratio table (one process)"
+  cargo build -q --release -p hydrograde-benches --bin ratios
+  target/release/ratios "${args[@]}"
+}
+
+python_env() {
+  if [ ! -x .venv/bin/python ]; then
+    say "creating .venv"
+    python3 -m venv .venv
+  fi
+  if ! .venv/bin/python -c 'import numpy, scipy' 2>/dev/null || [ ! -x .venv/bin/maturin ]; then
+    say "installing numpy, scipy, maturin into .venv"
+    .venv/bin/python -m pip install -q numpy scipy maturin
+  fi
+  if [ -f py/python/hydrograde/__init__.py ]; then
+    say "building the Python wheel (maturin, release)"
+    .venv/bin/maturin develop --release -q -m py/Cargo.toml --target-dir target/py
+  fi
+}
+
+compare() {
+  python_env
+  say "Python comparison (one process)"
+  .venv/bin/python benches/compare.py
+}
+
+case "$what" in
+  all) criterion; ratios; compare ;;
+  criterion) criterion ;;
+  ratios) ratios ;;
+  compare) compare ;;
+  *) echo "usage: scripts/bench.sh [all|criterion|ratios|compare]" >&2; exit 2 ;;
+esac
