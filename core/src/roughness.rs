@@ -95,9 +95,9 @@ pub fn catalogue() -> Vec<Material> {
         .map(|&(name, description, typical, low, high)| Material {
             name: name.to_string(),
             description: description.to_string(),
-            typical: typical * 1e-3,
-            low: low * 1e-3,
-            high: high * 1e-3,
+            typical: typical / 1000.0,
+            low: low / 1000.0,
+            high: high / 1000.0,
             source: HANDBOOK.to_string(),
         })
         .collect()
@@ -112,7 +112,7 @@ pub fn names() -> Vec<&'static str> {
 ///
 /// ```
 /// let steel = hydrograde::roughness::material("commercial_steel")?;
-/// assert_eq!(steel.typical, 4.5e-5); // 0.045 mm, common practice (Moody 1944), from memory
+/// assert!((steel.typical - 4.5e-5).abs() < 1e-15); // 0.045 mm, common practice, from memory
 /// # Ok::<(), hydrograde::Error>(())
 /// ```
 ///
