@@ -22,6 +22,7 @@ pub mod fitting;
 pub mod fluid;
 pub mod friction;
 pub mod line;
+pub mod pipe;
 pub mod roughness;
 pub mod section;
 pub mod sizes;
@@ -36,6 +37,14 @@ pub use fluid::{Fluid, Phase};
 pub use roughness::Material;
 pub use section::{Section, TurbulentDiameter};
 pub use sizes::{PipeSize, PipeTable};
+// fitting (minor losses) and units
+pub use fitting::{Fitting, Resistance};
+pub use units::{STANDARD_GRAVITY, convert, convert_head};
 
 /// The crate version, from Cargo.toml.
 pub const VERSION: &str = env!("CARGO_PKG_VERSION");
+
+/// The README's Rust examples, compiled and run as doctests.
+#[doc = include_str!("../../README.md")]
+#[cfg(doctest)]
+pub struct ReadmeDoctests;
