@@ -84,8 +84,16 @@ fn print_breakdown(r: &LineResult) {
         } else {
             (String::new(), String::new())
         };
-        let loss = if e.static_head != 0.0 { e.static_head } else { e.head_loss };
-        let label = if e.static_head != 0.0 { format!("rise {:+.1} m", e.static_head) } else { e.label.clone() };
+        let loss = if e.static_head != 0.0 {
+            e.static_head
+        } else {
+            e.head_loss
+        };
+        let label = if e.static_head != 0.0 {
+            format!("rise {:+.1} m", e.static_head)
+        } else {
+            e.label.clone()
+        };
         println!(
             "  {:>2}  {:<22} {:>6} {:>9} {:>8}  {:>9.3}  {:<17} {:<22} {}",
             i,
@@ -94,7 +102,11 @@ fn print_breakdown(r: &LineResult) {
             re,
             coef,
             loss,
-            if e.static_head != 0.0 { String::new() } else { band(&e.head_loss_band) },
+            if e.static_head != 0.0 {
+                String::new()
+            } else {
+                band(&e.head_loss_band)
+            },
             e.head_loss_band.dominant().unwrap_or(""),
             e.warnings.names().join(", ")
         );
@@ -106,7 +118,11 @@ fn print_breakdown(r: &LineResult) {
         r.pressure_loss / 1e3,
         r.static_head
     );
-    println!("  required head {:.3} m, band {} m", r.required_head, band(&r.required_head_band));
+    println!(
+        "  required head {:.3} m, band {} m",
+        r.required_head,
+        band(&r.required_head_band)
+    );
     let top: Vec<String> = r
         .required_head_band
         .contributions
@@ -153,8 +169,16 @@ fn orchard() -> Result<()> {
         -back.flow_band.low * 1e3
     );
 
-    let s = line.size(&water, 6.0e-3, Limit::Velocity(2.0), Some((PipeTable::Pvc, "40")))?;
-    println!("  one size for the whole main, velocity ≤ 2 m/s at 6 L/s: inside diameter ≥ {:.1} mm", s.min_inside_diameter * 1e3);
+    let s = line.size(
+        &water,
+        6.0e-3,
+        Limit::Velocity(2.0),
+        Some((PipeTable::Pvc, "40")),
+    )?;
+    println!(
+        "  one size for the whole main, velocity ≤ 2 m/s at 6 L/s: inside diameter ≥ {:.1} mm",
+        s.min_inside_diameter * 1e3
+    );
     if let Some(c) = &s.standard {
         println!(
             "  smallest PVC schedule 40: NPS {} (ID {:.1} mm, {:.2} m/s, loss {:.1} kPa)",
@@ -172,12 +196,18 @@ fn duct() -> Result<()> {
     let air = Fluid::air(303.15, 101_325.0)?;
     let r = duct_line()?.evaluate(&air, 0.9)?;
     print_breakdown(&r);
-    println!("  fan must supply {:.0} Pa ({:.0} … {:.0} Pa) of pressure loss", r.pressure_loss, r.pressure_loss_band.low, r.pressure_loss_band.high);
+    println!(
+        "  fan must supply {:.0} Pa ({:.0} … {:.0} Pa) of pressure loss",
+        r.pressure_loss, r.pressure_loss_band.low, r.pressure_loss_band.high
+    );
     Ok(())
 }
 
 fn main() {
-    println!("hydrograde {} demo: invented scenarios, engineering estimates with k = 2 bands.", hydrograde::VERSION);
+    println!(
+        "hydrograde {} demo: invented scenarios, engineering estimates with k = 2 bands.",
+        hydrograde::VERSION
+    );
     if let Err(e) = orchard().and_then(|_| duct()) {
         eprintln!("error: {e}");
         std::process::exit(1);
