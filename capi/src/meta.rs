@@ -35,20 +35,22 @@ const _: () = assert!(HG_VERSION_MINOR == parse_u32(env!("CARGO_PKG_VERSION_MINO
 const _: () = assert!(HG_VERSION_PATCH == parse_u32(env!("CARGO_PKG_VERSION_PATCH")));
 const _: () = assert!(HG_ABI_VERSION == HG_VERSION_MAJOR);
 
+// The core's bits, typed as literals for cbindgen; a test checks them against the core.
+
 /// The Reynolds number lies outside the published range of the correlation.
-pub const HG_WARN_REYNOLDS_OUT_OF_RANGE: u32 = Warnings::REYNOLDS_OUT_OF_RANGE.bits();
+pub const HG_WARN_REYNOLDS_OUT_OF_RANGE: u32 = 1;
 /// The relative roughness lies outside the published range of the correlation.
-pub const HG_WARN_ROUGHNESS_OUT_OF_RANGE: u32 = Warnings::ROUGHNESS_OUT_OF_RANGE.bits();
+pub const HG_WARN_ROUGHNESS_OUT_OF_RANGE: u32 = 2;
 /// Transitional flow: the friction factor is not well defined; its band spans both regimes.
-pub const HG_WARN_TRANSITIONAL_FLOW: u32 = Warnings::TRANSITIONAL_FLOW.bits();
+pub const HG_WARN_TRANSITIONAL_FLOW: u32 = 4;
 /// A non-circular section: turbulent results on the hydraulic diameter are less accurate.
-pub const HG_WARN_NON_CIRCULAR_SECTION: u32 = Warnings::NON_CIRCULAR_SECTION.bits();
+pub const HG_WARN_NON_CIRCULAR_SECTION: u32 = 8;
 /// A gas whose pressure loss exceeds 10 % of the inlet pressure: results are approximate.
-pub const HG_WARN_GAS_COMPRESSIBILITY: u32 = Warnings::GAS_COMPRESSIBILITY.bits();
+pub const HG_WARN_GAS_COMPRESSIBILITY: u32 = 16;
 /// The pressure falls below the vapour pressure: cavitation or flashing is likely.
-pub const HG_WARN_BELOW_VAPOUR_PRESSURE: u32 = Warnings::BELOW_VAPOUR_PRESSURE.bits();
+pub const HG_WARN_BELOW_VAPOUR_PRESSURE: u32 = 32;
 /// A fitting or equipment value used outside the range its data covers.
-pub const HG_WARN_FITTING_OUT_OF_RANGE: u32 = Warnings::FITTING_OUT_OF_RANGE.bits();
+pub const HG_WARN_FITTING_OUT_OF_RANGE: u32 = 64;
 
 /// The library version as a static string, e.g. "0.1.0" (never freed; never NULL).
 /// Thread-safe.
