@@ -28,9 +28,15 @@ fn main() -> io::Result<()> {
     // Reynolds numbers from 10 to 1e10, 12 per decade, plus the regime limits themselves
     // and points inside the transitional band; roughness from smooth to very rough,
     // including values outside every correlation's range and invalid ones.
-    let mut res: Vec<f64> = (0..=108).map(|i| 10f64.powf(1.0 + i as f64 / 12.0)).collect();
-    res.extend([2300.0, 2300.5, 3000.0, 3999.0, 4000.0, 4000.5, -5.0, 0.0, 1e14]);
-    let rrs = [0.0, 1e-7, 1e-6, 1e-5, 1e-4, 1e-3, 5e-3, 1e-2, 0.05, 0.1, 0.5, 0.6, -1e-4];
+    let mut res: Vec<f64> = (0..=108)
+        .map(|i| 10f64.powf(1.0 + i as f64 / 12.0))
+        .collect();
+    res.extend([
+        2300.0, 2300.5, 3000.0, 3999.0, 4000.0, 4000.5, -5.0, 0.0, 1e14,
+    ]);
+    let rrs = [
+        0.0, 1e-7, 1e-6, 1e-5, 1e-4, 1e-3, 5e-3, 1e-2, 0.05, 0.1, 0.5, 0.6, -1e-4,
+    ];
     for (ci, c) in Correlation::ALL.iter().enumerate() {
         let opts = Options::with_correlation(*c);
         for &re in &res {

@@ -90,13 +90,16 @@ inline hg_friction darcy_factor(double re, double rel_roughness, const hg_fricti
   return r;
 }
 
-/// Friction factors of many points (re and rel_roughness of equal length).
+/// Friction factors of many points (re and rel_roughness of equal length; empty in,
+/// empty out).
 inline std::vector<double> darcy_factor(const std::vector<double>& re,
                                         const std::vector<double>& rel_roughness,
                                         int32_t correlation = HG_CORRELATION_COLEBROOK) {
   if (re.size() != rel_roughness.size())
-    throw error(HG_ERR_INVALID, "re and rel_roughness differ in length");
+    throw error(HG_ERR_INVALID, "rel_roughness: length " + std::to_string(rel_roughness.size()) +
+                                    " differs from re's " + std::to_string(re.size()));
   std::vector<double> out(re.size());
+  if (re.empty()) return out;
   check(hg_darcy_factor_batch(re.data(), rel_roughness.data(), re.size(), correlation,
                               out.data()));
   return out;
