@@ -197,6 +197,32 @@
 #define HG_WARN_FITTING_OUT_OF_RANGE 64
 
 /**
+ * Round pipe: `a` = inside diameter (m), `b` = 0.
+ */
+#define HG_SECTION_CIRCLE 0
+
+/**
+ * Concentric annulus: `a` = bore of the outer pipe, `b` = outside diameter of the inner
+ * tube (m), 0 < b < a.
+ */
+#define HG_SECTION_ANNULUS 1
+
+/**
+ * Rectangle: `a` = width, `b` = height (m).
+ */
+#define HG_SECTION_RECTANGLE 2
+
+/**
+ * Ellipse: `a` = major axis, `b` = minor axis (full axes, m), b ≤ a.
+ */
+#define HG_SECTION_ELLIPSE 3
+
+/**
+ * Equilateral triangle: `a` = side (m), `b` = 0.
+ */
+#define HG_SECTION_TRIANGLE 4
+
+/**
  * Options of `hg_darcy_factor_opts`. Fill it with `hg_friction_options_default`, then
  * change what you need; `struct_size` must be `sizeof(hg_friction_options)`.
  */
@@ -258,9 +284,137 @@ typedef struct hg_friction {
   uint32_t warnings;
 } hg_friction;
 
+/**
+ * The state of flow in a straight run at one flow rate. Set `struct_size` to
+ * `sizeof(hg_pipe_flow)` before the call.
+ */
+typedef struct hg_pipe_flow {
+  /**
+   * Size of this struct in bytes, set by the caller.
+   */
+  size_t struct_size;
+  /**
+   * Mean velocity Q/A, m/s, signed with the flow.
+   */
+  double velocity;
+  /**
+   * Reynolds number on the hydraulic diameter, |V|·D_h·ρ/μ.
+   */
+  double reynolds;
+  /**
+   * Darcy friction factor; 0 at zero flow, where it is undefined (`regime` is then
+   * laminar).
+   */
+  double friction_factor;
+  /**
+   * Head loss, m of the flowing fluid, signed with the flow.
+   */
+  double head_loss;
+  /**
+   * ∂(head loss)/∂Q, s/m² (continuous through zero flow and the transition).
+   */
+  double dhead_dflow;
+  /**
+   * Flow regime, `HG_REGIME_*`.
+   */
+  int32_t regime;
+  /**
+   * Warning bits, `HG_WARN_*`.
+   */
+  uint32_t warnings;
+} hg_pipe_flow;
+
 #ifdef __cplusplus
 extern "C" {
 #endif // __cplusplus
+
+/**
+ * The resistance coefficient K (dimensionless) of the catalogue fitting `name` and its
+ * derivative ∂K/∂Re, at Reynolds number `re` (> 0, in `bore`), for the velocity in
+ * `bore` (m, > 0), next to a pipe of relative roughness `pipe_rel_roughness`
+ * (0 ≤ ε/D ≤ 0.5; used by fittings whose K follows the pipe's fully rough friction
+ * factor). K(Re) = k_viscous/Re + k_inertial; fitting data scatter by ±20–50 %.
+ * `hg_fitting_catalogue_name` lists the names.
+ *
+ * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` (the message lists the catalogue);
+ * `HG_ERR_NOT_FINITE`, `HG_ERR_OUT_OF_RANGE` for bad numbers; `HG_ERR_NULL_POINTER`;
+ * `HG_ERR_INVALID` for a name that is not UTF-8. Thread-safe.
+ *
+ * # Safety
+ * `name` must be NULL or a NUL-terminated string; `k` and `dk_dre` NULL or writable.
+ */
+int32_t hg_fitting_k(const char *name,
+                     double re,
+                     double bore,
+                     double pipe_rel_roughness,
+                     double *k,
+                     double *dk_dre);
+
+/**
+ * Copies the name of catalogue fitting number `index` (0-based, catalogue order) into
+ * `buf` (at most `len - 1` bytes and a NUL) and stores its full length in `*needed`.
+ *
+ * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` when `index` is past the end (use it to count
+ * the entries); `HG_ERR_NULL_POINTER` for a NULL `needed`, or a NULL `buf` with
+ * `len` > 0; `HG_ERR_BUFFER_TOO_SMALL` when the name did not fit (the cut copy is still
+ * written). Thread-safe.
+ *
+ * # Safety
+ * `buf` must be NULL or valid for writing `len` bytes; `needed` NULL or writable.
+ */
+int32_t hg_fitting_catalogue_name(size_t index,
+                                  char *buf,
+                                  size_t len,
+                                  size_t *needed);
+
+/**
+ * Density (kg/m³) and dynamic viscosity (Pa·s) of liquid water at `temperature` (K) and
+ * absolute `pressure` (Pa): IAPWS-IF97 region 1 and the IAPWS 2008 viscosity.
+ *
+ * Valid ranges: 273.15 K ≤ temperature ≤ 623.15 K; the saturation pressure at that
+ * temperature ≤ pressure ≤ 100 MPa (below it the water would boil).
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` outside the ranges;
+ * `HG_ERR_NULL_POINTER` when an output is NULL (nothing is written). Thread-safe.
+ *
+ * # Safety
+ * `density` and `viscosity` must be NULL or point to writable doubles.
+ */
+int32_t hg_water(double temperature,
+                 double pressure,
+                 double *density,
+                 double *viscosity);
+
+/**
+ * Density (kg/m³) and dynamic viscosity (Pa·s) of dry air at `temperature` (K) and
+ * absolute `pressure` (Pa): ideal gas and Sutherland's law.
+ *
+ * Valid ranges: 200 K ≤ temperature ≤ 1000 K; 0 < pressure ≤ 2 MPa.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` outside the ranges;
+ * `HG_ERR_NULL_POINTER` when an output is NULL (nothing is written). Thread-safe.
+ *
+ * # Safety
+ * `density` and `viscosity` must be NULL or point to writable doubles.
+ */
+int32_t hg_air(double temperature,
+               double pressure,
+               double *density,
+               double *viscosity);
+
+/**
+ * Vapour (saturation) pressure of water (Pa) at `temperature` (K), IAPWS-IF97.
+ *
+ * Valid range: 273.15 K ≤ temperature ≤ 647.096 K (the critical point).
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Thread-safe.
+ *
+ * # Safety
+ * `pressure` must be NULL or point to a writable double.
+ */
+int32_t hg_water_vapour_pressure(double temperature,
+                                 double *pressure);
 
 /**
  * Fills `opts` with the library's default friction options (Colebrook, regime limits
@@ -420,6 +574,178 @@ size_t hg_last_error(char *buf,
  * Thread-safe.
  */
 const char *hg_warning_name(uint32_t bit);
+
+/**
+ * Head loss `*head_loss` (m of fluid, signed with the flow) and its derivative
+ * `*dhead_dflow` (s/m²) of a round pipe at volumetric flow `flow` (m³/s, signed): the
+ * call a simulator's Newton loop makes. Darcy–Weisbach with the exact Colebrook
+ * friction factor, laminar f = 64/Re and a C¹ blend between Re 2300 and 4000; the loss
+ * is odd in the flow and zero at zero flow, with a continuous derivative.
+ *
+ * Pipe: inside `diameter` (m, > 0), `length` (m, > 0), absolute wall `roughness` (m,
+ * ≥ 0, at most half the diameter). Fluid: `density` (kg/m³, > 0) and dynamic
+ * `viscosity` (Pa·s, > 0), e.g. from `hg_water`.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a bad pipe or fluid;
+ * `HG_ERR_NULL_POINTER` when an output is NULL (nothing is written). Thread-safe.
+ *
+ * # Safety
+ * `head_loss` and `dhead_dflow` must be NULL or point to writable doubles.
+ */
+int32_t hg_pipe_head_loss(double diameter,
+                          double length,
+                          double roughness,
+                          double density,
+                          double viscosity,
+                          double flow,
+                          double *head_loss,
+                          double *dhead_dflow);
+
+/**
+ * The full flow state of a straight run of any section `shape` (`HG_SECTION_*`, with
+ * dimensions `a`, `b` as for `hg_section_properties`), `length` (m, > 0) and absolute
+ * `roughness` (m, ≥ 0, at most half the hydraulic diameter) at flow `flow` (m³/s,
+ * signed), for a fluid of `density` (kg/m³, > 0) and `viscosity` (Pa·s, > 0). Laminar
+ * flow uses the section's exact laminar constant; turbulent flow the hydraulic diameter
+ * (with `HG_WARN_NON_CIRCULAR_SECTION` for other shapes than a circle).
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_INVALID` for a
+ * `struct_size` too small or b ≠ 0 on a one-dimension shape; `HG_ERR_NULL_POINTER`.
+ * Thread-safe.
+ *
+ * # Safety
+ * `out` must be NULL or point to a writable `hg_pipe_flow` of `out->struct_size` bytes.
+ */
+int32_t hg_duct_flow_state(int32_t shape,
+                           double a,
+                           double b,
+                           double length,
+                           double roughness,
+                           double density,
+                           double viscosity,
+                           double flow,
+                           struct hg_pipe_flow *out);
+
+/**
+ * Reynolds number `*re` = |V|·D·ρ/μ of flow `flow` (m³/s, signed) in a round pipe of
+ * inside `diameter` (m, > 0), for a fluid of `density` (kg/m³, > 0) and `viscosity`
+ * (Pa·s, > 0), as the core's pipe flow state computes it.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Thread-safe.
+ *
+ * # Safety
+ * `re` must be NULL or point to a writable double.
+ */
+int32_t hg_reynolds(double flow,
+                    double diameter,
+                    double density,
+                    double viscosity,
+                    double *re);
+
+/**
+ * Head losses and derivatives of one round pipe (as `hg_pipe_head_loss`) at `n` flows:
+ * `head_loss[i]`, `dhead_dflow[i]` at `flow[i]`. The results equal the scalar call's bit
+ * for bit. Either output may be the `flow` array itself (computed in place); the two
+ * outputs must be different arrays.
+ *
+ * Returns `HG_OK`; the status of the bad pipe or fluid; the status of the first bad
+ * flow (message "element <i>: ..."), with the outputs partly written;
+ * `HG_ERR_NULL_POINTER`; `HG_ERR_INVALID` for `n` = 0. Thread-safe.
+ *
+ * # Safety
+ * `flow`, `head_loss` and `dhead_dflow` must be NULL or valid for `n` doubles.
+ */
+int32_t hg_pipe_head_loss_batch(double diameter,
+                                double length,
+                                double roughness,
+                                double density,
+                                double viscosity,
+                                const double *flow,
+                                size_t n,
+                                double *head_loss,
+                                double *dhead_dflow);
+
+/**
+ * Geometry of a cross-section `shape` (`HG_SECTION_*`) with dimensions `a`, `b` (m; see
+ * each constant): `*area` (m²), `*wetted_perimeter` (m), `*hydraulic_diameter` = 4A/P
+ * (m) and `*laminar_constant` = f·Re of fully developed laminar flow on the hydraulic
+ * diameter (dimensionless, exact for each shape: 64 for a circle).
+ *
+ * Valid ranges: dimensions finite and > 0 (b = 0 for a circle and a triangle); annulus
+ * b < a; ellipse b ≤ a.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a bad dimension or
+ * shape; `HG_ERR_INVALID` for b ≠ 0 on a one-dimension shape; `HG_ERR_NULL_POINTER`
+ * when an output is NULL (nothing is written). Thread-safe.
+ *
+ * # Safety
+ * Each output must be NULL or point to a writable double.
+ */
+int32_t hg_section_properties(int32_t shape,
+                              double a,
+                              double b,
+                              double *area,
+                              double *wetted_perimeter,
+                              double *hydraulic_diameter,
+                              double *laminar_constant);
+
+/**
+ * Converts `value` from unit `from` to unit `to` into `*out`, with the exact factors of
+ * NIST SP 811. Unit names are those of the core's table, e.g. "m", "mm", "in", "ft",
+ * "m3/s", "L/s", "m3/h", "gpm", "Pa", "kPa", "bar", "psi", "Pa.s", "cP", "K", "degC",
+ * "degF" (see `hg_unit_name` for the full list). Heads of liquid need a density: use
+ * `hg_convert_head`.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE` for a NaN or infinite value;
+ * `HG_ERR_UNKNOWN_NAME` for an unknown unit (the message lists the known ones);
+ * `HG_ERR_INVALID` when the two units measure different things;
+ * `HG_ERR_OUT_OF_RANGE` for a temperature below absolute zero; `HG_ERR_NULL_POINTER`.
+ * Thread-safe.
+ *
+ * # Safety
+ * `from` and `to` must be NULL or NUL-terminated strings; `out` NULL or writable.
+ */
+int32_t hg_convert(double value,
+                   const char *from,
+                   const char *to,
+                   double *out);
+
+/**
+ * Converts between pressures and heads of a liquid of `density` (kg/m³, > 0):
+ * p = ρ·g₀·h with standard gravity g₀. `from` and `to` are each a pressure unit ("Pa",
+ * "kPa", "MPa", "bar", "psi", "atm") or a head unit ("m_head", "ft_head").
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a density ≤ 0;
+ * `HG_ERR_UNKNOWN_NAME`; `HG_ERR_INVALID` for a unit that is neither a pressure nor a
+ * head; `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * `from` and `to` must be NULL or NUL-terminated strings; `out` NULL or writable.
+ */
+int32_t hg_convert_head(double value,
+                        const char *from,
+                        const char *to,
+                        double density,
+                        double *out);
+
+/**
+ * Copies the name of unit number `index` (0-based, in the core's table order) into
+ * `buf` like `hg_last_error` (at most `len - 1` bytes and a NUL) and stores its full
+ * length in `*needed`.
+ *
+ * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` when `index` is past the end (use it to count
+ * the units); `HG_ERR_NULL_POINTER` for a NULL `needed`, or a NULL `buf` with `len` > 0;
+ * `HG_ERR_BUFFER_TOO_SMALL` when the name did not fit (the cut copy is still written).
+ * Thread-safe.
+ *
+ * # Safety
+ * `buf` must be NULL or valid for writing `len` bytes; `needed` NULL or writable.
+ */
+int32_t hg_unit_name(size_t index,
+                     char *buf,
+                     size_t len,
+                     size_t *needed);
 
 #ifdef __cplusplus
 }  // extern "C"

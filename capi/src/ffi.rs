@@ -330,6 +330,58 @@ pub(crate) fn bad_constant(name: &'static str, value: i32, family: &str, max: us
     .into()
 }
 
+/// Item `index` of a list of names, or an out-of-range error that gives the count.
+pub(crate) fn list_item<'a>(
+    name: &'static str,
+    list: &[&'a str],
+    index: usize,
+) -> FfiResult<&'a str> {
+    list.get(index).copied().ok_or_else(|| {
+        Error::out_of_range(
+            name,
+            index as f64,
+            format!("must be less than {} (the number of entries)", list.len()),
+        )
+        .into()
+    })
+}
+
+/// Copies `s` into a caller's buffer like `snprintf` and stores its full length.
+///
+/// # Safety
+/// `buf` must be NULL or valid for writing `len` bytes; `needed` NULL or writable.
+pub(crate) unsafe fn copy_name(
+    s: &str,
+    buf: *mut c_char,
+    len: usize,
+    needed: *mut usize,
+) -> FfiResult {
+    check_outs(&[out_ptr("needed", needed)])?;
+    if len > 0 && buf.is_null() {
+        return Err(null("buf"));
+    }
+    if len > 0 {
+        let n = s.len().min(len - 1);
+        // SAFETY: `buf` holds `len` > n bytes by the caller's contract.
+        unsafe {
+            std::ptr::copy_nonoverlapping(s.as_ptr(), buf.cast::<u8>(), n);
+            buf.add(n).write(0);
+        }
+    }
+    // SAFETY: checked above.
+    unsafe { put("needed", needed, s.len())? };
+    if s.len() >= len {
+        return Err(Fail::new(
+            HG_ERR_BUFFER_TOO_SMALL,
+            format!(
+                "buf: {len} bytes hold less than \"{s}\" and its NUL ({} bytes)",
+                s.len() + 1
+            ),
+        ));
+    }
+    Ok(())
+}
+
 #[cfg(test)]
 mod tests {
     use super::*;

@@ -11,12 +11,22 @@
 #![allow(non_camel_case_types)]
 
 mod ffi;
+mod fitting;
+mod fluid;
 mod friction;
 mod meta;
+mod pipe;
+mod section;
+mod units;
 
 pub use ffi::{
     HG_ERR_BUFFER_TOO_SMALL, HG_ERR_INTERNAL, HG_ERR_INVALID, HG_ERR_NO_SOLUTION,
     HG_ERR_NOT_FINITE, HG_ERR_NULL_POINTER, HG_ERR_OUT_OF_RANGE, HG_ERR_UNKNOWN_NAME, HG_OK,
 };
+pub use fitting::*;
+pub use fluid::*;
 pub use friction::*;
 pub use meta::*;
+pub use pipe::*;
+pub use section::*;
+pub use units::*;

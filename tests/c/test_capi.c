@@ -69,6 +69,147 @@ static int32_t code_of_kind(const char *kind) {
 
 static size_t msg_len(void) { return hg_last_error(NULL, 0); }
 
+/* ---------- the other functions against the core (generic records) ---------- */
+
+typedef struct {
+  int type; /* 'd', 's', 'i' */
+  double d;
+  long long i;
+  char s[48];
+} tok;
+
+typedef struct {
+  char tag[24];
+  int nin, nout, err;
+  tok in[10], out[8];
+  char kind[24];
+} record;
+
+static record *recs;
+static size_t nrecs;
+
+static int parse_tok(const char *w, tok *t) {
+  memset(t, 0, sizeof *t);
+  if (strncmp(w, "s:", 2) == 0) {
+    t->type = 's';
+    snprintf(t->s, sizeof t->s, "%s", w + 2);
+  } else if (strncmp(w, "i:", 2) == 0) {
+    t->type = 'i';
+    t->i = strtoll(w + 2, NULL, 10);
+  } else {
+    t->type = 'd';
+    t->d = from_hex(w);
+  }
+  return 1;
+}
+
+static void load_records(const char *path) {
+  FILE *fp = fopen(path, "r");
+  if (!fp) exit(2);
+  char line[1024];
+  size_t cap = 0;
+  while (fgets(line, sizeof line, fp)) {
+    if (strncmp(line, "darcy", 5) == 0) continue;
+    if (nrecs == cap) {
+      cap = cap ? 2 * cap : 1024;
+      recs = realloc(recs, cap * sizeof *recs);
+    }
+    record *r = &recs[nrecs];
+    memset(r, 0, sizeof *r);
+    int side = 0;
+    for (char *w = strtok(line, " \n"); w; w = strtok(NULL, " \n")) {
+      if (!r->tag[0]) {
+        snprintf(r->tag, sizeof r->tag, "%s", w);
+      } else if (strcmp(w, "|") == 0) {
+        side = 1;
+      } else if (side && w[0] == '!') {
+        r->err = 1;
+        snprintf(r->kind, sizeof r->kind, "%s", w + 1);
+      } else if (side) {
+        parse_tok(w, &r->out[r->nout++]);
+      } else {
+        parse_tok(w, &r->in[r->nin++]);
+      }
+    }
+    nrecs++;
+  }
+  fclose(fp);
+}
+
+/* Calls the C function a record names; fills got[] (doubles, ints as doubles) and name. */
+static int32_t call_record(const record *r, double *got, int *ngot, char *name, size_t namelen) {
+  const tok *a = r->in;
+  int32_t s = -1;
+  *ngot = 0;
+  if (strcmp(r->tag, "water") == 0) {
+    s = hg_water(a[0].d, a[1].d, &got[0], &got[1]), *ngot = 2;
+  } else if (strcmp(r->tag, "air") == 0) {
+    s = hg_air(a[0].d, a[1].d, &got[0], &got[1]), *ngot = 2;
+  } else if (strcmp(r->tag, "vapour") == 0) {
+    s = hg_water_vapour_pressure(a[0].d, &got[0]), *ngot = 1;
+  } else if (strcmp(r->tag, "convert") == 0) {
+    s = hg_convert(a[0].d, a[1].s, a[2].s, &got[0]), *ngot = 1;
+  } else if (strcmp(r->tag, "convert_head") == 0) {
+    s = hg_convert_head(a[0].d, a[1].s, a[2].s, a[3].d, &got[0]), *ngot = 1;
+  } else if (strcmp(r->tag, "unit_name") == 0 || strcmp(r->tag, "catalogue") == 0) {
+    size_t need = 0;
+    s = r->tag[0] == 'u' ? hg_unit_name((size_t)a[0].i, name, namelen, &need)
+                         : hg_fitting_catalogue_name((size_t)a[0].i, name, namelen, &need);
+    if (need != strlen(name)) s = -2;
+  } else if (strcmp(r->tag, "fitting_k") == 0) {
+    s = hg_fitting_k(a[0].s, a[1].d, a[2].d, a[3].d, &got[0], &got[1]), *ngot = 2;
+  } else if (strcmp(r->tag, "section") == 0) {
+    s = hg_section_properties((int32_t)a[0].i, a[1].d, a[2].d, &got[0], &got[1], &got[2], &got[3]);
+    *ngot = 4;
+  } else if (strcmp(r->tag, "pipe_head_loss") == 0) {
+    s = hg_pipe_head_loss(a[0].d, a[1].d, a[2].d, a[3].d, a[4].d, a[5].d, &got[0], &got[1]);
+    *ngot = 2;
+    if (s == HG_OK) {
+      /* The batch gives the same numbers, computing in place in the flow array. */
+      double q[3] = {a[5].d, a[5].d, a[5].d}, d[3];
+      int32_t sb = hg_pipe_head_loss_batch(a[0].d, a[1].d, a[2].d, a[3].d, a[4].d, q, 3, q, d);
+      if (sb != HG_OK || bits_of(q[2]) != bits_of(got[0]) || bits_of(d[1]) != bits_of(got[1])) s = -3;
+    }
+  } else if (strcmp(r->tag, "reynolds") == 0) {
+    s = hg_reynolds(a[0].d, a[1].d, a[2].d, a[3].d, &got[0]), *ngot = 1;
+  } else if (strcmp(r->tag, "duct_flow_state") == 0) {
+    hg_pipe_flow st;
+    memset(&st, 0, sizeof st);
+    st.struct_size = sizeof st;
+    s = hg_duct_flow_state((int32_t)a[0].i, a[1].d, a[2].d, a[3].d, a[4].d, a[5].d, a[6].d, a[7].d, &st);
+    got[0] = st.velocity, got[1] = st.reynolds, got[2] = st.friction_factor, got[3] = st.head_loss;
+    got[4] = st.dhead_dflow, got[5] = st.regime, got[6] = st.warnings, *ngot = 7;
+  }
+  return s;
+}
+
+static long compare_records(int quiet) {
+  long bad = 0;
+  for (size_t k = 0; k < nrecs; k++) {
+    const record *r = &recs[k];
+    double got[8];
+    char name[64] = "";
+    int ngot;
+    int32_t s = call_record(r, got, &ngot, name, sizeof name);
+    int same;
+    if (r->err) {
+      same = s == code_of_kind(r->kind) && msg_len() > 0;
+    } else {
+      same = s == HG_OK;
+      if (r->nout == 1 && r->out[0].type == 's') same = same && strcmp(name, r->out[0].s) == 0;
+      else {
+        same = same && ngot == r->nout;
+        for (int i = 0; same && i < r->nout; i++)
+          same = r->out[i].type == 'd' ? bits_of(got[i]) == bits_of(r->out[i].d)
+                                       : got[i] == (double)r->out[i].i;
+      }
+    }
+    if (!same) bad++;
+    if (!quiet) CHECK(same, "%s record %zu: status %d (want %s)", r->tag, k, s, r->err ? r->kind : "HG_OK");
+  }
+  return bad;
+}
+
 /* ---------- version, names ---------- */
 
 static void test_meta(const char *expected_version) {
@@ -255,8 +396,8 @@ typedef struct {
   const char *name;
   caller call;
   int nargs;
-  double good[6];
-  int reject[6];
+  double good[8];
+  int reject[8];
 } scalar_case;
 
 static int32_t call_darcy(const double *a, double *out) { return hg_darcy_factor(a[0], a[1], 0, out); }
@@ -283,7 +424,47 @@ static int32_t call_batch(const double *a, double *out) {
   return s;
 }
 
-//@@MORE_CALLERS@@
+static const char *hg_test_fitting = "elbow_90_standard";
+static int32_t call_water(const double *a, double *out) {
+  double mu;
+  return hg_water(a[0], a[1], out, &mu);
+}
+static int32_t call_air(const double *a, double *out) {
+  double mu;
+  return hg_air(a[0], a[1], out, &mu);
+}
+static int32_t call_vapour(const double *a, double *out) { return hg_water_vapour_pressure(a[0], out); }
+static int32_t call_convert(const double *a, double *out) { return hg_convert(a[0], "degC", "K", out); }
+static int32_t call_convert_head(const double *a, double *out) {
+  return hg_convert_head(a[0], "m_head", "kPa", a[1], out);
+}
+static int32_t call_fitting_k(const double *a, double *out) {
+  double dk;
+  return hg_fitting_k(hg_test_fitting, a[0], a[1], a[2], out, &dk);
+}
+static int32_t call_section(const double *a, double *out) {
+  double p, dh, c;
+  return hg_section_properties(HG_SECTION_RECTANGLE, a[0], a[1], out, &p, &dh, &c);
+}
+static int32_t call_pipe(const double *a, double *out) {
+  double d;
+  return hg_pipe_head_loss(a[0], a[1], a[2], a[3], a[4], a[5], out, &d);
+}
+static int32_t call_pipe_batch(const double *a, double *out) {
+  double q[2] = {1e-3, a[5]}, h[2], d[2];
+  int32_t s = hg_pipe_head_loss_batch(a[0], a[1], a[2], a[3], a[4], q, 2, h, d);
+  if (s == HG_OK) *out = h[1];
+  return s;
+}
+static int32_t call_reynolds(const double *a, double *out) { return hg_reynolds(a[0], a[1], a[2], a[3], out); }
+static int32_t call_duct(const double *a, double *out) {
+  hg_pipe_flow st;
+  st.struct_size = sizeof st;
+  int32_t s = hg_duct_flow_state(HG_SECTION_ANNULUS, a[0], a[1], a[2], a[3], a[4], a[5], a[6], &st);
+  if (s == HG_OK) *out = st.head_loss;
+  return s;
+}
+
 
 static const scalar_case cases[] = {
     {"hg_darcy_factor", call_darcy, 2, {1e5, 1e-4}, {REJ_ALL, REJ_NONFINITE | REJ_NEG}},
@@ -291,7 +472,20 @@ static const scalar_case cases[] = {
     {"hg_darcy_factor_opts", call_darcy_opts, 5, {1e5, 1e-4, 64.0, 2300.0, 4000.0},
      {REJ_ALL, REJ_NONFINITE | REJ_NEG, REJ_ALL, REJ_ALL, REJ_ALL}},
     {"hg_darcy_factor_batch", call_batch, 2, {1e5, 1e-4}, {REJ_ALL, REJ_NONFINITE | REJ_NEG}},
-//@@MORE_CASES@@
+    {"hg_water", call_water, 2, {293.15, 101325.0}, {REJ_ALL, REJ_ALL}},
+    {"hg_air", call_air, 2, {293.15, 101325.0}, {REJ_ALL, REJ_ALL}},
+    {"hg_water_vapour_pressure", call_vapour, 1, {293.15}, {REJ_ALL}},
+    {"hg_convert", call_convert, 1, {20.0}, {REJ_NONFINITE}},
+    {"hg_convert_head", call_convert_head, 2, {10.0, 998.2}, {REJ_NONFINITE, REJ_ALL}},
+    {"hg_fitting_k", call_fitting_k, 3, {1e5, 0.05, 1e-3}, {REJ_ALL, REJ_ALL, REJ_NONFINITE | REJ_NEG}},
+    {"hg_section_properties", call_section, 2, {0.2, 0.1}, {REJ_ALL, REJ_ALL}},
+    {"hg_pipe_head_loss", call_pipe, 6, {0.05, 30.0, 4.5e-5, 998.2, 1.002e-3, 2e-3},
+     {REJ_ALL, REJ_ALL, REJ_NONFINITE | REJ_NEG, REJ_ALL, REJ_ALL, REJ_NONFINITE}},
+    {"hg_pipe_head_loss_batch", call_pipe_batch, 6, {0.05, 30.0, 4.5e-5, 998.2, 1.002e-3, 2e-3},
+     {REJ_ALL, REJ_ALL, REJ_NONFINITE | REJ_NEG, REJ_ALL, REJ_ALL, REJ_NONFINITE}},
+    {"hg_reynolds", call_reynolds, 4, {2e-3, 0.05, 998.2, 1.002e-3}, {REJ_NONFINITE, REJ_ALL, REJ_ALL, REJ_ALL}},
+    {"hg_duct_flow_state", call_duct, 7, {0.1, 0.05, 20.0, 1e-4, 998.2, 1.002e-3, 5e-3},
+     {REJ_ALL, REJ_ALL, REJ_ALL, REJ_NONFINITE | REJ_NEG, REJ_ALL, REJ_ALL, REJ_NONFINITE}},
 };
 
 static void test_bad_values(void) {
@@ -304,7 +498,7 @@ static void test_bad_values(void) {
     CHECK(s == HG_OK && isfinite(out), "%s with good input: status %d", c->name, s);
     for (int i = 0; i < c->nargs; i++) {
       for (int b = 0; b < 5; b++) {
-        double a[6];
+        double a[8];
         memcpy(a, c->good, sizeof a);
         a[i] = bad[b];
         out = 12345.0;
@@ -381,7 +575,7 @@ typedef struct {
 
 static void *worker(void *p) {
   thread_arg *t = p;
-  for (int rep = 0; rep < 2; rep++) t->bad += compare_reference(1);
+  for (int rep = 0; rep < 2; rep++) t->bad += compare_reference(1) + compare_records(1);
   /* Each thread's message is its own. */
   double f;
   char want[64], got[64];
@@ -406,7 +600,69 @@ static void test_threads(void) {
   }
 }
 
-//@@MORE_TESTS@@
+static void test_bad_pointers_others(void) {
+  double x = 5.0, y = 5.0, z, w;
+  char buf[8];
+  size_t need = 0;
+  CHECK(hg_water(293.15, 1e5, NULL, &y) == HG_ERR_NULL_POINTER && y == 5.0 && msg_len() > 0, "water NULL");
+  CHECK(hg_water(293.15, 1e5, &x, NULL) == HG_ERR_NULL_POINTER && x == 5.0, "water NULL");
+  CHECK(hg_air(293.15, 1e5, NULL, &y) == HG_ERR_NULL_POINTER, "air NULL");
+  CHECK(hg_air(293.15, 1e5, &x, NULL) == HG_ERR_NULL_POINTER, "air NULL");
+  CHECK(hg_water_vapour_pressure(293.15, NULL) == HG_ERR_NULL_POINTER, "vapour NULL");
+  CHECK(hg_convert(1, NULL, "m", &x) == HG_ERR_NULL_POINTER, "convert NULL from");
+  CHECK(hg_convert(1, "m", NULL, &x) == HG_ERR_NULL_POINTER, "convert NULL to");
+  CHECK(hg_convert(1, "m", "mm", NULL) == HG_ERR_NULL_POINTER, "convert NULL out");
+  CHECK(hg_convert(1, "m", "\xc3", &x) == HG_ERR_INVALID, "convert not UTF-8");
+  CHECK(hg_convert(1, "m", "", &x) == HG_ERR_UNKNOWN_NAME, "convert empty unit");
+  CHECK(hg_convert(1, "m", "Pa", &x) == HG_ERR_INVALID && msg_len() > 0, "convert mismatch");
+  CHECK(hg_convert_head(1, NULL, "Pa", 1000, &x) == HG_ERR_NULL_POINTER, "head NULL");
+  CHECK(hg_convert_head(1, "m_head", NULL, 1000, &x) == HG_ERR_NULL_POINTER, "head NULL");
+  CHECK(hg_convert_head(1, "m_head", "Pa", 1000, NULL) == HG_ERR_NULL_POINTER, "head NULL");
+  CHECK(hg_fitting_k(NULL, 1e5, 0.05, 0, &x, &y) == HG_ERR_NULL_POINTER, "fitting NULL name");
+  CHECK(hg_fitting_k(hg_test_fitting, 1e5, 0.05, 0, NULL, &y) == HG_ERR_NULL_POINTER, "fitting NULL k");
+  CHECK(hg_fitting_k(hg_test_fitting, 1e5, 0.05, 0, &x, NULL) == HG_ERR_NULL_POINTER, "fitting NULL dk");
+  CHECK(hg_fitting_k("nonesuch", 1e5, 0.05, 0, &x, &y) == HG_ERR_UNKNOWN_NAME && msg_len() > 0, "unknown fitting");
+  CHECK(hg_unit_name(0, buf, sizeof buf, NULL) == HG_ERR_NULL_POINTER, "unit NULL needed");
+  CHECK(hg_unit_name(0, NULL, 4, &need) == HG_ERR_NULL_POINTER, "unit NULL buf");
+  CHECK(hg_unit_name(0, NULL, 0, &need) == HG_ERR_BUFFER_TOO_SMALL && need > 0, "unit length query");
+  CHECK(hg_unit_name(1000, buf, sizeof buf, &need) == HG_ERR_OUT_OF_RANGE && msg_len() > 0, "unit past end");
+  CHECK(hg_unit_name(SIZE_MAX, buf, sizeof buf, &need) == HG_ERR_OUT_OF_RANGE, "unit SIZE_MAX");
+  CHECK(hg_fitting_catalogue_name(0, buf, 2, &need) == HG_ERR_BUFFER_TOO_SMALL && strlen(buf) == 1 && need > 1,
+        "catalogue cut");
+  CHECK(hg_fitting_catalogue_name(0, NULL, 0, NULL) == HG_ERR_NULL_POINTER, "catalogue NULL");
+  CHECK(hg_fitting_catalogue_name(100000, buf, sizeof buf, &need) == HG_ERR_OUT_OF_RANGE, "catalogue past end");
+  for (int k = 0; k < 4; k++) {
+    double *p[4] = {&x, &y, &z, &w};
+    p[k] = NULL;
+    CHECK(hg_section_properties(0, 0.1, 0, p[0], p[1], p[2], p[3]) == HG_ERR_NULL_POINTER, "section NULL %d", k);
+  }
+  CHECK(hg_section_properties(5, 0.1, 0, &x, &y, &z, &w) == HG_ERR_OUT_OF_RANGE, "shape 5");
+  CHECK(hg_section_properties(-1, 0.1, 0, &x, &y, &z, &w) == HG_ERR_OUT_OF_RANGE, "shape -1");
+  CHECK(hg_section_properties(HG_SECTION_CIRCLE, 0.1, 0.2, &x, &y, &z, &w) == HG_ERR_INVALID, "circle b");
+  CHECK(hg_section_properties(HG_SECTION_TRIANGLE, 0.1, NAN, &x, &y, &z, &w) == HG_ERR_INVALID, "triangle b");
+  CHECK(hg_pipe_head_loss(0.05, 1, 0, 998, 1e-3, 1e-3, NULL, &y) == HG_ERR_NULL_POINTER, "pipe NULL");
+  CHECK(hg_pipe_head_loss(0.05, 1, 0, 998, 1e-3, 1e-3, &x, NULL) == HG_ERR_NULL_POINTER, "pipe NULL");
+  CHECK(hg_reynolds(1e-3, 0.05, 998, 1e-3, NULL) == HG_ERR_NULL_POINTER, "reynolds NULL");
+  hg_pipe_flow st;
+  st.struct_size = 3;
+  CHECK(hg_duct_flow_state(0, 0.05, 0, 1, 0, 998, 1e-3, 1e-3, &st) == HG_ERR_INVALID, "struct_size 3");
+  CHECK(hg_duct_flow_state(0, 0.05, 0, 1, 0, 998, 1e-3, 1e-3, NULL) == HG_ERR_NULL_POINTER, "duct NULL");
+  CHECK(hg_duct_flow_state(9, 0.05, 0, 1, 0, 998, 1e-3, 1e-3, &st) == HG_ERR_INVALID, "still struct_size first");
+  st.struct_size = sizeof st;
+  CHECK(hg_duct_flow_state(9, 0.05, 0, 1, 0, 998, 1e-3, 1e-3, &st) == HG_ERR_OUT_OF_RANGE, "duct shape 9");
+  double q[2] = {1e-3, 2e-3}, h[2], d[2];
+  CHECK(hg_pipe_head_loss_batch(0.05, 1, 0, 998, 1e-3, NULL, 2, h, d) == HG_ERR_NULL_POINTER, "batch NULL flow");
+  CHECK(hg_pipe_head_loss_batch(0.05, 1, 0, 998, 1e-3, q, 2, NULL, d) == HG_ERR_NULL_POINTER, "batch NULL h");
+  CHECK(hg_pipe_head_loss_batch(0.05, 1, 0, 998, 1e-3, q, 2, h, NULL) == HG_ERR_NULL_POINTER, "batch NULL d");
+  CHECK(hg_pipe_head_loss_batch(0.05, 1, 0, 998, 1e-3, q, 0, h, d) == HG_ERR_INVALID && msg_len() > 0, "batch n 0");
+  CHECK(hg_pipe_head_loss_batch(0.05, 1, 0, 998, 1e-3, q, 2, h, h) == HG_ERR_INVALID, "batch outputs alias");
+  q[1] = INFINITY;
+  CHECK(hg_pipe_head_loss_batch(0.05, 1, 0, 998, 1e-3, q, 2, h, d) == HG_ERR_NOT_FINITE, "batch inf flow");
+  char m[64];
+  hg_last_error(m, sizeof m);
+  CHECK(strncmp(m, "element 1: flow = inf", 21) == 0, "batch message '%s'", m);
+}
+
 
 int main(int argc, char **argv) {
   if (argc < 3) {
@@ -414,16 +670,19 @@ int main(int argc, char **argv) {
     return 2;
   }
   load_reference(argv[1]);
+  load_records(argv[1]);
   CHECK(nrefs > 1000, "reference file has %zu lines", nrefs);
   test_meta(argv[2]);
   test_last_error();
   long bad = compare_reference(0);
-  printf("bitwise: %zu reference points, %ld differ\n", nrefs, bad);
+  bad += compare_records(0);
+  printf("bitwise: %zu reference points, %ld differ\n", nrefs + nrecs, bad);
   test_opts_and_batch();
   test_bad_values();
   test_bad_pointers_and_constants();
-//@@MORE_CALLS@@
+  test_bad_pointers_others();
   test_threads();
   free(refs);
+  free(recs);
   return check_summary("test_capi");
 }
