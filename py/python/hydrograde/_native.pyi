@@ -1,10 +1,20 @@
 """Type stubs of the native module (hydrograde._native). SI units throughout."""
 
-from typing import Any, Dict, List, Optional, Tuple, Type, overload
+from typing import Any, Dict, List, Optional, Tuple, final, overload
 
 import numpy as np
 from numpy.typing import ArrayLike, NDArray
 
+__all__ = [
+    "ERROR_KINDS",
+    "Friction",
+    "WARNING_NAMES",
+    "__version__",
+    "correlation_validity",
+    "correlations",
+    "darcy_factor",
+    "friction",
+]
 __version__: str
 ERROR_KINDS: List[str]
 WARNING_NAMES: List[str]
@@ -44,6 +54,7 @@ def friction(
 def correlations() -> List[str]: ...
 def correlation_validity(correlation: str) -> Dict[str, float]: ...
 
+@final
 class Friction:
     """A Darcy friction factor with its sensitivities."""
 
@@ -63,4 +74,4 @@ class Friction:
     def __reduce__(self) -> Tuple[Any, Tuple[bytes]]: ...
     @classmethod
     def _from_state(cls, state: bytes) -> Friction: ...
-    def __eq__(self, other: object) -> bool: ...
+    def __eq__(self, value: object, /) -> bool: ...

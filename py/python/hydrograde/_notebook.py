@@ -95,7 +95,7 @@ def _scalar_rows(data: Mapping[str, Any]) -> List[str]:
         if isinstance(value, (list, Mapping)):
             continue
         band = data.get(f"{key}_band")
-        band_cell = _band_text(band) if _is_band(band) else ""
+        band_cell = _band_text(band) if isinstance(band, Mapping) and _is_band(band) else ""
         rows.append(
             f"<tr><td class='hg-name'>{html.escape(key)}</td><td>{_fmt(value)}</td>"
             f"<td>{html.escape(UNITS.get(key, ''))}</td><td>{band_cell}</td></tr>"
@@ -144,7 +144,7 @@ def render_html(title: str, data: Mapping[str, Any]) -> str:
 def to_dataframe(data: Mapping[str, Any]) -> Any:
     """A pandas DataFrame: one row per element when there are elements, else one row."""
     try:
-        import pandas as pd
+        import pandas as pd  # type: ignore[import-untyped]
     except ImportError as exc:  # pragma: no cover - exercised without pandas only
         raise ImportError("to_dataframe() needs pandas: pip install pandas") from exc
     elements = data.get("elements")
