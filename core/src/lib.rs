@@ -34,3 +34,8 @@ pub use warning::Warnings;
 
 /// The crate version, from Cargo.toml.
 pub const VERSION: &str = env!("CARGO_PKG_VERSION");
+
+/// The README's Rust examples, compiled and run as doctests.
+#[doc = include_str!("../../README.md")]
+#[cfg(doctest)]
+pub struct ReadmeDoctests;

@@ -109,7 +109,10 @@ mod tests {
     #[test]
     fn names_follow_bits() {
         let w = Warnings::TRANSITIONAL_FLOW | Warnings::REYNOLDS_OUT_OF_RANGE;
-        assert_eq!(w.names(), vec!["reynolds_out_of_range", "transitional_flow"]);
+        assert_eq!(
+            w.names(),
+            vec!["reynolds_out_of_range", "transitional_flow"]
+        );
         assert!(w.contains(Warnings::TRANSITIONAL_FLOW));
         assert!(!w.contains(Warnings::GAS_COMPRESSIBILITY));
         assert_eq!(Warnings::from_bits_truncate(w.bits()), w);

@@ -111,11 +111,7 @@ pub(crate) fn serghides(re: f64, rr: f64) -> Solution {
             let dden = dxc - 2.0 * dxb + dxa;
             dxa - (dnum * den - num * dden) / (den * den)
         };
-        (
-            xa - num / den,
-            d(xa_re, xb_re, xc_re),
-            d(xa_a, xb_a, xc_a),
-        )
+        (xa - num / den, d(xa_re, xb_re, xc_re), d(xa_a, xb_a, xc_a))
     };
     let f = 1.0 / (x * x);
     let df_dx = -2.0 * f / x;
