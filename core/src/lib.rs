@@ -22,6 +22,7 @@ pub mod fitting;
 pub mod fluid;
 pub mod friction;
 pub mod line;
+pub mod pipe;
 pub mod roughness;
 pub mod section;
 pub mod sizes;
@@ -31,6 +32,9 @@ pub mod warning;
 pub use error::{Error, ErrorKind, Result};
 pub use friction::{Correlation, Friction, Options, Regime, Transition, darcy_factor};
 pub use warning::Warnings;
+// fitting (minor losses) and units
+pub use fitting::{Fitting, Resistance};
+pub use units::{STANDARD_GRAVITY, convert, convert_head};
 
 /// The crate version, from Cargo.toml.
 pub const VERSION: &str = env!("CARGO_PKG_VERSION");

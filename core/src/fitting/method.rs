@@ -1,0 +1,268 @@
+//! The published methods that give a fitting's resistance coefficient K.
+//!
+//! Each method evaluates to a [`Resistance`] at its own reference bore `d` (m), with the
+//! Reynolds number and the velocity both taken in that bore. [`super::Fitting`] then
+//! refers the result to whatever bore the caller asks for.
+
+use super::Resistance;
+use crate::error::Result;
+use crate::friction::{Correlation, Options, darcy_factor};
+use crate::units::{BAR, GPM, INCH, M3_PER_HOUR, PSI};
+use serde::{Deserialize, Serialize};
+use std::f64::consts::PI;
+
+/// Absolute roughness of clean commercial steel, 0.045 mm (common practice; Moody 1944
+/// lists 0.046 mm, from memory). Fittings are cast or forged and are never smoother than
+/// this, and published L/D data were reduced with the fully rough factor of clean steel
+/// (Crane Co., Technical Paper 410, 1988, from memory), so the fully rough factor used
+/// for L/D fittings and bends never falls below that of steel of the same bore.
+pub const FITTING_WALL_ROUGHNESS: f64 = 0.045e-3;
+
+/// Density of water at 60 °F (15.556 °C) and 101.325 kPa, kg/m³: 999.017 (IAPWS-95 through
+/// the iapws library, rounded to six digits). Cv is defined for water of specific
+/// gravity 1 "relative to water at 60 °F" (ANSI/ISA-75.01, from memory), so this is the
+/// density of the liquid in the definition.
+pub const CV_REFERENCE_DENSITY: f64 = 999.017;
+
+/// Density of the water in the definition of Kv, kg/m³: 1000. Kv is the flow in m³/h of
+/// water at 1 bar drop with relative density ρ/ρ₀ = 1, ρ₀ = 1000 kg/m³ (IEC 60534-2-1 and
+/// VDI/VDE 2173, from memory).
+pub const KV_REFERENCE_DENSITY: f64 = 1000.0;
+
+/// K = [`CV_K_FACTOR`] · d⁴ / Cv² with d the bore in metres.
+///
+/// From Δp = K ρ V²/2 with V = 4Q/(π d²) and the definition Q = Cv · gpm · √(Δp/psi) at
+/// ρ = [`CV_REFERENCE_DENSITY`]: K = π² psi / (8 ρ gpm²) · d⁴/Cv², with psi and gpm in SI
+/// from the exact NIST SP 811 factors. Value ≈ 2.139 × 10⁹ m⁻⁴ (890.3 with d in inches).
+pub const CV_K_FACTOR: f64 = PI * PI * PSI / (8.0 * CV_REFERENCE_DENSITY * GPM * GPM);
+
+/// K = [`KV_K_FACTOR`] · d⁴ / Kv² with d the bore in metres; derived as [`CV_K_FACTOR`]
+/// with m³/h, bar and [`KV_REFERENCE_DENSITY`]. Value ≈ 1.599 × 10⁹ m⁻⁴ (1.599 × 10⁻³ with
+/// d in millimetres).
+pub const KV_K_FACTOR: f64 =
+    PI * PI * BAR / (8.0 * KV_REFERENCE_DENSITY * M3_PER_HOUR * M3_PER_HOUR);
+
+/// Sharp-edged entrance, K = 0.5 (Crane Co., TP-410, 1988, from memory; common practice).
+pub const K_ENTRANCE_SHARP: f64 = 0.5;
+/// Inward-projecting (re-entrant) entrance, K = 0.78 (Crane Co., TP-410, 1988, from memory).
+pub const K_ENTRANCE_PROJECTING: f64 = 0.78;
+/// Exit into a large reservoir, K = 1: the whole kinetic energy of a uniform stream is
+/// lost (Borda–Carnot with an infinite outlet; exact).
+pub const K_EXIT: f64 = 1.0;
+
+/// Rounded entrance: K against r/d, Crane Co., TP-410 (1988), typed from memory;
+/// interpolated linearly, K = 0.04 beyond r/d = 0.15.
+const ROUNDED_ENTRANCE: [(f64, f64); 6] = [
+    (0.0, 0.5),
+    (0.02, 0.28),
+    (0.04, 0.24),
+    (0.06, 0.15),
+    (0.10, 0.09),
+    (0.15, 0.04),
+];
+
+/// How a fitting's K is obtained. Every length is in metres, every angle in degrees.
+#[derive(Debug, Clone, Copy, PartialEq, Serialize, Deserialize)]
+#[serde(tag = "method", rename_all = "snake_case")]
+pub enum Method {
+    /// A fixed resistance coefficient K (dimensionless).
+    K {
+        /// K, ≥ 0.
+        k: f64,
+    },
+    /// Equivalent length: K = f_T · (L/D) with f_T the fully rough Darcy factor of the
+    /// adjoining pipe (never below that of clean commercial steel, see
+    /// [`FITTING_WALL_ROUGHNESS`]).
+    EquivalentLength {
+        /// L/D, ≥ 0.
+        l_over_d: f64,
+    },
+    /// Hooper (1981): K = K₁/Re + K∞ (1 + 1/D) with D the bore in inches.
+    TwoK {
+        /// K₁, ≥ 0.
+        k1: f64,
+        /// K∞, ≥ 0.
+        k_inf: f64,
+    },
+    /// Darby (1999, 2001): K = K₁/Re + Kᵢ (1 + K_d / D^0.3) with D the bore in inches.
+    ThreeK {
+        /// K₁, ≥ 0.
+        k1: f64,
+        /// Kᵢ, ≥ 0.
+        k_inf: f64,
+        /// K_d, ≥ 0 (inches^0.3).
+        k_d: f64,
+    },
+    /// Sudden expansion, Borda–Carnot: K = (1 − (d_in/d_out)²)² on the inlet velocity.
+    Expansion {
+        /// Inlet bore (m).
+        d_in: f64,
+        /// Outlet bore (m), > d_in.
+        d_out: f64,
+    },
+    /// Sudden contraction, Crane TP-410 (1988): K = 0.5 (1 − β²), β = d_out/d_in, on the
+    /// outlet velocity.
+    Contraction {
+        /// Inlet bore (m).
+        d_in: f64,
+        /// Outlet bore (m), < d_in.
+        d_out: f64,
+    },
+    /// Sharp-edged entrance from a reservoir, K = 0.5.
+    EntranceSharp,
+    /// Rounded entrance from a reservoir, K from r/d (Crane TP-410 table).
+    EntranceRounded {
+        /// Radius of the rounding over the bore, ≥ 0.
+        r_over_d: f64,
+    },
+    /// Inward-projecting entrance, K = 0.78.
+    EntranceProjecting,
+    /// Exit into a reservoir, K = 1.
+    Exit,
+    /// Smooth bend (Rennels & Hudson, 2012).
+    Bend {
+        /// Bend angle in degrees, 0…180.
+        angle_deg: f64,
+        /// Centre-line radius over bore, ≥ 0.5.
+        r_over_d: f64,
+    },
+    /// Valve flow coefficient Cv (US gal/min of water at 60 °F with 1 psi drop).
+    Cv {
+        /// Cv, > 0.
+        cv: f64,
+    },
+    /// Valve flow coefficient Kv (m³/h of water with 1 bar drop).
+    Kv {
+        /// Kv, > 0.
+        kv: f64,
+    },
+}
+
+impl Method {
+    /// A short snake_case name of the method, e.g. `"three_k"`.
+    pub fn name(&self) -> &'static str {
+        match self {
+            Method::K { .. } => "k",
+            Method::EquivalentLength { .. } => "equivalent_length",
+            Method::TwoK { .. } => "two_k",
+            Method::ThreeK { .. } => "three_k",
+            Method::Expansion { .. } => "expansion",
+            Method::Contraction { .. } => "contraction",
+            Method::EntranceSharp => "entrance_sharp",
+            Method::EntranceRounded { .. } => "entrance_rounded",
+            Method::EntranceProjecting => "entrance_projecting",
+            Method::Exit => "exit",
+            Method::Bend { .. } => "bend",
+            Method::Cv { .. } => "cv",
+            Method::Kv { .. } => "kv",
+        }
+    }
+
+    /// The default relative half-width of K for a fitting built with this method
+    /// (common practice: fitting data scatter by ±20–50 %; a maker's Cv by about ±10 %).
+    pub fn default_spread(&self) -> f64 {
+        match self {
+            Method::K { .. } | Method::EquivalentLength { .. } => 0.3,
+            Method::TwoK { .. } => 0.35,
+            Method::ThreeK { .. } => 0.25,
+            Method::Expansion { .. } | Method::Exit => 0.1,
+            Method::Contraction { .. } | Method::EntranceSharp => 0.2,
+            Method::EntranceRounded { .. } | Method::EntranceProjecting => 0.3,
+            Method::Bend { .. } => 0.3,
+            Method::Cv { .. } | Method::Kv { .. } => 0.1,
+        }
+    }
+
+    /// The fixed reference bore of methods defined by their own geometry.
+    pub(crate) fn own_diameter(&self) -> Option<f64> {
+        match *self {
+            Method::Expansion { d_in, .. } => Some(d_in),
+            Method::Contraction { d_out, .. } => Some(d_out),
+            _ => None,
+        }
+    }
+
+    /// K at reference bore `d` (m), velocity and Reynolds number taken in that bore.
+    /// `rel_roughness` is ε/D of the adjoining pipe (used by L/D and bends only).
+    pub(crate) fn resistance_at(&self, d: f64, rel_roughness: f64) -> Result<Resistance> {
+        let inertial = |k| Resistance {
+            k_viscous: 0.0,
+            k_inertial: k,
+        };
+        Ok(match *self {
+            Method::K { k } => inertial(k),
+            Method::EquivalentLength { l_over_d } => {
+                inertial(fully_rough_factor(rel_roughness, d)? * l_over_d)
+            }
+            Method::TwoK { k1, k_inf } => Resistance {
+                k_viscous: k1,
+                k_inertial: k_inf * (1.0 + INCH / d),
+            },
+            Method::ThreeK { k1, k_inf, k_d } => Resistance {
+                k_viscous: k1,
+                k_inertial: k_inf * (1.0 + k_d / (d / INCH).powf(0.3)),
+            },
+            Method::Expansion { d_in, d_out } => {
+                let area_ratio = (d_in / d_out).powi(2);
+                inertial((1.0 - area_ratio).powi(2))
+            }
+            Method::Contraction { d_in, d_out } => {
+                let area_ratio = (d_out / d_in).powi(2);
+                inertial(0.5 * (1.0 - area_ratio))
+            }
+            Method::EntranceSharp => inertial(K_ENTRANCE_SHARP),
+            Method::EntranceRounded { r_over_d } => inertial(rounded_entrance(r_over_d)),
+            Method::EntranceProjecting => inertial(K_ENTRANCE_PROJECTING),
+            Method::Exit => inertial(K_EXIT),
+            Method::Bend {
+                angle_deg,
+                r_over_d,
+            } => inertial(bend(
+                angle_deg,
+                r_over_d,
+                fully_rough_factor(rel_roughness, d)?,
+            )),
+            Method::Cv { cv } => inertial(CV_K_FACTOR * d.powi(4) / (cv * cv)),
+            Method::Kv { kv } => inertial(KV_K_FACTOR * d.powi(4) / (kv * kv)),
+        })
+    }
+}
+
+/// Fully rough Darcy factor f_T for a pipe of relative roughness `rel_roughness` and a
+/// fitting of bore `d` (m), floored at clean commercial steel of that bore.
+pub fn fully_rough_factor(rel_roughness: f64, d: f64) -> Result<f64> {
+    let floor = FITTING_WALL_ROUGHNESS / d;
+    let rr = rel_roughness
+        .max(floor)
+        .min(crate::friction::MAX_REL_ROUGHNESS);
+    // The fully rough law ignores Re; any turbulent value will do.
+    let fr = darcy_factor(1e8, rr, &Options::with_correlation(Correlation::FullyRough))?;
+    Ok(fr.f)
+}
+
+/// K of a rounded entrance: linear interpolation in the Crane TP-410 table.
+fn rounded_entrance(r_over_d: f64) -> f64 {
+    let mut prev = ROUNDED_ENTRANCE[0];
+    for &(x, k) in &ROUNDED_ENTRANCE[1..] {
+        if r_over_d <= x {
+            let t = (r_over_d - prev.0) / (x - prev.0);
+            return prev.1 + t * (k - prev.1);
+        }
+        prev = (x, k);
+    }
+    prev.1
+}
+
+/// K of a smooth bend of angle α and relative radius r/d with Darcy factor f
+/// (Rennels & Hudson, 2012, Pipe Flow: A Practical and Comprehensive Guide, typed from
+/// memory):
+///
+/// K = f α (r/d) + (0.10 + 2.4 f) sin(α/2) + 6.6 f (√sin(α/2) + sin(α/2)) / (r/d)^(4α/π)
+///
+/// with α in radians. The first term is the friction of the bend's own length, the rest
+/// the secondary-flow and separation losses.
+fn bend(angle_deg: f64, r_over_d: f64, f: f64) -> f64 {
+    let a = angle_deg.to_radians();
+    let s = (a / 2.0).sin();
+    f * a * r_over_d + (0.10 + 2.4 * f) * s + 6.6 * f * (s.sqrt() + s) / r_over_d.powf(4.0 * a / PI)
+}

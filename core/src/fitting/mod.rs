@@ -1,0 +1,397 @@
+//! Minor losses: fittings, valves, entrances, exits and changes of section.
+//!
+//! A [`Fitting`] is everything in a line that is not straight pipe. Its head loss is
+//! h = K · V |V| / 2g₀ ([`head_loss`]), signed with the flow, where V is the mean velocity
+//! in the bore K refers to. K may depend on the Reynolds number and the size; every
+//! method here has the form K(Re) = k_viscous / Re + k_inertial ([`Resistance`]), so the
+//! loss k_viscous·ν V/(2 g₀ d) + k_inertial V|V|/(2 g₀) is well defined through zero flow.
+//!
+//! | constructor | method | K (velocity in the bore of `diameter`) |
+//! |---|---|---|
+//! | [`Fitting::k`], [`Fitting::k_referred`] | given K | K |
+//! | [`Fitting::equivalent_length`] | L/D | f_T · L/D, f_T fully rough (Crane TP-410 practice) |
+//! | [`Fitting::two_k`] | Hooper (1981) | K₁/Re + K∞ (1 + 1/D_in) |
+//! | [`Fitting::three_k`] | Darby (1999, 2001) | K₁/Re + Kᵢ (1 + K_d / D_in^0.3) |
+//! | [`Fitting::expansion`] | Borda–Carnot (exact momentum balance) | (1 − (d₁/d₂)²)² on V₁ |
+//! | [`Fitting::contraction`] | Crane TP-410 (1988) | 0.5 (1 − (d₂/d₁)²) on V₂ |
+//! | [`Fitting::entrance_sharp`] / `_rounded` / `_projecting` | Crane TP-410 | 0.5 / table in r/d / 0.78 |
+//! | [`Fitting::exit`] | Borda–Carnot, d₂ → ∞ | 1 |
+//! | [`Fitting::bend`] | Rennels & Hudson (2012) | f_T α r/d + (0.10 + 2.4 f_T) sin(α/2) + … |
+//! | [`Fitting::cv`], [`Fitting::kv`] | definition of Cv, Kv | [`method::CV_K_FACTOR`] d⁴/Cv², [`method::KV_K_FACTOR`] d⁴/Kv² |
+//! | [`Fitting::tee_run`], [`Fitting::tee_branch`] | Darby 3-K | catalogue constants |
+//! | [`Fitting::named`] | [`catalogue`] | per entry |
+//!
+//! D_in is the bore in inches. Darby's table is written for the nominal size in inches;
+//! the bore stands in for it here because a line knows bores, not nominal sizes (the two
+//! differ by a few per cent, and the 0.3 power shrinks that further).
+//!
+//! **K referred to another bore.** A K that refers to bore d applies to the velocity in
+//! d. At another bore b (same flow), V_d = V_b (b/d)² and Re_d = Re_b (b/d), so the same
+//! loss is K_b(Re_b) = (b/d)³ k_viscous / Re_b + (b/d)⁴ k_inertial: the familiar fourth
+//! power of the diameter ratio for the inertial part.
+//!
+//! **Caution.** Published fitting data scatter widely (±20–50 %, common practice); each
+//! fitting carries a relative spread of K ([`Fitting::k_spread`]) that the uncertainty
+//! bands use. The catalogue constants were typed from memory of the published tables
+//! (see [`catalogue`]); use a maker's data where you have it.
+
+pub mod catalogue;
+pub mod method;
+
+pub use catalogue::{CatalogueEntry, catalogue_entries};
+pub use method::Method;
+
+use crate::error::{Error, Result, check};
+use crate::units::STANDARD_GRAVITY;
+use serde::{Deserialize, Serialize};
+
+/// Minor-loss resistance of a fitting at a given reference bore, split so that zero flow is
+/// well defined: K(Re) = k_viscous / Re + k_inertial (both dimensionless). Every method of
+/// this module has this form (2-K and 3-K: K₁/Re + …; every other method k_viscous = 0).
+#[derive(Debug, Clone, Copy, PartialEq, Serialize, Deserialize)]
+pub struct Resistance {
+    /// Coefficient of 1/Re (K₁ of the 2-K and 3-K methods), ≥ 0.
+    pub k_viscous: f64,
+    /// The Reynolds-independent part of K, ≥ 0.
+    pub k_inertial: f64,
+}
+
+impl Resistance {
+    /// K at Reynolds number `re` (> 0): k_viscous/re + k_inertial.
+    #[inline]
+    pub fn k(&self, re: f64) -> f64 {
+        self.k_viscous / re + self.k_inertial
+    }
+
+    /// ∂K/∂Re at Reynolds number `re` (> 0): −k_viscous/re².
+    #[inline]
+    pub fn dk_dre(&self, re: f64) -> f64 {
+        -self.k_viscous / (re * re)
+    }
+
+    /// The same loss expressed on the velocity and Reynolds number of bore `to` (m),
+    /// when this resistance refers to bore `from` (m); see the module doc.
+    #[inline]
+    fn referred(self, from: f64, to: f64) -> Resistance {
+        if from == to {
+            return self;
+        }
+        let r = to / from;
+        let r3 = r * r * r;
+        Resistance {
+            k_viscous: self.k_viscous * r3,
+            k_inertial: self.k_inertial * r3 * r,
+        }
+    }
+}
+
+/// Head loss (m) of resistance coefficient `k` at mean velocity `velocity` (m/s, signed):
+/// h = k · v · |v| / (2 g₀), g₀ = [`STANDARD_GRAVITY`]. Odd in v, so reverse flow gives a
+/// negative loss.
+#[inline]
+pub fn head_loss(k: f64, velocity: f64) -> f64 {
+    k * velocity * velocity.abs() / (2.0 * STANDARD_GRAVITY)
+}
+
+/// ∂h/∂v (s) of [`head_loss`] at fixed K: k · |v| / g₀.
+#[inline]
+pub fn head_loss_dv(k: f64, velocity: f64) -> f64 {
+    k * velocity.abs() / STANDARD_GRAVITY
+}
+
+/// A minor-loss element: a method giving K, the bore K refers to, the relative spread of
+/// K and (for catalogue fittings) its name.
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+pub struct Fitting {
+    method: Method,
+    diameter: Option<f64>,
+    k_spread: f64,
+    name: Option<String>,
+}
+
+impl Fitting {
+    fn from_method(method: Method) -> Fitting {
+        Fitting {
+            method,
+            diameter: method.own_diameter(),
+            k_spread: method.default_spread(),
+            name: None,
+        }
+    }
+
+    /// A fixed resistance coefficient `value` (dimensionless, ≥ 0) on the velocity of the
+    /// adjoining pipe.
+    ///
+    /// # Errors
+    /// `k` not finite or negative.
+    pub fn k(value: f64) -> Result<Fitting> {
+        check::non_negative("k", value)?;
+        Ok(Fitting::from_method(Method::K { k: value }))
+    }
+
+    /// A resistance coefficient `value` (≥ 0) that refers to the velocity in bore
+    /// `ref_diameter` (m, > 0); at another bore b it becomes value · (b/ref_diameter)⁴.
+    ///
+    /// # Errors
+    /// `k` negative or `diameter` not positive (either not finite).
+    pub fn k_referred(value: f64, ref_diameter: f64) -> Result<Fitting> {
+        Fitting::k(value)?.with_diameter(ref_diameter)
+    }
+
+    /// An equivalent length `l_over_d` (L/D, dimensionless, ≥ 0): K = f_T · L/D with f_T
+    /// the fully rough Darcy factor of the adjoining pipe's relative roughness, floored at
+    /// clean commercial steel of the same bore (see [`method::FITTING_WALL_ROUGHNESS`];
+    /// common practice after Crane TP-410).
+    ///
+    /// # Errors
+    /// `l_over_d` not finite or negative.
+    pub fn equivalent_length(l_over_d: f64) -> Result<Fitting> {
+        check::non_negative("l_over_d", l_over_d)?;
+        Ok(Fitting::from_method(Method::EquivalentLength { l_over_d }))
+    }
+
+    /// The 2-K method (Hooper, 1981): K = k1/Re + k_inf (1 + 1/D), D the bore in inches.
+    ///
+    /// # Errors
+    /// `k1` or `k_inf` not finite or negative.
+    pub fn two_k(k1: f64, k_inf: f64) -> Result<Fitting> {
+        check::non_negative("k1", k1)?;
+        check::non_negative("k_inf", k_inf)?;
+        Ok(Fitting::from_method(Method::TwoK { k1, k_inf }))
+    }
+
+    /// The 3-K method (Darby, 1999 and 2001): K = k1/Re + k_inf (1 + k_d / D^0.3), D the
+    /// bore in inches.
+    ///
+    /// # Errors
+    /// `k1`, `k_inf` or `k_d` not finite or negative.
+    pub fn three_k(k1: f64, k_inf: f64, k_d: f64) -> Result<Fitting> {
+        check::non_negative("k1", k1)?;
+        check::non_negative("k_inf", k_inf)?;
+        check::non_negative("k_d", k_d)?;
+        Ok(Fitting::from_method(Method::ThreeK { k1, k_inf, k_d }))
+    }
+
+    /// A sudden expansion from bore `d_in` to bore `d_out` (m), Borda–Carnot:
+    /// K = (1 − (d_in/d_out)²)² on the inlet velocity, exact from the momentum balance
+    /// for uniform velocity. Its diameter is `d_in`.
+    ///
+    /// # Errors
+    /// Either bore not positive, or `d_out` not larger than `d_in`.
+    pub fn expansion(d_in: f64, d_out: f64) -> Result<Fitting> {
+        check::positive("d_in", d_in)?;
+        check::positive("d_out", d_out)?;
+        if d_out <= d_in {
+            return Err(Error::out_of_range(
+                "d_out",
+                d_out,
+                format!("an expansion's outlet must be larger than its inlet (d_in = {d_in})"),
+            ));
+        }
+        Ok(Fitting::from_method(Method::Expansion { d_in, d_out }))
+    }
+
+    /// A sudden contraction from bore `d_in` to bore `d_out` (m): K = 0.5 (1 − β²),
+    /// β = d_out/d_in, on the outlet velocity (Crane Co., Technical Paper 410, 1988,
+    /// formula for a contraction of angle 180°, from memory). Its diameter is `d_out`.
+    ///
+    /// # Errors
+    /// Either bore not positive, or `d_out` not smaller than `d_in`.
+    pub fn contraction(d_in: f64, d_out: f64) -> Result<Fitting> {
+        check::positive("d_in", d_in)?;
+        check::positive("d_out", d_out)?;
+        if d_out >= d_in {
+            return Err(Error::out_of_range(
+                "d_out",
+                d_out,
+                format!("a contraction's outlet must be smaller than its inlet (d_in = {d_in})"),
+            ));
+        }
+        Ok(Fitting::from_method(Method::Contraction { d_in, d_out }))
+    }
+
+    /// A sharp-edged entrance from a reservoir, K = 0.5 (Crane TP-410, from memory).
+    pub fn entrance_sharp() -> Fitting {
+        Fitting::from_method(Method::EntranceSharp)
+    }
+
+    /// An entrance rounded with radius r = `r_over_d` · d: K from the Crane TP-410 table
+    /// (0.5 at r/d = 0 down to 0.04 at r/d ≥ 0.15, linear in between; from memory).
+    ///
+    /// # Errors
+    /// `r_over_d` not finite or negative.
+    pub fn entrance_rounded(r_over_d: f64) -> Result<Fitting> {
+        check::non_negative("r_over_d", r_over_d)?;
+        Ok(Fitting::from_method(Method::EntranceRounded { r_over_d }))
+    }
+
+    /// An inward-projecting (re-entrant) entrance, K = 0.78 (Crane TP-410, from memory).
+    pub fn entrance_projecting() -> Fitting {
+        Fitting::from_method(Method::EntranceProjecting)
+    }
+
+    /// An exit into a large reservoir, K = 1 (the velocity head is lost; exact for a
+    /// uniform stream).
+    pub fn exit() -> Fitting {
+        Fitting::from_method(Method::Exit)
+    }
+
+    /// A smooth bend of `angle_deg` degrees (0…180) with centre-line radius
+    /// `r_over_d` times the bore (≥ 0.5), Rennels & Hudson (2012), with the fully rough
+    /// factor f_T of the adjoining pipe as for L/D fittings.
+    ///
+    /// # Errors
+    /// `angle_deg` outside 0…180, `r_over_d` below 0.5 (use a mitre bend from the
+    /// catalogue or a K), either not finite.
+    pub fn bend(angle_deg: f64, r_over_d: f64) -> Result<Fitting> {
+        check::within("angle_deg", angle_deg, 0.0, 180.0, "degrees")?;
+        check::finite("r_over_d", r_over_d)?;
+        if r_over_d < 0.5 {
+            return Err(Error::out_of_range(
+                "r_over_d",
+                r_over_d,
+                "must be at least 0.5 for a smooth bend",
+            ));
+        }
+        Ok(Fitting::from_method(Method::Bend {
+            angle_deg,
+            r_over_d,
+        }))
+    }
+
+    /// A valve of flow coefficient Cv = `value` (US gal/min of water at 60 °F per √psi):
+    /// K = [`method::CV_K_FACTOR`] · d⁴ / Cv² with d the bore (m). The loss does not
+    /// depend on the bore chosen, only K does.
+    ///
+    /// # Errors
+    /// `cv` not finite or not positive.
+    pub fn cv(value: f64) -> Result<Fitting> {
+        check::positive("cv", value)?;
+        Ok(Fitting::from_method(Method::Cv { cv: value }))
+    }
+
+    /// A valve of flow coefficient Kv = `value` (m³/h of water per √bar):
+    /// K = [`method::KV_K_FACTOR`] · d⁴ / Kv² with d the bore (m).
+    ///
+    /// # Errors
+    /// `kv` not finite or not positive.
+    pub fn kv(value: f64) -> Result<Fitting> {
+        check::positive("kv", value)?;
+        Ok(Fitting::from_method(Method::Kv { kv: value }))
+    }
+
+    /// A flanged or welded tee with all the flow passing straight through the run
+    /// (catalogue entry `tee_run_flanged`, Darby 3-K). Dividing and combining flows,
+    /// whose K depends on the flow split, are not modelled.
+    pub fn tee_run() -> Fitting {
+        catalogue::fitting_of(&catalogue::TEE_RUN)
+    }
+
+    /// A flanged or welded tee with all the flow turning through the branch (catalogue
+    /// entry `tee_branch_flanged`, Darby 3-K).
+    pub fn tee_branch() -> Fitting {
+        catalogue::fitting_of(&catalogue::TEE_BRANCH)
+    }
+
+    /// The catalogue fitting called `name` (see [`Fitting::catalogue`]).
+    ///
+    /// # Errors
+    /// [`Error::UnknownName`] listing the catalogue when `name` is not in it.
+    pub fn named(name: &str) -> Result<Fitting> {
+        catalogue::entry(name).map(catalogue::fitting_of)
+    }
+
+    /// The names of the catalogue fittings, in catalogue order.
+    pub fn catalogue() -> Vec<&'static str> {
+        catalogue_entries().iter().map(|e| e.name).collect()
+    }
+
+    /// The method that gives K.
+    pub fn method(&self) -> &Method {
+        &self.method
+    }
+
+    /// Bore (m) whose velocity K refers to; `None` = take the adjoining pipe's inside
+    /// diameter.
+    pub fn diameter(&self) -> Option<f64> {
+        self.diameter
+    }
+
+    /// The same fitting with K referring to bore `d` (m).
+    ///
+    /// # Errors
+    /// `diameter` not positive or not finite; [`Error::Invalid`] for an expansion or a
+    /// contraction, whose bore is fixed by its own geometry.
+    pub fn with_diameter(mut self, d: f64) -> Result<Fitting> {
+        check::positive("diameter", d)?;
+        if self.method.own_diameter().is_some() {
+            return Err(Error::invalid(
+                "diameter",
+                format!(
+                    "{} = {d}: an {}'s K refers to its own bore; build it with other diameters instead",
+                    self.name(),
+                    self.method.name()
+                ),
+            ));
+        }
+        self.diameter = Some(d);
+        Ok(self)
+    }
+
+    /// Relative half-width of the likely range of K (0.3 for ±30 %), read as a
+    /// rectangular distribution by the uncertainty bands.
+    pub fn k_spread(&self) -> f64 {
+        self.k_spread
+    }
+
+    /// The same fitting with another relative spread of K, 0 ≤ `spread` ≤ 1.
+    ///
+    /// # Errors
+    /// `k_spread` outside 0…1 or not finite.
+    pub fn with_k_spread(mut self, spread: f64) -> Result<Fitting> {
+        self.k_spread = check::within("k_spread", spread, 0.0, 1.0, "")?;
+        Ok(self)
+    }
+
+    /// The catalogue name, or the method's name (`"k"`, `"three_k"`, `"expansion"`…).
+    pub fn name(&self) -> String {
+        match &self.name {
+            Some(n) => n.clone(),
+            None => self.method.name().to_string(),
+        }
+    }
+
+    /// K split as k_viscous/Re + k_inertial, with the velocity and the Reynolds number
+    /// taken in `bore` (m). `pipe_rel_roughness` is ε/D of the adjoining pipe (used by
+    /// L/D fittings and bends for the fully rough factor; 0 for a smooth pipe).
+    ///
+    /// # Errors
+    /// `bore` not positive; `pipe_rel_roughness` negative, above 0.5 or not finite.
+    pub fn resistance(&self, bore: f64, pipe_rel_roughness: f64) -> Result<Resistance> {
+        check::positive("bore", bore)?;
+        check::non_negative("pipe_rel_roughness", pipe_rel_roughness)?;
+        let max = crate::friction::MAX_REL_ROUGHNESS;
+        if pipe_rel_roughness > max {
+            return Err(Error::out_of_range(
+                "pipe_rel_roughness",
+                pipe_rel_roughness,
+                format!("must not exceed {max}"),
+            ));
+        }
+        let own = self.diameter.unwrap_or(bore);
+        Ok(self
+            .method
+            .resistance_at(own, pipe_rel_roughness)?
+            .referred(own, bore))
+    }
+
+    /// K and ∂K/∂Re at Reynolds number `re` (> 0, in `bore`) and bore `bore` (m).
+    ///
+    /// # Errors
+    /// As [`Fitting::resistance`], and `re` not positive or not finite.
+    pub fn k_at(&self, re: f64, bore: f64, pipe_rel_roughness: f64) -> Result<(f64, f64)> {
+        check::positive("re", re)?;
+        let r = self.resistance(bore, pipe_rel_roughness)?;
+        Ok((r.k(re), r.dk_dre(re)))
+    }
+}

@@ -1,0 +1,263 @@
+//! The result of evaluating a line at one flow: per-element breakdown, totals, the grade
+//! line and the uncertainty bands.
+
+use super::eval::State;
+use super::{Line, Resolved};
+use crate::band::Band;
+use crate::error::{Result, check};
+use crate::fluid::Fluid;
+use crate::friction::Regime;
+use crate::units::STANDARD_GRAVITY;
+use crate::warning::Warnings;
+use serde::{Deserialize, Serialize};
+
+/// What an element is.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize)]
+pub enum ElementKind {
+    /// A straight run.
+    Pipe,
+    /// A minor loss.
+    Fitting,
+    /// An elevation change.
+    Rise,
+    /// Rated equipment.
+    Equipment,
+}
+
+impl ElementKind {
+    /// `"pipe"`, `"fitting"`, `"rise"` or `"equipment"`.
+    pub fn name(self) -> &'static str {
+        match self {
+            ElementKind::Pipe => "pipe",
+            ElementKind::Fitting => "fitting",
+            ElementKind::Rise => "rise",
+            ElementKind::Equipment => "equipment",
+        }
+    }
+}
+
+/// One element's share of the result.
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+pub struct ElementResult {
+    /// What the element is.
+    pub kind: ElementKind,
+    /// A label: the fitting's or equipment's name, "pipe" or "rise".
+    pub label: String,
+    /// Mean velocity in the element's bore, m/s (NaN for rises and rated drops).
+    pub velocity: f64,
+    /// Reynolds number in that bore (NaN where there is none).
+    pub reynolds: f64,
+    /// Flow regime (pipes).
+    pub regime: Option<Regime>,
+    /// Darcy friction factor (pipes).
+    pub friction_factor: Option<f64>,
+    /// Resistance coefficient K at this Reynolds number (fittings and fixed-K equipment).
+    pub k: Option<f64>,
+    /// Head loss, m of the flowing fluid (signed with the flow; 0 for rises).
+    pub head_loss: f64,
+    /// d(head loss)/dQ, s/m².
+    pub dhead_dflow: f64,
+    /// Elevation change, m (rises; 0 otherwise).
+    pub static_head: f64,
+    /// Static pressure at the element's outlet, Pa absolute (with an inlet pressure).
+    pub pressure_out: Option<f64>,
+    /// Warnings of this element.
+    pub warnings: Warnings,
+    /// Band of the head loss, m.
+    pub head_loss_band: Band,
+    /// Band of the friction factor (pipes).
+    pub friction_factor_band: Option<Band>,
+}
+
+/// A line evaluated at one flow.
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+pub struct LineResult {
+    /// The flow, m³/s (signed; at inlet conditions for a gas).
+    pub flow: f64,
+    /// Friction plus minor losses, m of the flowing fluid.
+    pub head_loss: f64,
+    /// ρ·g·head_loss, Pa.
+    pub pressure_loss: f64,
+    /// Sum of the rises, m.
+    pub static_head: f64,
+    /// head_loss + static_head, m.
+    pub required_head: f64,
+    /// d(required_head)/dQ, s/m².
+    pub drequired_head_dflow: f64,
+    /// Density the heads refer to, kg/m³ (the mean density for a gas).
+    pub density: f64,
+    /// Static pressure at the inlet, Pa absolute, when known.
+    pub inlet_pressure: Option<f64>,
+    /// Static pressure at the outlet, Pa absolute, when the inlet pressure is known.
+    pub outlet_pressure: Option<f64>,
+    /// Per element, in route order.
+    pub elements: Vec<ElementResult>,
+    /// Union of the elements' warnings and the line's own (gas, cavitation).
+    pub warnings: Warnings,
+    /// Band of head_loss, m.
+    pub head_loss_band: Band,
+    /// Band of pressure_loss, Pa.
+    pub pressure_loss_band: Band,
+    /// Band of required_head, m.
+    pub required_head_band: Band,
+}
+
+/// Per-source standard uncertainties of a sum of element head losses, m.
+/// `states` pairs each element's index in the line with its state.
+pub(crate) fn head_sources<'a>(
+    line: &Line,
+    states: impl IntoIterator<Item = (usize, &'a State)>,
+    fluid: &Fluid,
+) -> Vec<(String, f64)> {
+    let uo = &line.options.uncertainty;
+    let (mut model, mut rough, mut diam, mut dens, mut visc) = (0.0, 0.0, 0.0, 0.0, 0.0);
+    let mut out = Vec::new();
+    for (i, s) in states {
+        model += s.sens.model * s.model_u;
+        rough += s.sens.roughness * s.roughness_u;
+        diam += s.sens.diameter * uo.diameter;
+        if uo.fluid {
+            dens += s.sens.density * fluid.density_rel_uncertainty;
+            visc += s.sens.viscosity * fluid.viscosity_rel_uncertainty;
+        }
+        if line.own_source_enabled(i) {
+            let own = s.sens.own * s.own_u;
+            match &line.resolved[i] {
+                Resolved::Fitting { name, equipment: false, .. } => out.push((format!("K of {name} (element {i})"), own)),
+                Resolved::Fitting { name, .. } | Resolved::Drop { name, .. } => out.push((format!("{name} (element {i})"), own)),
+                _ => {}
+            }
+        }
+    }
+    out.extend([
+        ("friction model".to_string(), model),
+        ("roughness".to_string(), rough),
+        ("diameter".to_string(), diam),
+        ("density".to_string(), dens),
+        ("viscosity".to_string(), visc),
+    ]);
+    out
+}
+
+impl Line {
+    /// Evaluates the line at signed flow `flow` (m³/s; at inlet conditions for a gas) with
+    /// the inlet pressure of the options.
+    ///
+    /// # Errors
+    /// A non-finite flow; transitional flow with the refuse option; a gas whose pressure
+    /// loss exceeds 40 % of the inlet pressure.
+    pub fn evaluate(&self, fluid: &Fluid, flow: f64) -> Result<LineResult> {
+        self.evaluate_at(fluid, flow, self.options.inlet_pressure)
+    }
+
+    /// Evaluates with a given inlet static pressure (Pa absolute), or none.
+    pub fn evaluate_at(&self, fluid: &Fluid, flow: f64, inlet_pressure: Option<f64>) -> Result<LineResult> {
+        if let Some(p) = inlet_pressure {
+            check::positive("inlet_pressure", p)?;
+        }
+        let (work, q, gas_warn) = self.working_fluid(fluid, flow, inlet_pressure)?;
+        let inlet = inlet_pressure.or(if fluid.is_gas() { fluid.pressure } else { None });
+        let states = (0..self.resolved.len())
+            .map(|i| self.element_state(i, &work, q, None))
+            .collect::<Result<Vec<State>>>()?;
+        let rho_g = work.density * STANDARD_GRAVITY;
+        let dq = if flow == 0.0 { 1.0 } else { q / flow };
+        let head_loss: f64 = states.iter().map(|s| s.head_loss).sum();
+        let static_head: f64 = states.iter().map(|s| s.static_head).sum();
+        let slope: f64 = states.iter().map(|s| s.dhead_dflow).sum::<f64>() * dq;
+        let mut warnings = gas_warn;
+        // Grade line: total pressure falls by ρg(loss + rise); static = total − ½ρV².
+        let first_v = states.iter().map(|s| s.velocity).find(|v| v.is_finite()).unwrap_or(0.0);
+        let mut total = inlet.map(|p| p + 0.5 * work.density * first_v * first_v);
+        let mut last_v = first_v;
+        let mut elements = Vec::with_capacity(states.len());
+        for (i, s) in states.iter().enumerate() {
+            if s.velocity.is_finite() {
+                last_v = s.velocity;
+            }
+            total = total.map(|t| t - rho_g * (s.head_loss + s.static_head));
+            let pressure_out = total.map(|t| t - 0.5 * work.density * last_v * last_v);
+            let mut w = s.warnings;
+            if let (Some(p), Some(pv)) = (pressure_out, work.vapour_pressure) {
+                if p < pv {
+                    w.insert(Warnings::BELOW_VAPOUR_PRESSURE);
+                }
+            }
+            warnings |= w;
+            elements.push(self.element_result(i, s, &work, pressure_out, w));
+        }
+        let sources = head_sources(self, states.iter().enumerate(), &work);
+        let head_loss_band = Band::from_sources(head_loss, &sources);
+        let pressure_sources: Vec<(String, f64)> = sources
+            .iter()
+            .map(|(n, u)| {
+                let extra = if n == "density" && self.options.uncertainty.fluid {
+                    head_loss * work.density_rel_uncertainty
+                } else {
+                    0.0
+                };
+                (n.clone(), (u + extra) * rho_g)
+            })
+            .collect();
+        Ok(LineResult {
+            flow,
+            head_loss,
+            pressure_loss: rho_g * head_loss,
+            static_head,
+            required_head: head_loss + static_head,
+            drequired_head_dflow: slope,
+            density: work.density,
+            inlet_pressure: inlet,
+            outlet_pressure: elements.last().and_then(|e| e.pressure_out),
+            warnings,
+            pressure_loss_band: Band::from_sources(rho_g * head_loss, &pressure_sources),
+            required_head_band: head_loss_band.shifted(static_head),
+            head_loss_band,
+            elements,
+        })
+    }
+
+    fn element_result(&self, i: usize, s: &State, fluid: &Fluid, pressure_out: Option<f64>, warnings: Warnings) -> ElementResult {
+        let (kind, label) = match &self.resolved[i] {
+            Resolved::Pipe { .. } => (ElementKind::Pipe, "pipe".to_string()),
+            Resolved::Fitting { name, equipment, .. } => {
+                (if *equipment { ElementKind::Equipment } else { ElementKind::Fitting }, name.clone())
+            }
+            Resolved::Rise(_) => (ElementKind::Rise, "rise".to_string()),
+            Resolved::Drop { name, .. } => (ElementKind::Equipment, name.clone()),
+        };
+        let mut sources = head_sources(self, [(i, s)], fluid);
+        sources.retain(|(_, u)| *u != 0.0);
+        let friction_factor_band = s.friction_factor.map(|f| {
+            let uo = &self.options.uncertainty;
+            let (f_re, f_rr) = s.f_sens;
+            let fl = if uo.fluid { 1.0 } else { 0.0 };
+            Band::from_sources(
+                f,
+                &[
+                    ("friction model".to_string(), f * s.model_u),
+                    ("roughness".to_string(), f_rr * s.roughness_u),
+                    ("diameter".to_string(), -(f_re + f_rr) * uo.diameter),
+                    ("density".to_string(), f_re * fluid.density_rel_uncertainty * fl),
+                    ("viscosity".to_string(), -f_re * fluid.viscosity_rel_uncertainty * fl),
+                ],
+            )
+        });
+        ElementResult {
+            kind,
+            label,
+            velocity: s.velocity,
+            reynolds: s.reynolds,
+            regime: s.regime,
+            friction_factor: s.friction_factor,
+            k: s.k,
+            head_loss: s.head_loss,
+            dhead_dflow: s.dhead_dflow,
+            static_head: s.static_head,
+            pressure_out,
+            warnings,
+            head_loss_band: Band::from_sources(s.head_loss, &sources),
+            friction_factor_band,
+        }
+    }
+}

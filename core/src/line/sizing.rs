@@ -1,0 +1,150 @@
+//! Sizing: the smallest bore that keeps a line within a limit at a given flow.
+//!
+//! Every round pipe of the line takes the same trial inside diameter (fittings that
+//! follow their pipe's bore follow it); the pressure loss falls strictly as the bore
+//! grows, so the smallest admissible bore is a bracketed root. The standard-size answer
+//! walks up the chosen pipe table from there, and also names the size that still meets
+//! the limit at the unfavourable end of the uncertainty band.
+
+use super::Line;
+use super::solve::safeguarded_newton;
+use crate::band::Band;
+use crate::error::{Error, Result, check};
+use crate::fluid::Fluid;
+use crate::sizes::{self, PipeSize, PipeTable};
+use serde::{Deserialize, Serialize};
+
+/// Smallest and largest trial bores, m.
+const D_MIN: f64 = 1e-4;
+const D_MAX: f64 = 20.0;
+
+/// What must not be exceeded.
+#[derive(Debug, Clone, Copy, PartialEq, Serialize, Deserialize)]
+pub enum Limit {
+    /// Largest allowed pressure loss of the line (friction + minor, without rises), Pa.
+    PressureLoss(f64),
+    /// Largest allowed mean velocity in the round pipes, m/s.
+    Velocity(f64),
+}
+
+/// A standard size checked against the limit.
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+pub struct SizeChoice {
+    /// The standard pipe.
+    pub size: PipeSize,
+    /// Velocity in it, m/s.
+    pub velocity: f64,
+    /// Pressure loss of the line with it, Pa.
+    pub pressure_loss: f64,
+    /// Band of that pressure loss, Pa.
+    pub pressure_loss_band: Band,
+}
+
+/// The answer of [`Line::size`].
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+pub struct Sizing {
+    /// The smallest inside diameter that meets the limit at the nominal values, m.
+    pub min_inside_diameter: f64,
+    /// The smallest standard size that meets it at the nominal values.
+    pub standard: Option<SizeChoice>,
+    /// The smallest standard size that still meets it at the band's unfavourable end
+    /// (the high end of the pressure-loss band; for a velocity limit, the same as
+    /// `standard` unless a diameter tolerance is set).
+    pub standard_at_band: Option<SizeChoice>,
+}
+
+impl Line {
+    /// Sizes the line's round pipes for `flow` (m³/s, ≠ 0) under `limit`, optionally to a
+    /// standard table and schedule (e.g. `(PipeTable::Pvc, "40")`).
+    ///
+    /// # Errors
+    /// Zero or non-finite flow; a non-positive limit; a line without round pipes; a limit
+    /// no bore up to 20 m meets; no standard size large enough.
+    pub fn size(&self, fluid: &Fluid, flow: f64, limit: Limit, table: Option<(PipeTable, &str)>) -> Result<Sizing> {
+        check::finite("flow", flow)?;
+        if flow == 0.0 {
+            return Err(Error::out_of_range("flow", flow, "must not be zero for sizing"));
+        }
+        if !self.elements.iter().any(|e| matches!(e, super::Element::Pipe(p) if p.section.is_circular())) {
+            return Err(Error::invalid("line", "has no round pipe to size"));
+        }
+        let q = flow.abs();
+        let min_d = match limit {
+            Limit::Velocity(v) => {
+                check::positive("velocity", v)?;
+                (4.0 * q / (std::f64::consts::PI * v)).sqrt()
+            }
+            Limit::PressureLoss(dp) => {
+                check::positive("pressure_loss", dp)?;
+                let excess = |ln_d: f64| -> Result<(f64, f64)> {
+                    let d = ln_d.exp();
+                    let r = self.with_uniform_diameter(d)?.evaluate(fluid, q)?;
+                    // Decreasing in d: negate so the solver sees an increasing function.
+                    Ok((dp - r.pressure_loss, f64::NAN))
+                };
+                let (lo, hi) = (D_MIN.ln(), D_MAX.ln());
+                if excess(hi)?.0 < 0.0 {
+                    return Err(Error::no_solution(format!(
+                        "even a {D_MAX} m bore loses more than {dp} Pa at {q} m³/s (the fixed-bore elements alone may exceed it)"
+                    )));
+                }
+                if excess(lo)?.0 >= 0.0 {
+                    D_MIN
+                } else {
+                    safeguarded_newton(excess, lo, hi)?.0.exp()
+                }
+            }
+        };
+        let (standard, standard_at_band) = match table {
+            None => (None, None),
+            Some((t, schedule)) => {
+                let nominal = self.walk_table(fluid, q, limit, t, schedule, min_d, false)?;
+                let banded = self.walk_table(fluid, q, limit, t, schedule, nominal.size.inside_diameter, true)?;
+                (Some(nominal), Some(banded))
+            }
+        };
+        Ok(Sizing {
+            min_inside_diameter: min_d,
+            standard,
+            standard_at_band,
+        })
+    }
+
+    /// The smallest size of the table at least `from` that meets the limit (at the band's
+    /// high end when `banded`).
+    #[allow(clippy::too_many_arguments)]
+    fn walk_table(
+        &self,
+        fluid: &Fluid,
+        q: f64,
+        limit: Limit,
+        table: PipeTable,
+        schedule: &str,
+        from: f64,
+        banded: bool,
+    ) -> Result<SizeChoice> {
+        let mut want = from;
+        loop {
+            let size = sizes::smallest_at_least(table, schedule, want)?;
+            let d = size.inside_diameter;
+            let r = self.with_uniform_diameter(d)?.evaluate(fluid, q)?;
+            let velocity = q / (0.25 * std::f64::consts::PI * d * d);
+            let tol = self.options.uncertainty.diameter;
+            let ok = match limit {
+                Limit::PressureLoss(dp) => (if banded { r.pressure_loss_band.high } else { r.pressure_loss }) <= dp,
+                // A bore at the low end of its tolerance (k = 2) runs faster.
+                Limit::Velocity(v) => velocity * if banded { (1.0 - 2.0 * tol).powi(-2) } else { 1.0 } <= v,
+            };
+            if ok {
+                return Ok(SizeChoice {
+                    size,
+                    velocity,
+                    pressure_loss: r.pressure_loss,
+                    pressure_loss_band: r.pressure_loss_band,
+                });
+            }
+            // Next size up: anything strictly larger than this one's bore.
+            want = d * (1.0 + 1e-9);
+        }
+    }
+}

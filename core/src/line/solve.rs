@@ -1,0 +1,279 @@
+//! Inverse questions on a line: the flow a head delivers and the pump operating point.
+//!
+//! Both are one-dimensional roots of monotone functions (the required head rises strictly
+//! with flow whenever the line has any loss), solved by a bracket that is kept at every
+//! step and Newton steps on the analytic derivative, falling back to bisection whenever a
+//! Newton step would leave the bracket. Convergence is therefore guaranteed, and the
+//! iteration count is bounded.
+
+use super::Line;
+use crate::band::Band;
+use crate::error::{Error, Result, check};
+use crate::fluid::Fluid;
+use serde::{Deserialize, Serialize};
+
+/// Iteration cap of the safeguarded Newton solver (bisection alone would need ~2100 steps
+/// to exhaust a double's range; Newton with bracketing finishes in well under 100).
+const MAX_ITER: usize = 400;
+
+/// The flow a line passes under a given head.
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+pub struct FlowSolution {
+    /// Signed flow, m³/s (negative when the head is below the static head).
+    pub flow: f64,
+    /// The head it was solved for, m.
+    pub head: f64,
+    /// d(required head)/dQ at the solution, s/m².
+    pub drequired_head_dflow: f64,
+    /// Band of the flow, m³/s (first order through the line's sensitivities).
+    pub flow_band: Band,
+    /// Solver iterations used.
+    pub iterations: usize,
+}
+
+/// Finds `x` in the bracket `[lo, hi]` with `g(x) = 0`, where `g` returns (value, slope)
+/// and `g(lo) ≤ 0 ≤ g(hi)` (g increasing). Returns (x, iterations).
+pub(crate) fn safeguarded_newton(
+    mut g: impl FnMut(f64) -> Result<(f64, f64)>,
+    mut lo: f64,
+    mut hi: f64,
+) -> Result<(f64, usize)> {
+    let mut x = 0.5 * (lo + hi);
+    for it in 1..=MAX_ITER {
+        let (v, d) = g(x)?;
+        if v == 0.0 {
+            return Ok((x, it));
+        }
+        if v < 0.0 {
+            lo = x;
+        } else {
+            hi = x;
+        }
+        let newton = x - v / d;
+        let next = if d > 0.0 && newton > lo && newton < hi {
+            newton
+        } else {
+            0.5 * (lo + hi)
+        };
+        if (next - x).abs() <= 2.0 * f64::EPSILON * x.abs() || hi - lo <= 2.0 * f64::EPSILON * x.abs().max(f64::MIN_POSITIVE) {
+            return Ok((next, it));
+        }
+        x = next;
+    }
+    Ok((x, MAX_ITER))
+}
+
+impl Line {
+    /// The signed flow (m³/s) for which the required head equals `head` (m): gravity
+    /// feed, tank to tank. A head below the static head gives reverse flow.
+    ///
+    /// # Errors
+    /// A line without any loss; a head that needs reverse flow through a check or foot
+    /// valve; a head no flow up to 1e6 m³/s reaches.
+    pub fn flow_for_head(&self, fluid: &Fluid, head: f64) -> Result<FlowSolution> {
+        check::finite("head", head)?;
+        if !self.has_resistance() {
+            return Err(Error::invalid("line", "has no element with a loss, so no flow balances a head"));
+        }
+        let h0 = self.static_head();
+        let sign = if head > h0 {
+            1.0
+        } else if head < h0 {
+            -1.0
+        } else {
+            0.0
+        };
+        if sign < 0.0 && self.blocks_reverse_flow() {
+            return Err(Error::no_solution(format!(
+                "head {head} m is below the static head {h0} m, which would reverse the flow through a check valve"
+            )));
+        }
+        let g = |q: f64| self.required_head(fluid, q).map(|(h, d)| (h - head, d));
+        let (flow, iterations) = if sign == 0.0 {
+            (0.0, 0)
+        } else {
+            // Grow a bracket from a microlitre per second by factors of 4.
+            let mut far = 1e-6 * sign;
+            let mut n = 0;
+            while sign * g(far)?.0 < 0.0 {
+                far *= 4.0;
+                n += 1;
+                if far.abs() > 1e6 {
+                    return Err(Error::no_solution(format!("no flow up to 1e6 m³/s reaches head {head} m")));
+                }
+            }
+            let (lo, hi) = if sign > 0.0 { (0.0, far) } else { (far, 0.0) };
+            let (q, it) = safeguarded_newton(g, lo, hi)?;
+            (q, it + n)
+        };
+        let r = self.evaluate(fluid, flow)?;
+        let slope = r.drequired_head_dflow;
+        let sources = super::result::head_sources(self, states_of(self, fluid, &r)?.iter().enumerate(), fluid);
+        let flow_band = Band::from_sources(flow, &divide(&sources, slope));
+        Ok(FlowSolution {
+            flow,
+            head,
+            drequired_head_dflow: slope,
+            flow_band,
+            iterations,
+        })
+    }
+}
+
+/// Element states at a result's flow (for the band sensitivities).
+fn states_of(line: &Line, fluid: &Fluid, r: &super::LineResult) -> Result<Vec<super::eval::State>> {
+    let (work, q, _) = line.working_fluid(fluid, r.flow, r.inlet_pressure)?;
+    (0..line.resolved.len()).map(|i| line.element_state(i, &work, q, None)).collect()
+}
+
+fn divide(sources: &[(String, f64)], by: f64) -> Vec<(String, f64)> {
+    sources.iter().map(|(n, u)| (n.clone(), if by != 0.0 { u / by } else { 0.0 })).collect()
+}
+
+/// A pump's head against flow, interpolated by a monotone cubic (Fritsch and Carlson,
+/// 1980, SIAM J. Numer. Anal. 17(2) 238–246), so the interpolant never rises where the
+/// data falls.
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+pub struct PumpCurve {
+    flows: Vec<f64>,
+    heads: Vec<f64>,
+    slopes: Vec<f64>,
+}
+
+impl PumpCurve {
+    /// A curve through (flow m³/s, head m) points: at least 3, flows ≥ 0 strictly
+    /// increasing, heads non-increasing with flow.
+    pub fn new(flows: &[f64], heads: &[f64]) -> Result<PumpCurve> {
+        if flows.len() != heads.len() {
+            return Err(Error::invalid("heads", format!("has {} values but flows has {}", heads.len(), flows.len())));
+        }
+        if flows.len() < 3 {
+            return Err(Error::invalid("flows", format!("a pump curve needs at least 3 points, got {}", flows.len())));
+        }
+        for (i, (&q, &h)) in flows.iter().zip(heads).enumerate() {
+            check::non_negative("flows", q).map_err(|e| e.at_index(i))?;
+            check::finite("heads", h).map_err(|e| e.at_index(i))?;
+            if i > 0 && q <= flows[i - 1] {
+                return Err(Error::out_of_range("flows", q, format!("must increase strictly (point {i} is not above point {})", i - 1)).at_index(i));
+            }
+            if i > 0 && h > heads[i - 1] {
+                return Err(Error::out_of_range("heads", h, format!("must not rise with flow (point {i} is above point {}): the curve is not monotonic", i - 1)).at_index(i));
+            }
+        }
+        let n = flows.len();
+        let delta: Vec<f64> = (0..n - 1).map(|i| (heads[i + 1] - heads[i]) / (flows[i + 1] - flows[i])).collect();
+        let mut m = vec![0.0; n];
+        m[0] = delta[0];
+        m[n - 1] = delta[n - 2];
+        for i in 1..n - 1 {
+            m[i] = if delta[i - 1] * delta[i] <= 0.0 { 0.0 } else { 0.5 * (delta[i - 1] + delta[i]) };
+        }
+        // Fritsch–Carlson limiter: keep (α, β) inside the circle of radius 3.
+        for i in 0..n - 1 {
+            if delta[i] == 0.0 {
+                m[i] = 0.0;
+                m[i + 1] = 0.0;
+                continue;
+            }
+            let a = m[i] / delta[i];
+            let b = m[i + 1] / delta[i];
+            let r = a.hypot(b);
+            if r > 3.0 {
+                let t = 3.0 / r;
+                m[i] = t * a * delta[i];
+                m[i + 1] = t * b * delta[i];
+            }
+        }
+        Ok(PumpCurve {
+            flows: flows.to_vec(),
+            heads: heads.to_vec(),
+            slopes: m,
+        })
+    }
+
+    /// Flow range of the data, m³/s.
+    pub fn range(&self) -> (f64, f64) {
+        (self.flows[0], self.flows[self.flows.len() - 1])
+    }
+
+    /// Head (m) and dHead/dQ (s/m²) at `flow` inside the data range.
+    ///
+    /// # Errors
+    /// A flow outside the range of the points (no extrapolation).
+    pub fn head(&self, flow: f64) -> Result<(f64, f64)> {
+        let (lo, hi) = self.range();
+        check::within("flow", flow, lo, hi, "m³/s")?;
+        let i = match self.flows.iter().position(|&q| q > flow) {
+            Some(0) => 0,
+            Some(j) => j - 1,
+            None => self.flows.len() - 2,
+        };
+        let (x0, x1) = (self.flows[i], self.flows[i + 1]);
+        let hgap = x1 - x0;
+        let t = (flow - x0) / hgap;
+        let (y0, y1, m0, m1) = (self.heads[i], self.heads[i + 1], self.slopes[i], self.slopes[i + 1]);
+        let (t2, t3) = (t * t, t * t * t);
+        let h00 = 2.0 * t3 - 3.0 * t2 + 1.0;
+        let h10 = t3 - 2.0 * t2 + t;
+        let h01 = -2.0 * t3 + 3.0 * t2;
+        let h11 = t3 - t2;
+        let value = h00 * y0 + h10 * hgap * m0 + h01 * y1 + h11 * hgap * m1;
+        let d = ((6.0 * t2 - 6.0 * t) * y0 + (3.0 * t2 - 4.0 * t + 1.0) * hgap * m0 + (-6.0 * t2 + 6.0 * t) * y1 + (3.0 * t2 - 2.0 * t) * hgap * m1) / hgap;
+        Ok((value, d))
+    }
+}
+
+/// Where a pump curve meets a line's system curve.
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+pub struct OperatingPoint {
+    /// Flow, m³/s.
+    pub flow: f64,
+    /// Head, m.
+    pub head: f64,
+    /// Band of the flow, m³/s.
+    pub flow_band: Band,
+    /// Band of the head, m.
+    pub head_band: Band,
+}
+
+impl Line {
+    /// The operating point of `pump` on this line.
+    ///
+    /// # Errors
+    /// [`Error::NoSolution`] when the curves do not cross inside the pump curve's range.
+    pub fn operating_point(&self, fluid: &Fluid, pump: &PumpCurve) -> Result<OperatingPoint> {
+        let (lo, hi) = pump.range();
+        let gap = |q: f64| -> Result<(f64, f64)> {
+            let (hs, ds) = self.required_head(fluid, q)?;
+            let (hp, dp) = pump.head(q)?;
+            Ok((hs - hp, ds - dp))
+        };
+        let (g_lo, _) = gap(lo)?;
+        let (g_hi, _) = gap(hi)?;
+        if g_lo > 0.0 {
+            return Err(Error::no_solution(format!(
+                "the curves do not cross: at the pump curve's smallest flow ({lo} m³/s) the line needs {:.4} m more head than the pump gives",
+                g_lo
+            )));
+        }
+        if g_hi < 0.0 {
+            return Err(Error::no_solution(format!(
+                "the curves do not cross: at the pump curve's largest flow ({hi} m³/s) the pump still gives {:.4} m more head than the line needs",
+                -g_hi
+            )));
+        }
+        let (flow, _) = if g_lo == 0.0 { (lo, 0) } else { safeguarded_newton(gap, lo, hi)? };
+        let (head, dpump) = pump.head(flow)?;
+        let r = self.evaluate(fluid, flow)?;
+        let slope = r.drequired_head_dflow - dpump;
+        let sources = super::result::head_sources(self, states_of(self, fluid, &r)?.iter().enumerate(), fluid);
+        let q_sources = divide(&sources, slope);
+        let h_sources: Vec<(String, f64)> = q_sources.iter().map(|(n, u)| (n.clone(), u * dpump)).collect();
+        Ok(OperatingPoint {
+            flow,
+            head,
+            flow_band: Band::from_sources(flow, &q_sources),
+            head_band: Band::from_sources(head, &h_sources),
+        })
+    }
+}

@@ -1,0 +1,236 @@
+//! One straight run of duct: the Darcy–Weisbach head loss with its derivative.
+//!
+//! ```text
+//! h = f · (L / D_h) · V |V| / (2 g),   V = Q / A
+//! ```
+//!
+//! `f` comes from [`crate::friction::darcy_factor`] with the section's exact laminar
+//! constant. Turbulent flow in a non-circular section uses the hydraulic diameter or, on
+//! request, the laminar-equivalent diameter of Jones (1976): Re and ε/D are then taken on
+//! `D_t` and the laminar constant is scaled by `D_t/D_h`, so laminar flow still gives the
+//! exact `C/Re_h`. The head loss is an odd function of the signed flow `Q` with a
+//! continuous derivative through zero (laminar near zero) and through the transition (the
+//! friction blend is C¹).
+
+use crate::error::{Result, check};
+use crate::fluid::Fluid;
+use crate::friction::{self, Correlation, Friction, Options, Regime};
+use crate::section::{Section, TurbulentDiameter};
+use crate::units::STANDARD_GRAVITY;
+use crate::warning::Warnings;
+use serde::{Deserialize, Serialize};
+
+/// A straight run: a cross-section, a length and an absolute wall roughness.
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+pub struct Pipe {
+    /// The cross-section.
+    pub section: Section,
+    /// Length along the axis, m.
+    pub length: f64,
+    /// Absolute wall roughness ε, m.
+    pub roughness: f64,
+}
+
+/// The state of flow in a pipe at one flow rate.
+#[derive(Debug, Clone, Copy, PartialEq, Serialize, Deserialize)]
+pub struct PipeFlow {
+    /// Mean velocity Q/A, m/s (signed with the flow).
+    pub velocity: f64,
+    /// Reynolds number on the hydraulic diameter, |V| D_h ρ/μ.
+    pub reynolds: f64,
+    /// Darcy friction factor (NaN at zero flow, where it is undefined).
+    pub friction_factor: f64,
+    /// Flow regime.
+    pub regime: Regime,
+    /// Head loss, m of the flowing fluid (signed with the flow).
+    pub head_loss: f64,
+    /// ∂(head loss)/∂Q, s/m².
+    pub dhead_dflow: f64,
+    /// ∂(head loss)/∂f at fixed flow, m (for uncertainty bands).
+    pub dhead_dfactor: f64,
+    /// ∂f/∂(ε/D_t) (for uncertainty bands).
+    pub df_drel_roughness: f64,
+    /// ∂f/∂Re_t (for uncertainty bands).
+    pub df_dre: f64,
+    /// Warnings of the friction correlation and the section.
+    pub warnings: Warnings,
+}
+
+impl Pipe {
+    /// A run of the given section, length (m, > 0) and absolute roughness (m, ≥ 0, less
+    /// than half the hydraulic diameter).
+    ///
+    /// # Errors
+    /// `length` or `roughness` not finite, length ≤ 0, roughness < 0 or ≥ D_h/2.
+    pub fn new(section: Section, length: f64, roughness: f64) -> Result<Pipe> {
+        check::positive("length", length)?;
+        check::non_negative("roughness", roughness)?;
+        let dh = section.hydraulic_diameter();
+        if roughness / dh > friction::MAX_REL_ROUGHNESS {
+            return Err(crate::Error::out_of_range(
+                "roughness",
+                roughness,
+                format!("must be below half the hydraulic diameter ({dh} m)"),
+            ));
+        }
+        Ok(Pipe {
+            section,
+            length,
+            roughness,
+        })
+    }
+
+    /// A round pipe of inside diameter `diameter` (m).
+    pub fn circular(diameter: f64, length: f64, roughness: f64) -> Result<Pipe> {
+        Pipe::new(Section::circle(diameter)?, length, roughness)
+    }
+
+    /// The diameter a fitting beside this pipe refers its K to: the hydraulic diameter
+    /// (the inside diameter of a round pipe), m.
+    pub fn bore(&self) -> f64 {
+        self.section.hydraulic_diameter()
+    }
+
+    /// Relative roughness ε/D_h.
+    pub fn rel_roughness(&self) -> f64 {
+        self.roughness / self.section.hydraulic_diameter()
+    }
+
+    /// The same run with a round section of another diameter (for sizing).
+    pub fn with_diameter(&self, diameter: f64) -> Result<Pipe> {
+        Pipe::new(Section::circle(diameter)?, self.length, self.roughness)
+    }
+
+    /// Head loss and its derivative at signed volumetric flow `flow` (m³/s).
+    ///
+    /// `opts` chooses the correlation and the regime limits; its laminar constant is
+    /// replaced by the section's. `diameter_mode` chooses the turbulent diameter.
+    ///
+    /// # Errors
+    /// Only a non-finite flow, or a transitional flow with the refuse option.
+    pub fn flow_state(
+        &self,
+        fluid: &Fluid,
+        flow: f64,
+        opts: &Options,
+        diameter_mode: TurbulentDiameter,
+    ) -> Result<PipeFlow> {
+        check::finite("flow", flow)?;
+        let area = self.section.area();
+        let dh = self.section.hydraulic_diameter();
+        let dt = self.section.turbulent_diameter(diameter_mode);
+        let scale = dt / dh;
+        let nu = fluid.viscosity / fluid.density;
+        let velocity = flow / area;
+        let speed = velocity.abs();
+        let re_h = speed * dh / nu;
+        let re_t = re_h * scale;
+        let c = self.section.laminar_constant();
+        // h = f L/D_h V|V|/2g; with f = C/Re_h in laminar flow this is linear in V.
+        let g2 = 2.0 * STANDARD_GRAVITY;
+        let geom = self.length / (dh * g2);
+        let mut warnings = self.section.warnings();
+        let laminar_direct = re_t < opts.laminar_limit && opts.correlation != Correlation::Churchill;
+        let fr: Friction = if laminar_direct || re_t == 0.0 {
+            // Exact laminar law, written so that zero flow is regular.
+            let lam_head_per_speed = c * nu / dh * geom; // h / V
+            return Ok(PipeFlow {
+                velocity,
+                reynolds: re_h,
+                friction_factor: if re_h > 0.0 { c / re_h } else { f64::NAN },
+                regime: Regime::Laminar,
+                head_loss: lam_head_per_speed * velocity,
+                dhead_dflow: lam_head_per_speed / area,
+                dhead_dfactor: geom * velocity * speed,
+                df_drel_roughness: 0.0,
+                df_dre: if re_h > 0.0 { -c / (re_h * re_h) / scale } else { 0.0 },
+                warnings,
+            });
+        } else {
+            let o = Options {
+                laminar_constant: c * scale,
+                ..*opts
+            };
+            friction::darcy_factor(re_t, self.roughness / dt, &o)?
+        };
+        warnings |= fr.warnings;
+        let head_loss = fr.f * geom * velocity * speed;
+        // dh/dQ = geom |V| (Re df/dRe + 2f) / A (derivation in the module docs).
+        let dhead_dflow = geom * speed * (re_t * fr.df_dre + 2.0 * fr.f) / area;
+        Ok(PipeFlow {
+            velocity,
+            reynolds: re_h,
+            friction_factor: fr.f,
+            regime: fr.regime,
+            head_loss,
+            dhead_dflow,
+            dhead_dfactor: geom * velocity * speed,
+            df_drel_roughness: fr.df_drel_roughness,
+            df_dre: fr.df_dre,
+            warnings,
+        })
+    }
+
+    /// Head loss (m) and its derivative with respect to flow (s/m²) with default options:
+    /// the call a simulator's Newton loop makes.
+    pub fn head_loss(&self, fluid: &Fluid, flow: f64) -> Result<(f64, f64)> {
+        let s = self.flow_state(fluid, flow, &Options::default(), TurbulentDiameter::Hydraulic)?;
+        Ok((s.head_loss, s.dhead_dflow))
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use approx::assert_relative_eq;
+
+    fn water() -> Fluid {
+        Fluid::new(998.0, 1.0e-3).unwrap()
+    }
+
+    #[test]
+    fn laminar_matches_hagen_poiseuille() {
+        // Exact analytical solution: h = 128 μ L Q / (π ρ g D⁴).
+        let p = Pipe::circular(0.01, 10.0, 0.0).unwrap();
+        let q = 1e-6;
+        let (h, dh) = p.head_loss(&water(), q).unwrap();
+        let exact = 128.0 * 1e-3 * 10.0 * q / (std::f64::consts::PI * 998.0 * STANDARD_GRAVITY * 1e-8);
+        assert_relative_eq!(h, exact, max_relative = 1e-14);
+        assert_relative_eq!(dh, exact / q, max_relative = 1e-14);
+        assert_eq!(p.head_loss(&water(), 0.0).unwrap().0, 0.0);
+        assert_relative_eq!(p.head_loss(&water(), 0.0).unwrap().1, exact / q, max_relative = 1e-14);
+    }
+
+    #[test]
+    fn odd_in_flow() {
+        // Exact property: reversing the flow reverses the loss.
+        let p = Pipe::circular(0.05, 30.0, 4.5e-5).unwrap();
+        for q in [1e-5, 1e-4, 1e-3, 1e-2] {
+            let (a, da) = p.head_loss(&water(), q).unwrap();
+            let (b, db) = p.head_loss(&water(), -q).unwrap();
+            assert_eq!(a, -b);
+            assert_eq!(da, db);
+        }
+    }
+
+    #[test]
+    fn derivative_matches_central_difference() {
+        // Reference: central finite differences.
+        let p = Pipe::circular(0.05, 30.0, 4.5e-5).unwrap();
+        for q in [2e-5, 1e-4, 1.5e-4, 2.2e-4, 1e-3, 1e-2, -3e-3] {
+            let (_, d) = p.head_loss(&water(), q).unwrap();
+            let h = 1e-7 * q.abs();
+            let fd = (p.head_loss(&water(), q + h).unwrap().0 - p.head_loss(&water(), q - h).unwrap().0) / (2.0 * h);
+            assert_relative_eq!(d, fd, max_relative = 1e-6);
+        }
+    }
+
+    #[test]
+    fn bad_inputs() {
+        assert!(Pipe::circular(0.05, -1.0, 0.0).unwrap_err().to_string().starts_with("length = -1"));
+        assert!(Pipe::circular(0.05, 1.0, -1e-3).unwrap_err().to_string().starts_with("roughness = -0.001"));
+        assert!(Pipe::circular(0.05, 1.0, 0.03).is_err());
+        let p = Pipe::circular(0.05, 1.0, 0.0).unwrap();
+        assert!(p.head_loss(&water(), f64::NAN).unwrap_err().to_string().starts_with("flow = NaN"));
+    }
+}
