@@ -267,3 +267,63 @@ fn bad_inputs_are_clear_errors() {
     // Negative length and roughness are refused when the pipe is built.
     assert!(Pipe::circular(0.05, -3.0, 0.0).is_err());
 }
+
+#[test]
+fn sizing_matches_mpmath_and_standard_sizes_meet_the_limit() {
+    // Reference: tests/reference/line/sizing.csv (mpmath bisection on the bore).
+    use hydrograde::line::Limit;
+    use hydrograde::sizes::PipeTable;
+    let line = Line::new(vec![
+        Element::Pipe(Pipe::circular(0.05, 80.0, 4.5e-5).unwrap()),
+        Element::Fitting(Fitting::k(3.0).unwrap()),
+    ])
+    .unwrap();
+    let f = fluid();
+    for r in common::read_csv("line/sizing.csv") {
+        let s = line
+            .size(
+                &f,
+                4e-3,
+                Limit::PressureLoss(r[0]),
+                Some((PipeTable::Steel, "40")),
+            )
+            .unwrap();
+        assert!(
+            common::rel_err(s.min_inside_diameter, r[1]) < 1e-10,
+            "{} vs {}",
+            s.min_inside_diameter,
+            r[1]
+        );
+        let std = s.standard.unwrap();
+        assert!(std.size.inside_diameter >= s.min_inside_diameter && std.pressure_loss <= r[0]);
+        let banded = s.standard_at_band.unwrap();
+        assert!(banded.size.inside_diameter >= std.size.inside_diameter);
+        assert!(banded.pressure_loss_band.high <= r[0]);
+    }
+    // Velocity limit: exact closed form d = √(4Q/(πV)).
+    let s = line.size(&f, 4e-3, Limit::Velocity(1.5), None).unwrap();
+    assert!(
+        common::rel_err(
+            s.min_inside_diameter,
+            (4.0 * 4e-3 / (std::f64::consts::PI * 1.5)).sqrt()
+        ) < 1e-15
+    );
+    // Bad input: zero flow, a negative limit, an impossible limit.
+    assert!(
+        line.size(&f, 0.0, Limit::Velocity(1.5), None)
+            .unwrap_err()
+            .to_string()
+            .contains("must not be zero")
+    );
+    assert!(line.size(&f, 1e-3, Limit::Velocity(-1.0), None).is_err());
+    let fixed = Line::new(vec![
+        Element::Pipe(Pipe::circular(0.05, 1.0, 0.0).unwrap()),
+        Element::Fitting(Fitting::k_referred(5000.0, 0.01).unwrap()),
+    ])
+    .unwrap();
+    assert!(
+        fixed
+            .size(&f, 1e-2, Limit::PressureLoss(1e3), None)
+            .is_err()
+    );
+}

@@ -19,12 +19,12 @@ mod eval;
 pub(crate) use eval::Perturbation;
 mod parallel;
 mod result;
-//TMP mod sizing;
+mod sizing;
 mod solve;
 
 pub use parallel::{Split, split_flow};
 pub use result::{ElementKind, ElementResult, LineResult};
-//TMP pub use sizing::{Limit, Sizing, SizeChoice};
+pub use sizing::{Limit, SizeChoice, Sizing};
 pub use solve::{FlowSolution, OperatingPoint, PumpCurve};
 
 use crate::band::UncertaintyOptions;

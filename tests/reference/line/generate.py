@@ -17,6 +17,7 @@ Outputs (CSV, 25 significant digits):
   flow_for_head.csv  head, flow                      (mpmath.findroot)
   operating.csv      flow, head of the pump curve below (Fritsch-Carlson cubic)
   split.csv          total, q_a, q_b, head for the two parallel branches below
+  sizing.csv         pressure-loss limit, smallest bore of the sizing line below
 
 Run from the repository root:  .venv/bin/python tests/reference/line/generate.py
 """
@@ -159,6 +160,26 @@ def main():
         qa = mp.findroot(lambda x: branch_a(x) - branch_b(t - x), t / 2)
         rows.append((t, qa, t - qa, branch_a(qa)))
     write("split.csv", ["total", "q_a", "q_b", "head"], rows)
+    sizing()
+
+
+def sizing_loss(d, q):
+    """Pipe 80 m, eps 4.5e-5, then a K = 3 valve on the same bore: pressure loss, Pa."""
+    return RHO * G * (pipe(q, d, mp.mpf(80), mp.mpf("4.5e-5")) + k_loss(q, mp.mpf(3), d))
+
+
+def sizing():
+    q = mp.mpf("4e-3")
+    rows = []
+    for limit in ["5e4", "2e5"]:
+        lim = mp.mpf(limit)
+        lo, hi = mp.mpf("0.02"), mp.mpf("0.2")  # plain bisection: the loss falls as d grows
+        for _ in range(110):
+            mid = (lo + hi) / 2
+            lo, hi = (mid, hi) if sizing_loss(mid, q) > lim else (lo, mid)
+        d = (lo + hi) / 2
+        rows.append((lim, d))
+    write("sizing.csv", ["pressure_loss_limit", "min_inside_diameter"], rows)
 
 
 if __name__ == "__main__":
