@@ -135,6 +135,40 @@ pub(crate) fn solve(re: f64, rel_roughness: f64) -> Solution {
     }
 }
 
+/// Points solved side by side by [`solve_lanes`].
+pub(crate) const LANES: usize = 4;
+
+/// The friction factors of [`LANES`] points at once, bit for bit those of [`solve`].
+///
+/// The solver is one long chain of dependent operations (two logarithms, five divisions),
+/// so one point at a time leaves most of the processor idle; interleaving independent
+/// points step by step lets their chains overlap, about halving the time per point.
+#[inline]
+pub(crate) fn solve_lanes(re: &[f64; LANES], rel_roughness: &[f64; LANES]) -> [f64; LANES] {
+    let mut a = [0.0; LANES];
+    let mut beta = [0.0; LANES];
+    let mut s = [0.0; LANES];
+    let mut f = [0.0; LANES];
+    for k in 0..LANES {
+        a[k] = rel_roughness[k] * (1.0 / 3.7);
+        beta[k] = 2.51 * TWO_OVER_LN10 * (1.0 / re[k]);
+    }
+    for k in 0..LANES {
+        s[k] = -rough_ln(a[k] + beta[k] * 8.0);
+    }
+    for k in 0..LANES {
+        s[k] = -rough_ln(a[k] + beta[k] * s[k]);
+    }
+    for k in 0..LANES {
+        s[k] += step(s[k], a[k], beta[k]);
+    }
+    for k in 0..LANES {
+        let (delta, _) = final_step(s[k], a[k], beta[k]);
+        f[k] = factor(s[k], delta);
+    }
+    f
+}
+
 #[cfg(test)]
 mod tests {
     use super::*;
@@ -169,6 +203,27 @@ mod tests {
             }
         }
         assert!(worst < 1e-14, "worst relative residual {worst}");
+    }
+
+    #[test]
+    fn lanes_match_the_single_solver_bit_for_bit() {
+        // Exact check: the interleaved kernel performs the same operations per point.
+        for i in 0..500 {
+            let re: [f64; LANES] =
+                std::array::from_fn(|k| 1e3 * 10f64.powf(((i * LANES + k) % 997) as f64 / 99.7));
+            let rr: [f64; LANES] =
+                std::array::from_fn(|k| 0.5 * 10f64.powf(-(((i + 3 * k) % 13) as f64)));
+            let f = solve_lanes(&re, &rr);
+            for k in 0..LANES {
+                assert_eq!(
+                    f[k].to_bits(),
+                    solve(re[k], rr[k]).f.to_bits(),
+                    "{} {}",
+                    re[k],
+                    rr[k]
+                );
+            }
+        }
     }
 
     #[test]
