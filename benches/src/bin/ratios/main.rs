@@ -109,7 +109,7 @@ fn line_rows(t: &mut Table, exact: f64) {
     t.push(Row::ratio(
         "20-element line system curve, 1e5 flows, 1 thread, per flow",
         one,
-        "exact Colebrook",
+        "Colebrook (per point call)",
         one / exact,
         Some(("<= 30", one / exact <= 30.0)),
     ));
@@ -117,39 +117,55 @@ fn line_rows(t: &mut Table, exact: f64) {
     t.push(Row::ratio(
         "same, all threads, per flow",
         all,
-        "exact Colebrook",
+        "Colebrook (per point call)",
         all / exact,
         None,
     ));
-    let single = |f: &dyn Fn()| per_item(best_of_n(REPS, || for _ in 0..100 { f() }), 100);
+    let single = |f: &dyn Fn()| {
+        per_item(
+            best_of_n(REPS, || {
+                for _ in 0..100 {
+                    f()
+                }
+            }),
+            100,
+        )
+    };
     let with_bands = single(&|| {
         let _ = black_box(line.evaluate(&water, black_box(0.012)));
     });
     t.push(Row::ratio(
         "20-element line evaluate (with bands), one flow",
         with_bands,
-        "exact Colebrook",
+        "Colebrook (per point call)",
         with_bands / exact,
         None,
     ));
     let solve = single(&|| {
         let _ = black_box(line.flow_for_head(&water, black_box(25.0)));
     });
-    let iterations = line
-        .flow_for_head(&water, 25.0)
-        .map_or(0, |s| s.iterations);
+    let iterations = line.flow_for_head(&water, 25.0).map_or(0, |s| s.iterations);
     t.push(Row::ratio(
         &format!("20-element line flow_for_head ({iterations} iterations)"),
         solve,
-        "exact Colebrook",
+        "Colebrook (per point call)",
         solve / exact,
         None,
     ));
 }
 
+/// The 1-, 5- and 15-minute load averages (Linux), printed with the table: other work
+/// on the machine shows up in the timings, above all in the multi-thread speed-up.
+fn load_average() -> String {
+    std::fs::read_to_string("/proc/loadavg")
+        .map(|s| s.split_whitespace().take(3).collect::<Vec<_>>().join(" "))
+        .unwrap_or_else(|_| "unknown".to_owned())
+}
+
 fn main() {
     let capi_path = capi::path_from_args();
     let threads = rayon::current_num_threads();
+    let load_before = load_average();
     let (re, rr) = turbulent_points(N, 2026);
     let mut out = vec![0.0; N];
     let mut t = Table::new();
@@ -168,30 +184,25 @@ fn main() {
 
     let exact = scalar_loop(&re, &rr, &Options::default(), &mut out);
     t.push(Row::ratio(
-        "exact Colebrook darcy_factor, 1 thread, per element",
+        "exact Colebrook, darcy_factor called per point, 1 thread",
         exact,
         "ln",
         exact / ln,
         Some(("<= 4", exact / ln <= 4.0)),
     ));
-    for corr in Correlation::ALL.into_iter().skip(1) {
-        let ns = scalar_loop(&re, &rr, &Options::with_correlation(corr), &mut out);
-        t.push(Row::ratio(
-            &format!("{} darcy_factor, 1 thread, per element", corr.name()),
-            ns,
-            "ln",
-            ns / ln,
-            None,
-        ));
-    }
-
     let one = batch_in_pool(1, &re, &rr, &mut out);
-    let all = batch_in_pool(0, &re, &rr, &mut out);
-    t.push(Row::time("darcy_factor_batch, 1e6, 1 thread", one));
     t.push(Row::ratio(
-        &format!("darcy_factor_batch, 1e6, {threads} threads (speed-up)"),
+        "exact Colebrook, darcy_factor_batch 1e6, 1 thread",
+        one,
+        "ln",
+        one / ln,
+        Some(("<= 4", one / ln <= 4.0)),
+    ));
+    let all = batch_in_pool(0, &re, &rr, &mut out);
+    t.push(Row::ratio(
+        &format!("exact Colebrook, darcy_factor_batch 1e6, {threads} threads"),
         all,
-        "1 thread",
+        "1 thread (speed-up)",
         one / all,
         Some(("≥ 1.7 on 2 cores", one / all >= 1.7)),
     ));
@@ -201,7 +212,9 @@ fn main() {
             Ok(c) => {
                 let ns = per_item(best_of(|| c.run(&re, &rr, &mut out)), N);
                 t.push(Row::ratio(
-                    &format!("hg_darcy_factor_batch (C ABI), 1e6, {threads} threads"),
+                    &format!(
+                        "exact Colebrook, hg_darcy_factor_batch (C ABI) 1e6, {threads} threads"
+                    ),
                     ns,
                     "Rust batch",
                     ns / all,
@@ -212,11 +225,24 @@ fn main() {
         }
     }
 
+    for corr in Correlation::ALL.into_iter().skip(1) {
+        let ns = scalar_loop(&re, &rr, &Options::with_correlation(corr), &mut out);
+        t.push(Row::ratio(
+            &format!("{}, darcy_factor called per point, 1 thread", corr.name()),
+            ns,
+            "ln",
+            ns / ln,
+            None,
+        ));
+    }
+
     line_rows(&mut t, exact);
 
     println!(
         "hydrograde speed ratios: {N} turbulent points (Re 4e3..1e8, eps/D 1e-6..0.05, \
-         log-uniform), best of {REPS}, {threads} rayon threads"
+         log-uniform), best of {REPS}, {threads} rayon threads; load average {load_before} \
+         before, {} after",
+        load_average()
     );
     t.print();
 }
