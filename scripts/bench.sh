@@ -1,10 +1,11 @@
 #!/usr/bin/env bash
 # hydrograde's speed figures, one command (`./run.sh bench` calls this):
 #
-#   scripts/bench.sh            criterion suites, the Rust ratio table, the Python comparison
+#   scripts/bench.sh            all of the below, in this order
 #   scripts/bench.sh ratios     only the Rust ratio table (about 30 s once built)
 #   scripts/bench.sh compare    only the Python comparison
 #   scripts/bench.sh criterion  only the criterion suites
+#   scripts/bench.sh profile    only the callgrind instruction counts (scripts/profile.sh)
 #
 # The ratio table and the comparison each run in one process, so their ratios compare
 # like with like on a busy machine; the targets and whether they are met are printed at
@@ -57,10 +58,20 @@ compare() {
   .venv/bin/python benches/compare.py
 }
 
+profile() {
+  if command -v valgrind >/dev/null; then
+    say "instructions per point (callgrind; reproducible on a busy machine)"
+    bash scripts/profile.sh
+  else
+    say "valgrind not installed: instruction counts skipped"
+  fi
+}
+
 case "$what" in
-  all) criterion; ratios; compare ;;
+  all) criterion; ratios; compare; profile ;;
+  profile) profile ;;
   criterion) criterion ;;
   ratios) ratios ;;
   compare) compare ;;
-  *) echo "usage: scripts/bench.sh [all|criterion|ratios|compare]" >&2; exit 2 ;;
+  *) echo "usage: scripts/bench.sh [all|criterion|ratios|compare|profile]" >&2; exit 2 ;;
 esac

@@ -1,6 +1,6 @@
 #!/usr/bin/env bash
 # Instructions per point of hydrograde's friction paths, counted by callgrind.
-#   scripts/profile.sh [workload ...]     (default: ln and five correlations)
+#   scripts/profile.sh [workload ...]     (default: ln, Colebrook scalar and batch, four explicit correlations)
 # Point generation (workload `none`) is subtracted.
 # Each workload runs twice (10k and 20k points); the difference / 10k is the cost of one
 # point with start-up and input generation cancelled. Counts are reproducible on a busy
@@ -19,7 +19,7 @@ per_point() { echo $(( ($(count "$1" 20000) - $(count "$1" 10000)) / 10000 )); }
 base=$(per_point none)
 ln=$(per_point ln)
 printf '| workload | instructions per point | vs ln |\n|---|---:|---:|\n'
-for w in ${@:-ln colebrook haaland swamee_jain serghides blasius}; do
+for w in ${@:-ln colebrook batch haaland swamee_jain serghides blasius}; do
   n=$(( $(per_point "$w") - base ))
   printf '| %s | %d | %s |\n' "$w" "$n" "$(awk -v a="$n" -v b="$((ln - base))" 'BEGIN{printf "%.2f", a/b}')"
 done

@@ -45,42 +45,54 @@ fn per_item(d: Duration, items: usize) -> f64 {
     d.as_secs_f64() * 1e9 / items as f64
 }
 
-/// Per-element nanoseconds of a scalar friction loop on the calling thread.
-fn scalar_loop(re: &[f64], rr: &[f64], opts: &Options, out: &mut [f64]) -> f64 {
-    let d = best_of(|| {
-        for ((o, &r), &e) in out.iter_mut().zip(re).zip(rr) {
-            *o = darcy_factor(black_box(r), black_box(e), opts).map_or(f64::NAN, |fr| fr.f);
+/// Runs the workloads in turns, `reps` rounds after one warm-up round, and returns the
+/// fastest time of each. Taking turns exposes every workload to the same disturbances
+/// from other work on the machine, so their ratios stay meaningful when it is busy.
+fn race(reps: usize, work: &mut [&mut dyn FnMut()]) -> Vec<Duration> {
+    let mut best = vec![Duration::MAX; work.len()];
+    for round in 0..=reps {
+        for (b, w) in best.iter_mut().zip(work.iter_mut()) {
+            let t = Instant::now();
+            w();
+            let d = t.elapsed();
+            if round > 0 {
+                *b = (*b).min(d);
+            }
         }
-        black_box(&mut *out);
-    });
-    per_item(d, re.len())
+    }
+    best
 }
 
-/// Per-element nanoseconds of `darcy_factor_batch` in a rayon pool of `threads` threads
-/// (0: rayon's default, one per core).
-fn batch_in_pool(threads: usize, re: &[f64], rr: &[f64], out: &mut [f64]) -> f64 {
-    let pool = match rayon::ThreadPoolBuilder::new().num_threads(threads).build() {
-        Ok(p) => p,
-        Err(e) => {
-            eprintln!("cannot build a rayon pool of {threads} threads: {e}");
-            return f64::NAN;
+/// A scalar friction loop on the calling thread: `darcy_factor` called once per point.
+fn scalar_loop(re: &[f64], rr: &[f64], opts: &Options, out: &mut [f64]) {
+    for ((o, &r), &e) in out.iter_mut().zip(re).zip(rr) {
+        *o = darcy_factor(black_box(r), black_box(e), opts).map_or(f64::NAN, |fr| fr.f);
+    }
+    black_box(out);
+}
+
+/// A rayon pool of `threads` threads (0: rayon's default, one per core).
+fn pool(threads: usize) -> Option<rayon::ThreadPool> {
+    rayon::ThreadPoolBuilder::new()
+        .num_threads(threads)
+        .build()
+        .map_err(|e| eprintln!("cannot build a rayon pool of {threads} threads: {e}"))
+        .ok()
+}
+
+/// `darcy_factor_batch` (exact Colebrook) inside `pool`.
+fn batch_in(pool: &rayon::ThreadPool, re: &[f64], rr: &[f64], out: &mut [f64]) {
+    pool.install(|| {
+        if let Err(e) = darcy_factor_batch(re, rr, &Options::default(), out) {
+            eprintln!("batch failed: {e}");
         }
-    };
-    let opts = Options::default();
-    let d = pool.install(|| {
-        best_of(|| {
-            if let Err(e) = darcy_factor_batch(re, rr, &opts, out) {
-                eprintln!("batch failed: {e}");
-            }
-            black_box(&mut *out);
-        })
     });
-    per_item(d, re.len())
+    black_box(out);
 }
 
 /// Rows of the 20-element line: its system curve over 1e5 flows on one thread and on all,
 /// against one exact Colebrook factor per flow, and single evaluations for scale.
-fn line_rows(t: &mut Table, exact: f64) {
+fn line_rows(t: &mut Table, exact: f64, single: &rayon::ThreadPool, multi: &rayon::ThreadPool) {
     let (line, water) = match (line20(), water()) {
         (Ok(l), Ok(w)) => (l, w),
         (Err(e), _) | (_, Err(e)) => {
@@ -89,23 +101,18 @@ fn line_rows(t: &mut Table, exact: f64) {
         }
     };
     let q = flows(CURVE_POINTS);
-    let curve = |threads: usize| {
-        let pool = rayon::ThreadPoolBuilder::new().num_threads(threads).build();
-        pool.map(|p| {
-            p.install(|| {
-                per_item(
-                    best_of_n(3, || {
-                        if let Err(e) = line.system_curve(&water, black_box(&q)) {
-                            eprintln!("system curve failed: {e}");
-                        }
-                    }),
-                    CURVE_POINTS,
-                )
-            })
+    let curve = |p: &rayon::ThreadPool| {
+        p.install(|| {
+            if let Err(e) = line.system_curve(&water, black_box(&q)) {
+                eprintln!("system curve failed: {e}");
+            }
         })
-        .unwrap_or(f64::NAN)
     };
-    let one = curve(1);
+    let times = race(3, &mut [&mut || curve(single), &mut || curve(multi)]);
+    let (one, all) = (
+        per_item(times[0], CURVE_POINTS),
+        per_item(times[1], CURVE_POINTS),
+    );
     t.push(Row::ratio(
         "20-element line system curve, 1e5 flows, 1 thread, per flow",
         one,
@@ -113,9 +120,8 @@ fn line_rows(t: &mut Table, exact: f64) {
         one / exact,
         Some(("<= 30", one / exact <= 30.0)),
     ));
-    let all = curve(0);
     t.push(Row::ratio(
-        "same, all threads, per flow",
+        &format!("same, {} threads, per flow", multi.current_num_threads()),
         all,
         "Colebrook (per point call)",
         all / exact,
@@ -163,26 +169,51 @@ fn load_average() -> String {
 }
 
 fn main() {
-    let capi_path = capi::path_from_args();
+    let capi = capi::path_from_args().and_then(|p| {
+        capi::Batch::open(&p)
+            .map_err(|e| eprintln!("C ABI not timed: {e}"))
+            .ok()
+    });
     let threads = rayon::current_num_threads();
     let load_before = load_average();
     let (re, rr) = turbulent_points(N, 2026);
-    let mut out = vec![0.0; N];
+    let (Some(single), Some(multi)) = (pool(1), pool(0)) else {
+        return;
+    };
     let mut t = Table::new();
 
+    // The head-to-head friction workloads, timed in turns.
+    let mut bufs = vec![vec![0.0; N]; 5];
+    let [b_ln, b_scalar, b_one, b_all, b_c] = &mut bufs[..] else {
+        return;
+    };
     // The cost floor: one natural logarithm per element, same loop shape and memory traffic.
-    let ln = per_item(
-        best_of(|| {
-            for (o, &r) in out.iter_mut().zip(&re) {
-                *o = black_box(r).ln();
-            }
-            black_box(&mut out);
-        }),
-        N,
-    );
+    let mut ln_loop = || {
+        for (o, &r) in b_ln.iter_mut().zip(&re) {
+            *o = black_box(r).ln();
+        }
+        black_box(&mut *b_ln);
+    };
+    let opts = Options::default();
+    let mut scalar = || scalar_loop(&re, &rr, &opts, b_scalar);
+    let mut one = || batch_in(&single, &re, &rr, b_one);
+    let mut all = || batch_in(&multi, &re, &rr, b_all);
+    let mut c_batch = || {
+        if let Some(c) = &capi {
+            c.run(&re, &rr, b_c);
+        }
+    };
+    let times: Vec<f64> = race(
+        REPS,
+        &mut [&mut ln_loop, &mut scalar, &mut one, &mut all, &mut c_batch],
+    )
+    .into_iter()
+    .map(|d| per_item(d, N))
+    .collect();
+    let [ln, exact, one, all, c] = times[..] else {
+        return;
+    };
     t.push(Row::time("ln (f64::ln), per element", ln));
-
-    let exact = scalar_loop(&re, &rr, &Options::default(), &mut out);
     t.push(Row::ratio(
         "exact Colebrook, darcy_factor called per point, 1 thread",
         exact,
@@ -190,7 +221,6 @@ fn main() {
         exact / ln,
         Some(("<= 4", exact / ln <= 4.0)),
     ));
-    let one = batch_in_pool(1, &re, &rr, &mut out);
     t.push(Row::ratio(
         "exact Colebrook, darcy_factor_batch 1e6, 1 thread",
         one,
@@ -198,7 +228,6 @@ fn main() {
         one / ln,
         Some(("<= 4", one / ln <= 4.0)),
     ));
-    let all = batch_in_pool(0, &re, &rr, &mut out);
     t.push(Row::ratio(
         &format!("exact Colebrook, darcy_factor_batch 1e6, {threads} threads"),
         all,
@@ -206,27 +235,19 @@ fn main() {
         one / all,
         Some(("≥ 1.7 on 2 cores", one / all >= 1.7)),
     ));
-
-    if let Some(path) = capi_path {
-        match capi::Batch::open(&path) {
-            Ok(c) => {
-                let ns = per_item(best_of(|| c.run(&re, &rr, &mut out)), N);
-                t.push(Row::ratio(
-                    &format!(
-                        "exact Colebrook, hg_darcy_factor_batch (C ABI) 1e6, {threads} threads"
-                    ),
-                    ns,
-                    "Rust batch",
-                    ns / all,
-                    Some(("≤ 1.1 (as fast)", ns / all <= 1.1)),
-                ));
-            }
-            Err(e) => eprintln!("C ABI not timed: {e}"),
-        }
+    if capi.is_some() {
+        t.push(Row::ratio(
+            &format!("exact Colebrook, hg_darcy_factor_batch (C ABI) 1e6, {threads} threads"),
+            c,
+            "Rust batch",
+            c / all,
+            Some(("≤ 1.1 (as fast)", c / all <= 1.1)),
+        ));
     }
 
     for corr in Correlation::ALL.into_iter().skip(1) {
-        let ns = scalar_loop(&re, &rr, &Options::with_correlation(corr), &mut out);
+        let o = Options::with_correlation(corr);
+        let ns = per_item(best_of(|| scalar_loop(&re, &rr, &o, b_scalar)), N);
         t.push(Row::ratio(
             &format!("{}, darcy_factor called per point, 1 thread", corr.name()),
             ns,
@@ -236,12 +257,12 @@ fn main() {
         ));
     }
 
-    line_rows(&mut t, exact);
+    line_rows(&mut t, exact, &single, &multi);
 
     println!(
         "hydrograde speed ratios: {N} turbulent points (Re 4e3..1e8, eps/D 1e-6..0.05, \
-         log-uniform), best of {REPS}, {threads} rayon threads; load average {load_before} \
-         before, {} after",
+         log-uniform), best of {REPS} taken in turns, {threads} rayon threads; load average \
+         {load_before} before, {} after",
         load_average()
     );
     t.print();
