@@ -8,7 +8,14 @@
 //! constant. Turbulent flow in a non-circular section uses the hydraulic diameter or, on
 //! request, the laminar-equivalent diameter of Jones (1976): Re and ε/D are then taken on
 //! `D_t` and the laminar constant is scaled by `D_t/D_h`, so laminar flow still gives the
-//! exact `C/Re_h`. The head loss is an odd function of the signed flow `Q` with a
+//! exact `C/Re_h`. Its flow derivative follows from `Re ∝ |Q|`:
+//!
+//! ```text
+//! dh/dQ = L |V| (Re_t ∂f/∂Re_t + 2 f) / (2 g D_h A)
+//! ```
+//!
+//! which tends to the Hagen–Poiseuille slope `C ν L / (2 g D_h² A)` as `Q → 0`.
+//! The head loss is an odd function of the signed flow `Q` with a
 //! continuous derivative through zero (laminar near zero) and through the transition (the
 //! friction blend is C¹).
 
@@ -132,7 +139,7 @@ impl Pipe {
         let mut warnings = self.section.warnings();
         let laminar_direct =
             re_t < opts.laminar_limit && opts.correlation != Correlation::Churchill;
-        let fr: Friction = if laminar_direct || re_t == 0.0 {
+        if laminar_direct || re_t == 0.0 {
             // Exact laminar law, written so that zero flow is regular.
             let lam_head_per_speed = c * nu / dh * geom; // h / V
             return Ok(PipeFlow {
@@ -151,13 +158,12 @@ impl Pipe {
                 },
                 warnings,
             });
-        } else {
-            let o = Options {
-                laminar_constant: c * scale,
-                ..*opts
-            };
-            friction::darcy_factor(re_t, self.roughness / dt, &o)?
+        }
+        let o = Options {
+            laminar_constant: c * scale,
+            ..*opts
         };
+        let fr: Friction = friction::darcy_factor(re_t, self.roughness / dt, &o)?;
         warnings |= fr.warnings;
         let head_loss = fr.f * geom * velocity * speed;
         // dh/dQ = geom |V| (Re df/dRe + 2f) / A (derivation in the module docs).
