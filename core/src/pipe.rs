@@ -36,6 +36,10 @@ pub struct Pipe {
     pub length: f64,
     /// Absolute wall roughness ε, m.
     pub roughness: f64,
+    /// Likely range (low, high) of the roughness, m, when known (from the material
+    /// catalogue); the uncertainty bands read it as a rectangular distribution.
+    #[serde(default)]
+    pub roughness_range: Option<(f64, f64)>,
 }
 
 /// The state of flow in a pipe at one flow rate.
@@ -84,7 +88,20 @@ impl Pipe {
             section,
             length,
             roughness,
+            roughness_range: None,
         })
+    }
+
+    /// A run of a catalogue wall material (see [`crate::roughness::catalogue`]): its
+    /// typical roughness, with the material's low–high range for the bands.
+    ///
+    /// # Errors
+    /// An unknown material name; the checks of [`Pipe::new`].
+    pub fn of_material(section: Section, length: f64, material: &str) -> Result<Pipe> {
+        let m = crate::roughness::material(material)?;
+        let mut p = Pipe::new(section, length, m.typical)?;
+        p.roughness_range = Some((m.low, m.high));
+        Ok(p)
     }
 
     /// A round pipe of inside diameter `diameter` (m).
@@ -105,7 +122,9 @@ impl Pipe {
 
     /// The same run with a round section of another diameter (for sizing).
     pub fn with_diameter(&self, diameter: f64) -> Result<Pipe> {
-        Pipe::new(Section::circle(diameter)?, self.length, self.roughness)
+        let mut p = Pipe::new(Section::circle(diameter)?, self.length, self.roughness)?;
+        p.roughness_range = self.roughness_range;
+        Ok(p)
     }
 
     /// Head loss and its derivative at signed volumetric flow `flow` (m³/s).

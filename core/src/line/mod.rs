@@ -374,7 +374,7 @@ fn resolve(
         out.push(match e {
             Element::Pipe(p) => Resolved::Pipe {
                 pipe: p.clone(),
-                roughness_u: match ranges[i] {
+                roughness_u: match ranges[i].or(p.roughness_range) {
                     Some((lo, hi)) if p.roughness > 0.0 => (hi - lo) / 12f64.sqrt() / p.roughness,
                     Some(_) => 0.0,
                     None => options.uncertainty.roughness_default,
