@@ -42,6 +42,17 @@ pub struct Pipe {
     pub roughness_range: Option<(f64, f64)>,
 }
 
+/// A section's geometry, worked out once: area (m²), hydraulic and turbulent diameters
+/// (m), laminar constant and the section's warnings.
+#[derive(Debug, Clone, Copy, PartialEq, Serialize, Deserialize)]
+pub(crate) struct Geometry {
+    pub area: f64,
+    pub dh: f64,
+    pub dt: f64,
+    pub c: f64,
+    pub warnings: Warnings,
+}
+
 /// The state of flow in a pipe at one flow rate.
 #[derive(Debug, Clone, Copy, PartialEq, Serialize, Deserialize)]
 pub struct PipeFlow {
@@ -141,21 +152,41 @@ impl Pipe {
         opts: &Options,
         diameter_mode: TurbulentDiameter,
     ) -> Result<PipeFlow> {
+        self.flow_state_in(&self.geometry(diameter_mode), fluid, flow, opts)
+    }
+
+    /// The section's geometry for a turbulent-diameter mode, worked out once (the
+    /// rectangle's laminar constant is a series) so that repeated evaluations skip it.
+    pub(crate) fn geometry(&self, diameter_mode: TurbulentDiameter) -> Geometry {
+        Geometry {
+            area: self.section.area(),
+            dh: self.section.hydraulic_diameter(),
+            dt: self.section.turbulent_diameter(diameter_mode),
+            c: self.section.laminar_constant(),
+            warnings: self.section.warnings(),
+        }
+    }
+
+    /// [`Pipe::flow_state`] with the geometry already worked out.
+    pub(crate) fn flow_state_in(
+        &self,
+        g: &Geometry,
+        fluid: &Fluid,
+        flow: f64,
+        opts: &Options,
+    ) -> Result<PipeFlow> {
         check::finite("flow", flow)?;
-        let area = self.section.area();
-        let dh = self.section.hydraulic_diameter();
-        let dt = self.section.turbulent_diameter(diameter_mode);
+        let (area, dh, dt, c) = (g.area, g.dh, g.dt, g.c);
         let scale = dt / dh;
         let nu = fluid.viscosity / fluid.density;
         let velocity = flow / area;
         let speed = velocity.abs();
         let re_h = speed * dh / nu;
         let re_t = re_h * scale;
-        let c = self.section.laminar_constant();
         // h = f L/D_h V|V|/2g; with f = C/Re_h in laminar flow this is linear in V.
         let g2 = 2.0 * STANDARD_GRAVITY;
         let geom = self.length / (dh * g2);
-        let mut warnings = self.section.warnings();
+        let mut warnings = g.warnings;
         let laminar_direct =
             re_t < opts.laminar_limit && opts.correlation != Correlation::Churchill;
         if laminar_direct || re_t == 0.0 {
