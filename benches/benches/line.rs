@@ -54,7 +54,8 @@ fn system_curve(c: &mut Criterion) {
     };
     let q = flows(100_000);
     let mut g = c.benchmark_group("line20_system_curve");
-    g.sample_size(10);
+    g.sample_size(10)
+        .measurement_time(std::time::Duration::from_secs(3));
     g.bench_function("1e5_flows", |b| b.iter(|| line.system_curve(&w, &q)));
     g.finish();
 }
