@@ -6,8 +6,12 @@
 
 mod arrays;
 mod errors;
+mod fitting;
+mod fluid;
 mod friction;
+mod section;
 mod state;
+mod units;
 
 use hydrograde::warning::Warnings;
 use pyo3::prelude::*;
@@ -26,5 +30,23 @@ fn _native(m: &Bound<'_, PyModule>) -> PyResult<()> {
     m.add_function(wrap_pyfunction!(friction::correlations, m)?)?;
     m.add_function(wrap_pyfunction!(friction::correlation_validity, m)?)?;
     m.add_class::<friction::PyFriction>()?;
+
+    // fluid
+    m.add_class::<fluid::PyFluid>()?;
+    m.add_function(wrap_pyfunction!(fluid::water_density, m)?)?;
+    m.add_function(wrap_pyfunction!(fluid::water_viscosity, m)?)?;
+    m.add_function(wrap_pyfunction!(fluid::water_vapour_pressure, m)?)?;
+    m.add_function(wrap_pyfunction!(fluid::water_saturation_temperature, m)?)?;
+
+    // fitting
+    m.add_class::<fitting::PyFitting>()?;
+
+    // section
+    m.add_class::<section::PySection>()?;
+
+    // units
+    m.add_function(wrap_pyfunction!(units::convert, m)?)?;
+    m.add_function(wrap_pyfunction!(units::convert_head, m)?)?;
+    m.add_function(wrap_pyfunction!(units::unit_names, m)?)?;
     Ok(())
 }

@@ -12,7 +12,20 @@ import hydrograde as hg
 
 def objects():
     """One instance of every pickleable class of the package."""
-    return [hg.friction(3000.0, 1e-4), hg.friction(1e6, 0.0, "blasius")]
+    return [
+        hg.friction(3000.0, 1e-4),
+        hg.friction(1e6, 0.0, "blasius"),
+        hg.Fluid.water(293.15),
+        hg.Fluid.air(300.0, 2e5),
+        hg.Fluid(870.0, 0.03).with_uncertainty(0.01, 0.05).with_vapour_pressure(500.0),
+        hg.Section.circle(0.1),
+        hg.Section.rectangle(0.3, 0.1),
+        hg.Section.custom(0.01, 0.5, 70.0),
+        hg.Fitting.k(0.9, diameter=0.05),
+        hg.Fitting.three_k(800.0, 0.14, 4.0),
+        hg.Fitting.expansion(0.05, 0.1),
+        hg.Fitting.named(hg.Fitting.catalogue()[0]["name"]),
+    ]
 
 
 @pytest.mark.parametrize("protocol", range(2, pickle.HIGHEST_PROTOCOL + 1))

@@ -45,7 +45,7 @@ def style() -> Iterator[None]:
     import matplotlib as mpl
     from cycler import cycler
 
-    rc = dict(STYLE, **{"axes.prop_cycle": cycler(color=PALETTE)})
+    rc: Any = dict(STYLE, **{"axes.prop_cycle": cycler(color=PALETTE)})
     with mpl.rc_context(rc):
         yield
 
