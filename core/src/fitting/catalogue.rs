@@ -30,6 +30,8 @@ pub struct CatalogueEntry {
     pub k_spread: f64,
     /// Where the constants come from.
     pub source: &'static str,
+    /// True for check valves and foot valves, which stop reverse flow.
+    pub blocks_reverse_flow: bool,
 }
 
 const DARBY: &str = "Darby (2001) 3-K table, from memory";
@@ -51,6 +53,7 @@ const fn three_k(
         method: Method::ThreeK { k1, k_inf, k_d },
         k_spread,
         source: DARBY,
+        blocks_reverse_flow: false,
     }
 }
 
@@ -66,6 +69,7 @@ const fn two_k(
         method: Method::TwoK { k1, k_inf },
         k_spread: 0.35,
         source: HOOPER,
+        blocks_reverse_flow: false,
     }
 }
 
@@ -76,6 +80,7 @@ const fn l_over_d(name: &'static str, description: &'static str, l_over_d: f64) 
         method: Method::EquivalentLength { l_over_d },
         k_spread: 0.4,
         source: CRANE,
+        blocks_reverse_flow: false,
     }
 }
 
@@ -86,6 +91,7 @@ const fn fixed(name: &'static str, description: &'static str, k: f64) -> Catalog
         method: Method::K { k },
         k_spread: 0.5,
         source: PRACTICE,
+        blocks_reverse_flow: false,
     }
 }
 
@@ -335,34 +341,34 @@ static CATALOGUE: [CatalogueEntry; 39] = [
         4.9,
         VALVE,
     ),
-    three_k(
+    non_return(three_k(
         "swing_check_valve",
         "swing check valve, fully open",
         1500.0,
         0.46,
         4.0,
         VALVE,
-    ),
-    three_k(
+    )),
+    non_return(three_k(
         "lift_check_valve",
         "lift check valve, fully open",
         2000.0,
         2.85,
         3.8,
         VALVE,
-    ),
+    )),
     two_k(
         "butterfly_valve",
         "butterfly valve, fully open",
         800.0,
         0.25,
     ),
-    two_k(
+    non_return(two_k(
         "tilting_disc_check_valve",
         "tilting-disc check valve, fully open",
         1000.0,
         0.50,
-    ),
+    )),
     two_k(
         "gate_valve_reduced_bore",
         "gate, ball or plug valve, reduced bore β = 0.8",
@@ -375,27 +381,38 @@ static CATALOGUE: [CatalogueEntry; 39] = [
         1000.0,
         2.0,
     ),
-    l_over_d(
+    non_return(l_over_d(
         "foot_valve_poppet",
         "foot valve with strainer, poppet disc",
         420.0,
-    ),
-    l_over_d(
+    )),
+    non_return(l_over_d(
         "foot_valve_hinged",
         "foot valve with strainer, hinged disc",
         75.0,
-    ),
+    )),
     fixed("y_strainer", "Y strainer, clean screen", 3.0),
     fixed("basket_strainer", "basket strainer, clean basket", 1.5),
 ];
+
+/// An entry that stops reverse flow (check and foot valves).
+const fn non_return(e: CatalogueEntry) -> CatalogueEntry {
+    CatalogueEntry {
+        blocks_reverse_flow: true,
+        ..e
+    }
+}
 
 /// Every catalogue entry with its method, spread and source.
 pub fn catalogue_entries() -> &'static [CatalogueEntry] {
     &CATALOGUE
 }
 
-/// The entry called `name`.
-pub(crate) fn entry(name: &str) -> Result<&'static CatalogueEntry> {
+/// The entry called `name`, with its method, spread and source.
+///
+/// # Errors
+/// [`Error::UnknownName`] listing the catalogue when `name` is not in it.
+pub fn entry(name: &str) -> Result<&'static CatalogueEntry> {
     CATALOGUE.iter().find(|e| e.name == name).ok_or_else(|| {
         let names: Vec<&str> = CATALOGUE.iter().map(|e| e.name).collect();
         Error::unknown_name("fitting", name, &names)

@@ -158,6 +158,27 @@ impl Method {
         }
     }
 
+    /// The published source of the method, for reports.
+    pub fn source(&self) -> &'static str {
+        match self {
+            Method::K { .. } => "given resistance coefficient",
+            Method::EquivalentLength { .. } => {
+                "equivalent length with the fully rough factor (Crane TP-410, 1988, practice)"
+            }
+            Method::TwoK { .. } => "2-K method (Hooper, 1981)",
+            Method::ThreeK { .. } => "3-K method (Darby, 1999, 2001)",
+            Method::Expansion { .. } => "Borda–Carnot (exact momentum balance)",
+            Method::Contraction { .. } => "Crane TP-410 (1988), sudden contraction, from memory",
+            Method::EntranceSharp | Method::EntranceRounded { .. } | Method::EntranceProjecting => {
+                "Crane TP-410 (1988) entrance data, from memory"
+            }
+            Method::Exit => "Borda–Carnot with an infinite outlet (exact)",
+            Method::Bend { .. } => "Rennels & Hudson (2012) bend formula, from memory",
+            Method::Cv { .. } => "definition of Cv (ANSI/ISA-75.01) with exact NIST SP 811 factors",
+            Method::Kv { .. } => "definition of Kv (IEC 60534) with exact NIST SP 811 factors",
+        }
+    }
+
     /// The default relative half-width of K for a fitting built with this method
     /// (common practice: fitting data scatter by ±20–50 %; a maker's Cv by about ±10 %).
     pub fn default_spread(&self) -> f64 {

@@ -30,6 +30,18 @@
 //! loss is K_b(Re_b) = (b/d)³ k_viscous / Re_b + (b/d)⁴ k_inertial: the familiar fourth
 //! power of the diameter ratio for the inertial part.
 //!
+//! # Example
+//! ```
+//! use hydrograde::fitting::{Fitting, head_loss};
+//! // A long-radius elbow (Darby 3-K) in a 2 in bore at Re = 5e4:
+//! // K = 800/5e4 + 0.056 (1 + 3.9/2^0.3) = 0.2494
+//! let elbow = Fitting::named("elbow_90_long_radius").unwrap();
+//! let (k, dk_dre) = elbow.k_at(5e4, 0.0508, 0.0).unwrap();
+//! assert!((k - 0.2494).abs() < 1e-4 && dk_dre < 0.0);
+//! let h = head_loss(k, 2.0); // m, at 2 m/s
+//! assert!((h - 0.0509).abs() < 1e-4);
+//! ```
+//!
 //! **Caution.** Published fitting data scatter widely (±20–50 %, common practice); each
 //! fitting carries a relative spread of K ([`Fitting::k_spread`]) that the uncertainty
 //! bands use. The catalogue constants were typed from memory of the published tables
@@ -38,7 +50,7 @@
 pub mod catalogue;
 pub mod method;
 
-pub use catalogue::{CatalogueEntry, catalogue_entries};
+pub use catalogue::{CatalogueEntry, catalogue_entries, entry as catalogue_entry};
 pub use method::Method;
 
 use crate::error::{Error, Result, check};
@@ -100,8 +112,10 @@ pub fn head_loss_dv(k: f64, velocity: f64) -> f64 {
 }
 
 /// A minor-loss element: a method giving K, the bore K refers to, the relative spread of
-/// K and (for catalogue fittings) its name.
+/// K and (for catalogue fittings) its name. Deserialising runs the same checks as the
+/// constructors.
 #[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+#[serde(try_from = "FittingData")]
 pub struct Fitting {
     method: Method,
     diameter: Option<f64>,
@@ -353,6 +367,24 @@ impl Fitting {
         Ok(self)
     }
 
+    /// True for a catalogue check valve or foot valve, which stops reverse flow; the
+    /// head loss formulas themselves stay odd in the flow, so a caller that needs the
+    /// valve's behaviour in reverse flow must ask this.
+    pub fn blocks_reverse_flow(&self) -> bool {
+        self.name
+            .as_deref()
+            .and_then(|n| catalogue::entry(n).ok())
+            .is_some_and(|e| e.blocks_reverse_flow)
+    }
+
+    /// Where K comes from: the catalogue entry's source, or the method's publication.
+    pub fn source(&self) -> &'static str {
+        self.name
+            .as_deref()
+            .and_then(|n| catalogue::entry(n).ok())
+            .map_or_else(|| self.method.source(), |e| e.source)
+    }
+
     /// The catalogue name, or the method's name (`"k"`, `"three_k"`, `"expansion"`…).
     pub fn name(&self) -> String {
         match &self.name {
@@ -393,5 +425,51 @@ impl Fitting {
         check::positive("re", re)?;
         let r = self.resistance(bore, pipe_rel_roughness)?;
         Ok((r.k(re), r.dk_dre(re)))
+    }
+}
+
+/// The serialised form of a [`Fitting`], checked on the way in.
+#[derive(Deserialize)]
+struct FittingData {
+    method: Method,
+    diameter: Option<f64>,
+    k_spread: f64,
+    name: Option<String>,
+}
+
+impl TryFrom<FittingData> for Fitting {
+    type Error = Error;
+
+    fn try_from(d: FittingData) -> Result<Fitting> {
+        let mut f = match d.method {
+            Method::K { k } => Fitting::k(k)?,
+            Method::EquivalentLength { l_over_d } => Fitting::equivalent_length(l_over_d)?,
+            Method::TwoK { k1, k_inf } => Fitting::two_k(k1, k_inf)?,
+            Method::ThreeK { k1, k_inf, k_d } => Fitting::three_k(k1, k_inf, k_d)?,
+            Method::Expansion { d_in, d_out } => Fitting::expansion(d_in, d_out)?,
+            Method::Contraction { d_in, d_out } => Fitting::contraction(d_in, d_out)?,
+            Method::EntranceSharp => Fitting::entrance_sharp(),
+            Method::EntranceRounded { r_over_d } => Fitting::entrance_rounded(r_over_d)?,
+            Method::EntranceProjecting => Fitting::entrance_projecting(),
+            Method::Exit => Fitting::exit(),
+            Method::Bend {
+                angle_deg,
+                r_over_d,
+            } => Fitting::bend(angle_deg, r_over_d)?,
+            Method::Cv { cv } => Fitting::cv(cv)?,
+            Method::Kv { kv } => Fitting::kv(kv)?,
+        };
+        if let Some(dia) = d.diameter {
+            if f.diameter != Some(dia) {
+                f = f.with_diameter(dia)?;
+            }
+        } else if f.diameter.is_some() {
+            return Err(Error::invalid(
+                "diameter",
+                format!("an {} needs its own bore", f.method.name()),
+            ));
+        }
+        f.name = d.name;
+        f.with_k_spread(d.k_spread)
     }
 }

@@ -1,0 +1,297 @@
+//! Prints the Rust core's results on a fixed grid of inputs, one per line, with every
+//! double as the 16 hex digits of its bits, so the C, C++ and Python tests can check that
+//! the C ABI gives the same numbers bit for bit.
+//!
+//! Line formats (fields separated by one space):
+//! - `darcy <correlation> <re> <rel_roughness> <f> <df_dre> <df_drel_roughness> <regime> <warnings>`
+//! - `darcy_err <correlation> <re> <rel_roughness> <error kind name>`
+//! - every other function: `<tag> <inputs…> | <outputs…>` or `<tag> <inputs…> | !<error kind>`,
+//!   where a token is a double (16 hex digits), `s:<name>` or `i:<integer>`; the tag names
+//!   the C function (`water` = `hg_water`, …) and the tests know each one's argument order.
+//!
+//! Run: `cargo run --release -p hydrograde-capi --example core_reference > FILE`.
+
+use hydrograde::fitting::Fitting;
+use hydrograde::fluid::{Fluid, water_vapour_pressure};
+use hydrograde::friction::{Correlation, Options, Regime, darcy_factor};
+use hydrograde::pipe::Pipe;
+use hydrograde::section::{Section, TurbulentDiameter};
+use hydrograde::units;
+use std::io::{self, BufWriter, Write};
+
+/// One token of a reference line.
+enum Tok<'a> {
+    D(f64),
+    S(&'a str),
+    I(i64),
+}
+
+fn tok(t: &Tok) -> String {
+    match t {
+        Tok::D(x) => hex(*x),
+        Tok::S(s) => format!("s:{s}"),
+        Tok::I(i) => format!("i:{i}"),
+    }
+}
+
+fn emit(
+    out: &mut impl Write,
+    tag: &str,
+    inputs: &[Tok],
+    result: hydrograde::Result<Vec<Tok>>,
+) -> io::Result<()> {
+    let ins: Vec<String> = inputs.iter().map(tok).collect();
+    let outs = match result {
+        Ok(v) => v.iter().map(tok).collect::<Vec<_>>().join(" "),
+        Err(e) => format!("!{}", e.kind().name()),
+    };
+    writeln!(out, "{tag} {} | {outs}", ins.join(" "))
+}
+
+/// The section of the C ABI's `(shape, a, b)` triple (b = 0 for one-dimension shapes).
+fn section(shape: i64, a: f64, b: f64) -> hydrograde::Result<Section> {
+    let one = |b: f64| {
+        if b == 0.0 {
+            Ok(())
+        } else {
+            Err(hydrograde::Error::invalid("b", "must be 0"))
+        }
+    };
+    match shape {
+        0 => one(b).and_then(|_| Section::circle(a)),
+        1 => Section::annulus(a, b),
+        2 => Section::rectangle(a, b),
+        3 => Section::ellipse(a, b),
+        4 => one(b).and_then(|_| Section::triangle(a)),
+        _ => Err(hydrograde::Error::out_of_range(
+            "shape",
+            shape as f64,
+            "unknown",
+        )),
+    }
+}
+
+fn hex(x: f64) -> String {
+    format!("{:016x}", x.to_bits())
+}
+
+fn regime(r: Regime) -> u32 {
+    match r {
+        Regime::Laminar => 0,
+        Regime::Transitional => 1,
+        Regime::Turbulent => 2,
+    }
+}
+
+fn main() -> io::Result<()> {
+    let mut out = BufWriter::new(io::stdout().lock());
+    // Reynolds numbers from 10 to 1e10, 12 per decade, plus the regime limits themselves
+    // and points inside the transitional band; roughness from smooth to very rough,
+    // including values outside every correlation's range and invalid ones.
+    let mut res: Vec<f64> = (0..=108)
+        .map(|i| 10f64.powf(1.0 + i as f64 / 12.0))
+        .collect();
+    res.extend([
+        2300.0, 2300.5, 3000.0, 3999.0, 4000.0, 4000.5, -5.0, 0.0, 1e14,
+    ]);
+    let rrs = [
+        0.0, 1e-7, 1e-6, 1e-5, 1e-4, 1e-3, 5e-3, 1e-2, 0.05, 0.1, 0.5, 0.6, -1e-4,
+    ];
+    for (ci, c) in Correlation::ALL.iter().enumerate() {
+        let opts = Options::with_correlation(*c);
+        for &re in &res {
+            for &rr in &rrs {
+                match darcy_factor(re, rr, &opts) {
+                    Ok(fr) => writeln!(
+                        out,
+                        "darcy {ci} {} {} {} {} {} {} {}",
+                        hex(re),
+                        hex(rr),
+                        hex(fr.f),
+                        hex(fr.df_dre),
+                        hex(fr.df_drel_roughness),
+                        regime(fr.regime),
+                        fr.warnings.bits()
+                    )?,
+                    Err(e) => writeln!(
+                        out,
+                        "darcy_err {ci} {} {} {}",
+                        hex(re),
+                        hex(rr),
+                        e.kind().name()
+                    )?,
+                }
+            }
+        }
+    }
+    others(&mut out)?;
+    out.flush()
+}
+
+fn others(out: &mut impl Write) -> io::Result<()> {
+    use Tok::{D, I, S};
+    let bad = [f64::NAN, f64::INFINITY, -1.0, 0.0];
+    for t in [
+        273.15, 280.0, 293.15, 300.0, 350.0, 373.15, 400.0, 500.0, 600.0, 623.15, 273.0, 700.0,
+        bad[0],
+    ] {
+        for p in [101_325.0, 1e5, 1e6, 1e7, 1e8, 2e8, 500.0, 0.0, -1.0, bad[1]] {
+            let w = Fluid::water(t, p).map(|f| vec![D(f.density), D(f.viscosity)]);
+            emit(out, "water", &[D(t), D(p)], w)?;
+        }
+        emit(
+            out,
+            "vapour",
+            &[D(t)],
+            water_vapour_pressure(t).map(|p| vec![D(p)]),
+        )?;
+    }
+    for t in [
+        200.0, 250.0, 288.15, 300.0, 500.0, 1000.0, 150.0, 1100.0, bad[1],
+    ] {
+        for p in [1e3, 101_325.0, 1e6, 2e6, 3e6, 0.0, -5.0, bad[0]] {
+            let a = Fluid::air(t, p).map(|f| vec![D(f.density), D(f.viscosity)]);
+            emit(out, "air", &[D(t), D(p)], a)?;
+        }
+    }
+    let names = units::names();
+    for &from in names.iter().chain(&["furlong"]) {
+        for &to in &names {
+            for v in [1.0, -3.5, 1234.5, 0.0, bad[0]] {
+                let r = units::convert(v, from, to).map(|x| vec![D(x)]);
+                emit(out, "convert", &[D(v), S(from), S(to)], r)?;
+            }
+            for rho in [1000.0, 998.2, 0.0] {
+                let r = units::convert_head(2.5, from, to, rho).map(|x| vec![D(x)]);
+                emit(out, "convert_head", &[D(2.5), S(from), S(to), D(rho)], r)?;
+            }
+        }
+    }
+    for (i, n) in units::names().iter().enumerate() {
+        emit(out, "unit_name", &[I(i as i64)], Ok(vec![S(n)]))?;
+    }
+    let cat = Fitting::catalogue();
+    for (i, n) in cat.iter().enumerate() {
+        emit(out, "catalogue", &[I(i as i64)], Ok(vec![S(n)]))?;
+    }
+    for &name in cat.iter().chain(&["nonesuch"]) {
+        for re in [10.0, 1e3, 1e5, 1e7, 0.0] {
+            for bore in [0.025, 0.1, 0.0] {
+                for rr in [0.0, 1e-3, -1.0] {
+                    let r = Fitting::named(name)
+                        .and_then(|f| f.k_at(re, bore, rr))
+                        .map(|(k, dk)| vec![D(k), D(dk)]);
+                    emit(out, "fitting_k", &[S(name), D(re), D(bore), D(rr)], r)?;
+                }
+            }
+        }
+    }
+    let dims = [
+        (0.1, 0.0),
+        (0.1, 0.03),
+        (0.05, 0.2),
+        (0.0, 0.0),
+        (-0.1, 0.05),
+        (0.2, 0.2),
+        (bad[0], 0.0),
+    ];
+    for shape in 0..6 {
+        for (a, b) in dims {
+            let r = section(shape, a, b).map(|s| {
+                vec![
+                    D(s.area()),
+                    D(s.wetted_perimeter()),
+                    D(s.hydraulic_diameter()),
+                    D(s.laminar_constant()),
+                ]
+            });
+            emit(out, "section", &[I(shape), D(a), D(b)], r)?;
+        }
+    }
+    let fluids = [(998.2, 1.002e-3), (1.2, 1.8e-5), (0.0, 1e-3)];
+    let flows = [
+        0.0, 1e-7, -1e-7, 1e-5, 1e-4, -1e-4, 2e-4, 1e-3, 1e-2, -0.1, bad[0],
+    ];
+    for d in [0.025, 0.1, 0.0] {
+        for eps in [0.0, 4.5e-5, 0.02] {
+            for (rho, mu) in fluids {
+                for q in flows {
+                    let r = Pipe::circular(d, 10.0, eps)
+                        .and_then(|p| p.head_loss(&Fluid::new(rho, mu)?, q))
+                        .map(|(h, dh)| vec![D(h), D(dh)]);
+                    emit(
+                        out,
+                        "pipe_head_loss",
+                        &[D(d), D(10.0), D(eps), D(rho), D(mu), D(q)],
+                        r,
+                    )?;
+                }
+            }
+        }
+    }
+    for q in flows {
+        for (rho, mu) in fluids {
+            for d in [0.05, 0.0] {
+                let r = Pipe::circular(d, 1.0, 0.0)
+                    .and_then(|p| {
+                        p.flow_state(
+                            &Fluid::new(rho, mu)?,
+                            q,
+                            &Options::default(),
+                            TurbulentDiameter::Hydraulic,
+                        )
+                    })
+                    .map(|s| vec![D(s.reynolds)]);
+                emit(out, "reynolds", &[D(q), D(d), D(rho), D(mu)], r)?;
+            }
+        }
+    }
+    for shape in 0..5 {
+        for (a, b) in [(0.1, 0.0), (0.1, 0.04), (0.0, 0.0)] {
+            for q in flows {
+                let r = section(shape, a, b)
+                    .and_then(|s| Pipe::new(s, 20.0, 1e-4))
+                    .and_then(|p| {
+                        p.flow_state(
+                            &Fluid::new(998.2, 1.002e-3)?,
+                            q,
+                            &Options::default(),
+                            TurbulentDiameter::Hydraulic,
+                        )
+                    })
+                    .map(|s| {
+                        let f = if s.friction_factor.is_nan() {
+                            0.0
+                        } else {
+                            s.friction_factor
+                        };
+                        vec![
+                            D(s.velocity),
+                            D(s.reynolds),
+                            D(f),
+                            D(s.head_loss),
+                            D(s.dhead_dflow),
+                            I(regime(s.regime) as i64),
+                            I(s.warnings.bits() as i64),
+                        ]
+                    });
+                emit(
+                    out,
+                    "duct_flow_state",
+                    &[
+                        I(shape),
+                        D(a),
+                        D(b),
+                        D(20.0),
+                        D(1e-4),
+                        D(998.2),
+                        D(1.002e-3),
+                        D(q),
+                    ],
+                    r,
+                )?;
+            }
+        }
+    }
+    Ok(())
+}

@@ -1,0 +1,148 @@
+#!/usr/bin/env bash
+# The C ABI test suite: builds libhydrograde (release), checks the committed header is
+# what cbindgen generates, installs to target/capi-prefix, then compiles and runs the C
+# and C++ tests (shared and static, and under valgrind), builds a CMake consumer project
+# from the prefix, checks the VBA declarations against the header and calls the library
+# through ctypes with the VBA types. Every result is compared with the Rust core bit for
+# bit. Installs cbindgen, cmake, valgrind and pkg-config when absent.
+#
+#   bash scripts/test-c.sh               run everything; last line "N passed, N failed"
+#   bash scripts/test-c.sh --regenerate  rewrite capi/include/hydrograde.h, then run
+set -uo pipefail
+root="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
+cd "$root"
+export CARGO_BUILD_JOBS="${CARGO_BUILD_JOBS:-2}"
+export PATH="$HOME/.cargo/bin:$PATH"
+
+out="$root/target/capi-test"
+prefix="$root/target/capi-prefix"
+mkdir -p "$out"
+passed=0
+failed=0
+log="$out/log.txt"
+: > "$log"
+
+# run NAME CMD...: one counted check; output goes to the log and is shown on failure.
+run() {
+  local name="$1"
+  shift
+  if "$@" >> "$log" 2>&1; then
+    passed=$((passed + 1))
+    printf '  ok    %s\n' "$name"
+  else
+    failed=$((failed + 1))
+    printf '  FAIL  %s\n' "$name"
+    echo "---- output of: $*"
+    "$@" 2>&1 | tail -30
+    echo "----"
+  fi
+}
+finish() {
+  echo "$passed passed, $failed failed"
+  [ "$failed" -eq 0 ] && exit 0 || exit 1
+}
+die() {
+  echo "test-c: $*" >&2
+  failed=$((failed + 1))
+  finish
+}
+
+# ---- tools ----
+apt_missing=()
+command -v cmake >/dev/null || apt_missing+=(cmake)
+command -v valgrind >/dev/null || apt_missing+=(valgrind)
+command -v pkg-config >/dev/null || apt_missing+=(pkg-config)
+if [ "${#apt_missing[@]}" -gt 0 ]; then
+  echo "installing ${apt_missing[*]} with apt"
+  (apt-get update -qq && DEBIAN_FRONTEND=noninteractive apt-get install -y -qq "${apt_missing[@]}") \
+    >> "$log" 2>&1 || die "apt-get install ${apt_missing[*]} failed (see $log)"
+fi
+if ! command -v cbindgen >/dev/null; then
+  echo "installing cbindgen (cargo install, once)"
+  cargo install cbindgen --locked >> "$log" 2>&1 || die "cargo install cbindgen failed"
+fi
+py="$root/.venv/bin/python"
+if [ ! -x "$py" ]; then
+  python3 -m venv "$root/.venv" && "$py" -m pip install -q pytest numpy >> "$log" 2>&1
+fi
+
+version="$(sed -n 's/^version = "\(.*\)"/\1/p' Cargo.toml | head -1)"
+major="${version%%.*}"
+echo "hydrograde C ABI $version"
+
+# ---- build ----
+cargo build -q --release -p hydrograde-capi || die "cargo build failed"
+cargo run -q --release -p hydrograde-capi --example core_reference > "$out/reference.txt" \
+  || die "core reference failed"
+
+header=capi/include/hydrograde.h
+gen=(cbindgen --quiet --config capi/cbindgen.toml --crate hydrograde-capi)
+if [ "${1:-}" = "--regenerate" ]; then
+  "${gen[@]}" --output "$header"
+fi
+run "header is what cbindgen generates (cbindgen --verify)" "${gen[@]}" --verify --output "$header"
+
+run "SONAME is libhydrograde.so.$major" \
+  bash -c "readelf -d target/release/libhydrograde.so | grep -q 'SONAME.*\[libhydrograde.so.$major\]'"
+# Every entry point catches panics, so none may be exported without a check: the
+# exported symbols must be exactly the header's functions.
+check_exports() {
+  diff <(nm -D --defined-only target/release/libhydrograde.so | awk '$3 ~ /^hg_/ {print $3}' | sort) \
+       <(grep -oE '\bhg_[a-z0-9_]+\(' "$header" | tr -d '(' | sort -u)
+}
+run "exported hg_* symbols equal the header's functions" check_exports
+check_coverage() {
+  local f missing=0
+  for f in $(grep -oE '\bhg_[a-z0-9_]+\(' "$header" | tr -d '(' | sort -u); do
+    grep -q "\b$f\b" tests/c/test_capi.c || { echo "test_capi.c never calls $f"; missing=1; }
+  done
+  return $missing
+}
+run "test_capi.c calls every function of the header" check_coverage
+
+# ---- install ----
+rm -rf "$prefix"
+run "install to $prefix" scripts/install-capi.sh "$prefix"
+export PKG_CONFIG_PATH="$prefix/lib/pkgconfig"
+run "pkg-config --cflags --libs hydrograde" pkg-config --exists --print-errors "hydrograde = $version"
+cflags="$(pkg-config --cflags hydrograde)"
+libs="$(pkg-config --libs hydrograde)"
+static_libs="$prefix/lib/libhydrograde.a $(pkg-config --static --libs-only-other --libs-only-l hydrograde | sed 's/-lhydrograde//')"
+
+# ---- C and C++ programs, shared and static ----
+ccflags=(-Wall -Wextra -Werror -O1 -g -Itests/c)
+run "compile C test (shared)" gcc -std=c11 "${ccflags[@]}" $cflags tests/c/test_capi.c -o "$out/test_c" \
+  $libs -Wl,-rpath,"$prefix/lib" -lpthread -lm
+run "compile C test (static)" gcc -std=c11 "${ccflags[@]}" $cflags tests/c/test_capi.c -o "$out/test_c_static" \
+  $static_libs -lpthread -lm
+run "compile C++ test (shared)" g++ -std=c++17 "${ccflags[@]}" $cflags tests/c/test_capi.cpp -o "$out/test_cpp" \
+  $libs -Wl,-rpath,"$prefix/lib"
+run "compile C++ test (static)" g++ -std=c++17 "${ccflags[@]}" $cflags tests/c/test_capi.cpp -o "$out/test_cpp_static" \
+  $static_libs
+run "C test (shared)" "$out/test_c" "$out/reference.txt" "$version"
+run "C test (static)" "$out/test_c_static" "$out/reference.txt" "$version"
+run "C++ test (shared)" "$out/test_cpp"
+run "C++ test (static)" "$out/test_cpp_static"
+grep -h -E '^(bitwise|test_capi)' "$log" | sort -u | sed 's/^/    /'
+
+# rayon's global pool is never joined, so only definite and indirect leaks count.
+vg=(valgrind --quiet --error-exitcode=97 --leak-check=full --errors-for-leak-kinds=definite,indirect
+    --show-leak-kinds=definite,indirect)
+run "valgrind: C test, zero errors and leaks" "${vg[@]}" "$out/test_c" "$out/reference.txt" "$version"
+run "valgrind: C++ test, zero errors and leaks" "${vg[@]}" "$out/test_cpp"
+
+# ---- CMake consumer ----
+ref_hex="$(awk '$1 == "darcy" && $2 == 0 && $3 == "40f86a0000000000" && $4 == "3f1a36e2eb1c432d" {print $5}' "$out/reference.txt")"
+rm -rf "$out/consumer"
+run "CMake: find_package(hydrograde) configures" cmake -S tests/c/consumer -B "$out/consumer" \
+  -DCMAKE_PREFIX_PATH="$prefix" -DCMAKE_BUILD_TYPE=Release
+run "CMake: consumer builds" cmake --build "$out/consumer" -j2
+run "CMake: consumer (shared) equals the core" "$out/consumer/consumer_shared" "$ref_hex"
+run "CMake: consumer (static) equals the core" "$out/consumer/consumer_static" "$ref_hex"
+
+# ---- spreadsheet module ----
+run "VBA declarations match the header" "$py" tests/c/check_vba.py
+run "ctypes with the VBA types equals the core" env HG_LIB="$prefix/lib/libhydrograde.so" \
+  HG_REFERENCE="$out/reference.txt" "$py" -m pytest -q -p no:cacheprovider tests/c/test_ctypes.py
+
+finish
