@@ -5,10 +5,14 @@
 //! formula, table or default value lives here. Files mirror the core's module names.
 
 mod arrays;
+mod band;
 mod errors;
 mod fitting;
 mod fluid;
 mod friction;
+mod line;
+mod line_result;
+mod pipe;
 mod section;
 mod state;
 mod units;
@@ -43,6 +47,22 @@ fn _native(m: &Bound<'_, PyModule>) -> PyResult<()> {
 
     // section
     m.add_class::<section::PySection>()?;
+
+    // pipe and line
+    m.add_class::<pipe::PyPipe>()?;
+    m.add_class::<pipe::PyRise>()?;
+    m.add_class::<pipe::PyEquipment>()?;
+    m.add_class::<line::PyLine>()?;
+    m.add_class::<line::PyPumpCurve>()?;
+    m.add_function(wrap_pyfunction!(line::split_flow, m)?)?;
+    m.add_class::<line_result::PyLineResult>()?;
+    m.add_class::<line_result::PyElementResult>()?;
+    m.add_class::<line_result::PyFlowSolution>()?;
+    m.add_class::<line_result::PyOperatingPoint>()?;
+    m.add_class::<line_result::PySplit>()?;
+
+    // band
+    m.add_class::<band::PyBand>()?;
 
     // units
     m.add_function(wrap_pyfunction!(units::convert, m)?)?;
