@@ -215,6 +215,16 @@ impl PyFitting {
     fn diameter(&self) -> Option<f64> {
         self.inner.diameter()
     }
+    /// Where the fitting's data come from.
+    #[getter]
+    fn source(&self) -> &'static str {
+        self.inner.source()
+    }
+    /// True for a fitting that stops reverse flow (check and foot valves).
+    #[getter]
+    fn blocks_reverse_flow(&self) -> bool {
+        self.inner.blocks_reverse_flow()
+    }
     /// Relative half-width of the likely range of K (rectangular distribution).
     #[getter]
     fn k_spread(&self) -> f64 {
@@ -246,6 +256,7 @@ impl PyFitting {
         d.update(parameters(py, &self.inner)?.as_mapping())?;
         d.set_item("diameter", self.diameter())?;
         d.set_item("k_spread", self.k_spread())?;
+        d.set_item("source", self.source())?;
         Ok(d)
     }
     /// A one-row pandas DataFrame (needs pandas).

@@ -13,7 +13,9 @@ mod friction;
 mod line;
 mod line_result;
 mod pipe;
+mod roughness;
 mod section;
+mod sizes;
 mod state;
 mod units;
 
@@ -60,6 +62,16 @@ fn _native(m: &Bound<'_, PyModule>) -> PyResult<()> {
     m.add_class::<line_result::PyFlowSolution>()?;
     m.add_class::<line_result::PyOperatingPoint>()?;
     m.add_class::<line_result::PySplit>()?;
+    m.add_class::<line_result::PySizing>()?;
+
+    // roughness and sizes
+    m.add_function(wrap_pyfunction!(roughness::materials, m)?)?;
+    m.add_function(wrap_pyfunction!(roughness::material, m)?)?;
+    m.add_function(wrap_pyfunction!(roughness::aged_roughness, m)?)?;
+    m.add_function(wrap_pyfunction!(sizes::pipe_tables, m)?)?;
+    m.add_function(wrap_pyfunction!(sizes::pipe_sizes, m)?)?;
+    m.add_function(wrap_pyfunction!(sizes::pipe_size, m)?)?;
+    m.add_function(wrap_pyfunction!(sizes::smallest_pipe, m)?)?;
 
     // band
     m.add_class::<band::PyBand>()?;

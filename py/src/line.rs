@@ -3,13 +3,14 @@
 use crate::arrays;
 use crate::errors::CoreResult;
 use crate::fluid::PyFluid;
-use crate::line_result::{PyFlowSolution, PyLineResult, PyOperatingPoint, PySplit};
+use crate::line_result::{PyFlowSolution, PyLineResult, PyOperatingPoint, PySizing, PySplit};
 use crate::pipe::{element, element_object};
 use crate::state;
 use hydrograde::band::UncertaintyOptions;
 use hydrograde::error::Error;
-use hydrograde::line::{Line, LineOptions, PumpCurve, split_flow as core_split};
+use hydrograde::line::{Limit, Line, LineOptions, PumpCurve, split_flow as core_split};
 use hydrograde::section::TurbulentDiameter;
+use hydrograde::sizes::PipeTable;
 use pyo3::prelude::*;
 use pyo3::types::{PyBytes, PyDict, PyList, PyType};
 
@@ -150,6 +151,50 @@ impl PyLine {
             .detach(|| self.inner.operating_point(&fluid.inner, &pump.inner))
             .py()?;
         Ok(PyOperatingPoint { inner: p })
+    }
+    /// Sizes the line's round pipes (all take one trial bore) for ``flow`` (m³/s, ≠ 0)
+    /// under exactly one limit: ``max_pressure_loss`` (Pa, friction + minor) or
+    /// ``max_velocity`` (m/s); with ``table`` (``"steel"``, ``"stainless"``, ``"copper"``,
+    /// ``"pvc"``) and ``schedule`` also picks the smallest standard size, at the nominal
+    /// values and at the unfavourable end of the band.
+    #[pyo3(signature = (fluid, flow, *, max_pressure_loss = None, max_velocity = None, table = None, schedule = None))]
+    #[allow(clippy::too_many_arguments)]
+    fn size(
+        &self,
+        py: Python<'_>,
+        fluid: &PyFluid,
+        flow: f64,
+        max_pressure_loss: Option<f64>,
+        max_velocity: Option<f64>,
+        table: Option<&str>,
+        schedule: Option<&str>,
+    ) -> PyResult<PySizing> {
+        let limit = match (max_pressure_loss, max_velocity) {
+            (Some(p), None) => Limit::PressureLoss(p),
+            (None, Some(v)) => Limit::Velocity(v),
+            _ => {
+                return Err(Error::invalid(
+                    "max_pressure_loss",
+                    "give exactly one of max_pressure_loss and max_velocity",
+                ))
+                .py();
+            }
+        };
+        let table = match (table, schedule) {
+            (Some(t), Some(s)) => Some((t.parse::<PipeTable>().py()?, s)),
+            (None, None) => None,
+            _ => {
+                return Err(Error::invalid(
+                    "schedule",
+                    "give both table and schedule, or neither",
+                ))
+                .py();
+            }
+        };
+        let s = py
+            .detach(|| self.inner.size(&fluid.inner, flow, limit, table))
+            .py()?;
+        Ok(PySizing { inner: s })
     }
     /// The same line with the likely range (``low``, ``high``; m) of the roughness of the
     /// pipe at ``index`` stated, for the roughness uncertainty.

@@ -4,7 +4,9 @@
 use crate::band::{PyBand, band_dict};
 use crate::state;
 use hydrograde::band::Band;
-use hydrograde::line::{ElementResult, FlowSolution, LineResult, OperatingPoint, Split};
+use hydrograde::line::{
+    ElementResult, FlowSolution, LineResult, OperatingPoint, SizeChoice, Sizing, Split,
+};
 use pyo3::prelude::*;
 use pyo3::types::{PyBytes, PyDict, PyList, PyType};
 
@@ -468,6 +470,88 @@ impl PySplit {
     #[classmethod]
     fn _from_state(_cls: &Bound<'_, PyType>, state: &[u8]) -> PyResult<Self> {
         Ok(PySplit {
+            inner: state::loads(state)?,
+        })
+    }
+}
+
+fn choice_dict<'py>(py: Python<'py>, c: &SizeChoice) -> PyResult<Bound<'py, PyDict>> {
+    let d = crate::sizes::size_dict(py, &c.size)?;
+    d.set_item("velocity", c.velocity)?;
+    d.set_item("pressure_loss", c.pressure_loss)?;
+    d.set_item("pressure_loss_band", band_dict(py, &c.pressure_loss_band)?)?;
+    Ok(d)
+}
+
+/// The answer of :meth:`Line.size`: ``min_inside_diameter`` (m) meeting the limit at the
+/// nominal values; ``standard`` and ``standard_at_band`` (dicts: the standard size, its
+/// velocity in m/s, pressure loss in Pa and band), or None without a table.
+#[pyclass(name = "Sizing", module = "hydrograde._native", frozen, eq)]
+#[derive(Clone, PartialEq)]
+pub struct PySizing {
+    /// The core value.
+    pub inner: Sizing,
+}
+
+#[pymethods]
+impl PySizing {
+    /// The smallest inside diameter that meets the limit at the nominal values, m.
+    #[getter]
+    fn min_inside_diameter(&self) -> f64 {
+        self.inner.min_inside_diameter
+    }
+    /// The smallest standard size meeting the limit at the nominal values.
+    #[getter]
+    fn standard<'py>(&self, py: Python<'py>) -> PyResult<Option<Bound<'py, PyDict>>> {
+        self.inner
+            .standard
+            .as_ref()
+            .map(|c| choice_dict(py, c))
+            .transpose()
+    }
+    /// The smallest standard size still meeting it at the band's unfavourable end.
+    #[getter]
+    fn standard_at_band<'py>(&self, py: Python<'py>) -> PyResult<Option<Bound<'py, PyDict>>> {
+        self.inner
+            .standard_at_band
+            .as_ref()
+            .map(|c| choice_dict(py, c))
+            .transpose()
+    }
+    /// The fields as a dict.
+    fn to_dict<'py>(&self, py: Python<'py>) -> PyResult<Bound<'py, PyDict>> {
+        let d = PyDict::new(py);
+        d.set_item("min_inside_diameter", self.inner.min_inside_diameter)?;
+        d.set_item("standard", self.standard(py)?)?;
+        d.set_item("standard_at_band", self.standard_at_band(py)?)?;
+        Ok(d)
+    }
+    fn __repr__(&self) -> String {
+        let pick = |c: &Option<SizeChoice>| {
+            c.as_ref().map_or("None".to_string(), |c| {
+                format!(
+                    "'{} {} sch {}'",
+                    c.size.table.name(),
+                    c.size.nominal,
+                    c.size.schedule
+                )
+            })
+        };
+        format!(
+            "Sizing(min_inside_diameter={:?}, standard={}, standard_at_band={})",
+            self.inner.min_inside_diameter,
+            pick(&self.inner.standard),
+            pick(&self.inner.standard_at_band)
+        )
+    }
+    fn __reduce__<'py>(
+        slf: &Bound<'py, Self>,
+    ) -> PyResult<(Bound<'py, PyAny>, (Bound<'py, PyBytes>,))> {
+        state::reduce(slf.as_any(), &slf.get().inner)
+    }
+    #[classmethod]
+    fn _from_state(_cls: &Bound<'_, PyType>, state: &[u8]) -> PyResult<Self> {
+        Ok(PySizing {
             inner: state::loads(state)?,
         })
     }

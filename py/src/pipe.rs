@@ -35,6 +35,29 @@ impl PyPipe {
         };
         Ok(PyPipe { inner: pipe.py()? })
     }
+    /// A run of catalogue wall ``material`` (see :func:`materials`): its typical
+    /// roughness, with the material's low–high range carried into the bands.
+    #[classmethod]
+    fn of_material(
+        _cls: &Bound<'_, PyType>,
+        section: &Bound<'_, PyAny>,
+        length: f64,
+        material: &str,
+    ) -> PyResult<Self> {
+        let s = if let Ok(s) = section.cast::<PySection>() {
+            s.get().inner
+        } else {
+            hydrograde::Section::circle(crate::friction::scalar("section", section)?).py()?
+        };
+        Ok(PyPipe {
+            inner: Pipe::of_material(s, length, material).py()?,
+        })
+    }
+    /// Likely (low, high) roughness, m, when stated (from a catalogue material).
+    #[getter]
+    fn roughness_range(&self) -> Option<(f64, f64)> {
+        self.inner.roughness_range
+    }
     /// The cross-section.
     #[getter]
     fn section(&self) -> PySection {

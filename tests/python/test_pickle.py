@@ -48,6 +48,8 @@ def _line_objects():
         result.head_loss_band, line.flow_for_head(water, 30.0),
         line.operating_point(water, pump),
         hg.split_flow([line, line], water, 0.02),
+        hg.Pipe.of_material(0.1, 10.0, "commercial_steel"),
+        line.size(water, 0.012, max_pressure_loss=1e5, table="steel", schedule="40"),
     ]
 
 
