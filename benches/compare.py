@@ -79,14 +79,17 @@ def scipy_loop(re: np.ndarray, rr: np.ndarray) -> np.ndarray:
     return out
 
 
-def best_of(fn: Callable[[], object], reps: int) -> float:
-    """Fastest wall time (s) of `reps` calls after one warm-up call."""
-    fn()
-    best = math.inf
-    for _ in range(reps):
-        t = time.perf_counter()
-        fn()
-        best = min(best, time.perf_counter() - t)
+def race(work: list[Callable[[], object]], reps: int) -> list[float]:
+    """Fastest wall time (s) of each callable, run in turns: one warm-up round, then
+    `reps` rounds. Taking turns exposes every method to the same disturbances from other
+    work on the machine, so the ratios stay meaningful when it is busy."""
+    best = [math.inf] * len(work)
+    for round_ in range(reps + 1):
+        for i, fn in enumerate(work):
+            t = time.perf_counter()
+            fn()
+            if round_ > 0:
+                best[i] = min(best[i], time.perf_counter() - t)
     return best
 
 
@@ -105,33 +108,44 @@ def main() -> int:
         hydrograde = None
         print(f"hydrograde not importable ({e}); its rows are left out", file=sys.stderr)
 
-    rows: list[tuple[str, float, np.ndarray | None]] = []  # (what, s per element, values)
-
-    t_log = best_of(lambda: np.log(re), args.reps) / n
-    rows.append(("np.log(re) (cost floor)", t_log, None))
-
+    sub_re, sub_rr = re[:ns], rr[:ns]
+    work: list[tuple[str, Callable[[], object], int]] = [
+        ("np.log(re) (cost floor)", lambda: np.log(re), n),
+        ("numpy Haaland (explicit, ~1.5 %)", lambda: haaland(re, rr), n),
+        ("numpy exact two-step (Haaland + 2 Halley)", lambda: colebrook_two_step(re, rr), n),
+        (f"scipy brentq loop ({ns} points, scaled)", lambda: scipy_loop(sub_re, sub_rr), ns),
+    ]
     hg = None
+    chunk = PARALLEL_THRESHOLD - 384
     if hydrograde is not None:
         hg = hydrograde.darcy_factor(re, rr)
-        t_hg = best_of(lambda: hydrograde.darcy_factor(re, rr), args.reps) / n
-        rows.append(("hydrograde.darcy_factor, exact, all cores", t_hg, hg))
-        chunk = PARALLEL_THRESHOLD - 384
 
         def chunked() -> None:
             for s in range(0, n, chunk):
                 hydrograde.darcy_factor(re[s : s + chunk], rr[s : s + chunk])
 
-        t_hg1 = best_of(chunked, args.reps) / n
-        rows.append((f"hydrograde.darcy_factor, exact, 1 thread (chunks of {chunk})", t_hg1, hg))
-
-    t_haal = best_of(lambda: haaland(re, rr), args.reps) / n
-    rows.append(("numpy Haaland (explicit, ~1.5 %)", t_haal, haaland(re, rr)))
-    t_two = best_of(lambda: colebrook_two_step(re, rr), args.reps) / n
+        work[1:1] = [
+            ("hydrograde.darcy_factor, exact, all cores", lambda: hydrograde.darcy_factor(re, rr), n),
+            (f"hydrograde.darcy_factor, exact, 1 thread (chunks of {chunk})", chunked, n),
+        ]
+    times = race([fn for _, fn, _ in work], args.reps)
+    per = {name: t / count for (name, _, count), t in zip(work, times)}
+    names = [name for name, _, _ in work]
+    t_log = per[names[0]]
+    t_haal = per["numpy Haaland (explicit, ~1.5 %)"]
+    t_sp = per[names[-1]]
     two = colebrook_two_step(re, rr)
-    rows.append(("numpy exact two-step (Haaland + 2 Halley)", t_two, two))
-    sub_re, sub_rr = re[:ns], rr[:ns]
-    t_sp = best_of(lambda: scipy_loop(sub_re, sub_rr), max(1, args.reps // 3)) / ns
-    rows.append((f"scipy brentq loop ({ns} points, scaled)", t_sp, None))
+    values: dict[str, np.ndarray | None] = {
+        names[0]: None,
+        "numpy Haaland (explicit, ~1.5 %)": haaland(re, rr),
+        "numpy exact two-step (Haaland + 2 Halley)": two,
+        names[-1]: None,
+    }
+    if hg is not None:
+        t_hg, t_hg1 = per[names[1]], per[names[2]]
+        values[names[1]] = hg
+        values[names[2]] = hg
+    rows = [(name, per[name], values[name]) for name in names]
 
     ref = hg if hg is not None else two
     ref_name = "hydrograde" if hg is not None else "numpy two-step"
@@ -140,7 +154,7 @@ def main() -> int:
 
     print(
         f"Python comparison: {n} turbulent points (Re 4e3..1e8, eps/D 1e-6..0.05, "
-        f"log-uniform), best of {args.reps}; numpy {np.__version__}, "
+        f"log-uniform), best of {args.reps} taken in turns; numpy {np.__version__}, "
         f"{os.cpu_count()} CPUs"
     )
     print()

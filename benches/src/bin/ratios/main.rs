@@ -91,8 +91,9 @@ fn batch_in(pool: &rayon::ThreadPool, re: &[f64], rr: &[f64], out: &mut [f64]) {
 }
 
 /// Rows of the 20-element line: its system curve over 1e5 flows on one thread and on all,
-/// against one exact Colebrook factor per flow, and single evaluations for scale.
-fn line_rows(t: &mut Table, exact: f64, single: &rayon::ThreadPool, multi: &rayon::ThreadPool) {
+/// against one exact Colebrook call per flow (timed in the same turns), and single
+/// evaluations for scale.
+fn line_rows(t: &mut Table, single: &rayon::ThreadPool, multi: &rayon::ThreadPool) {
     let (line, water) = match (line20(), water()) {
         (Ok(l), Ok(w)) => (l, w),
         (Err(e), _) | (_, Err(e)) => {
@@ -108,11 +109,17 @@ fn line_rows(t: &mut Table, exact: f64, single: &rayon::ThreadPool, multi: &rayo
             }
         })
     };
-    let times = race(3, &mut [&mut || curve(single), &mut || curve(multi)]);
-    let (one, all) = (
-        per_item(times[0], CURVE_POINTS),
-        per_item(times[1], CURVE_POINTS),
+    // The Colebrook reference runs in the same turns as the curve (1e5 points of the
+    // friction workload), so a burst of other work cannot fall on one side only.
+    let (re, rr) = turbulent_points(CURVE_POINTS, 2027);
+    let mut buf = vec![0.0; CURVE_POINTS];
+    let opts = Options::default();
+    let mut reference = || scalar_loop(&re, &rr, &opts, &mut buf);
+    let times = race(
+        5,
+        &mut [&mut || curve(single), &mut || curve(multi), &mut reference],
     );
+    let [one, all, exact] = [0, 1, 2].map(|i| per_item(times[i], CURVE_POINTS));
     t.push(Row::ratio(
         "20-element line system curve, 1e5 flows, 1 thread, per flow",
         one,
@@ -257,7 +264,7 @@ fn main() {
         ));
     }
 
-    line_rows(&mut t, exact, &single, &multi);
+    line_rows(&mut t, &single, &multi);
 
     println!(
         "hydrograde speed ratios: {N} turbulent points (Re 4e3..1e8, eps/D 1e-6..0.05, \
