@@ -1,7 +1,8 @@
 #!/usr/bin/env bash
 # Instructions per point of hydrograde's friction paths, counted by callgrind.
 #   scripts/profile.sh [workload ...]     (default: ln, Colebrook scalar and batch, four explicit correlations)
-# Point generation (workload `none`) is subtracted.
+# Point generation (workload `none`) is subtracted. `line` is one flow through the
+# 20-element benchmark line (required head), the system curve's work per flow.
 # Each workload runs twice (10k and 20k points); the difference / 10k is the cost of one
 # point with start-up and input generation cancelled. Counts are reproducible on a busy
 # machine, unlike wall-clock times.
@@ -17,9 +18,11 @@ count() {
 }
 per_point() { echo $(( ($(count "$1" 20000) - $(count "$1" 10000)) / 10000 )); }
 base=$(per_point none)
-ln=$(per_point ln)
-printf '| workload | instructions per point | vs ln |\n|---|---:|---:|\n'
-for w in ${@:-ln colebrook batch haaland swamee_jain serghides blasius}; do
+ln=$(( $(per_point ln) - base ))
+cb=$(( $(per_point colebrook) - base ))
+ratio() { awk -v a="$1" -v b="$2" 'BEGIN{printf "%.2f", a/b}'; }
+printf '| workload | instructions per point | vs ln | vs one exact Colebrook call |\n|---|---:|---:|---:|\n'
+for w in ${@:-ln colebrook batch haaland swamee_jain serghides blasius line}; do
   n=$(( $(per_point "$w") - base ))
-  printf '| %s | %d | %s |\n' "$w" "$n" "$(awk -v a="$n" -v b="$((ln - base))" 'BEGIN{printf "%.2f", a/b}')"
+  printf '| %s | %d | %s | %s |\n' "$w" "$n" "$(ratio "$n" "$ln")" "$(ratio "$n" "$cb")"
 done

@@ -1,5 +1,5 @@
 //! One workload per run, for instruction counting under callgrind
-//! (`scripts/profile.sh`): `profile <none|ln|colebrook|haaland|...|batch> <points>`
+//! (`scripts/profile.sh`): `profile <none|ln|colebrook|haaland|...|batch|line> <points>`
 //! (`none` only draws the points: its count is subtracted from the others).
 //!
 //! Counting instructions is reproducible on a busy machine where wall-clock timings are
@@ -7,14 +7,14 @@
 //! cancels start-up and point generation.
 
 use hydrograde::friction::{Correlation, Options, darcy_factor, darcy_factor_batch};
-use hydrograde_benches::turbulent_points;
+use hydrograde_benches::{flows, line20, turbulent_points, water};
 use std::hint::black_box;
 use std::process::ExitCode;
 
 fn main() -> ExitCode {
     let args: Vec<String> = std::env::args().collect();
     let (Some(what), Some(n)) = (args.get(1), args.get(2).and_then(|s| s.parse().ok())) else {
-        eprintln!("usage: profile <none|ln|batch|CORRELATION> <points>");
+        eprintln!("usage: profile <none|ln|batch|line|CORRELATION> <points>");
         return ExitCode::from(2);
     };
     let (re, rr) = turbulent_points(n, 2026);
@@ -24,6 +24,18 @@ fn main() -> ExitCode {
         "ln" => {
             for (o, &r) in out.iter_mut().zip(&re) {
                 *o = black_box(r).ln();
+            }
+        }
+        "line" => {
+            // One flow per point through the 20-element line (the system curve's work
+            // per flow, on the calling thread).
+            let (Ok(line), Ok(w)) = (line20(), water()) else {
+                return ExitCode::FAILURE;
+            };
+            for (o, &q) in out.iter_mut().zip(&flows(n)) {
+                *o = line
+                    .required_head(&w, black_box(q))
+                    .map_or(f64::NAN, |h| h.0);
             }
         }
         "batch" => {
