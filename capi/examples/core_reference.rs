@@ -14,6 +14,7 @@
 use hydrograde::fitting::Fitting;
 use hydrograde::fluid::{Fluid, water_vapour_pressure};
 use hydrograde::friction::{Correlation, Options, Regime, darcy_factor};
+use hydrograde::line::{Element, Equipment, Line, LineOptions};
 use hydrograde::pipe::Pipe;
 use hydrograde::section::{Section, TurbulentDiameter};
 use hydrograde::units;
@@ -125,6 +126,7 @@ fn main() -> io::Result<()> {
         }
     }
     others(&mut out)?;
+    lines(&mut out)?;
     out.flush()
 }
 
@@ -291,6 +293,121 @@ fn others(out: &mut impl Write) -> io::Result<()> {
                     r,
                 )?;
             }
+        }
+    }
+    Ok(())
+}
+
+/// Invented demonstration routes, built the same way by the C tests
+/// (tests/c/test_line.c: `build_scenario`).
+fn scenario(n: i64) -> hydrograde::Result<Line> {
+    let fit = |name: &str| Fitting::named(name).map(Element::Fitting);
+    match n {
+        0 => {
+            // A pump discharge: pipe, elbow, check valve, rise, fixed K, smaller pipe,
+            // strainer rated by its drop.
+            let opts = LineOptions {
+                inlet_pressure: Some(3e5),
+                ..LineOptions::default()
+            };
+            Line::with_options(
+                vec![
+                    Element::Pipe(Pipe::circular(0.05, 30.0, 4.5e-5)?),
+                    fit("elbow_90_standard")?,
+                    fit("swing_check_valve")?,
+                    Element::rise(3.0)?,
+                    Element::Fitting(Fitting::k(0.5)?),
+                    Element::Pipe(Pipe::circular(0.04, 12.0, 1.5e-6)?),
+                    Element::Equipment(Equipment::pressure_drop("strainer", 2e4, 2e-3)?),
+                ],
+                opts,
+            )
+        }
+        1 => {
+            // A rectangular duct falling 2 m with a fixed-K fitting at its own bore.
+            let opts = LineOptions {
+                friction: Options::with_correlation(Correlation::Haaland),
+                ..LineOptions::default()
+            };
+            Line::with_options(
+                vec![
+                    Element::Fitting(Fitting::k(1.5)?.with_diameter(0.15)?),
+                    Element::Pipe(Pipe::new(Section::rectangle(0.2, 0.1)?, 50.0, 1e-4)?),
+                    Element::rise(-2.0)?,
+                ],
+                opts,
+            )
+        }
+        _ => Err(hydrograde::Error::invalid("scenario", "unknown")),
+    }
+}
+
+fn lines(out: &mut impl Write) -> io::Result<()> {
+    use Tok::{D, I};
+    let fluids = [Fluid::new(998.2, 1.002e-3), Fluid::water(293.15, 2e5)];
+    for sc in 0..2 {
+        let line = scenario(sc).map_err(io::Error::other)?;
+        for (fi, fluid) in fluids.iter().enumerate() {
+            let fluid = fluid.clone().map_err(io::Error::other)?;
+            for q in [0.0, 1e-6, 2e-4, 2e-3, -2e-3, 1e-2, f64::NAN] {
+                let r = line.evaluate(&fluid, q);
+                let totals = r.as_ref().map_err(Clone::clone).map(|r| {
+                    vec![
+                        D(r.head_loss),
+                        D(r.pressure_loss),
+                        D(r.static_head),
+                        D(r.required_head),
+                        D(r.drequired_head_dflow),
+                        D(r.density),
+                        D(r.outlet_pressure.unwrap_or(0.0)),
+                        I(r.warnings.bits() as i64),
+                        I(r.elements.len() as i64),
+                        D(r.head_loss_band.low),
+                        D(r.head_loss_band.high),
+                        D(r.required_head_band.low),
+                        D(r.required_head_band.high),
+                    ]
+                });
+                emit(out, "line_eval", &[I(sc), I(fi as i64), D(q)], totals)?;
+                if let Ok(r) = &r {
+                    for (i, e) in r.elements.iter().enumerate() {
+                        let fin = |x: f64| if x.is_finite() { x } else { 0.0 };
+                        emit(
+                            out,
+                            "line_element",
+                            &[I(sc), I(fi as i64), D(q), I(i as i64)],
+                            Ok(vec![
+                                D(fin(e.velocity)),
+                                D(fin(e.reynolds)),
+                                D(fin(e.friction_factor.unwrap_or(0.0))),
+                                D(fin(e.k.unwrap_or(0.0))),
+                                D(e.head_loss),
+                                D(e.dhead_dflow),
+                                D(e.pressure_out.unwrap_or(0.0)),
+                                I(e.warnings.bits() as i64),
+                                D(e.head_loss_band.low),
+                                D(e.head_loss_band.high),
+                            ]),
+                        )?;
+                    }
+                }
+            }
+            for head in [0.5, 3.0, 10.0, 40.0, -5.0, f64::INFINITY] {
+                let r = line
+                    .flow_for_head(&fluid, head)
+                    .map(|s| vec![D(s.flow), D(s.flow_band.low), D(s.flow_band.high)]);
+                emit(
+                    out,
+                    "line_flow_for_head",
+                    &[I(sc), I(fi as i64), D(head)],
+                    r,
+                )?;
+            }
+            let flows: Vec<f64> = (0..50).map(|i| -5e-3 + 2.5e-4 * i as f64).collect();
+            let r = line
+                .system_curve(&fluid, &flows)
+                .map(|h| h.into_iter().map(D).collect());
+            emit(out, "line_system_curve", &[I(sc), I(fi as i64)], r)?;
         }
     }
     Ok(())

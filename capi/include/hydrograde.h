@@ -140,6 +140,26 @@
 #define HG_TRANSITION_REFUSE 2
 
 /**
+ * A straight run (pipe or duct).
+ */
+#define HG_ELEMENT_PIPE 0
+
+/**
+ * A fitting (minor loss).
+ */
+#define HG_ELEMENT_FITTING 1
+
+/**
+ * An elevation change.
+ */
+#define HG_ELEMENT_RISE 2
+
+/**
+ * Rated equipment.
+ */
+#define HG_ELEMENT_EQUIPMENT 3
+
+/**
  * Major version of the library (from Cargo.toml; the build fails if they disagree).
  */
 #define HG_VERSION_MAJOR 0
@@ -223,6 +243,21 @@
 #define HG_SECTION_TRIANGLE 4
 
 /**
+ * A fluid for line evaluations: opaque; made by `hg_fluid_water`, `hg_fluid_air` or
+ * `hg_fluid_liquid`, released with `hg_fluid_free`. A fluid never changes after it is
+ * made, so any number of threads may use one at once.
+ */
+typedef struct hg_fluid hg_fluid;
+
+/**
+ * A route of pipes, fittings, rises and equipment in series: opaque. Made by
+ * `hg_line_new`, released by `hg_line_free`. Adding elements or changing options needs
+ * exclusive use of the handle; evaluating only reads it, so several threads may
+ * evaluate one line at once.
+ */
+typedef struct hg_line hg_line;
+
+/**
  * Options of `hg_darcy_factor_opts`. Fill it with `hg_friction_options_default`, then
  * change what you need; `struct_size` must be `sizeof(hg_friction_options)`.
  */
@@ -283,6 +318,167 @@ typedef struct hg_friction {
    */
   uint32_t warnings;
 } hg_friction;
+
+/**
+ * A line evaluated at one flow. Set `struct_size` to `sizeof(hg_line_result)` before the
+ * call; fields added in later versions go after the existing ones, so an old caller's
+ * smaller struct keeps working. Heads are in m of the flowing fluid. The `*_low` and
+ * `*_high` fields bound the expanded uncertainty (coverage factor k = 2).
+ */
+typedef struct hg_line_result {
+  /**
+   * Size of this struct in bytes, set by the caller.
+   */
+  size_t struct_size;
+  /**
+   * The flow, m³/s (signed).
+   */
+  double flow;
+  /**
+   * Friction plus minor losses, m (signed with the flow).
+   */
+  double head_loss;
+  /**
+   * ρ·g·head_loss, Pa.
+   */
+  double pressure_loss;
+  /**
+   * Sum of the rises, m.
+   */
+  double static_head;
+  /**
+   * head_loss + static_head, m.
+   */
+  double required_head;
+  /**
+   * d(required_head)/dQ, s/m².
+   */
+  double drequired_head_dflow;
+  /**
+   * Density the heads refer to, kg/m³ (the mean density for a gas).
+   */
+  double density;
+  /**
+   * Static pressure at the inlet, Pa absolute (0 when `has_pressures` is 0).
+   */
+  double inlet_pressure;
+  /**
+   * Static pressure at the outlet, Pa absolute (0 when `has_pressures` is 0).
+   */
+  double outlet_pressure;
+  /**
+   * 1 when the inlet pressure is known (set, or the gas's own), else 0.
+   */
+  int32_t has_pressures;
+  /**
+   * Warning bits of the whole line, `HG_WARN_*`.
+   */
+  uint32_t warnings;
+  /**
+   * Number of elements (results by index through `hg_line_element`).
+   */
+  size_t element_count;
+  /**
+   * Lower end of the head-loss band, m.
+   */
+  double head_loss_low;
+  /**
+   * Upper end of the head-loss band, m.
+   */
+  double head_loss_high;
+  /**
+   * Lower end of the pressure-loss band, Pa.
+   */
+  double pressure_loss_low;
+  /**
+   * Upper end of the pressure-loss band, Pa.
+   */
+  double pressure_loss_high;
+  /**
+   * Lower end of the required-head band, m.
+   */
+  double required_head_low;
+  /**
+   * Upper end of the required-head band, m.
+   */
+  double required_head_high;
+} hg_line_result;
+
+/**
+ * One element's share of a line evaluated at one flow. Set `struct_size` to
+ * `sizeof(hg_element_result)` before the call. Quantities an element does not have
+ * (a rise's velocity, a fitting's friction factor) are 0.
+ */
+typedef struct hg_element_result {
+  /**
+   * Size of this struct in bytes, set by the caller.
+   */
+  size_t struct_size;
+  /**
+   * What the element is, `HG_ELEMENT_*`.
+   */
+  int32_t kind;
+  /**
+   * Flow regime of a pipe, `HG_REGIME_*`; -1 for other elements.
+   */
+  int32_t regime;
+  /**
+   * Mean velocity in the element's bore, m/s (signed).
+   */
+  double velocity;
+  /**
+   * Reynolds number in that bore.
+   */
+  double reynolds;
+  /**
+   * Darcy friction factor (pipes).
+   */
+  double friction_factor;
+  /**
+   * Resistance coefficient K at this Reynolds number (fittings, fixed-K equipment).
+   */
+  double k;
+  /**
+   * Head loss, m (signed with the flow; 0 for rises).
+   */
+  double head_loss;
+  /**
+   * d(head loss)/dQ, s/m².
+   */
+  double dhead_dflow;
+  /**
+   * Elevation change, m (rises).
+   */
+  double static_head;
+  /**
+   * Static pressure at the element's outlet, Pa absolute (0 without an inlet pressure).
+   */
+  double pressure_out;
+  /**
+   * Warning bits of this element, `HG_WARN_*`.
+   */
+  uint32_t warnings;
+  /**
+   * 1 when `pressure_out` is known, else 0.
+   */
+  int32_t has_pressure;
+  /**
+   * Lower end of the head-loss band, m.
+   */
+  double head_loss_low;
+  /**
+   * Upper end of the head-loss band, m.
+   */
+  double head_loss_high;
+  /**
+   * Lower end of the friction-factor band (pipes; else 0).
+   */
+  double friction_factor_low;
+  /**
+   * Upper end of the friction-factor band (pipes; else 0).
+   */
+  double friction_factor_high;
+} hg_element_result;
 
 /**
  * The state of flow in a straight run at one flow rate. Set `struct_size` to
@@ -417,6 +613,72 @@ int32_t hg_water_vapour_pressure(double temperature,
                                  double *pressure);
 
 /**
+ * Makes liquid water at `temperature` (K) and absolute `pressure` (Pa), as `hg_water`,
+ * with its vapour pressure (for cavitation warnings) and property uncertainties (for the
+ * bands). Stores the handle in `*out`; free it with `hg_fluid_free`.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Thread-safe.
+ *
+ * # Safety
+ * `out` must be NULL or point to a writable `hg_fluid *`.
+ */
+int32_t hg_fluid_water(double temperature,
+                       double pressure,
+                       struct hg_fluid **out);
+
+/**
+ * Makes dry air at `temperature` (K) and absolute `pressure` (Pa), as `hg_air`; lines
+ * evaluated with a gas warn when the pressure loss exceeds 10 % of the inlet pressure.
+ * Stores the handle in `*out`; free it with `hg_fluid_free`.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Thread-safe.
+ *
+ * # Safety
+ * `out` must be NULL or point to a writable `hg_fluid *`.
+ */
+int32_t hg_fluid_air(double temperature,
+                     double pressure,
+                     struct hg_fluid **out);
+
+/**
+ * Makes a liquid of `density` (kg/m³, > 0) and dynamic `viscosity` (Pa·s, > 0), with
+ * no stated uncertainty and no vapour pressure. Stores the handle in `*out`; free it
+ * with `hg_fluid_free`.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Thread-safe.
+ *
+ * # Safety
+ * `out` must be NULL or point to a writable `hg_fluid *`.
+ */
+int32_t hg_fluid_liquid(double density,
+                        double viscosity,
+                        struct hg_fluid **out);
+
+/**
+ * Density (kg/m³) and dynamic viscosity (Pa·s) of a fluid handle.
+ *
+ * Returns `HG_OK` or `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * `fluid` must be NULL or a live handle; the outputs NULL or writable doubles.
+ */
+int32_t hg_fluid_properties(const struct hg_fluid *fluid,
+                            double *density,
+                            double *viscosity);
+
+/**
+ * Releases a fluid made by `hg_fluid_*`. NULL is accepted and ignored. Not thread-safe
+ * with respect to other uses of the same handle.
+ *
+ * # Safety
+ * `fluid` must be NULL or a live handle from `hg_fluid_*`, not used afterwards.
+ */
+void hg_fluid_free(struct hg_fluid *fluid);
+
+/**
  * Fills `opts` with the library's default friction options (Colebrook, regime limits
  * 2300 and 4000, laminar constant 64, C¹ blend in the transitional band) and sets
  * `opts->struct_size`.
@@ -534,6 +796,254 @@ const char *hg_correlation_name(int32_t correlation);
  * "turbulent"); NULL for an unknown value. Thread-safe.
  */
 const char *hg_regime_name(int32_t regime);
+
+/**
+ * Makes an empty line with the default options and stores it in `*out`; free it with
+ * `hg_line_free`.
+ *
+ * Returns `HG_OK` or `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * `out` must be NULL or point to a writable `hg_line *`.
+ */
+int32_t hg_line_new(struct hg_line **out);
+
+/**
+ * Releases a line. NULL is accepted and ignored.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle from `hg_line_new`, used by no other thread and
+ * not used afterwards.
+ */
+void hg_line_free(struct hg_line *line);
+
+/**
+ * Appends a round pipe: inside `diameter` (m, > 0), `length` (m, > 0), absolute wall
+ * `roughness` (m, ≥ 0, at most half the diameter).
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_add_pipe(struct hg_line *line,
+                         double diameter,
+                         double length,
+                         double roughness);
+
+/**
+ * Appends a straight duct of section `shape` (`HG_SECTION_*`, dimensions `a`, `b` as
+ * for `hg_section_properties`), `length` (m, > 0) and `roughness` (m, ≥ 0). Fittings
+ * beside it refer to its hydraulic diameter.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_INVALID` for
+ * b ≠ 0 on a one-dimension shape; `HG_ERR_NULL_POINTER`. Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_add_duct(struct hg_line *line,
+                         int32_t shape,
+                         double a,
+                         double b,
+                         double length,
+                         double roughness);
+
+/**
+ * Appends the catalogue fitting `name` (see `hg_fitting_catalogue_name`). Its K refers
+ * to the velocity in `diameter` (m, > 0), or, when `diameter` is 0, in the bore of the
+ * pipe before it (after it when it stands first); a line with no pipe to take it from
+ * fails when evaluated (`HG_ERR_INVALID`).
+ *
+ * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`
+ * for a negative diameter; `HG_ERR_INVALID` (a name not UTF-8, or a diameter given to a
+ * fitting whose bore its geometry fixes); `HG_ERR_NULL_POINTER`. Needs exclusive use of
+ * `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread; `name` NULL or a
+ * NUL-terminated string.
+ */
+int32_t hg_line_add_fitting(struct hg_line *line,
+                            const char *name,
+                            double diameter);
+
+/**
+ * Appends a fitting of fixed resistance coefficient `k` (≥ 0) on the velocity in
+ * `diameter` (m, > 0), or in the adjoining pipe's bore when `diameter` is 0.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_add_fitting_k(struct hg_line *line,
+                              double k,
+                              double diameter);
+
+/**
+ * Appends an elevation change `height` (m; positive up in the flow direction, negative
+ * for a drop).
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_NULL_POINTER`. Needs exclusive use of
+ * `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_add_rise(struct hg_line *line,
+                         double height);
+
+/**
+ * Appends rated equipment labelled `name` with a pressure drop `drop` (Pa, > 0) at the
+ * rating flow `at_flow` (m³/s, > 0), scaled with Q·|Q| at other flows (fixed K).
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_INVALID` for a
+ * label not UTF-8; `HG_ERR_NULL_POINTER`. Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread; `name` NULL or a
+ * NUL-terminated string.
+ */
+int32_t hg_line_add_equipment(struct hg_line *line,
+                              const char *name,
+                              double drop,
+                              double at_flow);
+
+/**
+ * Sets the friction options of every pipe of the line (correlation, regime limits and
+ * transition; the laminar constant is each section's own). See `hg_darcy_factor_opts`.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_INVALID` for a
+ * `struct_size` too small; `HG_ERR_NULL_POINTER`. Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread; `opts` NULL or a
+ * readable `hg_friction_options`.
+ */
+int32_t hg_line_set_friction_options(struct hg_line *line,
+                                     const struct hg_friction_options *opts);
+
+/**
+ * Sets the static pressure at the line's inlet (Pa absolute, > 0), which enables the
+ * outlet pressures and the cavitation and gas checks. 0 clears it.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_set_inlet_pressure(struct hg_line *line,
+                                   double pressure);
+
+/**
+ * The number of elements of the line in `*count`.
+ *
+ * Returns `HG_OK` or `HG_ERR_NULL_POINTER`. Thread-safe for concurrent readers.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle; `count` NULL or writable.
+ */
+int32_t hg_line_count(const struct hg_line *line,
+                      size_t *count);
+
+/**
+ * Evaluates `line` for `fluid` at signed volumetric flow `flow` (m³/s; at inlet
+ * conditions for a gas) into `*out`: head loss, pressure loss, static and required
+ * head with its derivative, pressures, warnings and uncertainty bands.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE` for the flow; `HG_ERR_INVALID` for a line that
+ * cannot be built (no elements, a fitting with no bore to refer to) or a `struct_size`
+ * too small; `HG_ERR_NO_SOLUTION` for transitional flow with `HG_TRANSITION_REFUSE`;
+ * `HG_ERR_OUT_OF_RANGE` for a gas losing more than 40 % of its inlet pressure;
+ * `HG_ERR_NULL_POINTER`. Thread-safe (the line is only read).
+ *
+ * # Safety
+ * `line` and `fluid` must be NULL or live handles; `out` NULL or a writable
+ * `hg_line_result` of `out->struct_size` bytes.
+ */
+int32_t hg_line_evaluate(const struct hg_line *line,
+                         const struct hg_fluid *fluid,
+                         double flow,
+                         struct hg_line_result *out);
+
+/**
+ * The result of element `index` (0-based, route order) of `line` evaluated for `fluid`
+ * at `flow` (m³/s), into `*out` (set `out->struct_size` first).
+ *
+ * Returns as `hg_line_evaluate`, and `HG_ERR_OUT_OF_RANGE` when `index` is not less
+ * than the number of elements. Thread-safe (the line is only read).
+ *
+ * # Safety
+ * As `hg_line_evaluate`, with `out` a writable `hg_element_result`.
+ */
+int32_t hg_line_element(const struct hg_line *line,
+                        const struct hg_fluid *fluid,
+                        double flow,
+                        size_t index,
+                        struct hg_element_result *out);
+
+/**
+ * Copies the label of element `index` ("pipe", "rise", the fitting's or equipment's
+ * name) into `buf` (at most `len - 1` bytes and a NUL) and stores its full length in
+ * `*needed`. The label does not depend on the flow, which is needed only to build the
+ * result: pass any finite flow.
+ *
+ * Returns as `hg_line_element`, and `HG_ERR_BUFFER_TOO_SMALL` when the label did not fit
+ * (the cut copy is still written). Thread-safe (the line is only read).
+ *
+ * # Safety
+ * As `hg_line_evaluate`; `buf` NULL or valid for `len` bytes; `needed` NULL or writable.
+ */
+int32_t hg_line_element_label(const struct hg_line *line,
+                              const struct hg_fluid *fluid,
+                              double flow,
+                              size_t index,
+                              char *buf,
+                              size_t len,
+                              size_t *needed);
+
+/**
+ * The flow `*flow` (m³/s, signed: negative when `head` is below the static head) at
+ * which the line's required head equals `head` (m of the flowing fluid), with the ends
+ * `*flow_low`, `*flow_high` of its uncertainty band (k = 2).
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_INVALID` for a line without any loss or
+ * that cannot be built; `HG_ERR_NO_SOLUTION` when no flow meets the head (e.g. reverse
+ * flow through a check valve); `HG_ERR_NULL_POINTER`. Thread-safe (the line is only
+ * read).
+ *
+ * # Safety
+ * `line` and `fluid` must be NULL or live handles; the outputs NULL or writable.
+ */
+int32_t hg_line_flow_for_head(const struct hg_line *line,
+                              const struct hg_fluid *fluid,
+                              double head,
+                              double *flow,
+                              double *flow_low,
+                              double *flow_high);
+
+/**
+ * The system curve: `heads[i]` = the required head (m) of the line at `flows[i]` (m³/s),
+ * for `n` flows; uses all cores above 4096 points, with the same results.
+ * `heads` may be the `flows` array itself.
+ *
+ * Returns `HG_OK`; the status of the first failing flow (message "element <i>: ..."),
+ * with `heads` unchanged; `HG_ERR_INVALID` for `n` = 0 or a line that cannot be built;
+ * `HG_ERR_NULL_POINTER`. Thread-safe (the line is only read).
+ *
+ * # Safety
+ * `line` and `fluid` must be NULL or live handles; `flows` and `heads` NULL or valid for
+ * `n` doubles.
+ */
+int32_t hg_line_system_curve(const struct hg_line *line,
+                             const struct hg_fluid *fluid,
+                             const double *flows,
+                             size_t n,
+                             double *heads);
 
 /**
  * The library version as a static string, e.g. "0.1.0" (never freed; never NULL).

@@ -13,6 +13,7 @@
 #include <cstdint>
 #include <stdexcept>
 #include <string>
+#include <utility>
 #include <vector>
 
 namespace hydrograde {
@@ -105,7 +106,291 @@ inline std::vector<double> darcy_factor(const std::vector<double>& re,
   return out;
 }
 
-//@@MORE@@
+/// Density (kg/m³) and dynamic viscosity (Pa·s) of a fluid state.
+struct properties {
+  double density;
+  double viscosity;
+};
+
+/// Liquid water at temperature (K) and absolute pressure (Pa).
+inline properties water(double temperature, double pressure) {
+  properties p{};
+  check(hg_water(temperature, pressure, &p.density, &p.viscosity));
+  return p;
+}
+
+/// Dry air at temperature (K) and absolute pressure (Pa).
+inline properties air(double temperature, double pressure) {
+  properties p{};
+  check(hg_air(temperature, pressure, &p.density, &p.viscosity));
+  return p;
+}
+
+/// Vapour pressure of water (Pa) at temperature (K).
+inline double water_vapour_pressure(double temperature) {
+  double p = 0.0;
+  check(hg_water_vapour_pressure(temperature, &p));
+  return p;
+}
+
+/// value converted from unit `from` to unit `to` (e.g. "in" to "mm").
+inline double convert(double value, const std::string& from, const std::string& to) {
+  double out = 0.0;
+  check(hg_convert(value, from.c_str(), to.c_str(), &out));
+  return out;
+}
+
+/// Pressure and head of a liquid of `density` (kg/m³) converted into each other.
+inline double convert_head(double value, const std::string& from, const std::string& to,
+                           double density) {
+  double out = 0.0;
+  check(hg_convert_head(value, from.c_str(), to.c_str(), density, &out));
+  return out;
+}
+
+namespace detail {
+template <class F>
+inline std::vector<std::string> names(F get) {
+  std::vector<std::string> out;
+  for (std::size_t i = 0;; ++i) {
+    std::size_t need = 0;
+    int32_t s = get(i, nullptr, 0, &need);
+    if (s == HG_ERR_OUT_OF_RANGE) break;
+    if (s != HG_ERR_BUFFER_TOO_SMALL) check(s);
+    std::string name(need, '\0');
+    check(get(i, &name[0], need + 1, &need));
+    out.push_back(name);
+  }
+  return out;
+}
+}  // namespace detail
+
+/// Every unit name hg_convert accepts.
+inline std::vector<std::string> unit_names() { return detail::names(hg_unit_name); }
+
+/// Every catalogue fitting name.
+inline std::vector<std::string> fitting_catalogue() {
+  return detail::names(hg_fitting_catalogue_name);
+}
+
+/// K and dK/dRe of a catalogue fitting.
+struct fitting_k_result {
+  double k;
+  double dk_dre;
+};
+
+/// K of the catalogue fitting `name` at Reynolds number re in bore (m), beside a pipe of
+/// relative roughness pipe_rel_roughness.
+inline fitting_k_result fitting_k(const std::string& name, double re, double bore,
+                                  double pipe_rel_roughness = 0.0) {
+  fitting_k_result r{};
+  check(hg_fitting_k(name.c_str(), re, bore, pipe_rel_roughness, &r.k, &r.dk_dre));
+  return r;
+}
+
+/// Geometry of a cross-section.
+struct section_geometry {
+  double area;
+  double wetted_perimeter;
+  double hydraulic_diameter;
+  double laminar_constant;
+};
+
+/// Geometry of section `shape` (HG_SECTION_*) with dimensions a, b (m; b = 0 for
+/// one-dimension shapes).
+inline section_geometry section(int32_t shape, double a, double b = 0.0) {
+  section_geometry g{};
+  check(hg_section_properties(shape, a, b, &g.area, &g.wetted_perimeter, &g.hydraulic_diameter,
+                              &g.laminar_constant));
+  return g;
+}
+
+/// Head loss (m) and its derivative (s/m²) of a round pipe at a flow.
+struct head_loss_result {
+  double head_loss;
+  double dhead_dflow;
+};
+
+/// Head loss of a round pipe (diameter, length, roughness in m) for a fluid of density
+/// (kg/m³) and viscosity (Pa·s) at flow (m³/s, signed).
+inline head_loss_result pipe_head_loss(double diameter, double length, double roughness,
+                                       double density, double viscosity, double flow) {
+  head_loss_result r{};
+  check(hg_pipe_head_loss(diameter, length, roughness, density, viscosity, flow, &r.head_loss,
+                          &r.dhead_dflow));
+  return r;
+}
+
+/// Head losses of one pipe at many flows.
+inline std::vector<head_loss_result> pipe_head_loss(double diameter, double length,
+                                                    double roughness, double density,
+                                                    double viscosity,
+                                                    const std::vector<double>& flows) {
+  std::vector<double> h(flows.size()), d(flows.size());
+  std::vector<head_loss_result> out(flows.size());
+  if (flows.empty()) return out;
+  check(hg_pipe_head_loss_batch(diameter, length, roughness, density, viscosity, flows.data(),
+                                flows.size(), h.data(), d.data()));
+  for (std::size_t i = 0; i < flows.size(); ++i) out[i] = {h[i], d[i]};
+  return out;
+}
+
+/// The flow state of a straight duct of any section.
+inline hg_pipe_flow duct_flow_state(int32_t shape, double a, double b, double length,
+                                    double roughness, double density, double viscosity,
+                                    double flow) {
+  hg_pipe_flow r{};
+  r.struct_size = sizeof r;
+  check(hg_duct_flow_state(shape, a, b, length, roughness, density, viscosity, flow, &r));
+  return r;
+}
+
+/// Reynolds number of flow (m³/s) in a round pipe of diameter (m).
+inline double reynolds(double flow, double diameter, double density, double viscosity) {
+  double re = 0.0;
+  check(hg_reynolds(flow, diameter, density, viscosity, &re));
+  return re;
+}
+
+/// A fluid for line evaluations (owns an hg_fluid; movable, not copyable).
+class fluid {
+ public:
+  /// Liquid water at temperature (K) and absolute pressure (Pa).
+  static fluid water(double temperature, double pressure) {
+    hg_fluid* f = nullptr;
+    check(hg_fluid_water(temperature, pressure, &f));
+    return fluid(f);
+  }
+  /// Dry air at temperature (K) and absolute pressure (Pa).
+  static fluid air(double temperature, double pressure) {
+    hg_fluid* f = nullptr;
+    check(hg_fluid_air(temperature, pressure, &f));
+    return fluid(f);
+  }
+  /// A liquid of density (kg/m³) and viscosity (Pa·s).
+  static fluid liquid(double density, double viscosity) {
+    hg_fluid* f = nullptr;
+    check(hg_fluid_liquid(density, viscosity, &f));
+    return fluid(f);
+  }
+  fluid(fluid&& o) noexcept : f_(o.f_) { o.f_ = nullptr; }
+  fluid& operator=(fluid&& o) noexcept {
+    std::swap(f_, o.f_);
+    return *this;
+  }
+  fluid(const fluid&) = delete;
+  fluid& operator=(const fluid&) = delete;
+  ~fluid() { hg_fluid_free(f_); }
+  /// Density and viscosity.
+  properties props() const {
+    properties p{};
+    check(hg_fluid_properties(f_, &p.density, &p.viscosity));
+    return p;
+  }
+  /// The C handle (still owned by this object).
+  const hg_fluid* get() const noexcept { return f_; }
+
+ private:
+  explicit fluid(hg_fluid* f) : f_(f) {}
+  hg_fluid* f_;
+};
+
+/// The flow that meets a head, with its uncertainty band (m³/s).
+struct flow_solution {
+  double flow;
+  double flow_low;
+  double flow_high;
+};
+
+/// A route of elements in series (owns an hg_line; movable, not copyable). The add_*
+/// methods return *this for chaining.
+class line {
+ public:
+  line() { check(hg_line_new(&l_)); }
+  line(line&& o) noexcept : l_(o.l_) { o.l_ = nullptr; }
+  line& operator=(line&& o) noexcept {
+    std::swap(l_, o.l_);
+    return *this;
+  }
+  line(const line&) = delete;
+  line& operator=(const line&) = delete;
+  ~line() { hg_line_free(l_); }
+
+  line& add_pipe(double diameter, double length, double roughness) {
+    check(hg_line_add_pipe(l_, diameter, length, roughness));
+    return *this;
+  }
+  line& add_duct(int32_t shape, double a, double b, double length, double roughness) {
+    check(hg_line_add_duct(l_, shape, a, b, length, roughness));
+    return *this;
+  }
+  /// A catalogue fitting; diameter 0 = the adjoining pipe's bore.
+  line& add_fitting(const std::string& name, double diameter = 0.0) {
+    check(hg_line_add_fitting(l_, name.c_str(), diameter));
+    return *this;
+  }
+  line& add_fitting_k(double k, double diameter = 0.0) {
+    check(hg_line_add_fitting_k(l_, k, diameter));
+    return *this;
+  }
+  line& add_rise(double height) {
+    check(hg_line_add_rise(l_, height));
+    return *this;
+  }
+  line& add_equipment(const std::string& name, double drop, double at_flow) {
+    check(hg_line_add_equipment(l_, name.c_str(), drop, at_flow));
+    return *this;
+  }
+  line& set_friction_options(const hg_friction_options& o) {
+    check(hg_line_set_friction_options(l_, &o));
+    return *this;
+  }
+  line& set_inlet_pressure(double pressure) {
+    check(hg_line_set_inlet_pressure(l_, pressure));
+    return *this;
+  }
+  std::size_t size() const {
+    std::size_t n = 0;
+    check(hg_line_count(l_, &n));
+    return n;
+  }
+  hg_line_result evaluate(const fluid& f, double flow) const {
+    hg_line_result r{};
+    r.struct_size = sizeof r;
+    check(hg_line_evaluate(l_, f.get(), flow, &r));
+    return r;
+  }
+  hg_element_result element(const fluid& f, double flow, std::size_t index) const {
+    hg_element_result r{};
+    r.struct_size = sizeof r;
+    check(hg_line_element(l_, f.get(), flow, index, &r));
+    return r;
+  }
+  std::string label(const fluid& f, double flow, std::size_t index) const {
+    std::size_t need = 0;
+    int32_t s = hg_line_element_label(l_, f.get(), flow, index, nullptr, 0, &need);
+    if (s != HG_ERR_BUFFER_TOO_SMALL) check(s);
+    std::string out(need, '\0');
+    check(hg_line_element_label(l_, f.get(), flow, index, &out[0], need + 1, &need));
+    return out;
+  }
+  flow_solution flow_for_head(const fluid& f, double head) const {
+    flow_solution s{};
+    check(hg_line_flow_for_head(l_, f.get(), head, &s.flow, &s.flow_low, &s.flow_high));
+    return s;
+  }
+  std::vector<double> system_curve(const fluid& f, const std::vector<double>& flows) const {
+    std::vector<double> heads(flows.size());
+    if (flows.empty()) return heads;
+    check(hg_line_system_curve(l_, f.get(), flows.data(), flows.size(), heads.data()));
+    return heads;
+  }
+  /// The C handle (still owned by this object).
+  hg_line* get() noexcept { return l_; }
+
+ private:
+  hg_line* l_ = nullptr;
+};
 
 }  // namespace hydrograde
 

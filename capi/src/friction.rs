@@ -144,6 +144,17 @@ fn options_from_c(o: &hg_friction_options) -> FfiResult<Options> {
     })
 }
 
+/// Reads a caller's `hg_friction_options` into core options.
+///
+/// # Safety
+/// `p` must be NULL or point to a readable `hg_friction_options`.
+pub(crate) unsafe fn read_options(name: &str, p: *const hg_friction_options) -> FfiResult<Options> {
+    let defaults = options_to_c(&Options::default());
+    // SAFETY: forwarded contract.
+    let o = unsafe { ffi::read_sized(name, p, defaults)? };
+    options_from_c(&o)
+}
+
 pub(crate) fn friction_to_c(fr: &Friction) -> hg_friction {
     hg_friction {
         struct_size: std::mem::size_of::<hg_friction>(),
@@ -267,10 +278,9 @@ pub unsafe extern "C" fn hg_darcy_factor_opts(
     guard(|| {
         // SAFETY: forwarded contract.
         unsafe { ffi::check_sized_out("out", out)? };
-        let defaults = options_to_c(&Options::default());
         // SAFETY: forwarded contract.
-        let o = unsafe { ffi::read_sized("opts", opts, defaults)? };
-        let fr = friction::darcy_factor(re, rel_roughness, &options_from_c(&o)?)?;
+        let o = unsafe { read_options("opts", opts)? };
+        let fr = friction::darcy_factor(re, rel_roughness, &o)?;
         // SAFETY: forwarded contract.
         unsafe { ffi::write_sized("out", out, &friction_to_c(&fr)) }
     })

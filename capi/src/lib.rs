@@ -14,6 +14,8 @@ mod ffi;
 mod fitting;
 mod fluid;
 mod friction;
+mod line;
+mod line_eval;
 mod meta;
 mod pipe;
 mod section;
@@ -26,6 +28,8 @@ pub use ffi::{
 pub use fitting::*;
 pub use fluid::*;
 pub use friction::*;
+pub use line::*;
+pub use line_eval::*;
 pub use meta::*;
 pub use pipe::*;
 pub use section::*;

@@ -1,0 +1,267 @@
+#define _POSIX_C_SOURCE 200809L
+/* Lines and fluid handles through the C ABI: results against the Rust core bit for bit
+ * (the invented scenarios of capi/examples/core_reference.rs, built here the same way),
+ * bad input and bad handles, the growable result struct, and 8 threads evaluating one
+ * line at once.
+ * Usage: test_line REFERENCE_FILE */
+#include <math.h>
+#include <pthread.h>
+#include <stddef.h>
+#include <stdlib.h>
+
+#include "hydrograde.h"
+#include "check.h"
+#include "records.h"
+
+static const char *ref_path;
+static hg_line *lines[2];
+static hg_fluid *fluids[2];
+
+static size_t msg_len(void) { return hg_last_error(NULL, 0); }
+
+/* The same routes as `scenario` in capi/examples/core_reference.rs. */
+static int32_t build_scenario(int n, hg_line **out) {
+  int32_t s = hg_line_new(out);
+  hg_line *l = *out;
+  if (n == 0) {
+    s |= hg_line_set_inlet_pressure(l, 3e5);
+    s |= hg_line_add_pipe(l, 0.05, 30.0, 4.5e-5);
+    s |= hg_line_add_fitting(l, "elbow_90_standard", 0.0);
+    s |= hg_line_add_fitting(l, "swing_check_valve", 0.0);
+    s |= hg_line_add_rise(l, 3.0);
+    s |= hg_line_add_fitting_k(l, 0.5, 0.0);
+    s |= hg_line_add_pipe(l, 0.04, 12.0, 1.5e-6);
+    s |= hg_line_add_equipment(l, "strainer", 2e4, 2e-3);
+  } else {
+    hg_friction_options o;
+    s |= hg_friction_options_default(&o);
+    o.correlation = HG_CORRELATION_HAALAND;
+    s |= hg_line_set_friction_options(l, &o);
+    s |= hg_line_add_fitting_k(l, 1.5, 0.15);
+    s |= hg_line_add_duct(l, HG_SECTION_RECTANGLE, 0.2, 0.1, 50.0, 1e-4);
+    s |= hg_line_add_rise(l, -2.0);
+  }
+  return s;
+}
+
+static long check_line_record(const record *r, int quiet) {
+  const hg_line *l = lines[r->in[0].i];
+  const hg_fluid *f = fluids[r->in[1].i];
+  double got[64];
+  int ngot = 0;
+  int32_t s = -1;
+  if (strcmp(r->tag, "line_eval") == 0) {
+    hg_line_result x;
+    memset(&x, 0, sizeof x);
+    x.struct_size = sizeof x;
+    s = hg_line_evaluate(l, f, r->in[2].d, &x);
+    double g[] = {x.head_loss, x.pressure_loss, x.static_head, x.required_head, x.drequired_head_dflow,
+                  x.density, x.outlet_pressure, x.warnings, (double)x.element_count, x.head_loss_low,
+                  x.head_loss_high, x.required_head_low, x.required_head_high};
+    memcpy(got, g, sizeof g), ngot = 13;
+  } else if (strcmp(r->tag, "line_element") == 0) {
+    hg_element_result e;
+    memset(&e, 0, sizeof e);
+    e.struct_size = sizeof e;
+    s = hg_line_element(l, f, r->in[2].d, (size_t)r->in[3].i, &e);
+    double g[] = {e.velocity, e.reynolds, e.friction_factor, e.k, e.head_loss, e.dhead_dflow,
+                  e.pressure_out, e.warnings, e.head_loss_low, e.head_loss_high};
+    memcpy(got, g, sizeof g), ngot = 10;
+  } else if (strcmp(r->tag, "line_flow_for_head") == 0) {
+    s = hg_line_flow_for_head(l, f, r->in[2].d, &got[0], &got[1], &got[2]), ngot = 3;
+  } else if (strcmp(r->tag, "line_system_curve") == 0) {
+    double q[50];
+    for (int i = 0; i < 50; i++) q[i] = -5e-3 + 2.5e-4 * i;
+    s = hg_line_system_curve(l, f, q, 50, got), ngot = 50;
+    /* In place gives the same. */
+    if (s == HG_OK && (hg_line_system_curve(l, f, q, 50, q) != HG_OK || memcmp(q, got, sizeof q) != 0)) s = -2;
+  }
+  int same = r->err ? s == code_of_kind(r->kind) && msg_len() > 0 : s == HG_OK && same_outputs(r, got, ngot);
+  if (!quiet) CHECK(same, "%s scenario %lld fluid %lld: status %d (want %s)", r->tag, r->in[0].i, r->in[1].i, s,
+                    r->err ? r->kind : "HG_OK");
+  return !same;
+}
+
+static void test_handles_and_bad_input(void) {
+  hg_line *l = NULL;
+  hg_fluid *f = NULL;
+  hg_line_result x;
+  hg_element_result e;
+  double q = 1e-3, a, b, c;
+  size_t n = 99, need = 0;
+  char buf[32];
+  x.struct_size = sizeof x, e.struct_size = sizeof e;
+  hg_line_free(NULL);
+  hg_fluid_free(NULL);
+  CHECK(hg_line_new(NULL) == HG_ERR_NULL_POINTER && msg_len() > 0, "line_new NULL");
+  CHECK(hg_fluid_water(293.15, 1e5, NULL) == HG_ERR_NULL_POINTER, "fluid NULL out");
+  CHECK(hg_fluid_water(NAN, 1e5, &f) == HG_ERR_NOT_FINITE && f == NULL, "water NaN");
+  CHECK(hg_fluid_air(150.0, 1e5, &f) == HG_ERR_OUT_OF_RANGE && f == NULL, "air too cold");
+  CHECK(hg_fluid_liquid(-1.0, 1e-3, &f) == HG_ERR_OUT_OF_RANGE && f == NULL, "negative density");
+  CHECK(hg_fluid_liquid(1000.0, INFINITY, &f) == HG_ERR_NOT_FINITE && f == NULL, "inf viscosity");
+  CHECK(hg_fluid_air(293.15, 1e5, &f) == HG_OK && f != NULL, "air");
+  CHECK(hg_fluid_properties(f, &a, &b) == HG_OK && a > 1.0 && a < 1.3 && b > 1e-5, "air properties");
+  double rho, mu;
+  CHECK(hg_air(293.15, 1e5, &rho, &mu) == HG_OK && bits_of(rho) == bits_of(a) && bits_of(mu) == bits_of(b),
+        "hg_air equals the handle's");
+  CHECK(hg_fluid_properties(NULL, &a, &b) == HG_ERR_NULL_POINTER, "properties NULL fluid");
+  CHECK(hg_fluid_properties(f, NULL, &b) == HG_ERR_NULL_POINTER, "properties NULL out");
+  CHECK(hg_fluid_properties(f, &a, NULL) == HG_ERR_NULL_POINTER, "properties NULL out");
+
+  CHECK(hg_line_new(&l) == HG_OK && l != NULL, "line_new");
+  CHECK(hg_line_count(l, &n) == HG_OK && n == 0, "empty count");
+  CHECK(hg_line_count(NULL, &n) == HG_ERR_NULL_POINTER && hg_line_count(l, NULL) == HG_ERR_NULL_POINTER, "count NULL");
+  CHECK(hg_line_evaluate(l, f, q, &x) == HG_ERR_INVALID && msg_len() > 0, "empty line");
+  CHECK(hg_line_add_fitting(l, "gate_valve", 0.0) == HG_OK, "fitting first");
+  CHECK(hg_line_evaluate(l, f, q, &x) == HG_ERR_INVALID && msg_len() > 0, "fitting with no pipe");
+  CHECK(hg_line_add_pipe(l, 0.05, 10.0, 4.5e-5) == HG_OK, "pipe after it");
+  CHECK(hg_line_evaluate(l, f, q, &x) == HG_OK, "fitting takes the next pipe's bore");
+  const double bad[] = {NAN, INFINITY, -INFINITY, -1.0, 0.0};
+  for (int i = 0; i < 5; i++) {
+    double v = bad[i];
+    int neg_or_zero = i >= 3;
+    CHECK(hg_line_add_pipe(l, v, 10, 0) != HG_OK && msg_len() > 0, "pipe diameter %g", v);
+    CHECK(hg_line_add_pipe(l, 0.05, v, 0) != HG_OK && msg_len() > 0, "pipe length %g", v);
+    if (i != 4) CHECK(hg_line_add_pipe(l, 0.05, 10, v) != HG_OK && msg_len() > 0, "pipe roughness %g", v);
+    CHECK(hg_line_add_duct(l, HG_SECTION_RECTANGLE, v, 0.1, 10, 0) != HG_OK, "duct a %g", v);
+    CHECK(hg_line_add_duct(l, HG_SECTION_RECTANGLE, 0.1, v, 10, 0) != HG_OK, "duct b %g", v);
+    if (i != 4) CHECK(hg_line_add_fitting(l, "gate_valve", v) != HG_OK && msg_len() > 0, "fitting diameter %g", v);
+    if (i != 4) CHECK(hg_line_add_fitting_k(l, v, 0.0) != HG_OK, "k %g", v);
+    if (!neg_or_zero) CHECK(hg_line_add_rise(l, v) == HG_ERR_NOT_FINITE && msg_len() > 0, "rise %g", v);
+    CHECK(hg_line_add_equipment(l, "meter", v, 1e-3) != HG_OK, "drop %g", v);
+    CHECK(hg_line_add_equipment(l, "meter", 1e4, v) != HG_OK, "at_flow %g", v);
+    if (i != 4) CHECK(hg_line_set_inlet_pressure(l, v) != HG_OK && msg_len() > 0, "inlet %g", v);
+    int32_t st = hg_line_evaluate(l, f, v, &x);
+    /* -1 m3/s of air would lose far more than its inlet pressure: no solution. */
+    CHECK(neg_or_zero ? st == HG_OK || (st == HG_ERR_NO_SOLUTION && msg_len() > 0) : st == HG_ERR_NOT_FINITE,
+          "flow %g: %d", v, st);
+    CHECK(hg_line_flow_for_head(l, f, v, &a, &b, &c) == (neg_or_zero ? HG_ERR_NO_SOLUTION : HG_ERR_NOT_FINITE) ||
+              (neg_or_zero && hg_line_flow_for_head(l, f, v, &a, &b, &c) == HG_OK),
+          "head %g", v);
+  }
+  CHECK(hg_line_count(l, &n) == HG_OK && n == 2, "bad elements were not added: %zu", n);
+  CHECK(hg_line_add_duct(l, 7, 0.1, 0.1, 10, 0) == HG_ERR_OUT_OF_RANGE, "shape 7");
+  CHECK(hg_line_add_fitting(l, "nonesuch", 0.0) == HG_ERR_UNKNOWN_NAME && msg_len() > 0, "unknown fitting");
+  CHECK(hg_line_add_fitting(l, NULL, 0.0) == HG_ERR_NULL_POINTER, "fitting NULL name");
+  CHECK(hg_line_add_equipment(l, NULL, 1e4, 1e-3) == HG_ERR_NULL_POINTER, "equipment NULL name");
+  CHECK(hg_line_add_equipment(l, "\xff", 1e4, 1e-3) == HG_ERR_INVALID, "equipment not UTF-8");
+  CHECK(hg_line_add_pipe(NULL, 0.05, 10, 0) == HG_ERR_NULL_POINTER, "add to NULL line");
+  CHECK(hg_line_add_duct(NULL, 0, 0.05, 0, 10, 0) == HG_ERR_NULL_POINTER, "add to NULL line");
+  CHECK(hg_line_add_fitting(NULL, "gate_valve", 0) == HG_ERR_NULL_POINTER, "add to NULL line");
+  CHECK(hg_line_add_fitting_k(NULL, 1, 0) == HG_ERR_NULL_POINTER, "add to NULL line");
+  CHECK(hg_line_add_rise(NULL, 1) == HG_ERR_NULL_POINTER, "add to NULL line");
+  CHECK(hg_line_add_equipment(NULL, "m", 1e4, 1e-3) == HG_ERR_NULL_POINTER, "add to NULL line");
+  CHECK(hg_line_set_inlet_pressure(NULL, 1e5) == HG_ERR_NULL_POINTER, "NULL line");
+  CHECK(hg_line_set_friction_options(l, NULL) == HG_ERR_NULL_POINTER, "NULL options");
+  hg_friction_options o;
+  hg_friction_options_default(&o);
+  CHECK(hg_line_set_friction_options(NULL, &o) == HG_ERR_NULL_POINTER, "NULL line");
+  o.turbulent_limit = 1000.0;
+  CHECK(hg_line_set_friction_options(l, &o) == HG_ERR_OUT_OF_RANGE && msg_len() > 0, "crossed limits");
+  o.turbulent_limit = 4000.0, o.transition = HG_TRANSITION_REFUSE;
+  CHECK(hg_line_set_friction_options(l, &o) == HG_OK, "refuse");
+  double q_tr = 0.05 * 0.05 * 3.14159 / 4 * 3000.0 * 1.8e-5 / 1.19 / 0.05; /* Re about 3000 in air */
+  CHECK(hg_line_evaluate(l, f, q_tr, &x) == HG_ERR_NO_SOLUTION && msg_len() > 0, "transitional refused");
+  hg_friction_options_default(&o);
+  CHECK(hg_line_set_friction_options(l, &o) == HG_OK, "defaults back");
+  CHECK(hg_line_set_inlet_pressure(l, 0.0) == HG_OK, "clear inlet pressure");
+
+  CHECK(hg_line_evaluate(NULL, f, q, &x) == HG_ERR_NULL_POINTER, "evaluate NULL line");
+  CHECK(hg_line_evaluate(l, NULL, q, &x) == HG_ERR_NULL_POINTER, "evaluate NULL fluid");
+  CHECK(hg_line_evaluate(l, f, q, NULL) == HG_ERR_NULL_POINTER, "evaluate NULL out");
+  x.struct_size = offsetof(hg_line_result, head_loss_low);
+  CHECK(hg_line_evaluate(l, f, q, &x) == HG_ERR_INVALID && msg_len() > 0, "struct_size below the first release");
+  /* A newer caller's larger struct: the library fills what it knows and leaves the rest. */
+  unsigned char big[sizeof(hg_line_result) + 64];
+  memset(big, 0xAB, sizeof big);
+  hg_line_result *xb = (hg_line_result *)(void *)big;
+  xb->struct_size = sizeof big;
+  CHECK(hg_line_evaluate(l, f, q, xb) == HG_OK && xb->struct_size == sizeof big, "larger struct");
+  int tail_ok = 1;
+  for (size_t i = sizeof(hg_line_result); i < sizeof big; i++) tail_ok &= big[i] == 0xAB;
+  CHECK(tail_ok && xb->element_count == 2, "bytes past our struct untouched");
+  x.struct_size = sizeof x;
+  CHECK(hg_line_evaluate(l, f, q, &x) == HG_OK && x.has_pressures == 1 && x.inlet_pressure == 1e5,
+        "a gas carries its own pressure");
+
+  CHECK(hg_line_element(l, f, q, 1, &e) == HG_OK && e.kind == HG_ELEMENT_PIPE && e.regime == HG_REGIME_LAMINAR && e.reynolds > 0,
+        "element 1 is the pipe");
+  CHECK(hg_line_element(l, f, q, 0, &e) == HG_OK && e.kind == HG_ELEMENT_FITTING && e.regime == -1 && e.k > 0,
+        "element 0 is the valve");
+  CHECK(hg_line_element(l, f, q, 2, &e) == HG_ERR_OUT_OF_RANGE && msg_len() > 0, "index past the end");
+  CHECK(hg_line_element(l, f, q, SIZE_MAX, &e) == HG_ERR_OUT_OF_RANGE, "index SIZE_MAX");
+  CHECK(hg_line_element(NULL, f, q, 0, &e) == HG_ERR_NULL_POINTER, "element NULL line");
+  CHECK(hg_line_element(l, NULL, q, 0, &e) == HG_ERR_NULL_POINTER, "element NULL fluid");
+  CHECK(hg_line_element(l, f, q, 0, NULL) == HG_ERR_NULL_POINTER, "element NULL out");
+  CHECK(hg_line_element(l, f, NAN, 0, &e) == HG_ERR_NOT_FINITE, "element NaN flow");
+  e.struct_size = 0;
+  CHECK(hg_line_element(l, f, q, 0, &e) == HG_ERR_INVALID, "element struct_size 0");
+
+  CHECK(hg_line_element_label(l, f, q, 0, buf, sizeof buf, &need) == HG_OK && strcmp(buf, "gate_valve") == 0 &&
+            need == 10, "label '%s'", buf);
+  CHECK(hg_line_element_label(l, f, q, 1, buf, sizeof buf, &need) == HG_OK && strcmp(buf, "pipe") == 0, "label pipe");
+  CHECK(hg_line_element_label(l, f, q, 0, buf, 4, &need) == HG_ERR_BUFFER_TOO_SMALL && strcmp(buf, "gat") == 0 &&
+            need == 10, "label cut");
+  CHECK(hg_line_element_label(l, f, q, 0, NULL, 0, &need) == HG_ERR_BUFFER_TOO_SMALL && need == 10, "label length");
+  CHECK(hg_line_element_label(l, f, q, 0, NULL, 8, &need) == HG_ERR_NULL_POINTER, "label NULL buf");
+  CHECK(hg_line_element_label(l, f, q, 0, buf, sizeof buf, NULL) == HG_ERR_NULL_POINTER, "label NULL needed");
+  CHECK(hg_line_element_label(l, f, q, 5, buf, sizeof buf, &need) == HG_ERR_OUT_OF_RANGE, "label index");
+  CHECK(hg_line_element_label(NULL, f, q, 0, buf, sizeof buf, &need) == HG_ERR_NULL_POINTER, "label NULL line");
+
+  CHECK(hg_line_flow_for_head(NULL, f, 1, &a, &b, &c) == HG_ERR_NULL_POINTER, "solve NULL line");
+  CHECK(hg_line_flow_for_head(l, NULL, 1, &a, &b, &c) == HG_ERR_NULL_POINTER, "solve NULL fluid");
+  CHECK(hg_line_flow_for_head(l, f, 1, NULL, &b, &c) == HG_ERR_NULL_POINTER, "solve NULL flow");
+  CHECK(hg_line_flow_for_head(l, f, 1, &a, NULL, &c) == HG_ERR_NULL_POINTER, "solve NULL low");
+  CHECK(hg_line_flow_for_head(l, f, 1, &a, &b, NULL) == HG_ERR_NULL_POINTER, "solve NULL high");
+  CHECK(hg_line_flow_for_head(l, f, 1.0, &a, &b, &c) == HG_OK && b <= a && a <= c, "solve band");
+  /* Round trip: the required head at the solved flow is the head asked for. */
+  CHECK(hg_line_evaluate(l, f, a, &x) == HG_OK && fabs(x.required_head - 1.0) < 1e-9, "round trip %.17g",
+        x.required_head);
+
+  double qs[3] = {1e-3, 2e-3, NAN}, hs[3] = {7, 7, 7};
+  CHECK(hg_line_system_curve(l, f, qs, 3, hs) == HG_ERR_NOT_FINITE && hs[0] == 7 && msg_len() > 0, "curve NaN");
+  CHECK(hg_line_system_curve(l, f, qs, 0, hs) == HG_ERR_INVALID && msg_len() > 0, "curve n 0");
+  CHECK(hg_line_system_curve(l, f, NULL, 2, hs) == HG_ERR_NULL_POINTER, "curve NULL flows");
+  CHECK(hg_line_system_curve(l, f, qs, 2, NULL) == HG_ERR_NULL_POINTER, "curve NULL heads");
+  CHECK(hg_line_system_curve(NULL, f, qs, 2, hs) == HG_ERR_NULL_POINTER, "curve NULL line");
+  CHECK(hg_line_system_curve(l, NULL, qs, 2, hs) == HG_ERR_NULL_POINTER, "curve NULL fluid");
+  CHECK(hg_line_system_curve(l, f, qs, 2, hs) == HG_OK && hs[2] == 7, "curve writes n heads");
+  hg_line_free(l);
+  hg_fluid_free(f);
+}
+
+typedef struct {
+  long bad;
+} thread_arg;
+
+static void *worker(void *p) {
+  thread_arg *t = p;
+  t->bad += for_each_record(ref_path, "line_", check_line_record, 1);
+  return NULL;
+}
+
+int main(int argc, char **argv) {
+  if (argc < 2) {
+    fprintf(stderr, "usage: %s REFERENCE_FILE\n", argv[0]);
+    return 2;
+  }
+  ref_path = argv[1];
+  for (int i = 0; i < 2; i++) CHECK(build_scenario(i, &lines[i]) == HG_OK, "scenario %d", i);
+  CHECK(hg_fluid_liquid(998.2, 1.002e-3, &fluids[0]) == HG_OK, "liquid");
+  CHECK(hg_fluid_water(293.15, 2e5, &fluids[1]) == HG_OK, "water");
+  long bad = for_each_record(ref_path, "line_", check_line_record, 0);
+  printf("bitwise: line records, %ld differ\n", bad);
+  test_handles_and_bad_input();
+  pthread_t th[8];
+  thread_arg args[8];
+  for (int i = 0; i < 8; i++) {
+    args[i].bad = 0;
+    CHECK(pthread_create(&th[i], NULL, worker, &args[i]) == 0, "thread %d", i);
+  }
+  for (int i = 0; i < 8; i++) {
+    pthread_join(th[i], NULL);
+    CHECK(args[i].bad == 0, "thread %d: %ld differences", i, args[i].bad);
+  }
+  for (int i = 0; i < 2; i++) hg_line_free(lines[i]), hg_fluid_free(fluids[i]);
+  return check_summary("test_line");
+}
