@@ -232,7 +232,12 @@ mod tests {
     fn contributions_sum_to_one_and_are_sorted() {
         let b = Band::from_sources(
             10.0,
-            &[("a".into(), 0.1), ("b".into(), 0.3), ("a".into(), 0.1), ("c".into(), 0.0)],
+            &[
+                ("a".into(), 0.1),
+                ("b".into(), 0.3),
+                ("a".into(), 0.1),
+                ("c".into(), 0.0),
+            ],
         );
         let s: f64 = b.contributions.iter().map(|c| c.share).sum();
         assert!((s - 1.0).abs() < 1e-15);

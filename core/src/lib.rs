@@ -32,6 +32,11 @@ pub mod warning;
 pub use error::{Error, ErrorKind, Result};
 pub use friction::{Correlation, Friction, Options, Regime, Transition, darcy_factor};
 pub use warning::Warnings;
+// Physical inputs: fluid, section, roughness, sizes.
+pub use fluid::{Fluid, Phase};
+pub use roughness::Material;
+pub use section::{Section, TurbulentDiameter};
+pub use sizes::{PipeSize, PipeTable};
 // fitting (minor losses) and units
 pub use fitting::{Fitting, Resistance};
 pub use units::{STANDARD_GRAVITY, convert, convert_head};

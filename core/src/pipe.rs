@@ -130,7 +130,8 @@ impl Pipe {
         let g2 = 2.0 * STANDARD_GRAVITY;
         let geom = self.length / (dh * g2);
         let mut warnings = self.section.warnings();
-        let laminar_direct = re_t < opts.laminar_limit && opts.correlation != Correlation::Churchill;
+        let laminar_direct =
+            re_t < opts.laminar_limit && opts.correlation != Correlation::Churchill;
         let fr: Friction = if laminar_direct || re_t == 0.0 {
             // Exact laminar law, written so that zero flow is regular.
             let lam_head_per_speed = c * nu / dh * geom; // h / V
@@ -143,7 +144,11 @@ impl Pipe {
                 dhead_dflow: lam_head_per_speed / area,
                 dhead_dfactor: geom * velocity * speed,
                 df_drel_roughness: 0.0,
-                df_dre: if re_h > 0.0 { -c / (re_h * re_h) / scale } else { 0.0 },
+                df_dre: if re_h > 0.0 {
+                    -c / (re_h * re_h) / scale
+                } else {
+                    0.0
+                },
                 warnings,
             });
         } else {
@@ -174,7 +179,12 @@ impl Pipe {
     /// Head loss (m) and its derivative with respect to flow (s/m²) with default options:
     /// the call a simulator's Newton loop makes.
     pub fn head_loss(&self, fluid: &Fluid, flow: f64) -> Result<(f64, f64)> {
-        let s = self.flow_state(fluid, flow, &Options::default(), TurbulentDiameter::Hydraulic)?;
+        let s = self.flow_state(
+            fluid,
+            flow,
+            &Options::default(),
+            TurbulentDiameter::Hydraulic,
+        )?;
         Ok((s.head_loss, s.dhead_dflow))
     }
 }
@@ -194,11 +204,16 @@ mod tests {
         let p = Pipe::circular(0.01, 10.0, 0.0).unwrap();
         let q = 1e-6;
         let (h, dh) = p.head_loss(&water(), q).unwrap();
-        let exact = 128.0 * 1e-3 * 10.0 * q / (std::f64::consts::PI * 998.0 * STANDARD_GRAVITY * 1e-8);
+        let exact =
+            128.0 * 1e-3 * 10.0 * q / (std::f64::consts::PI * 998.0 * STANDARD_GRAVITY * 1e-8);
         assert_relative_eq!(h, exact, max_relative = 1e-14);
         assert_relative_eq!(dh, exact / q, max_relative = 1e-14);
         assert_eq!(p.head_loss(&water(), 0.0).unwrap().0, 0.0);
-        assert_relative_eq!(p.head_loss(&water(), 0.0).unwrap().1, exact / q, max_relative = 1e-14);
+        assert_relative_eq!(
+            p.head_loss(&water(), 0.0).unwrap().1,
+            exact / q,
+            max_relative = 1e-14
+        );
     }
 
     #[test]
@@ -220,17 +235,34 @@ mod tests {
         for q in [2e-5, 1e-4, 1.5e-4, 2.2e-4, 1e-3, 1e-2, -3e-3] {
             let (_, d) = p.head_loss(&water(), q).unwrap();
             let h = 1e-7 * q.abs();
-            let fd = (p.head_loss(&water(), q + h).unwrap().0 - p.head_loss(&water(), q - h).unwrap().0) / (2.0 * h);
+            let fd = (p.head_loss(&water(), q + h).unwrap().0
+                - p.head_loss(&water(), q - h).unwrap().0)
+                / (2.0 * h);
             assert_relative_eq!(d, fd, max_relative = 1e-6);
         }
     }
 
     #[test]
     fn bad_inputs() {
-        assert!(Pipe::circular(0.05, -1.0, 0.0).unwrap_err().to_string().starts_with("length = -1"));
-        assert!(Pipe::circular(0.05, 1.0, -1e-3).unwrap_err().to_string().starts_with("roughness = -0.001"));
+        assert!(
+            Pipe::circular(0.05, -1.0, 0.0)
+                .unwrap_err()
+                .to_string()
+                .starts_with("length = -1")
+        );
+        assert!(
+            Pipe::circular(0.05, 1.0, -1e-3)
+                .unwrap_err()
+                .to_string()
+                .starts_with("roughness = -0.001")
+        );
         assert!(Pipe::circular(0.05, 1.0, 0.03).is_err());
         let p = Pipe::circular(0.05, 1.0, 0.0).unwrap();
-        assert!(p.head_loss(&water(), f64::NAN).unwrap_err().to_string().starts_with("flow = NaN"));
+        assert!(
+            p.head_loss(&water(), f64::NAN)
+                .unwrap_err()
+                .to_string()
+                .starts_with("flow = NaN")
+        );
     }
 }

@@ -3,7 +3,7 @@
 //!
 //! The laminar constant C is the product f·Re of fully developed laminar flow, with f the
 //! Darcy friction factor and Re built on the hydraulic diameter D_h = 4A/P. Each value
-//! below is the exact solution of the Poisseuille problem in that section (Shah & London
+//! below is the exact solution of the Poiseuille problem in that section (Shah & London
 //! 1978, *Laminar Flow Forced Convection in Ducts*, chapters on each shape):
 //!
 //! | section | C = f·Re (Darcy, on D_h) | limits |

@@ -36,9 +36,19 @@ fn normal(rng: &mut StdRng) -> f64 {
 /// Distributions: friction model, diameter, density and viscosity normal; roughness,
 /// fitting K and equipment ratings rectangular — the same standard uncertainties and the
 /// same correlations as the first-order band.
-pub fn monte_carlo(line: &Line, fluid: &Fluid, flow: f64, samples: usize, seed: u64) -> Result<MonteCarlo> {
+pub fn monte_carlo(
+    line: &Line,
+    fluid: &Fluid,
+    flow: f64,
+    samples: usize,
+    seed: u64,
+) -> Result<MonteCarlo> {
     if samples < 100 {
-        return Err(Error::out_of_range("samples", samples as f64, "must be at least 100"));
+        return Err(Error::out_of_range(
+            "samples",
+            samples as f64,
+            "must be at least 100",
+        ));
     }
     let (work, q, _) = line.working_fluid(fluid, flow, line.options().inlet_pressure)?;
     let uo = line.options().uncertainty.clone();
@@ -51,7 +61,11 @@ pub fn monte_carlo(line: &Line, fluid: &Fluid, flow: f64, samples: usize, seed: 
     let mut values = Vec::with_capacity(samples);
     let root3 = 3f64.sqrt();
     for _ in 0..samples {
-        let (dz, vz) = if uo.fluid { (normal(&mut rng), normal(&mut rng)) } else { (0.0, 0.0) };
+        let (dz, vz) = if uo.fluid {
+            (normal(&mut rng), normal(&mut rng))
+        } else {
+            (0.0, 0.0)
+        };
         let pert = crate::line::Perturbation {
             model_z: normal(&mut rng),
             roughness_z: root3 * (2.0 * rng.random::<f64>() - 1.0),
@@ -61,7 +75,11 @@ pub fn monte_carlo(line: &Line, fluid: &Fluid, flow: f64, samples: usize, seed: 
             own: (0..n)
                 .map(|i| {
                     let xi = 2.0 * rng.random::<f64>() - 1.0;
-                    if own_on[i] { 1.0 + root3 * own_u[i] * xi } else { 1.0 }
+                    if own_on[i] {
+                        1.0 + root3 * own_u[i] * xi
+                    } else {
+                        1.0
+                    }
                 })
                 .collect(),
         };

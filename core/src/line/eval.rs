@@ -110,7 +110,15 @@ fn scaled_section(s: &Section, k: f64) -> Result<Section> {
 
 impl Line {
     /// The relative standard uncertainty of a pipe's friction model at its state.
-    fn model_u(&self, pipe: &Pipe, regime: Regime, re_t: f64, rr_t: f64, f: f64, scale: f64) -> f64 {
+    fn model_u(
+        &self,
+        pipe: &Pipe,
+        regime: Regime,
+        re_t: f64,
+        rr_t: f64,
+        f: f64,
+        scale: f64,
+    ) -> f64 {
         let uo = &self.options.uncertainty;
         if !uo.friction_model {
             return 0.0;
@@ -137,7 +145,9 @@ impl Line {
                 };
                 match friction::transition_limits(re_t, rr_t, &o) {
                     // ±2u reaches the farther of the two regime values.
-                    Ok((fl, ft)) => ((f - fl).abs().max((ft - f).abs()) / (2.0 * f)).hypot(turbulent),
+                    Ok((fl, ft)) => {
+                        ((f - fl).abs().max((ft - f).abs()) / (2.0 * f)).hypot(turbulent)
+                    }
                     Err(_) => turbulent,
                 }
             }
@@ -159,14 +169,22 @@ impl Line {
         Ok(match &self.resolved[i] {
             Resolved::Rise(h) => State::passive(*h),
             Resolved::Pipe { pipe, roughness_u } => {
-                let roughness_u = if self.options.uncertainty.roughness { *roughness_u } else { 0.0 };
+                let roughness_u = if self.options.uncertainty.roughness {
+                    *roughness_u
+                } else {
+                    0.0
+                };
                 let mut m = 1.0;
                 let perturbed;
                 let pipe = match pert {
                     None => pipe,
                     Some(p) => {
                         let r = (1.0 + p.roughness_z * roughness_u).max(0.0);
-                        perturbed = Pipe::new(scaled_section(&pipe.section, dk)?, pipe.length, pipe.roughness * r)?;
+                        perturbed = Pipe::new(
+                            scaled_section(&pipe.section, dk)?,
+                            pipe.length,
+                            pipe.roughness * r,
+                        )?;
                         &perturbed
                     }
                 };
@@ -224,7 +242,8 @@ impl Line {
                 let h = hv + hi;
                 State {
                     head_loss: h,
-                    dhead_dflow: (resistance.k_viscous * nu / bore + 2.0 * resistance.k_inertial * v.abs())
+                    dhead_dflow: (resistance.k_viscous * nu / bore
+                        + 2.0 * resistance.k_inertial * v.abs())
                         / (2.0 * g * area)
                         * own,
                     velocity: v,
@@ -271,7 +290,7 @@ impl Line {
         let mut d = 0.0;
         for i in 0..self.resolved.len() {
             let s = self.element_state(i, fluid, flow, None)?;
-            h += s.head_loss + s.static_head;
+            h += s.head_loss + s.static_head; // same order as LineResult::required_head
             d += s.dhead_dflow;
         }
         Ok((h, d))
@@ -281,7 +300,12 @@ impl Line {
     /// pressure, the mean density along the line (fixed-point on the mean pressure) and
     /// the volumetric flow at that density (mass is conserved; `flow` is taken at inlet
     /// conditions). Also returns the warnings of the gas check.
-    pub(crate) fn working_fluid(&self, fluid: &Fluid, flow: f64, inlet: Option<f64>) -> Result<(Fluid, f64, Warnings)> {
+    pub(crate) fn working_fluid(
+        &self,
+        fluid: &Fluid,
+        flow: f64,
+        inlet: Option<f64>,
+    ) -> Result<(Fluid, f64, Warnings)> {
         check::finite("flow", flow)?;
         let inlet = inlet.or(if fluid.is_gas() { fluid.pressure } else { None });
         let (true, Some(p_in)) = (fluid.is_gas(), inlet) else {
@@ -331,7 +355,11 @@ impl Line {
     /// Required head (m) at each of `flows` (m³/s): the system curve. Runs on all cores
     /// above 4096 points; the result is the same either way.
     pub fn system_curve(&self, fluid: &Fluid, flows: &[f64]) -> Result<Vec<f64>> {
-        let one = |(i, &q): (usize, &f64)| self.required_head(fluid, q).map(|r| r.0).map_err(|e| e.at_index(i));
+        let one = |(i, &q): (usize, &f64)| {
+            self.required_head(fluid, q)
+                .map(|r| r.0)
+                .map_err(|e| e.at_index(i))
+        };
         if flows.len() < 4096 {
             flows.iter().enumerate().map(one).collect()
         } else {

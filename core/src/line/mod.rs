@@ -24,7 +24,7 @@ mod solve;
 
 pub use parallel::{Split, split_flow};
 pub use result::{ElementKind, ElementResult, LineResult};
-pub use sizing::{Limit, Sizing, SizeChoice};
+pub use sizing::{Limit, SizeChoice, Sizing};
 pub use solve::{FlowSolution, OperatingPoint, PumpCurve};
 
 use crate::band::UncertaintyOptions;
@@ -218,7 +218,10 @@ impl Line {
     ) -> Result<Line> {
         options.validate()?;
         if elements.is_empty() {
-            return Err(Error::invalid("elements", "a line needs at least one element"));
+            return Err(Error::invalid(
+                "elements",
+                "a line needs at least one element",
+            ));
         }
         let resolved = resolve(&elements, &options, &roughness_ranges)?;
         Ok(Line {
@@ -241,7 +244,11 @@ impl Line {
 
     /// The same line with other options.
     pub fn set_options(&self, options: LineOptions) -> Result<Line> {
-        Line::build(self.elements.clone(), options, self.roughness_ranges.clone())
+        Line::build(
+            self.elements.clone(),
+            options,
+            self.roughness_ranges.clone(),
+        )
     }
 
     /// States the likely range (low, high; m) of the roughness of the pipe at `index`, for
@@ -250,7 +257,11 @@ impl Line {
         check::non_negative("low", low)?;
         check::non_negative("high", high)?;
         if high < low {
-            return Err(Error::out_of_range("high", high, format!("must not be below low ({low})")));
+            return Err(Error::out_of_range(
+                "high",
+                high,
+                format!("must not be below low ({low})"),
+            ));
         }
         match self.elements.get(index) {
             Some(Element::Pipe(_)) => {}
@@ -280,7 +291,9 @@ impl Line {
     pub fn has_resistance(&self) -> bool {
         self.resolved.iter().any(|r| match r {
             Resolved::Rise(_) => false,
-            Resolved::Fitting { resistance, .. } => resistance.k_viscous > 0.0 || resistance.k_inertial > 0.0,
+            Resolved::Fitting { resistance, .. } => {
+                resistance.k_viscous > 0.0 || resistance.k_inertial > 0.0
+            }
             _ => true,
         })
     }
@@ -300,11 +313,17 @@ impl Line {
             .elements
             .iter()
             .map(|e| match e {
-                Element::Pipe(p) if p.section.is_circular() => Ok(Element::Pipe(p.with_diameter(diameter)?)),
+                Element::Pipe(p) if p.section.is_circular() => {
+                    Ok(Element::Pipe(p.with_diameter(diameter)?))
+                }
                 other => Ok(other.clone()),
             })
             .collect::<Result<Vec<_>>>()?;
-        Line::build(elements, self.options.clone(), self.roughness_ranges.clone())
+        Line::build(
+            elements,
+            self.options.clone(),
+            self.roughness_ranges.clone(),
+        )
     }
 }
 
@@ -313,8 +332,13 @@ impl Line {
     pub(crate) fn own_source_enabled(&self, i: usize) -> bool {
         let uo = &self.options.uncertainty;
         match &self.resolved[i] {
-            Resolved::Fitting { equipment: false, .. } => uo.fittings,
-            Resolved::Fitting { equipment: true, .. } | Resolved::Drop { .. } => uo.equipment,
+            Resolved::Fitting {
+                equipment: false, ..
+            } => uo.fittings,
+            Resolved::Fitting {
+                equipment: true, ..
+            }
+            | Resolved::Drop { .. } => uo.equipment,
             _ => false,
         }
     }
@@ -338,7 +362,9 @@ fn resolve(
                 (None, None) => {
                     return Err(Error::invalid(
                         "elements",
-                        format!("{label} (element {i}) has no diameter and there is no pipe in the line to take it from"),
+                        format!(
+                            "{label} (element {i}) has no diameter and there is no pipe in the line to take it from"
+                        ),
                     ));
                 }
             };

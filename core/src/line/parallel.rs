@@ -36,7 +36,10 @@ pub fn split_flow(branches: &[Line], fluid: &Fluid, total: f64) -> Result<Split>
         return Err(Error::invalid("branches", "need at least one branch"));
     }
     if let Some(i) = branches.iter().position(|b| !b.has_resistance()) {
-        return Err(Error::invalid("branches", format!("branch {i} has no loss, so the split is undefined")));
+        return Err(Error::invalid(
+            "branches",
+            format!("branch {i} has no loss, so the split is undefined"),
+        ));
     }
     let n = branches.len();
     let mut q = vec![total / n as f64; n];
@@ -46,11 +49,24 @@ pub fn split_flow(branches: &[Line], fluid: &Fluid, total: f64) -> Result<Split>
             hs.push(b.required_head(fluid, qi)?);
         }
         let inv: f64 = hs.iter().map(|(_, d)| 1.0 / d).sum();
-        let head = (total - q.iter().zip(&hs).map(|(qi, (h, d))| qi - h / d).sum::<f64>()) / inv;
+        let head = (total
+            - q.iter()
+                .zip(&hs)
+                .map(|(qi, (h, d))| qi - h / d)
+                .sum::<f64>())
+            / inv;
         let spread = hs.iter().map(|(h, _)| (h - head).abs()).fold(0.0, f64::max);
-        let scale = hs.iter().map(|(h, _)| h.abs()).fold(head.abs(), f64::max).max(1e-300);
+        let scale = hs
+            .iter()
+            .map(|(h, _)| h.abs())
+            .fold(head.abs(), f64::max)
+            .max(1e-300);
         if spread <= HEAD_TOL * scale {
-            return Ok(Split { flows: q, head, iterations: it });
+            return Ok(Split {
+                flows: q,
+                head,
+                iterations: it,
+            });
         }
         if !inv.is_finite() || !head.is_finite() {
             break;
@@ -65,7 +81,12 @@ pub fn split_flow(branches: &[Line], fluid: &Fluid, total: f64) -> Result<Split>
 /// Bisection on the common head: each branch's flow for a head rises with the head, so
 /// the total does too.
 fn bracketed(branches: &[Line], fluid: &Fluid, total: f64) -> Result<Split> {
-    let flows_at = |h: f64| -> Result<Vec<f64>> { branches.iter().map(|b| b.flow_for_head(fluid, h).map(|s| s.flow)).collect() };
+    let flows_at = |h: f64| -> Result<Vec<f64>> {
+        branches
+            .iter()
+            .map(|b| b.flow_for_head(fluid, h).map(|s| s.flow))
+            .collect()
+    };
     let sum_at = |h: f64| -> Result<f64> { Ok(flows_at(h)?.iter().sum()) };
     let statics: Vec<f64> = branches.iter().map(|b| b.static_head()).collect();
     let mut lo = statics.iter().cloned().fold(f64::INFINITY, f64::min) - 1.0;
@@ -88,5 +109,9 @@ fn bracketed(branches: &[Line], fluid: &Fluid, total: f64) -> Result<Split> {
         }
     }
     let head = 0.5 * (lo + hi);
-    Ok(Split { flows: flows_at(head)?, head, iterations: 0 })
+    Ok(Split {
+        flows: flows_at(head)?,
+        head,
+        iterations: 0,
+    })
 }

@@ -80,7 +80,7 @@ pub struct LineResult {
     pub pressure_loss: f64,
     /// Sum of the rises, m.
     pub static_head: f64,
-    /// head_loss + static_head, m.
+    /// head_loss + static_head, m (summed element by element in route order).
     pub required_head: f64,
     /// d(required_head)/dQ, s/m².
     pub drequired_head_dflow: f64,
@@ -123,8 +123,14 @@ pub(crate) fn head_sources<'a>(
         if line.own_source_enabled(i) {
             let own = s.sens.own * s.own_u;
             match &line.resolved[i] {
-                Resolved::Fitting { name, equipment: false, .. } => out.push((format!("K of {name} (element {i})"), own)),
-                Resolved::Fitting { name, .. } | Resolved::Drop { name, .. } => out.push((format!("{name} (element {i})"), own)),
+                Resolved::Fitting {
+                    name,
+                    equipment: false,
+                    ..
+                } => out.push((format!("K of {name} (element {i})"), own)),
+                Resolved::Fitting { name, .. } | Resolved::Drop { name, .. } => {
+                    out.push((format!("{name} (element {i})"), own))
+                }
                 _ => {}
             }
         }
@@ -151,7 +157,12 @@ impl Line {
     }
 
     /// Evaluates with a given inlet static pressure (Pa absolute), or none.
-    pub fn evaluate_at(&self, fluid: &Fluid, flow: f64, inlet_pressure: Option<f64>) -> Result<LineResult> {
+    pub fn evaluate_at(
+        &self,
+        fluid: &Fluid,
+        flow: f64,
+        inlet_pressure: Option<f64>,
+    ) -> Result<LineResult> {
         if let Some(p) = inlet_pressure {
             check::positive("inlet_pressure", p)?;
         }
@@ -164,10 +175,18 @@ impl Line {
         let dq = if flow == 0.0 { 1.0 } else { q / flow };
         let head_loss: f64 = states.iter().map(|s| s.head_loss).sum();
         let static_head: f64 = states.iter().map(|s| s.static_head).sum();
+        // Summed in route order exactly as the system curve does, so both agree bit for bit.
+        let required_head: f64 = states
+            .iter()
+            .fold(0.0, |acc, s| acc + (s.head_loss + s.static_head));
         let slope: f64 = states.iter().map(|s| s.dhead_dflow).sum::<f64>() * dq;
         let mut warnings = gas_warn;
         // Grade line: total pressure falls by ρg(loss + rise); static = total − ½ρV².
-        let first_v = states.iter().map(|s| s.velocity).find(|v| v.is_finite()).unwrap_or(0.0);
+        let first_v = states
+            .iter()
+            .map(|s| s.velocity)
+            .find(|v| v.is_finite())
+            .unwrap_or(0.0);
         let mut total = inlet.map(|p| p + 0.5 * work.density * first_v * first_v);
         let mut last_v = first_v;
         let mut elements = Vec::with_capacity(states.len());
@@ -204,25 +223,39 @@ impl Line {
             head_loss,
             pressure_loss: rho_g * head_loss,
             static_head,
-            required_head: head_loss + static_head,
+            required_head,
             drequired_head_dflow: slope,
             density: work.density,
             inlet_pressure: inlet,
             outlet_pressure: elements.last().and_then(|e| e.pressure_out),
             warnings,
             pressure_loss_band: Band::from_sources(rho_g * head_loss, &pressure_sources),
-            required_head_band: head_loss_band.shifted(static_head),
+            required_head_band: head_loss_band.shifted(required_head - head_loss),
             head_loss_band,
             elements,
         })
     }
 
-    fn element_result(&self, i: usize, s: &State, fluid: &Fluid, pressure_out: Option<f64>, warnings: Warnings) -> ElementResult {
+    fn element_result(
+        &self,
+        i: usize,
+        s: &State,
+        fluid: &Fluid,
+        pressure_out: Option<f64>,
+        warnings: Warnings,
+    ) -> ElementResult {
         let (kind, label) = match &self.resolved[i] {
             Resolved::Pipe { .. } => (ElementKind::Pipe, "pipe".to_string()),
-            Resolved::Fitting { name, equipment, .. } => {
-                (if *equipment { ElementKind::Equipment } else { ElementKind::Fitting }, name.clone())
-            }
+            Resolved::Fitting {
+                name, equipment, ..
+            } => (
+                if *equipment {
+                    ElementKind::Equipment
+                } else {
+                    ElementKind::Fitting
+                },
+                name.clone(),
+            ),
             Resolved::Rise(_) => (ElementKind::Rise, "rise".to_string()),
             Resolved::Drop { name, .. } => (ElementKind::Equipment, name.clone()),
         };
@@ -238,8 +271,14 @@ impl Line {
                     ("friction model".to_string(), f * s.model_u),
                     ("roughness".to_string(), f_rr * s.roughness_u),
                     ("diameter".to_string(), -(f_re + f_rr) * uo.diameter),
-                    ("density".to_string(), f_re * fluid.density_rel_uncertainty * fl),
-                    ("viscosity".to_string(), -f_re * fluid.viscosity_rel_uncertainty * fl),
+                    (
+                        "density".to_string(),
+                        f_re * fluid.density_rel_uncertainty * fl,
+                    ),
+                    (
+                        "viscosity".to_string(),
+                        -f_re * fluid.viscosity_rel_uncertainty * fl,
+                    ),
                 ],
             )
         });

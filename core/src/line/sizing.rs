@@ -60,12 +60,26 @@ impl Line {
     /// # Errors
     /// Zero or non-finite flow; a non-positive limit; a line without round pipes; a limit
     /// no bore up to 20 m meets; no standard size large enough.
-    pub fn size(&self, fluid: &Fluid, flow: f64, limit: Limit, table: Option<(PipeTable, &str)>) -> Result<Sizing> {
+    pub fn size(
+        &self,
+        fluid: &Fluid,
+        flow: f64,
+        limit: Limit,
+        table: Option<(PipeTable, &str)>,
+    ) -> Result<Sizing> {
         check::finite("flow", flow)?;
         if flow == 0.0 {
-            return Err(Error::out_of_range("flow", flow, "must not be zero for sizing"));
+            return Err(Error::out_of_range(
+                "flow",
+                flow,
+                "must not be zero for sizing",
+            ));
         }
-        if !self.elements.iter().any(|e| matches!(e, super::Element::Pipe(p) if p.section.is_circular())) {
+        if !self
+            .elements
+            .iter()
+            .any(|e| matches!(e, super::Element::Pipe(p) if p.section.is_circular()))
+        {
             return Err(Error::invalid("line", "has no round pipe to size"));
         }
         let q = flow.abs();
@@ -99,7 +113,15 @@ impl Line {
             None => (None, None),
             Some((t, schedule)) => {
                 let nominal = self.walk_table(fluid, q, limit, t, schedule, min_d, false)?;
-                let banded = self.walk_table(fluid, q, limit, t, schedule, nominal.size.inside_diameter, true)?;
+                let banded = self.walk_table(
+                    fluid,
+                    q,
+                    limit,
+                    t,
+                    schedule,
+                    nominal.size.inside_diameter,
+                    true,
+                )?;
                 (Some(nominal), Some(banded))
             }
         };
@@ -131,9 +153,23 @@ impl Line {
             let velocity = q / (0.25 * std::f64::consts::PI * d * d);
             let tol = self.options.uncertainty.diameter;
             let ok = match limit {
-                Limit::PressureLoss(dp) => (if banded { r.pressure_loss_band.high } else { r.pressure_loss }) <= dp,
+                Limit::PressureLoss(dp) => {
+                    (if banded {
+                        r.pressure_loss_band.high
+                    } else {
+                        r.pressure_loss
+                    }) <= dp
+                }
                 // A bore at the low end of its tolerance (k = 2) runs faster.
-                Limit::Velocity(v) => velocity * if banded { (1.0 - 2.0 * tol).powi(-2) } else { 1.0 } <= v,
+                Limit::Velocity(v) => {
+                    velocity
+                        * if banded {
+                            (1.0 - 2.0 * tol).powi(-2)
+                        } else {
+                            1.0
+                        }
+                        <= v
+                }
             };
             if ok {
                 return Ok(SizeChoice {

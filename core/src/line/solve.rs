@@ -55,7 +55,9 @@ pub(crate) fn safeguarded_newton(
         } else {
             0.5 * (lo + hi)
         };
-        if (next - x).abs() <= 2.0 * f64::EPSILON * x.abs() || hi - lo <= 2.0 * f64::EPSILON * x.abs().max(f64::MIN_POSITIVE) {
+        if (next - x).abs() <= 2.0 * f64::EPSILON * x.abs()
+            || hi - lo <= 2.0 * f64::EPSILON * x.abs().max(f64::MIN_POSITIVE)
+        {
             return Ok((next, it));
         }
         x = next;
@@ -73,7 +75,10 @@ impl Line {
     pub fn flow_for_head(&self, fluid: &Fluid, head: f64) -> Result<FlowSolution> {
         check::finite("head", head)?;
         if !self.has_resistance() {
-            return Err(Error::invalid("line", "has no element with a loss, so no flow balances a head"));
+            return Err(Error::invalid(
+                "line",
+                "has no element with a loss, so no flow balances a head",
+            ));
         }
         let h0 = self.static_head();
         let sign = if head > h0 {
@@ -99,7 +104,9 @@ impl Line {
                 far *= 4.0;
                 n += 1;
                 if far.abs() > 1e6 {
-                    return Err(Error::no_solution(format!("no flow up to 1e6 m³/s reaches head {head} m")));
+                    return Err(Error::no_solution(format!(
+                        "no flow up to 1e6 m³/s reaches head {head} m"
+                    )));
                 }
             }
             let (lo, hi) = if sign > 0.0 { (0.0, far) } else { (far, 0.0) };
@@ -108,7 +115,11 @@ impl Line {
         };
         let r = self.evaluate(fluid, flow)?;
         let slope = r.drequired_head_dflow;
-        let sources = super::result::head_sources(self, states_of(self, fluid, &r)?.iter().enumerate(), fluid);
+        let sources = super::result::head_sources(
+            self,
+            states_of(self, fluid, &r)?.iter().enumerate(),
+            fluid,
+        );
         let flow_band = Band::from_sources(flow, &divide(&sources, slope));
         Ok(FlowSolution {
             flow,
@@ -123,11 +134,16 @@ impl Line {
 /// Element states at a result's flow (for the band sensitivities).
 fn states_of(line: &Line, fluid: &Fluid, r: &super::LineResult) -> Result<Vec<super::eval::State>> {
     let (work, q, _) = line.working_fluid(fluid, r.flow, r.inlet_pressure)?;
-    (0..line.resolved.len()).map(|i| line.element_state(i, &work, q, None)).collect()
+    (0..line.resolved.len())
+        .map(|i| line.element_state(i, &work, q, None))
+        .collect()
 }
 
 fn divide(sources: &[(String, f64)], by: f64) -> Vec<(String, f64)> {
-    sources.iter().map(|(n, u)| (n.clone(), if by != 0.0 { u / by } else { 0.0 })).collect()
+    sources
+        .iter()
+        .map(|(n, u)| (n.clone(), if by != 0.0 { u / by } else { 0.0 }))
+        .collect()
 }
 
 /// A pump's head against flow, interpolated by a monotone cubic (Fritsch and Carlson,
@@ -145,28 +161,48 @@ impl PumpCurve {
     /// increasing, heads non-increasing with flow.
     pub fn new(flows: &[f64], heads: &[f64]) -> Result<PumpCurve> {
         if flows.len() != heads.len() {
-            return Err(Error::invalid("heads", format!("has {} values but flows has {}", heads.len(), flows.len())));
+            return Err(Error::invalid(
+                "heads",
+                format!("has {} values but flows has {}", heads.len(), flows.len()),
+            ));
         }
         if flows.len() < 3 {
-            return Err(Error::invalid("flows", format!("a pump curve needs at least 3 points, got {}", flows.len())));
+            return Err(Error::invalid(
+                "flows",
+                format!("a pump curve needs at least 3 points, got {}", flows.len()),
+            ));
         }
         for (i, (&q, &h)) in flows.iter().zip(heads).enumerate() {
             check::non_negative("flows", q).map_err(|e| e.at_index(i))?;
             check::finite("heads", h).map_err(|e| e.at_index(i))?;
             if i > 0 && q <= flows[i - 1] {
-                return Err(Error::out_of_range("flows", q, format!("must increase strictly (point {i} is not above point {})", i - 1)).at_index(i));
+                return Err(Error::out_of_range(
+                    "flows",
+                    q,
+                    format!(
+                        "must increase strictly (point {i} is not above point {})",
+                        i - 1
+                    ),
+                )
+                .at_index(i));
             }
             if i > 0 && h > heads[i - 1] {
                 return Err(Error::out_of_range("heads", h, format!("must not rise with flow (point {i} is above point {}): the curve is not monotonic", i - 1)).at_index(i));
             }
         }
         let n = flows.len();
-        let delta: Vec<f64> = (0..n - 1).map(|i| (heads[i + 1] - heads[i]) / (flows[i + 1] - flows[i])).collect();
+        let delta: Vec<f64> = (0..n - 1)
+            .map(|i| (heads[i + 1] - heads[i]) / (flows[i + 1] - flows[i]))
+            .collect();
         let mut m = vec![0.0; n];
         m[0] = delta[0];
         m[n - 1] = delta[n - 2];
         for i in 1..n - 1 {
-            m[i] = if delta[i - 1] * delta[i] <= 0.0 { 0.0 } else { 0.5 * (delta[i - 1] + delta[i]) };
+            m[i] = if delta[i - 1] * delta[i] <= 0.0 {
+                0.0
+            } else {
+                0.5 * (delta[i - 1] + delta[i])
+            };
         }
         // Fritsch–Carlson limiter: keep (α, β) inside the circle of radius 3.
         for i in 0..n - 1 {
@@ -211,14 +247,23 @@ impl PumpCurve {
         let (x0, x1) = (self.flows[i], self.flows[i + 1]);
         let hgap = x1 - x0;
         let t = (flow - x0) / hgap;
-        let (y0, y1, m0, m1) = (self.heads[i], self.heads[i + 1], self.slopes[i], self.slopes[i + 1]);
+        let (y0, y1, m0, m1) = (
+            self.heads[i],
+            self.heads[i + 1],
+            self.slopes[i],
+            self.slopes[i + 1],
+        );
         let (t2, t3) = (t * t, t * t * t);
         let h00 = 2.0 * t3 - 3.0 * t2 + 1.0;
         let h10 = t3 - 2.0 * t2 + t;
         let h01 = -2.0 * t3 + 3.0 * t2;
         let h11 = t3 - t2;
         let value = h00 * y0 + h10 * hgap * m0 + h01 * y1 + h11 * hgap * m1;
-        let d = ((6.0 * t2 - 6.0 * t) * y0 + (3.0 * t2 - 4.0 * t + 1.0) * hgap * m0 + (-6.0 * t2 + 6.0 * t) * y1 + (3.0 * t2 - 2.0 * t) * hgap * m1) / hgap;
+        let d = ((6.0 * t2 - 6.0 * t) * y0
+            + (3.0 * t2 - 4.0 * t + 1.0) * hgap * m0
+            + (-6.0 * t2 + 6.0 * t) * y1
+            + (3.0 * t2 - 2.0 * t) * hgap * m1)
+            / hgap;
         Ok((value, d))
     }
 }
@@ -262,13 +307,24 @@ impl Line {
                 -g_hi
             )));
         }
-        let (flow, _) = if g_lo == 0.0 { (lo, 0) } else { safeguarded_newton(gap, lo, hi)? };
+        let (flow, _) = if g_lo == 0.0 {
+            (lo, 0)
+        } else {
+            safeguarded_newton(gap, lo, hi)?
+        };
         let (head, dpump) = pump.head(flow)?;
         let r = self.evaluate(fluid, flow)?;
         let slope = r.drequired_head_dflow - dpump;
-        let sources = super::result::head_sources(self, states_of(self, fluid, &r)?.iter().enumerate(), fluid);
+        let sources = super::result::head_sources(
+            self,
+            states_of(self, fluid, &r)?.iter().enumerate(),
+            fluid,
+        );
         let q_sources = divide(&sources, slope);
-        let h_sources: Vec<(String, f64)> = q_sources.iter().map(|(n, u)| (n.clone(), u * dpump)).collect();
+        let h_sources: Vec<(String, f64)> = q_sources
+            .iter()
+            .map(|(n, u)| (n.clone(), u * dpump))
+            .collect();
         Ok(OperatingPoint {
             flow,
             head,

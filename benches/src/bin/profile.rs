@@ -1,0 +1,48 @@
+//! One workload per run, for instruction counting under callgrind
+//! (`scripts/profile.sh`): `profile <none|ln|colebrook|haaland|...|batch> <points>`
+//! (`none` only draws the points: its count is subtracted from the others).
+//!
+//! Counting instructions is reproducible on a busy machine where wall-clock timings are
+//! not; the per-point count is the difference between two runs of different sizes, which
+//! cancels start-up and point generation.
+
+use hydrograde::friction::{Correlation, Options, darcy_factor, darcy_factor_batch};
+use hydrograde_benches::turbulent_points;
+use std::hint::black_box;
+use std::process::ExitCode;
+
+fn main() -> ExitCode {
+    let args: Vec<String> = std::env::args().collect();
+    let (Some(what), Some(n)) = (args.get(1), args.get(2).and_then(|s| s.parse().ok())) else {
+        eprintln!("usage: profile <none|ln|batch|CORRELATION> <points>");
+        return ExitCode::from(2);
+    };
+    let (re, rr) = turbulent_points(n, 2026);
+    let mut out = vec![0.0; n];
+    match what.as_str() {
+        "none" => {}
+        "ln" => {
+            for (o, &r) in out.iter_mut().zip(&re) {
+                *o = black_box(r).ln();
+            }
+        }
+        "batch" => {
+            if let Err(e) = darcy_factor_batch(&re, &rr, &Options::default(), &mut out) {
+                eprintln!("{e}");
+                return ExitCode::FAILURE;
+            }
+        }
+        name => {
+            let Ok(corr) = name.parse::<Correlation>() else {
+                eprintln!("unknown workload {name}");
+                return ExitCode::from(2);
+            };
+            let opts = Options::with_correlation(corr);
+            for ((o, &r), &e) in out.iter_mut().zip(&re).zip(&rr) {
+                *o = darcy_factor(black_box(r), black_box(e), &opts).map_or(f64::NAN, |f| f.f);
+            }
+        }
+    }
+    println!("{}", black_box(out.iter().sum::<f64>()));
+    ExitCode::SUCCESS
+}

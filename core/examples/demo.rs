@@ -1,0 +1,219 @@
+//! The demo behind `./run.sh demo`: two invented scenarios worked end to end.
+//!
+//! 1. A hillside orchard's irrigation main: water at 12 °C pumped from a pond through
+//!    about 400 m of PVC and steel pipe, fifteen fittings and valves and 38 m of rise to a
+//!    header tank.
+//! 2. A workshop's rectangular exhaust duct: air at 30 °C through two duct sizes.
+//!
+//! All data are invented for the demonstration.
+
+use hydrograde::Result;
+use hydrograde::band::Band;
+use hydrograde::fitting::Fitting;
+use hydrograde::fluid::Fluid;
+use hydrograde::line::{Element, Equipment, Limit, Line, LineResult, PumpCurve};
+use hydrograde::pipe::Pipe;
+use hydrograde::section::Section;
+use hydrograde::sizes::PipeTable;
+
+/// Inside diameters of the orchard main, m (PVC 3 in and steel 2-1/2 in, schedule 40).
+const PVC_BORE: f64 = 0.0779;
+const STEEL_BORE: f64 = 0.0627;
+
+fn orchard_line() -> Result<Line> {
+    let pvc = |len: f64| Pipe::circular(PVC_BORE, len, 1.5e-6).map(Element::Pipe);
+    let steel = |len: f64| Pipe::circular(STEEL_BORE, len, 4.5e-5).map(Element::Pipe);
+    let named = |n: &str| Fitting::named(n).map(Element::Fitting);
+    Line::new(vec![
+        Element::Fitting(Fitting::entrance_sharp()),
+        named("y_strainer")?,
+        pvc(6.0)?,
+        named("gate_valve")?,
+        named("elbow_90_standard")?,
+        pvc(140.0)?,
+        named("elbow_45_standard")?,
+        pvc(120.0)?,
+        named("tee_run_flanged")?,
+        Element::Fitting(Fitting::contraction(PVC_BORE, STEEL_BORE)?),
+        steel(95.0)?,
+        named("elbow_90_long_radius")?,
+        named("elbow_90_long_radius")?,
+        steel(45.0)?,
+        named("elbow_45_long_radius")?,
+        named("ball_valve")?,
+        named("globe_valve")?,
+        Element::Rise(38.0),
+        Element::Fitting(Fitting::exit()),
+    ])
+}
+
+fn duct_line() -> Result<Line> {
+    let big = Section::rectangle(0.40, 0.25)?;
+    let small = Section::rectangle(0.30, 0.20)?;
+    let (d1, d2) = (big.hydraulic_diameter(), small.hydraulic_diameter());
+    Line::new(vec![
+        Element::Fitting(Fitting::entrance_rounded(0.1)?),
+        Element::Equipment(Equipment::pressure_drop("grease filter", 120.0, 0.9)?),
+        Element::Pipe(Pipe::new(big, 18.0, 1.5e-4)?),
+        Element::Fitting(Fitting::bend(90.0, 1.5)?),
+        Element::Fitting(Fitting::contraction(d1, d2)?),
+        Element::Pipe(Pipe::new(small, 12.0, 1.5e-4)?),
+        Element::Fitting(Fitting::bend(45.0, 1.5)?),
+        Element::Rise(4.5),
+        Element::Fitting(Fitting::exit()),
+    ])
+}
+
+fn band(b: &Band) -> String {
+    format!("{:.3} … {:.3}", b.low, b.high)
+}
+
+fn print_breakdown(r: &LineResult) {
+    println!(
+        "  {:>2}  {:<22} {:>6} {:>9} {:>8}  {:>9}  {:<17} {:<22} warnings",
+        "#", "element", "V m/s", "Re", "f or K", "loss m", "band (k = 2) m", "largest source"
+    );
+    for (i, e) in r.elements.iter().enumerate() {
+        let coef = match (e.friction_factor, e.k) {
+            (Some(f), _) => format!("f {f:.4}"),
+            (_, Some(k)) => format!("K {k:.3}"),
+            _ => String::new(),
+        };
+        let (v, re) = if e.velocity.is_finite() {
+            (format!("{:.2}", e.velocity), format!("{:.0}", e.reynolds))
+        } else {
+            (String::new(), String::new())
+        };
+        let loss = if e.static_head != 0.0 {
+            e.static_head
+        } else {
+            e.head_loss
+        };
+        let label = if e.static_head != 0.0 {
+            format!("rise {:+.1} m", e.static_head)
+        } else {
+            e.label.clone()
+        };
+        println!(
+            "  {:>2}  {:<22} {:>6} {:>9} {:>8}  {:>9.3}  {:<17} {:<22} {}",
+            i,
+            label,
+            v,
+            re,
+            coef,
+            loss,
+            if e.static_head != 0.0 {
+                String::new()
+            } else {
+                band(&e.head_loss_band)
+            },
+            e.head_loss_band.dominant().unwrap_or(""),
+            e.warnings.names().join(", ")
+        );
+    }
+    println!(
+        "  friction + minor loss {:.3} m ({}), pressure loss {:.1} kPa, static head {:.2} m",
+        r.head_loss,
+        band(&r.head_loss_band),
+        r.pressure_loss / 1e3,
+        r.static_head
+    );
+    println!(
+        "  required head {:.3} m, band {} m",
+        r.required_head,
+        band(&r.required_head_band)
+    );
+    let top: Vec<String> = r
+        .required_head_band
+        .contributions
+        .iter()
+        .take(3)
+        .map(|c| format!("{} {:.0} %", c.source, 100.0 * c.share))
+        .collect();
+    println!("  band sources: {}", top.join(", "));
+}
+
+fn orchard() -> Result<()> {
+    println!("\n1. Hillside orchard irrigation main (water 12 °C, design flow 6.0 L/s)\n");
+    let water = Fluid::water(285.15, 101_325.0)?;
+    let line = orchard_line()?;
+    let r = line.evaluate(&water, 6.0e-3)?;
+    print_breakdown(&r);
+
+    // An invented pump: flow L/s against head m.
+    let pump_q = [0.0, 2.0, 4.0, 6.0, 8.0, 10.0].map(|q| q * 1e-3);
+    let pump_h = [78.0, 77.0, 74.0, 68.5, 60.0, 47.0];
+    let pump = PumpCurve::new(&pump_q, &pump_h)?;
+    println!("\n  system curve against the pump");
+    println!("  {:>8} {:>12} {:>10}", "Q L/s", "system m", "pump m");
+    let flows: Vec<f64> = (0..=10).map(|i| i as f64 * 1e-3).collect();
+    let curve = line.system_curve(&water, &flows)?;
+    for (q, h) in flows.iter().zip(&curve) {
+        println!("  {:>8.1} {:>12.2} {:>10.2}", q * 1e3, h, pump.head(*q)?.0);
+    }
+    let op = line.operating_point(&water, &pump)?;
+    println!(
+        "  operating point: {:.2} L/s at {:.2} m (flow band {:.2} … {:.2} L/s, largest source: {})",
+        op.flow * 1e3,
+        op.head,
+        op.flow_band.low * 1e3,
+        op.flow_band.high * 1e3,
+        op.flow_band.dominant().unwrap_or("-")
+    );
+
+    let back = line.flow_for_head(&water, 0.0)?;
+    println!(
+        "  run backwards by gravity from the tank (pump bypassed): {:.2} L/s ({:.2} … {:.2} L/s)",
+        -back.flow * 1e3,
+        -back.flow_band.high * 1e3,
+        -back.flow_band.low * 1e3
+    );
+
+    let s = line.size(
+        &water,
+        6.0e-3,
+        Limit::Velocity(2.0),
+        Some((PipeTable::Pvc, "40")),
+    )?;
+    println!(
+        "  one size for the whole main, velocity ≤ 2 m/s at 6 L/s: inside diameter ≥ {:.1} mm",
+        s.min_inside_diameter * 1e3
+    );
+    if let Some(c) = &s.standard {
+        println!(
+            "  smallest PVC schedule 40: NPS {} (ID {:.1} mm, {:.2} m/s, loss {:.1} kPa)",
+            c.size.nominal,
+            c.size.inside_diameter * 1e3,
+            c.velocity,
+            c.pressure_loss / 1e3
+        );
+    }
+    Ok(())
+}
+
+fn duct() -> Result<()> {
+    println!("\n2. Workshop exhaust duct (air 30 °C, 0.9 m³/s, galvanised rectangular duct)\n");
+    let air = Fluid::air(303.15, 101_325.0)?;
+    let r = duct_line()?.evaluate(&air, 0.9)?;
+    print_breakdown(&r);
+    println!(
+        "  fan must supply {:.0} Pa ({:.0} … {:.0} Pa) of pressure loss",
+        r.pressure_loss, r.pressure_loss_band.low, r.pressure_loss_band.high
+    );
+    Ok(())
+}
+
+fn main() {
+    println!(
+        "hydrograde {} demo: invented scenarios, engineering estimates with k = 2 bands.",
+        hydrograde::VERSION
+    );
+    if let Err(e) = orchard().and_then(|_| duct()) {
+        eprintln!("error: {e}");
+        std::process::exit(1);
+    }
+    println!(
+        "\nCaution: these are engineering estimates with stated uncertainty. A design built on \
+         them must be checked by a competent engineer against the codes and standards that apply."
+    );
+}

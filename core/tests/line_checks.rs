@@ -1,0 +1,113 @@
+//! Gas compressibility, cavitation and grade-line checks of a line.
+
+mod common;
+
+use hydrograde::Warnings;
+use hydrograde::fluid::Fluid;
+use hydrograde::line::{Element, Line, LineOptions};
+use hydrograde::pipe::Pipe;
+use hydrograde::units::STANDARD_GRAVITY;
+
+fn air_line() -> Line {
+    Line::new(vec![Element::Pipe(
+        Pipe::circular(0.02, 30.0, 1.5e-6).unwrap(),
+    )])
+    .unwrap()
+}
+
+#[test]
+fn gas_warns_above_ten_percent_uses_mean_density_and_refuses_beyond_forty() {
+    // Common practice: incompressible treatment within 10 % of the inlet pressure, at the
+    // mean density up to 40 %, a compressible method beyond.
+    let air = Fluid::air(293.15, 2e5).unwrap();
+    let line = air_line();
+    let small = line.evaluate(&air, 2e-3).unwrap();
+    assert!(small.pressure_loss / 2e5 < 0.1, "{}", small.pressure_loss);
+    assert!(!small.warnings.contains(Warnings::GAS_COMPRESSIBILITY));
+    let mid = line.evaluate(&air, 1.1e-2).unwrap();
+    let ratio = mid.pressure_loss / 2e5;
+    assert!(ratio > 0.1 && ratio < 0.4, "{ratio}");
+    assert!(mid.warnings.contains(Warnings::GAS_COMPRESSIBILITY));
+    // Self-consistency (ideal gas, exact): the density used is the density at the mean pressure.
+    let mean = air.at_pressure(2e5 - 0.5 * mid.pressure_loss).unwrap();
+    assert!(
+        common::rel_err(mid.density, mean.density) < 1e-12,
+        "{} vs {}",
+        mid.density,
+        mean.density
+    );
+    let e = line.evaluate(&air, 2e-2).unwrap_err();
+    assert!(e.to_string().contains("compressible"), "{e}");
+}
+
+#[test]
+fn cavitation_warning_where_the_grade_line_falls_below_vapour_pressure() {
+    // A suction line lifting 9.5 m from a tank at atmospheric pressure: the static pressure
+    // at the top falls below the vapour pressure of water at 60 °C (about 19.9 kPa, IAPWS-IF97).
+    let water = Fluid::water(333.15, 101_325.0).unwrap();
+    let opts = LineOptions {
+        inlet_pressure: Some(101_325.0),
+        ..LineOptions::default()
+    };
+    let line = Line::with_options(
+        vec![
+            Element::Pipe(Pipe::circular(0.05, 5.0, 4.5e-5).unwrap()),
+            Element::Rise(9.5),
+            Element::Pipe(Pipe::circular(0.05, 5.0, 4.5e-5).unwrap()),
+        ],
+        opts,
+    )
+    .unwrap();
+    let r = line.evaluate(&water, 4e-3).unwrap();
+    assert!(r.warnings.contains(Warnings::BELOW_VAPOUR_PRESSURE));
+    assert!(
+        r.elements[1]
+            .warnings
+            .contains(Warnings::BELOW_VAPOUR_PRESSURE)
+    );
+    assert!(
+        !r.elements[0]
+            .warnings
+            .contains(Warnings::BELOW_VAPOUR_PRESSURE)
+    );
+    // Energy balance along a constant bore (exact): p_out = p_in − ρ g (Σ losses + rises).
+    let expect = 101_325.0 - water.density * STANDARD_GRAVITY * r.required_head;
+    assert!(common::rel_err(r.outlet_pressure.unwrap(), expect) < 1e-12);
+    // A gentle flow with a small lift does not warn.
+    let calm = line.evaluate(&water, 1e-4).unwrap();
+    let low = Line::with_options(
+        vec![
+            Element::Pipe(Pipe::circular(0.05, 5.0, 4.5e-5).unwrap()),
+            Element::Rise(2.0),
+        ],
+        LineOptions {
+            inlet_pressure: Some(101_325.0),
+            ..LineOptions::default()
+        },
+    )
+    .unwrap();
+    assert!(
+        !low.evaluate(&water, 1e-4)
+            .unwrap()
+            .warnings
+            .contains(Warnings::BELOW_VAPOUR_PRESSURE)
+    );
+    assert!(calm.outlet_pressure.is_some());
+}
+
+#[test]
+fn no_grade_line_without_an_inlet_pressure_for_a_liquid() {
+    let water = Fluid::water(293.15, 101_325.0).unwrap();
+    let line = Line::new(vec![Element::Pipe(
+        Pipe::circular(0.05, 5.0, 4.5e-5).unwrap(),
+    )])
+    .unwrap();
+    let r = line.evaluate(&water, 1e-3).unwrap();
+    assert!(r.outlet_pressure.is_none() && r.elements[0].pressure_out.is_none());
+    assert!(
+        line.evaluate_at(&water, 1e-3, Some(-5.0))
+            .unwrap_err()
+            .to_string()
+            .starts_with("inlet_pressure = -5")
+    );
+}

@@ -1,0 +1,57 @@
+//! Pickling and notebook rendering shared by every class.
+//!
+//! Pickling goes through one serde serialisation of the core value (JSON bytes), so a
+//! wrapper's state is exactly its core value and nothing hand-written.
+
+use pyo3::exceptions::PyValueError;
+use pyo3::prelude::*;
+use pyo3::sync::PyOnceLock;
+use pyo3::types::{PyBytes, PyDict};
+use serde::Serialize;
+use serde::de::DeserializeOwned;
+
+/// The serde (JSON) bytes of a core value.
+pub fn dumps<'py, T: Serialize>(py: Python<'py>, value: &T) -> PyResult<Bound<'py, PyBytes>> {
+    let bytes = serde_json::to_vec(value)
+        .map_err(|e| PyValueError::new_err(format!("cannot serialise: {e}")))?;
+    Ok(PyBytes::new(py, &bytes))
+}
+
+/// A core value back from its serde (JSON) bytes.
+pub fn loads<T: DeserializeOwned>(bytes: &[u8]) -> PyResult<T> {
+    serde_json::from_slice(bytes)
+        .map_err(|e| PyValueError::new_err(format!("not a hydrograde state: {e}")))
+}
+
+/// `(cls._from_state, (state,))`, the `__reduce__` value of every wrapper.
+pub fn reduce<'py, T: Serialize>(
+    obj: &Bound<'py, PyAny>,
+    value: &T,
+) -> PyResult<(Bound<'py, PyAny>, (Bound<'py, PyBytes>,))> {
+    let ctor = obj.get_type().getattr("_from_state")?;
+    Ok((ctor, (dumps(obj.py(), value)?,)))
+}
+
+static RENDER_HTML: PyOnceLock<Py<PyAny>> = PyOnceLock::new();
+static TO_DATAFRAME: PyOnceLock<Py<PyAny>> = PyOnceLock::new();
+
+/// The HTML table of an object's `to_dict()` (formatting lives in `hydrograde._notebook`).
+pub fn html(py: Python<'_>, title: &str, dict: &Bound<'_, PyDict>) -> PyResult<String> {
+    RENDER_HTML
+        .import(py, "hydrograde._notebook", "render_html")?
+        .call1((title, dict))?
+        .extract()
+}
+
+/// A pandas DataFrame of an object's `to_dict()` (raises ImportError without pandas).
+pub fn dataframe<'py>(py: Python<'py>, dict: &Bound<'py, PyDict>) -> PyResult<Bound<'py, PyAny>> {
+    TO_DATAFRAME
+        .import(py, "hydrograde._notebook", "to_dataframe")?
+        .call1((dict,))
+}
+
+/// A list of names as Python prints it: `['a', 'b']`.
+pub fn names_repr(names: &[&str]) -> String {
+    let quoted: Vec<String> = names.iter().map(|n| format!("'{n}'")).collect();
+    format!("[{}]", quoted.join(", "))
+}
