@@ -14,9 +14,11 @@
 use hydrograde::fitting::Fitting;
 use hydrograde::fluid::{Fluid, water_vapour_pressure};
 use hydrograde::friction::{Correlation, Options, Regime, darcy_factor};
-use hydrograde::line::{Element, Equipment, Line, LineOptions};
+use hydrograde::line::{Element, Equipment, Limit, Line, LineOptions, PumpCurve, split_flow};
 use hydrograde::pipe::Pipe;
+use hydrograde::roughness;
 use hydrograde::section::{Section, TurbulentDiameter};
+use hydrograde::sizes::{self, PipeTable};
 use hydrograde::units;
 use std::io::{self, BufWriter, Write};
 
@@ -126,6 +128,7 @@ fn main() -> io::Result<()> {
         }
     }
     others(&mut out)?;
+    materials(&mut out)?;
     lines(&mut out)?;
     out.flush()
 }
@@ -403,11 +406,189 @@ fn lines(out: &mut impl Write) -> io::Result<()> {
                     r,
                 )?;
             }
+            if sc == 0 {
+                line_solves(out, &fluid, fi as i64)?;
+            }
             let flows: Vec<f64> = (0..50).map(|i| -5e-3 + 2.5e-4 * i as f64).collect();
             let r = line
                 .system_curve(&fluid, &flows)
                 .map(|h| h.into_iter().map(D).collect());
             emit(out, "line_system_curve", &[I(sc), I(fi as i64)], r)?;
+        }
+    }
+    Ok(())
+}
+
+fn materials(out: &mut impl Write) -> io::Result<()> {
+    use Tok::{D, I, S};
+    for (i, n) in roughness::names().iter().enumerate() {
+        emit(out, "material_name", &[I(i as i64)], Ok(vec![S(n)]))?;
+    }
+    for name in roughness::names().into_iter().chain(["unobtainium"]) {
+        let r = roughness::material(name).map(|m| vec![D(m.typical), D(m.low), D(m.high)]);
+        emit(out, "roughness", &[S(name)], r)?;
+    }
+    for (a, b, c) in [
+        (4.5e-5, 1e-5, 20.0),
+        (0.0, 0.0, 0.0),
+        (-1.0, 0.0, 1.0),
+        (1e-4, f64::NAN, 1.0),
+    ] {
+        emit(
+            out,
+            "roughness_aged",
+            &[D(a), D(b), D(c)],
+            roughness::aged(a, b, c).map(|r| vec![D(r)]),
+        )?;
+    }
+    for table in PipeTable::ALL {
+        for &sched in table.schedules() {
+            for nominal in table.nominal_sizes() {
+                let r = sizes::lookup(table, nominal, sched)
+                    .map(|p| vec![D(p.outside_diameter), D(p.wall), D(p.inside_diameter)]);
+                emit(
+                    out,
+                    "pipe_size",
+                    &[S(table.name()), S(nominal), S(sched)],
+                    r,
+                )?;
+            }
+            for d in [0.001, 0.02, 0.05, 0.1, 0.3, 5.0, 0.0] {
+                let r = sizes::smallest_at_least(table, sched, d)
+                    .map(|p| vec![OwnedTok::D(p.inside_diameter), OwnedTok::S(p.nominal)]);
+                emit_owned(
+                    out,
+                    "pipe_size_at_least",
+                    &[S(table.name()), S(sched), D(d)],
+                    r,
+                )?;
+            }
+        }
+        let r = sizes::lookup(table, "37", "40").map(|p| vec![D(p.inside_diameter)]);
+        emit(out, "pipe_size", &[S(table.name()), S("37"), S("40")], r)?;
+    }
+    let r = "cast_iron".parse::<PipeTable>().map(|_| vec![]);
+    emit(out, "pipe_size", &[S("cast_iron"), S("2"), S("40")], r)?;
+    Ok(())
+}
+
+/// A token whose string is owned (for names built at run time).
+enum OwnedTok {
+    D(f64),
+    S(String),
+}
+
+impl Tok<'_> {
+    fn owned(&self) -> OwnedTok {
+        match self {
+            Tok::D(x) => OwnedTok::D(*x),
+            Tok::S(s) => OwnedTok::S(s.to_string()),
+            Tok::I(i) => OwnedTok::D(*i as f64),
+        }
+    }
+}
+
+fn emit_owned(
+    out: &mut impl Write,
+    tag: &str,
+    inputs: &[Tok],
+    result: hydrograde::Result<Vec<OwnedTok>>,
+) -> io::Result<()> {
+    let r = result.map(|v| {
+        v.into_iter()
+            .map(|t| match t {
+                OwnedTok::D(x) => hex(x),
+                OwnedTok::S(s) => format!("s:{s}"),
+            })
+            .collect::<Vec<_>>()
+    });
+    let ins: Vec<String> = inputs.iter().map(tok).collect();
+    let outs = match r {
+        Ok(v) => v.join(" "),
+        Err(e) => format!("!{}", e.kind().name()),
+    };
+    writeln!(out, "{tag} {} | {outs}", ins.join(" "))
+}
+
+/// Solves on the invented scenarios: a pump curve, a parallel pair, sizing.
+fn line_solves(out: &mut impl Write, fluid: &Fluid, fi: i64) -> io::Result<()> {
+    use Tok::{D, I, S};
+    let pump_q = [0.0, 1e-3, 2e-3, 3e-3, 4e-3];
+    for (pi, shut) in [40.0, 20.0, 2.0].into_iter().enumerate() {
+        let pump_h: Vec<f64> = pump_q
+            .iter()
+            .map(|q| shut * (1.0 - (q / 5e-3) * (q / 5e-3)))
+            .collect();
+        let line = scenario(0).map_err(io::Error::other)?;
+        let r = PumpCurve::new(&pump_q, &pump_h)
+            .and_then(|p| line.operating_point(fluid, &p))
+            .map(|o| {
+                vec![
+                    D(o.flow),
+                    D(o.head),
+                    D(o.flow_band.low),
+                    D(o.flow_band.high),
+                    D(o.head_band.low),
+                    D(o.head_band.high),
+                ]
+            });
+        emit(out, "line_operating_point", &[I(0), I(fi), I(pi as i64)], r)?;
+    }
+    let pair = [
+        scenario(0).map_err(io::Error::other)?,
+        scenario(1).map_err(io::Error::other)?,
+    ];
+    for total in [1e-3, 1e-2, -1e-3, f64::NAN] {
+        let r =
+            split_flow(&pair, fluid, total).map(|s| vec![D(s.flows[0]), D(s.flows[1]), D(s.head)]);
+        emit(out, "line_split_flow", &[I(0), I(fi), D(total)], r)?;
+    }
+    let line = scenario(0).map_err(io::Error::other)?;
+    for (li, limit) in [
+        Limit::PressureLoss(5e4),
+        Limit::Velocity(2.0),
+        Limit::PressureLoss(-1.0),
+    ]
+    .into_iter()
+    .enumerate()
+    {
+        for (table, sched) in [
+            (None, ""),
+            (Some(PipeTable::Steel), "40"),
+            (Some(PipeTable::Pvc), "80"),
+        ] {
+            let r = line
+                .size(fluid, 3e-3, limit, table.map(|t| (t, sched)))
+                .map(|sz| {
+                    let mut v = vec![D(sz.min_inside_diameter).owned()];
+                    for c in [&sz.standard, &sz.standard_at_band] {
+                        match c {
+                            Some(c) => v.extend([
+                                OwnedTok::S(c.size.nominal.clone()),
+                                OwnedTok::D(c.size.inside_diameter),
+                                OwnedTok::D(c.velocity),
+                                OwnedTok::D(c.pressure_loss),
+                                OwnedTok::D(c.pressure_loss_band.low),
+                                OwnedTok::D(c.pressure_loss_band.high),
+                            ]),
+                            None => v.push(OwnedTok::S("-".into())),
+                        }
+                    }
+                    v
+                });
+            let tname = table.map_or("-", |t| t.name());
+            emit_owned(
+                out,
+                "line_size",
+                &[
+                    I(0),
+                    I(fi),
+                    I(li as i64),
+                    S(tname),
+                    S(if sched.is_empty() { "-" } else { sched }),
+                ],
+                r,
+            )?;
         }
     }
     Ok(())

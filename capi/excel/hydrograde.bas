@@ -36,6 +36,11 @@ Public Declare PtrSafe Function hg_fitting_catalogue_name Lib "hydrograde.dll" (
 Public Declare PtrSafe Function hg_section_properties Lib "hydrograde.dll" (ByVal shape As Long, ByVal a As Double, ByVal b As Double, ByRef area As Double, ByRef wetted_perimeter As Double, ByRef hydraulic_diameter As Double, ByRef laminar_constant As Double) As Long
 Public Declare PtrSafe Function hg_pipe_head_loss Lib "hydrograde.dll" (ByVal diameter As Double, ByVal length As Double, ByVal roughness As Double, ByVal density As Double, ByVal viscosity As Double, ByVal flow As Double, ByRef head_loss As Double, ByRef dhead_dflow As Double) As Long
 Public Declare PtrSafe Function hg_reynolds Lib "hydrograde.dll" (ByVal flow As Double, ByVal diameter As Double, ByVal density As Double, ByVal viscosity As Double, ByRef re As Double) As Long
+Public Declare PtrSafe Function hg_roughness Lib "hydrograde.dll" (ByVal material As String, ByRef typical As Double, ByRef low As Double, ByRef high As Double) As Long
+Public Declare PtrSafe Function hg_roughness_material_name Lib "hydrograde.dll" (ByVal index As LongPtr, ByVal buf As String, ByVal length As LongPtr, ByRef needed As LongPtr) As Long
+Public Declare PtrSafe Function hg_roughness_aged Lib "hydrograde.dll" (ByVal initial As Double, ByVal rate As Double, ByVal years As Double, ByRef roughness As Double) As Long
+Public Declare PtrSafe Function hg_pipe_size Lib "hydrograde.dll" (ByVal table_name As String, ByVal nominal As String, ByVal schedule As String, ByRef outside_diameter As Double, ByRef wall As Double, ByRef inside_diameter As Double) As Long
+Public Declare PtrSafe Function hg_pipe_size_at_least Lib "hydrograde.dll" (ByVal table_name As String, ByVal schedule As String, ByVal min_inside_diameter As Double, ByRef inside_diameter As Double, ByVal nominal As String, ByVal length As LongPtr, ByRef needed As LongPtr) As Long
 
 Private Declare PtrSafe Function lstrlenA Lib "kernel32" (ByVal p As LongPtr) As Long
 Private Declare PtrSafe Sub RtlMoveMemory Lib "kernel32" (ByVal dest As String, ByVal src As LongPtr, ByVal n As LongPtr)
@@ -230,4 +235,37 @@ Public Function HgReynolds(ByVal flow As Double, ByVal diameter As Double, ByVal
     Dim s As Long, re As Double
     s = hg_reynolds(flow, diameter, density, viscosity, re)
     If s = HG_OK Then HgReynolds = re Else HgReynolds = ErrorOf(s)
+End Function
+
+' Typical absolute roughness (m) of new pipe of a catalogue material, e.g. "commercial_steel".
+Public Function HgRoughness(ByVal material As String) As Variant
+    Dim s As Long, t As Double, lo As Double, hi As Double
+    s = hg_roughness(material, t, lo, hi)
+    If s = HG_OK Then HgRoughness = t Else HgRoughness = ErrorOf(s)
+End Function
+
+' Roughness (m) after years of service, growing from initial (m) at rate (m per year).
+Public Function HgRoughnessAged(ByVal initial As Double, ByVal rate As Double, ByVal years As Double) As Variant
+    Dim s As Long, r As Double
+    s = hg_roughness_aged(initial, rate, years, r)
+    If s = HG_OK Then HgRoughnessAged = r Else HgRoughnessAged = ErrorOf(s)
+End Function
+
+' Inside diameter (m) of a standard pipe: table_name "steel", "stainless", "copper" or
+' "pvc"; nominal size and schedule as printed, e.g. =HgPipeInsideDiameter("steel", "2", "40").
+Public Function HgPipeInsideDiameter(ByVal table_name As String, ByVal nominal As String, _
+                                     ByVal schedule As String) As Variant
+    Dim s As Long, od As Double, w As Double, id As Double
+    s = hg_pipe_size(table_name, nominal, schedule, od, w, id)
+    If s = HG_OK Then HgPipeInsideDiameter = id Else HgPipeInsideDiameter = ErrorOf(s)
+End Function
+
+' Nominal size of the smallest standard pipe whose inside diameter is at least
+' min_inside_diameter (m), e.g. =HgPipeSizeAtLeast("pvc", "40", 0.05).
+Public Function HgPipeSizeAtLeast(ByVal table_name As String, ByVal schedule As String, _
+                                  ByVal min_inside_diameter As Double) As Variant
+    Dim s As Long, id As Double, need As LongPtr, buf As String
+    buf = String$(32, vbNullChar)
+    s = hg_pipe_size_at_least(table_name, schedule, min_inside_diameter, id, buf, 32, need)
+    If s = HG_OK Then HgPipeSizeAtLeast = Left$(buf, CLng(need)) Else HgPipeSizeAtLeast = ErrorOf(s)
 End Function

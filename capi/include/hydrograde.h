@@ -160,6 +160,16 @@
 #define HG_ELEMENT_EQUIPMENT 3
 
 /**
+ * Sizing limit: the line's pressure loss (friction + minor, without rises), Pa.
+ */
+#define HG_LIMIT_PRESSURE_LOSS 0
+
+/**
+ * Sizing limit: the mean velocity in the round pipes, m/s.
+ */
+#define HG_LIMIT_VELOCITY 1
+
+/**
  * Major version of the library (from Cargo.toml; the build fails if they disagree).
  */
 #define HG_VERSION_MAJOR 0
@@ -479,6 +489,63 @@ typedef struct hg_element_result {
    */
   double friction_factor_high;
 } hg_element_result;
+
+/**
+ * A standard size chosen by `hg_line_size`: zero everywhere when `found` is 0.
+ */
+typedef struct hg_size_choice {
+  /**
+   * 1 when a standard size was found, else 0.
+   */
+  int32_t found;
+  /**
+   * Nominal size as printed, NUL-terminated (e.g. "1-1/2").
+   */
+  char nominal[16];
+  /**
+   * Inside diameter, m.
+   */
+  double inside_diameter;
+  /**
+   * Velocity in it, m/s.
+   */
+  double velocity;
+  /**
+   * Pressure loss of the line with it, Pa.
+   */
+  double pressure_loss;
+  /**
+   * Lower end of the pressure-loss band, Pa.
+   */
+  double pressure_loss_low;
+  /**
+   * Upper end of the pressure-loss band, Pa.
+   */
+  double pressure_loss_high;
+} hg_size_choice;
+
+/**
+ * The answer of `hg_line_size`. Set `struct_size` to `sizeof(hg_sizing)` first.
+ */
+typedef struct hg_sizing {
+  /**
+   * Size of this struct in bytes, set by the caller.
+   */
+  size_t struct_size;
+  /**
+   * The smallest inside diameter that meets the limit at the nominal values, m.
+   */
+  double min_inside_diameter;
+  /**
+   * The smallest standard size that meets it at the nominal values.
+   */
+  struct hg_size_choice standard;
+  /**
+   * The smallest standard size that still meets it at the unfavourable end of the
+   * band (the high end of the pressure-loss band).
+   */
+  struct hg_size_choice standard_at_band;
+} hg_sizing;
 
 /**
  * The state of flow in a straight run at one flow rate. Set `struct_size` to
@@ -1044,6 +1111,169 @@ int32_t hg_line_system_curve(const struct hg_line *line,
                              const double *flows,
                              size_t n,
                              double *heads);
+
+/**
+ * The flow `*flow` (m³/s) and head `*head` (m) where the pump curve given by `n` points
+ * (`pump_flows` increasing, m³/s; `pump_heads`, m) meets the line's system curve, with
+ * the ends of their uncertainty bands. The pump curve is interpolated smoothly between
+ * its points and not extrapolated.
+ *
+ * Returns `HG_OK`; `HG_ERR_NO_SOLUTION` when the curves do not cross inside the pump
+ * curve's range; `HG_ERR_NOT_FINITE`, `HG_ERR_OUT_OF_RANGE`, `HG_ERR_INVALID` for a bad
+ * pump curve (too few points, flows not increasing) or line; `HG_ERR_NULL_POINTER`.
+ * Thread-safe (the line is only read).
+ *
+ * # Safety
+ * `line` and `fluid` must be NULL or live handles; the arrays NULL or valid for `n`
+ * doubles; the outputs NULL or writable doubles.
+ */
+int32_t hg_line_operating_point(const struct hg_line *line,
+                                const struct hg_fluid *fluid,
+                                const double *pump_flows,
+                                const double *pump_heads,
+                                size_t n,
+                                double *flow,
+                                double *head,
+                                double *flow_low,
+                                double *flow_high,
+                                double *head_low,
+                                double *head_high);
+
+/**
+ * Splits a total flow `total` (m³/s) between `n` lines in parallel so that all need the
+ * same head: `flows[i]` is the flow in `branches[i]` (m³/s) and `*head` the common
+ * required head (m).
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_INVALID` for `n` = 0, a branch without
+ * any loss or that cannot be built; `HG_ERR_NO_SOLUTION`; `HG_ERR_NULL_POINTER` (also
+ * for a NULL branch). Thread-safe (the lines are only read).
+ *
+ * # Safety
+ * `branches` must be NULL or valid for `n` pointers, each NULL or a live handle;
+ * `fluid` NULL or live; `flows` NULL or valid for `n` doubles; `head` NULL or writable.
+ */
+int32_t hg_line_split_flow(const struct hg_line *const *branches,
+                           size_t n,
+                           const struct hg_fluid *fluid,
+                           double total,
+                           double *flows,
+                           double *head);
+
+/**
+ * Sizes the round pipes of `line` (all set to one inside diameter) for `fluid` at flow
+ * `flow` (m³/s, ≠ 0) under the limit `limit` (`HG_LIMIT_*`) of value `limit_value`
+ * (Pa or m/s, > 0); with `table` and `schedule` (as `hg_pipe_size`; both NULL for none)
+ * it also picks the smallest standard size that meets the limit, at the nominal values
+ * and at the band's unfavourable end. The result goes to `*out`.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a zero flow, a limit
+ * ≤ 0 or an unknown `limit`; `HG_ERR_UNKNOWN_NAME` for a table or schedule;
+ * `HG_ERR_INVALID` for a line without round pipes or a `struct_size` too small;
+ * `HG_ERR_NO_SOLUTION` when no bore up to 20 m or no standard size meets the limit;
+ * `HG_ERR_NULL_POINTER`. Thread-safe (the line is only read).
+ *
+ * # Safety
+ * `line` and `fluid` must be NULL or live handles; `table` and `schedule` NULL or
+ * NUL-terminated; `out` NULL or a writable `hg_sizing` of `out->struct_size` bytes.
+ */
+int32_t hg_line_size(const struct hg_line *line,
+                     const struct hg_fluid *fluid,
+                     double flow,
+                     int32_t limit,
+                     double limit_value,
+                     const char *table,
+                     const char *schedule,
+                     struct hg_sizing *out);
+
+/**
+ * Absolute roughness of new pipe of the catalogue material `material` (e.g.
+ * "commercial_steel"; see `hg_roughness_material_name`): `*typical`, and the quoted
+ * range `*low` to `*high`, all in m (handbook values; common practice).
+ *
+ * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` (the message lists the catalogue);
+ * `HG_ERR_INVALID` for a name not UTF-8; `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * `material` must be NULL or a NUL-terminated string; the outputs NULL or writable.
+ */
+int32_t hg_roughness(const char *material,
+                     double *typical,
+                     double *low,
+                     double *high);
+
+/**
+ * Copies the name of catalogue material number `index` (0-based) into `buf` (at most
+ * `len - 1` bytes and a NUL) and stores its full length in `*needed`.
+ *
+ * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` past the end; `HG_ERR_BUFFER_TOO_SMALL` when
+ * the name did not fit (the cut copy is still written); `HG_ERR_NULL_POINTER` for a NULL
+ * `needed`, or a NULL `buf` with `len` > 0. Thread-safe.
+ *
+ * # Safety
+ * `buf` must be NULL or valid for writing `len` bytes; `needed` NULL or writable.
+ */
+int32_t hg_roughness_material_name(size_t index,
+                                   char *buf,
+                                   size_t len,
+                                   size_t *needed);
+
+/**
+ * Roughness `*roughness` (m) after `years` of service growing linearly from `initial`
+ * (m) at `rate` (m per year): ε = ε₀ + α·t (Colebrook & White 1937 aging model).
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a negative argument;
+ * `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * `roughness` must be NULL or point to a writable double.
+ */
+int32_t hg_roughness_aged(double initial,
+                          double rate,
+                          double years,
+                          double *roughness);
+
+/**
+ * Dimensions of a standard pipe: `table` ("steel" ASME B36.10M, "stainless" ASME
+ * B36.19M, "copper" ASTM B88, "pvc" ASTM D1785), `nominal` size as printed ("2",
+ * "1-1/2", "3/4") and `schedule` or tube type ("40", "STD", "10S", "K"): outside
+ * diameter, wall thickness and inside diameter, all in m.
+ *
+ * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` for a table, size or schedule not listed (the
+ * message lists the known ones); `HG_ERR_INVALID` for a string not UTF-8;
+ * `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * The strings must be NULL or NUL-terminated; the outputs NULL or writable doubles.
+ */
+int32_t hg_pipe_size(const char *table,
+                     const char *nominal,
+                     const char *schedule,
+                     double *outside_diameter,
+                     double *wall,
+                     double *inside_diameter);
+
+/**
+ * The smallest standard pipe of `table` in `schedule` (as `hg_pipe_size`) whose inside
+ * diameter is at least `min_inside_diameter` (m, > 0): its inside diameter in
+ * `*inside_diameter` (m) and its nominal size copied into `nominal` (at most `len - 1`
+ * bytes and a NUL; full length in `*needed`).
+ *
+ * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`
+ * for a diameter ≤ 0 or larger than the table's largest; `HG_ERR_BUFFER_TOO_SMALL`
+ * when the nominal size did not fit (the diameter is still written);
+ * `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * The strings must be NULL or NUL-terminated; `nominal` NULL or valid for `len` bytes;
+ * `needed` and `inside_diameter` NULL or writable.
+ */
+int32_t hg_pipe_size_at_least(const char *table,
+                              const char *schedule,
+                              double min_inside_diameter,
+                              double *inside_diameter,
+                              char *nominal,
+                              size_t len,
+                              size_t *needed);
 
 /**
  * The library version as a static string, e.g. "0.1.0" (never freed; never NULL).

@@ -252,6 +252,65 @@ inline double reynolds(double flow, double diameter, double density, double visc
   return re;
 }
 
+/// Roughness of a catalogue material: typical value and quoted range, m.
+struct roughness_range {
+  double typical;
+  double low;
+  double high;
+};
+
+/// Roughness of new pipe of the catalogue material (e.g. "commercial_steel").
+inline roughness_range roughness(const std::string& material) {
+  roughness_range r{};
+  check(hg_roughness(material.c_str(), &r.typical, &r.low, &r.high));
+  return r;
+}
+
+/// Every catalogue material name.
+inline std::vector<std::string> roughness_materials() {
+  return detail::names(hg_roughness_material_name);
+}
+
+/// Roughness (m) after years of service, growing from initial (m) at rate (m/year).
+inline double roughness_aged(double initial, double rate, double years) {
+  double r = 0.0;
+  check(hg_roughness_aged(initial, rate, years, &r));
+  return r;
+}
+
+/// Dimensions of a standard pipe, m.
+struct pipe_dimensions {
+  double outside_diameter;
+  double wall;
+  double inside_diameter;
+};
+
+/// A standard pipe by table ("steel", "stainless", "copper", "pvc"), nominal size and
+/// schedule as printed.
+inline pipe_dimensions pipe_size(const std::string& table, const std::string& nominal,
+                                 const std::string& schedule) {
+  pipe_dimensions d{};
+  check(hg_pipe_size(table.c_str(), nominal.c_str(), schedule.c_str(), &d.outside_diameter,
+                     &d.wall, &d.inside_diameter));
+  return d;
+}
+
+/// The smallest standard pipe with an inside diameter of at least min_inside_diameter (m):
+/// its nominal size and inside diameter.
+inline std::pair<std::string, double> pipe_size_at_least(const std::string& table,
+                                                         const std::string& schedule,
+                                                         double min_inside_diameter) {
+  double d = 0.0;
+  std::size_t need = 0;
+  int32_t s = hg_pipe_size_at_least(table.c_str(), schedule.c_str(), min_inside_diameter, &d,
+                                    nullptr, 0, &need);
+  if (s != HG_ERR_BUFFER_TOO_SMALL) check(s);
+  std::string nominal(need, '\0');
+  check(hg_pipe_size_at_least(table.c_str(), schedule.c_str(), min_inside_diameter, &d,
+                              &nominal[0], need + 1, &need));
+  return {nominal, d};
+}
+
 /// A fluid for line evaluations (owns an hg_fluid; movable, not copyable).
 class fluid {
  public:
@@ -300,6 +359,11 @@ struct flow_solution {
   double flow;
   double flow_low;
   double flow_high;
+};
+
+/// Where a pump curve meets a system curve, with the uncertainty bands.
+struct operating_point {
+  double flow, head, flow_low, flow_high, head_low, head_high;
 };
 
 /// A route of elements in series (owns an hg_line; movable, not copyable). The add_*
@@ -385,12 +449,49 @@ class line {
     check(hg_line_system_curve(l_, f.get(), flows.data(), flows.size(), heads.data()));
     return heads;
   }
+  /// The operating point of a pump curve given by points (flows increasing, m³/s; heads, m).
+  hydrograde::operating_point operating_point(const fluid& f, const std::vector<double>& pump_flows,
+                                              const std::vector<double>& pump_heads) const {
+    if (pump_flows.size() != pump_heads.size())
+      throw error(HG_ERR_INVALID, "pump_heads: length differs from pump_flows'");
+    hydrograde::operating_point p{};
+    check(hg_line_operating_point(l_, f.get(), pump_flows.data(), pump_heads.data(),
+                                  pump_flows.size(), &p.flow, &p.head, &p.flow_low, &p.flow_high,
+                                  &p.head_low, &p.head_high));
+    return p;
+  }
+  /// Sizes the round pipes for flow under a limit (HG_LIMIT_*), optionally to a standard
+  /// table and schedule (empty strings for none).
+  hg_sizing size(const fluid& f, double flow, int32_t limit, double limit_value,
+                 const std::string& table = "", const std::string& schedule = "") const {
+    hg_sizing z{};
+    z.struct_size = sizeof z;
+    bool none = table.empty() && schedule.empty();
+    check(hg_line_size(l_, f.get(), flow, limit, limit_value, none ? nullptr : table.c_str(),
+                       none ? nullptr : schedule.c_str(), &z));
+    return z;
+  }
   /// The C handle (still owned by this object).
   hg_line* get() noexcept { return l_; }
+  /// The C handle (still owned by this object).
+  const hg_line* get() const noexcept { return l_; }
 
  private:
   hg_line* l_ = nullptr;
 };
+
+/// Splits total (m³/s) between parallel lines so that all need the same head: the flow
+/// of each branch and the common head (m).
+inline std::pair<std::vector<double>, double> split_flow(const std::vector<const line*>& branches,
+                                                         const fluid& f, double total) {
+  std::vector<const hg_line*> b;
+  for (const line* l : branches) b.push_back(l ? l->get() : nullptr);
+  std::vector<double> flows(b.size());
+  double head = 0.0;
+  if (b.empty()) throw error(HG_ERR_INVALID, "branches: need at least one branch");
+  check(hg_line_split_flow(b.data(), b.size(), f.get(), total, flows.data(), &head));
+  return {flows, head};
+}
 
 }  // namespace hydrograde
 

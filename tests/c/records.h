@@ -100,4 +100,31 @@ static int same_outputs(const record *r, const double *got, int ngot) {
   }
   return 1;
 }
+
+static tok tok_d(double d) {
+  tok t;
+  memset(&t, 0, sizeof t);
+  t.type = 'd', t.d = d;
+  return t;
+}
+
+static tok tok_s(const char *s) {
+  tok t;
+  memset(&t, 0, sizeof t);
+  t.type = 's';
+  snprintf(t.s, sizeof t.s, "%s", s);
+  return t;
+}
+
+/* Compares tokens a call gave with a record's outputs: doubles bit for bit. */
+static int same_tokens(const record *r, const tok *got, int ngot) {
+  if (ngot != r->nout) return 0;
+  for (int i = 0; i < ngot; i++) {
+    if (got[i].type != r->out[i].type && !(got[i].type == 'd' && r->out[i].type == 'i')) return 0;
+    if (r->out[i].type == 's' && strcmp(got[i].s, r->out[i].s) != 0) return 0;
+    if (r->out[i].type == 'd' && bits_of(got[i].d) != bits_of(r->out[i].d)) return 0;
+    if (r->out[i].type == 'i' && got[i].d != (double)r->out[i].i) return 0;
+  }
+  return 1;
+}
 #endif

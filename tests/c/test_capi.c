@@ -126,12 +126,45 @@ static long check_record(const record *r, int quiet) {
   return !same;
 }
 
+/* Materials and pipe sizes: outputs mix numbers and names. */
+static long check_material_record(const record *r, int quiet) {
+  const tok *a = r->in;
+  tok got[8];
+  int n = 0;
+  int32_t s = -1;
+  double x = 0, y = 0, z = 0;
+  char name[64] = "";
+  size_t need = 0;
+  if (strcmp(r->tag, "material_name") == 0) {
+    s = hg_roughness_material_name((size_t)a[0].i, name, sizeof name, &need);
+    if (need != strlen(name)) s = -2;
+    got[n++] = tok_s(name);
+  } else if (strcmp(r->tag, "roughness") == 0) {
+    s = hg_roughness(a[0].s, &x, &y, &z);
+    got[n++] = tok_d(x), got[n++] = tok_d(y), got[n++] = tok_d(z);
+  } else if (strcmp(r->tag, "roughness_aged") == 0) {
+    s = hg_roughness_aged(a[0].d, a[1].d, a[2].d, &x);
+    got[n++] = tok_d(x);
+  } else if (strcmp(r->tag, "pipe_size") == 0) {
+    s = hg_pipe_size(a[0].s, a[1].s, a[2].s, &x, &y, &z);
+    got[n++] = tok_d(x), got[n++] = tok_d(y), got[n++] = tok_d(z);
+  } else if (strcmp(r->tag, "pipe_size_at_least") == 0) {
+    s = hg_pipe_size_at_least(a[0].s, a[1].s, a[2].d, &x, name, sizeof name, &need);
+    got[n++] = tok_d(x), got[n++] = tok_s(name);
+  }
+  int same = r->err ? s == code_of_kind(r->kind) && msg_len() > 0 : s == HG_OK && same_tokens(r, got, n);
+  if (!quiet) CHECK(same, "%s: status %d (want %s)", r->tag, s, r->err ? r->kind : "HG_OK");
+  return !same;
+}
+
 /* Every record of the functions other than the friction factor and the line. */
 static long compare_records(int quiet) {
   const char *tags[] = {"water", "air", "vapour", "convert", "unit_name", "catalogue", "fitting_k",
                         "section", "pipe_head_loss", "reynolds", "duct_flow_state"};
   long bad = 0;
   for (size_t i = 0; i < sizeof tags / sizeof *tags; i++) bad += for_each_record(ref_path, tags[i], check_record, quiet);
+  const char *mtags[] = {"material_name", "roughness", "pipe_size"};
+  for (size_t i = 0; i < 3; i++) bad += for_each_record(ref_path, mtags[i], check_material_record, quiet);
   return bad;
 }
 
@@ -391,7 +424,17 @@ static int32_t call_duct(const double *a, double *out) {
 }
 
 
+static int32_t call_aged(const double *a, double *out) { return hg_roughness_aged(a[0], a[1], a[2], out); }
+static int32_t call_at_least(const double *a, double *out) {
+  char nominal[16];
+  size_t need;
+  return hg_pipe_size_at_least("copper", "K", a[0], out, nominal, sizeof nominal, &need);
+}
+
 static const scalar_case cases[] = {
+    {"hg_roughness_aged", call_aged, 3, {1e-4, 1e-5, 20.0}, {REJ_NONFINITE | REJ_NEG, REJ_NONFINITE | REJ_NEG,
+                                                              REJ_NONFINITE | REJ_NEG}},
+    {"hg_pipe_size_at_least", call_at_least, 1, {0.02}, {REJ_ALL}},
     {"hg_darcy_factor", call_darcy, 2, {1e5, 1e-4}, {REJ_ALL, REJ_NONFINITE | REJ_NEG}},
     {"hg_darcy_factor_full", call_darcy_full, 2, {1e5, 1e-4}, {REJ_ALL, REJ_NONFINITE | REJ_NEG}},
     {"hg_darcy_factor_opts", call_darcy_opts, 5, {1e5, 1e-4, 64.0, 2300.0, 4000.0},
@@ -526,7 +569,7 @@ static void test_threads(void) {
 }
 
 static void test_bad_pointers_others(void) {
-  double x = 5.0, y = 5.0, z, w;
+  double x = 5.0, y = 5.0, z = 0, w;
   char buf[8];
   size_t need = 0;
   CHECK(hg_water(293.15, 1e5, NULL, &y) == HG_ERR_NULL_POINTER && y == 5.0 && msg_len() > 0, "water NULL");
@@ -586,6 +629,28 @@ static void test_bad_pointers_others(void) {
   char m[64];
   hg_last_error(m, sizeof m);
   CHECK(strncmp(m, "element 1: flow = inf", 21) == 0, "batch message '%s'", m);
+  CHECK(hg_roughness(NULL, &x, &y, &z) == HG_ERR_NULL_POINTER, "roughness NULL name");
+  CHECK(hg_roughness("plastic", NULL, &y, &z) == HG_ERR_NULL_POINTER, "roughness NULL");
+  CHECK(hg_roughness("plastic", &x, NULL, &z) == HG_ERR_NULL_POINTER, "roughness NULL");
+  CHECK(hg_roughness("plastic", &x, &y, NULL) == HG_ERR_NULL_POINTER && msg_len() > 0, "roughness NULL");
+  CHECK(hg_roughness_material_name(0, buf, sizeof buf, NULL) == HG_ERR_NULL_POINTER, "material NULL");
+  CHECK(hg_roughness_material_name(999, buf, sizeof buf, &need) == HG_ERR_OUT_OF_RANGE, "material past end");
+  CHECK(hg_roughness_aged(1e-4, 1e-5, 3, NULL) == HG_ERR_NULL_POINTER, "aged NULL");
+  CHECK(hg_pipe_size(NULL, "2", "40", &x, &y, &z) == HG_ERR_NULL_POINTER, "size NULL table");
+  CHECK(hg_pipe_size("steel", NULL, "40", &x, &y, &z) == HG_ERR_NULL_POINTER, "size NULL nominal");
+  CHECK(hg_pipe_size("steel", "2", NULL, &x, &y, &z) == HG_ERR_NULL_POINTER, "size NULL schedule");
+  CHECK(hg_pipe_size("steel", "2", "40", NULL, &y, &z) == HG_ERR_NULL_POINTER, "size NULL out");
+  CHECK(hg_pipe_size("steel", "2", "40", &x, NULL, &z) == HG_ERR_NULL_POINTER, "size NULL out");
+  CHECK(hg_pipe_size("steel", "2", "40", &x, &y, NULL) == HG_ERR_NULL_POINTER, "size NULL out");
+  CHECK(hg_pipe_size("steel", "2", "99", &x, &y, &z) == HG_ERR_UNKNOWN_NAME && msg_len() > 0, "schedule 99");
+  CHECK(hg_pipe_size_at_least(NULL, "40", 0.05, &x, buf, sizeof buf, &need) == HG_ERR_NULL_POINTER, "at least NULL");
+  CHECK(hg_pipe_size_at_least("steel", NULL, 0.05, &x, buf, sizeof buf, &need) == HG_ERR_NULL_POINTER, "at least NULL");
+  CHECK(hg_pipe_size_at_least("steel", "40", 0.05, NULL, buf, sizeof buf, &need) == HG_ERR_NULL_POINTER, "at least NULL");
+  CHECK(hg_pipe_size_at_least("steel", "40", 0.05, &x, NULL, 4, &need) == HG_ERR_NULL_POINTER, "at least NULL buf");
+  CHECK(hg_pipe_size_at_least("steel", "40", 0.05, &x, buf, sizeof buf, NULL) == HG_ERR_NULL_POINTER, "at least NULL");
+  x = 0;
+  CHECK(hg_pipe_size_at_least("steel", "40", 0.05, &x, buf, 1, &need) == HG_ERR_BUFFER_TOO_SMALL && x > 0.05 &&
+            buf[0] == 0 && need > 0, "at least: diameter written, name cut");
 }
 
 

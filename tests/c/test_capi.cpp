@@ -112,6 +112,15 @@ static void test_others() {
   hg_reynolds(2e-3, 0.05, 998.2, 1.002e-3, &x);
   CHECK(same_bits(hg::reynolds(2e-3, 0.05, 998.2, 1.002e-3), x), "reynolds");
 
+  hg::roughness_range rr = hg::roughness("commercial_steel");
+  CHECK(rr.low <= rr.typical && rr.typical <= rr.high, "roughness range");
+  CHECK(hg::roughness_materials().size() > 5, "materials");
+  hg_roughness_aged(1e-4, 2e-5, 10, &x);
+  CHECK(same_bits(hg::roughness_aged(1e-4, 2e-5, 10), x), "aged");
+  hg::pipe_dimensions pd = hg::pipe_size("steel", "2", "40");
+  CHECK(std::fabs(pd.inside_diameter - (pd.outside_diameter - 2 * pd.wall)) < 1e-15, "pipe size");
+  auto al = hg::pipe_size_at_least("copper", "L", 0.03);
+  CHECK(al.second >= 0.03 && !al.first.empty(), "at least");
   auto e = thrown([] { hg::water(200.0, 1e5); });
   CHECK(e.first == HG_ERR_OUT_OF_RANGE && e.second.find("temperature") != std::string::npos, e.second.c_str());
   e = thrown([] { hg::convert(1.0, "m", "furlong"); });
@@ -154,6 +163,17 @@ static void test_line() {
   f2 = hg::fluid::air(300.0, 1e5);
   CHECK(f2.props().density < 2.0, "moved fluid");
 
+  hg::operating_point op = moved.operating_point(water, {0.0, 2e-3, 4e-3}, {40.0, 32.0, 8.0});
+  CHECK(op.flow > 0 && op.flow_low < op.flow && op.flow < op.flow_high, "operating point");
+  CHECK(std::fabs(moved.evaluate(water, op.flow).required_head - op.head) < 1e-9 * op.head, "on the system curve");
+  hg::line branch;
+  branch.add_pipe(0.08, 20, 4.5e-5);
+  auto sp = hg::split_flow({&moved, &branch}, water, 5e-3);
+  CHECK(sp.first.size() == 2 && std::fabs(sp.first[0] + sp.first[1] - 5e-3) < 1e-15, "split adds up");
+  hg_sizing z = moved.size(water, 3e-3, HG_LIMIT_VELOCITY, 2.0, "steel", "40");
+  CHECK(z.standard.found == 1 && z.standard.inside_diameter >= z.min_inside_diameter &&
+            std::string(z.standard.nominal) == hg::pipe_size_at_least("steel", "40", z.min_inside_diameter).first,
+        "sizing picks the smallest standard size");
   auto e = thrown([] { hg::line().evaluate(hg::fluid::liquid(1000, 1e-3), 1e-3); });
   CHECK(e.first == HG_ERR_INVALID && !e.second.empty(), e.second.c_str());
   e = thrown([] { hg::line().add_pipe(0.05, 10, 0).add_fitting("nonesuch"); });

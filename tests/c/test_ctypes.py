@@ -141,6 +141,9 @@ TAGS = {
     "section": "hg_section_properties",
     "pipe_head_loss": "hg_pipe_head_loss",
     "reynolds": "hg_reynolds",
+    "roughness": "hg_roughness",
+    "roughness_aged": "hg_roughness_aged",
+    "pipe_size": "hg_pipe_size",
 }
 CODES = {"not_finite": 10, "out_of_range": 11, "unknown_name": 12, "invalid": 13, "no_solution": 20}
 OUT_TYPES = {"Double": ctypes.c_double, "Long": ctypes.c_int32, "LongPtr": ctypes.c_ssize_t}
@@ -186,7 +189,11 @@ def test_every_scalar_function_equals_the_core_bit_for_bit(vba):
 
 def test_names_through_string_buffers(vba, reference):
     """A VBA String buffer (ByVal String) receives the name; the full length comes back."""
-    for tag, fn in (("unit_name", "hg_unit_name"), ("catalogue", "hg_fitting_catalogue_name")):
+    for tag, fn in (
+        ("unit_name", "hg_unit_name"),
+        ("catalogue", "hg_fitting_catalogue_name"),
+        ("material_name", "hg_roughness_material_name"),
+    ):
         for i, _, want in reference[tag]:
             index, name = int(i[2:]), want.split(":", 1)[1]
             need = ctypes.c_ssize_t(-1)
@@ -196,3 +203,22 @@ def test_names_through_string_buffers(vba, reference):
             assert vba[fn](index, buf, need.value + 1, ctypes.byref(need)) == 0
             assert buf.value.decode() == name
         assert vba[fn](10_000, None, 0, ctypes.byref(need)) == 11
+
+
+def test_smallest_standard_size_through_a_string_buffer(vba):
+    rows = [
+        line.split()[1:]
+        for line in Path(os.environ["HG_REFERENCE"]).read_text().splitlines()
+        if line.startswith("pipe_size_at_least ")
+    ]
+    assert rows
+    d, need = ctypes.c_double(), ctypes.c_ssize_t()
+    for table, sched, dmin, _, *outs in rows:
+        buf = ctypes.create_string_buffer(32)
+        s = vba["hg_pipe_size_at_least"](token(table), token(sched), unhex(dmin), ctypes.byref(d), buf, 32,
+                                         ctypes.byref(need))
+        if outs[0].startswith("!"):
+            assert s == CODES[outs[0][1:]]
+        else:
+            assert s == 0
+            assert (bits(d.value), "s:" + buf.value.decode()) == (int(outs[0], 16), outs[1])

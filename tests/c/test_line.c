@@ -76,10 +76,101 @@ static long check_line_record(const record *r, int quiet) {
     /* In place gives the same. */
     if (s == HG_OK && (hg_line_system_curve(l, f, q, 50, q) != HG_OK || memcmp(q, got, sizeof q) != 0)) s = -2;
   }
+  if (strcmp(r->tag, "line_operating_point") == 0 || strcmp(r->tag, "line_split_flow") == 0 ||
+      strcmp(r->tag, "line_size") == 0)
+    return 0; /* checked by check_solve_record */
   int same = r->err ? s == code_of_kind(r->kind) && msg_len() > 0 : s == HG_OK && same_outputs(r, got, ngot);
   if (!quiet) CHECK(same, "%s scenario %lld fluid %lld: status %d (want %s)", r->tag, r->in[0].i, r->in[1].i, s,
                     r->err ? r->kind : "HG_OK");
   return !same;
+}
+
+static void choice_tokens(const hg_size_choice *c, tok *got, int *n) {
+  if (!c->found) {
+    got[(*n)++] = tok_s("-");
+    return;
+  }
+  got[(*n)++] = tok_s(c->nominal);
+  got[(*n)++] = tok_d(c->inside_diameter), got[(*n)++] = tok_d(c->velocity);
+  got[(*n)++] = tok_d(c->pressure_loss), got[(*n)++] = tok_d(c->pressure_loss_low);
+  got[(*n)++] = tok_d(c->pressure_loss_high);
+}
+
+/* Pump operating point, parallel split and sizing, as in `line_solves` of the generator. */
+static long check_solve_record(const record *r, int quiet) {
+  if (strcmp(r->tag, "line_system_curve") == 0) return 0; /* checked by check_line_record */
+  const hg_fluid *f = fluids[r->in[1].i];
+  tok got[16];
+  int n = 0;
+  int32_t s = -1;
+  if (strcmp(r->tag, "line_operating_point") == 0) {
+    const double shut[3] = {40.0, 20.0, 2.0};
+    double q[5] = {0.0, 1e-3, 2e-3, 3e-3, 4e-3}, h[5], o[6];
+    for (int i = 0; i < 5; i++) h[i] = shut[r->in[2].i] * (1.0 - (q[i] / 5e-3) * (q[i] / 5e-3));
+    s = hg_line_operating_point(lines[0], f, q, h, 5, &o[0], &o[1], &o[2], &o[3], &o[4], &o[5]);
+    for (int i = 0; i < 6; i++) got[n++] = tok_d(o[i]);
+  } else if (strcmp(r->tag, "line_split_flow") == 0) {
+    const hg_line *pair[2] = {lines[0], lines[1]};
+    double q[2], h;
+    s = hg_line_split_flow(pair, 2, f, r->in[2].d, q, &h);
+    got[n++] = tok_d(q[0]), got[n++] = tok_d(q[1]), got[n++] = tok_d(h);
+  } else if (strcmp(r->tag, "line_size") == 0) {
+    const double limit_value[3] = {5e4, 2.0, -1.0};
+    const int32_t limit[3] = {HG_LIMIT_PRESSURE_LOSS, HG_LIMIT_VELOCITY, HG_LIMIT_PRESSURE_LOSS};
+    int none = strcmp(r->in[3].s, "-") == 0;
+    hg_sizing z;
+    memset(&z, 0, sizeof z);
+    z.struct_size = sizeof z;
+    s = hg_line_size(lines[0], f, 3e-3, limit[r->in[2].i], limit_value[r->in[2].i], none ? NULL : r->in[3].s,
+                     none ? NULL : r->in[4].s, &z);
+    got[n++] = tok_d(z.min_inside_diameter);
+    choice_tokens(&z.standard, got, &n);
+    choice_tokens(&z.standard_at_band, got, &n);
+  }
+  int same = r->err ? s == code_of_kind(r->kind) && msg_len() > 0 : s == HG_OK && same_tokens(r, got, n);
+  if (!quiet) CHECK(same, "%s fluid %lld: status %d (want %s)", r->tag, r->in[1].i, s, r->err ? r->kind : "HG_OK");
+  return !same;
+}
+
+static void test_solves_bad_input(void) {
+  hg_fluid *f = fluids[0];
+  const hg_line *l = lines[0];
+  double q[3] = {0.0, 1e-3, 2e-3}, h[3] = {30, 25, 15}, o[6], fl[2], hd;
+  CHECK(hg_line_operating_point(NULL, f, q, h, 3, &o[0], &o[1], &o[2], &o[3], &o[4], &o[5]) == HG_ERR_NULL_POINTER, "op NULL line");
+  CHECK(hg_line_operating_point(l, NULL, q, h, 3, &o[0], &o[1], &o[2], &o[3], &o[4], &o[5]) == HG_ERR_NULL_POINTER, "op NULL fluid");
+  CHECK(hg_line_operating_point(l, f, NULL, h, 3, &o[0], &o[1], &o[2], &o[3], &o[4], &o[5]) == HG_ERR_NULL_POINTER, "op NULL flows");
+  CHECK(hg_line_operating_point(l, f, q, NULL, 3, &o[0], &o[1], &o[2], &o[3], &o[4], &o[5]) == HG_ERR_NULL_POINTER, "op NULL heads");
+  for (int k = 0; k < 6; k++) {
+    double *p[6] = {&o[0], &o[1], &o[2], &o[3], &o[4], &o[5]};
+    p[k] = NULL;
+    CHECK(hg_line_operating_point(l, f, q, h, 3, p[0], p[1], p[2], p[3], p[4], p[5]) == HG_ERR_NULL_POINTER, "op NULL %d", k);
+  }
+  CHECK(hg_line_operating_point(l, f, q, h, 0, &o[0], &o[1], &o[2], &o[3], &o[4], &o[5]) == HG_ERR_INVALID, "op n 0");
+  CHECK(hg_line_operating_point(l, f, q, h, 2, &o[0], &o[1], &o[2], &o[3], &o[4], &o[5]) != HG_OK && msg_len() > 0, "op 2 points");
+  h[1] = NAN;
+  CHECK(hg_line_operating_point(l, f, q, h, 3, &o[0], &o[1], &o[2], &o[3], &o[4], &o[5]) == HG_ERR_NOT_FINITE, "op NaN head");
+  const hg_line *pair[2] = {lines[0], NULL};
+  CHECK(hg_line_split_flow(pair, 2, f, 1e-3, fl, &hd) == HG_ERR_NULL_POINTER && msg_len() > 0, "split NULL branch");
+  pair[1] = lines[1];
+  CHECK(hg_line_split_flow(NULL, 2, f, 1e-3, fl, &hd) == HG_ERR_NULL_POINTER, "split NULL branches");
+  CHECK(hg_line_split_flow(pair, 0, f, 1e-3, fl, &hd) == HG_ERR_INVALID, "split n 0");
+  CHECK(hg_line_split_flow(pair, 2, NULL, 1e-3, fl, &hd) == HG_ERR_NULL_POINTER, "split NULL fluid");
+  CHECK(hg_line_split_flow(pair, 2, f, 1e-3, NULL, &hd) == HG_ERR_NULL_POINTER, "split NULL flows");
+  CHECK(hg_line_split_flow(pair, 2, f, 1e-3, fl, NULL) == HG_ERR_NULL_POINTER, "split NULL head");
+  CHECK(hg_line_split_flow(pair, 2, f, INFINITY, fl, &hd) == HG_ERR_NOT_FINITE, "split inf");
+  hg_sizing z;
+  z.struct_size = sizeof z;
+  CHECK(hg_line_size(NULL, f, 1e-3, 0, 5e4, NULL, NULL, &z) == HG_ERR_NULL_POINTER, "size NULL line");
+  CHECK(hg_line_size(l, NULL, 1e-3, 0, 5e4, NULL, NULL, &z) == HG_ERR_NULL_POINTER, "size NULL fluid");
+  CHECK(hg_line_size(l, f, 1e-3, 0, 5e4, NULL, NULL, NULL) == HG_ERR_NULL_POINTER, "size NULL out");
+  CHECK(hg_line_size(l, f, 1e-3, 0, 5e4, "steel", NULL, &z) == HG_ERR_NULL_POINTER, "size NULL schedule");
+  CHECK(hg_line_size(l, f, 1e-3, 2, 5e4, NULL, NULL, &z) == HG_ERR_OUT_OF_RANGE && msg_len() > 0, "limit 2");
+  CHECK(hg_line_size(l, f, 0.0, 0, 5e4, NULL, NULL, &z) == HG_ERR_OUT_OF_RANGE, "size zero flow");
+  CHECK(hg_line_size(l, f, NAN, 0, 5e4, NULL, NULL, &z) == HG_ERR_NOT_FINITE, "size NaN flow");
+  CHECK(hg_line_size(l, f, 1e-3, 0, NAN, NULL, NULL, &z) == HG_ERR_NOT_FINITE, "size NaN limit");
+  CHECK(hg_line_size(l, f, 1e-3, 1, 2.0, "cast_iron", "40", &z) == HG_ERR_UNKNOWN_NAME, "size unknown table");
+  z.struct_size = 8;
+  CHECK(hg_line_size(l, f, 1e-3, 1, 2.0, NULL, NULL, &z) == HG_ERR_INVALID, "size struct_size 8");
 }
 
 static void test_handles_and_bad_input(void) {
@@ -237,6 +328,8 @@ typedef struct {
 static void *worker(void *p) {
   thread_arg *t = p;
   t->bad += for_each_record(ref_path, "line_", check_line_record, 1);
+  t->bad += for_each_record(ref_path, "line_operating_point", check_solve_record, 1);
+  t->bad += for_each_record(ref_path, "line_s", check_solve_record, 1);
   return NULL;
 }
 
@@ -250,6 +343,9 @@ int main(int argc, char **argv) {
   CHECK(hg_fluid_liquid(998.2, 1.002e-3, &fluids[0]) == HG_OK, "liquid");
   CHECK(hg_fluid_water(293.15, 2e5, &fluids[1]) == HG_OK, "water");
   long bad = for_each_record(ref_path, "line_", check_line_record, 0);
+  bad += for_each_record(ref_path, "line_operating_point", check_solve_record, 0);
+  bad += for_each_record(ref_path, "line_s", check_solve_record, 0);
+  test_solves_bad_input();
   printf("bitwise: line records, %ld differ\n", bad);
   test_handles_and_bad_input();
   pthread_t th[8];
