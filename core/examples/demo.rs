@@ -21,8 +21,11 @@ const PVC_BORE: f64 = 0.0779;
 const STEEL_BORE: f64 = 0.0627;
 
 fn orchard_line() -> Result<Line> {
-    let pvc = |len: f64| Pipe::circular(PVC_BORE, len, 1.5e-6).map(Element::Pipe);
-    let steel = |len: f64| Pipe::circular(STEEL_BORE, len, 4.5e-5).map(Element::Pipe);
+    let pvc =
+        |len: f64| Pipe::of_material(Section::circle(PVC_BORE)?, len, "pvc").map(Element::Pipe);
+    let steel = |len: f64| {
+        Pipe::of_material(Section::circle(STEEL_BORE)?, len, "commercial_steel").map(Element::Pipe)
+    };
     let named = |n: &str| Fitting::named(n).map(Element::Fitting);
     Line::new(vec![
         Element::Fitting(Fitting::entrance_sharp()),
@@ -54,10 +57,10 @@ fn duct_line() -> Result<Line> {
     Line::new(vec![
         Element::Fitting(Fitting::entrance_rounded(0.1)?),
         Element::Equipment(Equipment::pressure_drop("grease filter", 120.0, 0.9)?),
-        Element::Pipe(Pipe::new(big, 18.0, 1.5e-4)?),
+        Element::Pipe(Pipe::of_material(big, 18.0, "galvanized_steel")?),
         Element::Fitting(Fitting::bend(90.0, 1.5)?),
         Element::Fitting(Fitting::contraction(d1, d2)?),
-        Element::Pipe(Pipe::new(small, 12.0, 1.5e-4)?),
+        Element::Pipe(Pipe::of_material(small, 12.0, "galvanized_steel")?),
         Element::Fitting(Fitting::bend(45.0, 1.5)?),
         Element::Rise(4.5),
         Element::Fitting(Fitting::exit()),

@@ -40,6 +40,10 @@ pub use sizes::{PipeSize, PipeTable};
 // fitting (minor losses) and units
 pub use fitting::{Fitting, Resistance};
 pub use units::{STANDARD_GRAVITY, convert, convert_head};
+// Lines, pipes and bands.
+pub use band::{Band, Contribution, UncertaintyOptions};
+pub use line::{Element, Equipment, Limit, Line, LineOptions, LineResult, PumpCurve, split_flow};
+pub use pipe::Pipe;
 
 /// The crate version, from Cargo.toml.
 pub const VERSION: &str = env!("CARGO_PKG_VERSION");

@@ -8,7 +8,14 @@
 //! constant. Turbulent flow in a non-circular section uses the hydraulic diameter or, on
 //! request, the laminar-equivalent diameter of Jones (1976): Re and ε/D are then taken on
 //! `D_t` and the laminar constant is scaled by `D_t/D_h`, so laminar flow still gives the
-//! exact `C/Re_h`. The head loss is an odd function of the signed flow `Q` with a
+//! exact `C/Re_h`. Its flow derivative follows from `Re ∝ |Q|`:
+//!
+//! ```text
+//! dh/dQ = L |V| (Re_t ∂f/∂Re_t + 2 f) / (2 g D_h A)
+//! ```
+//!
+//! which tends to the Hagen–Poiseuille slope `C ν L / (2 g D_h² A)` as `Q → 0`.
+//! The head loss is an odd function of the signed flow `Q` with a
 //! continuous derivative through zero (laminar near zero) and through the transition (the
 //! friction blend is C¹).
 
@@ -29,6 +36,21 @@ pub struct Pipe {
     pub length: f64,
     /// Absolute wall roughness ε, m.
     pub roughness: f64,
+    /// Likely range (low, high) of the roughness, m, when known (from the material
+    /// catalogue); the uncertainty bands read it as a rectangular distribution.
+    #[serde(default)]
+    pub roughness_range: Option<(f64, f64)>,
+}
+
+/// A section's geometry, worked out once: area (m²), hydraulic and turbulent diameters
+/// (m), laminar constant and the section's warnings.
+#[derive(Debug, Clone, Copy, PartialEq, Serialize, Deserialize)]
+pub(crate) struct Geometry {
+    pub area: f64,
+    pub dh: f64,
+    pub dt: f64,
+    pub c: f64,
+    pub warnings: Warnings,
 }
 
 /// The state of flow in a pipe at one flow rate.
@@ -77,7 +99,20 @@ impl Pipe {
             section,
             length,
             roughness,
+            roughness_range: None,
         })
+    }
+
+    /// A run of a catalogue wall material (see [`crate::roughness::catalogue`]): its
+    /// typical roughness, with the material's low–high range for the bands.
+    ///
+    /// # Errors
+    /// An unknown material name; the checks of [`Pipe::new`].
+    pub fn of_material(section: Section, length: f64, material: &str) -> Result<Pipe> {
+        let m = crate::roughness::material(material)?;
+        let mut p = Pipe::new(section, length, m.typical)?;
+        p.roughness_range = Some((m.low, m.high));
+        Ok(p)
     }
 
     /// A round pipe of inside diameter `diameter` (m).
@@ -98,7 +133,9 @@ impl Pipe {
 
     /// The same run with a round section of another diameter (for sizing).
     pub fn with_diameter(&self, diameter: f64) -> Result<Pipe> {
-        Pipe::new(Section::circle(diameter)?, self.length, self.roughness)
+        let mut p = Pipe::new(Section::circle(diameter)?, self.length, self.roughness)?;
+        p.roughness_range = self.roughness_range;
+        Ok(p)
     }
 
     /// Head loss and its derivative at signed volumetric flow `flow` (m³/s).
@@ -115,24 +152,44 @@ impl Pipe {
         opts: &Options,
         diameter_mode: TurbulentDiameter,
     ) -> Result<PipeFlow> {
+        self.flow_state_in(&self.geometry(diameter_mode), fluid, flow, opts)
+    }
+
+    /// The section's geometry for a turbulent-diameter mode, worked out once (the
+    /// rectangle's laminar constant is a series) so that repeated evaluations skip it.
+    pub(crate) fn geometry(&self, diameter_mode: TurbulentDiameter) -> Geometry {
+        Geometry {
+            area: self.section.area(),
+            dh: self.section.hydraulic_diameter(),
+            dt: self.section.turbulent_diameter(diameter_mode),
+            c: self.section.laminar_constant(),
+            warnings: self.section.warnings(),
+        }
+    }
+
+    /// [`Pipe::flow_state`] with the geometry already worked out.
+    pub(crate) fn flow_state_in(
+        &self,
+        g: &Geometry,
+        fluid: &Fluid,
+        flow: f64,
+        opts: &Options,
+    ) -> Result<PipeFlow> {
         check::finite("flow", flow)?;
-        let area = self.section.area();
-        let dh = self.section.hydraulic_diameter();
-        let dt = self.section.turbulent_diameter(diameter_mode);
+        let (area, dh, dt, c) = (g.area, g.dh, g.dt, g.c);
         let scale = dt / dh;
         let nu = fluid.viscosity / fluid.density;
         let velocity = flow / area;
         let speed = velocity.abs();
         let re_h = speed * dh / nu;
         let re_t = re_h * scale;
-        let c = self.section.laminar_constant();
         // h = f L/D_h V|V|/2g; with f = C/Re_h in laminar flow this is linear in V.
         let g2 = 2.0 * STANDARD_GRAVITY;
         let geom = self.length / (dh * g2);
-        let mut warnings = self.section.warnings();
+        let mut warnings = g.warnings;
         let laminar_direct =
             re_t < opts.laminar_limit && opts.correlation != Correlation::Churchill;
-        let fr: Friction = if laminar_direct || re_t == 0.0 {
+        if laminar_direct || re_t == 0.0 {
             // Exact laminar law, written so that zero flow is regular.
             let lam_head_per_speed = c * nu / dh * geom; // h / V
             return Ok(PipeFlow {
@@ -151,13 +208,12 @@ impl Pipe {
                 },
                 warnings,
             });
-        } else {
-            let o = Options {
-                laminar_constant: c * scale,
-                ..*opts
-            };
-            friction::darcy_factor(re_t, self.roughness / dt, &o)?
+        }
+        let o = Options {
+            laminar_constant: c * scale,
+            ..*opts
         };
+        let fr: Friction = friction::darcy_factor(re_t, self.roughness / dt, &o)?;
         warnings |= fr.warnings;
         let head_loss = fr.f * geom * velocity * speed;
         // dh/dQ = geom |V| (Re df/dRe + 2f) / A (derivation in the module docs).

@@ -111,3 +111,47 @@ fn no_grade_line_without_an_inlet_pressure_for_a_liquid() {
             .starts_with("inlet_pressure = -5")
     );
 }
+
+mod properties {
+    use super::common;
+    use hydrograde::fitting::Fitting;
+    use hydrograde::fluid::Fluid;
+    use hydrograde::line::{Element, Line};
+    use hydrograde::pipe::Pipe;
+    use proptest::prelude::*;
+
+    fn line(d1: f64, d2: f64, eps: f64, k: f64, rise: f64) -> Line {
+        Line::new(vec![
+            Element::Pipe(Pipe::circular(d1, 25.0, eps).unwrap()),
+            Element::Fitting(Fitting::k(k).unwrap()),
+            Element::Fitting(Fitting::three_k(500.0, 0.2, 4.0).unwrap()),
+            Element::Pipe(Pipe::circular(d2, 40.0, eps).unwrap()),
+            Element::Rise(rise),
+        ])
+        .unwrap()
+    }
+
+    proptest! {
+        #![proptest_config(ProptestConfig::with_cases(256))]
+
+        // Exact properties of the Darcy–Weisbach line: the loss is odd in the flow and
+        // rises strictly with it; the analytic slope matches a central difference.
+        #[test]
+        fn loss_is_odd_monotone_and_its_slope_is_right(
+            d1 in 0.01f64..0.3, d2 in 0.01f64..0.3, lg_eps in -7.0f64..-3.0, k in 0.0f64..10.0,
+            rise in -20.0f64..20.0, lg_q in -7.0f64..-0.5, step in 1e-4f64..0.3,
+        ) {
+            let l = line(d1, d2, 10f64.powf(lg_eps), k, rise);
+            let w = Fluid::new(998.0, 1.0e-3).unwrap();
+            let q = 10f64.powf(lg_q);
+            let a = l.evaluate(&w, q).unwrap();
+            let b = l.evaluate(&w, -q).unwrap();
+            prop_assert!(common::rel_err(a.head_loss, -b.head_loss) < 1e-14);
+            let c = l.evaluate(&w, q * (1.0 + step)).unwrap();
+            prop_assert!(c.head_loss > a.head_loss);
+            let h = 1e-6 * q;
+            let fd = (l.evaluate(&w, q + h).unwrap().head_loss - l.evaluate(&w, q - h).unwrap().head_loss) / (2.0 * h);
+            prop_assert!(common::rel_err(a.drequired_head_dflow, fd) < 1e-5, "{} vs {}", a.drequired_head_dflow, fd);
+        }
+    }
+}

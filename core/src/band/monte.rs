@@ -54,7 +54,7 @@ pub fn monte_carlo(
     let uo = line.options().uncertainty.clone();
     let n = line.resolved.len();
     let own_u: Vec<f64> = (0..n)
-        .map(|i| line.element_state(i, &work, q, None).map(|s| s.own_u))
+        .map(|i| line.element_state(i, &work, q, None, true).map(|s| s.own_u))
         .collect::<Result<_>>()?;
     let own_on: Vec<bool> = (0..n).map(|i| line.own_source_enabled(i)).collect();
     let mut rng = StdRng::seed_from_u64(seed);
@@ -88,7 +88,7 @@ pub fn monte_carlo(
         fl.viscosity *= pert.viscosity;
         let mut h = 0.0;
         for i in 0..n {
-            let s = line.element_state(i, &fl, q, Some(&pert))?;
+            let s = line.element_state(i, &fl, q, Some(&pert), true)?;
             h += s.head_loss + s.static_head;
         }
         values.push(h);

@@ -155,12 +155,16 @@ impl Line {
     }
 
     /// One element's state at signed flow `flow` (m³/s) in `fluid`.
+    ///
+    /// `bands` asks for the uncertainty inputs (the model uncertainty costs extra
+    /// friction evaluations in transitional flow); the solvers' hot path leaves it off.
     pub(crate) fn element_state(
         &self,
         i: usize,
         fluid: &Fluid,
         flow: f64,
         pert: Option<&Perturbation>,
+        bands: bool,
     ) -> Result<State> {
         let g = STANDARD_GRAVITY;
         let own = pert.map_or(1.0, |p| p.own[i]);
@@ -168,34 +172,45 @@ impl Line {
         let nu = fluid.viscosity / fluid.density;
         Ok(match &self.resolved[i] {
             Resolved::Rise(h) => State::passive(*h),
-            Resolved::Pipe { pipe, roughness_u } => {
+            Resolved::Pipe {
+                pipe,
+                geometry,
+                roughness_u,
+            } => {
                 let roughness_u = if self.options.uncertainty.roughness {
                     *roughness_u
                 } else {
                     0.0
                 };
                 let mut m = 1.0;
-                let perturbed;
-                let pipe = match pert {
-                    None => pipe,
+                let owned;
+                let (pipe, geometry) = match pert {
+                    None => (pipe, *geometry),
                     Some(p) => {
                         let r = (1.0 + p.roughness_z * roughness_u).max(0.0);
-                        perturbed = Pipe::new(
-                            scaled_section(&pipe.section, dk)?,
-                            pipe.length,
-                            pipe.roughness * r,
-                        )?;
-                        &perturbed
+                        let perturbed = Pipe {
+                            roughness: pipe.roughness * r,
+                            ..Pipe::new(
+                                scaled_section(&pipe.section, dk)?,
+                                pipe.length,
+                                pipe.roughness,
+                            )?
+                        };
+                        let g = perturbed.geometry(self.options.turbulent_diameter);
+                        owned = perturbed;
+                        (&owned, g)
                     }
                 };
-                let mode = self.options.turbulent_diameter;
-                let ps = pipe.flow_state(fluid, flow, &self.options.friction, mode)?;
-                let dh = pipe.section.hydraulic_diameter();
-                let dt = pipe.section.turbulent_diameter(mode);
+                let ps = pipe.flow_state_in(&geometry, fluid, flow, &self.options.friction)?;
+                let (dh, dt) = (geometry.dh, geometry.dt);
                 let scale = dt / dh;
                 let re_t = ps.reynolds * scale;
                 let rr_t = pipe.roughness / dt;
-                let model_u = self.model_u(pipe, ps.regime, re_t, rr_t, ps.friction_factor, scale);
+                let model_u = if bands || pert.is_some() {
+                    self.model_u(pipe, ps.regime, re_t, rr_t, ps.friction_factor, scale)
+                } else {
+                    0.0
+                };
                 if let Some(p) = pert {
                     m = (1.0 + p.model_z * model_u).max(0.0);
                 }
@@ -289,7 +304,7 @@ impl Line {
         let mut h = 0.0;
         let mut d = 0.0;
         for i in 0..self.resolved.len() {
-            let s = self.element_state(i, fluid, flow, None)?;
+            let s = self.element_state(i, fluid, flow, None, false)?;
             h += s.head_loss + s.static_head; // same order as LineResult::required_head
             d += s.dhead_dflow;
         }

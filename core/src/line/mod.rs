@@ -165,6 +165,7 @@ impl LineOptions {
 pub(crate) enum Resolved {
     Pipe {
         pipe: Pipe,
+        geometry: crate::pipe::Geometry,
         /// Relative standard uncertainty of the roughness.
         roughness_u: f64,
     },
@@ -374,7 +375,8 @@ fn resolve(
         out.push(match e {
             Element::Pipe(p) => Resolved::Pipe {
                 pipe: p.clone(),
-                roughness_u: match ranges[i] {
+                geometry: p.geometry(options.turbulent_diameter),
+                roughness_u: match ranges[i].or(p.roughness_range) {
                     Some((lo, hi)) if p.roughness > 0.0 => (hi - lo) / 12f64.sqrt() / p.roughness,
                     Some(_) => 0.0,
                     None => options.uncertainty.roughness_default,

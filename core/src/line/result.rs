@@ -169,7 +169,7 @@ impl Line {
         let (work, q, gas_warn) = self.working_fluid(fluid, flow, inlet_pressure)?;
         let inlet = inlet_pressure.or(if fluid.is_gas() { fluid.pressure } else { None });
         let states = (0..self.resolved.len())
-            .map(|i| self.element_state(i, &work, q, None))
+            .map(|i| self.element_state(i, &work, q, None, true))
             .collect::<Result<Vec<State>>>()?;
         let rho_g = work.density * STANDARD_GRAVITY;
         let dq = if flow == 0.0 { 1.0 } else { q / flow };
