@@ -32,7 +32,8 @@ enum Tok<'a> {
 fn tok(t: &Tok) -> String {
     match t {
         Tok::D(x) => hex(*x),
-        Tok::S(s) => format!("s:{s}"),
+        // Spaces would split the token: names travel with '~' for ' '.
+        Tok::S(s) => format!("s:{}", s.replace(' ', "~")),
         Tok::I(i) => format!("i:{i}"),
     }
 }
@@ -341,14 +342,58 @@ fn scenario(n: i64) -> hydrograde::Result<Line> {
                 opts,
             )
         }
+        2 => {
+            // A cooling-water run through every kind of fitting, with a catalogue
+            // material, a custom duct, the laminar-equivalent diameter, a bore tolerance,
+            // a widened valve spread and a stated roughness range.
+            let opts = LineOptions {
+                turbulent_diameter: TurbulentDiameter::LaminarEquivalent,
+                uncertainty: hydrograde::band::UncertaintyOptions {
+                    diameter: 0.01,
+                    ..Default::default()
+                },
+                ..LineOptions::default()
+            };
+            let mut line = Line::with_options(
+                vec![
+                    Element::Fitting(Fitting::entrance_rounded(0.1)?),
+                    Element::Pipe(Pipe::of_material(
+                        Section::circle(0.1)?,
+                        40.0,
+                        "commercial_steel",
+                    )?),
+                    Element::Fitting(Fitting::bend(90.0, 1.5)?),
+                    Element::Fitting(Fitting::two_k(800.0, 0.25)?),
+                    Element::Fitting(Fitting::three_k(500.0, 0.15, 4.0)?),
+                    Element::Fitting(Fitting::cv(120.0)?.with_k_spread(0.2)?),
+                    Element::Fitting(Fitting::kv(100.0)?),
+                    Element::Fitting(Fitting::equivalent_length(30.0)?),
+                    Element::Fitting(Fitting::expansion(0.1, 0.15)?),
+                    Element::Pipe(Pipe::new(Section::custom(0.0177, 0.48, 62.0)?, 10.0, 1e-4)?),
+                    Element::Fitting(Fitting::contraction(0.15, 0.08)?),
+                    Element::Pipe(Pipe::circular(0.08, 5.0, 1.5e-6)?),
+                    Element::Fitting(Fitting::exit()),
+                    Element::Fitting(Fitting::entrance_projecting()),
+                    Element::Fitting(Fitting::entrance_sharp()),
+                    Element::Pipe(Pipe::new(Section::rectangle(0.12, 0.06)?, 3.0, 5e-5)?),
+                ],
+                opts,
+            )?;
+            line.set_roughness_range(11, 1e-6, 5e-6)?;
+            Ok(line)
+        }
         _ => Err(hydrograde::Error::invalid("scenario", "unknown")),
     }
 }
 
 fn lines(out: &mut impl Write) -> io::Result<()> {
-    use Tok::{D, I};
-    let fluids = [Fluid::new(998.2, 1.002e-3), Fluid::water(293.15, 2e5)];
-    for sc in 0..2 {
+    use Tok::{D, I, S};
+    let fluids = [
+        Fluid::new(998.2, 1.002e-3),
+        Fluid::water(293.15, 2e5),
+        Fluid::gas(1.2, 1.8e-5, 293.15, 101_325.0).and_then(|f| f.with_uncertainty(0.01, 0.02)),
+    ];
+    for sc in 0..3 {
         let line = scenario(sc).map_err(io::Error::other)?;
         for (fi, fluid) in fluids.iter().enumerate() {
             let fluid = fluid.clone().map_err(io::Error::other)?;
@@ -373,6 +418,26 @@ fn lines(out: &mut impl Write) -> io::Result<()> {
                 });
                 emit(out, "line_eval", &[I(sc), I(fi as i64), D(q)], totals)?;
                 if let Ok(r) = &r {
+                    let n = r.head_loss_band.contributions.len();
+                    for (i, c) in r.head_loss_band.contributions.iter().enumerate() {
+                        emit(
+                            out,
+                            "line_band_source",
+                            &[I(sc), I(fi as i64), D(q), I(i as i64)],
+                            Ok(vec![S(&c.source), D(c.share)]),
+                        )?;
+                    }
+                    let past = Err(hydrograde::Error::out_of_range(
+                        "index",
+                        n as f64,
+                        "past the end",
+                    ));
+                    emit(
+                        out,
+                        "line_band_source",
+                        &[I(sc), I(fi as i64), D(q), I(n as i64)],
+                        past,
+                    )?;
                     for (i, e) in r.elements.iter().enumerate() {
                         let fin = |x: f64| if x.is_finite() { x } else { 0.0 };
                         emit(
@@ -421,6 +486,31 @@ fn lines(out: &mut impl Write) -> io::Result<()> {
 
 fn materials(out: &mut impl Write) -> io::Result<()> {
     use Tok::{D, I, S};
+    for (ci, c) in Correlation::ALL.iter().enumerate() {
+        let v = c.validity();
+        let vals = vec![
+            D(v.re_min),
+            D(v.re_max),
+            D(v.rel_roughness_min),
+            D(v.rel_roughness_max),
+            D(v.accuracy),
+        ];
+        emit(out, "validity", &[I(ci as i64)], Ok(vals))?;
+    }
+    for p in [
+        611.213,
+        1e3,
+        101_325.0,
+        1e6,
+        2.2e7,
+        22.064e6,
+        3e7,
+        100.0,
+        f64::NAN,
+    ] {
+        let r = hydrograde::fluid::water_saturation_temperature(p).map(|t| vec![D(t)]);
+        emit(out, "saturation", &[D(p)], r)?;
+    }
     for (i, n) in roughness::names().iter().enumerate() {
         emit(out, "material_name", &[I(i as i64)], Ok(vec![S(n)]))?;
     }

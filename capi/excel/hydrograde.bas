@@ -41,6 +41,8 @@ Public Declare PtrSafe Function hg_roughness_material_name Lib "hydrograde.dll" 
 Public Declare PtrSafe Function hg_roughness_aged Lib "hydrograde.dll" (ByVal initial As Double, ByVal rate As Double, ByVal years As Double, ByRef roughness As Double) As Long
 Public Declare PtrSafe Function hg_pipe_size Lib "hydrograde.dll" (ByVal table_name As String, ByVal nominal As String, ByVal schedule As String, ByRef outside_diameter As Double, ByRef wall As Double, ByRef inside_diameter As Double) As Long
 Public Declare PtrSafe Function hg_pipe_size_at_least Lib "hydrograde.dll" (ByVal table_name As String, ByVal schedule As String, ByVal min_inside_diameter As Double, ByRef inside_diameter As Double, ByVal nominal As String, ByVal length As LongPtr, ByRef needed As LongPtr) As Long
+Public Declare PtrSafe Function hg_correlation_validity Lib "hydrograde.dll" (ByVal correlation As Long, ByRef re_min As Double, ByRef re_max As Double, ByRef rel_roughness_min As Double, ByRef rel_roughness_max As Double, ByRef accuracy As Double) As Long
+Public Declare PtrSafe Function hg_water_saturation_temperature Lib "hydrograde.dll" (ByVal pressure As Double, ByRef temperature As Double) As Long
 
 Private Declare PtrSafe Function lstrlenA Lib "kernel32" (ByVal p As LongPtr) As Long
 Private Declare PtrSafe Sub RtlMoveMemory Lib "kernel32" (ByVal dest As String, ByVal src As LongPtr, ByVal n As LongPtr)
@@ -268,4 +270,19 @@ Public Function HgPipeSizeAtLeast(ByVal table_name As String, ByVal schedule As 
     buf = String$(32, vbNullChar)
     s = hg_pipe_size_at_least(table_name, schedule, min_inside_diameter, id, buf, 32, need)
     If s = HG_OK Then HgPipeSizeAtLeast = Left$(buf, CLng(need)) Else HgPipeSizeAtLeast = ErrorOf(s)
+End Function
+
+' Saturation (boiling) temperature of water (K) at absolute pressure (Pa).
+Public Function HgWaterSaturationTemperature(ByVal pressure As Double) As Variant
+    Dim s As Long, t As Double
+    s = hg_water_saturation_temperature(pressure, t)
+    If s = HG_OK Then HgWaterSaturationTemperature = t Else HgWaterSaturationTemperature = ErrorOf(s)
+End Function
+
+' Published accuracy of a correlation against Colebrook, as a fraction (0.015 = 1.5 %).
+Public Function HgCorrelationAccuracy(Optional ByVal correlation As String = "colebrook") As Variant
+    Dim s As Long, c As Long, a As Double, b As Double, lo As Double, hi As Double, acc As Double
+    c = CorrelationOf(correlation, s)
+    If s = HG_OK Then s = hg_correlation_validity(c, a, b, lo, hi, acc)
+    If s = HG_OK Then HgCorrelationAccuracy = acc Else HgCorrelationAccuracy = ErrorOf(s)
 End Function

@@ -160,6 +160,32 @@
 #define HG_ELEMENT_EQUIPMENT 3
 
 /**
+ * A sharp-edged entrance from a large space (`r_over_d` must be 0).
+ */
+#define HG_ENTRANCE_SHARP 0
+
+/**
+ * A rounded entrance of radius `r_over_d` times the bore.
+ */
+#define HG_ENTRANCE_ROUNDED 1
+
+/**
+ * A pipe projecting into the space it draws from (`r_over_d` must be 0).
+ */
+#define HG_ENTRANCE_PROJECTING 2
+
+/**
+ * Turbulent flow in non-circular ducts on the hydraulic diameter (default).
+ */
+#define HG_TURBULENT_DIAMETER_HYDRAULIC 0
+
+/**
+ * Turbulent flow in rectangles and annuli on the laminar-equivalent diameter (Jones
+ * 1976; Jones & Leung 1981).
+ */
+#define HG_TURBULENT_DIAMETER_LAMINAR_EQUIVALENT 1
+
+/**
  * Sizing limit: the line's pressure loss (friction + minor, without rises), Pa.
  */
 #define HG_LIMIT_PRESSURE_LOSS 0
@@ -491,6 +517,57 @@ typedef struct hg_element_result {
 } hg_element_result;
 
 /**
+ * Which uncertainty sources the bands of a line include, and their sizes (relative
+ * standard uncertainties, k = 1). Fill it with `hg_uncertainty_options_default`.
+ */
+typedef struct hg_uncertainty_options {
+  /**
+   * Size of this struct in bytes, set by `hg_uncertainty_options_default`.
+   */
+  size_t struct_size;
+  /**
+   * 1 to include the friction correlation's model uncertainty, else 0.
+   */
+  int32_t friction_model;
+  /**
+   * 1 to include wall roughness, else 0.
+   */
+  int32_t roughness;
+  /**
+   * 1 to include the fluid's density and viscosity uncertainties, else 0.
+   */
+  int32_t fluid;
+  /**
+   * 1 to include fitting K spreads, else 0.
+   */
+  int32_t fittings;
+  /**
+   * 1 to include equipment spreads, else 0.
+   */
+  int32_t equipment;
+  /**
+   * Model uncertainty of turbulent flow in round pipe.
+   */
+  double turbulent_model;
+  /**
+   * Model uncertainty of laminar flow.
+   */
+  double laminar_model;
+  /**
+   * Model uncertainty of turbulent flow in non-circular ducts.
+   */
+  double non_circular_model;
+  /**
+   * Relative uncertainty of roughness where a pipe states no range.
+   */
+  double roughness_default;
+  /**
+   * Relative uncertainty of every bore (manufacturing tolerance).
+   */
+  double diameter;
+} hg_uncertainty_options;
+
+/**
  * A standard size chosen by `hg_line_size`: zero everywhere when `found` is 0.
  */
 typedef struct hg_size_choice {
@@ -590,6 +667,51 @@ typedef struct hg_pipe_flow {
 #ifdef __cplusplus
 extern "C" {
 #endif // __cplusplus
+
+/**
+ * The `HG_CORRELATION_*` value of a correlation name: "colebrook", "haaland",
+ * "swamee_jain", "churchill", "serghides", "blasius", "fully_rough".
+ *
+ * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` (the message lists the known names);
+ * `HG_ERR_NULL_POINTER`; `HG_ERR_INVALID` for a name that is not UTF-8. Thread-safe.
+ *
+ * # Safety
+ * `name` must be NULL or a NUL-terminated string; `correlation` NULL or writable.
+ */
+int32_t hg_correlation_from_name(const char *name,
+                                 int32_t *correlation);
+
+/**
+ * The name of an `HG_CORRELATION_*` value as a static string ("colebrook", …); NULL for
+ * an unknown value. Thread-safe.
+ */
+const char *hg_correlation_name(int32_t correlation);
+
+/**
+ * The name of an `HG_REGIME_*` value as a static string ("laminar", "transitional",
+ * "turbulent"); NULL for an unknown value. Thread-safe.
+ */
+const char *hg_regime_name(int32_t regime);
+
+/**
+ * The published validity range and accuracy of correlation `correlation`
+ * (`HG_CORRELATION_*`): Reynolds numbers `*re_min`…`*re_max`, relative roughness
+ * `*rel_roughness_min`…`*rel_roughness_max`, and `*accuracy`, the published largest
+ * relative deviation from Colebrook inside that range (0 for Colebrook itself). An
+ * unbounded end is +infinity. Outside the range a result carries a warning.
+ *
+ * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` for an unknown correlation;
+ * `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * The outputs must be NULL or point to writable doubles.
+ */
+int32_t hg_correlation_validity(int32_t correlation,
+                                double *re_min,
+                                double *re_max,
+                                double *rel_roughness_min,
+                                double *rel_roughness_max,
+                                double *accuracy);
 
 /**
  * The resistance coefficient K (dimensionless) of the catalogue fitting `name` and its
@@ -746,6 +868,67 @@ int32_t hg_fluid_properties(const struct hg_fluid *fluid,
 void hg_fluid_free(struct hg_fluid *fluid);
 
 /**
+ * Saturation temperature of water (K) at absolute `pressure` (Pa), IAPWS-IF97.
+ *
+ * Valid range: 611.213 Pa ≤ pressure ≤ 22.064 MPa (the critical point).
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Thread-safe.
+ *
+ * # Safety
+ * `temperature` must be NULL or point to a writable double.
+ */
+int32_t hg_water_saturation_temperature(double pressure,
+                                        double *temperature);
+
+/**
+ * Makes a gas of `density` (kg/m³, > 0) and `viscosity` (Pa·s, > 0) stated at
+ * `temperature` (K, > 0) and absolute `pressure` (Pa, > 0); its density follows the
+ * ideal-gas law at other pressures. Free it with `hg_fluid_free`.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Thread-safe.
+ *
+ * # Safety
+ * `out` must be NULL or point to a writable `hg_fluid *`.
+ */
+int32_t hg_fluid_gas(double density,
+                     double viscosity,
+                     double temperature,
+                     double pressure,
+                     struct hg_fluid **out);
+
+/**
+ * Makes a copy of `fluid` with the relative standard uncertainties (k = 1, 0 ≤ u < 1)
+ * of its density `density_rel` and viscosity `viscosity_rel`, for the bands. Free the
+ * new handle with `hg_fluid_free`; `fluid` is unchanged.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Thread-safe.
+ *
+ * # Safety
+ * `fluid` must be NULL or a live handle; `out` NULL or a writable `hg_fluid *`.
+ */
+int32_t hg_fluid_with_uncertainty(const struct hg_fluid *fluid,
+                                  double density_rel,
+                                  double viscosity_rel,
+                                  struct hg_fluid **out);
+
+/**
+ * Makes a copy of `fluid` with its vapour pressure `vapour_pressure` (Pa, ≥ 0) set, for
+ * cavitation warnings. Free the new handle with `hg_fluid_free`; `fluid` is unchanged.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Thread-safe.
+ *
+ * # Safety
+ * `fluid` must be NULL or a live handle; `out` NULL or a writable `hg_fluid *`.
+ */
+int32_t hg_fluid_with_vapour_pressure(const struct hg_fluid *fluid,
+                                      double vapour_pressure,
+                                      struct hg_fluid **out);
+
+/**
  * Fills `opts` with the library's default friction options (Colebrook, regime limits
  * 2300 and 4000, laminar constant 64, C¹ blend in the transitional band) and sets
  * `opts->struct_size`.
@@ -838,31 +1021,6 @@ int32_t hg_darcy_factor_batch(const double *re,
                               size_t n,
                               int32_t correlation,
                               double *out);
-
-/**
- * The `HG_CORRELATION_*` value of a correlation name: "colebrook", "haaland",
- * "swamee_jain", "churchill", "serghides", "blasius", "fully_rough".
- *
- * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` (the message lists the known names);
- * `HG_ERR_NULL_POINTER`; `HG_ERR_INVALID` for a name that is not UTF-8. Thread-safe.
- *
- * # Safety
- * `name` must be NULL or a NUL-terminated string; `correlation` NULL or writable.
- */
-int32_t hg_correlation_from_name(const char *name,
-                                 int32_t *correlation);
-
-/**
- * The name of an `HG_CORRELATION_*` value as a static string ("colebrook", …); NULL for
- * an unknown value. Thread-safe.
- */
-const char *hg_correlation_name(int32_t correlation);
-
-/**
- * The name of an `HG_REGIME_*` value as a static string ("laminar", "transitional",
- * "turbulent"); NULL for an unknown value. Thread-safe.
- */
-const char *hg_regime_name(int32_t regime);
 
 /**
  * Makes an empty line with the default options and stores it in `*out`; free it with
@@ -1111,6 +1269,279 @@ int32_t hg_line_system_curve(const struct hg_line *line,
                              const double *flows,
                              size_t n,
                              double *heads);
+
+/**
+ * Appends a round pipe of the catalogue wall `material` (see `hg_roughness`): inside
+ * `diameter` (m, > 0), `length` (m, > 0); its roughness is the material's typical
+ * value, and the material's range feeds the roughness uncertainty of the bands.
+ *
+ * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`;
+ * `HG_ERR_INVALID` for a name not UTF-8; `HG_ERR_NULL_POINTER`. Needs exclusive use
+ * of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread; `material` NULL or a
+ * NUL-terminated string.
+ */
+int32_t hg_line_add_pipe_material(struct hg_line *line,
+                                  double diameter,
+                                  double length,
+                                  const char *material);
+
+/**
+ * Appends a duct of any shape given by its `area` (m², positive), wetted `perimeter`
+ * (m, at least the circle's of that area) and `laminar_constant` (f·Re on the
+ * hydraulic diameter, positive), with `length` (m, positive) and `roughness` (m, ≥ 0).
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_add_custom_duct(struct hg_line *line,
+                                double area,
+                                double perimeter,
+                                double laminar_constant,
+                                double length,
+                                double roughness);
+
+/**
+ * Appends a sudden expansion from bore `d_in` to bore `d_out` (m, 0 < d_in ≤ d_out):
+ * Borda–Carnot, K on the inlet velocity.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_add_expansion(struct hg_line *line,
+                              double d_in,
+                              double d_out);
+
+/**
+ * Appends a sudden contraction from bore `d_in` to bore `d_out` (m, 0 < d_out ≤ d_in),
+ * K on the outlet velocity.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_add_contraction(struct hg_line *line,
+                                double d_in,
+                                double d_out);
+
+/**
+ * Appends a 2-K fitting (Hooper 1981): K = k1/Re + k_inf·(1 + 1/D_in), D_in the bore in
+ * inches; `k1`, `k_inf` ≥ 0; K on `diameter` (m) or the adjoining pipe's bore when 0.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_add_two_k(struct hg_line *line,
+                          double k1,
+                          double k_inf,
+                          double diameter);
+
+/**
+ * Appends a 3-K fitting (Darby 1999): K = k1/Re + k_inf·(1 + k_d/D_in^0.3), D_in the
+ * bore in inches; constants ≥ 0; K on `diameter` (m) or the adjoining pipe's bore
+ * when 0.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_add_three_k(struct hg_line *line,
+                            double k1,
+                            double k_inf,
+                            double k_d,
+                            double diameter);
+
+/**
+ * Appends a valve of flow coefficient `cv` (US gpm at 1 psi, > 0), whose K refers to
+ * `diameter` (m) or the adjoining pipe's bore when 0.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_add_cv(struct hg_line *line,
+                       double cv,
+                       double diameter);
+
+/**
+ * Appends a valve of flow coefficient `kv` (m³/h at 1 bar, > 0), whose K refers to
+ * `diameter` (m) or the adjoining pipe's bore when 0.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_add_kv(struct hg_line *line,
+                       double kv,
+                       double diameter);
+
+/**
+ * Appends a fitting given as an equivalent length `l_over_d` (L/D, ≥ 0): K = f_T·L/D
+ * with the fully rough factor of the adjoining pipe; on `diameter` (m) or the
+ * adjoining pipe's bore when 0.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_add_equivalent_length(struct hg_line *line,
+                                      double l_over_d,
+                                      double diameter);
+
+/**
+ * Appends a smooth bend of `angle_deg` degrees (0…180) and centreline radius `r_over_d`
+ * times the bore (≥ 0.5), Rennels & Hudson (2012); on `diameter` (m) or the adjoining
+ * pipe's bore when 0.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_add_bend(struct hg_line *line,
+                         double angle_deg,
+                         double r_over_d,
+                         double diameter);
+
+/**
+ * Appends a pipe entrance of kind `kind` (`HG_ENTRANCE_*`); `r_over_d` is the rounding
+ * radius over the bore for `HG_ENTRANCE_ROUNDED` (≥ 0) and must be 0 otherwise.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a bad kind or radius;
+ * `HG_ERR_INVALID` for a radius with another kind; `HG_ERR_NULL_POINTER`. Needs
+ * exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_add_entrance(struct hg_line *line,
+                             int32_t kind,
+                             double r_over_d);
+
+/**
+ * Appends a pipe exit into a large space (K = 1 on the pipe's velocity).
+ *
+ * Returns `HG_OK` or `HG_ERR_NULL_POINTER`. Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_add_exit(struct hg_line *line);
+
+/**
+ * Sets the relative half-width `spread` (0…1, e.g. 0.3 for ±30 %) of the K of the
+ * fitting at `index` (0-based), read by the bands as a rectangular distribution.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a bad spread or an
+ * index that is not a fitting; `HG_ERR_NULL_POINTER`. Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_set_k_spread(struct hg_line *line,
+                             size_t index,
+                             double spread);
+
+/**
+ * States the likely range `low`…`high` (m, 0 ≤ low ≤ high) of the roughness of the pipe
+ * at `index` (0-based), for the roughness uncertainty of the bands (rectangular between
+ * the two). Checked at once when the line can be built (else when it is next
+ * evaluated): an index that is not a pipe gives `HG_ERR_OUT_OF_RANGE`.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_set_roughness_range(struct hg_line *line,
+                                    size_t index,
+                                    double low,
+                                    double high);
+
+/**
+ * Chooses the diameter turbulent flow in non-circular ducts uses (`HG_TURBULENT_DIAMETER_*`).
+ *
+ * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` for an unknown mode; `HG_ERR_NULL_POINTER`.
+ * Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_set_turbulent_diameter(struct hg_line *line,
+                                       int32_t mode);
+
+/**
+ * Fills `opts` with the library's default uncertainty sources and sets its
+ * `struct_size`.
+ *
+ * Returns `HG_OK` or `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * `opts` must be NULL or point to a writable `hg_uncertainty_options`.
+ */
+int32_t hg_uncertainty_options_default(struct hg_uncertainty_options *opts);
+
+/**
+ * Sets the uncertainty sources of the bands of `line` (see `hg_uncertainty_options`).
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a negative size or a
+ * flag other than 0 or 1; `HG_ERR_INVALID` for a `struct_size` too small;
+ * `HG_ERR_NULL_POINTER`. Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread; `opts` NULL or a
+ * readable `hg_uncertainty_options`.
+ */
+int32_t hg_line_set_uncertainty(struct hg_line *line,
+                                const struct hg_uncertainty_options *opts);
+
+/**
+ * Source number `index` (0-based, largest share first) of the head-loss band of `line`
+ * for `fluid` at `flow` (m³/s): its name copied into `buf` (e.g. "friction model",
+ * "roughness", "K of gate_valve (element 2)"; at most `len - 1` bytes and a NUL; full
+ * length in `*needed`) and its share of the variance (0…1) in `*share`. Index 0 is the
+ * input that dominates the band.
+ *
+ * Returns `HG_OK`; the codes of `hg_line_evaluate`; `HG_ERR_OUT_OF_RANGE` when `index`
+ * is past the last source (a band of zero width, as at zero flow, has none);
+ * `HG_ERR_BUFFER_TOO_SMALL` when the name did not fit (the share is still written);
+ * `HG_ERR_NULL_POINTER`. Thread-safe (the line is only read).
+ *
+ * # Safety
+ * `line` and `fluid` must be NULL or live handles; `buf` NULL or valid for `len` bytes;
+ * `needed` and `share` NULL or writable.
+ */
+int32_t hg_line_band_source(const struct hg_line *line,
+                            const struct hg_fluid *fluid,
+                            double flow,
+                            size_t index,
+                            char *buf,
+                            size_t len,
+                            size_t *needed,
+                            double *share);
 
 /**
  * The flow `*flow` (m³/s) and head `*head` (m) where the pump curve given by `n` points

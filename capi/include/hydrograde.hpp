@@ -252,6 +252,32 @@ inline double reynolds(double flow, double diameter, double density, double visc
   return re;
 }
 
+/// Published validity range and accuracy of a correlation (HG_CORRELATION_*).
+struct validity {
+  double re_min, re_max, rel_roughness_min, rel_roughness_max, accuracy;
+};
+
+inline validity correlation_validity(int32_t correlation) {
+  validity v{};
+  check(hg_correlation_validity(correlation, &v.re_min, &v.re_max, &v.rel_roughness_min,
+                                &v.rel_roughness_max, &v.accuracy));
+  return v;
+}
+
+/// Saturation temperature of water (K) at absolute pressure (Pa).
+inline double water_saturation_temperature(double pressure) {
+  double t = 0.0;
+  check(hg_water_saturation_temperature(pressure, &t));
+  return t;
+}
+
+/// Default uncertainty sources of the bands.
+inline hg_uncertainty_options uncertainty_options() {
+  hg_uncertainty_options o{};
+  check(hg_uncertainty_options_default(&o));
+  return o;
+}
+
 /// Roughness of a catalogue material: typical value and quoted range, m.
 struct roughness_range {
   double typical;
@@ -332,6 +358,24 @@ class fluid {
     check(hg_fluid_liquid(density, viscosity, &f));
     return fluid(f);
   }
+  /// A gas of density and viscosity stated at temperature (K) and pressure (Pa).
+  static fluid gas(double density, double viscosity, double temperature, double pressure) {
+    hg_fluid* f = nullptr;
+    check(hg_fluid_gas(density, viscosity, temperature, pressure, &f));
+    return fluid(f);
+  }
+  /// A copy with relative standard uncertainties of density and viscosity.
+  fluid with_uncertainty(double density_rel, double viscosity_rel) const {
+    hg_fluid* f = nullptr;
+    check(hg_fluid_with_uncertainty(f_, density_rel, viscosity_rel, &f));
+    return fluid(f);
+  }
+  /// A copy with its vapour pressure (Pa) set.
+  fluid with_vapour_pressure(double vapour_pressure) const {
+    hg_fluid* f = nullptr;
+    check(hg_fluid_with_vapour_pressure(f_, vapour_pressure, &f));
+    return fluid(f);
+  }
   fluid(fluid&& o) noexcept : f_(o.f_) { o.f_ = nullptr; }
   fluid& operator=(fluid&& o) noexcept {
     std::swap(f_, o.f_);
@@ -408,6 +452,86 @@ class line {
   line& set_friction_options(const hg_friction_options& o) {
     check(hg_line_set_friction_options(l_, &o));
     return *this;
+  }
+  line& add_pipe_material(double diameter, double length, const std::string& material) {
+    check(hg_line_add_pipe_material(l_, diameter, length, material.c_str()));
+    return *this;
+  }
+  line& add_custom_duct(double area, double perimeter, double laminar_constant, double length,
+                        double roughness) {
+    check(hg_line_add_custom_duct(l_, area, perimeter, laminar_constant, length, roughness));
+    return *this;
+  }
+  line& add_expansion(double d_in, double d_out) {
+    check(hg_line_add_expansion(l_, d_in, d_out));
+    return *this;
+  }
+  line& add_contraction(double d_in, double d_out) {
+    check(hg_line_add_contraction(l_, d_in, d_out));
+    return *this;
+  }
+  line& add_two_k(double k1, double k_inf, double diameter = 0.0) {
+    check(hg_line_add_two_k(l_, k1, k_inf, diameter));
+    return *this;
+  }
+  line& add_three_k(double k1, double k_inf, double k_d, double diameter = 0.0) {
+    check(hg_line_add_three_k(l_, k1, k_inf, k_d, diameter));
+    return *this;
+  }
+  line& add_cv(double cv, double diameter = 0.0) {
+    check(hg_line_add_cv(l_, cv, diameter));
+    return *this;
+  }
+  line& add_kv(double kv, double diameter = 0.0) {
+    check(hg_line_add_kv(l_, kv, diameter));
+    return *this;
+  }
+  line& add_equivalent_length(double l_over_d, double diameter = 0.0) {
+    check(hg_line_add_equivalent_length(l_, l_over_d, diameter));
+    return *this;
+  }
+  line& add_bend(double angle_deg, double r_over_d, double diameter = 0.0) {
+    check(hg_line_add_bend(l_, angle_deg, r_over_d, diameter));
+    return *this;
+  }
+  line& add_entrance(int32_t kind, double r_over_d = 0.0) {
+    check(hg_line_add_entrance(l_, kind, r_over_d));
+    return *this;
+  }
+  line& add_exit() {
+    check(hg_line_add_exit(l_));
+    return *this;
+  }
+  line& set_k_spread(std::size_t index, double spread) {
+    check(hg_line_set_k_spread(l_, index, spread));
+    return *this;
+  }
+  line& set_roughness_range(std::size_t index, double low, double high) {
+    check(hg_line_set_roughness_range(l_, index, low, high));
+    return *this;
+  }
+  line& set_turbulent_diameter(int32_t mode) {
+    check(hg_line_set_turbulent_diameter(l_, mode));
+    return *this;
+  }
+  line& set_uncertainty(const hg_uncertainty_options& o) {
+    check(hg_line_set_uncertainty(l_, &o));
+    return *this;
+  }
+  /// The sources of the head-loss band at a flow, largest share first.
+  std::vector<std::pair<std::string, double>> band_sources(const fluid& f, double flow) const {
+    std::vector<std::pair<std::string, double>> out;
+    for (std::size_t i = 0;; ++i) {
+      std::size_t need = 0;
+      double share = 0.0;
+      int32_t s = hg_line_band_source(l_, f.get(), flow, i, nullptr, 0, &need, &share);
+      if (s == HG_ERR_OUT_OF_RANGE) break;
+      if (s != HG_ERR_BUFFER_TOO_SMALL) check(s);
+      std::string name(need, '\0');
+      check(hg_line_band_source(l_, f.get(), flow, i, &name[0], need + 1, &need, &share));
+      out.emplace_back(name, share);
+    }
+    return out;
   }
   line& set_inlet_pressure(double pressure) {
     check(hg_line_set_inlet_pressure(l_, pressure));

@@ -92,10 +92,7 @@ pub struct hg_fluid {
 ///
 /// # Safety
 /// `out` must be NULL or writable.
-unsafe fn new_fluid(
-    out: *mut *mut hg_fluid,
-    make: impl FnOnce() -> hydrograde::Result<Fluid>,
-) -> i32 {
+unsafe fn new_fluid(out: *mut *mut hg_fluid, make: impl FnOnce() -> ffi::FfiResult<Fluid>) -> i32 {
     guard(|| {
         ffi::check_outs(&[out_ptr("out", out)])?;
         let f = make()?;
@@ -121,7 +118,7 @@ pub unsafe extern "C" fn hg_fluid_water(
     out: *mut *mut hg_fluid,
 ) -> i32 {
     // SAFETY: forwarded contract.
-    unsafe { new_fluid(out, || Fluid::water(temperature, pressure)) }
+    unsafe { new_fluid(out, || Ok(Fluid::water(temperature, pressure)?)) }
 }
 
 /// Makes dry air at `temperature` (K) and absolute `pressure` (Pa), as `hg_air`; lines
@@ -140,7 +137,7 @@ pub unsafe extern "C" fn hg_fluid_air(
     out: *mut *mut hg_fluid,
 ) -> i32 {
     // SAFETY: forwarded contract.
-    unsafe { new_fluid(out, || Fluid::air(temperature, pressure)) }
+    unsafe { new_fluid(out, || Ok(Fluid::air(temperature, pressure)?)) }
 }
 
 /// Makes a liquid of `density` (kg/m³, > 0) and dynamic `viscosity` (Pa·s, > 0), with
@@ -159,7 +156,7 @@ pub unsafe extern "C" fn hg_fluid_liquid(
     out: *mut *mut hg_fluid,
 ) -> i32 {
     // SAFETY: forwarded contract.
-    unsafe { new_fluid(out, || Fluid::new(density, viscosity)) }
+    unsafe { new_fluid(out, || Ok(Fluid::new(density, viscosity)?)) }
 }
 
 /// Density (kg/m³) and dynamic viscosity (Pa·s) of a fluid handle.
@@ -196,5 +193,102 @@ pub unsafe extern "C" fn hg_fluid_free(fluid: *mut hg_fluid) {
     if !fluid.is_null() {
         // SAFETY: the handle came from Box::into_raw in `new_fluid`.
         ffi::guard_value((), || drop(unsafe { Box::from_raw(fluid) }));
+    }
+}
+
+/// Saturation temperature of water (K) at absolute `pressure` (Pa), IAPWS-IF97.
+///
+/// Valid range: 611.213 Pa ≤ pressure ≤ 22.064 MPa (the critical point).
+///
+/// Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+/// Thread-safe.
+///
+/// # Safety
+/// `temperature` must be NULL or point to a writable double.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_water_saturation_temperature(
+    pressure: f64,
+    temperature: *mut f64,
+) -> i32 {
+    guard(|| {
+        ffi::check_outs(&[out_ptr("temperature", temperature)])?;
+        let t = fluid::water_saturation_temperature(pressure)?;
+        // SAFETY: forwarded contract.
+        unsafe { put("temperature", temperature, t) }
+    })
+}
+
+/// Makes a gas of `density` (kg/m³, > 0) and `viscosity` (Pa·s, > 0) stated at
+/// `temperature` (K, > 0) and absolute `pressure` (Pa, > 0); its density follows the
+/// ideal-gas law at other pressures. Free it with `hg_fluid_free`.
+///
+/// Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+/// Thread-safe.
+///
+/// # Safety
+/// `out` must be NULL or point to a writable `hg_fluid *`.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_fluid_gas(
+    density: f64,
+    viscosity: f64,
+    temperature: f64,
+    pressure: f64,
+    out: *mut *mut hg_fluid,
+) -> i32 {
+    // SAFETY: forwarded contract.
+    unsafe {
+        new_fluid(out, || {
+            Ok(Fluid::gas(density, viscosity, temperature, pressure)?)
+        })
+    }
+}
+
+/// Makes a copy of `fluid` with the relative standard uncertainties (k = 1, 0 ≤ u < 1)
+/// of its density `density_rel` and viscosity `viscosity_rel`, for the bands. Free the
+/// new handle with `hg_fluid_free`; `fluid` is unchanged.
+///
+/// Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+/// Thread-safe.
+///
+/// # Safety
+/// `fluid` must be NULL or a live handle; `out` NULL or a writable `hg_fluid *`.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_fluid_with_uncertainty(
+    fluid: *const hg_fluid,
+    density_rel: f64,
+    viscosity_rel: f64,
+    out: *mut *mut hg_fluid,
+) -> i32 {
+    // SAFETY: forwarded contract.
+    unsafe {
+        new_fluid(out, || {
+            let f = ffi::handle("fluid", fluid)?;
+            Ok(f.fluid
+                .clone()
+                .with_uncertainty(density_rel, viscosity_rel)?)
+        })
+    }
+}
+
+/// Makes a copy of `fluid` with its vapour pressure `vapour_pressure` (Pa, ≥ 0) set, for
+/// cavitation warnings. Free the new handle with `hg_fluid_free`; `fluid` is unchanged.
+///
+/// Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+/// Thread-safe.
+///
+/// # Safety
+/// `fluid` must be NULL or a live handle; `out` NULL or a writable `hg_fluid *`.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_fluid_with_vapour_pressure(
+    fluid: *const hg_fluid,
+    vapour_pressure: f64,
+    out: *mut *mut hg_fluid,
+) -> i32 {
+    // SAFETY: forwarded contract.
+    unsafe {
+        new_fluid(out, || {
+            let f = ffi::handle("fluid", fluid)?;
+            Ok(f.fluid.clone().with_vapour_pressure(vapour_pressure)?)
+        })
     }
 }

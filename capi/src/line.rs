@@ -15,23 +15,34 @@ use std::sync::OnceLock;
 /// exclusive use of the handle; evaluating only reads it, so several threads may
 /// evaluate one line at once.
 pub struct hg_line {
-    elements: Vec<Element>,
-    options: LineOptions,
+    pub(crate) elements: Vec<Element>,
+    pub(crate) options: LineOptions,
+    /// Roughness ranges (element index, low, high; m) applied when the line is built.
+    pub(crate) roughness_ranges: Vec<(usize, f64, f64)>,
     /// The built line, made on first use after a change (fittings without a diameter
     /// take it from a neighbouring pipe, which may be added after them).
-    built: OnceLock<Result<Line, Error>>,
+    pub(crate) built: OnceLock<Result<Line, Error>>,
 }
 
 impl hg_line {
-    fn push(&mut self, e: Element) {
+    pub(crate) fn push(&mut self, e: Element) {
         self.elements.push(e);
+        self.changed();
+    }
+
+    /// Forgets the built line after a change.
+    pub(crate) fn changed(&mut self) {
         self.built = OnceLock::new();
     }
 
     pub(crate) fn line(&self) -> FfiResult<&Line> {
-        let built = self
-            .built
-            .get_or_init(|| Line::with_options(self.elements.clone(), self.options.clone()));
+        let built = self.built.get_or_init(|| {
+            let mut line = Line::with_options(self.elements.clone(), self.options.clone())?;
+            for &(i, low, high) in &self.roughness_ranges {
+                line.set_roughness_range(i, low, high)?;
+            }
+            Ok(line)
+        });
         built.as_ref().map_err(|e| e.clone().into())
     }
 }
@@ -50,6 +61,7 @@ pub unsafe extern "C" fn hg_line_new(out: *mut *mut hg_line) -> i32 {
         let line = Box::new(hg_line {
             elements: Vec::new(),
             options: LineOptions::default(),
+            roughness_ranges: Vec::new(),
             built: OnceLock::new(),
         });
         // SAFETY: forwarded contract; checked above.
@@ -74,7 +86,10 @@ pub unsafe extern "C" fn hg_line_free(line: *mut hg_line) {
 ///
 /// # Safety
 /// `line` must be NULL or a live handle used by no other thread.
-unsafe fn with_line(line: *mut hg_line, f: impl FnOnce(&mut hg_line) -> FfiResult) -> i32 {
+pub(crate) unsafe fn with_line(
+    line: *mut hg_line,
+    f: impl FnOnce(&mut hg_line) -> FfiResult,
+) -> i32 {
     guard(|| {
         // SAFETY: forwarded contract.
         let l = unsafe { ffi::handle_mut("line", line)? };
@@ -140,7 +155,7 @@ pub unsafe extern "C" fn hg_line_add_duct(
 }
 
 /// A fitting referred to `diameter`, or to the adjoining pipe's bore when it is 0.
-fn refer(f: Fitting, diameter: f64) -> FfiResult<Fitting> {
+pub(crate) fn refer(f: Fitting, diameter: f64) -> FfiResult<Fitting> {
     if diameter == 0.0 {
         Ok(f)
     } else {
@@ -265,7 +280,7 @@ pub unsafe extern "C" fn hg_line_set_friction_options(
             let o: Options = crate::friction::read_options("opts", opts)?;
             o.validate()?;
             l.options.friction = o;
-            l.built = OnceLock::new();
+            l.changed();
             Ok(())
         })
     }
@@ -292,7 +307,7 @@ pub unsafe extern "C" fn hg_line_set_inlet_pressure(line: *mut hg_line, pressure
             };
             o.validate()?;
             l.options = o;
-            l.built = OnceLock::new();
+            l.changed();
             Ok(())
         })
     }

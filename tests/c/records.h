@@ -29,6 +29,8 @@ static void parse_tok(const char *w, tok *t) {
   if (strncmp(w, "s:", 2) == 0) {
     t->type = 's';
     snprintf(t->s, sizeof t->s, "%s", w + 2);
+    for (char *c = t->s; *c; c++)
+      if (*c == '~') *c = ' '; /* names travel with '~' for ' ' */
   } else if (strncmp(w, "i:", 2) == 0) {
     t->type = 'i';
     t->i = strtoll(w + 2, NULL, 10);

@@ -148,6 +148,13 @@ static long check_material_record(const record *r, int quiet) {
   } else if (strcmp(r->tag, "pipe_size") == 0) {
     s = hg_pipe_size(a[0].s, a[1].s, a[2].s, &x, &y, &z);
     got[n++] = tok_d(x), got[n++] = tok_d(y), got[n++] = tok_d(z);
+  } else if (strcmp(r->tag, "validity") == 0) {
+    double v[5];
+    s = hg_correlation_validity((int32_t)a[0].i, &v[0], &v[1], &v[2], &v[3], &v[4]);
+    for (int i = 0; i < 5; i++) got[n++] = tok_d(v[i]);
+  } else if (strcmp(r->tag, "saturation") == 0) {
+    s = hg_water_saturation_temperature(a[0].d, &x);
+    got[n++] = tok_d(x);
   } else if (strcmp(r->tag, "pipe_size_at_least") == 0) {
     s = hg_pipe_size_at_least(a[0].s, a[1].s, a[2].d, &x, name, sizeof name, &need);
     got[n++] = tok_d(x), got[n++] = tok_s(name);
@@ -163,8 +170,8 @@ static long compare_records(int quiet) {
                         "section", "pipe_head_loss", "reynolds", "duct_flow_state"};
   long bad = 0;
   for (size_t i = 0; i < sizeof tags / sizeof *tags; i++) bad += for_each_record(ref_path, tags[i], check_record, quiet);
-  const char *mtags[] = {"material_name", "roughness", "pipe_size"};
-  for (size_t i = 0; i < 3; i++) bad += for_each_record(ref_path, mtags[i], check_material_record, quiet);
+  const char *mtags[] = {"material_name", "roughness", "pipe_size", "validity", "saturation"};
+  for (size_t i = 0; i < 5; i++) bad += for_each_record(ref_path, mtags[i], check_material_record, quiet);
   return bad;
 }
 
@@ -629,6 +636,13 @@ static void test_bad_pointers_others(void) {
   char m[64];
   hg_last_error(m, sizeof m);
   CHECK(strncmp(m, "element 1: flow = inf", 21) == 0, "batch message '%s'", m);
+  double v[5];
+  for (int k = 0; k < 5; k++) {
+    double *p[5] = {&v[0], &v[1], &v[2], &v[3], &v[4]};
+    p[k] = NULL;
+    CHECK(hg_correlation_validity(0, p[0], p[1], p[2], p[3], p[4]) == HG_ERR_NULL_POINTER, "validity NULL %d", k);
+  }
+  CHECK(hg_correlation_validity(7, &v[0], &v[1], &v[2], &v[3], &v[4]) == HG_ERR_OUT_OF_RANGE && msg_len() > 0, "validity 7");
   CHECK(hg_roughness(NULL, &x, &y, &z) == HG_ERR_NULL_POINTER, "roughness NULL name");
   CHECK(hg_roughness("plastic", NULL, &y, &z) == HG_ERR_NULL_POINTER, "roughness NULL");
   CHECK(hg_roughness("plastic", &x, NULL, &z) == HG_ERR_NULL_POINTER, "roughness NULL");

@@ -174,6 +174,26 @@ static void test_line() {
   CHECK(z.standard.found == 1 && z.standard.inside_diameter >= z.min_inside_diameter &&
             std::string(z.standard.nominal) == hg::pipe_size_at_least("steel", "40", z.min_inside_diameter).first,
         "sizing picks the smallest standard size");
+  hg::line all;
+  hg_uncertainty_options uo = hg::uncertainty_options();
+  uo.diameter = 0.01;
+  all.set_uncertainty(uo).set_turbulent_diameter(HG_TURBULENT_DIAMETER_LAMINAR_EQUIVALENT);
+  all.add_entrance(HG_ENTRANCE_ROUNDED, 0.1).add_pipe_material(0.1, 40, "commercial_steel").add_bend(90, 1.5);
+  all.add_two_k(800, 0.25).add_three_k(500, 0.15, 4).add_cv(120).set_k_spread(5, 0.2).add_kv(100);
+  all.add_equivalent_length(30).add_expansion(0.1, 0.15).add_custom_duct(0.0177, 0.48, 62, 10, 1e-4);
+  all.add_contraction(0.15, 0.08).add_pipe(0.08, 5, 1.5e-6).add_exit();
+  all.set_roughness_range(11, 1e-6, 5e-6);
+  CHECK(all.size() == 13, "every kind of element");
+  auto sources = all.band_sources(water, 5e-3);
+  double total = 0;
+  for (auto& s : sources) total += s.second;
+  CHECK(!sources.empty() && std::fabs(total - 1.0) < 1e-12, "shares sum to 1");
+  hg::fluid wet = water.with_uncertainty(0.001, 0.02).with_vapour_pressure(2.5e5);
+  all.set_inlet_pressure(1.5e5);
+  CHECK(all.evaluate(wet, 5e-3).warnings & HG_WARN_BELOW_VAPOUR_PRESSURE, "cavitation");
+  CHECK(hg::fluid::gas(1.2, 1.8e-5, 293.15, 1e5).props().density == 1.2, "gas");
+  CHECK(hg::correlation_validity(HG_CORRELATION_BLASIUS).re_max == 1e5, "Blasius to 1e5 (Blasius 1913)");
+  CHECK(std::fabs(hg::water_saturation_temperature(101325.0) - 373.124) < 0.01, "boiling point");  // IAPWS-IF97, from memory
   auto e = thrown([] { hg::line().evaluate(hg::fluid::liquid(1000, 1e-3), 1e-3); });
   CHECK(e.first == HG_ERR_INVALID && !e.second.empty(), e.second.c_str());
   e = thrown([] { hg::line().add_pipe(0.05, 10, 0).add_fitting("nonesuch"); });

@@ -144,6 +144,8 @@ TAGS = {
     "roughness": "hg_roughness",
     "roughness_aged": "hg_roughness_aged",
     "pipe_size": "hg_pipe_size",
+    "validity": "hg_correlation_validity",
+    "saturation": "hg_water_saturation_temperature",
 }
 CODES = {"not_finite": 10, "out_of_range": 11, "unknown_name": 12, "invalid": 13, "no_solution": 20}
 OUT_TYPES = {"Double": ctypes.c_double, "Long": ctypes.c_int32, "LongPtr": ctypes.c_ssize_t}
@@ -151,7 +153,7 @@ OUT_TYPES = {"Double": ctypes.c_double, "Long": ctypes.c_int32, "LongPtr": ctype
 
 def token(t: str):
     if t.startswith("s:"):
-        return t[2:].encode()
+        return t[2:].replace("~", " ").encode()
     if t.startswith("i:"):
         return int(t[2:])
     return unhex(t)

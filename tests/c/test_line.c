@@ -14,8 +14,8 @@
 #include "records.h"
 
 static const char *ref_path;
-static hg_line *lines[2];
-static hg_fluid *fluids[2];
+static hg_line *lines[3];
+static hg_fluid *fluids[3];
 
 static size_t msg_len(void) { return hg_last_error(NULL, 0); }
 
@@ -32,6 +32,30 @@ static int32_t build_scenario(int n, hg_line **out) {
     s |= hg_line_add_fitting_k(l, 0.5, 0.0);
     s |= hg_line_add_pipe(l, 0.04, 12.0, 1.5e-6);
     s |= hg_line_add_equipment(l, "strainer", 2e4, 2e-3);
+  } else if (n == 2) {
+    hg_uncertainty_options u;
+    s |= hg_uncertainty_options_default(&u);
+    u.diameter = 0.01;
+    s |= hg_line_set_uncertainty(l, &u);
+    s |= hg_line_set_turbulent_diameter(l, HG_TURBULENT_DIAMETER_LAMINAR_EQUIVALENT);
+    s |= hg_line_add_entrance(l, HG_ENTRANCE_ROUNDED, 0.1);
+    s |= hg_line_add_pipe_material(l, 0.1, 40.0, "commercial_steel");
+    s |= hg_line_add_bend(l, 90.0, 1.5, 0.0);
+    s |= hg_line_add_two_k(l, 800.0, 0.25, 0.0);
+    s |= hg_line_add_three_k(l, 500.0, 0.15, 4.0, 0.0);
+    s |= hg_line_add_cv(l, 120.0, 0.0);
+    s |= hg_line_set_k_spread(l, 5, 0.2);
+    s |= hg_line_add_kv(l, 100.0, 0.0);
+    s |= hg_line_add_equivalent_length(l, 30.0, 0.0);
+    s |= hg_line_add_expansion(l, 0.1, 0.15);
+    s |= hg_line_add_custom_duct(l, 0.0177, 0.48, 62.0, 10.0, 1e-4);
+    s |= hg_line_add_contraction(l, 0.15, 0.08);
+    s |= hg_line_add_pipe(l, 0.08, 5.0, 1.5e-6);
+    s |= hg_line_add_exit(l);
+    s |= hg_line_add_entrance(l, HG_ENTRANCE_PROJECTING, 0.0);
+    s |= hg_line_add_entrance(l, HG_ENTRANCE_SHARP, 0.0);
+    s |= hg_line_add_duct(l, HG_SECTION_RECTANGLE, 0.12, 0.06, 3.0, 5e-5);
+    s |= hg_line_set_roughness_range(l, 11, 1e-6, 5e-6);
   } else {
     hg_friction_options o;
     s |= hg_friction_options_default(&o);
@@ -69,6 +93,16 @@ static long check_line_record(const record *r, int quiet) {
     memcpy(got, g, sizeof g), ngot = 10;
   } else if (strcmp(r->tag, "line_flow_for_head") == 0) {
     s = hg_line_flow_for_head(l, f, r->in[2].d, &got[0], &got[1], &got[2]), ngot = 3;
+  } else if (strcmp(r->tag, "line_band_source") == 0) {
+    char name[64] = "";
+    size_t need = 0;
+    double share = -1;
+    s = hg_line_band_source(l, f, r->in[2].d, (size_t)r->in[3].i, name, sizeof name, &need, &share);
+    int same = r->err ? s == code_of_kind(r->kind) && msg_len() > 0
+                      : s == HG_OK && strcmp(name, r->out[0].s) == 0 && need == strlen(name) &&
+                            bits_of(share) == bits_of(r->out[1].d);
+    if (!quiet) CHECK(same, "band source %lld: status %d '%s'", r->in[3].i, s, name);
+    return !same;
   } else if (strcmp(r->tag, "line_system_curve") == 0) {
     double q[50];
     for (int i = 0; i < 50; i++) q[i] = -5e-3 + 2.5e-4 * i;
@@ -171,6 +205,102 @@ static void test_solves_bad_input(void) {
   CHECK(hg_line_size(l, f, 1e-3, 1, 2.0, "cast_iron", "40", &z) == HG_ERR_UNKNOWN_NAME, "size unknown table");
   z.struct_size = 8;
   CHECK(hg_line_size(l, f, 1e-3, 1, 2.0, NULL, NULL, &z) == HG_ERR_INVALID, "size struct_size 8");
+}
+
+static void test_more_elements_bad_input(void) {
+  hg_line *l = NULL;
+  hg_fluid *f = NULL, *g = NULL;
+  hg_uncertainty_options u;
+  double a = 0, b = 0;
+  CHECK(hg_line_new(&l) == HG_OK, "new");
+  const double bad[] = {NAN, INFINITY, -1.0};
+  for (int i = 0; i < 3; i++) {
+    double v = bad[i];
+    CHECK(hg_line_add_pipe_material(l, v, 10, "plastic") != HG_OK && msg_len() > 0, "material d %g", v);
+    CHECK(hg_line_add_pipe_material(l, 0.1, v, "plastic") != HG_OK, "material L %g", v);
+    CHECK(hg_line_add_custom_duct(l, v, 0.5, 60, 10, 0) != HG_OK, "custom area %g", v);
+    CHECK(hg_line_add_custom_duct(l, 0.01, v, 60, 10, 0) != HG_OK, "custom perimeter %g", v);
+    CHECK(hg_line_add_custom_duct(l, 0.01, 0.5, v, 10, 0) != HG_OK, "custom C %g", v);
+    CHECK(hg_line_add_expansion(l, v, 0.2) != HG_OK && hg_line_add_expansion(l, 0.1, v) != HG_OK, "expansion %g", v);
+    CHECK(hg_line_add_contraction(l, v, 0.1) != HG_OK && hg_line_add_contraction(l, 0.2, v) != HG_OK, "contraction %g", v);
+    CHECK(hg_line_add_two_k(l, v, 0.1, 0) != HG_OK && hg_line_add_two_k(l, 500, v, 0) != HG_OK, "2-K %g", v);
+    CHECK(hg_line_add_two_k(l, 500, 0.1, v) != HG_OK, "2-K diameter %g", v);
+    CHECK(hg_line_add_three_k(l, v, 0.1, 4, 0) != HG_OK && hg_line_add_three_k(l, 500, 0.1, v, 0) != HG_OK, "3-K %g", v);
+    CHECK(hg_line_add_cv(l, v, 0) != HG_OK && hg_line_add_kv(l, v, 0) != HG_OK && msg_len() > 0, "cv kv %g", v);
+    CHECK(hg_line_add_equivalent_length(l, v, 0) != HG_OK, "L/D %g", v);
+    CHECK(hg_line_add_bend(l, v, 1.5, 0) != HG_OK && hg_line_add_bend(l, 90, v, 0) != HG_OK, "bend %g", v);
+    CHECK(hg_line_add_entrance(l, HG_ENTRANCE_ROUNDED, v) != HG_OK, "rounded %g", v);
+    CHECK(hg_line_add_entrance(l, HG_ENTRANCE_SHARP, v) != HG_OK, "sharp with radius %g", v);
+    CHECK(hg_water_saturation_temperature(v, &a) != HG_OK && msg_len() > 0, "saturation %g", v);
+    CHECK(hg_fluid_gas(v, 1.8e-5, 293, 1e5, &f) != HG_OK && f == NULL, "gas density %g", v);
+    CHECK(hg_fluid_gas(1.2, 1.8e-5, v, 1e5, &f) != HG_OK && f == NULL, "gas temperature %g", v);
+  }
+  size_t n = 0;
+  CHECK(hg_line_count(l, &n) == HG_OK && n == 0, "no bad element was added");
+  CHECK(hg_line_add_pipe_material(l, 0.1, 10, "unobtainium") == HG_ERR_UNKNOWN_NAME, "unknown material");
+  CHECK(hg_line_add_pipe_material(l, 0.1, 10, NULL) == HG_ERR_NULL_POINTER, "NULL material");
+  CHECK(hg_line_add_custom_duct(l, 0.01, 0.1, 60, 10, 0) == HG_ERR_OUT_OF_RANGE, "perimeter below the circle's");
+  CHECK(hg_line_add_entrance(l, 3, 0) == HG_ERR_OUT_OF_RANGE && hg_line_add_entrance(l, -1, 0) == HG_ERR_OUT_OF_RANGE, "kind");
+  CHECK(hg_line_add_entrance(l, HG_ENTRANCE_SHARP, 0.1) == HG_ERR_INVALID, "radius on a sharp entrance");
+  CHECK(hg_line_add_pipe(l, 0.05, 10, 0) == HG_OK && hg_line_add_cv(l, 40, 0) == HG_OK, "pipe and valve");
+  CHECK(hg_line_set_k_spread(l, 1, 0.5) == HG_OK, "spread");
+  CHECK(hg_line_set_k_spread(l, 0, 0.5) == HG_ERR_OUT_OF_RANGE && msg_len() > 0, "spread on a pipe");
+  CHECK(hg_line_set_k_spread(l, 7, 0.5) == HG_ERR_OUT_OF_RANGE, "spread past the end");
+  CHECK(hg_line_set_k_spread(l, 1, 1.5) == HG_ERR_OUT_OF_RANGE && hg_line_set_k_spread(l, 1, NAN) == HG_ERR_NOT_FINITE, "spread value");
+  CHECK(hg_line_set_roughness_range(l, 0, 1e-5, 1e-6) == HG_ERR_OUT_OF_RANGE && msg_len() > 0, "range reversed");
+  CHECK(hg_line_set_roughness_range(l, 1, 1e-6, 1e-5) == HG_ERR_OUT_OF_RANGE, "range on a valve");
+  CHECK(hg_line_set_roughness_range(l, 0, NAN, 1e-5) == HG_ERR_NOT_FINITE, "range NaN");
+  CHECK(hg_line_set_roughness_range(l, 0, 1e-6, 1e-5) == HG_OK, "range");
+  CHECK(hg_line_set_turbulent_diameter(l, 2) == HG_ERR_OUT_OF_RANGE, "mode 2");
+  CHECK(hg_uncertainty_options_default(NULL) == HG_ERR_NULL_POINTER, "uncertainty NULL");
+  CHECK(hg_uncertainty_options_default(&u) == HG_OK && u.struct_size == sizeof u && u.friction_model == 1, "defaults");
+  u.fluid = 2;
+  CHECK(hg_line_set_uncertainty(l, &u) == HG_ERR_OUT_OF_RANGE && msg_len() > 0, "flag 2");
+  hg_uncertainty_options_default(&u);
+  u.diameter = -0.1;
+  CHECK(hg_line_set_uncertainty(l, &u) != HG_OK && msg_len() > 0, "negative tolerance");
+  u.diameter = NAN;
+  CHECK(hg_line_set_uncertainty(l, &u) != HG_OK, "NaN tolerance");
+  hg_uncertainty_options_default(&u);
+  u.struct_size = 4;
+  CHECK(hg_line_set_uncertainty(l, &u) == HG_ERR_INVALID, "struct_size 4");
+  CHECK(hg_line_set_uncertainty(l, NULL) == HG_ERR_NULL_POINTER, "NULL options");
+  hg_uncertainty_options_default(&u);
+  u.friction_model = 0, u.roughness = 0, u.fluid = 0, u.fittings = 0, u.equipment = 0;
+  CHECK(hg_line_set_uncertainty(l, &u) == HG_OK, "no sources");
+  CHECK(hg_fluid_liquid(998.2, 1e-3, &f) == HG_OK, "liquid");
+  hg_line_result x;
+  x.struct_size = sizeof x;
+  CHECK(hg_line_evaluate(l, f, 2e-3, &x) == HG_OK && x.head_loss_low == x.head_loss && x.head_loss_high == x.head_loss,
+        "a band without sources has no width");
+  char name[32];
+  size_t need;
+  CHECK(hg_line_band_source(l, f, 2e-3, 0, name, sizeof name, &need, &a) == HG_ERR_OUT_OF_RANGE, "no source");
+  hg_uncertainty_options_default(&u);
+  CHECK(hg_line_set_uncertainty(l, &u) == HG_OK, "default sources");
+  CHECK(hg_line_band_source(l, f, 2e-3, 0, name, sizeof name, &need, &a) == HG_OK && a > 0 && a <= 1, "dominant");
+  CHECK(hg_line_band_source(l, f, 2e-3, 0, name, 2, &need, &a) == HG_ERR_BUFFER_TOO_SMALL && strlen(name) == 1, "cut");
+  CHECK(hg_line_band_source(l, f, 2e-3, 0, name, sizeof name, NULL, &a) == HG_ERR_NULL_POINTER, "NULL needed");
+  CHECK(hg_line_band_source(l, f, 2e-3, 0, name, sizeof name, &need, NULL) == HG_ERR_NULL_POINTER, "NULL share");
+  CHECK(hg_line_band_source(NULL, f, 2e-3, 0, name, sizeof name, &need, &a) == HG_ERR_NULL_POINTER, "NULL line");
+  CHECK(hg_line_band_source(l, NULL, 2e-3, 0, name, sizeof name, &need, &a) == HG_ERR_NULL_POINTER, "NULL fluid");
+  CHECK(hg_line_band_source(l, f, NAN, 0, name, sizeof name, &need, &a) == HG_ERR_NOT_FINITE, "NaN flow");
+  CHECK(hg_fluid_with_uncertainty(NULL, 0.1, 0.1, &g) == HG_ERR_NULL_POINTER && g == NULL, "with NULL fluid");
+  CHECK(hg_fluid_with_uncertainty(f, 1.5, 0.1, &g) == HG_ERR_OUT_OF_RANGE && g == NULL, "uncertainty 1.5");
+  CHECK(hg_fluid_with_uncertainty(f, 0.1, NAN, &g) == HG_ERR_NOT_FINITE && g == NULL, "uncertainty NaN");
+  CHECK(hg_fluid_with_uncertainty(f, 0.1, 0.1, NULL) == HG_ERR_NULL_POINTER, "with NULL out");
+  CHECK(hg_fluid_with_vapour_pressure(f, -1.0, &g) == HG_ERR_OUT_OF_RANGE && g == NULL, "vapour -1");
+  CHECK(hg_fluid_with_vapour_pressure(NULL, 2e3, &g) == HG_ERR_NULL_POINTER, "vapour NULL fluid");
+  CHECK(hg_fluid_with_vapour_pressure(f, 2e3, NULL) == HG_ERR_NULL_POINTER, "vapour NULL out");
+  CHECK(hg_fluid_with_vapour_pressure(f, 2.5e5, &g) == HG_OK && g != NULL, "vapour pressure");
+  CHECK(hg_line_set_inlet_pressure(l, 1.5e5) == HG_OK, "inlet");
+  CHECK(hg_line_evaluate(l, g, 5e-3, &x) == HG_OK && (x.warnings & HG_WARN_BELOW_VAPOUR_PRESSURE), "cavitation warned");
+  CHECK(hg_fluid_properties(g, &a, &b) == HG_OK && a == 998.2 && b == 1e-3, "copy keeps the properties");
+  CHECK(hg_fluid_gas(1.2, 1.8e-5, 293.15, 1e5, NULL) == HG_ERR_NULL_POINTER, "gas NULL out");
+  CHECK(hg_water_saturation_temperature(1e5, NULL) == HG_ERR_NULL_POINTER, "saturation NULL");
+  hg_fluid_free(g);
+  hg_fluid_free(f);
+  hg_line_free(l);
 }
 
 static void test_handles_and_bad_input(void) {
@@ -339,13 +469,18 @@ int main(int argc, char **argv) {
     return 2;
   }
   ref_path = argv[1];
-  for (int i = 0; i < 2; i++) CHECK(build_scenario(i, &lines[i]) == HG_OK, "scenario %d", i);
+  for (int i = 0; i < 3; i++) CHECK(build_scenario(i, &lines[i]) == HG_OK, "scenario %d", i);
   CHECK(hg_fluid_liquid(998.2, 1.002e-3, &fluids[0]) == HG_OK, "liquid");
   CHECK(hg_fluid_water(293.15, 2e5, &fluids[1]) == HG_OK, "water");
+  hg_fluid *gas = NULL;
+  CHECK(hg_fluid_gas(1.2, 1.8e-5, 293.15, 101325.0, &gas) == HG_OK, "gas");
+  CHECK(hg_fluid_with_uncertainty(gas, 0.01, 0.02, &fluids[2]) == HG_OK, "gas with uncertainty");
+  hg_fluid_free(gas);
   long bad = for_each_record(ref_path, "line_", check_line_record, 0);
   bad += for_each_record(ref_path, "line_operating_point", check_solve_record, 0);
   bad += for_each_record(ref_path, "line_s", check_solve_record, 0);
   test_solves_bad_input();
+  test_more_elements_bad_input();
   printf("bitwise: line records, %ld differ\n", bad);
   test_handles_and_bad_input();
   pthread_t th[8];
@@ -358,6 +493,6 @@ int main(int argc, char **argv) {
     pthread_join(th[i], NULL);
     CHECK(args[i].bad == 0, "thread %d: %ld differences", i, args[i].bad);
   }
-  for (int i = 0; i < 2; i++) hg_line_free(lines[i]), hg_fluid_free(fluids[i]);
+  for (int i = 0; i < 3; i++) hg_line_free(lines[i]), hg_fluid_free(fluids[i]);
   return check_summary("test_line");
 }
