@@ -5,9 +5,19 @@
 //! formula, table or default value lives here. Files mirror the core's module names.
 
 mod arrays;
+mod band;
 mod errors;
+mod fitting;
+mod fluid;
 mod friction;
+mod line;
+mod line_result;
+mod pipe;
+mod roughness;
+mod section;
+mod sizes;
 mod state;
+mod units;
 
 use hydrograde::warning::Warnings;
 use pyo3::prelude::*;
@@ -26,5 +36,49 @@ fn _native(m: &Bound<'_, PyModule>) -> PyResult<()> {
     m.add_function(wrap_pyfunction!(friction::correlations, m)?)?;
     m.add_function(wrap_pyfunction!(friction::correlation_validity, m)?)?;
     m.add_class::<friction::PyFriction>()?;
+
+    // fluid
+    m.add_class::<fluid::PyFluid>()?;
+    m.add_function(wrap_pyfunction!(fluid::water_density, m)?)?;
+    m.add_function(wrap_pyfunction!(fluid::water_viscosity, m)?)?;
+    m.add_function(wrap_pyfunction!(fluid::water_vapour_pressure, m)?)?;
+    m.add_function(wrap_pyfunction!(fluid::water_saturation_temperature, m)?)?;
+
+    // fitting
+    m.add_class::<fitting::PyFitting>()?;
+
+    // section
+    m.add_class::<section::PySection>()?;
+
+    // pipe and line
+    m.add_class::<pipe::PyPipe>()?;
+    m.add_class::<pipe::PyRise>()?;
+    m.add_class::<pipe::PyEquipment>()?;
+    m.add_class::<line::PyLine>()?;
+    m.add_class::<line::PyPumpCurve>()?;
+    m.add_function(wrap_pyfunction!(line::split_flow, m)?)?;
+    m.add_class::<line_result::PyLineResult>()?;
+    m.add_class::<line_result::PyElementResult>()?;
+    m.add_class::<line_result::PyFlowSolution>()?;
+    m.add_class::<line_result::PyOperatingPoint>()?;
+    m.add_class::<line_result::PySplit>()?;
+    m.add_class::<line_result::PySizing>()?;
+
+    // roughness and sizes
+    m.add_function(wrap_pyfunction!(roughness::materials, m)?)?;
+    m.add_function(wrap_pyfunction!(roughness::material, m)?)?;
+    m.add_function(wrap_pyfunction!(roughness::aged_roughness, m)?)?;
+    m.add_function(wrap_pyfunction!(sizes::pipe_tables, m)?)?;
+    m.add_function(wrap_pyfunction!(sizes::pipe_sizes, m)?)?;
+    m.add_function(wrap_pyfunction!(sizes::pipe_size, m)?)?;
+    m.add_function(wrap_pyfunction!(sizes::smallest_pipe, m)?)?;
+
+    // band
+    m.add_class::<band::PyBand>()?;
+
+    // units
+    m.add_function(wrap_pyfunction!(units::convert, m)?)?;
+    m.add_function(wrap_pyfunction!(units::convert_head, m)?)?;
+    m.add_function(wrap_pyfunction!(units::unit_names, m)?)?;
     Ok(())
 }

@@ -1,7 +1,10 @@
 //! Pickling and notebook rendering shared by every class.
 //!
-//! Pickling goes through one serde serialisation of the core value (JSON bytes), so a
-//! wrapper's state is exactly its core value and nothing hand-written.
+//! Pickling goes through one serde serialisation of the core value, so a wrapper's state
+//! is exactly its core value and nothing hand-written. The format is MessagePack
+//! (rmp-serde): self-describing like JSON (the core's internally tagged enums need
+//! that) but it keeps every f64 bit for bit, NaN included (results hold NaN where a
+//! field does not apply, e.g. the velocity of a rise), which JSON cannot.
 
 use pyo3::exceptions::PyValueError;
 use pyo3::prelude::*;
@@ -10,16 +13,16 @@ use pyo3::types::{PyBytes, PyDict};
 use serde::Serialize;
 use serde::de::DeserializeOwned;
 
-/// The serde (JSON) bytes of a core value.
+/// The serde (MessagePack) bytes of a core value.
 pub fn dumps<'py, T: Serialize>(py: Python<'py>, value: &T) -> PyResult<Bound<'py, PyBytes>> {
-    let bytes = serde_json::to_vec(value)
+    let bytes = rmp_serde::to_vec_named(value)
         .map_err(|e| PyValueError::new_err(format!("cannot serialise: {e}")))?;
     Ok(PyBytes::new(py, &bytes))
 }
 
-/// A core value back from its serde (JSON) bytes.
+/// A core value back from its serde (MessagePack) bytes.
 pub fn loads<T: DeserializeOwned>(bytes: &[u8]) -> PyResult<T> {
-    serde_json::from_slice(bytes)
+    rmp_serde::from_slice(bytes)
         .map_err(|e| PyValueError::new_err(format!("not a hydrograde state: {e}")))
 }
 

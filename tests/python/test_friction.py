@@ -177,3 +177,22 @@ def test_the_gil_is_released_during_array_work():
     t.join()
     # A Python thread can only make progress while the native call runs if the GIL is free.
     assert elapsed > 0.02 and during > 100, (elapsed, during)
+
+
+@given(st.floats(min_value=4.0, max_value=8.5), st.floats(min_value=1e-6, max_value=0.05))
+def test_physics_monotonic_in_re_and_roughness(lre, rr):
+    # Moody (1944) chart shape: turbulent f falls with Re and rises with ε/D.
+    re = 10.0**lre
+    f = hg.darcy_factor(re, rr)
+    assert hg.darcy_factor(re * 1.01, rr) <= f <= hg.darcy_factor(re, rr * 1.01)
+    fr = hg.friction(re, rr)
+    assert fr.df_dre <= 0.0 <= fr.df_drel_roughness
+
+
+@given(st.floats(min_value=2300.0, max_value=4000.0))
+def test_transition_blend_stays_between_the_limits(re):
+    # DESIGN §5: the transitional value is a C¹ blend of the laminar value and Colebrook.
+    lam = 64.0 / re
+    tur = hg.darcy_factor(re, 1e-4, transition="turbulent")
+    f = hg.darcy_factor(re, 1e-4)
+    assert min(lam, tur) - 1e-15 <= f <= max(lam, tur) + 1e-15

@@ -82,3 +82,21 @@ def test_friction_chart_plots_the_core_values():
     import matplotlib.pyplot as plt
 
     plt.close(ax.figure)
+
+
+def test_every_class_renders_and_has_a_readable_repr():
+    water = hg.Fluid.water(288.15)
+    line = hg.Line([hg.Pipe(0.1, 50.0, 4.5e-5), hg.Fitting.k(0.9), hg.Rise(3.0)])
+    pump = hg.PumpCurve([0.0, 0.02, 0.04], [40.0, 35.0, 10.0])
+    result = line.evaluate(water, 0.01)
+    renderable = [
+        hg.friction(1e5, 1e-4), water, hg.Section.rectangle(0.3, 0.1), hg.Fitting.k(0.9),
+        hg.Pipe(0.1, 50.0, 4.5e-5), line, result, result.head_loss_band,
+        line.flow_for_head(water, 10.0), line.operating_point(water, pump),
+    ]
+    for obj in renderable:
+        text = rendered_text(obj._repr_html_())
+        assert type(obj).__name__ in text and "competent engineer" in text
+        assert obj.to_dict()
+        assert repr(obj).startswith(type(obj).__name__)
+    assert "band (k = 2)" in result._repr_html_()

@@ -66,6 +66,14 @@ class NoSolutionError(HydrogradeError):
     kind = "no_solution"
 
 
+# Shown and pickled as hydrograde.<Name>, where users import them from.
+for _cls in (
+    HydrogradeError, NotFiniteError, OutOfRangeError, UnknownNameError,
+    InvalidInputError, NoSolutionError,
+):
+    _cls.__module__ = "hydrograde"
+del _cls
+
 BY_KIND: Dict[str, Type[HydrogradeError]] = {
     cls.kind: cls
     for cls in (

@@ -39,8 +39,14 @@ UNITS: Dict[str, str] = {
     "vapour_pressure": "Pa",
     "temperature": "K",
     "pressure": "Pa",
-    "dhead_dflow": "m/(m³/s)",
+    "dhead_dflow": "s/m²",
     "value": "",
+    "drequired_head_dflow": "s/m²",
+    "inlet_pressure": "Pa",
+    "outlet_pressure": "Pa",
+    "pressure_out": "Pa",
+    "head_loss_low": "m",
+    "head_loss_high": "m",
 }
 
 SAFETY = (
@@ -82,7 +88,7 @@ def _band_text(band: Mapping[str, Any]) -> str:
     contributions = band.get("contributions") or []
     if contributions:
         top = contributions[0]
-        name = top.get("name", top) if isinstance(top, Mapping) else top
+        name = top.get("source", top) if isinstance(top, Mapping) else top
         text += f" (dominated by {html.escape(str(name))})"
     return text
 

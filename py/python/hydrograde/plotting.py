@@ -45,7 +45,7 @@ def style() -> Iterator[None]:
     import matplotlib as mpl
     from cycler import cycler
 
-    rc = dict(STYLE, **{"axes.prop_cycle": cycler(color=PALETTE)})
+    rc: Any = dict(STYLE, **{"axes.prop_cycle": cycler(color=PALETTE)})
     with mpl.rc_context(rc):
         yield
 
@@ -90,5 +90,79 @@ def friction_chart(
         ax.set_ylabel("Darcy friction factor f")
         ax.set_title(f"Friction factor ({correlation or 'core default'})")
         ax.legend(loc="upper right")
+        _note(ax)
+    return ax
+
+
+def system_curve(
+    line: Any,
+    fluid: Any,
+    flows: Any,
+    pump: Any = None,
+    ax: Any = None,
+) -> Any:
+    """The system curve of ``line`` (required head, m, against flow, m³/s) over ``flows``,
+    with the band of the required head shaded; with a ``pump`` (:class:`PumpCurve`), its
+    curve over its range and the operating point with its flow and head bands.
+    """
+    q = np.asarray(flows, dtype=float)
+    heads = line.system_curve(fluid, q)
+    bands = [line.evaluate(fluid, float(x)).required_head_band for x in q]
+    with style():
+        ax = _axes(ax)
+        ax.fill_between(
+            q, [b.low for b in bands], [b.high for b in bands],
+            color=PALETTE[0], alpha=0.15, linewidth=0, label="system band (k = 2)",
+        )
+        ax.plot(q, heads, color=PALETTE[0], label="system curve")
+        if pump is not None:
+            lo, hi = pump.range
+            qp = np.linspace(lo, hi, 200)
+            ax.plot(qp, pump.head(qp), color=PALETTE[1], label="pump")
+            op = line.operating_point(fluid, pump)
+            fb, hb = op.flow_band, op.head_band
+            ax.errorbar(
+                [op.flow], [op.head],
+                xerr=[[op.flow - fb.low], [fb.high - op.flow]],
+                yerr=[[op.head - hb.low], [hb.high - op.head]],
+                fmt="o", color=PALETTE[2], capsize=3,
+                label=f"operating point ({op.flow:.4g} m³/s, {op.head:.4g} m)",
+            )
+        ax.set_xlabel("flow Q [m³/s]")
+        ax.set_ylabel("head [m]")
+        ax.set_title("System curve")
+        ax.legend(loc="best")
+        _note(ax)
+    return ax
+
+
+def grade_line(line: Any, fluid: Any, flow: float, ax: Any = None) -> Any:
+    """The energy grade along the route of ``line`` at ``flow`` (m³/s).
+
+    Plots the total head left after each element relative to the inlet (m: minus the
+    accumulated losses; rises do not change it) and the elevation profile from the rises,
+    against the distance along the pipes (m); fittings, equipment and rises take no
+    length, so their losses show as steps. The shaded band adds the elements' k = 2 bands
+    end to end, which overstates the line's own band (that one is ``required_head_band``).
+    """
+    result = line.evaluate(fluid, float(flow))
+    x, energy, low, high, elevation = [0.0], [0.0], [0.0], [0.0], [0.0]
+    for element, r in zip(line.elements, result.elements):
+        band = r.head_loss_band
+        x.append(x[-1] + float(getattr(element, "length", 0.0)))
+        energy.append(energy[-1] - r.head_loss)
+        low.append(low[-1] - band.high)
+        high.append(high[-1] - band.low)
+        elevation.append(elevation[-1] + r.static_head)
+    with style():
+        ax = _axes(ax)
+        ax.fill_between(x, low, high, color=PALETTE[0], alpha=0.15, linewidth=0,
+                        label="element bands added (k = 2)")
+        ax.plot(x, energy, color=PALETTE[0], marker=".", label="energy grade")
+        ax.plot(x, elevation, color=PALETTE[5], linestyle="--", label="elevation")
+        ax.set_xlabel("distance along the route [m]")
+        ax.set_ylabel("head relative to the inlet [m]")
+        ax.set_title(f"Grade line at Q = {flow:.4g} m³/s")
+        ax.legend(loc="best")
         _note(ax)
     return ax

@@ -1,0 +1,316 @@
+//! `hydrograde.Line`, `PumpCurve` and `split_flow`.
+
+use crate::arrays;
+use crate::errors::CoreResult;
+use crate::fluid::PyFluid;
+use crate::line_result::{PyFlowSolution, PyLineResult, PyOperatingPoint, PySizing, PySplit};
+use crate::pipe::{element, element_object};
+use crate::state;
+use hydrograde::band::UncertaintyOptions;
+use hydrograde::error::Error;
+use hydrograde::line::{Limit, Line, LineOptions, PumpCurve, split_flow as core_split};
+use hydrograde::section::TurbulentDiameter;
+use hydrograde::sizes::PipeTable;
+use pyo3::prelude::*;
+use pyo3::types::{PyBytes, PyDict, PyList, PyType};
+
+/// The binding names of the uncertainty presets of the core.
+fn uncertainty(name: &str) -> PyResult<UncertaintyOptions> {
+    match name {
+        "default" => Ok(UncertaintyOptions::default()),
+        "none" => Ok(UncertaintyOptions::none()),
+        "model_only" => Ok(UncertaintyOptions::model_only()),
+        _ => Err(Error::unknown_name(
+            "uncertainty",
+            name,
+            &["default", "none", "model_only"],
+        ))
+        .py(),
+    }
+}
+
+/// A route of elements in series (:class:`Pipe`, :class:`Fitting`, :class:`Rise`,
+/// :class:`Equipment`), in flow order.
+///
+/// Options (``None`` keeps the core's default): ``correlation`` and ``transition`` as
+/// :func:`darcy_factor`; ``turbulent_diameter`` (``"hydraulic"`` or
+/// ``"laminar_equivalent"``); ``inlet_pressure`` (Pa absolute; enables the pressure
+/// profile, cavitation and gas checks); ``uncertainty`` (``"default"``, ``"none"`` or
+/// ``"model_only"``: which sources the bands include).
+///
+/// Results are engineering estimates with stated uncertainty; designs must be checked
+/// by a competent engineer against the codes and standards that apply.
+#[pyclass(name = "Line", module = "hydrograde._native", frozen, eq)]
+#[derive(Clone, PartialEq)]
+pub struct PyLine {
+    /// The core value.
+    pub inner: Line,
+}
+
+#[pymethods]
+impl PyLine {
+    #[new]
+    #[pyo3(signature = (elements, *, correlation = None, transition = None, turbulent_diameter = None, inlet_pressure = None, uncertainty = None))]
+    fn new(
+        elements: &Bound<'_, PyAny>,
+        correlation: Option<&str>,
+        transition: Option<&str>,
+        turbulent_diameter: Option<&str>,
+        inlet_pressure: Option<f64>,
+        uncertainty: Option<&str>,
+    ) -> PyResult<Self> {
+        let mut items = Vec::new();
+        for (i, obj) in elements.try_iter()?.enumerate() {
+            items.push(element(&obj?, i)?);
+        }
+        let mut o = LineOptions {
+            friction: crate::friction::options(correlation, None, None, None, transition)?,
+            inlet_pressure,
+            ..LineOptions::default()
+        };
+        if let Some(t) = turbulent_diameter {
+            o.turbulent_diameter = t.parse::<TurbulentDiameter>().py()?;
+        }
+        if let Some(u) = uncertainty {
+            o.uncertainty = self::uncertainty(u)?;
+        }
+        Ok(PyLine {
+            inner: Line::with_options(items, o).py()?,
+        })
+    }
+    /// The elements in route order.
+    #[getter]
+    fn elements<'py>(&self, py: Python<'py>) -> PyResult<Bound<'py, PyList>> {
+        let list = PyList::empty(py);
+        for e in self.inner.elements() {
+            list.append(element_object(py, e)?)?;
+        }
+        Ok(list)
+    }
+    /// Sum of the rises, m.
+    #[getter]
+    fn static_head(&self) -> f64 {
+        self.inner.static_head()
+    }
+    /// Inlet static pressure of the options, Pa absolute (None when not given).
+    #[getter]
+    fn inlet_pressure(&self) -> Option<f64> {
+        self.inner.options().inlet_pressure
+    }
+    /// The line at signed ``flow`` (m³/s): head loss, pressure loss, required head, the
+    /// per-element breakdown, bands and warnings.
+    fn evaluate(&self, py: Python<'_>, fluid: &PyFluid, flow: f64) -> PyResult<PyLineResult> {
+        let r = py.detach(|| self.inner.evaluate(&fluid.inner, flow)).py()?;
+        PyLineResult::new(py, r)
+    }
+    /// Required head (m) at signed ``flow`` (m³/s): static head + losses. Floats give a
+    /// float; arrays broadcast (GIL released, all cores for large arrays).
+    fn required_head<'py>(
+        &self,
+        py: Python<'py>,
+        fluid: &PyFluid,
+        flow: &Bound<'py, PyAny>,
+    ) -> PyResult<Bound<'py, PyAny>> {
+        let (l, f) = (&self.inner, &fluid.inner);
+        arrays::map(py, ["flow"], [flow], |[q]| {
+            l.required_head(f, q).map(|r| r.0)
+        })
+    }
+    /// The system curve: required head (m) at each of ``flows`` (m³/s, any shape).
+    fn system_curve<'py>(
+        &self,
+        py: Python<'py>,
+        fluid: &PyFluid,
+        flows: &Bound<'py, PyAny>,
+    ) -> PyResult<Bound<'py, PyAny>> {
+        let (l, f) = (&self.inner, &fluid.inner);
+        arrays::map(py, ["flows"], [flows], |[q]| {
+            l.required_head(f, q).map(|r| r.0)
+        })
+    }
+    /// The signed flow (m³/s) for which the required head equals ``head`` (m), with its band.
+    fn flow_for_head(
+        &self,
+        py: Python<'_>,
+        fluid: &PyFluid,
+        head: f64,
+    ) -> PyResult<PyFlowSolution> {
+        let s = py
+            .detach(|| self.inner.flow_for_head(&fluid.inner, head))
+            .py()?;
+        Ok(PyFlowSolution { inner: s })
+    }
+    /// Where ``pump``'s curve crosses this line's system curve, with bands.
+    fn operating_point(
+        &self,
+        py: Python<'_>,
+        fluid: &PyFluid,
+        pump: &PyPumpCurve,
+    ) -> PyResult<PyOperatingPoint> {
+        let p = py
+            .detach(|| self.inner.operating_point(&fluid.inner, &pump.inner))
+            .py()?;
+        Ok(PyOperatingPoint { inner: p })
+    }
+    /// Sizes the line's round pipes (all take one trial bore) for ``flow`` (m³/s, ≠ 0)
+    /// under exactly one limit: ``max_pressure_loss`` (Pa, friction + minor) or
+    /// ``max_velocity`` (m/s); with ``table`` (``"steel"``, ``"stainless"``, ``"copper"``,
+    /// ``"pvc"``) and ``schedule`` also picks the smallest standard size, at the nominal
+    /// values and at the unfavourable end of the band.
+    #[pyo3(signature = (fluid, flow, *, max_pressure_loss = None, max_velocity = None, table = None, schedule = None))]
+    #[allow(clippy::too_many_arguments)]
+    fn size(
+        &self,
+        py: Python<'_>,
+        fluid: &PyFluid,
+        flow: f64,
+        max_pressure_loss: Option<f64>,
+        max_velocity: Option<f64>,
+        table: Option<&str>,
+        schedule: Option<&str>,
+    ) -> PyResult<PySizing> {
+        let limit = match (max_pressure_loss, max_velocity) {
+            (Some(p), None) => Limit::PressureLoss(p),
+            (None, Some(v)) => Limit::Velocity(v),
+            _ => {
+                return Err(Error::invalid(
+                    "max_pressure_loss",
+                    "give exactly one of max_pressure_loss and max_velocity",
+                ))
+                .py();
+            }
+        };
+        let table = match (table, schedule) {
+            (Some(t), Some(s)) => Some((t.parse::<PipeTable>().py()?, s)),
+            (None, None) => None,
+            _ => {
+                return Err(Error::invalid(
+                    "schedule",
+                    "give both table and schedule, or neither",
+                ))
+                .py();
+            }
+        };
+        let s = py
+            .detach(|| self.inner.size(&fluid.inner, flow, limit, table))
+            .py()?;
+        Ok(PySizing { inner: s })
+    }
+    /// The same line with the likely range (``low``, ``high``; m) of the roughness of the
+    /// pipe at ``index`` stated, for the roughness uncertainty.
+    fn with_roughness_range(&self, index: usize, low: f64, high: f64) -> PyResult<Self> {
+        let mut l = self.inner.clone();
+        l.set_roughness_range(index, low, high).py()?;
+        Ok(PyLine { inner: l })
+    }
+    /// The same line with every round pipe of inside ``diameter`` (m).
+    fn with_uniform_diameter(&self, diameter: f64) -> PyResult<Self> {
+        Ok(PyLine {
+            inner: self.inner.with_uniform_diameter(diameter).py()?,
+        })
+    }
+    /// The elements and options as a dict.
+    fn to_dict<'py>(&self, py: Python<'py>) -> PyResult<Bound<'py, PyDict>> {
+        let d = PyDict::new(py);
+        d.set_item("static_head", self.static_head())?;
+        d.set_item("inlet_pressure", self.inlet_pressure())?;
+        d.set_item(
+            "correlation",
+            self.inner.options().friction.correlation.name(),
+        )?;
+        let rows = PyList::empty(py);
+        for e in self.inner.elements() {
+            let obj = element_object(py, e)?;
+            let row = PyDict::new(py);
+            row.set_item("element", obj.bind(py).repr()?)?;
+            rows.append(row)?;
+        }
+        d.set_item("elements", rows)?;
+        Ok(d)
+    }
+    fn _repr_html_(&self, py: Python<'_>) -> PyResult<String> {
+        state::html(py, "Line", &self.to_dict(py)?)
+    }
+    fn __repr__(&self, py: Python<'_>) -> PyResult<String> {
+        let parts: Vec<String> = self
+            .inner
+            .elements()
+            .iter()
+            .map(|e| Ok(element_object(py, e)?.bind(py).repr()?.to_string()))
+            .collect::<PyResult<_>>()?;
+        Ok(format!("Line([{}])", parts.join(", ")))
+    }
+    fn __len__(&self) -> usize {
+        self.inner.elements().len()
+    }
+    fn __reduce__<'py>(
+        slf: &Bound<'py, Self>,
+    ) -> PyResult<(Bound<'py, PyAny>, (Bound<'py, PyBytes>,))> {
+        state::reduce(slf.as_any(), &slf.get().inner)
+    }
+    #[classmethod]
+    fn _from_state(_cls: &Bound<'_, PyType>, state: &[u8]) -> PyResult<Self> {
+        Ok(PyLine {
+            inner: state::loads(state)?,
+        })
+    }
+}
+
+/// A pump curve through (flow m³/s, head m) points: at least 3, flows ≥ 0 strictly
+/// increasing, heads non-increasing; monotone piecewise-cubic interpolation
+/// (Fritsch & Carlson 1980), so the curve never rises where the data falls.
+#[pyclass(name = "PumpCurve", module = "hydrograde._native", frozen, eq)]
+#[derive(Clone, PartialEq)]
+pub struct PyPumpCurve {
+    /// The core value.
+    pub inner: PumpCurve,
+}
+
+#[pymethods]
+impl PyPumpCurve {
+    #[new]
+    fn new(flows: Vec<f64>, heads: Vec<f64>) -> PyResult<Self> {
+        Ok(PyPumpCurve {
+            inner: PumpCurve::new(&flows, &heads).py()?,
+        })
+    }
+    /// (lowest, highest) flow of the data, m³/s.
+    #[getter]
+    fn range(&self) -> (f64, f64) {
+        self.inner.range()
+    }
+    /// The pump's head (m) at ``flow`` (m³/s, inside the range); arrays broadcast.
+    fn head<'py>(&self, py: Python<'py>, flow: &Bound<'py, PyAny>) -> PyResult<Bound<'py, PyAny>> {
+        let p = &self.inner;
+        arrays::map(py, ["flow"], [flow], |[q]| p.head(q).map(|r| r.0))
+    }
+    fn __repr__(&self) -> String {
+        let (lo, hi) = self.inner.range();
+        format!("PumpCurve(flows {lo:?}…{hi:?} m³/s)")
+    }
+    fn __reduce__<'py>(
+        slf: &Bound<'py, Self>,
+    ) -> PyResult<(Bound<'py, PyAny>, (Bound<'py, PyBytes>,))> {
+        state::reduce(slf.as_any(), &slf.get().inner)
+    }
+    #[classmethod]
+    fn _from_state(_cls: &Bound<'_, PyType>, state: &[u8]) -> PyResult<Self> {
+        Ok(PyPumpCurve {
+            inner: state::loads(state)?,
+        })
+    }
+}
+
+/// Splits ``total`` flow (m³/s) between parallel ``branches`` (Lines) so that all need
+/// the same head.
+#[pyfunction]
+pub fn split_flow(
+    py: Python<'_>,
+    branches: Vec<PyRef<'_, PyLine>>,
+    fluid: &PyFluid,
+    total: f64,
+) -> PyResult<PySplit> {
+    let lines: Vec<Line> = branches.iter().map(|b| b.inner.clone()).collect();
+    let s = py.detach(|| core_split(&lines, &fluid.inner, total)).py()?;
+    Ok(PySplit { inner: s })
+}

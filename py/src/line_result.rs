@@ -1,0 +1,558 @@
+//! The results of a line: `LineResult` with its `ElementResult`s, `FlowSolution`,
+//! `OperatingPoint` and `Split`.
+
+use crate::band::{PyBand, band_dict};
+use crate::state;
+use hydrograde::band::Band;
+use hydrograde::line::{
+    ElementResult, FlowSolution, LineResult, OperatingPoint, SizeChoice, Sizing, Split,
+};
+use pyo3::prelude::*;
+use pyo3::types::{PyBytes, PyDict, PyList, PyType};
+
+fn band(py: Python<'_>, b: &Band) -> PyResult<Py<PyBand>> {
+    PyBand::object(py, b)
+}
+
+/// The line at one flow. Fields (SI): ``flow`` (m³/s), ``head_loss`` (m, friction +
+/// minor), ``pressure_loss`` (Pa, ρ·g·head_loss), ``static_head`` (m, sum of rises),
+/// ``required_head`` (m), ``drequired_head_dflow`` (s/m²), ``density`` (kg/m³),
+/// ``inlet_pressure``/``outlet_pressure`` (Pa absolute, when an inlet pressure is
+/// given), ``elements`` (per-element breakdown in route order), ``warnings``, and the
+/// bands ``head_loss_band``, ``pressure_loss_band``, ``required_head_band`` (k = 2).
+/// An engineering estimate; designs must be checked by a competent engineer.
+#[pyclass(name = "LineResult", module = "hydrograde._native", frozen, eq)]
+#[derive(Clone, PartialEq)]
+pub struct PyLineResult {
+    /// The core value.
+    pub inner: LineResult,
+}
+
+impl PyLineResult {
+    /// Wraps a core result.
+    pub fn new(_py: Python<'_>, inner: LineResult) -> PyResult<Self> {
+        Ok(PyLineResult { inner })
+    }
+}
+
+#[pymethods]
+impl PyLineResult {
+    /// Flow, m³/s (signed).
+    #[getter]
+    fn flow(&self) -> f64 {
+        self.inner.flow
+    }
+    /// Head loss (friction + minor), m of the flowing fluid.
+    #[getter]
+    fn head_loss(&self) -> f64 {
+        self.inner.head_loss
+    }
+    /// Pressure loss ρ·g·head_loss, Pa.
+    #[getter]
+    fn pressure_loss(&self) -> f64 {
+        self.inner.pressure_loss
+    }
+    /// Sum of the rises, m.
+    #[getter]
+    fn static_head(&self) -> f64 {
+        self.inner.static_head
+    }
+    /// head_loss + static_head, m.
+    #[getter]
+    fn required_head(&self) -> f64 {
+        self.inner.required_head
+    }
+    /// d(required_head)/d(flow), s/m².
+    #[getter]
+    fn drequired_head_dflow(&self) -> f64 {
+        self.inner.drequired_head_dflow
+    }
+    /// Density used, kg/m³ (the mean density for a gas).
+    #[getter]
+    fn density(&self) -> f64 {
+        self.inner.density
+    }
+    /// Inlet static pressure, Pa absolute (None when not given).
+    #[getter]
+    fn inlet_pressure(&self) -> Option<f64> {
+        self.inner.inlet_pressure
+    }
+    /// Outlet static pressure, Pa absolute (None without an inlet pressure).
+    #[getter]
+    fn outlet_pressure(&self) -> Option<f64> {
+        self.inner.outlet_pressure
+    }
+    /// Names of the warnings of the whole line.
+    #[getter]
+    fn warnings(&self) -> Vec<&'static str> {
+        self.inner.warnings.names()
+    }
+    /// The per-element breakdown, in route order.
+    #[getter]
+    fn elements(&self) -> Vec<PyElementResult> {
+        self.inner
+            .elements
+            .iter()
+            .map(|e| PyElementResult { inner: e.clone() })
+            .collect()
+    }
+    /// Band of head_loss, m.
+    #[getter]
+    fn head_loss_band(&self, py: Python<'_>) -> PyResult<Py<PyBand>> {
+        band(py, &self.inner.head_loss_band)
+    }
+    /// Band of pressure_loss, Pa.
+    #[getter]
+    fn pressure_loss_band(&self, py: Python<'_>) -> PyResult<Py<PyBand>> {
+        band(py, &self.inner.pressure_loss_band)
+    }
+    /// Band of required_head, m.
+    #[getter]
+    fn required_head_band(&self, py: Python<'_>) -> PyResult<Py<PyBand>> {
+        band(py, &self.inner.required_head_band)
+    }
+    /// Everything as a dict: scalars, bands (dicts), ``elements`` (list of dicts).
+    fn to_dict<'py>(&self, py: Python<'py>) -> PyResult<Bound<'py, PyDict>> {
+        let r = &self.inner;
+        let d = PyDict::new(py);
+        d.set_item("flow", r.flow)?;
+        d.set_item("head_loss", r.head_loss)?;
+        d.set_item("pressure_loss", r.pressure_loss)?;
+        d.set_item("static_head", r.static_head)?;
+        d.set_item("required_head", r.required_head)?;
+        d.set_item("drequired_head_dflow", r.drequired_head_dflow)?;
+        d.set_item("density", r.density)?;
+        d.set_item("inlet_pressure", r.inlet_pressure)?;
+        d.set_item("outlet_pressure", r.outlet_pressure)?;
+        d.set_item("head_loss_band", band_dict(py, &r.head_loss_band)?)?;
+        d.set_item("pressure_loss_band", band_dict(py, &r.pressure_loss_band)?)?;
+        d.set_item("required_head_band", band_dict(py, &r.required_head_band)?)?;
+        let rows = PyList::empty(py);
+        for e in &r.elements {
+            rows.append(element_dict(py, e)?)?;
+        }
+        d.set_item("elements", rows)?;
+        d.set_item("warnings", self.warnings())?;
+        Ok(d)
+    }
+    /// The per-element breakdown as a pandas DataFrame (needs pandas).
+    fn to_dataframe<'py>(&self, py: Python<'py>) -> PyResult<Bound<'py, PyAny>> {
+        state::dataframe(py, &self.to_dict(py)?)
+    }
+    fn _repr_html_(&self, py: Python<'_>) -> PyResult<String> {
+        state::html(py, "LineResult", &self.to_dict(py)?)
+    }
+    fn __repr__(&self) -> String {
+        let r = &self.inner;
+        format!(
+            "LineResult(flow={:?}, required_head={:?}, head_loss={:?}, pressure_loss={:?}, elements={}, warnings={})",
+            r.flow,
+            r.required_head,
+            r.head_loss,
+            r.pressure_loss,
+            r.elements.len(),
+            state::names_repr(&self.warnings())
+        )
+    }
+    fn __reduce__<'py>(
+        slf: &Bound<'py, Self>,
+    ) -> PyResult<(Bound<'py, PyAny>, (Bound<'py, PyBytes>,))> {
+        state::reduce(slf.as_any(), &slf.get().inner)
+    }
+    #[classmethod]
+    fn _from_state(_cls: &Bound<'_, PyType>, state: &[u8]) -> PyResult<Self> {
+        Ok(PyLineResult {
+            inner: state::loads(state)?,
+        })
+    }
+}
+
+fn element_dict<'py>(py: Python<'py>, e: &ElementResult) -> PyResult<Bound<'py, PyDict>> {
+    let d = PyDict::new(py);
+    d.set_item("kind", e.kind.name())?;
+    d.set_item("label", &e.label)?;
+    d.set_item("velocity", e.velocity)?;
+    d.set_item("reynolds", e.reynolds)?;
+    d.set_item("regime", e.regime.map(|r| r.name()))?;
+    d.set_item("friction_factor", e.friction_factor)?;
+    d.set_item("k", e.k)?;
+    d.set_item("head_loss", e.head_loss)?;
+    d.set_item("dhead_dflow", e.dhead_dflow)?;
+    d.set_item("static_head", e.static_head)?;
+    d.set_item("pressure_out", e.pressure_out)?;
+    d.set_item("head_loss_low", e.head_loss_band.low)?;
+    d.set_item("head_loss_high", e.head_loss_band.high)?;
+    d.set_item("warnings", e.warnings.names())?;
+    Ok(d)
+}
+
+/// One element's share of a :class:`LineResult`: ``kind`` ("pipe", "fitting", "rise",
+/// "equipment"), ``label``, ``velocity`` (m/s), ``reynolds``, ``regime`` and
+/// ``friction_factor`` (pipes), ``k`` (fittings), ``head_loss`` (m), ``dhead_dflow``
+/// (s/m²), ``static_head`` (m), ``pressure_out`` (Pa), ``warnings`` and the bands
+/// ``head_loss_band`` and ``friction_factor_band``.
+#[pyclass(name = "ElementResult", module = "hydrograde._native", frozen, eq)]
+#[derive(Clone, PartialEq)]
+pub struct PyElementResult {
+    /// The core value.
+    pub inner: ElementResult,
+}
+
+#[pymethods]
+impl PyElementResult {
+    /// "pipe", "fitting", "rise" or "equipment".
+    #[getter]
+    fn kind(&self) -> &'static str {
+        self.inner.kind.name()
+    }
+    /// A short description of the element.
+    #[getter]
+    fn label(&self) -> &str {
+        &self.inner.label
+    }
+    /// Mean velocity, m/s.
+    #[getter]
+    fn velocity(&self) -> f64 {
+        self.inner.velocity
+    }
+    /// Reynolds number.
+    #[getter]
+    fn reynolds(&self) -> f64 {
+        self.inner.reynolds
+    }
+    /// Flow regime of a pipe (None for other elements).
+    #[getter]
+    fn regime(&self) -> Option<&'static str> {
+        self.inner.regime.map(|r| r.name())
+    }
+    /// Darcy friction factor of a pipe (None for other elements).
+    #[getter]
+    fn friction_factor(&self) -> Option<f64> {
+        self.inner.friction_factor
+    }
+    /// Resistance coefficient K of a fitting (None for other elements).
+    #[getter]
+    fn k(&self) -> Option<f64> {
+        self.inner.k
+    }
+    /// Head loss, m.
+    #[getter]
+    fn head_loss(&self) -> f64 {
+        self.inner.head_loss
+    }
+    /// d(head_loss)/d(flow), s/m².
+    #[getter]
+    fn dhead_dflow(&self) -> f64 {
+        self.inner.dhead_dflow
+    }
+    /// Static head of a rise, m (0 otherwise).
+    #[getter]
+    fn static_head(&self) -> f64 {
+        self.inner.static_head
+    }
+    /// Static pressure after the element, Pa absolute (None without an inlet pressure).
+    #[getter]
+    fn pressure_out(&self) -> Option<f64> {
+        self.inner.pressure_out
+    }
+    /// Names of the element's warnings.
+    #[getter]
+    fn warnings(&self) -> Vec<&'static str> {
+        self.inner.warnings.names()
+    }
+    /// Band of head_loss, m.
+    #[getter]
+    fn head_loss_band(&self, py: Python<'_>) -> PyResult<Py<PyBand>> {
+        band(py, &self.inner.head_loss_band)
+    }
+    /// Band of friction_factor (pipes only).
+    #[getter]
+    fn friction_factor_band(&self, py: Python<'_>) -> PyResult<Option<Py<PyBand>>> {
+        self.inner
+            .friction_factor_band
+            .as_ref()
+            .map(|b| band(py, b))
+            .transpose()
+    }
+    /// The fields as a dict.
+    fn to_dict<'py>(&self, py: Python<'py>) -> PyResult<Bound<'py, PyDict>> {
+        element_dict(py, &self.inner)
+    }
+    fn __repr__(&self) -> String {
+        format!(
+            "ElementResult(kind='{}', label='{}', head_loss={:?})",
+            self.kind(),
+            self.inner.label,
+            self.inner.head_loss
+        )
+    }
+    fn __reduce__<'py>(
+        slf: &Bound<'py, Self>,
+    ) -> PyResult<(Bound<'py, PyAny>, (Bound<'py, PyBytes>,))> {
+        state::reduce(slf.as_any(), &slf.get().inner)
+    }
+    #[classmethod]
+    fn _from_state(_cls: &Bound<'_, PyType>, state: &[u8]) -> PyResult<Self> {
+        Ok(PyElementResult {
+            inner: state::loads(state)?,
+        })
+    }
+}
+
+/// The flow a line passes under a head: ``flow`` (m³/s), ``head`` (m),
+/// ``drequired_head_dflow`` (s/m²), ``flow_band`` and ``iterations``.
+#[pyclass(name = "FlowSolution", module = "hydrograde._native", frozen, eq)]
+#[derive(Clone, PartialEq)]
+pub struct PyFlowSolution {
+    /// The core value.
+    pub inner: FlowSolution,
+}
+
+#[pymethods]
+impl PyFlowSolution {
+    /// Signed flow, m³/s.
+    #[getter]
+    fn flow(&self) -> f64 {
+        self.inner.flow
+    }
+    /// The head solved for, m.
+    #[getter]
+    fn head(&self) -> f64 {
+        self.inner.head
+    }
+    /// d(required head)/dQ at the solution, s/m².
+    #[getter]
+    fn drequired_head_dflow(&self) -> f64 {
+        self.inner.drequired_head_dflow
+    }
+    /// Band of the flow, m³/s.
+    #[getter]
+    fn flow_band(&self, py: Python<'_>) -> PyResult<Py<PyBand>> {
+        band(py, &self.inner.flow_band)
+    }
+    /// Solver iterations used.
+    #[getter]
+    fn iterations(&self) -> usize {
+        self.inner.iterations
+    }
+    /// The fields as a dict.
+    fn to_dict<'py>(&self, py: Python<'py>) -> PyResult<Bound<'py, PyDict>> {
+        let d = PyDict::new(py);
+        d.set_item("flow", self.inner.flow)?;
+        d.set_item("head", self.inner.head)?;
+        d.set_item("drequired_head_dflow", self.inner.drequired_head_dflow)?;
+        d.set_item("flow_band", band_dict(py, &self.inner.flow_band)?)?;
+        d.set_item("iterations", self.inner.iterations)?;
+        Ok(d)
+    }
+    fn _repr_html_(&self, py: Python<'_>) -> PyResult<String> {
+        state::html(py, "FlowSolution", &self.to_dict(py)?)
+    }
+    fn __repr__(&self) -> String {
+        let b = &self.inner.flow_band;
+        format!(
+            "FlowSolution(flow={:?}, head={:?}, flow_band=({:?}, {:?}))",
+            self.inner.flow, self.inner.head, b.low, b.high
+        )
+    }
+    fn __reduce__<'py>(
+        slf: &Bound<'py, Self>,
+    ) -> PyResult<(Bound<'py, PyAny>, (Bound<'py, PyBytes>,))> {
+        state::reduce(slf.as_any(), &slf.get().inner)
+    }
+    #[classmethod]
+    fn _from_state(_cls: &Bound<'_, PyType>, state: &[u8]) -> PyResult<Self> {
+        Ok(PyFlowSolution {
+            inner: state::loads(state)?,
+        })
+    }
+}
+
+/// Where a pump curve meets a system curve: ``flow`` (m³/s), ``head`` (m) and their
+/// bands.
+#[pyclass(name = "OperatingPoint", module = "hydrograde._native", frozen, eq)]
+#[derive(Clone, PartialEq)]
+pub struct PyOperatingPoint {
+    /// The core value.
+    pub inner: OperatingPoint,
+}
+
+#[pymethods]
+impl PyOperatingPoint {
+    /// Flow, m³/s.
+    #[getter]
+    fn flow(&self) -> f64 {
+        self.inner.flow
+    }
+    /// Head, m.
+    #[getter]
+    fn head(&self) -> f64 {
+        self.inner.head
+    }
+    /// Band of the flow, m³/s.
+    #[getter]
+    fn flow_band(&self, py: Python<'_>) -> PyResult<Py<PyBand>> {
+        band(py, &self.inner.flow_band)
+    }
+    /// Band of the head, m.
+    #[getter]
+    fn head_band(&self, py: Python<'_>) -> PyResult<Py<PyBand>> {
+        band(py, &self.inner.head_band)
+    }
+    /// The fields as a dict.
+    fn to_dict<'py>(&self, py: Python<'py>) -> PyResult<Bound<'py, PyDict>> {
+        let d = PyDict::new(py);
+        d.set_item("flow", self.inner.flow)?;
+        d.set_item("head", self.inner.head)?;
+        d.set_item("flow_band", band_dict(py, &self.inner.flow_band)?)?;
+        d.set_item("head_band", band_dict(py, &self.inner.head_band)?)?;
+        Ok(d)
+    }
+    fn _repr_html_(&self, py: Python<'_>) -> PyResult<String> {
+        state::html(py, "OperatingPoint", &self.to_dict(py)?)
+    }
+    fn __repr__(&self) -> String {
+        format!(
+            "OperatingPoint(flow={:?}, head={:?})",
+            self.inner.flow, self.inner.head
+        )
+    }
+    fn __reduce__<'py>(
+        slf: &Bound<'py, Self>,
+    ) -> PyResult<(Bound<'py, PyAny>, (Bound<'py, PyBytes>,))> {
+        state::reduce(slf.as_any(), &slf.get().inner)
+    }
+    #[classmethod]
+    fn _from_state(_cls: &Bound<'_, PyType>, state: &[u8]) -> PyResult<Self> {
+        Ok(PyOperatingPoint {
+            inner: state::loads(state)?,
+        })
+    }
+}
+
+/// Flows of parallel branches that need the same head: ``flows`` (m³/s, branch
+/// order), ``head`` (m), ``iterations``.
+#[pyclass(name = "Split", module = "hydrograde._native", frozen, eq)]
+#[derive(Clone, PartialEq)]
+pub struct PySplit {
+    /// The core value.
+    pub inner: Split,
+}
+
+#[pymethods]
+impl PySplit {
+    /// Flow in each branch, m³/s.
+    #[getter]
+    fn flows(&self) -> Vec<f64> {
+        self.inner.flows.clone()
+    }
+    /// The common required head, m.
+    #[getter]
+    fn head(&self) -> f64 {
+        self.inner.head
+    }
+    /// Iterations used.
+    #[getter]
+    fn iterations(&self) -> usize {
+        self.inner.iterations
+    }
+    fn __repr__(&self) -> String {
+        format!(
+            "Split(flows={:?}, head={:?})",
+            self.inner.flows, self.inner.head
+        )
+    }
+    fn __reduce__<'py>(
+        slf: &Bound<'py, Self>,
+    ) -> PyResult<(Bound<'py, PyAny>, (Bound<'py, PyBytes>,))> {
+        state::reduce(slf.as_any(), &slf.get().inner)
+    }
+    #[classmethod]
+    fn _from_state(_cls: &Bound<'_, PyType>, state: &[u8]) -> PyResult<Self> {
+        Ok(PySplit {
+            inner: state::loads(state)?,
+        })
+    }
+}
+
+fn choice_dict<'py>(py: Python<'py>, c: &SizeChoice) -> PyResult<Bound<'py, PyDict>> {
+    let d = crate::sizes::size_dict(py, &c.size)?;
+    d.set_item("velocity", c.velocity)?;
+    d.set_item("pressure_loss", c.pressure_loss)?;
+    d.set_item("pressure_loss_band", band_dict(py, &c.pressure_loss_band)?)?;
+    Ok(d)
+}
+
+/// The answer of :meth:`Line.size`: ``min_inside_diameter`` (m) meeting the limit at the
+/// nominal values; ``standard`` and ``standard_at_band`` (dicts: the standard size, its
+/// velocity in m/s, pressure loss in Pa and band), or None without a table.
+#[pyclass(name = "Sizing", module = "hydrograde._native", frozen, eq)]
+#[derive(Clone, PartialEq)]
+pub struct PySizing {
+    /// The core value.
+    pub inner: Sizing,
+}
+
+#[pymethods]
+impl PySizing {
+    /// The smallest inside diameter that meets the limit at the nominal values, m.
+    #[getter]
+    fn min_inside_diameter(&self) -> f64 {
+        self.inner.min_inside_diameter
+    }
+    /// The smallest standard size meeting the limit at the nominal values.
+    #[getter]
+    fn standard<'py>(&self, py: Python<'py>) -> PyResult<Option<Bound<'py, PyDict>>> {
+        self.inner
+            .standard
+            .as_ref()
+            .map(|c| choice_dict(py, c))
+            .transpose()
+    }
+    /// The smallest standard size still meeting it at the band's unfavourable end.
+    #[getter]
+    fn standard_at_band<'py>(&self, py: Python<'py>) -> PyResult<Option<Bound<'py, PyDict>>> {
+        self.inner
+            .standard_at_band
+            .as_ref()
+            .map(|c| choice_dict(py, c))
+            .transpose()
+    }
+    /// The fields as a dict.
+    fn to_dict<'py>(&self, py: Python<'py>) -> PyResult<Bound<'py, PyDict>> {
+        let d = PyDict::new(py);
+        d.set_item("min_inside_diameter", self.inner.min_inside_diameter)?;
+        d.set_item("standard", self.standard(py)?)?;
+        d.set_item("standard_at_band", self.standard_at_band(py)?)?;
+        Ok(d)
+    }
+    fn __repr__(&self) -> String {
+        let pick = |c: &Option<SizeChoice>| {
+            c.as_ref().map_or("None".to_string(), |c| {
+                format!(
+                    "'{} {} sch {}'",
+                    c.size.table.name(),
+                    c.size.nominal,
+                    c.size.schedule
+                )
+            })
+        };
+        format!(
+            "Sizing(min_inside_diameter={:?}, standard={}, standard_at_band={})",
+            self.inner.min_inside_diameter,
+            pick(&self.inner.standard),
+            pick(&self.inner.standard_at_band)
+        )
+    }
+    fn __reduce__<'py>(
+        slf: &Bound<'py, Self>,
+    ) -> PyResult<(Bound<'py, PyAny>, (Bound<'py, PyBytes>,))> {
+        state::reduce(slf.as_any(), &slf.get().inner)
+    }
+    #[classmethod]
+    fn _from_state(_cls: &Bound<'_, PyType>, state: &[u8]) -> PyResult<Self> {
+        Ok(PySizing {
+            inner: state::loads(state)?,
+        })
+    }
+}

@@ -1,0 +1,286 @@
+//! `hydrograde.Pipe`, `Rise` and `Equipment`: the elements of a line besides fittings.
+
+use crate::arrays;
+use crate::errors::CoreResult;
+use crate::fitting::PyFitting;
+use crate::fluid::PyFluid;
+use crate::section::PySection;
+use crate::state;
+use hydrograde::line::{Element, Equipment, Rating};
+use hydrograde::pipe::Pipe;
+use pyo3::exceptions::PyTypeError;
+use pyo3::prelude::*;
+use pyo3::types::{PyBytes, PyDict, PyType};
+
+/// A straight run: a :class:`Section` (or the inside diameter of a round pipe, m),
+/// ``length`` (m, > 0) and absolute wall ``roughness`` (m, ≥ 0, below half the
+/// hydraulic diameter). Friction from the Darcy–Weisbach equation with the core's
+/// friction factor (Colebrook solved exactly by default).
+#[pyclass(name = "Pipe", module = "hydrograde._native", frozen, eq)]
+#[derive(Clone, PartialEq)]
+pub struct PyPipe {
+    /// The core value.
+    pub inner: Pipe,
+}
+
+#[pymethods]
+impl PyPipe {
+    #[new]
+    fn new(section: &Bound<'_, PyAny>, length: f64, roughness: f64) -> PyResult<Self> {
+        let pipe = if let Ok(s) = section.cast::<PySection>() {
+            Pipe::new(s.get().inner, length, roughness)
+        } else {
+            let d = crate::friction::scalar("section", section)?;
+            Pipe::circular(d, length, roughness)
+        };
+        Ok(PyPipe { inner: pipe.py()? })
+    }
+    /// A run of catalogue wall ``material`` (see :func:`materials`): its typical
+    /// roughness, with the material's low–high range carried into the bands.
+    #[classmethod]
+    fn of_material(
+        _cls: &Bound<'_, PyType>,
+        section: &Bound<'_, PyAny>,
+        length: f64,
+        material: &str,
+    ) -> PyResult<Self> {
+        let s = if let Ok(s) = section.cast::<PySection>() {
+            s.get().inner
+        } else {
+            hydrograde::Section::circle(crate::friction::scalar("section", section)?).py()?
+        };
+        Ok(PyPipe {
+            inner: Pipe::of_material(s, length, material).py()?,
+        })
+    }
+    /// Likely (low, high) roughness, m, when stated (from a catalogue material).
+    #[getter]
+    fn roughness_range(&self) -> Option<(f64, f64)> {
+        self.inner.roughness_range
+    }
+    /// The cross-section.
+    #[getter]
+    fn section(&self) -> PySection {
+        PySection {
+            inner: self.inner.section,
+        }
+    }
+    /// Length, m.
+    #[getter]
+    fn length(&self) -> f64 {
+        self.inner.length
+    }
+    /// Absolute wall roughness, m.
+    #[getter]
+    fn roughness(&self) -> f64 {
+        self.inner.roughness
+    }
+    /// The bore fittings beside it refer their K to (hydraulic diameter), m.
+    #[getter]
+    fn bore(&self) -> f64 {
+        self.inner.bore()
+    }
+    /// Relative roughness ε/D_h.
+    #[getter]
+    fn rel_roughness(&self) -> f64 {
+        self.inner.rel_roughness()
+    }
+    /// Head loss (m of the flowing fluid) at signed volumetric ``flow`` (m³/s) with the
+    /// core's default friction options; ``flow`` may be an array (broadcasts).
+    fn head_loss<'py>(
+        &self,
+        py: Python<'py>,
+        fluid: &PyFluid,
+        flow: &Bound<'py, PyAny>,
+    ) -> PyResult<Bound<'py, PyAny>> {
+        let (p, f) = (&self.inner, &fluid.inner);
+        arrays::map(py, ["flow"], [flow], |[q]| p.head_loss(f, q).map(|r| r.0))
+    }
+    /// The fields as a dict.
+    fn to_dict<'py>(&self, py: Python<'py>) -> PyResult<Bound<'py, PyDict>> {
+        let d = PyDict::new(py);
+        d.set_item("shape", self.inner.section.shape_name())?;
+        d.update(crate::section::dimensions(py, &self.inner.section)?.as_mapping())?;
+        d.set_item("length", self.inner.length)?;
+        d.set_item("roughness", self.inner.roughness)?;
+        d.set_item("rel_roughness", self.inner.rel_roughness())?;
+        Ok(d)
+    }
+    fn _repr_html_(&self, py: Python<'_>) -> PyResult<String> {
+        state::html(py, "Pipe", &self.to_dict(py)?)
+    }
+    fn __repr__(&self, py: Python<'_>) -> PyResult<String> {
+        let section = if let hydrograde::Section::Circle { diameter } = self.inner.section {
+            format!("{diameter:?}")
+        } else {
+            Bound::new(py, self.section())?.repr()?.to_string()
+        };
+        Ok(format!(
+            "Pipe({section}, length={:?}, roughness={:?})",
+            self.inner.length, self.inner.roughness
+        ))
+    }
+    fn __reduce__<'py>(
+        slf: &Bound<'py, Self>,
+    ) -> PyResult<(Bound<'py, PyAny>, (Bound<'py, PyBytes>,))> {
+        state::reduce(slf.as_any(), &slf.get().inner)
+    }
+    #[classmethod]
+    fn _from_state(_cls: &Bound<'_, PyType>, state: &[u8]) -> PyResult<Self> {
+        Ok(PyPipe {
+            inner: state::loads(state)?,
+        })
+    }
+}
+
+/// An elevation change of ``height`` m in the flow direction (negative = a drop).
+#[pyclass(name = "Rise", module = "hydrograde._native", frozen, eq)]
+#[derive(Clone, PartialEq)]
+pub struct PyRise {
+    /// The core element (always `Element::Rise`).
+    pub inner: Element,
+}
+
+#[pymethods]
+impl PyRise {
+    #[new]
+    fn new(height: f64) -> PyResult<Self> {
+        Ok(PyRise {
+            inner: Element::rise(height).py()?,
+        })
+    }
+    /// Height, m (positive up in the flow direction).
+    #[getter]
+    fn height(&self) -> f64 {
+        match self.inner {
+            Element::Rise(h) => h,
+            _ => f64::NAN,
+        }
+    }
+    fn __repr__(&self) -> String {
+        format!("Rise({:?})", self.height())
+    }
+    fn __reduce__<'py>(
+        slf: &Bound<'py, Self>,
+    ) -> PyResult<(Bound<'py, PyAny>, (Bound<'py, PyBytes>,))> {
+        state::reduce(slf.as_any(), &slf.get().inner)
+    }
+    #[classmethod]
+    fn _from_state(_cls: &Bound<'_, PyType>, state: &[u8]) -> PyResult<Self> {
+        match state::loads(state)? {
+            e @ Element::Rise(_) => Ok(PyRise { inner: e }),
+            _ => Err(PyTypeError::new_err("not the state of a Rise")),
+        }
+    }
+}
+
+/// Rated equipment: a component known by its rating rather than its geometry.
+/// :meth:`pressure_drop` scales a rated drop (Pa at a flow, m³/s) with Q|Q| (common
+/// practice for exchangers, filters, meters); :meth:`fixed_k` is a K on a bore (m).
+#[pyclass(name = "Equipment", module = "hydrograde._native", frozen, eq)]
+#[derive(Clone, PartialEq)]
+pub struct PyEquipment {
+    /// The core value.
+    pub inner: Equipment,
+}
+
+#[pymethods]
+impl PyEquipment {
+    /// Equipment of rated pressure ``drop`` (Pa) at flow ``at_flow`` (m³/s).
+    #[classmethod]
+    fn pressure_drop(
+        _cls: &Bound<'_, PyType>,
+        name: &str,
+        drop: f64,
+        at_flow: f64,
+    ) -> PyResult<Self> {
+        Ok(PyEquipment {
+            inner: Equipment::pressure_drop(name, drop, at_flow).py()?,
+        })
+    }
+    /// Equipment of fixed resistance coefficient ``k`` on bore ``diameter`` (m; None =
+    /// the adjoining pipe's).
+    #[classmethod]
+    #[pyo3(signature = (name, k, diameter = None))]
+    fn fixed_k(
+        _cls: &Bound<'_, PyType>,
+        name: &str,
+        k: f64,
+        diameter: Option<f64>,
+    ) -> PyResult<Self> {
+        Ok(PyEquipment {
+            inner: Equipment::fixed_k(name, k, diameter).py()?,
+        })
+    }
+    /// The same equipment with relative half-width ``spread`` of its loss (0.1 = ±10 %).
+    fn with_spread(&self, spread: f64) -> PyResult<Self> {
+        Ok(PyEquipment {
+            inner: self.inner.clone().with_spread(spread).py()?,
+        })
+    }
+    /// The label given.
+    #[getter]
+    fn name(&self) -> &str {
+        &self.inner.name
+    }
+    /// Relative half-width of the likely range of the loss.
+    #[getter]
+    fn spread(&self) -> f64 {
+        self.inner.spread
+    }
+    fn __repr__(&self) -> String {
+        match &self.inner.rating {
+            Rating::PressureDrop { drop, at_flow } => format!(
+                "Equipment.pressure_drop('{}', drop={drop:?}, at_flow={at_flow:?}, spread={:?})",
+                self.inner.name, self.inner.spread
+            ),
+            Rating::FixedK { k, diameter } => format!(
+                "Equipment.fixed_k('{}', k={k:?}, diameter={}, spread={:?})",
+                self.inner.name,
+                diameter.map_or("None".to_string(), |d| format!("{d:?}")),
+                self.inner.spread
+            ),
+        }
+    }
+    fn __reduce__<'py>(
+        slf: &Bound<'py, Self>,
+    ) -> PyResult<(Bound<'py, PyAny>, (Bound<'py, PyBytes>,))> {
+        state::reduce(slf.as_any(), &slf.get().inner)
+    }
+    #[classmethod]
+    fn _from_state(_cls: &Bound<'_, PyType>, state: &[u8]) -> PyResult<Self> {
+        Ok(PyEquipment {
+            inner: state::loads(state)?,
+        })
+    }
+}
+
+/// A core element from a Python Pipe, Fitting, Rise or Equipment.
+pub fn element(obj: &Bound<'_, PyAny>, index: usize) -> PyResult<Element> {
+    if let Ok(p) = obj.cast::<PyPipe>() {
+        return Ok(Element::Pipe(p.get().inner.clone()));
+    }
+    if let Ok(f) = obj.cast::<PyFitting>() {
+        return Ok(Element::Fitting(f.get().inner.clone()));
+    }
+    if let Ok(r) = obj.cast::<PyRise>() {
+        return Ok(r.get().inner.clone());
+    }
+    if let Ok(e) = obj.cast::<PyEquipment>() {
+        return Ok(Element::Equipment(e.get().inner.clone()));
+    }
+    Err(PyTypeError::new_err(format!(
+        "elements[{index}]: expected Pipe, Fitting, Rise or Equipment, got {}",
+        obj.get_type().name()?
+    )))
+}
+
+/// The Python object of a core element.
+pub fn element_object(py: Python<'_>, e: &Element) -> PyResult<Py<PyAny>> {
+    Ok(match e {
+        Element::Pipe(p) => Py::new(py, PyPipe { inner: p.clone() })?.into_any(),
+        Element::Fitting(f) => Py::new(py, PyFitting { inner: f.clone() })?.into_any(),
+        Element::Rise(_) => Py::new(py, PyRise { inner: e.clone() })?.into_any(),
+        Element::Equipment(q) => Py::new(py, PyEquipment { inner: q.clone() })?.into_any(),
+    })
+}

@@ -1,0 +1,78 @@
+//! Standard pipe tables (`hydrograde.pipe_tables`, `pipe_sizes`, `pipe_size`,
+//! `smallest_pipe`).
+
+use crate::errors::CoreResult;
+use hydrograde::sizes::{self, PipeSize, PipeTable};
+use pyo3::prelude::*;
+use pyo3::types::{PyDict, PyList};
+
+/// The dict form of a standard size (diameters and wall in m).
+pub fn size_dict<'py>(py: Python<'py>, s: &PipeSize) -> PyResult<Bound<'py, PyDict>> {
+    let d = PyDict::new(py);
+    d.set_item("table", s.table.name())?;
+    d.set_item("nominal", &s.nominal)?;
+    d.set_item("schedule", &s.schedule)?;
+    d.set_item("outside_diameter", s.outside_diameter)?;
+    d.set_item("wall", s.wall)?;
+    d.set_item("inside_diameter", s.inside_diameter)?;
+    Ok(d)
+}
+
+fn table(name: &str) -> PyResult<PipeTable> {
+    name.parse::<PipeTable>().py()
+}
+
+/// The pipe tables: one dict per table with ``name``, ``source`` and ``schedules``.
+#[pyfunction]
+pub fn pipe_tables(py: Python<'_>) -> PyResult<Bound<'_, PyList>> {
+    let list = PyList::empty(py);
+    for t in PipeTable::ALL {
+        let d = PyDict::new(py);
+        d.set_item("name", t.name())?;
+        d.set_item("source", t.source())?;
+        d.set_item("schedules", t.schedules().to_vec())?;
+        list.append(d)?;
+    }
+    Ok(list)
+}
+
+/// Every size of table ``table`` (``"steel"``, ``"stainless"``, ``"copper"``, ``"pvc"``)
+/// as dicts (m).
+#[pyfunction]
+pub fn pipe_sizes<'py>(py: Python<'py>, table: &str) -> PyResult<Bound<'py, PyList>> {
+    let list = PyList::empty(py);
+    for s in self::table(table)?.sizes() {
+        list.append(size_dict(py, &s)?)?;
+    }
+    Ok(list)
+}
+
+/// The standard size ``nominal`` (as printed, e.g. ``"2"``, ``"1-1/2"``) in
+/// ``schedule`` (e.g. ``"40"``, ``"K"``) of ``table``, as a dict (m).
+#[pyfunction]
+pub fn pipe_size<'py>(
+    py: Python<'py>,
+    table: &str,
+    nominal: &str,
+    schedule: &str,
+) -> PyResult<Bound<'py, PyDict>> {
+    size_dict(
+        py,
+        &sizes::lookup(self::table(table)?, nominal, schedule).py()?,
+    )
+}
+
+/// The smallest size of ``table`` in ``schedule`` whose inside diameter is at least
+/// ``min_inside_diameter`` (m), as a dict.
+#[pyfunction]
+pub fn smallest_pipe<'py>(
+    py: Python<'py>,
+    table: &str,
+    schedule: &str,
+    min_inside_diameter: f64,
+) -> PyResult<Bound<'py, PyDict>> {
+    size_dict(
+        py,
+        &sizes::smallest_at_least(self::table(table)?, schedule, min_inside_diameter).py()?,
+    )
+}

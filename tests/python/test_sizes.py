@@ -1,0 +1,56 @@
+"""Roughness catalogue, pipe tables and sizing from Python."""
+
+from __future__ import annotations
+
+import numpy as np
+import pytest
+
+import hydrograde as hg
+
+
+def test_materials_and_aging():
+    names = [m["name"] for m in hg.materials()]
+    assert "commercial_steel" in names
+    steel = hg.material("commercial_steel")
+    # 0.045 mm for new commercial steel (common practice, from memory).
+    assert steel["typical"] == pytest.approx(4.5e-5, rel=1e-12)
+    assert steel["low"] <= steel["typical"] <= steel["high"]
+    pipe = hg.Pipe.of_material(0.1, 10.0, "commercial_steel")
+    assert (pipe.roughness, pipe.roughness_range) == (steel["typical"], (steel["low"], steel["high"]))
+    # Linear aging, ε(t) = ε₀ + α t (Colebrook & White 1937): exact arithmetic here.
+    out = hg.aged_roughness(1e-4, np.array([1e-5, 2e-5]), 10.0)
+    assert out.tolist() == pytest.approx([2e-4, 3e-4], rel=1e-15)
+    with pytest.raises(hg.UnknownNameError, match="commercial_steel"):
+        hg.material("unobtainium")
+
+
+def test_pipe_tables():
+    tables = {t["name"]: t for t in hg.pipe_tables()}
+    assert set(tables) == {"steel", "stainless", "copper", "pvc"}
+    two = hg.pipe_size("steel", "2", "40")
+    # ASME B36.10M: NPS 2 schedule 40 has a 2.067 in bore (from memory).
+    assert two["inside_diameter"] == pytest.approx(2.067 * 0.0254, rel=1e-12)
+    assert two["inside_diameter"] == pytest.approx(two["outside_diameter"] - 2 * two["wall"], rel=1e-14)
+    assert any(s["nominal"] == "2" for s in hg.pipe_sizes("steel"))
+    smallest = hg.smallest_pipe("steel", "40", 0.05)
+    assert smallest["inside_diameter"] >= 0.05
+    with pytest.raises(hg.UnknownNameError):
+        hg.pipe_size("steel", "2", "999")
+
+
+def test_sizing_meets_the_limit_exactly_at_the_minimum_bore():
+    water = hg.Fluid.water(288.15)
+    line = hg.Line([hg.Pipe.of_material(0.1, 200.0, "commercial_steel"), hg.Fitting.exit()])
+    s = line.size(water, 0.01, max_pressure_loss=5e4, table="steel", schedule="40")
+    at_min = line.with_uniform_diameter(s.min_inside_diameter).evaluate(water, 0.01)
+    assert at_min.pressure_loss == pytest.approx(5e4, rel=1e-9)
+    assert s.standard is not None and s.standard["inside_diameter"] >= s.min_inside_diameter
+    assert s.standard["pressure_loss"] <= 5e4
+    assert s.standard_at_band["pressure_loss_band"]["high"] <= 5e4
+    v = line.size(water, 0.01, max_velocity=2.0)
+    # Continuity: V = 4Q/(πd²) = 2 m/s at the minimum bore (exact).
+    assert 4 * 0.01 / (np.pi * v.min_inside_diameter**2) == pytest.approx(2.0, rel=1e-9)
+    with pytest.raises(hg.InvalidInputError, match="exactly one"):
+        line.size(water, 0.01)
+    with pytest.raises(hg.InvalidInputError, match="both table and schedule"):
+        line.size(water, 0.01, max_velocity=2.0, table="steel")
