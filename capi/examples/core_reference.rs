@@ -460,6 +460,17 @@ fn lines(out: &mut impl Write) -> io::Result<()> {
                     }
                 }
             }
+            for q in [0.0, 1e-6, -2e-4, 2e-3, f64::INFINITY] {
+                let r = line.required_head(&fluid, q).map(|(h, d)| vec![D(h), D(d)]);
+                emit(out, "line_required_head", &[I(sc), I(fi as i64), D(q)], r)?;
+            }
+            for d in [0.06, 0.0] {
+                let r = line
+                    .with_uniform_diameter(d)
+                    .and_then(|u| u.evaluate(&fluid, 2e-3))
+                    .map(|r| vec![D(r.head_loss), D(r.required_head), D(r.head_loss_band.high)]);
+                emit(out, "line_uniform", &[I(sc), I(fi as i64), D(d)], r)?;
+            }
             for head in [0.5, 3.0, 10.0, 40.0, -5.0, f64::INFINITY] {
                 let r = line
                     .flow_for_head(&fluid, head)
@@ -496,6 +507,22 @@ fn materials(out: &mut impl Write) -> io::Result<()> {
             D(v.accuracy),
         ];
         emit(out, "validity", &[I(ci as i64)], Ok(vals))?;
+    }
+    for (ci, c) in Correlation::ALL.iter().enumerate() {
+        for re in [2300.0, 3000.0, 3999.0, 1e5, -1.0] {
+            let o = Options::with_correlation(*c);
+            let r = hydrograde::friction::transition_limits(re, 1e-3, &o)
+                .map(|(l, t)| vec![D(l), D(t)]);
+            emit(out, "transition_limits", &[D(re), D(1e-3), I(ci as i64)], r)?;
+        }
+    }
+    let pq = [0.0, 1e-3, 2e-3, 3e-3];
+    let ph = [30.0, 28.0, 22.0, 12.0];
+    for q in [0.0, 5e-4, 1.5e-3, 3e-3, 4e-3, -1e-3, f64::NAN] {
+        let r = PumpCurve::new(&pq, &ph)
+            .and_then(|p| p.head(q))
+            .map(|(h, d)| vec![D(h), D(d)]);
+        emit(out, "pump_curve_head", &[D(q)], r)?;
     }
     for p in [
         611.213,

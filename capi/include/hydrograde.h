@@ -714,6 +714,23 @@ int32_t hg_correlation_validity(int32_t correlation,
                                 double *accuracy);
 
 /**
+ * The two limits a transitional friction factor lies between, at Reynolds number `re`
+ * and relative roughness `rel_roughness` (as `hg_darcy_factor`): `*laminar` = 64/Re and
+ * `*turbulent` = the correlation's value. The band of a transitional result spans both.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Thread-safe.
+ *
+ * # Safety
+ * The outputs must be NULL or point to writable doubles.
+ */
+int32_t hg_transition_limits(double re,
+                             double rel_roughness,
+                             int32_t correlation,
+                             double *laminar,
+                             double *turbulent);
+
+/**
  * The resistance coefficient K (dimensionless) of the catalogue fitting `name` and its
  * derivative ∂K/∂Re, at Reynolds number `re` (> 0, in `bore`), for the velocity in
  * `bore` (m, > 0), next to a pipe of relative roughness `pipe_rel_roughness`
@@ -1615,6 +1632,61 @@ int32_t hg_line_size(const struct hg_line *line,
                      const char *table,
                      const char *schedule,
                      struct hg_sizing *out);
+
+/**
+ * Required head `*head` (m of the flowing fluid) of `line` for `fluid` at signed flow
+ * `flow` (m³/s) and its derivative `*dhead_dflow` (s/m²): the call a simulator's
+ * Newton loop makes for a whole route. Continuous, with a continuous derivative,
+ * through zero flow and the laminar–turbulent transition.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_INVALID` for a line that cannot be
+ * built; `HG_ERR_NO_SOLUTION` (refused transition, a gas losing over 40 % of its
+ * pressure); `HG_ERR_NULL_POINTER`. Thread-safe (the line is only read).
+ *
+ * # Safety
+ * `line` and `fluid` must be NULL or live handles; the outputs NULL or writable.
+ */
+int32_t hg_line_required_head(const struct hg_line *line,
+                              const struct hg_fluid *fluid,
+                              double flow,
+                              double *head,
+                              double *dhead_dflow);
+
+/**
+ * Head `*head` (m) and slope `*dhead_dflow` (s/m²) of the pump curve through `n` points
+ * (`flows` ≥ 0 strictly increasing, m³/s; `heads` not increasing, m) at `flow` (m³/s,
+ * inside the curve's range), interpolated without overshoot as `hg_line_operating_point`
+ * does.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a flow outside the
+ * curve; `HG_ERR_INVALID` or `HG_ERR_OUT_OF_RANGE` for a bad curve (fewer than 3
+ * points…); `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * `flows` and `heads` must be NULL or valid for `n` doubles; the outputs NULL or
+ * writable.
+ */
+int32_t hg_pump_curve_head(const double *flows,
+                           const double *heads,
+                           size_t n,
+                           double flow,
+                           double *head,
+                           double *dhead_dflow);
+
+/**
+ * Makes a new line, stored in `*out`, equal to `line` with every round pipe set to
+ * inside `diameter` (m, > 0); fittings that follow their pipe's bore follow it too.
+ * Free it with `hg_line_free`; `line` is unchanged.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_INVALID` for a
+ * line that cannot be built; `HG_ERR_NULL_POINTER`. Thread-safe (`line` is only read).
+ *
+ * # Safety
+ * `line` must be NULL or a live handle; `out` NULL or a writable `hg_line *`.
+ */
+int32_t hg_line_with_uniform_diameter(const struct hg_line *line,
+                                      double diameter,
+                                      struct hg_line **out);
 
 /**
  * Absolute roughness of new pipe of the catalogue material `material` (e.g.

@@ -264,6 +264,23 @@ inline validity correlation_validity(int32_t correlation) {
   return v;
 }
 
+/// The laminar and turbulent limits a transitional friction factor lies between.
+inline std::pair<double, double> transition_limits(double re, double rel_roughness,
+                                                   int32_t correlation = HG_CORRELATION_COLEBROOK) {
+  double l = 0.0, t = 0.0;
+  check(hg_transition_limits(re, rel_roughness, correlation, &l, &t));
+  return {l, t};
+}
+
+/// Head (m) and slope (s/m²) of a pump curve through points at a flow (m³/s).
+inline std::pair<double, double> pump_curve_head(const std::vector<double>& flows,
+                                                 const std::vector<double>& heads, double flow) {
+  if (flows.size() != heads.size()) throw error(HG_ERR_INVALID, "heads: length differs from flows'");
+  double h = 0.0, d = 0.0;
+  check(hg_pump_curve_head(flows.data(), heads.data(), flows.size(), flow, &h, &d));
+  return {h, d};
+}
+
 /// Saturation temperature of water (K) at absolute pressure (Pa).
 inline double water_saturation_temperature(double pressure) {
   double t = 0.0;
@@ -562,6 +579,18 @@ class line {
     check(hg_line_element_label(l_, f.get(), flow, index, &out[0], need + 1, &need));
     return out;
   }
+  /// Required head (m) and its derivative (s/m²) at a flow: a simulator's Newton call.
+  head_loss_result required_head(const fluid& f, double flow) const {
+    head_loss_result r{};
+    check(hg_line_required_head(l_, f.get(), flow, &r.head_loss, &r.dhead_dflow));
+    return r;
+  }
+  /// A new line with every round pipe set to one inside diameter (m).
+  line with_uniform_diameter(double diameter) const {
+    hg_line* out = nullptr;
+    check(hg_line_with_uniform_diameter(l_, diameter, &out));
+    return line(out);
+  }
   flow_solution flow_for_head(const fluid& f, double head) const {
     flow_solution s{};
     check(hg_line_flow_for_head(l_, f.get(), head, &s.flow, &s.flow_low, &s.flow_high));
@@ -601,6 +630,7 @@ class line {
   const hg_line* get() const noexcept { return l_; }
 
  private:
+  explicit line(hg_line* l) : l_(l) {}
   hg_line* l_ = nullptr;
 };
 

@@ -101,3 +101,32 @@ pub unsafe extern "C" fn hg_correlation_validity(
         }
     })
 }
+
+/// The two limits a transitional friction factor lies between, at Reynolds number `re`
+/// and relative roughness `rel_roughness` (as `hg_darcy_factor`): `*laminar` = 64/Re and
+/// `*turbulent` = the correlation's value. The band of a transitional result spans both.
+///
+/// Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+/// Thread-safe.
+///
+/// # Safety
+/// The outputs must be NULL or point to writable doubles.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_transition_limits(
+    re: f64,
+    rel_roughness: f64,
+    correlation: i32,
+    laminar: *mut f64,
+    turbulent: *mut f64,
+) -> i32 {
+    guard(|| {
+        ffi::check_outs(&[out_ptr("laminar", laminar), out_ptr("turbulent", turbulent)])?;
+        let opts = hydrograde::friction::Options::with_correlation(self::correlation(correlation)?);
+        let (l, t) = hydrograde::friction::transition_limits(re, rel_roughness, &opts)?;
+        // SAFETY: forwarded contract; checked above.
+        unsafe {
+            put("laminar", laminar, l)?;
+            put("turbulent", turbulent, t)
+        }
+    })
+}

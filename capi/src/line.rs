@@ -30,6 +30,21 @@ impl hg_line {
         self.changed();
     }
 
+    /// A handle holding an already built line (its elements and options are kept, so
+    /// later additions rebuild it as usual).
+    pub(crate) fn from_line(line: Line, roughness_ranges: Vec<(usize, f64, f64)>) -> hg_line {
+        let built = OnceLock::new();
+        let h = hg_line {
+            elements: line.elements().to_vec(),
+            options: line.options().clone(),
+            roughness_ranges,
+            built,
+        };
+        // A fresh OnceLock is empty, so this set cannot fail.
+        let _ = h.built.set(Ok(line));
+        h
+    }
+
     /// Forgets the built line after a change.
     pub(crate) fn changed(&mut self) {
         self.built = OnceLock::new();

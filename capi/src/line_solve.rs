@@ -251,3 +251,100 @@ pub unsafe extern "C" fn hg_line_size(
         unsafe { ffi::write_sized("out", out, &c) }
     })
 }
+
+/// Required head `*head` (m of the flowing fluid) of `line` for `fluid` at signed flow
+/// `flow` (m³/s) and its derivative `*dhead_dflow` (s/m²): the call a simulator's
+/// Newton loop makes for a whole route. Continuous, with a continuous derivative,
+/// through zero flow and the laminar–turbulent transition.
+///
+/// Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_INVALID` for a line that cannot be
+/// built; `HG_ERR_NO_SOLUTION` (refused transition, a gas losing over 40 % of its
+/// pressure); `HG_ERR_NULL_POINTER`. Thread-safe (the line is only read).
+///
+/// # Safety
+/// `line` and `fluid` must be NULL or live handles; the outputs NULL or writable.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_required_head(
+    line: *const hg_line,
+    fluid: *const hg_fluid,
+    flow: f64,
+    head: *mut f64,
+    dhead_dflow: *mut f64,
+) -> i32 {
+    guard(|| {
+        ffi::check_outs(&[out_ptr("head", head), out_ptr("dhead_dflow", dhead_dflow)])?;
+        // SAFETY: forwarded contract.
+        let (l, f) = unsafe { (ffi::handle("line", line)?, ffi::handle("fluid", fluid)?) };
+        let (h, d) = l.line()?.required_head(&f.fluid, flow)?;
+        // SAFETY: forwarded contract; checked above.
+        unsafe {
+            put("head", head, h)?;
+            put("dhead_dflow", dhead_dflow, d)
+        }
+    })
+}
+
+/// Head `*head` (m) and slope `*dhead_dflow` (s/m²) of the pump curve through `n` points
+/// (`flows` ≥ 0 strictly increasing, m³/s; `heads` not increasing, m) at `flow` (m³/s,
+/// inside the curve's range), interpolated without overshoot as `hg_line_operating_point`
+/// does.
+///
+/// Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a flow outside the
+/// curve; `HG_ERR_INVALID` or `HG_ERR_OUT_OF_RANGE` for a bad curve (fewer than 3
+/// points…); `HG_ERR_NULL_POINTER`. Thread-safe.
+///
+/// # Safety
+/// `flows` and `heads` must be NULL or valid for `n` doubles; the outputs NULL or
+/// writable.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_pump_curve_head(
+    flows: *const f64,
+    heads: *const f64,
+    n: usize,
+    flow: f64,
+    head: *mut f64,
+    dhead_dflow: *mut f64,
+) -> i32 {
+    guard(|| {
+        ffi::check_outs(&[out_ptr("head", head), out_ptr("dhead_dflow", dhead_dflow)])?;
+        // SAFETY: forwarded contract.
+        let (q, h) = unsafe {
+            (
+                ffi::slice("flows", flows, n)?,
+                ffi::slice("heads", heads, n)?,
+            )
+        };
+        let (v, d) = PumpCurve::new(q, h)?.head(flow)?;
+        // SAFETY: forwarded contract; checked above.
+        unsafe {
+            put("head", head, v)?;
+            put("dhead_dflow", dhead_dflow, d)
+        }
+    })
+}
+
+/// Makes a new line, stored in `*out`, equal to `line` with every round pipe set to
+/// inside `diameter` (m, > 0); fittings that follow their pipe's bore follow it too.
+/// Free it with `hg_line_free`; `line` is unchanged.
+///
+/// Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_INVALID` for a
+/// line that cannot be built; `HG_ERR_NULL_POINTER`. Thread-safe (`line` is only read).
+///
+/// # Safety
+/// `line` must be NULL or a live handle; `out` NULL or a writable `hg_line *`.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_with_uniform_diameter(
+    line: *const hg_line,
+    diameter: f64,
+    out: *mut *mut hg_line,
+) -> i32 {
+    guard(|| {
+        ffi::check_outs(&[out_ptr("out", out)])?;
+        // SAFETY: forwarded contract.
+        let l = unsafe { ffi::handle("line", line)? };
+        let new = l.line()?.with_uniform_diameter(diameter)?;
+        let handle = Box::new(hg_line::from_line(new, l.roughness_ranges.clone()));
+        // SAFETY: forwarded contract; checked above.
+        unsafe { put("out", out, Box::into_raw(handle)) }
+    })
+}

@@ -44,6 +44,9 @@ static void parse_tok(const char *w, tok *t) {
  * returns (the number of differences). */
 typedef long (*record_fn)(const record *r, int quiet);
 
+/* How many records the calling thread's last for_each_record visited. */
+static __thread long records_seen;
+
 static long for_each_record(const char *path, const char *prefix, record_fn fn, int quiet) {
   FILE *fp = fopen(path, "r");
   if (!fp) {
@@ -53,6 +56,7 @@ static long for_each_record(const char *path, const char *prefix, record_fn fn, 
   static __thread char line[16384];
   static __thread record r;
   long bad = 0;
+  records_seen = 0;
   size_t plen = strlen(prefix);
   while (fgets(line, sizeof line, fp)) {
     if (strncmp(line, prefix, plen) != 0 || strncmp(line, "darcy", 5) == 0) continue;
@@ -73,6 +77,7 @@ static long for_each_record(const char *path, const char *prefix, record_fn fn, 
         parse_tok(w, &r.in[r.nin++]);
       }
     }
+    records_seen++;
     bad += fn(&r, quiet);
   }
   fclose(fp);

@@ -152,6 +152,13 @@ static long check_material_record(const record *r, int quiet) {
     double v[5];
     s = hg_correlation_validity((int32_t)a[0].i, &v[0], &v[1], &v[2], &v[3], &v[4]);
     for (int i = 0; i < 5; i++) got[n++] = tok_d(v[i]);
+  } else if (strcmp(r->tag, "transition_limits") == 0) {
+    s = hg_transition_limits(a[0].d, a[1].d, (int32_t)a[2].i, &x, &y);
+    got[n++] = tok_d(x), got[n++] = tok_d(y);
+  } else if (strcmp(r->tag, "pump_curve_head") == 0) {
+    const double pq[4] = {0.0, 1e-3, 2e-3, 3e-3}, ph[4] = {30.0, 28.0, 22.0, 12.0};
+    s = hg_pump_curve_head(pq, ph, 4, a[0].d, &x, &y);
+    got[n++] = tok_d(x), got[n++] = tok_d(y);
   } else if (strcmp(r->tag, "saturation") == 0) {
     s = hg_water_saturation_temperature(a[0].d, &x);
     got[n++] = tok_d(x);
@@ -169,9 +176,16 @@ static long compare_records(int quiet) {
   const char *tags[] = {"water", "air", "vapour", "convert", "unit_name", "catalogue", "fitting_k",
                         "section", "pipe_head_loss", "reynolds", "duct_flow_state"};
   long bad = 0;
-  for (size_t i = 0; i < sizeof tags / sizeof *tags; i++) bad += for_each_record(ref_path, tags[i], check_record, quiet);
-  const char *mtags[] = {"material_name", "roughness", "pipe_size", "validity", "saturation"};
-  for (size_t i = 0; i < 5; i++) bad += for_each_record(ref_path, mtags[i], check_material_record, quiet);
+  for (size_t i = 0; i < sizeof tags / sizeof *tags; i++) {
+    bad += for_each_record(ref_path, tags[i], check_record, quiet);
+    if (!quiet) CHECK(records_seen > 0, "no reference record for %s", tags[i]);
+  }
+  const char *mtags[] = {"material_name", "roughness", "pipe_size", "validity", "saturation", "transition_limits",
+                          "pump_curve_head"};
+  for (size_t i = 0; i < 7; i++) {
+    bad += for_each_record(ref_path, mtags[i], check_material_record, quiet);
+    if (!quiet) CHECK(records_seen > 0, "no reference record for %s", mtags[i]);
+  }
   return bad;
 }
 
@@ -431,6 +445,16 @@ static int32_t call_duct(const double *a, double *out) {
 }
 
 
+static int32_t call_limits(const double *a, double *out) {
+  double t;
+  return hg_transition_limits(a[0], a[1], 0, out, &t);
+}
+static int32_t call_pump(const double *a, double *out) {
+  const double pq[3] = {0.0, 1e-3, 2e-3}, ph[3] = {30.0, 25.0, 15.0};
+  double d;
+  return hg_pump_curve_head(pq, ph, 3, a[0], out, &d);
+}
+static int32_t call_saturation(const double *a, double *out) { return hg_water_saturation_temperature(a[0], out); }
 static int32_t call_aged(const double *a, double *out) { return hg_roughness_aged(a[0], a[1], a[2], out); }
 static int32_t call_at_least(const double *a, double *out) {
   char nominal[16];
@@ -439,6 +463,9 @@ static int32_t call_at_least(const double *a, double *out) {
 }
 
 static const scalar_case cases[] = {
+    {"hg_transition_limits", call_limits, 2, {3000.0, 1e-3}, {REJ_ALL, REJ_NONFINITE | REJ_NEG}},
+    {"hg_pump_curve_head", call_pump, 1, {1e-3}, {REJ_NONFINITE | REJ_NEG}},
+    {"hg_water_saturation_temperature", call_saturation, 1, {1e5}, {REJ_ALL}},
     {"hg_roughness_aged", call_aged, 3, {1e-4, 1e-5, 20.0}, {REJ_NONFINITE | REJ_NEG, REJ_NONFINITE | REJ_NEG,
                                                               REJ_NONFINITE | REJ_NEG}},
     {"hg_pipe_size_at_least", call_at_least, 1, {0.02}, {REJ_ALL}},
@@ -643,6 +670,18 @@ static void test_bad_pointers_others(void) {
     CHECK(hg_correlation_validity(0, p[0], p[1], p[2], p[3], p[4]) == HG_ERR_NULL_POINTER, "validity NULL %d", k);
   }
   CHECK(hg_correlation_validity(7, &v[0], &v[1], &v[2], &v[3], &v[4]) == HG_ERR_OUT_OF_RANGE && msg_len() > 0, "validity 7");
+  CHECK(hg_transition_limits(3000, 0, 0, NULL, &y) == HG_ERR_NULL_POINTER, "limits NULL");
+  CHECK(hg_transition_limits(3000, 0, 0, &x, NULL) == HG_ERR_NULL_POINTER, "limits NULL");
+  CHECK(hg_transition_limits(NAN, 0, 0, &x, &y) == HG_ERR_NOT_FINITE && msg_len() > 0, "limits NaN");
+  CHECK(hg_transition_limits(3000, 0, 9, &x, &y) == HG_ERR_OUT_OF_RANGE, "limits correlation 9");
+  const double pq[3] = {0.0, 1e-3, 2e-3}, ph[3] = {30.0, 25.0, 15.0};
+  CHECK(hg_pump_curve_head(NULL, ph, 3, 1e-3, &x, &y) == HG_ERR_NULL_POINTER, "pump NULL flows");
+  CHECK(hg_pump_curve_head(pq, NULL, 3, 1e-3, &x, &y) == HG_ERR_NULL_POINTER, "pump NULL heads");
+  CHECK(hg_pump_curve_head(pq, ph, 3, 1e-3, NULL, &y) == HG_ERR_NULL_POINTER, "pump NULL out");
+  CHECK(hg_pump_curve_head(pq, ph, 3, 1e-3, &x, NULL) == HG_ERR_NULL_POINTER, "pump NULL out");
+  CHECK(hg_pump_curve_head(pq, ph, 0, 1e-3, &x, &y) == HG_ERR_INVALID && msg_len() > 0, "pump n 0");
+  CHECK(hg_pump_curve_head(pq, ph, 2, 1e-3, &x, &y) != HG_OK && msg_len() > 0, "pump 2 points");
+  CHECK(hg_pump_curve_head(ph, pq, 3, 1e-3, &x, &y) != HG_OK, "pump flows decreasing");
   CHECK(hg_roughness(NULL, &x, &y, &z) == HG_ERR_NULL_POINTER, "roughness NULL name");
   CHECK(hg_roughness("plastic", NULL, &y, &z) == HG_ERR_NULL_POINTER, "roughness NULL");
   CHECK(hg_roughness("plastic", &x, NULL, &z) == HG_ERR_NULL_POINTER, "roughness NULL");

@@ -193,6 +193,15 @@ static void test_line() {
   CHECK(all.evaluate(wet, 5e-3).warnings & HG_WARN_BELOW_VAPOUR_PRESSURE, "cavitation");
   CHECK(hg::fluid::gas(1.2, 1.8e-5, 293.15, 1e5).props().density == 1.2, "gas");
   CHECK(hg::correlation_validity(HG_CORRELATION_BLASIUS).re_max == 1e5, "Blasius to 1e5 (Blasius 1913)");
+  auto lim = hg::transition_limits(3000.0, 1e-3);
+  CHECK(lim.first == 64.0 / 3000.0 && lim.second > 0.0, "laminar limit 64/Re");  // exact: Hagen–Poiseuille
+  auto ph = hg::pump_curve_head({0.0, 1e-3, 2e-3}, {30.0, 25.0, 15.0}, 1e-3);
+  CHECK(ph.first == 25.0 && ph.second < 0.0, "pump curve through its points");
+  hg::head_loss_result rh = all.required_head(wet, 5e-3);
+  CHECK(rh.dhead_dflow > 0.0 && std::fabs(rh.head_loss - all.evaluate(wet, 5e-3).required_head) <= 1e-12 * rh.head_loss,
+        "required head");
+  hg::line u = all.with_uniform_diameter(0.1);
+  CHECK(u.size() == all.size(), "uniform diameter copy");
   CHECK(std::fabs(hg::water_saturation_temperature(101325.0) - 373.124) < 0.01, "boiling point");  // IAPWS-IF97, from memory
   auto e = thrown([] { hg::line().evaluate(hg::fluid::liquid(1000, 1e-3), 1e-3); });
   CHECK(e.first == HG_ERR_INVALID && !e.second.empty(), e.second.c_str());

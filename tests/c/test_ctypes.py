@@ -146,6 +146,7 @@ TAGS = {
     "pipe_size": "hg_pipe_size",
     "validity": "hg_correlation_validity",
     "saturation": "hg_water_saturation_temperature",
+    "transition_limits": "hg_transition_limits",
 }
 CODES = {"not_finite": 10, "out_of_range": 11, "unknown_name": 12, "invalid": 13, "no_solution": 20}
 OUT_TYPES = {"Double": ctypes.c_double, "Long": ctypes.c_int32, "LongPtr": ctypes.c_ssize_t}

@@ -91,6 +91,19 @@ static long check_line_record(const record *r, int quiet) {
     double g[] = {e.velocity, e.reynolds, e.friction_factor, e.k, e.head_loss, e.dhead_dflow,
                   e.pressure_out, e.warnings, e.head_loss_low, e.head_loss_high};
     memcpy(got, g, sizeof g), ngot = 10;
+  } else if (strcmp(r->tag, "line_required_head") == 0) {
+    s = hg_line_required_head(l, f, r->in[2].d, &got[0], &got[1]), ngot = 2;
+  } else if (strcmp(r->tag, "line_uniform") == 0) {
+    hg_line *u = NULL;
+    s = hg_line_with_uniform_diameter(l, r->in[2].d, &u);
+    if (s == HG_OK) {
+      hg_line_result x;
+      memset(&x, 0, sizeof x);
+      x.struct_size = sizeof x;
+      s = hg_line_evaluate(u, f, 2e-3, &x);
+      got[0] = x.head_loss, got[1] = x.required_head, got[2] = x.head_loss_high, ngot = 3;
+    }
+    hg_line_free(u);
   } else if (strcmp(r->tag, "line_flow_for_head") == 0) {
     s = hg_line_flow_for_head(l, f, r->in[2].d, &got[0], &got[1], &got[2]), ngot = 3;
   } else if (strcmp(r->tag, "line_band_source") == 0) {
@@ -429,6 +442,20 @@ static void test_handles_and_bad_input(void) {
   CHECK(hg_line_element_label(l, f, q, 5, buf, sizeof buf, &need) == HG_ERR_OUT_OF_RANGE, "label index");
   CHECK(hg_line_element_label(NULL, f, q, 0, buf, sizeof buf, &need) == HG_ERR_NULL_POINTER, "label NULL line");
 
+  CHECK(hg_line_required_head(NULL, f, q, &a, &b) == HG_ERR_NULL_POINTER, "required NULL line");
+  CHECK(hg_line_required_head(l, NULL, q, &a, &b) == HG_ERR_NULL_POINTER, "required NULL fluid");
+  CHECK(hg_line_required_head(l, f, q, NULL, &b) == HG_ERR_NULL_POINTER, "required NULL head");
+  CHECK(hg_line_required_head(l, f, q, &a, NULL) == HG_ERR_NULL_POINTER, "required NULL slope");
+  CHECK(hg_line_required_head(l, f, -INFINITY, &a, &b) == HG_ERR_NOT_FINITE && msg_len() > 0, "required -inf");
+  hg_line *u = NULL;
+  CHECK(hg_line_with_uniform_diameter(NULL, 0.05, &u) == HG_ERR_NULL_POINTER && u == NULL, "uniform NULL line");
+  CHECK(hg_line_with_uniform_diameter(l, 0.05, NULL) == HG_ERR_NULL_POINTER, "uniform NULL out");
+  CHECK(hg_line_with_uniform_diameter(l, -0.05, &u) == HG_ERR_OUT_OF_RANGE && u == NULL && msg_len() > 0, "uniform -d");
+  CHECK(hg_line_with_uniform_diameter(l, NAN, &u) == HG_ERR_NOT_FINITE && u == NULL, "uniform NaN");
+  CHECK(hg_line_with_uniform_diameter(l, 0.08, &u) == HG_OK && u != NULL, "uniform");
+  CHECK(hg_line_add_rise(u, 1.0) == HG_OK && hg_line_count(u, &n) == HG_OK && n == 3, "the copy grows on its own");
+  CHECK(hg_line_count(l, &n) == HG_OK && n == 2, "the original is unchanged");
+  hg_line_free(u);
   CHECK(hg_line_flow_for_head(NULL, f, 1, &a, &b, &c) == HG_ERR_NULL_POINTER, "solve NULL line");
   CHECK(hg_line_flow_for_head(l, NULL, 1, &a, &b, &c) == HG_ERR_NULL_POINTER, "solve NULL fluid");
   CHECK(hg_line_flow_for_head(l, f, 1, NULL, &b, &c) == HG_ERR_NULL_POINTER, "solve NULL flow");
@@ -476,6 +503,13 @@ int main(int argc, char **argv) {
   CHECK(hg_fluid_gas(1.2, 1.8e-5, 293.15, 101325.0, &gas) == HG_OK, "gas");
   CHECK(hg_fluid_with_uncertainty(gas, 0.01, 0.02, &fluids[2]) == HG_OK, "gas with uncertainty");
   hg_fluid_free(gas);
+  const char *tags[] = {"line_eval", "line_element", "line_band_source", "line_required_head", "line_uniform",
+                        "line_flow_for_head", "line_system_curve", "line_operating_point", "line_split_flow",
+                        "line_size"};
+  for (size_t i = 0; i < sizeof tags / sizeof *tags; i++) {
+    for_each_record(ref_path, tags[i], check_line_record, 1);
+    CHECK(records_seen > 0, "no reference record for %s", tags[i]);
+  }
   long bad = for_each_record(ref_path, "line_", check_line_record, 0);
   bad += for_each_record(ref_path, "line_operating_point", check_solve_record, 0);
   bad += for_each_record(ref_path, "line_s", check_solve_record, 0);
