@@ -206,7 +206,56 @@ fn duct() -> Result<()> {
     Ok(())
 }
 
+/// The demo's key results, one `name value` line each with every digit (`{:?}` prints
+/// the shortest string that reads back to the same double), for the cross-language test
+/// that the Python and C demos give the same numbers.
+fn numbers() -> Result<()> {
+    let water = Fluid::water(285.15, 101_325.0)?;
+    let line = orchard_line()?;
+    let r = line.evaluate(&water, 6.0e-3)?;
+    let pump_q = [0.0, 2.0, 4.0, 6.0, 8.0, 10.0].map(|q| q * 1e-3);
+    let pump = PumpCurve::new(&pump_q, &[78.0, 77.0, 74.0, 68.5, 60.0, 47.0])?;
+    let op = line.operating_point(&water, &pump)?;
+    let back = line.flow_for_head(&water, 0.0)?;
+    let s = line.size(
+        &water,
+        6.0e-3,
+        Limit::Velocity(2.0),
+        Some((PipeTable::Pvc, "40")),
+    )?;
+    let air = Fluid::air(303.15, 101_325.0)?;
+    let d = duct_line()?.evaluate(&air, 0.9)?;
+    let rows = [
+        ("orchard_required_head", r.required_head),
+        ("orchard_required_head_low", r.required_head_band.low),
+        ("orchard_required_head_high", r.required_head_band.high),
+        ("orchard_pressure_loss", r.pressure_loss),
+        ("orchard_operating_flow", op.flow),
+        ("orchard_operating_head", op.head),
+        ("orchard_gravity_flow", back.flow),
+        ("orchard_min_inside_diameter", s.min_inside_diameter),
+        (
+            "orchard_standard_inside_diameter",
+            s.standard.map_or(f64::NAN, |c| c.size.inside_diameter),
+        ),
+        ("duct_pressure_loss", d.pressure_loss),
+        ("duct_pressure_loss_low", d.pressure_loss_band.low),
+        ("duct_pressure_loss_high", d.pressure_loss_band.high),
+    ];
+    for (name, v) in rows {
+        println!("{name} {v:?}");
+    }
+    Ok(())
+}
+
 fn main() {
+    if std::env::args().any(|a| a == "--numbers") {
+        if let Err(e) = numbers() {
+            eprintln!("error: {e}");
+            std::process::exit(1);
+        }
+        return;
+    }
     println!(
         "hydrograde {} demo: invented scenarios, engineering estimates with k = 2 bands.",
         hydrograde::VERSION
