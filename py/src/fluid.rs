@@ -3,25 +3,10 @@
 use crate::arrays;
 use crate::errors::CoreResult;
 use crate::state;
-use hydrograde::fluid::{self as core, Fluid, Origin, Phase};
+use hydrograde::fluid::{self as core, Fluid};
 use hydrograde::units::ATMOSPHERE;
 use pyo3::prelude::*;
 use pyo3::types::{PyBytes, PyDict, PyType};
-
-fn phase_name(p: Phase) -> &'static str {
-    match p {
-        Phase::Liquid => "liquid",
-        Phase::Gas => "gas",
-    }
-}
-
-fn origin_name(o: Origin) -> &'static str {
-    match o {
-        Origin::User => "user",
-        Origin::Water => "water",
-        Origin::Air => "air",
-    }
-}
 
 /// A fluid: density (kg/m³), dynamic viscosity (Pa·s), phase, and the relative standard
 /// uncertainties (k = 1) of density and viscosity used by the uncertainty bands.
@@ -125,7 +110,7 @@ impl PyFluid {
     /// "liquid" or "gas".
     #[getter]
     fn phase(&self) -> &'static str {
-        phase_name(self.inner.phase)
+        self.inner.phase.name()
     }
     /// Vapour pressure, Pa, where known (else None).
     #[getter]
@@ -155,7 +140,7 @@ impl PyFluid {
     /// Where the properties came from: "user", "water" or "air".
     #[getter]
     fn origin(&self) -> &'static str {
-        origin_name(self.inner.origin)
+        self.inner.origin.name()
     }
     /// The fields as a dict of plain Python values.
     fn to_dict<'py>(&self, py: Python<'py>) -> PyResult<Bound<'py, PyDict>> {
