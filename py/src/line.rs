@@ -93,6 +93,16 @@ impl PyLine {
     fn inlet_pressure(&self) -> Option<f64> {
         self.inner.options().inlet_pressure
     }
+    /// True when some element has a loss (otherwise no flow can be solved for).
+    #[getter]
+    fn has_resistance(&self) -> bool {
+        self.inner.has_resistance()
+    }
+    /// True when some fitting stops reverse flow (a check or foot valve).
+    #[getter]
+    fn blocks_reverse_flow(&self) -> bool {
+        self.inner.blocks_reverse_flow()
+    }
     /// The turbulent friction correlation of every pipe.
     #[getter]
     fn correlation(&self) -> &'static str {

@@ -101,6 +101,13 @@ impl PyPipe {
         let dh = arrays::map(py, ["flow"], [flow], |[q]| p.head_loss(f, q).map(|r| r.1))?;
         Ok((h, dh))
     }
+    /// The same run (length, roughness and its range) with a round section of inside
+    /// ``diameter`` (m).
+    fn with_diameter(&self, diameter: f64) -> PyResult<Self> {
+        Ok(PyPipe {
+            inner: self.inner.with_diameter(diameter).py()?,
+        })
+    }
     /// The fields as a dict.
     fn to_dict<'py>(&self, py: Python<'py>) -> PyResult<Bound<'py, PyDict>> {
         let d = PyDict::new(py);

@@ -208,3 +208,18 @@ def test_pipe_head_loss_is_odd_with_an_even_derivative(water):
     assert dh[2] == pytest.approx(slope, rel=1e-12)
     for q, hi, di in zip(flows, h, dh):
         assert pipe.head_loss(water, float(q)) == (hi, di)
+
+
+def test_line_flags_and_pipe_with_diameter(route, water):
+    assert route.has_resistance and not route.blocks_reverse_flow
+    assert not hg.Line([hg.Rise(3.0)]).has_resistance
+    check = hg.Line([hg.Pipe(0.05, 10.0, 0.0), hg.Fitting.named("swing_check_valve")])
+    assert check.blocks_reverse_flow
+    pipe = hg.Pipe.of_material(0.05, 30.0, "commercial_steel")
+    wider = pipe.with_diameter(0.08)
+    assert (wider.bore, wider.length, wider.roughness) == (0.08, 30.0, pipe.roughness)
+    assert wider.roughness_range == pipe.roughness_range
+    # Darcy–Weisbach (exact): a wider bore at the same flow loses less.
+    assert wider.head_loss(water, 3e-3)[0] < pipe.head_loss(water, 3e-3)[0]
+    with pytest.raises(hg.OutOfRangeError, match="diameter"):
+        pipe.with_diameter(0.0)
