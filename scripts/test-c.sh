@@ -94,11 +94,11 @@ run "exported hg_* symbols equal the header's functions" check_exports
 check_coverage() {
   local f missing=0
   for f in $(grep -oE '\bhg_[a-z0-9_]+\(' "$header" | tr -d '(' | sort -u); do
-    grep -q "\b$f\b" tests/c/test_capi.c || { echo "test_capi.c never calls $f"; missing=1; }
+    grep -q "\b$f\b" tests/c/test_capi.c tests/c/test_line.c || { echo "no C test calls $f"; missing=1; }
   done
   return $missing
 }
-run "test_capi.c calls every function of the header" check_coverage
+run "the C tests call every function of the header" check_coverage
 
 # ---- install ----
 rm -rf "$prefix"
@@ -115,20 +115,27 @@ run "compile C test (shared)" gcc -std=c11 "${ccflags[@]}" $cflags tests/c/test_
   $libs -Wl,-rpath,"$prefix/lib" -lpthread -lm
 run "compile C test (static)" gcc -std=c11 "${ccflags[@]}" $cflags tests/c/test_capi.c -o "$out/test_c_static" \
   $static_libs -lpthread -lm
+run "compile C line test (shared)" gcc -std=c11 "${ccflags[@]}" $cflags tests/c/test_line.c -o "$out/test_line" \
+  $libs -Wl,-rpath,"$prefix/lib" -lpthread -lm
+run "compile C line test (static)" gcc -std=c11 "${ccflags[@]}" $cflags tests/c/test_line.c -o "$out/test_line_static" \
+  $static_libs -lpthread -lm
 run "compile C++ test (shared)" g++ -std=c++17 "${ccflags[@]}" $cflags tests/c/test_capi.cpp -o "$out/test_cpp" \
   $libs -Wl,-rpath,"$prefix/lib"
 run "compile C++ test (static)" g++ -std=c++17 "${ccflags[@]}" $cflags tests/c/test_capi.cpp -o "$out/test_cpp_static" \
   $static_libs
 run "C test (shared)" "$out/test_c" "$out/reference.txt" "$version"
 run "C test (static)" "$out/test_c_static" "$out/reference.txt" "$version"
+run "C line test (shared)" "$out/test_line" "$out/reference.txt"
+run "C line test (static)" "$out/test_line_static" "$out/reference.txt"
 run "C++ test (shared)" "$out/test_cpp"
 run "C++ test (static)" "$out/test_cpp_static"
-grep -h -E '^(bitwise|test_capi)' "$log" | sort -u | sed 's/^/    /'
+grep -h -E '^(bitwise|test_)' "$log" | sort -u | sed 's/^/    /'
 
 # rayon's global pool is never joined, so only definite and indirect leaks count.
 vg=(valgrind --quiet --error-exitcode=97 --leak-check=full --errors-for-leak-kinds=definite,indirect
     --show-leak-kinds=definite,indirect)
 run "valgrind: C test, zero errors and leaks" "${vg[@]}" "$out/test_c" "$out/reference.txt" "$version"
+run "valgrind: C line test, zero errors and leaks" "${vg[@]}" "$out/test_line" "$out/reference.txt"
 run "valgrind: C++ test, zero errors and leaks" "${vg[@]}" "$out/test_cpp"
 
 # ---- CMake consumer ----

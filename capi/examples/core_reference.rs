@@ -14,8 +14,11 @@
 use hydrograde::fitting::Fitting;
 use hydrograde::fluid::{Fluid, water_vapour_pressure};
 use hydrograde::friction::{Correlation, Options, Regime, darcy_factor};
+use hydrograde::line::{Element, Equipment, Limit, Line, LineOptions, PumpCurve, split_flow};
 use hydrograde::pipe::Pipe;
+use hydrograde::roughness;
 use hydrograde::section::{Section, TurbulentDiameter};
+use hydrograde::sizes::{self, PipeTable};
 use hydrograde::units;
 use std::io::{self, BufWriter, Write};
 
@@ -29,7 +32,8 @@ enum Tok<'a> {
 fn tok(t: &Tok) -> String {
     match t {
         Tok::D(x) => hex(*x),
-        Tok::S(s) => format!("s:{s}"),
+        // Spaces would split the token: names travel with '~' for ' '.
+        Tok::S(s) => format!("s:{}", s.replace(' ', "~")),
         Tok::I(i) => format!("i:{i}"),
     }
 }
@@ -125,6 +129,8 @@ fn main() -> io::Result<()> {
         }
     }
     others(&mut out)?;
+    materials(&mut out)?;
+    lines(&mut out)?;
     out.flush()
 }
 
@@ -291,6 +297,415 @@ fn others(out: &mut impl Write) -> io::Result<()> {
                     r,
                 )?;
             }
+        }
+    }
+    Ok(())
+}
+
+/// Invented demonstration routes, built the same way by the C tests
+/// (tests/c/test_line.c: `build_scenario`).
+fn scenario(n: i64) -> hydrograde::Result<Line> {
+    let fit = |name: &str| Fitting::named(name).map(Element::Fitting);
+    match n {
+        0 => {
+            // A pump discharge: pipe, elbow, check valve, rise, fixed K, smaller pipe,
+            // strainer rated by its drop.
+            let opts = LineOptions {
+                inlet_pressure: Some(3e5),
+                ..LineOptions::default()
+            };
+            Line::with_options(
+                vec![
+                    Element::Pipe(Pipe::circular(0.05, 30.0, 4.5e-5)?),
+                    fit("elbow_90_standard")?,
+                    fit("swing_check_valve")?,
+                    Element::rise(3.0)?,
+                    Element::Fitting(Fitting::k(0.5)?),
+                    Element::Pipe(Pipe::circular(0.04, 12.0, 1.5e-6)?),
+                    Element::Equipment(Equipment::pressure_drop("strainer", 2e4, 2e-3)?),
+                ],
+                opts,
+            )
+        }
+        1 => {
+            // A rectangular duct falling 2 m with a fixed-K fitting at its own bore.
+            let opts = LineOptions {
+                friction: Options::with_correlation(Correlation::Haaland),
+                ..LineOptions::default()
+            };
+            Line::with_options(
+                vec![
+                    Element::Fitting(Fitting::k(1.5)?.with_diameter(0.15)?),
+                    Element::Pipe(Pipe::new(Section::rectangle(0.2, 0.1)?, 50.0, 1e-4)?),
+                    Element::rise(-2.0)?,
+                ],
+                opts,
+            )
+        }
+        2 => {
+            // A cooling-water run through every kind of fitting, with a catalogue
+            // material, a custom duct, the laminar-equivalent diameter, a bore tolerance,
+            // a widened valve spread and a stated roughness range.
+            let opts = LineOptions {
+                turbulent_diameter: TurbulentDiameter::LaminarEquivalent,
+                uncertainty: hydrograde::band::UncertaintyOptions {
+                    diameter: 0.01,
+                    ..Default::default()
+                },
+                ..LineOptions::default()
+            };
+            let mut line = Line::with_options(
+                vec![
+                    Element::Fitting(Fitting::entrance_rounded(0.1)?),
+                    Element::Pipe(Pipe::of_material(
+                        Section::circle(0.1)?,
+                        40.0,
+                        "commercial_steel",
+                    )?),
+                    Element::Fitting(Fitting::bend(90.0, 1.5)?),
+                    Element::Fitting(Fitting::two_k(800.0, 0.25)?),
+                    Element::Fitting(Fitting::three_k(500.0, 0.15, 4.0)?),
+                    Element::Fitting(Fitting::cv(120.0)?.with_k_spread(0.2)?),
+                    Element::Fitting(Fitting::kv(100.0)?),
+                    Element::Fitting(Fitting::equivalent_length(30.0)?),
+                    Element::Fitting(Fitting::expansion(0.1, 0.15)?),
+                    Element::Pipe(Pipe::new(Section::custom(0.0177, 0.48, 62.0)?, 10.0, 1e-4)?),
+                    Element::Fitting(Fitting::contraction(0.15, 0.08)?),
+                    Element::Pipe(Pipe::circular(0.08, 5.0, 1.5e-6)?),
+                    Element::Fitting(Fitting::exit()),
+                    Element::Fitting(Fitting::entrance_projecting()),
+                    Element::Fitting(Fitting::entrance_sharp()),
+                    Element::Pipe(Pipe::new(Section::rectangle(0.12, 0.06)?, 3.0, 5e-5)?),
+                ],
+                opts,
+            )?;
+            line.set_roughness_range(11, 1e-6, 5e-6)?;
+            Ok(line)
+        }
+        _ => Err(hydrograde::Error::invalid("scenario", "unknown")),
+    }
+}
+
+fn lines(out: &mut impl Write) -> io::Result<()> {
+    use Tok::{D, I, S};
+    let fluids = [
+        Fluid::new(998.2, 1.002e-3),
+        Fluid::water(293.15, 2e5),
+        Fluid::gas(1.2, 1.8e-5, 293.15, 101_325.0).and_then(|f| f.with_uncertainty(0.01, 0.02)),
+    ];
+    for sc in 0..3 {
+        let line = scenario(sc).map_err(io::Error::other)?;
+        for (fi, fluid) in fluids.iter().enumerate() {
+            let fluid = fluid.clone().map_err(io::Error::other)?;
+            for q in [0.0, 1e-6, 2e-4, 2e-3, -2e-3, 1e-2, f64::NAN] {
+                let r = line.evaluate(&fluid, q);
+                let totals = r.as_ref().map_err(Clone::clone).map(|r| {
+                    vec![
+                        D(r.head_loss),
+                        D(r.pressure_loss),
+                        D(r.static_head),
+                        D(r.required_head),
+                        D(r.drequired_head_dflow),
+                        D(r.density),
+                        D(r.outlet_pressure.unwrap_or(0.0)),
+                        I(r.warnings.bits() as i64),
+                        I(r.elements.len() as i64),
+                        D(r.head_loss_band.low),
+                        D(r.head_loss_band.high),
+                        D(r.required_head_band.low),
+                        D(r.required_head_band.high),
+                    ]
+                });
+                emit(out, "line_eval", &[I(sc), I(fi as i64), D(q)], totals)?;
+                if let Ok(r) = &r {
+                    let n = r.head_loss_band.contributions.len();
+                    for (i, c) in r.head_loss_band.contributions.iter().enumerate() {
+                        emit(
+                            out,
+                            "line_band_source",
+                            &[I(sc), I(fi as i64), D(q), I(i as i64)],
+                            Ok(vec![S(&c.source), D(c.share)]),
+                        )?;
+                    }
+                    let past = Err(hydrograde::Error::out_of_range(
+                        "index",
+                        n as f64,
+                        "past the end",
+                    ));
+                    emit(
+                        out,
+                        "line_band_source",
+                        &[I(sc), I(fi as i64), D(q), I(n as i64)],
+                        past,
+                    )?;
+                    for (i, e) in r.elements.iter().enumerate() {
+                        let fin = |x: f64| if x.is_finite() { x } else { 0.0 };
+                        emit(
+                            out,
+                            "line_element",
+                            &[I(sc), I(fi as i64), D(q), I(i as i64)],
+                            Ok(vec![
+                                D(fin(e.velocity)),
+                                D(fin(e.reynolds)),
+                                D(fin(e.friction_factor.unwrap_or(0.0))),
+                                D(fin(e.k.unwrap_or(0.0))),
+                                D(e.head_loss),
+                                D(e.dhead_dflow),
+                                D(e.pressure_out.unwrap_or(0.0)),
+                                I(e.warnings.bits() as i64),
+                                D(e.head_loss_band.low),
+                                D(e.head_loss_band.high),
+                            ]),
+                        )?;
+                    }
+                }
+            }
+            for q in [0.0, 1e-6, -2e-4, 2e-3, f64::INFINITY] {
+                let r = line.required_head(&fluid, q).map(|(h, d)| vec![D(h), D(d)]);
+                emit(out, "line_required_head", &[I(sc), I(fi as i64), D(q)], r)?;
+            }
+            for d in [0.06, 0.0] {
+                let r = line
+                    .with_uniform_diameter(d)
+                    .and_then(|u| u.evaluate(&fluid, 2e-3))
+                    .map(|r| vec![D(r.head_loss), D(r.required_head), D(r.head_loss_band.high)]);
+                emit(out, "line_uniform", &[I(sc), I(fi as i64), D(d)], r)?;
+            }
+            for head in [0.5, 3.0, 10.0, 40.0, -5.0, f64::INFINITY] {
+                let r = line
+                    .flow_for_head(&fluid, head)
+                    .map(|s| vec![D(s.flow), D(s.flow_band.low), D(s.flow_band.high)]);
+                emit(
+                    out,
+                    "line_flow_for_head",
+                    &[I(sc), I(fi as i64), D(head)],
+                    r,
+                )?;
+            }
+            if sc == 0 {
+                line_solves(out, &fluid, fi as i64)?;
+            }
+            let flows: Vec<f64> = (0..50).map(|i| -5e-3 + 2.5e-4 * i as f64).collect();
+            let r = line
+                .system_curve(&fluid, &flows)
+                .map(|h| h.into_iter().map(D).collect());
+            emit(out, "line_system_curve", &[I(sc), I(fi as i64)], r)?;
+        }
+    }
+    Ok(())
+}
+
+fn materials(out: &mut impl Write) -> io::Result<()> {
+    use Tok::{D, I, S};
+    for (ci, c) in Correlation::ALL.iter().enumerate() {
+        let v = c.validity();
+        let vals = vec![
+            D(v.re_min),
+            D(v.re_max),
+            D(v.rel_roughness_min),
+            D(v.rel_roughness_max),
+            D(v.accuracy),
+        ];
+        emit(out, "validity", &[I(ci as i64)], Ok(vals))?;
+    }
+    for (ci, c) in Correlation::ALL.iter().enumerate() {
+        for re in [2300.0, 3000.0, 3999.0, 1e5, -1.0] {
+            let o = Options::with_correlation(*c);
+            let r = hydrograde::friction::transition_limits(re, 1e-3, &o)
+                .map(|(l, t)| vec![D(l), D(t)]);
+            emit(out, "transition_limits", &[D(re), D(1e-3), I(ci as i64)], r)?;
+        }
+    }
+    let pq = [0.0, 1e-3, 2e-3, 3e-3];
+    let ph = [30.0, 28.0, 22.0, 12.0];
+    for q in [0.0, 5e-4, 1.5e-3, 3e-3, 4e-3, -1e-3, f64::NAN] {
+        let r = PumpCurve::new(&pq, &ph)
+            .and_then(|p| p.head(q))
+            .map(|(h, d)| vec![D(h), D(d)]);
+        emit(out, "pump_curve_head", &[D(q)], r)?;
+    }
+    for p in [
+        611.213,
+        1e3,
+        101_325.0,
+        1e6,
+        2.2e7,
+        22.064e6,
+        3e7,
+        100.0,
+        f64::NAN,
+    ] {
+        let r = hydrograde::fluid::water_saturation_temperature(p).map(|t| vec![D(t)]);
+        emit(out, "saturation", &[D(p)], r)?;
+    }
+    for (i, n) in roughness::names().iter().enumerate() {
+        emit(out, "material_name", &[I(i as i64)], Ok(vec![S(n)]))?;
+    }
+    for name in roughness::names().into_iter().chain(["unobtainium"]) {
+        let r = roughness::material(name).map(|m| vec![D(m.typical), D(m.low), D(m.high)]);
+        emit(out, "roughness", &[S(name)], r)?;
+    }
+    for (a, b, c) in [
+        (4.5e-5, 1e-5, 20.0),
+        (0.0, 0.0, 0.0),
+        (-1.0, 0.0, 1.0),
+        (1e-4, f64::NAN, 1.0),
+    ] {
+        emit(
+            out,
+            "roughness_aged",
+            &[D(a), D(b), D(c)],
+            roughness::aged(a, b, c).map(|r| vec![D(r)]),
+        )?;
+    }
+    for table in PipeTable::ALL {
+        for &sched in table.schedules() {
+            for nominal in table.nominal_sizes() {
+                let r = sizes::lookup(table, nominal, sched)
+                    .map(|p| vec![D(p.outside_diameter), D(p.wall), D(p.inside_diameter)]);
+                emit(
+                    out,
+                    "pipe_size",
+                    &[S(table.name()), S(nominal), S(sched)],
+                    r,
+                )?;
+            }
+            for d in [0.001, 0.02, 0.05, 0.1, 0.3, 5.0, 0.0] {
+                let r = sizes::smallest_at_least(table, sched, d)
+                    .map(|p| vec![OwnedTok::D(p.inside_diameter), OwnedTok::S(p.nominal)]);
+                emit_owned(
+                    out,
+                    "pipe_size_at_least",
+                    &[S(table.name()), S(sched), D(d)],
+                    r,
+                )?;
+            }
+        }
+        let r = sizes::lookup(table, "37", "40").map(|p| vec![D(p.inside_diameter)]);
+        emit(out, "pipe_size", &[S(table.name()), S("37"), S("40")], r)?;
+    }
+    let r = "cast_iron".parse::<PipeTable>().map(|_| vec![]);
+    emit(out, "pipe_size", &[S("cast_iron"), S("2"), S("40")], r)?;
+    Ok(())
+}
+
+/// A token whose string is owned (for names built at run time).
+enum OwnedTok {
+    D(f64),
+    S(String),
+}
+
+impl Tok<'_> {
+    fn owned(&self) -> OwnedTok {
+        match self {
+            Tok::D(x) => OwnedTok::D(*x),
+            Tok::S(s) => OwnedTok::S(s.to_string()),
+            Tok::I(i) => OwnedTok::D(*i as f64),
+        }
+    }
+}
+
+fn emit_owned(
+    out: &mut impl Write,
+    tag: &str,
+    inputs: &[Tok],
+    result: hydrograde::Result<Vec<OwnedTok>>,
+) -> io::Result<()> {
+    let r = result.map(|v| {
+        v.into_iter()
+            .map(|t| match t {
+                OwnedTok::D(x) => hex(x),
+                OwnedTok::S(s) => format!("s:{s}"),
+            })
+            .collect::<Vec<_>>()
+    });
+    let ins: Vec<String> = inputs.iter().map(tok).collect();
+    let outs = match r {
+        Ok(v) => v.join(" "),
+        Err(e) => format!("!{}", e.kind().name()),
+    };
+    writeln!(out, "{tag} {} | {outs}", ins.join(" "))
+}
+
+/// Solves on the invented scenarios: a pump curve, a parallel pair, sizing.
+fn line_solves(out: &mut impl Write, fluid: &Fluid, fi: i64) -> io::Result<()> {
+    use Tok::{D, I, S};
+    let pump_q = [0.0, 1e-3, 2e-3, 3e-3, 4e-3];
+    for (pi, shut) in [40.0, 20.0, 2.0].into_iter().enumerate() {
+        let pump_h: Vec<f64> = pump_q
+            .iter()
+            .map(|q| shut * (1.0 - (q / 5e-3) * (q / 5e-3)))
+            .collect();
+        let line = scenario(0).map_err(io::Error::other)?;
+        let r = PumpCurve::new(&pump_q, &pump_h)
+            .and_then(|p| line.operating_point(fluid, &p))
+            .map(|o| {
+                vec![
+                    D(o.flow),
+                    D(o.head),
+                    D(o.flow_band.low),
+                    D(o.flow_band.high),
+                    D(o.head_band.low),
+                    D(o.head_band.high),
+                ]
+            });
+        emit(out, "line_operating_point", &[I(0), I(fi), I(pi as i64)], r)?;
+    }
+    let pair = [
+        scenario(0).map_err(io::Error::other)?,
+        scenario(1).map_err(io::Error::other)?,
+    ];
+    for total in [1e-3, 1e-2, -1e-3, f64::NAN] {
+        let r =
+            split_flow(&pair, fluid, total).map(|s| vec![D(s.flows[0]), D(s.flows[1]), D(s.head)]);
+        emit(out, "line_split_flow", &[I(0), I(fi), D(total)], r)?;
+    }
+    let line = scenario(0).map_err(io::Error::other)?;
+    for (li, limit) in [
+        Limit::PressureLoss(5e4),
+        Limit::Velocity(2.0),
+        Limit::PressureLoss(-1.0),
+    ]
+    .into_iter()
+    .enumerate()
+    {
+        for (table, sched) in [
+            (None, ""),
+            (Some(PipeTable::Steel), "40"),
+            (Some(PipeTable::Pvc), "80"),
+        ] {
+            let r = line
+                .size(fluid, 3e-3, limit, table.map(|t| (t, sched)))
+                .map(|sz| {
+                    let mut v = vec![D(sz.min_inside_diameter).owned()];
+                    for c in [&sz.standard, &sz.standard_at_band] {
+                        match c {
+                            Some(c) => v.extend([
+                                OwnedTok::S(c.size.nominal.clone()),
+                                OwnedTok::D(c.size.inside_diameter),
+                                OwnedTok::D(c.velocity),
+                                OwnedTok::D(c.pressure_loss),
+                                OwnedTok::D(c.pressure_loss_band.low),
+                                OwnedTok::D(c.pressure_loss_band.high),
+                            ]),
+                            None => v.push(OwnedTok::S("-".into())),
+                        }
+                    }
+                    v
+                });
+            let tname = table.map_or("-", |t| t.name());
+            emit_owned(
+                out,
+                "line_size",
+                &[
+                    I(0),
+                    I(fi),
+                    I(li as i64),
+                    S(tname),
+                    S(if sched.is_empty() { "-" } else { sched }),
+                ],
+                r,
+            )?;
         }
     }
     Ok(())

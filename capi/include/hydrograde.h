@@ -140,6 +140,62 @@
 #define HG_TRANSITION_REFUSE 2
 
 /**
+ * A straight run (pipe or duct).
+ */
+#define HG_ELEMENT_PIPE 0
+
+/**
+ * A fitting (minor loss).
+ */
+#define HG_ELEMENT_FITTING 1
+
+/**
+ * An elevation change.
+ */
+#define HG_ELEMENT_RISE 2
+
+/**
+ * Rated equipment.
+ */
+#define HG_ELEMENT_EQUIPMENT 3
+
+/**
+ * A sharp-edged entrance from a large space (`r_over_d` must be 0).
+ */
+#define HG_ENTRANCE_SHARP 0
+
+/**
+ * A rounded entrance of radius `r_over_d` times the bore.
+ */
+#define HG_ENTRANCE_ROUNDED 1
+
+/**
+ * A pipe projecting into the space it draws from (`r_over_d` must be 0).
+ */
+#define HG_ENTRANCE_PROJECTING 2
+
+/**
+ * Turbulent flow in non-circular ducts on the hydraulic diameter (default).
+ */
+#define HG_TURBULENT_DIAMETER_HYDRAULIC 0
+
+/**
+ * Turbulent flow in rectangles and annuli on the laminar-equivalent diameter (Jones
+ * 1976; Jones & Leung 1981).
+ */
+#define HG_TURBULENT_DIAMETER_LAMINAR_EQUIVALENT 1
+
+/**
+ * Sizing limit: the line's pressure loss (friction + minor, without rises), Pa.
+ */
+#define HG_LIMIT_PRESSURE_LOSS 0
+
+/**
+ * Sizing limit: the mean velocity in the round pipes, m/s.
+ */
+#define HG_LIMIT_VELOCITY 1
+
+/**
  * Major version of the library (from Cargo.toml; the build fails if they disagree).
  */
 #define HG_VERSION_MAJOR 0
@@ -223,6 +279,21 @@
 #define HG_SECTION_TRIANGLE 4
 
 /**
+ * A fluid for line evaluations: opaque; made by `hg_fluid_water`, `hg_fluid_air` or
+ * `hg_fluid_liquid`, released with `hg_fluid_free`. A fluid never changes after it is
+ * made, so any number of threads may use one at once.
+ */
+typedef struct hg_fluid hg_fluid;
+
+/**
+ * A route of pipes, fittings, rises and equipment in series: opaque. Made by
+ * `hg_line_new`, released by `hg_line_free`. Adding elements or changing options needs
+ * exclusive use of the handle; evaluating only reads it, so several threads may
+ * evaluate one line at once.
+ */
+typedef struct hg_line hg_line;
+
+/**
  * Options of `hg_darcy_factor_opts`. Fill it with `hg_friction_options_default`, then
  * change what you need; `struct_size` must be `sizeof(hg_friction_options)`.
  */
@@ -285,6 +356,275 @@ typedef struct hg_friction {
 } hg_friction;
 
 /**
+ * A line evaluated at one flow. Set `struct_size` to `sizeof(hg_line_result)` before the
+ * call; fields added in later versions go after the existing ones, so an old caller's
+ * smaller struct keeps working. Heads are in m of the flowing fluid. The `*_low` and
+ * `*_high` fields bound the expanded uncertainty (coverage factor k = 2).
+ */
+typedef struct hg_line_result {
+  /**
+   * Size of this struct in bytes, set by the caller.
+   */
+  size_t struct_size;
+  /**
+   * The flow, m³/s (signed).
+   */
+  double flow;
+  /**
+   * Friction plus minor losses, m (signed with the flow).
+   */
+  double head_loss;
+  /**
+   * ρ·g·head_loss, Pa.
+   */
+  double pressure_loss;
+  /**
+   * Sum of the rises, m.
+   */
+  double static_head;
+  /**
+   * head_loss + static_head, m.
+   */
+  double required_head;
+  /**
+   * d(required_head)/dQ, s/m².
+   */
+  double drequired_head_dflow;
+  /**
+   * Density the heads refer to, kg/m³ (the mean density for a gas).
+   */
+  double density;
+  /**
+   * Static pressure at the inlet, Pa absolute (0 when `has_pressures` is 0).
+   */
+  double inlet_pressure;
+  /**
+   * Static pressure at the outlet, Pa absolute (0 when `has_pressures` is 0).
+   */
+  double outlet_pressure;
+  /**
+   * 1 when the inlet pressure is known (set, or the gas's own), else 0.
+   */
+  int32_t has_pressures;
+  /**
+   * Warning bits of the whole line, `HG_WARN_*`.
+   */
+  uint32_t warnings;
+  /**
+   * Number of elements (results by index through `hg_line_element`).
+   */
+  size_t element_count;
+  /**
+   * Lower end of the head-loss band, m.
+   */
+  double head_loss_low;
+  /**
+   * Upper end of the head-loss band, m.
+   */
+  double head_loss_high;
+  /**
+   * Lower end of the pressure-loss band, Pa.
+   */
+  double pressure_loss_low;
+  /**
+   * Upper end of the pressure-loss band, Pa.
+   */
+  double pressure_loss_high;
+  /**
+   * Lower end of the required-head band, m.
+   */
+  double required_head_low;
+  /**
+   * Upper end of the required-head band, m.
+   */
+  double required_head_high;
+} hg_line_result;
+
+/**
+ * One element's share of a line evaluated at one flow. Set `struct_size` to
+ * `sizeof(hg_element_result)` before the call. Quantities an element does not have
+ * (a rise's velocity, a fitting's friction factor) are 0.
+ */
+typedef struct hg_element_result {
+  /**
+   * Size of this struct in bytes, set by the caller.
+   */
+  size_t struct_size;
+  /**
+   * What the element is, `HG_ELEMENT_*`.
+   */
+  int32_t kind;
+  /**
+   * Flow regime of a pipe, `HG_REGIME_*`; -1 for other elements.
+   */
+  int32_t regime;
+  /**
+   * Mean velocity in the element's bore, m/s (signed).
+   */
+  double velocity;
+  /**
+   * Reynolds number in that bore.
+   */
+  double reynolds;
+  /**
+   * Darcy friction factor (pipes).
+   */
+  double friction_factor;
+  /**
+   * Resistance coefficient K at this Reynolds number (fittings, fixed-K equipment).
+   */
+  double k;
+  /**
+   * Head loss, m (signed with the flow; 0 for rises).
+   */
+  double head_loss;
+  /**
+   * d(head loss)/dQ, s/m².
+   */
+  double dhead_dflow;
+  /**
+   * Elevation change, m (rises).
+   */
+  double static_head;
+  /**
+   * Static pressure at the element's outlet, Pa absolute (0 without an inlet pressure).
+   */
+  double pressure_out;
+  /**
+   * Warning bits of this element, `HG_WARN_*`.
+   */
+  uint32_t warnings;
+  /**
+   * 1 when `pressure_out` is known, else 0.
+   */
+  int32_t has_pressure;
+  /**
+   * Lower end of the head-loss band, m.
+   */
+  double head_loss_low;
+  /**
+   * Upper end of the head-loss band, m.
+   */
+  double head_loss_high;
+  /**
+   * Lower end of the friction-factor band (pipes; else 0).
+   */
+  double friction_factor_low;
+  /**
+   * Upper end of the friction-factor band (pipes; else 0).
+   */
+  double friction_factor_high;
+} hg_element_result;
+
+/**
+ * Which uncertainty sources the bands of a line include, and their sizes (relative
+ * standard uncertainties, k = 1). Fill it with `hg_uncertainty_options_default`.
+ */
+typedef struct hg_uncertainty_options {
+  /**
+   * Size of this struct in bytes, set by `hg_uncertainty_options_default`.
+   */
+  size_t struct_size;
+  /**
+   * 1 to include the friction correlation's model uncertainty, else 0.
+   */
+  int32_t friction_model;
+  /**
+   * 1 to include wall roughness, else 0.
+   */
+  int32_t roughness;
+  /**
+   * 1 to include the fluid's density and viscosity uncertainties, else 0.
+   */
+  int32_t fluid;
+  /**
+   * 1 to include fitting K spreads, else 0.
+   */
+  int32_t fittings;
+  /**
+   * 1 to include equipment spreads, else 0.
+   */
+  int32_t equipment;
+  /**
+   * Model uncertainty of turbulent flow in round pipe.
+   */
+  double turbulent_model;
+  /**
+   * Model uncertainty of laminar flow.
+   */
+  double laminar_model;
+  /**
+   * Model uncertainty of turbulent flow in non-circular ducts.
+   */
+  double non_circular_model;
+  /**
+   * Relative uncertainty of roughness where a pipe states no range.
+   */
+  double roughness_default;
+  /**
+   * Relative uncertainty of every bore (manufacturing tolerance).
+   */
+  double diameter;
+} hg_uncertainty_options;
+
+/**
+ * A standard size chosen by `hg_line_size`: zero everywhere when `found` is 0.
+ */
+typedef struct hg_size_choice {
+  /**
+   * 1 when a standard size was found, else 0.
+   */
+  int32_t found;
+  /**
+   * Nominal size as printed, NUL-terminated (e.g. "1-1/2").
+   */
+  char nominal[16];
+  /**
+   * Inside diameter, m.
+   */
+  double inside_diameter;
+  /**
+   * Velocity in it, m/s.
+   */
+  double velocity;
+  /**
+   * Pressure loss of the line with it, Pa.
+   */
+  double pressure_loss;
+  /**
+   * Lower end of the pressure-loss band, Pa.
+   */
+  double pressure_loss_low;
+  /**
+   * Upper end of the pressure-loss band, Pa.
+   */
+  double pressure_loss_high;
+} hg_size_choice;
+
+/**
+ * The answer of `hg_line_size`. Set `struct_size` to `sizeof(hg_sizing)` first.
+ */
+typedef struct hg_sizing {
+  /**
+   * Size of this struct in bytes, set by the caller.
+   */
+  size_t struct_size;
+  /**
+   * The smallest inside diameter that meets the limit at the nominal values, m.
+   */
+  double min_inside_diameter;
+  /**
+   * The smallest standard size that meets it at the nominal values.
+   */
+  struct hg_size_choice standard;
+  /**
+   * The smallest standard size that still meets it at the unfavourable end of the
+   * band (the high end of the pressure-loss band).
+   */
+  struct hg_size_choice standard_at_band;
+} hg_sizing;
+
+/**
  * The state of flow in a straight run at one flow rate. Set `struct_size` to
  * `sizeof(hg_pipe_flow)` before the call.
  */
@@ -327,6 +667,68 @@ typedef struct hg_pipe_flow {
 #ifdef __cplusplus
 extern "C" {
 #endif // __cplusplus
+
+/**
+ * The `HG_CORRELATION_*` value of a correlation name: "colebrook", "haaland",
+ * "swamee_jain", "churchill", "serghides", "blasius", "fully_rough".
+ *
+ * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` (the message lists the known names);
+ * `HG_ERR_NULL_POINTER`; `HG_ERR_INVALID` for a name that is not UTF-8. Thread-safe.
+ *
+ * # Safety
+ * `name` must be NULL or a NUL-terminated string; `correlation` NULL or writable.
+ */
+int32_t hg_correlation_from_name(const char *name,
+                                 int32_t *correlation);
+
+/**
+ * The name of an `HG_CORRELATION_*` value as a static string ("colebrook", …); NULL for
+ * an unknown value. Thread-safe.
+ */
+const char *hg_correlation_name(int32_t correlation);
+
+/**
+ * The name of an `HG_REGIME_*` value as a static string ("laminar", "transitional",
+ * "turbulent"); NULL for an unknown value. Thread-safe.
+ */
+const char *hg_regime_name(int32_t regime);
+
+/**
+ * The published validity range and accuracy of correlation `correlation`
+ * (`HG_CORRELATION_*`): Reynolds numbers `*re_min`…`*re_max`, relative roughness
+ * `*rel_roughness_min`…`*rel_roughness_max`, and `*accuracy`, the published largest
+ * relative deviation from Colebrook inside that range (0 for Colebrook itself). An
+ * unbounded end is +infinity. Outside the range a result carries a warning.
+ *
+ * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` for an unknown correlation;
+ * `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * The outputs must be NULL or point to writable doubles.
+ */
+int32_t hg_correlation_validity(int32_t correlation,
+                                double *re_min,
+                                double *re_max,
+                                double *rel_roughness_min,
+                                double *rel_roughness_max,
+                                double *accuracy);
+
+/**
+ * The two limits a transitional friction factor lies between, at Reynolds number `re`
+ * and relative roughness `rel_roughness` (as `hg_darcy_factor`): `*laminar` = 64/Re and
+ * `*turbulent` = the correlation's value. The band of a transitional result spans both.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Thread-safe.
+ *
+ * # Safety
+ * The outputs must be NULL or point to writable doubles.
+ */
+int32_t hg_transition_limits(double re,
+                             double rel_roughness,
+                             int32_t correlation,
+                             double *laminar,
+                             double *turbulent);
 
 /**
  * The resistance coefficient K (dimensionless) of the catalogue fitting `name` and its
@@ -415,6 +817,133 @@ int32_t hg_air(double temperature,
  */
 int32_t hg_water_vapour_pressure(double temperature,
                                  double *pressure);
+
+/**
+ * Makes liquid water at `temperature` (K) and absolute `pressure` (Pa), as `hg_water`,
+ * with its vapour pressure (for cavitation warnings) and property uncertainties (for the
+ * bands). Stores the handle in `*out`; free it with `hg_fluid_free`.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Thread-safe.
+ *
+ * # Safety
+ * `out` must be NULL or point to a writable `hg_fluid *`.
+ */
+int32_t hg_fluid_water(double temperature,
+                       double pressure,
+                       struct hg_fluid **out);
+
+/**
+ * Makes dry air at `temperature` (K) and absolute `pressure` (Pa), as `hg_air`; lines
+ * evaluated with a gas warn when the pressure loss exceeds 10 % of the inlet pressure.
+ * Stores the handle in `*out`; free it with `hg_fluid_free`.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Thread-safe.
+ *
+ * # Safety
+ * `out` must be NULL or point to a writable `hg_fluid *`.
+ */
+int32_t hg_fluid_air(double temperature,
+                     double pressure,
+                     struct hg_fluid **out);
+
+/**
+ * Makes a liquid of `density` (kg/m³, > 0) and dynamic `viscosity` (Pa·s, > 0), with
+ * no stated uncertainty and no vapour pressure. Stores the handle in `*out`; free it
+ * with `hg_fluid_free`.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Thread-safe.
+ *
+ * # Safety
+ * `out` must be NULL or point to a writable `hg_fluid *`.
+ */
+int32_t hg_fluid_liquid(double density,
+                        double viscosity,
+                        struct hg_fluid **out);
+
+/**
+ * Density (kg/m³) and dynamic viscosity (Pa·s) of a fluid handle.
+ *
+ * Returns `HG_OK` or `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * `fluid` must be NULL or a live handle; the outputs NULL or writable doubles.
+ */
+int32_t hg_fluid_properties(const struct hg_fluid *fluid,
+                            double *density,
+                            double *viscosity);
+
+/**
+ * Releases a fluid made by `hg_fluid_*`. NULL is accepted and ignored. Not thread-safe
+ * with respect to other uses of the same handle.
+ *
+ * # Safety
+ * `fluid` must be NULL or a live handle from `hg_fluid_*`, not used afterwards.
+ */
+void hg_fluid_free(struct hg_fluid *fluid);
+
+/**
+ * Saturation temperature of water (K) at absolute `pressure` (Pa), IAPWS-IF97.
+ *
+ * Valid range: 611.213 Pa ≤ pressure ≤ 22.064 MPa (the critical point).
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Thread-safe.
+ *
+ * # Safety
+ * `temperature` must be NULL or point to a writable double.
+ */
+int32_t hg_water_saturation_temperature(double pressure,
+                                        double *temperature);
+
+/**
+ * Makes a gas of `density` (kg/m³, > 0) and `viscosity` (Pa·s, > 0) stated at
+ * `temperature` (K, > 0) and absolute `pressure` (Pa, > 0); its density follows the
+ * ideal-gas law at other pressures. Free it with `hg_fluid_free`.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Thread-safe.
+ *
+ * # Safety
+ * `out` must be NULL or point to a writable `hg_fluid *`.
+ */
+int32_t hg_fluid_gas(double density,
+                     double viscosity,
+                     double temperature,
+                     double pressure,
+                     struct hg_fluid **out);
+
+/**
+ * Makes a copy of `fluid` with the relative standard uncertainties (k = 1, 0 ≤ u < 1)
+ * of its density `density_rel` and viscosity `viscosity_rel`, for the bands. Free the
+ * new handle with `hg_fluid_free`; `fluid` is unchanged.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Thread-safe.
+ *
+ * # Safety
+ * `fluid` must be NULL or a live handle; `out` NULL or a writable `hg_fluid *`.
+ */
+int32_t hg_fluid_with_uncertainty(const struct hg_fluid *fluid,
+                                  double density_rel,
+                                  double viscosity_rel,
+                                  struct hg_fluid **out);
+
+/**
+ * Makes a copy of `fluid` with its vapour pressure `vapour_pressure` (Pa, ≥ 0) set, for
+ * cavitation warnings. Free the new handle with `hg_fluid_free`; `fluid` is unchanged.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Thread-safe.
+ *
+ * # Safety
+ * `fluid` must be NULL or a live handle; `out` NULL or a writable `hg_fluid *`.
+ */
+int32_t hg_fluid_with_vapour_pressure(const struct hg_fluid *fluid,
+                                      double vapour_pressure,
+                                      struct hg_fluid **out);
 
 /**
  * Fills `opts` with the library's default friction options (Colebrook, regime limits
@@ -511,29 +1040,743 @@ int32_t hg_darcy_factor_batch(const double *re,
                               double *out);
 
 /**
- * The `HG_CORRELATION_*` value of a correlation name: "colebrook", "haaland",
- * "swamee_jain", "churchill", "serghides", "blasius", "fully_rough".
+ * Makes an empty line with the default options and stores it in `*out`; free it with
+ * `hg_line_free`.
  *
- * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` (the message lists the known names);
- * `HG_ERR_NULL_POINTER`; `HG_ERR_INVALID` for a name that is not UTF-8. Thread-safe.
+ * Returns `HG_OK` or `HG_ERR_NULL_POINTER`. Thread-safe.
  *
  * # Safety
- * `name` must be NULL or a NUL-terminated string; `correlation` NULL or writable.
+ * `out` must be NULL or point to a writable `hg_line *`.
  */
-int32_t hg_correlation_from_name(const char *name,
-                                 int32_t *correlation);
+int32_t hg_line_new(struct hg_line **out);
 
 /**
- * The name of an `HG_CORRELATION_*` value as a static string ("colebrook", …); NULL for
- * an unknown value. Thread-safe.
+ * Releases a line. NULL is accepted and ignored.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle from `hg_line_new`, used by no other thread and
+ * not used afterwards.
  */
-const char *hg_correlation_name(int32_t correlation);
+void hg_line_free(struct hg_line *line);
 
 /**
- * The name of an `HG_REGIME_*` value as a static string ("laminar", "transitional",
- * "turbulent"); NULL for an unknown value. Thread-safe.
+ * Appends a round pipe: inside `diameter` (m, > 0), `length` (m, > 0), absolute wall
+ * `roughness` (m, ≥ 0, at most half the diameter).
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
  */
-const char *hg_regime_name(int32_t regime);
+int32_t hg_line_add_pipe(struct hg_line *line,
+                         double diameter,
+                         double length,
+                         double roughness);
+
+/**
+ * Appends a straight duct of section `shape` (`HG_SECTION_*`, dimensions `a`, `b` as
+ * for `hg_section_properties`), `length` (m, > 0) and `roughness` (m, ≥ 0). Fittings
+ * beside it refer to its hydraulic diameter.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_INVALID` for
+ * b ≠ 0 on a one-dimension shape; `HG_ERR_NULL_POINTER`. Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_add_duct(struct hg_line *line,
+                         int32_t shape,
+                         double a,
+                         double b,
+                         double length,
+                         double roughness);
+
+/**
+ * Appends the catalogue fitting `name` (see `hg_fitting_catalogue_name`). Its K refers
+ * to the velocity in `diameter` (m, > 0), or, when `diameter` is 0, in the bore of the
+ * pipe before it (after it when it stands first); a line with no pipe to take it from
+ * fails when evaluated (`HG_ERR_INVALID`).
+ *
+ * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`
+ * for a negative diameter; `HG_ERR_INVALID` (a name not UTF-8, or a diameter given to a
+ * fitting whose bore its geometry fixes); `HG_ERR_NULL_POINTER`. Needs exclusive use of
+ * `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread; `name` NULL or a
+ * NUL-terminated string.
+ */
+int32_t hg_line_add_fitting(struct hg_line *line,
+                            const char *name,
+                            double diameter);
+
+/**
+ * Appends a fitting of fixed resistance coefficient `k` (≥ 0) on the velocity in
+ * `diameter` (m, > 0), or in the adjoining pipe's bore when `diameter` is 0.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_add_fitting_k(struct hg_line *line,
+                              double k,
+                              double diameter);
+
+/**
+ * Appends an elevation change `height` (m; positive up in the flow direction, negative
+ * for a drop).
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_NULL_POINTER`. Needs exclusive use of
+ * `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_add_rise(struct hg_line *line,
+                         double height);
+
+/**
+ * Appends rated equipment labelled `name` with a pressure drop `drop` (Pa, > 0) at the
+ * rating flow `at_flow` (m³/s, > 0), scaled with Q·|Q| at other flows (fixed K).
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_INVALID` for a
+ * label not UTF-8; `HG_ERR_NULL_POINTER`. Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread; `name` NULL or a
+ * NUL-terminated string.
+ */
+int32_t hg_line_add_equipment(struct hg_line *line,
+                              const char *name,
+                              double drop,
+                              double at_flow);
+
+/**
+ * Sets the friction options of every pipe of the line (correlation, regime limits and
+ * transition; the laminar constant is each section's own). See `hg_darcy_factor_opts`.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_INVALID` for a
+ * `struct_size` too small; `HG_ERR_NULL_POINTER`. Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread; `opts` NULL or a
+ * readable `hg_friction_options`.
+ */
+int32_t hg_line_set_friction_options(struct hg_line *line,
+                                     const struct hg_friction_options *opts);
+
+/**
+ * Sets the static pressure at the line's inlet (Pa absolute, > 0), which enables the
+ * outlet pressures and the cavitation and gas checks. 0 clears it.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_set_inlet_pressure(struct hg_line *line,
+                                   double pressure);
+
+/**
+ * The number of elements of the line in `*count`.
+ *
+ * Returns `HG_OK` or `HG_ERR_NULL_POINTER`. Thread-safe for concurrent readers.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle; `count` NULL or writable.
+ */
+int32_t hg_line_count(const struct hg_line *line,
+                      size_t *count);
+
+/**
+ * Evaluates `line` for `fluid` at signed volumetric flow `flow` (m³/s; at inlet
+ * conditions for a gas) into `*out`: head loss, pressure loss, static and required
+ * head with its derivative, pressures, warnings and uncertainty bands.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE` for the flow; `HG_ERR_INVALID` for a line that
+ * cannot be built (no elements, a fitting with no bore to refer to) or a `struct_size`
+ * too small; `HG_ERR_NO_SOLUTION` for transitional flow with `HG_TRANSITION_REFUSE`;
+ * `HG_ERR_OUT_OF_RANGE` for a gas losing more than 40 % of its inlet pressure;
+ * `HG_ERR_NULL_POINTER`. Thread-safe (the line is only read).
+ *
+ * # Safety
+ * `line` and `fluid` must be NULL or live handles; `out` NULL or a writable
+ * `hg_line_result` of `out->struct_size` bytes.
+ */
+int32_t hg_line_evaluate(const struct hg_line *line,
+                         const struct hg_fluid *fluid,
+                         double flow,
+                         struct hg_line_result *out);
+
+/**
+ * The result of element `index` (0-based, route order) of `line` evaluated for `fluid`
+ * at `flow` (m³/s), into `*out` (set `out->struct_size` first).
+ *
+ * Returns as `hg_line_evaluate`, and `HG_ERR_OUT_OF_RANGE` when `index` is not less
+ * than the number of elements. Thread-safe (the line is only read).
+ *
+ * # Safety
+ * As `hg_line_evaluate`, with `out` a writable `hg_element_result`.
+ */
+int32_t hg_line_element(const struct hg_line *line,
+                        const struct hg_fluid *fluid,
+                        double flow,
+                        size_t index,
+                        struct hg_element_result *out);
+
+/**
+ * Copies the label of element `index` ("pipe", "rise", the fitting's or equipment's
+ * name) into `buf` (at most `len - 1` bytes and a NUL) and stores its full length in
+ * `*needed`. The label does not depend on the flow, which is needed only to build the
+ * result: pass any finite flow.
+ *
+ * Returns as `hg_line_element`, and `HG_ERR_BUFFER_TOO_SMALL` when the label did not fit
+ * (the cut copy is still written). Thread-safe (the line is only read).
+ *
+ * # Safety
+ * As `hg_line_evaluate`; `buf` NULL or valid for `len` bytes; `needed` NULL or writable.
+ */
+int32_t hg_line_element_label(const struct hg_line *line,
+                              const struct hg_fluid *fluid,
+                              double flow,
+                              size_t index,
+                              char *buf,
+                              size_t len,
+                              size_t *needed);
+
+/**
+ * The flow `*flow` (m³/s, signed: negative when `head` is below the static head) at
+ * which the line's required head equals `head` (m of the flowing fluid), with the ends
+ * `*flow_low`, `*flow_high` of its uncertainty band (k = 2).
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_INVALID` for a line without any loss or
+ * that cannot be built; `HG_ERR_NO_SOLUTION` when no flow meets the head (e.g. reverse
+ * flow through a check valve); `HG_ERR_NULL_POINTER`. Thread-safe (the line is only
+ * read).
+ *
+ * # Safety
+ * `line` and `fluid` must be NULL or live handles; the outputs NULL or writable.
+ */
+int32_t hg_line_flow_for_head(const struct hg_line *line,
+                              const struct hg_fluid *fluid,
+                              double head,
+                              double *flow,
+                              double *flow_low,
+                              double *flow_high);
+
+/**
+ * The system curve: `heads[i]` = the required head (m) of the line at `flows[i]` (m³/s),
+ * for `n` flows; uses all cores above 4096 points, with the same results.
+ * `heads` may be the `flows` array itself.
+ *
+ * Returns `HG_OK`; the status of the first failing flow (message "element <i>: ..."),
+ * with `heads` unchanged; `HG_ERR_INVALID` for `n` = 0 or a line that cannot be built;
+ * `HG_ERR_NULL_POINTER`. Thread-safe (the line is only read).
+ *
+ * # Safety
+ * `line` and `fluid` must be NULL or live handles; `flows` and `heads` NULL or valid for
+ * `n` doubles.
+ */
+int32_t hg_line_system_curve(const struct hg_line *line,
+                             const struct hg_fluid *fluid,
+                             const double *flows,
+                             size_t n,
+                             double *heads);
+
+/**
+ * Appends a round pipe of the catalogue wall `material` (see `hg_roughness`): inside
+ * `diameter` (m, > 0), `length` (m, > 0); its roughness is the material's typical
+ * value, and the material's range feeds the roughness uncertainty of the bands.
+ *
+ * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`;
+ * `HG_ERR_INVALID` for a name not UTF-8; `HG_ERR_NULL_POINTER`. Needs exclusive use
+ * of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread; `material` NULL or a
+ * NUL-terminated string.
+ */
+int32_t hg_line_add_pipe_material(struct hg_line *line,
+                                  double diameter,
+                                  double length,
+                                  const char *material);
+
+/**
+ * Appends a duct of any shape given by its `area` (m², positive), wetted `perimeter`
+ * (m, at least the circle's of that area) and `laminar_constant` (f·Re on the
+ * hydraulic diameter, positive), with `length` (m, positive) and `roughness` (m, ≥ 0).
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_add_custom_duct(struct hg_line *line,
+                                double area,
+                                double perimeter,
+                                double laminar_constant,
+                                double length,
+                                double roughness);
+
+/**
+ * Appends a sudden expansion from bore `d_in` to bore `d_out` (m, 0 < d_in ≤ d_out):
+ * Borda–Carnot, K on the inlet velocity.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_add_expansion(struct hg_line *line,
+                              double d_in,
+                              double d_out);
+
+/**
+ * Appends a sudden contraction from bore `d_in` to bore `d_out` (m, 0 < d_out ≤ d_in),
+ * K on the outlet velocity.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_add_contraction(struct hg_line *line,
+                                double d_in,
+                                double d_out);
+
+/**
+ * Appends a 2-K fitting (Hooper 1981): K = k1/Re + k_inf·(1 + 1/D_in), D_in the bore in
+ * inches; `k1`, `k_inf` ≥ 0; K on `diameter` (m) or the adjoining pipe's bore when 0.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_add_two_k(struct hg_line *line,
+                          double k1,
+                          double k_inf,
+                          double diameter);
+
+/**
+ * Appends a 3-K fitting (Darby 1999): K = k1/Re + k_inf·(1 + k_d/D_in^0.3), D_in the
+ * bore in inches; constants ≥ 0; K on `diameter` (m) or the adjoining pipe's bore
+ * when 0.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_add_three_k(struct hg_line *line,
+                            double k1,
+                            double k_inf,
+                            double k_d,
+                            double diameter);
+
+/**
+ * Appends a valve of flow coefficient `cv` (US gpm at 1 psi, > 0), whose K refers to
+ * `diameter` (m) or the adjoining pipe's bore when 0.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_add_cv(struct hg_line *line,
+                       double cv,
+                       double diameter);
+
+/**
+ * Appends a valve of flow coefficient `kv` (m³/h at 1 bar, > 0), whose K refers to
+ * `diameter` (m) or the adjoining pipe's bore when 0.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_add_kv(struct hg_line *line,
+                       double kv,
+                       double diameter);
+
+/**
+ * Appends a fitting given as an equivalent length `l_over_d` (L/D, ≥ 0): K = f_T·L/D
+ * with the fully rough factor of the adjoining pipe; on `diameter` (m) or the
+ * adjoining pipe's bore when 0.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_add_equivalent_length(struct hg_line *line,
+                                      double l_over_d,
+                                      double diameter);
+
+/**
+ * Appends a smooth bend of `angle_deg` degrees (0…180) and centreline radius `r_over_d`
+ * times the bore (≥ 0.5), Rennels & Hudson (2012); on `diameter` (m) or the adjoining
+ * pipe's bore when 0.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_add_bend(struct hg_line *line,
+                         double angle_deg,
+                         double r_over_d,
+                         double diameter);
+
+/**
+ * Appends a pipe entrance of kind `kind` (`HG_ENTRANCE_*`); `r_over_d` is the rounding
+ * radius over the bore for `HG_ENTRANCE_ROUNDED` (≥ 0) and must be 0 otherwise.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a bad kind or radius;
+ * `HG_ERR_INVALID` for a radius with another kind; `HG_ERR_NULL_POINTER`. Needs
+ * exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_add_entrance(struct hg_line *line,
+                             int32_t kind,
+                             double r_over_d);
+
+/**
+ * Appends a pipe exit into a large space (K = 1 on the pipe's velocity).
+ *
+ * Returns `HG_OK` or `HG_ERR_NULL_POINTER`. Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_add_exit(struct hg_line *line);
+
+/**
+ * Sets the relative half-width `spread` (0…1, e.g. 0.3 for ±30 %) of the K of the
+ * fitting at `index` (0-based), read by the bands as a rectangular distribution.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a bad spread or an
+ * index that is not a fitting; `HG_ERR_NULL_POINTER`. Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_set_k_spread(struct hg_line *line,
+                             size_t index,
+                             double spread);
+
+/**
+ * States the likely range `low`…`high` (m, 0 ≤ low ≤ high) of the roughness of the pipe
+ * at `index` (0-based), for the roughness uncertainty of the bands (rectangular between
+ * the two). Checked at once when the line can be built (else when it is next
+ * evaluated): an index that is not a pipe gives `HG_ERR_OUT_OF_RANGE`.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_set_roughness_range(struct hg_line *line,
+                                    size_t index,
+                                    double low,
+                                    double high);
+
+/**
+ * Chooses the diameter turbulent flow in non-circular ducts uses (`HG_TURBULENT_DIAMETER_*`).
+ *
+ * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` for an unknown mode; `HG_ERR_NULL_POINTER`.
+ * Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_set_turbulent_diameter(struct hg_line *line,
+                                       int32_t mode);
+
+/**
+ * Fills `opts` with the library's default uncertainty sources and sets its
+ * `struct_size`.
+ *
+ * Returns `HG_OK` or `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * `opts` must be NULL or point to a writable `hg_uncertainty_options`.
+ */
+int32_t hg_uncertainty_options_default(struct hg_uncertainty_options *opts);
+
+/**
+ * Sets the uncertainty sources of the bands of `line` (see `hg_uncertainty_options`).
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a negative size or a
+ * flag other than 0 or 1; `HG_ERR_INVALID` for a `struct_size` too small;
+ * `HG_ERR_NULL_POINTER`. Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread; `opts` NULL or a
+ * readable `hg_uncertainty_options`.
+ */
+int32_t hg_line_set_uncertainty(struct hg_line *line,
+                                const struct hg_uncertainty_options *opts);
+
+/**
+ * Source number `index` (0-based, largest share first) of the head-loss band of `line`
+ * for `fluid` at `flow` (m³/s): its name copied into `buf` (e.g. "friction model",
+ * "roughness", "K of gate_valve (element 2)"; at most `len - 1` bytes and a NUL; full
+ * length in `*needed`) and its share of the variance (0…1) in `*share`. Index 0 is the
+ * input that dominates the band.
+ *
+ * Returns `HG_OK`; the codes of `hg_line_evaluate`; `HG_ERR_OUT_OF_RANGE` when `index`
+ * is past the last source (a band of zero width, as at zero flow, has none);
+ * `HG_ERR_BUFFER_TOO_SMALL` when the name did not fit (the share is still written);
+ * `HG_ERR_NULL_POINTER`. Thread-safe (the line is only read).
+ *
+ * # Safety
+ * `line` and `fluid` must be NULL or live handles; `buf` NULL or valid for `len` bytes;
+ * `needed` and `share` NULL or writable.
+ */
+int32_t hg_line_band_source(const struct hg_line *line,
+                            const struct hg_fluid *fluid,
+                            double flow,
+                            size_t index,
+                            char *buf,
+                            size_t len,
+                            size_t *needed,
+                            double *share);
+
+/**
+ * The flow `*flow` (m³/s) and head `*head` (m) where the pump curve given by `n` points
+ * (`pump_flows` increasing, m³/s; `pump_heads`, m) meets the line's system curve, with
+ * the ends of their uncertainty bands. The pump curve is interpolated smoothly between
+ * its points and not extrapolated.
+ *
+ * Returns `HG_OK`; `HG_ERR_NO_SOLUTION` when the curves do not cross inside the pump
+ * curve's range; `HG_ERR_NOT_FINITE`, `HG_ERR_OUT_OF_RANGE`, `HG_ERR_INVALID` for a bad
+ * pump curve (too few points, flows not increasing) or line; `HG_ERR_NULL_POINTER`.
+ * Thread-safe (the line is only read).
+ *
+ * # Safety
+ * `line` and `fluid` must be NULL or live handles; the arrays NULL or valid for `n`
+ * doubles; the outputs NULL or writable doubles.
+ */
+int32_t hg_line_operating_point(const struct hg_line *line,
+                                const struct hg_fluid *fluid,
+                                const double *pump_flows,
+                                const double *pump_heads,
+                                size_t n,
+                                double *flow,
+                                double *head,
+                                double *flow_low,
+                                double *flow_high,
+                                double *head_low,
+                                double *head_high);
+
+/**
+ * Splits a total flow `total` (m³/s) between `n` lines in parallel so that all need the
+ * same head: `flows[i]` is the flow in `branches[i]` (m³/s) and `*head` the common
+ * required head (m).
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_INVALID` for `n` = 0, a branch without
+ * any loss or that cannot be built; `HG_ERR_NO_SOLUTION`; `HG_ERR_NULL_POINTER` (also
+ * for a NULL branch). Thread-safe (the lines are only read).
+ *
+ * # Safety
+ * `branches` must be NULL or valid for `n` pointers, each NULL or a live handle;
+ * `fluid` NULL or live; `flows` NULL or valid for `n` doubles; `head` NULL or writable.
+ */
+int32_t hg_line_split_flow(const struct hg_line *const *branches,
+                           size_t n,
+                           const struct hg_fluid *fluid,
+                           double total,
+                           double *flows,
+                           double *head);
+
+/**
+ * Sizes the round pipes of `line` (all set to one inside diameter) for `fluid` at flow
+ * `flow` (m³/s, ≠ 0) under the limit `limit` (`HG_LIMIT_*`) of value `limit_value`
+ * (Pa or m/s, > 0); with `table` and `schedule` (as `hg_pipe_size`; both NULL for none)
+ * it also picks the smallest standard size that meets the limit, at the nominal values
+ * and at the band's unfavourable end. The result goes to `*out`.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a zero flow, a limit
+ * ≤ 0 or an unknown `limit`; `HG_ERR_UNKNOWN_NAME` for a table or schedule;
+ * `HG_ERR_INVALID` for a line without round pipes or a `struct_size` too small;
+ * `HG_ERR_NO_SOLUTION` when no bore up to 20 m or no standard size meets the limit;
+ * `HG_ERR_NULL_POINTER`. Thread-safe (the line is only read).
+ *
+ * # Safety
+ * `line` and `fluid` must be NULL or live handles; `table` and `schedule` NULL or
+ * NUL-terminated; `out` NULL or a writable `hg_sizing` of `out->struct_size` bytes.
+ */
+int32_t hg_line_size(const struct hg_line *line,
+                     const struct hg_fluid *fluid,
+                     double flow,
+                     int32_t limit,
+                     double limit_value,
+                     const char *table,
+                     const char *schedule,
+                     struct hg_sizing *out);
+
+/**
+ * Required head `*head` (m of the flowing fluid) of `line` for `fluid` at signed flow
+ * `flow` (m³/s) and its derivative `*dhead_dflow` (s/m²): the call a simulator's
+ * Newton loop makes for a whole route. Continuous, with a continuous derivative,
+ * through zero flow and the laminar–turbulent transition.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_INVALID` for a line that cannot be
+ * built; `HG_ERR_NO_SOLUTION` (refused transition, a gas losing over 40 % of its
+ * pressure); `HG_ERR_NULL_POINTER`. Thread-safe (the line is only read).
+ *
+ * # Safety
+ * `line` and `fluid` must be NULL or live handles; the outputs NULL or writable.
+ */
+int32_t hg_line_required_head(const struct hg_line *line,
+                              const struct hg_fluid *fluid,
+                              double flow,
+                              double *head,
+                              double *dhead_dflow);
+
+/**
+ * Head `*head` (m) and slope `*dhead_dflow` (s/m²) of the pump curve through `n` points
+ * (`flows` ≥ 0 strictly increasing, m³/s; `heads` not increasing, m) at `flow` (m³/s,
+ * inside the curve's range), interpolated without overshoot as `hg_line_operating_point`
+ * does.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a flow outside the
+ * curve; `HG_ERR_INVALID` or `HG_ERR_OUT_OF_RANGE` for a bad curve (fewer than 3
+ * points…); `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * `flows` and `heads` must be NULL or valid for `n` doubles; the outputs NULL or
+ * writable.
+ */
+int32_t hg_pump_curve_head(const double *flows,
+                           const double *heads,
+                           size_t n,
+                           double flow,
+                           double *head,
+                           double *dhead_dflow);
+
+/**
+ * Makes a new line, stored in `*out`, equal to `line` with every round pipe set to
+ * inside `diameter` (m, > 0); fittings that follow their pipe's bore follow it too.
+ * Free it with `hg_line_free`; `line` is unchanged.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_INVALID` for a
+ * line that cannot be built; `HG_ERR_NULL_POINTER`. Thread-safe (`line` is only read).
+ *
+ * # Safety
+ * `line` must be NULL or a live handle; `out` NULL or a writable `hg_line *`.
+ */
+int32_t hg_line_with_uniform_diameter(const struct hg_line *line,
+                                      double diameter,
+                                      struct hg_line **out);
+
+/**
+ * Absolute roughness of new pipe of the catalogue material `material` (e.g.
+ * "commercial_steel"; see `hg_roughness_material_name`): `*typical`, and the quoted
+ * range `*low` to `*high`, all in m (handbook values; common practice).
+ *
+ * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` (the message lists the catalogue);
+ * `HG_ERR_INVALID` for a name not UTF-8; `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * `material` must be NULL or a NUL-terminated string; the outputs NULL or writable.
+ */
+int32_t hg_roughness(const char *material,
+                     double *typical,
+                     double *low,
+                     double *high);
+
+/**
+ * Copies the name of catalogue material number `index` (0-based) into `buf` (at most
+ * `len - 1` bytes and a NUL) and stores its full length in `*needed`.
+ *
+ * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` past the end; `HG_ERR_BUFFER_TOO_SMALL` when
+ * the name did not fit (the cut copy is still written); `HG_ERR_NULL_POINTER` for a NULL
+ * `needed`, or a NULL `buf` with `len` > 0. Thread-safe.
+ *
+ * # Safety
+ * `buf` must be NULL or valid for writing `len` bytes; `needed` NULL or writable.
+ */
+int32_t hg_roughness_material_name(size_t index,
+                                   char *buf,
+                                   size_t len,
+                                   size_t *needed);
+
+/**
+ * Roughness `*roughness` (m) after `years` of service growing linearly from `initial`
+ * (m) at `rate` (m per year): ε = ε₀ + α·t (Colebrook & White 1937 aging model).
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a negative argument;
+ * `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * `roughness` must be NULL or point to a writable double.
+ */
+int32_t hg_roughness_aged(double initial,
+                          double rate,
+                          double years,
+                          double *roughness);
+
+/**
+ * Dimensions of a standard pipe: `table` ("steel" ASME B36.10M, "stainless" ASME
+ * B36.19M, "copper" ASTM B88, "pvc" ASTM D1785), `nominal` size as printed ("2",
+ * "1-1/2", "3/4") and `schedule` or tube type ("40", "STD", "10S", "K"): outside
+ * diameter, wall thickness and inside diameter, all in m.
+ *
+ * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` for a table, size or schedule not listed (the
+ * message lists the known ones); `HG_ERR_INVALID` for a string not UTF-8;
+ * `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * The strings must be NULL or NUL-terminated; the outputs NULL or writable doubles.
+ */
+int32_t hg_pipe_size(const char *table,
+                     const char *nominal,
+                     const char *schedule,
+                     double *outside_diameter,
+                     double *wall,
+                     double *inside_diameter);
+
+/**
+ * The smallest standard pipe of `table` in `schedule` (as `hg_pipe_size`) whose inside
+ * diameter is at least `min_inside_diameter` (m, > 0): its inside diameter in
+ * `*inside_diameter` (m) and its nominal size copied into `nominal` (at most `len - 1`
+ * bytes and a NUL; full length in `*needed`).
+ *
+ * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`
+ * for a diameter ≤ 0 or larger than the table's largest; `HG_ERR_BUFFER_TOO_SMALL`
+ * when the nominal size did not fit (the diameter is still written);
+ * `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * The strings must be NULL or NUL-terminated; `nominal` NULL or valid for `len` bytes;
+ * `needed` and `inside_diameter` NULL or writable.
+ */
+int32_t hg_pipe_size_at_least(const char *table,
+                              const char *schedule,
+                              double min_inside_diameter,
+                              double *inside_diameter,
+                              char *nominal,
+                              size_t len,
+                              size_t *needed);
 
 /**
  * The library version as a static string, e.g. "0.1.0" (never freed; never NULL).

@@ -13,6 +13,7 @@
 #include <cstdint>
 #include <stdexcept>
 #include <string>
+#include <utility>
 #include <vector>
 
 namespace hydrograde {
@@ -105,7 +106,546 @@ inline std::vector<double> darcy_factor(const std::vector<double>& re,
   return out;
 }
 
-//@@MORE@@
+/// Density (kg/m³) and dynamic viscosity (Pa·s) of a fluid state.
+struct properties {
+  double density;
+  double viscosity;
+};
+
+/// Liquid water at temperature (K) and absolute pressure (Pa).
+inline properties water(double temperature, double pressure) {
+  properties p{};
+  check(hg_water(temperature, pressure, &p.density, &p.viscosity));
+  return p;
+}
+
+/// Dry air at temperature (K) and absolute pressure (Pa).
+inline properties air(double temperature, double pressure) {
+  properties p{};
+  check(hg_air(temperature, pressure, &p.density, &p.viscosity));
+  return p;
+}
+
+/// Vapour pressure of water (Pa) at temperature (K).
+inline double water_vapour_pressure(double temperature) {
+  double p = 0.0;
+  check(hg_water_vapour_pressure(temperature, &p));
+  return p;
+}
+
+/// value converted from unit `from` to unit `to` (e.g. "in" to "mm").
+inline double convert(double value, const std::string& from, const std::string& to) {
+  double out = 0.0;
+  check(hg_convert(value, from.c_str(), to.c_str(), &out));
+  return out;
+}
+
+/// Pressure and head of a liquid of `density` (kg/m³) converted into each other.
+inline double convert_head(double value, const std::string& from, const std::string& to,
+                           double density) {
+  double out = 0.0;
+  check(hg_convert_head(value, from.c_str(), to.c_str(), density, &out));
+  return out;
+}
+
+namespace detail {
+template <class F>
+inline std::vector<std::string> names(F get) {
+  std::vector<std::string> out;
+  for (std::size_t i = 0;; ++i) {
+    std::size_t need = 0;
+    int32_t s = get(i, nullptr, 0, &need);
+    if (s == HG_ERR_OUT_OF_RANGE) break;
+    if (s != HG_ERR_BUFFER_TOO_SMALL) check(s);
+    std::string name(need, '\0');
+    check(get(i, &name[0], need + 1, &need));
+    out.push_back(name);
+  }
+  return out;
+}
+}  // namespace detail
+
+/// Every unit name hg_convert accepts.
+inline std::vector<std::string> unit_names() { return detail::names(hg_unit_name); }
+
+/// Every catalogue fitting name.
+inline std::vector<std::string> fitting_catalogue() {
+  return detail::names(hg_fitting_catalogue_name);
+}
+
+/// K and dK/dRe of a catalogue fitting.
+struct fitting_k_result {
+  double k;
+  double dk_dre;
+};
+
+/// K of the catalogue fitting `name` at Reynolds number re in bore (m), beside a pipe of
+/// relative roughness pipe_rel_roughness.
+inline fitting_k_result fitting_k(const std::string& name, double re, double bore,
+                                  double pipe_rel_roughness = 0.0) {
+  fitting_k_result r{};
+  check(hg_fitting_k(name.c_str(), re, bore, pipe_rel_roughness, &r.k, &r.dk_dre));
+  return r;
+}
+
+/// Geometry of a cross-section.
+struct section_geometry {
+  double area;
+  double wetted_perimeter;
+  double hydraulic_diameter;
+  double laminar_constant;
+};
+
+/// Geometry of section `shape` (HG_SECTION_*) with dimensions a, b (m; b = 0 for
+/// one-dimension shapes).
+inline section_geometry section(int32_t shape, double a, double b = 0.0) {
+  section_geometry g{};
+  check(hg_section_properties(shape, a, b, &g.area, &g.wetted_perimeter, &g.hydraulic_diameter,
+                              &g.laminar_constant));
+  return g;
+}
+
+/// Head loss (m) and its derivative (s/m²) of a round pipe at a flow.
+struct head_loss_result {
+  double head_loss;
+  double dhead_dflow;
+};
+
+/// Head loss of a round pipe (diameter, length, roughness in m) for a fluid of density
+/// (kg/m³) and viscosity (Pa·s) at flow (m³/s, signed).
+inline head_loss_result pipe_head_loss(double diameter, double length, double roughness,
+                                       double density, double viscosity, double flow) {
+  head_loss_result r{};
+  check(hg_pipe_head_loss(diameter, length, roughness, density, viscosity, flow, &r.head_loss,
+                          &r.dhead_dflow));
+  return r;
+}
+
+/// Head losses of one pipe at many flows.
+inline std::vector<head_loss_result> pipe_head_loss(double diameter, double length,
+                                                    double roughness, double density,
+                                                    double viscosity,
+                                                    const std::vector<double>& flows) {
+  std::vector<double> h(flows.size()), d(flows.size());
+  std::vector<head_loss_result> out(flows.size());
+  if (flows.empty()) return out;
+  check(hg_pipe_head_loss_batch(diameter, length, roughness, density, viscosity, flows.data(),
+                                flows.size(), h.data(), d.data()));
+  for (std::size_t i = 0; i < flows.size(); ++i) out[i] = {h[i], d[i]};
+  return out;
+}
+
+/// The flow state of a straight duct of any section.
+inline hg_pipe_flow duct_flow_state(int32_t shape, double a, double b, double length,
+                                    double roughness, double density, double viscosity,
+                                    double flow) {
+  hg_pipe_flow r{};
+  r.struct_size = sizeof r;
+  check(hg_duct_flow_state(shape, a, b, length, roughness, density, viscosity, flow, &r));
+  return r;
+}
+
+/// Reynolds number of flow (m³/s) in a round pipe of diameter (m).
+inline double reynolds(double flow, double diameter, double density, double viscosity) {
+  double re = 0.0;
+  check(hg_reynolds(flow, diameter, density, viscosity, &re));
+  return re;
+}
+
+/// Published validity range and accuracy of a correlation (HG_CORRELATION_*).
+struct validity {
+  double re_min, re_max, rel_roughness_min, rel_roughness_max, accuracy;
+};
+
+inline validity correlation_validity(int32_t correlation) {
+  validity v{};
+  check(hg_correlation_validity(correlation, &v.re_min, &v.re_max, &v.rel_roughness_min,
+                                &v.rel_roughness_max, &v.accuracy));
+  return v;
+}
+
+/// The laminar and turbulent limits a transitional friction factor lies between.
+inline std::pair<double, double> transition_limits(double re, double rel_roughness,
+                                                   int32_t correlation = HG_CORRELATION_COLEBROOK) {
+  double l = 0.0, t = 0.0;
+  check(hg_transition_limits(re, rel_roughness, correlation, &l, &t));
+  return {l, t};
+}
+
+/// Head (m) and slope (s/m²) of a pump curve through points at a flow (m³/s).
+inline std::pair<double, double> pump_curve_head(const std::vector<double>& flows,
+                                                 const std::vector<double>& heads, double flow) {
+  if (flows.size() != heads.size()) throw error(HG_ERR_INVALID, "heads: length differs from flows'");
+  double h = 0.0, d = 0.0;
+  check(hg_pump_curve_head(flows.data(), heads.data(), flows.size(), flow, &h, &d));
+  return {h, d};
+}
+
+/// Saturation temperature of water (K) at absolute pressure (Pa).
+inline double water_saturation_temperature(double pressure) {
+  double t = 0.0;
+  check(hg_water_saturation_temperature(pressure, &t));
+  return t;
+}
+
+/// Default uncertainty sources of the bands.
+inline hg_uncertainty_options uncertainty_options() {
+  hg_uncertainty_options o{};
+  check(hg_uncertainty_options_default(&o));
+  return o;
+}
+
+/// Roughness of a catalogue material: typical value and quoted range, m.
+struct roughness_range {
+  double typical;
+  double low;
+  double high;
+};
+
+/// Roughness of new pipe of the catalogue material (e.g. "commercial_steel").
+inline roughness_range roughness(const std::string& material) {
+  roughness_range r{};
+  check(hg_roughness(material.c_str(), &r.typical, &r.low, &r.high));
+  return r;
+}
+
+/// Every catalogue material name.
+inline std::vector<std::string> roughness_materials() {
+  return detail::names(hg_roughness_material_name);
+}
+
+/// Roughness (m) after years of service, growing from initial (m) at rate (m/year).
+inline double roughness_aged(double initial, double rate, double years) {
+  double r = 0.0;
+  check(hg_roughness_aged(initial, rate, years, &r));
+  return r;
+}
+
+/// Dimensions of a standard pipe, m.
+struct pipe_dimensions {
+  double outside_diameter;
+  double wall;
+  double inside_diameter;
+};
+
+/// A standard pipe by table ("steel", "stainless", "copper", "pvc"), nominal size and
+/// schedule as printed.
+inline pipe_dimensions pipe_size(const std::string& table, const std::string& nominal,
+                                 const std::string& schedule) {
+  pipe_dimensions d{};
+  check(hg_pipe_size(table.c_str(), nominal.c_str(), schedule.c_str(), &d.outside_diameter,
+                     &d.wall, &d.inside_diameter));
+  return d;
+}
+
+/// The smallest standard pipe with an inside diameter of at least min_inside_diameter (m):
+/// its nominal size and inside diameter.
+inline std::pair<std::string, double> pipe_size_at_least(const std::string& table,
+                                                         const std::string& schedule,
+                                                         double min_inside_diameter) {
+  double d = 0.0;
+  std::size_t need = 0;
+  int32_t s = hg_pipe_size_at_least(table.c_str(), schedule.c_str(), min_inside_diameter, &d,
+                                    nullptr, 0, &need);
+  if (s != HG_ERR_BUFFER_TOO_SMALL) check(s);
+  std::string nominal(need, '\0');
+  check(hg_pipe_size_at_least(table.c_str(), schedule.c_str(), min_inside_diameter, &d,
+                              &nominal[0], need + 1, &need));
+  return {nominal, d};
+}
+
+/// A fluid for line evaluations (owns an hg_fluid; movable, not copyable).
+class fluid {
+ public:
+  /// Liquid water at temperature (K) and absolute pressure (Pa).
+  static fluid water(double temperature, double pressure) {
+    hg_fluid* f = nullptr;
+    check(hg_fluid_water(temperature, pressure, &f));
+    return fluid(f);
+  }
+  /// Dry air at temperature (K) and absolute pressure (Pa).
+  static fluid air(double temperature, double pressure) {
+    hg_fluid* f = nullptr;
+    check(hg_fluid_air(temperature, pressure, &f));
+    return fluid(f);
+  }
+  /// A liquid of density (kg/m³) and viscosity (Pa·s).
+  static fluid liquid(double density, double viscosity) {
+    hg_fluid* f = nullptr;
+    check(hg_fluid_liquid(density, viscosity, &f));
+    return fluid(f);
+  }
+  /// A gas of density and viscosity stated at temperature (K) and pressure (Pa).
+  static fluid gas(double density, double viscosity, double temperature, double pressure) {
+    hg_fluid* f = nullptr;
+    check(hg_fluid_gas(density, viscosity, temperature, pressure, &f));
+    return fluid(f);
+  }
+  /// A copy with relative standard uncertainties of density and viscosity.
+  fluid with_uncertainty(double density_rel, double viscosity_rel) const {
+    hg_fluid* f = nullptr;
+    check(hg_fluid_with_uncertainty(f_, density_rel, viscosity_rel, &f));
+    return fluid(f);
+  }
+  /// A copy with its vapour pressure (Pa) set.
+  fluid with_vapour_pressure(double vapour_pressure) const {
+    hg_fluid* f = nullptr;
+    check(hg_fluid_with_vapour_pressure(f_, vapour_pressure, &f));
+    return fluid(f);
+  }
+  fluid(fluid&& o) noexcept : f_(o.f_) { o.f_ = nullptr; }
+  fluid& operator=(fluid&& o) noexcept {
+    std::swap(f_, o.f_);
+    return *this;
+  }
+  fluid(const fluid&) = delete;
+  fluid& operator=(const fluid&) = delete;
+  ~fluid() { hg_fluid_free(f_); }
+  /// Density and viscosity.
+  properties props() const {
+    properties p{};
+    check(hg_fluid_properties(f_, &p.density, &p.viscosity));
+    return p;
+  }
+  /// The C handle (still owned by this object).
+  const hg_fluid* get() const noexcept { return f_; }
+
+ private:
+  explicit fluid(hg_fluid* f) : f_(f) {}
+  hg_fluid* f_;
+};
+
+/// The flow that meets a head, with its uncertainty band (m³/s).
+struct flow_solution {
+  double flow;
+  double flow_low;
+  double flow_high;
+};
+
+/// Where a pump curve meets a system curve, with the uncertainty bands.
+struct operating_point {
+  double flow, head, flow_low, flow_high, head_low, head_high;
+};
+
+/// A route of elements in series (owns an hg_line; movable, not copyable). The add_*
+/// methods return *this for chaining.
+class line {
+ public:
+  line() { check(hg_line_new(&l_)); }
+  line(line&& o) noexcept : l_(o.l_) { o.l_ = nullptr; }
+  line& operator=(line&& o) noexcept {
+    std::swap(l_, o.l_);
+    return *this;
+  }
+  line(const line&) = delete;
+  line& operator=(const line&) = delete;
+  ~line() { hg_line_free(l_); }
+
+  line& add_pipe(double diameter, double length, double roughness) {
+    check(hg_line_add_pipe(l_, diameter, length, roughness));
+    return *this;
+  }
+  line& add_duct(int32_t shape, double a, double b, double length, double roughness) {
+    check(hg_line_add_duct(l_, shape, a, b, length, roughness));
+    return *this;
+  }
+  /// A catalogue fitting; diameter 0 = the adjoining pipe's bore.
+  line& add_fitting(const std::string& name, double diameter = 0.0) {
+    check(hg_line_add_fitting(l_, name.c_str(), diameter));
+    return *this;
+  }
+  line& add_fitting_k(double k, double diameter = 0.0) {
+    check(hg_line_add_fitting_k(l_, k, diameter));
+    return *this;
+  }
+  line& add_rise(double height) {
+    check(hg_line_add_rise(l_, height));
+    return *this;
+  }
+  line& add_equipment(const std::string& name, double drop, double at_flow) {
+    check(hg_line_add_equipment(l_, name.c_str(), drop, at_flow));
+    return *this;
+  }
+  line& set_friction_options(const hg_friction_options& o) {
+    check(hg_line_set_friction_options(l_, &o));
+    return *this;
+  }
+  line& add_pipe_material(double diameter, double length, const std::string& material) {
+    check(hg_line_add_pipe_material(l_, diameter, length, material.c_str()));
+    return *this;
+  }
+  line& add_custom_duct(double area, double perimeter, double laminar_constant, double length,
+                        double roughness) {
+    check(hg_line_add_custom_duct(l_, area, perimeter, laminar_constant, length, roughness));
+    return *this;
+  }
+  line& add_expansion(double d_in, double d_out) {
+    check(hg_line_add_expansion(l_, d_in, d_out));
+    return *this;
+  }
+  line& add_contraction(double d_in, double d_out) {
+    check(hg_line_add_contraction(l_, d_in, d_out));
+    return *this;
+  }
+  line& add_two_k(double k1, double k_inf, double diameter = 0.0) {
+    check(hg_line_add_two_k(l_, k1, k_inf, diameter));
+    return *this;
+  }
+  line& add_three_k(double k1, double k_inf, double k_d, double diameter = 0.0) {
+    check(hg_line_add_three_k(l_, k1, k_inf, k_d, diameter));
+    return *this;
+  }
+  line& add_cv(double cv, double diameter = 0.0) {
+    check(hg_line_add_cv(l_, cv, diameter));
+    return *this;
+  }
+  line& add_kv(double kv, double diameter = 0.0) {
+    check(hg_line_add_kv(l_, kv, diameter));
+    return *this;
+  }
+  line& add_equivalent_length(double l_over_d, double diameter = 0.0) {
+    check(hg_line_add_equivalent_length(l_, l_over_d, diameter));
+    return *this;
+  }
+  line& add_bend(double angle_deg, double r_over_d, double diameter = 0.0) {
+    check(hg_line_add_bend(l_, angle_deg, r_over_d, diameter));
+    return *this;
+  }
+  line& add_entrance(int32_t kind, double r_over_d = 0.0) {
+    check(hg_line_add_entrance(l_, kind, r_over_d));
+    return *this;
+  }
+  line& add_exit() {
+    check(hg_line_add_exit(l_));
+    return *this;
+  }
+  line& set_k_spread(std::size_t index, double spread) {
+    check(hg_line_set_k_spread(l_, index, spread));
+    return *this;
+  }
+  line& set_roughness_range(std::size_t index, double low, double high) {
+    check(hg_line_set_roughness_range(l_, index, low, high));
+    return *this;
+  }
+  line& set_turbulent_diameter(int32_t mode) {
+    check(hg_line_set_turbulent_diameter(l_, mode));
+    return *this;
+  }
+  line& set_uncertainty(const hg_uncertainty_options& o) {
+    check(hg_line_set_uncertainty(l_, &o));
+    return *this;
+  }
+  /// The sources of the head-loss band at a flow, largest share first.
+  std::vector<std::pair<std::string, double>> band_sources(const fluid& f, double flow) const {
+    std::vector<std::pair<std::string, double>> out;
+    for (std::size_t i = 0;; ++i) {
+      std::size_t need = 0;
+      double share = 0.0;
+      int32_t s = hg_line_band_source(l_, f.get(), flow, i, nullptr, 0, &need, &share);
+      if (s == HG_ERR_OUT_OF_RANGE) break;
+      if (s != HG_ERR_BUFFER_TOO_SMALL) check(s);
+      std::string name(need, '\0');
+      check(hg_line_band_source(l_, f.get(), flow, i, &name[0], need + 1, &need, &share));
+      out.emplace_back(name, share);
+    }
+    return out;
+  }
+  line& set_inlet_pressure(double pressure) {
+    check(hg_line_set_inlet_pressure(l_, pressure));
+    return *this;
+  }
+  std::size_t size() const {
+    std::size_t n = 0;
+    check(hg_line_count(l_, &n));
+    return n;
+  }
+  hg_line_result evaluate(const fluid& f, double flow) const {
+    hg_line_result r{};
+    r.struct_size = sizeof r;
+    check(hg_line_evaluate(l_, f.get(), flow, &r));
+    return r;
+  }
+  hg_element_result element(const fluid& f, double flow, std::size_t index) const {
+    hg_element_result r{};
+    r.struct_size = sizeof r;
+    check(hg_line_element(l_, f.get(), flow, index, &r));
+    return r;
+  }
+  std::string label(const fluid& f, double flow, std::size_t index) const {
+    std::size_t need = 0;
+    int32_t s = hg_line_element_label(l_, f.get(), flow, index, nullptr, 0, &need);
+    if (s != HG_ERR_BUFFER_TOO_SMALL) check(s);
+    std::string out(need, '\0');
+    check(hg_line_element_label(l_, f.get(), flow, index, &out[0], need + 1, &need));
+    return out;
+  }
+  /// Required head (m) and its derivative (s/m²) at a flow: a simulator's Newton call.
+  head_loss_result required_head(const fluid& f, double flow) const {
+    head_loss_result r{};
+    check(hg_line_required_head(l_, f.get(), flow, &r.head_loss, &r.dhead_dflow));
+    return r;
+  }
+  /// A new line with every round pipe set to one inside diameter (m).
+  line with_uniform_diameter(double diameter) const {
+    hg_line* out = nullptr;
+    check(hg_line_with_uniform_diameter(l_, diameter, &out));
+    return line(out);
+  }
+  flow_solution flow_for_head(const fluid& f, double head) const {
+    flow_solution s{};
+    check(hg_line_flow_for_head(l_, f.get(), head, &s.flow, &s.flow_low, &s.flow_high));
+    return s;
+  }
+  std::vector<double> system_curve(const fluid& f, const std::vector<double>& flows) const {
+    std::vector<double> heads(flows.size());
+    if (flows.empty()) return heads;
+    check(hg_line_system_curve(l_, f.get(), flows.data(), flows.size(), heads.data()));
+    return heads;
+  }
+  /// The operating point of a pump curve given by points (flows increasing, m³/s; heads, m).
+  hydrograde::operating_point operating_point(const fluid& f, const std::vector<double>& pump_flows,
+                                              const std::vector<double>& pump_heads) const {
+    if (pump_flows.size() != pump_heads.size())
+      throw error(HG_ERR_INVALID, "pump_heads: length differs from pump_flows'");
+    hydrograde::operating_point p{};
+    check(hg_line_operating_point(l_, f.get(), pump_flows.data(), pump_heads.data(),
+                                  pump_flows.size(), &p.flow, &p.head, &p.flow_low, &p.flow_high,
+                                  &p.head_low, &p.head_high));
+    return p;
+  }
+  /// Sizes the round pipes for flow under a limit (HG_LIMIT_*), optionally to a standard
+  /// table and schedule (empty strings for none).
+  hg_sizing size(const fluid& f, double flow, int32_t limit, double limit_value,
+                 const std::string& table = "", const std::string& schedule = "") const {
+    hg_sizing z{};
+    z.struct_size = sizeof z;
+    bool none = table.empty() && schedule.empty();
+    check(hg_line_size(l_, f.get(), flow, limit, limit_value, none ? nullptr : table.c_str(),
+                       none ? nullptr : schedule.c_str(), &z));
+    return z;
+  }
+  /// The C handle (still owned by this object).
+  hg_line* get() noexcept { return l_; }
+  /// The C handle (still owned by this object).
+  const hg_line* get() const noexcept { return l_; }
+
+ private:
+  explicit line(hg_line* l) : l_(l) {}
+  hg_line* l_ = nullptr;
+};
+
+/// Splits total (m³/s) between parallel lines so that all need the same head: the flow
+/// of each branch and the common head (m).
+inline std::pair<std::vector<double>, double> split_flow(const std::vector<const line*>& branches,
+                                                         const fluid& f, double total) {
+  std::vector<const hg_line*> b;
+  for (const line* l : branches) b.push_back(l ? l->get() : nullptr);
+  std::vector<double> flows(b.size());
+  double head = 0.0;
+  if (b.empty()) throw error(HG_ERR_INVALID, "branches: need at least one branch");
+  check(hg_line_split_flow(b.data(), b.size(), f.get(), total, flows.data(), &head));
+  return {flows, head};
+}
 
 }  // namespace hydrograde
 

@@ -176,7 +176,7 @@ pub(crate) fn out_ptr<T>(name: &str, p: *mut T) -> (&str, *const u8, usize) {
     (name, p.cast_const().cast(), std::mem::align_of::<T>())
 }
 
-fn check_len<T>(name: &str, p: *const T, n: usize) -> FfiResult {
+pub(crate) fn check_len<T>(name: &str, p: *const T, n: usize) -> FfiResult {
     check_ptr(name, p)?;
     if n == 0 {
         return Err(Fail::new(
@@ -380,6 +380,26 @@ pub(crate) unsafe fn copy_name(
         ));
     }
     Ok(())
+}
+
+/// Checks a handle argument and borrows it.
+///
+/// # Safety
+/// `p` must be NULL or a live handle made by this library.
+pub(crate) unsafe fn handle<'a, T>(name: &str, p: *const T) -> FfiResult<&'a T> {
+    check_ptr(name, p)?;
+    // SAFETY: non-null and aligned; liveness is the caller's contract.
+    Ok(unsafe { &*p })
+}
+
+/// Checks a handle argument and borrows it mutably.
+///
+/// # Safety
+/// `p` must be NULL or a live handle made by this library, used by no other thread.
+pub(crate) unsafe fn handle_mut<'a, T>(name: &str, p: *mut T) -> FfiResult<&'a mut T> {
+    check_ptr(name, p.cast_const())?;
+    // SAFETY: non-null and aligned; liveness and exclusivity are the caller's contract.
+    Ok(unsafe { &mut *p })
 }
 
 #[cfg(test)]

@@ -2,7 +2,6 @@
 
 use crate::ffi::{self, FfiResult, SizePrefixed, bad_constant, guard, out_ptr, put};
 use hydrograde::friction::{self, Correlation, Friction, Options, Regime, Transition};
-use std::ffi::c_char;
 
 /// Colebrook–White, solved exactly (the default correlation).
 pub const HG_CORRELATION_COLEBROOK: i32 = 0;
@@ -144,6 +143,17 @@ fn options_from_c(o: &hg_friction_options) -> FfiResult<Options> {
     })
 }
 
+/// Reads a caller's `hg_friction_options` into core options.
+///
+/// # Safety
+/// `p` must be NULL or point to a readable `hg_friction_options`.
+pub(crate) unsafe fn read_options(name: &str, p: *const hg_friction_options) -> FfiResult<Options> {
+    let defaults = options_to_c(&Options::default());
+    // SAFETY: forwarded contract.
+    let o = unsafe { ffi::read_sized(name, p, defaults)? };
+    options_from_c(&o)
+}
+
 pub(crate) fn friction_to_c(fr: &Friction) -> hg_friction {
     hg_friction {
         struct_size: std::mem::size_of::<hg_friction>(),
@@ -267,10 +277,9 @@ pub unsafe extern "C" fn hg_darcy_factor_opts(
     guard(|| {
         // SAFETY: forwarded contract.
         unsafe { ffi::check_sized_out("out", out)? };
-        let defaults = options_to_c(&Options::default());
         // SAFETY: forwarded contract.
-        let o = unsafe { ffi::read_sized("opts", opts, defaults)? };
-        let fr = friction::darcy_factor(re, rel_roughness, &options_from_c(&o)?)?;
+        let o = unsafe { read_options("opts", opts)? };
+        let fr = friction::darcy_factor(re, rel_roughness, &o)?;
         // SAFETY: forwarded contract.
         unsafe { ffi::write_sized("out", out, &friction_to_c(&fr)) }
     })
@@ -318,65 +327,11 @@ pub unsafe extern "C" fn hg_darcy_factor_batch(
     })
 }
 
-/// The `HG_CORRELATION_*` value of a correlation name: "colebrook", "haaland",
-/// "swamee_jain", "churchill", "serghides", "blasius", "fully_rough".
-///
-/// Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` (the message lists the known names);
-/// `HG_ERR_NULL_POINTER`; `HG_ERR_INVALID` for a name that is not UTF-8. Thread-safe.
-///
-/// # Safety
-/// `name` must be NULL or a NUL-terminated string; `correlation` NULL or writable.
-#[unsafe(no_mangle)]
-pub unsafe extern "C" fn hg_correlation_from_name(
-    name: *const c_char,
-    correlation: *mut i32,
-) -> i32 {
-    guard(|| {
-        ffi::check_outs(&[out_ptr("correlation", correlation)])?;
-        // SAFETY: forwarded contract.
-        let s = unsafe { ffi::c_str("name", name)? };
-        let c: Correlation = s.parse()?;
-        let code = Correlation::ALL.iter().position(|x| *x == c).unwrap_or(0) as i32;
-        // SAFETY: forwarded contract.
-        unsafe { put("correlation", correlation, code) }
-    })
-}
-
-/// The name of an `HG_CORRELATION_*` value as a static string ("colebrook", …); NULL for
-/// an unknown value. Thread-safe.
-#[unsafe(no_mangle)]
-pub extern "C" fn hg_correlation_name(correlation: i32) -> *const c_char {
-    const NAMES: [&str; 7] = [
-        "colebrook\0",
-        "haaland\0",
-        "swamee_jain\0",
-        "churchill\0",
-        "serghides\0",
-        "blasius\0",
-        "fully_rough\0",
-    ];
-    usize::try_from(correlation)
-        .ok()
-        .and_then(|i| NAMES.get(i))
-        .map_or(std::ptr::null(), |n| n.as_ptr().cast())
-}
-
-/// The name of an `HG_REGIME_*` value as a static string ("laminar", "transitional",
-/// "turbulent"); NULL for an unknown value. Thread-safe.
-#[unsafe(no_mangle)]
-pub extern "C" fn hg_regime_name(regime: i32) -> *const c_char {
-    match regime {
-        HG_REGIME_LAMINAR => c"laminar".as_ptr(),
-        HG_REGIME_TRANSITIONAL => c"transitional".as_ptr(),
-        HG_REGIME_TURBULENT => c"turbulent".as_ptr(),
-        _ => std::ptr::null(),
-    }
-}
-
 #[cfg(test)]
 mod tests {
     use super::*;
     use crate::ffi::*;
+    use crate::{hg_correlation_from_name, hg_correlation_name, hg_regime_name};
     use std::ffi::CStr;
 
     #[test]

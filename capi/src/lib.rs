@@ -10,15 +10,22 @@
 
 #![allow(non_camel_case_types)]
 
+mod correlation;
 mod ffi;
 mod fitting;
 mod fluid;
 mod friction;
+mod line;
+mod line_eval;
+mod line_more;
+mod line_solve;
+mod materials;
 mod meta;
 mod pipe;
 mod section;
 mod units;
 
+pub use correlation::*;
 pub use ffi::{
     HG_ERR_BUFFER_TOO_SMALL, HG_ERR_INTERNAL, HG_ERR_INVALID, HG_ERR_NO_SOLUTION,
     HG_ERR_NOT_FINITE, HG_ERR_NULL_POINTER, HG_ERR_OUT_OF_RANGE, HG_ERR_UNKNOWN_NAME, HG_OK,
@@ -26,6 +33,11 @@ pub use ffi::{
 pub use fitting::*;
 pub use fluid::*;
 pub use friction::*;
+pub use line::*;
+pub use line_eval::*;
+pub use line_more::*;
+pub use line_solve::*;
+pub use materials::*;
 pub use meta::*;
 pub use pipe::*;
 pub use section::*;

@@ -98,3 +98,29 @@ pub unsafe extern "C" fn hg_section_properties(
         }
     })
 }
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    #[test]
+    fn shape_constants_build_the_named_shapes() {
+        for (code, a, b, name) in [
+            (HG_SECTION_CIRCLE, 0.1, 0.0, "circle"),
+            (HG_SECTION_ANNULUS, 0.1, 0.05, "annulus"),
+            (HG_SECTION_RECTANGLE, 0.1, 0.05, "rectangle"),
+            (HG_SECTION_ELLIPSE, 0.1, 0.05, "ellipse"),
+            (HG_SECTION_TRIANGLE, 0.1, 0.0, "triangle"),
+        ] {
+            assert_eq!(section_of(code, a, b).unwrap().shape_name(), name);
+        }
+        assert_eq!(
+            section_of(5, 0.1, 0.0).unwrap_err().code,
+            crate::HG_ERR_OUT_OF_RANGE
+        );
+        assert_eq!(
+            section_of(HG_SECTION_CIRCLE, 0.1, 0.1).unwrap_err().code,
+            crate::HG_ERR_INVALID
+        );
+    }
+}

@@ -2,6 +2,7 @@
 #ifndef HG_TEST_CHECK_H
 #define HG_TEST_CHECK_H
 #include <stdio.h>
+#include <stdlib.h>
 #include <string.h>
 #include <stdint.h>
 

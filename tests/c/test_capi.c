@@ -1,3 +1,4 @@
+#define _POSIX_C_SOURCE 200809L
 /* Calls every function of hydrograde.h: results against the Rust core bit for bit (from
  * the reference file written by capi/examples/core_reference.rs), bad input of every
  * kind, the last-error contract, and 8 threads at once.
@@ -8,6 +9,7 @@
 
 #include "hydrograde.h"
 #include "check.h"
+#include "records.h"
 
 /* ---------- reference data (the Rust core's own results) ---------- */
 
@@ -54,87 +56,9 @@ static void load_reference(const char *path) {
   fclose(fp);
 }
 
-/* The status code a core error kind must map to: HG_ERR_<KIND>. */
-static int32_t code_of_kind(const char *kind) {
-  char want[64];
-  snprintf(want, sizeof want, "HG_ERR_%s", kind);
-  for (char *p = want; *p; p++)
-    if (*p >= 'a' && *p <= 'z') *p = (char)(*p - 'a' + 'A');
-  const int32_t codes[] = {HG_ERR_NOT_FINITE, HG_ERR_OUT_OF_RANGE, HG_ERR_UNKNOWN_NAME,
-                           HG_ERR_INVALID, HG_ERR_NO_SOLUTION};
-  for (size_t i = 0; i < sizeof codes / sizeof *codes; i++)
-    if (strcmp(hg_status_name(codes[i]), want) == 0) return codes[i];
-  return -1;
-}
-
 static size_t msg_len(void) { return hg_last_error(NULL, 0); }
 
 /* ---------- the other functions against the core (generic records) ---------- */
-
-typedef struct {
-  int type; /* 'd', 's', 'i' */
-  double d;
-  long long i;
-  char s[48];
-} tok;
-
-typedef struct {
-  char tag[24];
-  int nin, nout, err;
-  tok in[10], out[8];
-  char kind[24];
-} record;
-
-static record *recs;
-static size_t nrecs;
-
-static int parse_tok(const char *w, tok *t) {
-  memset(t, 0, sizeof *t);
-  if (strncmp(w, "s:", 2) == 0) {
-    t->type = 's';
-    snprintf(t->s, sizeof t->s, "%s", w + 2);
-  } else if (strncmp(w, "i:", 2) == 0) {
-    t->type = 'i';
-    t->i = strtoll(w + 2, NULL, 10);
-  } else {
-    t->type = 'd';
-    t->d = from_hex(w);
-  }
-  return 1;
-}
-
-static void load_records(const char *path) {
-  FILE *fp = fopen(path, "r");
-  if (!fp) exit(2);
-  char line[1024];
-  size_t cap = 0;
-  while (fgets(line, sizeof line, fp)) {
-    if (strncmp(line, "darcy", 5) == 0) continue;
-    if (nrecs == cap) {
-      cap = cap ? 2 * cap : 1024;
-      recs = realloc(recs, cap * sizeof *recs);
-    }
-    record *r = &recs[nrecs];
-    memset(r, 0, sizeof *r);
-    int side = 0;
-    for (char *w = strtok(line, " \n"); w; w = strtok(NULL, " \n")) {
-      if (!r->tag[0]) {
-        snprintf(r->tag, sizeof r->tag, "%s", w);
-      } else if (strcmp(w, "|") == 0) {
-        side = 1;
-      } else if (side && w[0] == '!') {
-        r->err = 1;
-        snprintf(r->kind, sizeof r->kind, "%s", w + 1);
-      } else if (side) {
-        parse_tok(w, &r->out[r->nout++]);
-      } else {
-        parse_tok(w, &r->in[r->nin++]);
-      }
-    }
-    nrecs++;
-  }
-  fclose(fp);
-}
 
 /* Calls the C function a record names; fills got[] (doubles, ints as doubles) and name. */
 static int32_t call_record(const record *r, double *got, int *ngot, char *name, size_t namelen) {
@@ -183,29 +107,84 @@ static int32_t call_record(const record *r, double *got, int *ngot, char *name, 
   return s;
 }
 
+static const char *ref_path;
+
+static long check_record(const record *r, int quiet) {
+  double got[8];
+  char name[64] = "";
+  int ngot;
+  int32_t s = call_record(r, got, &ngot, name, sizeof name);
+  int same;
+  if (r->err) {
+    same = s == code_of_kind(r->kind) && msg_len() > 0;
+  } else if (r->nout == 1 && r->out[0].type == 's') {
+    same = s == HG_OK && strcmp(name, r->out[0].s) == 0;
+  } else {
+    same = s == HG_OK && same_outputs(r, got, ngot);
+  }
+  if (!quiet) CHECK(same, "%s: status %d (want %s)", r->tag, s, r->err ? r->kind : "HG_OK");
+  return !same;
+}
+
+/* Materials and pipe sizes: outputs mix numbers and names. */
+static long check_material_record(const record *r, int quiet) {
+  const tok *a = r->in;
+  tok got[8];
+  int n = 0;
+  int32_t s = -1;
+  double x = 0, y = 0, z = 0;
+  char name[64] = "";
+  size_t need = 0;
+  if (strcmp(r->tag, "material_name") == 0) {
+    s = hg_roughness_material_name((size_t)a[0].i, name, sizeof name, &need);
+    if (need != strlen(name)) s = -2;
+    got[n++] = tok_s(name);
+  } else if (strcmp(r->tag, "roughness") == 0) {
+    s = hg_roughness(a[0].s, &x, &y, &z);
+    got[n++] = tok_d(x), got[n++] = tok_d(y), got[n++] = tok_d(z);
+  } else if (strcmp(r->tag, "roughness_aged") == 0) {
+    s = hg_roughness_aged(a[0].d, a[1].d, a[2].d, &x);
+    got[n++] = tok_d(x);
+  } else if (strcmp(r->tag, "pipe_size") == 0) {
+    s = hg_pipe_size(a[0].s, a[1].s, a[2].s, &x, &y, &z);
+    got[n++] = tok_d(x), got[n++] = tok_d(y), got[n++] = tok_d(z);
+  } else if (strcmp(r->tag, "validity") == 0) {
+    double v[5];
+    s = hg_correlation_validity((int32_t)a[0].i, &v[0], &v[1], &v[2], &v[3], &v[4]);
+    for (int i = 0; i < 5; i++) got[n++] = tok_d(v[i]);
+  } else if (strcmp(r->tag, "transition_limits") == 0) {
+    s = hg_transition_limits(a[0].d, a[1].d, (int32_t)a[2].i, &x, &y);
+    got[n++] = tok_d(x), got[n++] = tok_d(y);
+  } else if (strcmp(r->tag, "pump_curve_head") == 0) {
+    const double pq[4] = {0.0, 1e-3, 2e-3, 3e-3}, ph[4] = {30.0, 28.0, 22.0, 12.0};
+    s = hg_pump_curve_head(pq, ph, 4, a[0].d, &x, &y);
+    got[n++] = tok_d(x), got[n++] = tok_d(y);
+  } else if (strcmp(r->tag, "saturation") == 0) {
+    s = hg_water_saturation_temperature(a[0].d, &x);
+    got[n++] = tok_d(x);
+  } else if (strcmp(r->tag, "pipe_size_at_least") == 0) {
+    s = hg_pipe_size_at_least(a[0].s, a[1].s, a[2].d, &x, name, sizeof name, &need);
+    got[n++] = tok_d(x), got[n++] = tok_s(name);
+  }
+  int same = r->err ? s == code_of_kind(r->kind) && msg_len() > 0 : s == HG_OK && same_tokens(r, got, n);
+  if (!quiet) CHECK(same, "%s: status %d (want %s)", r->tag, s, r->err ? r->kind : "HG_OK");
+  return !same;
+}
+
+/* Every record of the functions other than the friction factor and the line. */
 static long compare_records(int quiet) {
+  const char *tags[] = {"water", "air", "vapour", "convert", "unit_name", "catalogue", "fitting_k",
+                        "section", "pipe_head_loss", "reynolds", "duct_flow_state"};
   long bad = 0;
-  for (size_t k = 0; k < nrecs; k++) {
-    const record *r = &recs[k];
-    double got[8];
-    char name[64] = "";
-    int ngot;
-    int32_t s = call_record(r, got, &ngot, name, sizeof name);
-    int same;
-    if (r->err) {
-      same = s == code_of_kind(r->kind) && msg_len() > 0;
-    } else {
-      same = s == HG_OK;
-      if (r->nout == 1 && r->out[0].type == 's') same = same && strcmp(name, r->out[0].s) == 0;
-      else {
-        same = same && ngot == r->nout;
-        for (int i = 0; same && i < r->nout; i++)
-          same = r->out[i].type == 'd' ? bits_of(got[i]) == bits_of(r->out[i].d)
-                                       : got[i] == (double)r->out[i].i;
-      }
-    }
-    if (!same) bad++;
-    if (!quiet) CHECK(same, "%s record %zu: status %d (want %s)", r->tag, k, s, r->err ? r->kind : "HG_OK");
+  for (size_t i = 0; i < sizeof tags / sizeof *tags; i++) {
+    bad += for_each_record(ref_path, tags[i], check_record, quiet);
+    if (!quiet) CHECK(records_seen > 0, "no reference record for %s", tags[i]);
+  }
+  const char *mtags[] = {"material_name", "roughness", "pipe_size", "validity", "saturation", "transition_limits",
+                          "pump_curve_head"};
+  for (size_t i = 0; i < 7; i++) {
+    bad += for_each_record(ref_path, mtags[i], check_material_record, quiet);
+    if (!quiet) CHECK(records_seen > 0, "no reference record for %s", mtags[i]);
   }
   return bad;
 }
@@ -466,7 +445,30 @@ static int32_t call_duct(const double *a, double *out) {
 }
 
 
+static int32_t call_limits(const double *a, double *out) {
+  double t;
+  return hg_transition_limits(a[0], a[1], 0, out, &t);
+}
+static int32_t call_pump(const double *a, double *out) {
+  const double pq[3] = {0.0, 1e-3, 2e-3}, ph[3] = {30.0, 25.0, 15.0};
+  double d;
+  return hg_pump_curve_head(pq, ph, 3, a[0], out, &d);
+}
+static int32_t call_saturation(const double *a, double *out) { return hg_water_saturation_temperature(a[0], out); }
+static int32_t call_aged(const double *a, double *out) { return hg_roughness_aged(a[0], a[1], a[2], out); }
+static int32_t call_at_least(const double *a, double *out) {
+  char nominal[16];
+  size_t need;
+  return hg_pipe_size_at_least("copper", "K", a[0], out, nominal, sizeof nominal, &need);
+}
+
 static const scalar_case cases[] = {
+    {"hg_transition_limits", call_limits, 2, {3000.0, 1e-3}, {REJ_ALL, REJ_NONFINITE | REJ_NEG}},
+    {"hg_pump_curve_head", call_pump, 1, {1e-3}, {REJ_NONFINITE | REJ_NEG}},
+    {"hg_water_saturation_temperature", call_saturation, 1, {1e5}, {REJ_ALL}},
+    {"hg_roughness_aged", call_aged, 3, {1e-4, 1e-5, 20.0}, {REJ_NONFINITE | REJ_NEG, REJ_NONFINITE | REJ_NEG,
+                                                              REJ_NONFINITE | REJ_NEG}},
+    {"hg_pipe_size_at_least", call_at_least, 1, {0.02}, {REJ_ALL}},
     {"hg_darcy_factor", call_darcy, 2, {1e5, 1e-4}, {REJ_ALL, REJ_NONFINITE | REJ_NEG}},
     {"hg_darcy_factor_full", call_darcy_full, 2, {1e5, 1e-4}, {REJ_ALL, REJ_NONFINITE | REJ_NEG}},
     {"hg_darcy_factor_opts", call_darcy_opts, 5, {1e5, 1e-4, 64.0, 2300.0, 4000.0},
@@ -601,7 +603,7 @@ static void test_threads(void) {
 }
 
 static void test_bad_pointers_others(void) {
-  double x = 5.0, y = 5.0, z, w;
+  double x = 5.0, y = 5.0, z = 0, w;
   char buf[8];
   size_t need = 0;
   CHECK(hg_water(293.15, 1e5, NULL, &y) == HG_ERR_NULL_POINTER && y == 5.0 && msg_len() > 0, "water NULL");
@@ -661,6 +663,47 @@ static void test_bad_pointers_others(void) {
   char m[64];
   hg_last_error(m, sizeof m);
   CHECK(strncmp(m, "element 1: flow = inf", 21) == 0, "batch message '%s'", m);
+  double v[5];
+  for (int k = 0; k < 5; k++) {
+    double *p[5] = {&v[0], &v[1], &v[2], &v[3], &v[4]};
+    p[k] = NULL;
+    CHECK(hg_correlation_validity(0, p[0], p[1], p[2], p[3], p[4]) == HG_ERR_NULL_POINTER, "validity NULL %d", k);
+  }
+  CHECK(hg_correlation_validity(7, &v[0], &v[1], &v[2], &v[3], &v[4]) == HG_ERR_OUT_OF_RANGE && msg_len() > 0, "validity 7");
+  CHECK(hg_transition_limits(3000, 0, 0, NULL, &y) == HG_ERR_NULL_POINTER, "limits NULL");
+  CHECK(hg_transition_limits(3000, 0, 0, &x, NULL) == HG_ERR_NULL_POINTER, "limits NULL");
+  CHECK(hg_transition_limits(NAN, 0, 0, &x, &y) == HG_ERR_NOT_FINITE && msg_len() > 0, "limits NaN");
+  CHECK(hg_transition_limits(3000, 0, 9, &x, &y) == HG_ERR_OUT_OF_RANGE, "limits correlation 9");
+  const double pq[3] = {0.0, 1e-3, 2e-3}, ph[3] = {30.0, 25.0, 15.0};
+  CHECK(hg_pump_curve_head(NULL, ph, 3, 1e-3, &x, &y) == HG_ERR_NULL_POINTER, "pump NULL flows");
+  CHECK(hg_pump_curve_head(pq, NULL, 3, 1e-3, &x, &y) == HG_ERR_NULL_POINTER, "pump NULL heads");
+  CHECK(hg_pump_curve_head(pq, ph, 3, 1e-3, NULL, &y) == HG_ERR_NULL_POINTER, "pump NULL out");
+  CHECK(hg_pump_curve_head(pq, ph, 3, 1e-3, &x, NULL) == HG_ERR_NULL_POINTER, "pump NULL out");
+  CHECK(hg_pump_curve_head(pq, ph, 0, 1e-3, &x, &y) == HG_ERR_INVALID && msg_len() > 0, "pump n 0");
+  CHECK(hg_pump_curve_head(pq, ph, 2, 1e-3, &x, &y) != HG_OK && msg_len() > 0, "pump 2 points");
+  CHECK(hg_pump_curve_head(ph, pq, 3, 1e-3, &x, &y) != HG_OK, "pump flows decreasing");
+  CHECK(hg_roughness(NULL, &x, &y, &z) == HG_ERR_NULL_POINTER, "roughness NULL name");
+  CHECK(hg_roughness("plastic", NULL, &y, &z) == HG_ERR_NULL_POINTER, "roughness NULL");
+  CHECK(hg_roughness("plastic", &x, NULL, &z) == HG_ERR_NULL_POINTER, "roughness NULL");
+  CHECK(hg_roughness("plastic", &x, &y, NULL) == HG_ERR_NULL_POINTER && msg_len() > 0, "roughness NULL");
+  CHECK(hg_roughness_material_name(0, buf, sizeof buf, NULL) == HG_ERR_NULL_POINTER, "material NULL");
+  CHECK(hg_roughness_material_name(999, buf, sizeof buf, &need) == HG_ERR_OUT_OF_RANGE, "material past end");
+  CHECK(hg_roughness_aged(1e-4, 1e-5, 3, NULL) == HG_ERR_NULL_POINTER, "aged NULL");
+  CHECK(hg_pipe_size(NULL, "2", "40", &x, &y, &z) == HG_ERR_NULL_POINTER, "size NULL table");
+  CHECK(hg_pipe_size("steel", NULL, "40", &x, &y, &z) == HG_ERR_NULL_POINTER, "size NULL nominal");
+  CHECK(hg_pipe_size("steel", "2", NULL, &x, &y, &z) == HG_ERR_NULL_POINTER, "size NULL schedule");
+  CHECK(hg_pipe_size("steel", "2", "40", NULL, &y, &z) == HG_ERR_NULL_POINTER, "size NULL out");
+  CHECK(hg_pipe_size("steel", "2", "40", &x, NULL, &z) == HG_ERR_NULL_POINTER, "size NULL out");
+  CHECK(hg_pipe_size("steel", "2", "40", &x, &y, NULL) == HG_ERR_NULL_POINTER, "size NULL out");
+  CHECK(hg_pipe_size("steel", "2", "99", &x, &y, &z) == HG_ERR_UNKNOWN_NAME && msg_len() > 0, "schedule 99");
+  CHECK(hg_pipe_size_at_least(NULL, "40", 0.05, &x, buf, sizeof buf, &need) == HG_ERR_NULL_POINTER, "at least NULL");
+  CHECK(hg_pipe_size_at_least("steel", NULL, 0.05, &x, buf, sizeof buf, &need) == HG_ERR_NULL_POINTER, "at least NULL");
+  CHECK(hg_pipe_size_at_least("steel", "40", 0.05, NULL, buf, sizeof buf, &need) == HG_ERR_NULL_POINTER, "at least NULL");
+  CHECK(hg_pipe_size_at_least("steel", "40", 0.05, &x, NULL, 4, &need) == HG_ERR_NULL_POINTER, "at least NULL buf");
+  CHECK(hg_pipe_size_at_least("steel", "40", 0.05, &x, buf, sizeof buf, NULL) == HG_ERR_NULL_POINTER, "at least NULL");
+  x = 0;
+  CHECK(hg_pipe_size_at_least("steel", "40", 0.05, &x, buf, 1, &need) == HG_ERR_BUFFER_TOO_SMALL && x > 0.05 &&
+            buf[0] == 0 && need > 0, "at least: diameter written, name cut");
 }
 
 
@@ -670,19 +713,18 @@ int main(int argc, char **argv) {
     return 2;
   }
   load_reference(argv[1]);
-  load_records(argv[1]);
+  ref_path = argv[1];
   CHECK(nrefs > 1000, "reference file has %zu lines", nrefs);
   test_meta(argv[2]);
   test_last_error();
   long bad = compare_reference(0);
   bad += compare_records(0);
-  printf("bitwise: %zu reference points, %ld differ\n", nrefs + nrecs, bad);
+  printf("bitwise: %zu friction points and the other functions' records, %ld differ\n", nrefs, bad);
   test_opts_and_batch();
   test_bad_values();
   test_bad_pointers_and_constants();
   test_bad_pointers_others();
   test_threads();
   free(refs);
-  free(recs);
   return check_summary("test_capi");
 }

@@ -3,6 +3,7 @@
 // free themselves (valgrind checks no leak).
 #include "hydrograde.hpp"
 
+#include <algorithm>
 #include <cmath>
 #include <cstdio>
 #include <cstring>
@@ -71,11 +72,151 @@ static void test_friction() {
   CHECK(hg::last_error().find("correlation = 42") == 0, hg::last_error().c_str());
 }
 
-//@@MORE_CPP@@
+static void test_others() {
+  namespace hg = hydrograde;
+  double rho = 0, mu = 0, x = 0, y = 0;
+  hg_water(293.15, 101325.0, &rho, &mu);
+  hg::properties w = hg::water(293.15, 101325.0);
+  CHECK(same_bits(w.density, rho) && same_bits(w.viscosity, mu), "water");
+  hg_air(300.0, 2e5, &rho, &mu);
+  hg::properties a = hg::air(300.0, 2e5);
+  CHECK(same_bits(a.density, rho) && same_bits(a.viscosity, mu), "air");
+  hg_water_vapour_pressure(350.0, &x);
+  CHECK(same_bits(hg::water_vapour_pressure(350.0), x), "vapour");
+  hg_convert(2.0, "in", "mm", &x);
+  CHECK(same_bits(hg::convert(2.0, "in", "mm"), x), "convert");
+  hg_convert_head(10.0, "m_head", "kPa", 998.2, &x);
+  CHECK(same_bits(hg::convert_head(10.0, "m_head", "kPa", 998.2), x), "convert_head");
+  std::vector<std::string> units = hg::unit_names(), cat = hg::fitting_catalogue();
+  CHECK(units.size() > 10 && std::find(units.begin(), units.end(), "gpm") != units.end(), "units");
+  CHECK(cat.size() > 10 && std::find(cat.begin(), cat.end(), "gate_valve") != cat.end(), "catalogue");
+  for (const std::string& n : cat) {
+    hg_fitting_k(n.c_str(), 1e5, 0.05, 1e-3, &x, &y);
+    hg::fitting_k_result k = hg::fitting_k(n, 1e5, 0.05, 1e-3);
+    CHECK(same_bits(k.k, x) && same_bits(k.dk_dre, y), n.c_str());
+  }
+  double s1, s2, s3, s4;
+  hg_section_properties(HG_SECTION_ANNULUS, 0.1, 0.04, &s1, &s2, &s3, &s4);
+  hg::section_geometry g = hg::section(HG_SECTION_ANNULUS, 0.1, 0.04);
+  CHECK(same_bits(g.area, s1) && same_bits(g.wetted_perimeter, s2) && same_bits(g.hydraulic_diameter, s3) &&
+            same_bits(g.laminar_constant, s4), "section");
+  CHECK(hg::section(HG_SECTION_CIRCLE, 0.1).laminar_constant == 64.0, "circle 64");  // exact: Hagen–Poiseuille
+  hg_pipe_head_loss(0.05, 30, 4.5e-5, 998.2, 1.002e-3, 2e-3, &x, &y);
+  hg::head_loss_result h = hg::pipe_head_loss(0.05, 30, 4.5e-5, 998.2, 1.002e-3, 2e-3);
+  CHECK(same_bits(h.head_loss, x) && same_bits(h.dhead_dflow, y), "pipe");
+  std::vector<hg::head_loss_result> hb = hg::pipe_head_loss(0.05, 30, 4.5e-5, 998.2, 1.002e-3, {1e-3, 2e-3});
+  CHECK(hb.size() == 2 && same_bits(hb[1].head_loss, x), "pipe batch");
+  CHECK(hg::pipe_head_loss(0.05, 30, 4.5e-5, 998.2, 1.002e-3, std::vector<double>{}).empty(), "empty batch");
+  hg_pipe_flow st = hg::duct_flow_state(HG_SECTION_RECTANGLE, 0.2, 0.1, 20, 1e-4, 998.2, 1.002e-3, 5e-3);
+  CHECK(st.regime == HG_REGIME_TURBULENT && (st.warnings & HG_WARN_NON_CIRCULAR_SECTION), "duct");
+  hg_reynolds(2e-3, 0.05, 998.2, 1.002e-3, &x);
+  CHECK(same_bits(hg::reynolds(2e-3, 0.05, 998.2, 1.002e-3), x), "reynolds");
+
+  hg::roughness_range rr = hg::roughness("commercial_steel");
+  CHECK(rr.low <= rr.typical && rr.typical <= rr.high, "roughness range");
+  CHECK(hg::roughness_materials().size() > 5, "materials");
+  hg_roughness_aged(1e-4, 2e-5, 10, &x);
+  CHECK(same_bits(hg::roughness_aged(1e-4, 2e-5, 10), x), "aged");
+  hg::pipe_dimensions pd = hg::pipe_size("steel", "2", "40");
+  CHECK(std::fabs(pd.inside_diameter - (pd.outside_diameter - 2 * pd.wall)) < 1e-15, "pipe size");
+  auto al = hg::pipe_size_at_least("copper", "L", 0.03);
+  CHECK(al.second >= 0.03 && !al.first.empty(), "at least");
+  auto e = thrown([] { hg::water(200.0, 1e5); });
+  CHECK(e.first == HG_ERR_OUT_OF_RANGE && e.second.find("temperature") != std::string::npos, e.second.c_str());
+  e = thrown([] { hg::convert(1.0, "m", "furlong"); });
+  CHECK(e.first == HG_ERR_UNKNOWN_NAME, e.second.c_str());
+  e = thrown([] { hg::fitting_k("nonesuch", 1e5, 0.05); });
+  CHECK(e.first == HG_ERR_UNKNOWN_NAME && e.second.find("gate_valve") != std::string::npos, e.second.c_str());
+  e = thrown([] { hg::section(HG_SECTION_CIRCLE, 0.1, 0.2); });
+  CHECK(e.first == HG_ERR_INVALID, e.second.c_str());
+  e = thrown([] { hg::pipe_head_loss(0.05, -1, 0, 998, 1e-3, 1e-3); });
+  CHECK(e.first == HG_ERR_OUT_OF_RANGE && e.second.rfind("length = -1", 0) == 0, e.second.c_str());
+}
+
+static void test_line() {
+  namespace hg = hydrograde;
+  hg::fluid water = hg::fluid::water(293.15, 2e5);
+  hg::line l;
+  l.add_pipe(0.05, 30, 4.5e-5).add_fitting("elbow_90_standard").add_rise(3.0).add_fitting_k(0.5);
+  l.add_duct(HG_SECTION_CIRCLE, 0.04, 0, 12, 1.5e-6).add_equipment("strainer", 2e4, 2e-3);
+  l.set_inlet_pressure(3e5);
+  CHECK(l.size() == 6, "size");
+  hg_line_result r = l.evaluate(water, 2e-3);
+  hg_line_result rc{};
+  rc.struct_size = sizeof rc;
+  hg_line_evaluate(l.get(), water.get(), 2e-3, &rc);
+  CHECK(std::memcmp(&r, &rc, sizeof r) == 0, "evaluate equals C");
+  CHECK(r.static_head == 3.0 && r.required_head > r.static_head && r.element_count == 6, "totals");
+  CHECK(r.head_loss_low < r.head_loss && r.head_loss < r.head_loss_high, "band");
+  CHECK(l.element(water, 2e-3, 0).kind == HG_ELEMENT_PIPE, "element");
+  CHECK(l.label(water, 2e-3, 1) == "elbow_90_standard" && l.label(water, 2e-3, 5) == "strainer", "labels");
+  hg::flow_solution s = l.flow_for_head(water, r.required_head);
+  CHECK(std::fabs(s.flow - 2e-3) < 1e-12 && s.flow_low < s.flow && s.flow < s.flow_high, "flow for head");
+  std::vector<double> curve = l.system_curve(water, {0.0, 1e-3, 2e-3});
+  // The core sums the curve's heads in another order than evaluate's: equal to rounding.
+  CHECK(curve.size() == 3 && std::fabs(curve[2] - r.required_head) <= 1e-12 * r.required_head, "system curve");
+  CHECK(curve[0] == 3.0, "zero flow: the static head alone");
+  CHECK(l.system_curve(water, {}).empty(), "empty curve");
+  hg::line moved = std::move(l);
+  CHECK(moved.size() == 6, "moved line");
+  hg::fluid f2 = hg::fluid::liquid(870.0, 0.03);
+  f2 = hg::fluid::air(300.0, 1e5);
+  CHECK(f2.props().density < 2.0, "moved fluid");
+
+  hg::operating_point op = moved.operating_point(water, {0.0, 2e-3, 4e-3}, {40.0, 32.0, 8.0});
+  CHECK(op.flow > 0 && op.flow_low < op.flow && op.flow < op.flow_high, "operating point");
+  CHECK(std::fabs(moved.evaluate(water, op.flow).required_head - op.head) < 1e-9 * op.head, "on the system curve");
+  hg::line branch;
+  branch.add_pipe(0.08, 20, 4.5e-5);
+  auto sp = hg::split_flow({&moved, &branch}, water, 5e-3);
+  CHECK(sp.first.size() == 2 && std::fabs(sp.first[0] + sp.first[1] - 5e-3) < 1e-15, "split adds up");
+  hg_sizing z = moved.size(water, 3e-3, HG_LIMIT_VELOCITY, 2.0, "steel", "40");
+  CHECK(z.standard.found == 1 && z.standard.inside_diameter >= z.min_inside_diameter &&
+            std::string(z.standard.nominal) == hg::pipe_size_at_least("steel", "40", z.min_inside_diameter).first,
+        "sizing picks the smallest standard size");
+  hg::line all;
+  hg_uncertainty_options uo = hg::uncertainty_options();
+  uo.diameter = 0.01;
+  all.set_uncertainty(uo).set_turbulent_diameter(HG_TURBULENT_DIAMETER_LAMINAR_EQUIVALENT);
+  all.add_entrance(HG_ENTRANCE_ROUNDED, 0.1).add_pipe_material(0.1, 40, "commercial_steel").add_bend(90, 1.5);
+  all.add_two_k(800, 0.25).add_three_k(500, 0.15, 4).add_cv(120).set_k_spread(5, 0.2).add_kv(100);
+  all.add_equivalent_length(30).add_expansion(0.1, 0.15).add_custom_duct(0.0177, 0.48, 62, 10, 1e-4);
+  all.add_contraction(0.15, 0.08).add_pipe(0.08, 5, 1.5e-6).add_exit();
+  all.set_roughness_range(11, 1e-6, 5e-6);
+  CHECK(all.size() == 13, "every kind of element");
+  auto sources = all.band_sources(water, 5e-3);
+  double total = 0;
+  for (auto& s : sources) total += s.second;
+  CHECK(!sources.empty() && std::fabs(total - 1.0) < 1e-12, "shares sum to 1");
+  hg::fluid wet = water.with_uncertainty(0.001, 0.02).with_vapour_pressure(2.5e5);
+  all.set_inlet_pressure(1.5e5);
+  CHECK(all.evaluate(wet, 5e-3).warnings & HG_WARN_BELOW_VAPOUR_PRESSURE, "cavitation");
+  CHECK(hg::fluid::gas(1.2, 1.8e-5, 293.15, 1e5).props().density == 1.2, "gas");
+  CHECK(hg::correlation_validity(HG_CORRELATION_BLASIUS).re_max == 1e5, "Blasius to 1e5 (Blasius 1913)");
+  auto lim = hg::transition_limits(3000.0, 1e-3);
+  CHECK(lim.first == 64.0 / 3000.0 && lim.second > 0.0, "laminar limit 64/Re");  // exact: Hagen–Poiseuille
+  auto ph = hg::pump_curve_head({0.0, 1e-3, 2e-3}, {30.0, 25.0, 15.0}, 1e-3);
+  CHECK(ph.first == 25.0 && ph.second < 0.0, "pump curve through its points");
+  hg::head_loss_result rh = all.required_head(wet, 5e-3);
+  CHECK(rh.dhead_dflow > 0.0 && std::fabs(rh.head_loss - all.evaluate(wet, 5e-3).required_head) <= 1e-12 * rh.head_loss,
+        "required head");
+  hg::line u = all.with_uniform_diameter(0.1);
+  CHECK(u.size() == all.size(), "uniform diameter copy");
+  CHECK(std::fabs(hg::water_saturation_temperature(101325.0) - 373.124) < 0.01, "boiling point");  // IAPWS-IF97, from memory
+  auto e = thrown([] { hg::line().evaluate(hg::fluid::liquid(1000, 1e-3), 1e-3); });
+  CHECK(e.first == HG_ERR_INVALID && !e.second.empty(), e.second.c_str());
+  e = thrown([] { hg::line().add_pipe(0.05, 10, 0).add_fitting("nonesuch"); });
+  CHECK(e.first == HG_ERR_UNKNOWN_NAME, e.second.c_str());
+  e = thrown([&] { moved.element(water, 1e-3, 6); });
+  CHECK(e.first == HG_ERR_OUT_OF_RANGE, e.second.c_str());
+  e = thrown([] { hg::fluid::liquid(-1, 1e-3); });
+  CHECK(e.first == HG_ERR_OUT_OF_RANGE, e.second.c_str());
+}
 
 int main() {
   test_friction();
-//@@MORE_CPP_CALLS@@
+  test_others();
+  test_line();
   std::printf("test_capi_cpp: %ld checks, %ld failed\n", run, failed);
   return failed == 0 ? 0 : 1;
 }

@@ -75,7 +75,7 @@ def cstr(p: int) -> str | None:
 
 
 def test_every_declaration_resolves(vba):
-    assert len(vba) >= 10
+    assert len(vba) == len(parse_vba()) >= 20
 
 
 def test_version_and_names(vba):
@@ -128,3 +128,100 @@ def test_errors_give_codes_and_messages(vba, reference):
     buf = ctypes.create_string_buffer(4)
     n = vba["hg_last_error"](buf, 4)
     assert n > 4 and buf.value == b"unk"
+
+
+# Reference tag -> the VBA-declared function it checks.
+TAGS = {
+    "water": "hg_water",
+    "air": "hg_air",
+    "vapour": "hg_water_vapour_pressure",
+    "convert": "hg_convert",
+    "convert_head": "hg_convert_head",
+    "fitting_k": "hg_fitting_k",
+    "section": "hg_section_properties",
+    "pipe_head_loss": "hg_pipe_head_loss",
+    "reynolds": "hg_reynolds",
+    "roughness": "hg_roughness",
+    "roughness_aged": "hg_roughness_aged",
+    "pipe_size": "hg_pipe_size",
+    "validity": "hg_correlation_validity",
+    "saturation": "hg_water_saturation_temperature",
+    "transition_limits": "hg_transition_limits",
+}
+CODES = {"not_finite": 10, "out_of_range": 11, "unknown_name": 12, "invalid": 13, "no_solution": 20}
+OUT_TYPES = {"Double": ctypes.c_double, "Long": ctypes.c_int32, "LongPtr": ctypes.c_ssize_t}
+
+
+def token(t: str):
+    if t.startswith("s:"):
+        return t[2:].replace("~", " ").encode()
+    if t.startswith("i:"):
+        return int(t[2:])
+    return unhex(t)
+
+
+def test_every_scalar_function_equals_the_core_bit_for_bit(vba):
+    """Each ByVal argument takes the next input of the record, each ByRef argument is an
+    output, exactly as a worksheet function passes them."""
+    decls = {d.name: d for d in parse_vba()}
+    counted = {}
+    for line in Path(os.environ["HG_REFERENCE"]).read_text().splitlines():
+        tag, _, rest = line.partition(" ")
+        if tag not in TAGS:
+            continue
+        ins, outs = (part.split() for part in rest.split(" | "))
+        d = decls[TAGS[tag]]
+        args, refs, inputs = [], [], iter(ins)
+        for byval, _, vtype in d.params:
+            if byval == "ByVal":
+                args.append(token(next(inputs)))
+            else:
+                r = OUT_TYPES[vtype]()
+                refs.append(r)
+                args.append(ctypes.byref(r))
+        status = vba[d.name](*args)
+        if outs[0].startswith("!"):
+            assert status == CODES[outs[0][1:]], line
+            assert last_error(vba), line
+        else:
+            assert status == 0, (line, last_error(vba))
+            assert [bits(r.value) for r in refs] == [int(o, 16) for o in outs], line
+        counted[tag] = counted.get(tag, 0) + 1
+    assert set(counted) == set(TAGS), counted
+
+
+def test_names_through_string_buffers(vba, reference):
+    """A VBA String buffer (ByVal String) receives the name; the full length comes back."""
+    for tag, fn in (
+        ("unit_name", "hg_unit_name"),
+        ("catalogue", "hg_fitting_catalogue_name"),
+        ("material_name", "hg_roughness_material_name"),
+    ):
+        for i, _, want in reference[tag]:
+            index, name = int(i[2:]), want.split(":", 1)[1]
+            need = ctypes.c_ssize_t(-1)
+            assert vba[fn](index, None, 0, ctypes.byref(need)) == 31  # buffer too small
+            assert need.value == len(name)
+            buf = ctypes.create_string_buffer(need.value + 1)
+            assert vba[fn](index, buf, need.value + 1, ctypes.byref(need)) == 0
+            assert buf.value.decode() == name
+        assert vba[fn](10_000, None, 0, ctypes.byref(need)) == 11
+
+
+def test_smallest_standard_size_through_a_string_buffer(vba):
+    rows = [
+        line.split()[1:]
+        for line in Path(os.environ["HG_REFERENCE"]).read_text().splitlines()
+        if line.startswith("pipe_size_at_least ")
+    ]
+    assert rows
+    d, need = ctypes.c_double(), ctypes.c_ssize_t()
+    for table, sched, dmin, _, *outs in rows:
+        buf = ctypes.create_string_buffer(32)
+        s = vba["hg_pipe_size_at_least"](token(table), token(sched), unhex(dmin), ctypes.byref(d), buf, 32,
+                                         ctypes.byref(need))
+        if outs[0].startswith("!"):
+            assert s == CODES[outs[0][1:]]
+        else:
+            assert s == 0
+            assert (bits(d.value), "s:" + buf.value.decode()) == (int(outs[0], 16), outs[1])

@@ -115,7 +115,7 @@ def is_scalar(f: CFunc) -> bool:
     """A function a spreadsheet can call with plain values: no handle, struct or array."""
     allowed = {
         "double", "int32_t", "uint32_t", "size_t", "const char *", "char *",
-        "double *", "int32_t *", "uint32_t *",
+        "double *", "int32_t *", "uint32_t *", "size_t *",
     }
     return all(t in allowed for t, _ in f.params) and f.ret in {
         "int32_t", "uint32_t", "size_t", "double", "const char *",

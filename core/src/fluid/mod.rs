@@ -256,6 +256,25 @@ impl Fluid {
         self.viscosity / self.density
     }
 
+    /// Reynolds number ρ·|V|·D/μ of a mean velocity `velocity` (m/s, signed) in a duct of
+    /// (hydraulic) diameter `diameter` (m).
+    ///
+    /// # Errors
+    /// A velocity that is not finite; a diameter that is not finite and positive.
+    ///
+    /// # Example
+    /// ```
+    /// let w = hydrograde::Fluid::new(1000.0, 1e-3).unwrap();
+    /// // Exact: 1000 · 2 · 0.05 / 1e-3 = 1e5, whatever the direction of flow.
+    /// assert_eq!(w.reynolds(-2.0, 0.05).unwrap(), 1e5);
+    /// assert!(w.reynolds(1.0, 0.0).is_err());
+    /// ```
+    pub fn reynolds(&self, velocity: f64, diameter: f64) -> Result<f64> {
+        check::finite("velocity", velocity)?;
+        check::positive("diameter", diameter)?;
+        Ok(self.density * velocity.abs() * diameter / self.viscosity)
+    }
+
     /// True for a gas.
     #[inline]
     pub fn is_gas(&self) -> bool {

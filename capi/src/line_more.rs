@@ -1,0 +1,593 @@
+//! More elements and options for lines: every fitting method, pipes of catalogue
+//! materials, custom ducts, roughness ranges, K spreads, the turbulent diameter and the
+//! uncertainty sources, and the sources of a band.
+
+use crate::ffi::{self, FfiResult, guard, out_ptr, put};
+use crate::fluid::hg_fluid;
+use crate::line::{hg_line, refer, sized, with_line};
+use crate::section::{HG_SECTION_CIRCLE, section_of};
+use hydrograde::Error;
+use hydrograde::band::UncertaintyOptions;
+use hydrograde::fitting::Fitting;
+use hydrograde::line::Element;
+use hydrograde::pipe::Pipe;
+use hydrograde::section::{Section, TurbulentDiameter};
+use std::ffi::c_char;
+
+/// A sharp-edged entrance from a large space (`r_over_d` must be 0).
+pub const HG_ENTRANCE_SHARP: i32 = 0;
+/// A rounded entrance of radius `r_over_d` times the bore.
+pub const HG_ENTRANCE_ROUNDED: i32 = 1;
+/// A pipe projecting into the space it draws from (`r_over_d` must be 0).
+pub const HG_ENTRANCE_PROJECTING: i32 = 2;
+
+/// Turbulent flow in non-circular ducts on the hydraulic diameter (default).
+pub const HG_TURBULENT_DIAMETER_HYDRAULIC: i32 = 0;
+/// Turbulent flow in rectangles and annuli on the laminar-equivalent diameter (Jones
+/// 1976; Jones & Leung 1981).
+pub const HG_TURBULENT_DIAMETER_LAMINAR_EQUIVALENT: i32 = 1;
+
+/// Pushes an element built by `make` onto a line.
+///
+/// # Safety
+/// `line` must be NULL or a live handle used by no other thread.
+unsafe fn add(line: *mut hg_line, make: impl FnOnce() -> FfiResult<Element>) -> i32 {
+    // SAFETY: forwarded contract.
+    unsafe {
+        with_line(line, |l| {
+            let e = make()?;
+            l.push(e);
+            Ok(())
+        })
+    }
+}
+
+/// Appends a round pipe of the catalogue wall `material` (see `hg_roughness`): inside
+/// `diameter` (m, > 0), `length` (m, > 0); its roughness is the material's typical
+/// value, and the material's range feeds the roughness uncertainty of the bands.
+///
+/// Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`;
+/// `HG_ERR_INVALID` for a name not UTF-8; `HG_ERR_NULL_POINTER`. Needs exclusive use
+/// of `line`.
+///
+/// # Safety
+/// `line` must be NULL or a live handle used by no other thread; `material` NULL or a
+/// NUL-terminated string.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_add_pipe_material(
+    line: *mut hg_line,
+    diameter: f64,
+    length: f64,
+    material: *const c_char,
+) -> i32 {
+    // SAFETY: forwarded contract.
+    unsafe {
+        add(line, || {
+            let m = ffi::c_str("material", material)?;
+            let s = section_of(HG_SECTION_CIRCLE, diameter, 0.0)?;
+            Ok(Element::Pipe(Pipe::of_material(s, length, m)?))
+        })
+    }
+}
+
+/// Appends a duct of any shape given by its `area` (m², positive), wetted `perimeter`
+/// (m, at least the circle's of that area) and `laminar_constant` (f·Re on the
+/// hydraulic diameter, positive), with `length` (m, positive) and `roughness` (m, ≥ 0).
+///
+/// Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+/// Needs exclusive use of `line`.
+///
+/// # Safety
+/// `line` must be NULL or a live handle used by no other thread.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_add_custom_duct(
+    line: *mut hg_line,
+    area: f64,
+    perimeter: f64,
+    laminar_constant: f64,
+    length: f64,
+    roughness: f64,
+) -> i32 {
+    // SAFETY: forwarded contract.
+    unsafe {
+        add(line, || {
+            let s = Section::custom(area, perimeter, laminar_constant)?;
+            Ok(Element::Pipe(Pipe::new(s, length, roughness)?))
+        })
+    }
+}
+
+/// Appends a sudden expansion from bore `d_in` to bore `d_out` (m, 0 < d_in ≤ d_out):
+/// Borda–Carnot, K on the inlet velocity.
+///
+/// Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+/// Needs exclusive use of `line`.
+///
+/// # Safety
+/// `line` must be NULL or a live handle used by no other thread.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_add_expansion(line: *mut hg_line, d_in: f64, d_out: f64) -> i32 {
+    // SAFETY: forwarded contract.
+    unsafe {
+        add(line, || {
+            Ok(Element::Fitting(Fitting::expansion(d_in, d_out)?))
+        })
+    }
+}
+
+/// Appends a sudden contraction from bore `d_in` to bore `d_out` (m, 0 < d_out ≤ d_in),
+/// K on the outlet velocity.
+///
+/// Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+/// Needs exclusive use of `line`.
+///
+/// # Safety
+/// `line` must be NULL or a live handle used by no other thread.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_add_contraction(line: *mut hg_line, d_in: f64, d_out: f64) -> i32 {
+    // SAFETY: forwarded contract.
+    unsafe {
+        add(line, || {
+            Ok(Element::Fitting(Fitting::contraction(d_in, d_out)?))
+        })
+    }
+}
+
+/// Appends a 2-K fitting (Hooper 1981): K = k1/Re + k_inf·(1 + 1/D_in), D_in the bore in
+/// inches; `k1`, `k_inf` ≥ 0; K on `diameter` (m) or the adjoining pipe's bore when 0.
+///
+/// Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+/// Needs exclusive use of `line`.
+///
+/// # Safety
+/// `line` must be NULL or a live handle used by no other thread.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_add_two_k(
+    line: *mut hg_line,
+    k1: f64,
+    k_inf: f64,
+    diameter: f64,
+) -> i32 {
+    // SAFETY: forwarded contract.
+    unsafe {
+        add(line, || {
+            Ok(Element::Fitting(refer(
+                Fitting::two_k(k1, k_inf)?,
+                diameter,
+            )?))
+        })
+    }
+}
+
+/// Appends a 3-K fitting (Darby 1999): K = k1/Re + k_inf·(1 + k_d/D_in^0.3), D_in the
+/// bore in inches; constants ≥ 0; K on `diameter` (m) or the adjoining pipe's bore
+/// when 0.
+///
+/// Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+/// Needs exclusive use of `line`.
+///
+/// # Safety
+/// `line` must be NULL or a live handle used by no other thread.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_add_three_k(
+    line: *mut hg_line,
+    k1: f64,
+    k_inf: f64,
+    k_d: f64,
+    diameter: f64,
+) -> i32 {
+    // SAFETY: forwarded contract.
+    unsafe {
+        add(line, || {
+            Ok(Element::Fitting(refer(
+                Fitting::three_k(k1, k_inf, k_d)?,
+                diameter,
+            )?))
+        })
+    }
+}
+
+/// Appends a valve of flow coefficient `cv` (US gpm at 1 psi, > 0), whose K refers to
+/// `diameter` (m) or the adjoining pipe's bore when 0.
+///
+/// Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+/// Needs exclusive use of `line`.
+///
+/// # Safety
+/// `line` must be NULL or a live handle used by no other thread.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_add_cv(line: *mut hg_line, cv: f64, diameter: f64) -> i32 {
+    // SAFETY: forwarded contract.
+    unsafe {
+        add(line, || {
+            Ok(Element::Fitting(refer(Fitting::cv(cv)?, diameter)?))
+        })
+    }
+}
+
+/// Appends a valve of flow coefficient `kv` (m³/h at 1 bar, > 0), whose K refers to
+/// `diameter` (m) or the adjoining pipe's bore when 0.
+///
+/// Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+/// Needs exclusive use of `line`.
+///
+/// # Safety
+/// `line` must be NULL or a live handle used by no other thread.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_add_kv(line: *mut hg_line, kv: f64, diameter: f64) -> i32 {
+    // SAFETY: forwarded contract.
+    unsafe {
+        add(line, || {
+            Ok(Element::Fitting(refer(Fitting::kv(kv)?, diameter)?))
+        })
+    }
+}
+
+/// Appends a fitting given as an equivalent length `l_over_d` (L/D, ≥ 0): K = f_T·L/D
+/// with the fully rough factor of the adjoining pipe; on `diameter` (m) or the
+/// adjoining pipe's bore when 0.
+///
+/// Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+/// Needs exclusive use of `line`.
+///
+/// # Safety
+/// `line` must be NULL or a live handle used by no other thread.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_add_equivalent_length(
+    line: *mut hg_line,
+    l_over_d: f64,
+    diameter: f64,
+) -> i32 {
+    // SAFETY: forwarded contract.
+    unsafe {
+        add(line, || {
+            Ok(Element::Fitting(refer(
+                Fitting::equivalent_length(l_over_d)?,
+                diameter,
+            )?))
+        })
+    }
+}
+
+/// Appends a smooth bend of `angle_deg` degrees (0…180) and centreline radius `r_over_d`
+/// times the bore (≥ 0.5), Rennels & Hudson (2012); on `diameter` (m) or the adjoining
+/// pipe's bore when 0.
+///
+/// Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+/// Needs exclusive use of `line`.
+///
+/// # Safety
+/// `line` must be NULL or a live handle used by no other thread.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_add_bend(
+    line: *mut hg_line,
+    angle_deg: f64,
+    r_over_d: f64,
+    diameter: f64,
+) -> i32 {
+    // SAFETY: forwarded contract.
+    unsafe {
+        add(line, || {
+            Ok(Element::Fitting(refer(
+                Fitting::bend(angle_deg, r_over_d)?,
+                diameter,
+            )?))
+        })
+    }
+}
+
+/// Appends a pipe entrance of kind `kind` (`HG_ENTRANCE_*`); `r_over_d` is the rounding
+/// radius over the bore for `HG_ENTRANCE_ROUNDED` (≥ 0) and must be 0 otherwise.
+///
+/// Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a bad kind or radius;
+/// `HG_ERR_INVALID` for a radius with another kind; `HG_ERR_NULL_POINTER`. Needs
+/// exclusive use of `line`.
+///
+/// # Safety
+/// `line` must be NULL or a live handle used by no other thread.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_add_entrance(line: *mut hg_line, kind: i32, r_over_d: f64) -> i32 {
+    // SAFETY: forwarded contract.
+    unsafe {
+        add(line, || {
+            let unused = || -> FfiResult {
+                if r_over_d == 0.0 {
+                    Ok(())
+                } else {
+                    Err(Error::invalid(
+                        "r_over_d",
+                        format!("r_over_d = {r_over_d}: must be 0 unless the entrance is rounded"),
+                    )
+                    .into())
+                }
+            };
+            let f = match kind {
+                HG_ENTRANCE_SHARP => {
+                    unused()?;
+                    Fitting::entrance_sharp()
+                }
+                HG_ENTRANCE_ROUNDED => Fitting::entrance_rounded(r_over_d)?,
+                HG_ENTRANCE_PROJECTING => {
+                    unused()?;
+                    Fitting::entrance_projecting()
+                }
+                _ => return Err(ffi::bad_constant("kind", kind, "HG_ENTRANCE_*", 3)),
+            };
+            Ok(Element::Fitting(f))
+        })
+    }
+}
+
+/// Appends a pipe exit into a large space (K = 1 on the pipe's velocity).
+///
+/// Returns `HG_OK` or `HG_ERR_NULL_POINTER`. Needs exclusive use of `line`.
+///
+/// # Safety
+/// `line` must be NULL or a live handle used by no other thread.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_add_exit(line: *mut hg_line) -> i32 {
+    // SAFETY: forwarded contract.
+    unsafe { add(line, || Ok(Element::Fitting(Fitting::exit()))) }
+}
+
+/// Sets the relative half-width `spread` (0…1, e.g. 0.3 for ±30 %) of the K of the
+/// fitting at `index` (0-based), read by the bands as a rectangular distribution.
+///
+/// Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a bad spread or an
+/// index that is not a fitting; `HG_ERR_NULL_POINTER`. Needs exclusive use of `line`.
+///
+/// # Safety
+/// `line` must be NULL or a live handle used by no other thread.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_set_k_spread(
+    line: *mut hg_line,
+    index: usize,
+    spread: f64,
+) -> i32 {
+    // SAFETY: forwarded contract.
+    unsafe {
+        with_line(line, |l| {
+            let n = l.elements.len();
+            match l.elements.get_mut(index) {
+                Some(Element::Fitting(f)) => *f = f.clone().with_k_spread(spread)?,
+                _ => {
+                    return Err(Error::out_of_range(
+                        "index",
+                        index as f64,
+                        format!("must be the index of a fitting (the line has {n} elements)"),
+                    )
+                    .into());
+                }
+            }
+            l.changed();
+            Ok(())
+        })
+    }
+}
+
+/// States the likely range `low`…`high` (m, 0 ≤ low ≤ high) of the roughness of the pipe
+/// at `index` (0-based), for the roughness uncertainty of the bands (rectangular between
+/// the two). Checked at once when the line can be built (else when it is next
+/// evaluated): an index that is not a pipe gives `HG_ERR_OUT_OF_RANGE`.
+///
+/// Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+/// Needs exclusive use of `line`.
+///
+/// # Safety
+/// `line` must be NULL or a live handle used by no other thread.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_set_roughness_range(
+    line: *mut hg_line,
+    index: usize,
+    low: f64,
+    high: f64,
+) -> i32 {
+    // SAFETY: forwarded contract.
+    unsafe {
+        with_line(line, |l| {
+            // Checked at once when the line can already be built; otherwise when it is.
+            if let Ok(mut trial) =
+                hydrograde::line::Line::with_options(l.elements.clone(), l.options.clone())
+            {
+                trial.set_roughness_range(index, low, high)?;
+            }
+            let mut ranges = l.roughness_ranges.clone();
+            ranges.retain(|r| r.0 != index);
+            ranges.push((index, low, high));
+            l.roughness_ranges = ranges;
+            l.changed();
+            Ok(())
+        })
+    }
+}
+
+/// Chooses the diameter turbulent flow in non-circular ducts uses (`HG_TURBULENT_DIAMETER_*`).
+///
+/// Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` for an unknown mode; `HG_ERR_NULL_POINTER`.
+/// Needs exclusive use of `line`.
+///
+/// # Safety
+/// `line` must be NULL or a live handle used by no other thread.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_set_turbulent_diameter(line: *mut hg_line, mode: i32) -> i32 {
+    // SAFETY: forwarded contract.
+    unsafe {
+        with_line(line, |l| {
+            l.options.turbulent_diameter = match mode {
+                HG_TURBULENT_DIAMETER_HYDRAULIC => TurbulentDiameter::Hydraulic,
+                HG_TURBULENT_DIAMETER_LAMINAR_EQUIVALENT => TurbulentDiameter::LaminarEquivalent,
+                _ => {
+                    return Err(ffi::bad_constant(
+                        "mode",
+                        mode,
+                        "HG_TURBULENT_DIAMETER_*",
+                        2,
+                    ));
+                }
+            };
+            l.changed();
+            Ok(())
+        })
+    }
+}
+
+/// Which uncertainty sources the bands of a line include, and their sizes (relative
+/// standard uncertainties, k = 1). Fill it with `hg_uncertainty_options_default`.
+#[repr(C)]
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct hg_uncertainty_options {
+    /// Size of this struct in bytes, set by `hg_uncertainty_options_default`.
+    pub struct_size: usize,
+    /// 1 to include the friction correlation's model uncertainty, else 0.
+    pub friction_model: i32,
+    /// 1 to include wall roughness, else 0.
+    pub roughness: i32,
+    /// 1 to include the fluid's density and viscosity uncertainties, else 0.
+    pub fluid: i32,
+    /// 1 to include fitting K spreads, else 0.
+    pub fittings: i32,
+    /// 1 to include equipment spreads, else 0.
+    pub equipment: i32,
+    /// Model uncertainty of turbulent flow in round pipe.
+    pub turbulent_model: f64,
+    /// Model uncertainty of laminar flow.
+    pub laminar_model: f64,
+    /// Model uncertainty of turbulent flow in non-circular ducts.
+    pub non_circular_model: f64,
+    /// Relative uncertainty of roughness where a pipe states no range.
+    pub roughness_default: f64,
+    /// Relative uncertainty of every bore (manufacturing tolerance).
+    pub diameter: f64,
+}
+sized!(hg_uncertainty_options);
+
+fn uncertainty_to_c(u: &UncertaintyOptions) -> hg_uncertainty_options {
+    hg_uncertainty_options {
+        struct_size: std::mem::size_of::<hg_uncertainty_options>(),
+        friction_model: i32::from(u.friction_model),
+        roughness: i32::from(u.roughness),
+        fluid: i32::from(u.fluid),
+        fittings: i32::from(u.fittings),
+        equipment: i32::from(u.equipment),
+        turbulent_model: u.turbulent_model,
+        laminar_model: u.laminar_model,
+        non_circular_model: u.non_circular_model,
+        roughness_default: u.roughness_default,
+        diameter: u.diameter,
+    }
+}
+
+fn flag(name: &'static str, v: i32) -> FfiResult<bool> {
+    match v {
+        0 => Ok(false),
+        1 => Ok(true),
+        _ => Err(Error::out_of_range(name, f64::from(v), "must be 0 or 1").into()),
+    }
+}
+
+/// Fills `opts` with the library's default uncertainty sources and sets its
+/// `struct_size`.
+///
+/// Returns `HG_OK` or `HG_ERR_NULL_POINTER`. Thread-safe.
+///
+/// # Safety
+/// `opts` must be NULL or point to a writable `hg_uncertainty_options`.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_uncertainty_options_default(opts: *mut hg_uncertainty_options) -> i32 {
+    // SAFETY: forwarded contract.
+    guard(|| unsafe {
+        put(
+            "opts",
+            opts,
+            uncertainty_to_c(&UncertaintyOptions::default()),
+        )
+    })
+}
+
+/// Sets the uncertainty sources of the bands of `line` (see `hg_uncertainty_options`).
+///
+/// Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a negative size or a
+/// flag other than 0 or 1; `HG_ERR_INVALID` for a `struct_size` too small;
+/// `HG_ERR_NULL_POINTER`. Needs exclusive use of `line`.
+///
+/// # Safety
+/// `line` must be NULL or a live handle used by no other thread; `opts` NULL or a
+/// readable `hg_uncertainty_options`.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_set_uncertainty(
+    line: *mut hg_line,
+    opts: *const hg_uncertainty_options,
+) -> i32 {
+    // SAFETY: forwarded contract.
+    unsafe {
+        with_line(line, |l| {
+            let d = uncertainty_to_c(&UncertaintyOptions::default());
+            let c = ffi::read_sized("opts", opts, d)?;
+            let u = UncertaintyOptions {
+                friction_model: flag("friction_model", c.friction_model)?,
+                roughness: flag("roughness", c.roughness)?,
+                fluid: flag("fluid", c.fluid)?,
+                fittings: flag("fittings", c.fittings)?,
+                equipment: flag("equipment", c.equipment)?,
+                turbulent_model: c.turbulent_model,
+                laminar_model: c.laminar_model,
+                non_circular_model: c.non_circular_model,
+                roughness_default: c.roughness_default,
+                diameter: c.diameter,
+            };
+            u.validate()?;
+            l.options.uncertainty = u;
+            l.changed();
+            Ok(())
+        })
+    }
+}
+
+/// Source number `index` (0-based, largest share first) of the head-loss band of `line`
+/// for `fluid` at `flow` (m³/s): its name copied into `buf` (e.g. "friction model",
+/// "roughness", "K of gate_valve (element 2)"; at most `len - 1` bytes and a NUL; full
+/// length in `*needed`) and its share of the variance (0…1) in `*share`. Index 0 is the
+/// input that dominates the band.
+///
+/// Returns `HG_OK`; the codes of `hg_line_evaluate`; `HG_ERR_OUT_OF_RANGE` when `index`
+/// is past the last source (a band of zero width, as at zero flow, has none);
+/// `HG_ERR_BUFFER_TOO_SMALL` when the name did not fit (the share is still written);
+/// `HG_ERR_NULL_POINTER`. Thread-safe (the line is only read).
+///
+/// # Safety
+/// `line` and `fluid` must be NULL or live handles; `buf` NULL or valid for `len` bytes;
+/// `needed` and `share` NULL or writable.
+#[unsafe(no_mangle)]
+#[allow(clippy::too_many_arguments)]
+pub unsafe extern "C" fn hg_line_band_source(
+    line: *const hg_line,
+    fluid: *const hg_fluid,
+    flow: f64,
+    index: usize,
+    buf: *mut c_char,
+    len: usize,
+    needed: *mut usize,
+    share: *mut f64,
+) -> i32 {
+    guard(|| {
+        ffi::check_outs(&[out_ptr("needed", needed), out_ptr("share", share)])?;
+        // SAFETY: forwarded contract.
+        let (l, f) = unsafe { (ffi::handle("line", line)?, ffi::handle("fluid", fluid)?) };
+        let r = l.line()?.evaluate(&f.fluid, flow)?;
+        let c = r.head_loss_band.contributions.get(index).ok_or_else(|| {
+            Error::out_of_range(
+                "index",
+                index as f64,
+                format!(
+                    "must be less than {} (the number of sources of this band)",
+                    r.head_loss_band.contributions.len()
+                ),
+            )
+        })?;
+        // SAFETY: forwarded contract; checked above.
+        unsafe {
+            put("share", share, c.share)?;
+            ffi::copy_name(&c.source, buf, len, needed)
+        }
+    })
+}

@@ -1,0 +1,180 @@
+//! Wall roughness of catalogue materials and standard pipe sizes.
+
+use crate::ffi::{self, guard, out_ptr, put};
+use hydrograde::roughness;
+use hydrograde::sizes::{self, PipeTable};
+use std::ffi::c_char;
+
+/// Absolute roughness of new pipe of the catalogue material `material` (e.g.
+/// "commercial_steel"; see `hg_roughness_material_name`): `*typical`, and the quoted
+/// range `*low` to `*high`, all in m (handbook values; common practice).
+///
+/// Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` (the message lists the catalogue);
+/// `HG_ERR_INVALID` for a name not UTF-8; `HG_ERR_NULL_POINTER`. Thread-safe.
+///
+/// # Safety
+/// `material` must be NULL or a NUL-terminated string; the outputs NULL or writable.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_roughness(
+    material: *const c_char,
+    typical: *mut f64,
+    low: *mut f64,
+    high: *mut f64,
+) -> i32 {
+    guard(|| {
+        ffi::check_outs(&[
+            out_ptr("typical", typical),
+            out_ptr("low", low),
+            out_ptr("high", high),
+        ])?;
+        // SAFETY: forwarded contract.
+        let m = roughness::material(unsafe { ffi::c_str("material", material)? })?;
+        // SAFETY: forwarded contract; checked above.
+        unsafe {
+            put("typical", typical, m.typical)?;
+            put("low", low, m.low)?;
+            put("high", high, m.high)
+        }
+    })
+}
+
+/// Copies the name of catalogue material number `index` (0-based) into `buf` (at most
+/// `len - 1` bytes and a NUL) and stores its full length in `*needed`.
+///
+/// Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` past the end; `HG_ERR_BUFFER_TOO_SMALL` when
+/// the name did not fit (the cut copy is still written); `HG_ERR_NULL_POINTER` for a NULL
+/// `needed`, or a NULL `buf` with `len` > 0. Thread-safe.
+///
+/// # Safety
+/// `buf` must be NULL or valid for writing `len` bytes; `needed` NULL or writable.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_roughness_material_name(
+    index: usize,
+    buf: *mut c_char,
+    len: usize,
+    needed: *mut usize,
+) -> i32 {
+    guard(|| {
+        let names = roughness::names();
+        let name = ffi::list_item("index", &names, index)?;
+        // SAFETY: forwarded contract.
+        unsafe { ffi::copy_name(name, buf, len, needed) }
+    })
+}
+
+/// Roughness `*roughness` (m) after `years` of service growing linearly from `initial`
+/// (m) at `rate` (m per year): ε = ε₀ + α·t (Colebrook & White 1937 aging model).
+///
+/// Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a negative argument;
+/// `HG_ERR_NULL_POINTER`. Thread-safe.
+///
+/// # Safety
+/// `roughness` must be NULL or point to a writable double.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_roughness_aged(
+    initial: f64,
+    rate: f64,
+    years: f64,
+    roughness: *mut f64,
+) -> i32 {
+    guard(|| {
+        ffi::check_outs(&[out_ptr("roughness", roughness)])?;
+        let r = roughness::aged(initial, rate, years)?;
+        // SAFETY: forwarded contract.
+        unsafe { put("roughness", roughness, r) }
+    })
+}
+
+/// Dimensions of a standard pipe: `table` ("steel" ASME B36.10M, "stainless" ASME
+/// B36.19M, "copper" ASTM B88, "pvc" ASTM D1785), `nominal` size as printed ("2",
+/// "1-1/2", "3/4") and `schedule` or tube type ("40", "STD", "10S", "K"): outside
+/// diameter, wall thickness and inside diameter, all in m.
+///
+/// Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` for a table, size or schedule not listed (the
+/// message lists the known ones); `HG_ERR_INVALID` for a string not UTF-8;
+/// `HG_ERR_NULL_POINTER`. Thread-safe.
+///
+/// # Safety
+/// The strings must be NULL or NUL-terminated; the outputs NULL or writable doubles.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_pipe_size(
+    table: *const c_char,
+    nominal: *const c_char,
+    schedule: *const c_char,
+    outside_diameter: *mut f64,
+    wall: *mut f64,
+    inside_diameter: *mut f64,
+) -> i32 {
+    guard(|| {
+        ffi::check_outs(&[
+            out_ptr("outside_diameter", outside_diameter),
+            out_ptr("wall", wall),
+            out_ptr("inside_diameter", inside_diameter),
+        ])?;
+        // SAFETY: forwarded contract.
+        let (t, n, s) = unsafe {
+            (
+                ffi::c_str("table", table)?,
+                ffi::c_str("nominal", nominal)?,
+                ffi::c_str("schedule", schedule)?,
+            )
+        };
+        let p = sizes::lookup(t.parse::<PipeTable>()?, n, s)?;
+        // SAFETY: forwarded contract; checked above.
+        unsafe {
+            put("outside_diameter", outside_diameter, p.outside_diameter)?;
+            put("wall", wall, p.wall)?;
+            put("inside_diameter", inside_diameter, p.inside_diameter)
+        }
+    })
+}
+
+/// The smallest standard pipe of `table` in `schedule` (as `hg_pipe_size`) whose inside
+/// diameter is at least `min_inside_diameter` (m, > 0): its inside diameter in
+/// `*inside_diameter` (m) and its nominal size copied into `nominal` (at most `len - 1`
+/// bytes and a NUL; full length in `*needed`).
+///
+/// Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`
+/// for a diameter ≤ 0 or larger than the table's largest; `HG_ERR_BUFFER_TOO_SMALL`
+/// when the nominal size did not fit (the diameter is still written);
+/// `HG_ERR_NULL_POINTER`. Thread-safe.
+///
+/// # Safety
+/// The strings must be NULL or NUL-terminated; `nominal` NULL or valid for `len` bytes;
+/// `needed` and `inside_diameter` NULL or writable.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_pipe_size_at_least(
+    table: *const c_char,
+    schedule: *const c_char,
+    min_inside_diameter: f64,
+    inside_diameter: *mut f64,
+    nominal: *mut c_char,
+    len: usize,
+    needed: *mut usize,
+) -> i32 {
+    guard(|| {
+        ffi::check_outs(&[
+            out_ptr("inside_diameter", inside_diameter),
+            out_ptr("needed", needed),
+        ])?;
+        if len > 0 && nominal.is_null() {
+            return Err(ffi::Fail::new(
+                crate::HG_ERR_NULL_POINTER,
+                "nominal: must not be NULL",
+            ));
+        }
+        // SAFETY: forwarded contract.
+        let (t, s) = unsafe {
+            (
+                ffi::c_str("table", table)?,
+                ffi::c_str("schedule", schedule)?,
+            )
+        };
+        let p = sizes::smallest_at_least(t.parse::<PipeTable>()?, s, min_inside_diameter)?;
+        // SAFETY: forwarded contract; checked above.
+        unsafe {
+            put("inside_diameter", inside_diameter, p.inside_diameter)?;
+            ffi::copy_name(&p.nominal, nominal, len, needed)
+        }
+    })
+}

@@ -1,0 +1,532 @@
+#define _POSIX_C_SOURCE 200809L
+/* Lines and fluid handles through the C ABI: results against the Rust core bit for bit
+ * (the invented scenarios of capi/examples/core_reference.rs, built here the same way),
+ * bad input and bad handles, the growable result struct, and 8 threads evaluating one
+ * line at once.
+ * Usage: test_line REFERENCE_FILE */
+#include <math.h>
+#include <pthread.h>
+#include <stddef.h>
+#include <stdlib.h>
+
+#include "hydrograde.h"
+#include "check.h"
+#include "records.h"
+
+static const char *ref_path;
+static hg_line *lines[3];
+static hg_fluid *fluids[3];
+
+static size_t msg_len(void) { return hg_last_error(NULL, 0); }
+
+/* The same routes as `scenario` in capi/examples/core_reference.rs. */
+static int32_t build_scenario(int n, hg_line **out) {
+  int32_t s = hg_line_new(out);
+  hg_line *l = *out;
+  if (n == 0) {
+    s |= hg_line_set_inlet_pressure(l, 3e5);
+    s |= hg_line_add_pipe(l, 0.05, 30.0, 4.5e-5);
+    s |= hg_line_add_fitting(l, "elbow_90_standard", 0.0);
+    s |= hg_line_add_fitting(l, "swing_check_valve", 0.0);
+    s |= hg_line_add_rise(l, 3.0);
+    s |= hg_line_add_fitting_k(l, 0.5, 0.0);
+    s |= hg_line_add_pipe(l, 0.04, 12.0, 1.5e-6);
+    s |= hg_line_add_equipment(l, "strainer", 2e4, 2e-3);
+  } else if (n == 2) {
+    hg_uncertainty_options u;
+    s |= hg_uncertainty_options_default(&u);
+    u.diameter = 0.01;
+    s |= hg_line_set_uncertainty(l, &u);
+    s |= hg_line_set_turbulent_diameter(l, HG_TURBULENT_DIAMETER_LAMINAR_EQUIVALENT);
+    s |= hg_line_add_entrance(l, HG_ENTRANCE_ROUNDED, 0.1);
+    s |= hg_line_add_pipe_material(l, 0.1, 40.0, "commercial_steel");
+    s |= hg_line_add_bend(l, 90.0, 1.5, 0.0);
+    s |= hg_line_add_two_k(l, 800.0, 0.25, 0.0);
+    s |= hg_line_add_three_k(l, 500.0, 0.15, 4.0, 0.0);
+    s |= hg_line_add_cv(l, 120.0, 0.0);
+    s |= hg_line_set_k_spread(l, 5, 0.2);
+    s |= hg_line_add_kv(l, 100.0, 0.0);
+    s |= hg_line_add_equivalent_length(l, 30.0, 0.0);
+    s |= hg_line_add_expansion(l, 0.1, 0.15);
+    s |= hg_line_add_custom_duct(l, 0.0177, 0.48, 62.0, 10.0, 1e-4);
+    s |= hg_line_add_contraction(l, 0.15, 0.08);
+    s |= hg_line_add_pipe(l, 0.08, 5.0, 1.5e-6);
+    s |= hg_line_add_exit(l);
+    s |= hg_line_add_entrance(l, HG_ENTRANCE_PROJECTING, 0.0);
+    s |= hg_line_add_entrance(l, HG_ENTRANCE_SHARP, 0.0);
+    s |= hg_line_add_duct(l, HG_SECTION_RECTANGLE, 0.12, 0.06, 3.0, 5e-5);
+    s |= hg_line_set_roughness_range(l, 11, 1e-6, 5e-6);
+  } else {
+    hg_friction_options o;
+    s |= hg_friction_options_default(&o);
+    o.correlation = HG_CORRELATION_HAALAND;
+    s |= hg_line_set_friction_options(l, &o);
+    s |= hg_line_add_fitting_k(l, 1.5, 0.15);
+    s |= hg_line_add_duct(l, HG_SECTION_RECTANGLE, 0.2, 0.1, 50.0, 1e-4);
+    s |= hg_line_add_rise(l, -2.0);
+  }
+  return s;
+}
+
+static long check_line_record(const record *r, int quiet) {
+  const hg_line *l = lines[r->in[0].i];
+  const hg_fluid *f = fluids[r->in[1].i];
+  double got[64];
+  int ngot = 0;
+  int32_t s = -1;
+  if (strcmp(r->tag, "line_eval") == 0) {
+    hg_line_result x;
+    memset(&x, 0, sizeof x);
+    x.struct_size = sizeof x;
+    s = hg_line_evaluate(l, f, r->in[2].d, &x);
+    double g[] = {x.head_loss, x.pressure_loss, x.static_head, x.required_head, x.drequired_head_dflow,
+                  x.density, x.outlet_pressure, x.warnings, (double)x.element_count, x.head_loss_low,
+                  x.head_loss_high, x.required_head_low, x.required_head_high};
+    memcpy(got, g, sizeof g), ngot = 13;
+  } else if (strcmp(r->tag, "line_element") == 0) {
+    hg_element_result e;
+    memset(&e, 0, sizeof e);
+    e.struct_size = sizeof e;
+    s = hg_line_element(l, f, r->in[2].d, (size_t)r->in[3].i, &e);
+    double g[] = {e.velocity, e.reynolds, e.friction_factor, e.k, e.head_loss, e.dhead_dflow,
+                  e.pressure_out, e.warnings, e.head_loss_low, e.head_loss_high};
+    memcpy(got, g, sizeof g), ngot = 10;
+  } else if (strcmp(r->tag, "line_required_head") == 0) {
+    s = hg_line_required_head(l, f, r->in[2].d, &got[0], &got[1]), ngot = 2;
+  } else if (strcmp(r->tag, "line_uniform") == 0) {
+    hg_line *u = NULL;
+    s = hg_line_with_uniform_diameter(l, r->in[2].d, &u);
+    if (s == HG_OK) {
+      hg_line_result x;
+      memset(&x, 0, sizeof x);
+      x.struct_size = sizeof x;
+      s = hg_line_evaluate(u, f, 2e-3, &x);
+      got[0] = x.head_loss, got[1] = x.required_head, got[2] = x.head_loss_high, ngot = 3;
+    }
+    hg_line_free(u);
+  } else if (strcmp(r->tag, "line_flow_for_head") == 0) {
+    s = hg_line_flow_for_head(l, f, r->in[2].d, &got[0], &got[1], &got[2]), ngot = 3;
+  } else if (strcmp(r->tag, "line_band_source") == 0) {
+    char name[64] = "";
+    size_t need = 0;
+    double share = -1;
+    s = hg_line_band_source(l, f, r->in[2].d, (size_t)r->in[3].i, name, sizeof name, &need, &share);
+    int same = r->err ? s == code_of_kind(r->kind) && msg_len() > 0
+                      : s == HG_OK && strcmp(name, r->out[0].s) == 0 && need == strlen(name) &&
+                            bits_of(share) == bits_of(r->out[1].d);
+    if (!quiet) CHECK(same, "band source %lld: status %d '%s'", r->in[3].i, s, name);
+    return !same;
+  } else if (strcmp(r->tag, "line_system_curve") == 0) {
+    double q[50];
+    for (int i = 0; i < 50; i++) q[i] = -5e-3 + 2.5e-4 * i;
+    s = hg_line_system_curve(l, f, q, 50, got), ngot = 50;
+    /* In place gives the same. */
+    if (s == HG_OK && (hg_line_system_curve(l, f, q, 50, q) != HG_OK || memcmp(q, got, sizeof q) != 0)) s = -2;
+  }
+  if (strcmp(r->tag, "line_operating_point") == 0 || strcmp(r->tag, "line_split_flow") == 0 ||
+      strcmp(r->tag, "line_size") == 0)
+    return 0; /* checked by check_solve_record */
+  int same = r->err ? s == code_of_kind(r->kind) && msg_len() > 0 : s == HG_OK && same_outputs(r, got, ngot);
+  if (!quiet) CHECK(same, "%s scenario %lld fluid %lld: status %d (want %s)", r->tag, r->in[0].i, r->in[1].i, s,
+                    r->err ? r->kind : "HG_OK");
+  return !same;
+}
+
+static void choice_tokens(const hg_size_choice *c, tok *got, int *n) {
+  if (!c->found) {
+    got[(*n)++] = tok_s("-");
+    return;
+  }
+  got[(*n)++] = tok_s(c->nominal);
+  got[(*n)++] = tok_d(c->inside_diameter), got[(*n)++] = tok_d(c->velocity);
+  got[(*n)++] = tok_d(c->pressure_loss), got[(*n)++] = tok_d(c->pressure_loss_low);
+  got[(*n)++] = tok_d(c->pressure_loss_high);
+}
+
+/* Pump operating point, parallel split and sizing, as in `line_solves` of the generator. */
+static long check_solve_record(const record *r, int quiet) {
+  if (strcmp(r->tag, "line_system_curve") == 0) return 0; /* checked by check_line_record */
+  const hg_fluid *f = fluids[r->in[1].i];
+  tok got[16];
+  int n = 0;
+  int32_t s = -1;
+  if (strcmp(r->tag, "line_operating_point") == 0) {
+    const double shut[3] = {40.0, 20.0, 2.0};
+    double q[5] = {0.0, 1e-3, 2e-3, 3e-3, 4e-3}, h[5], o[6];
+    for (int i = 0; i < 5; i++) h[i] = shut[r->in[2].i] * (1.0 - (q[i] / 5e-3) * (q[i] / 5e-3));
+    s = hg_line_operating_point(lines[0], f, q, h, 5, &o[0], &o[1], &o[2], &o[3], &o[4], &o[5]);
+    for (int i = 0; i < 6; i++) got[n++] = tok_d(o[i]);
+  } else if (strcmp(r->tag, "line_split_flow") == 0) {
+    const hg_line *pair[2] = {lines[0], lines[1]};
+    double q[2], h;
+    s = hg_line_split_flow(pair, 2, f, r->in[2].d, q, &h);
+    got[n++] = tok_d(q[0]), got[n++] = tok_d(q[1]), got[n++] = tok_d(h);
+  } else if (strcmp(r->tag, "line_size") == 0) {
+    const double limit_value[3] = {5e4, 2.0, -1.0};
+    const int32_t limit[3] = {HG_LIMIT_PRESSURE_LOSS, HG_LIMIT_VELOCITY, HG_LIMIT_PRESSURE_LOSS};
+    int none = strcmp(r->in[3].s, "-") == 0;
+    hg_sizing z;
+    memset(&z, 0, sizeof z);
+    z.struct_size = sizeof z;
+    s = hg_line_size(lines[0], f, 3e-3, limit[r->in[2].i], limit_value[r->in[2].i], none ? NULL : r->in[3].s,
+                     none ? NULL : r->in[4].s, &z);
+    got[n++] = tok_d(z.min_inside_diameter);
+    choice_tokens(&z.standard, got, &n);
+    choice_tokens(&z.standard_at_band, got, &n);
+  }
+  int same = r->err ? s == code_of_kind(r->kind) && msg_len() > 0 : s == HG_OK && same_tokens(r, got, n);
+  if (!quiet) CHECK(same, "%s fluid %lld: status %d (want %s)", r->tag, r->in[1].i, s, r->err ? r->kind : "HG_OK");
+  return !same;
+}
+
+static void test_solves_bad_input(void) {
+  hg_fluid *f = fluids[0];
+  const hg_line *l = lines[0];
+  double q[3] = {0.0, 1e-3, 2e-3}, h[3] = {30, 25, 15}, o[6], fl[2], hd;
+  CHECK(hg_line_operating_point(NULL, f, q, h, 3, &o[0], &o[1], &o[2], &o[3], &o[4], &o[5]) == HG_ERR_NULL_POINTER, "op NULL line");
+  CHECK(hg_line_operating_point(l, NULL, q, h, 3, &o[0], &o[1], &o[2], &o[3], &o[4], &o[5]) == HG_ERR_NULL_POINTER, "op NULL fluid");
+  CHECK(hg_line_operating_point(l, f, NULL, h, 3, &o[0], &o[1], &o[2], &o[3], &o[4], &o[5]) == HG_ERR_NULL_POINTER, "op NULL flows");
+  CHECK(hg_line_operating_point(l, f, q, NULL, 3, &o[0], &o[1], &o[2], &o[3], &o[4], &o[5]) == HG_ERR_NULL_POINTER, "op NULL heads");
+  for (int k = 0; k < 6; k++) {
+    double *p[6] = {&o[0], &o[1], &o[2], &o[3], &o[4], &o[5]};
+    p[k] = NULL;
+    CHECK(hg_line_operating_point(l, f, q, h, 3, p[0], p[1], p[2], p[3], p[4], p[5]) == HG_ERR_NULL_POINTER, "op NULL %d", k);
+  }
+  CHECK(hg_line_operating_point(l, f, q, h, 0, &o[0], &o[1], &o[2], &o[3], &o[4], &o[5]) == HG_ERR_INVALID, "op n 0");
+  CHECK(hg_line_operating_point(l, f, q, h, 2, &o[0], &o[1], &o[2], &o[3], &o[4], &o[5]) != HG_OK && msg_len() > 0, "op 2 points");
+  h[1] = NAN;
+  CHECK(hg_line_operating_point(l, f, q, h, 3, &o[0], &o[1], &o[2], &o[3], &o[4], &o[5]) == HG_ERR_NOT_FINITE, "op NaN head");
+  const hg_line *pair[2] = {lines[0], NULL};
+  CHECK(hg_line_split_flow(pair, 2, f, 1e-3, fl, &hd) == HG_ERR_NULL_POINTER && msg_len() > 0, "split NULL branch");
+  pair[1] = lines[1];
+  CHECK(hg_line_split_flow(NULL, 2, f, 1e-3, fl, &hd) == HG_ERR_NULL_POINTER, "split NULL branches");
+  CHECK(hg_line_split_flow(pair, 0, f, 1e-3, fl, &hd) == HG_ERR_INVALID, "split n 0");
+  CHECK(hg_line_split_flow(pair, 2, NULL, 1e-3, fl, &hd) == HG_ERR_NULL_POINTER, "split NULL fluid");
+  CHECK(hg_line_split_flow(pair, 2, f, 1e-3, NULL, &hd) == HG_ERR_NULL_POINTER, "split NULL flows");
+  CHECK(hg_line_split_flow(pair, 2, f, 1e-3, fl, NULL) == HG_ERR_NULL_POINTER, "split NULL head");
+  CHECK(hg_line_split_flow(pair, 2, f, INFINITY, fl, &hd) == HG_ERR_NOT_FINITE, "split inf");
+  hg_sizing z;
+  z.struct_size = sizeof z;
+  CHECK(hg_line_size(NULL, f, 1e-3, 0, 5e4, NULL, NULL, &z) == HG_ERR_NULL_POINTER, "size NULL line");
+  CHECK(hg_line_size(l, NULL, 1e-3, 0, 5e4, NULL, NULL, &z) == HG_ERR_NULL_POINTER, "size NULL fluid");
+  CHECK(hg_line_size(l, f, 1e-3, 0, 5e4, NULL, NULL, NULL) == HG_ERR_NULL_POINTER, "size NULL out");
+  CHECK(hg_line_size(l, f, 1e-3, 0, 5e4, "steel", NULL, &z) == HG_ERR_NULL_POINTER, "size NULL schedule");
+  CHECK(hg_line_size(l, f, 1e-3, 2, 5e4, NULL, NULL, &z) == HG_ERR_OUT_OF_RANGE && msg_len() > 0, "limit 2");
+  CHECK(hg_line_size(l, f, 0.0, 0, 5e4, NULL, NULL, &z) == HG_ERR_OUT_OF_RANGE, "size zero flow");
+  CHECK(hg_line_size(l, f, NAN, 0, 5e4, NULL, NULL, &z) == HG_ERR_NOT_FINITE, "size NaN flow");
+  CHECK(hg_line_size(l, f, 1e-3, 0, NAN, NULL, NULL, &z) == HG_ERR_NOT_FINITE, "size NaN limit");
+  CHECK(hg_line_size(l, f, 1e-3, 1, 2.0, "cast_iron", "40", &z) == HG_ERR_UNKNOWN_NAME, "size unknown table");
+  z.struct_size = 8;
+  CHECK(hg_line_size(l, f, 1e-3, 1, 2.0, NULL, NULL, &z) == HG_ERR_INVALID, "size struct_size 8");
+}
+
+static void test_more_elements_bad_input(void) {
+  hg_line *l = NULL;
+  hg_fluid *f = NULL, *g = NULL;
+  hg_uncertainty_options u;
+  double a = 0, b = 0;
+  CHECK(hg_line_new(&l) == HG_OK, "new");
+  const double bad[] = {NAN, INFINITY, -1.0};
+  for (int i = 0; i < 3; i++) {
+    double v = bad[i];
+    CHECK(hg_line_add_pipe_material(l, v, 10, "plastic") != HG_OK && msg_len() > 0, "material d %g", v);
+    CHECK(hg_line_add_pipe_material(l, 0.1, v, "plastic") != HG_OK, "material L %g", v);
+    CHECK(hg_line_add_custom_duct(l, v, 0.5, 60, 10, 0) != HG_OK, "custom area %g", v);
+    CHECK(hg_line_add_custom_duct(l, 0.01, v, 60, 10, 0) != HG_OK, "custom perimeter %g", v);
+    CHECK(hg_line_add_custom_duct(l, 0.01, 0.5, v, 10, 0) != HG_OK, "custom C %g", v);
+    CHECK(hg_line_add_expansion(l, v, 0.2) != HG_OK && hg_line_add_expansion(l, 0.1, v) != HG_OK, "expansion %g", v);
+    CHECK(hg_line_add_contraction(l, v, 0.1) != HG_OK && hg_line_add_contraction(l, 0.2, v) != HG_OK, "contraction %g", v);
+    CHECK(hg_line_add_two_k(l, v, 0.1, 0) != HG_OK && hg_line_add_two_k(l, 500, v, 0) != HG_OK, "2-K %g", v);
+    CHECK(hg_line_add_two_k(l, 500, 0.1, v) != HG_OK, "2-K diameter %g", v);
+    CHECK(hg_line_add_three_k(l, v, 0.1, 4, 0) != HG_OK && hg_line_add_three_k(l, 500, 0.1, v, 0) != HG_OK, "3-K %g", v);
+    CHECK(hg_line_add_cv(l, v, 0) != HG_OK && hg_line_add_kv(l, v, 0) != HG_OK && msg_len() > 0, "cv kv %g", v);
+    CHECK(hg_line_add_equivalent_length(l, v, 0) != HG_OK, "L/D %g", v);
+    CHECK(hg_line_add_bend(l, v, 1.5, 0) != HG_OK && hg_line_add_bend(l, 90, v, 0) != HG_OK, "bend %g", v);
+    CHECK(hg_line_add_entrance(l, HG_ENTRANCE_ROUNDED, v) != HG_OK, "rounded %g", v);
+    CHECK(hg_line_add_entrance(l, HG_ENTRANCE_SHARP, v) != HG_OK, "sharp with radius %g", v);
+    CHECK(hg_water_saturation_temperature(v, &a) != HG_OK && msg_len() > 0, "saturation %g", v);
+    CHECK(hg_fluid_gas(v, 1.8e-5, 293, 1e5, &f) != HG_OK && f == NULL, "gas density %g", v);
+    CHECK(hg_fluid_gas(1.2, 1.8e-5, v, 1e5, &f) != HG_OK && f == NULL, "gas temperature %g", v);
+  }
+  size_t n = 0;
+  CHECK(hg_line_count(l, &n) == HG_OK && n == 0, "no bad element was added");
+  CHECK(hg_line_add_pipe_material(l, 0.1, 10, "unobtainium") == HG_ERR_UNKNOWN_NAME, "unknown material");
+  CHECK(hg_line_add_pipe_material(l, 0.1, 10, NULL) == HG_ERR_NULL_POINTER, "NULL material");
+  CHECK(hg_line_add_custom_duct(l, 0.01, 0.1, 60, 10, 0) == HG_ERR_OUT_OF_RANGE, "perimeter below the circle's");
+  CHECK(hg_line_add_entrance(l, 3, 0) == HG_ERR_OUT_OF_RANGE && hg_line_add_entrance(l, -1, 0) == HG_ERR_OUT_OF_RANGE, "kind");
+  CHECK(hg_line_add_entrance(l, HG_ENTRANCE_SHARP, 0.1) == HG_ERR_INVALID, "radius on a sharp entrance");
+  CHECK(hg_line_add_pipe(l, 0.05, 10, 0) == HG_OK && hg_line_add_cv(l, 40, 0) == HG_OK, "pipe and valve");
+  CHECK(hg_line_set_k_spread(l, 1, 0.5) == HG_OK, "spread");
+  CHECK(hg_line_set_k_spread(l, 0, 0.5) == HG_ERR_OUT_OF_RANGE && msg_len() > 0, "spread on a pipe");
+  CHECK(hg_line_set_k_spread(l, 7, 0.5) == HG_ERR_OUT_OF_RANGE, "spread past the end");
+  CHECK(hg_line_set_k_spread(l, 1, 1.5) == HG_ERR_OUT_OF_RANGE && hg_line_set_k_spread(l, 1, NAN) == HG_ERR_NOT_FINITE, "spread value");
+  CHECK(hg_line_set_roughness_range(l, 0, 1e-5, 1e-6) == HG_ERR_OUT_OF_RANGE && msg_len() > 0, "range reversed");
+  CHECK(hg_line_set_roughness_range(l, 1, 1e-6, 1e-5) == HG_ERR_OUT_OF_RANGE, "range on a valve");
+  CHECK(hg_line_set_roughness_range(l, 0, NAN, 1e-5) == HG_ERR_NOT_FINITE, "range NaN");
+  CHECK(hg_line_set_roughness_range(l, 0, 1e-6, 1e-5) == HG_OK, "range");
+  CHECK(hg_line_set_turbulent_diameter(l, 2) == HG_ERR_OUT_OF_RANGE, "mode 2");
+  CHECK(hg_uncertainty_options_default(NULL) == HG_ERR_NULL_POINTER, "uncertainty NULL");
+  CHECK(hg_uncertainty_options_default(&u) == HG_OK && u.struct_size == sizeof u && u.friction_model == 1, "defaults");
+  u.fluid = 2;
+  CHECK(hg_line_set_uncertainty(l, &u) == HG_ERR_OUT_OF_RANGE && msg_len() > 0, "flag 2");
+  hg_uncertainty_options_default(&u);
+  u.diameter = -0.1;
+  CHECK(hg_line_set_uncertainty(l, &u) != HG_OK && msg_len() > 0, "negative tolerance");
+  u.diameter = NAN;
+  CHECK(hg_line_set_uncertainty(l, &u) != HG_OK, "NaN tolerance");
+  hg_uncertainty_options_default(&u);
+  u.struct_size = 4;
+  CHECK(hg_line_set_uncertainty(l, &u) == HG_ERR_INVALID, "struct_size 4");
+  CHECK(hg_line_set_uncertainty(l, NULL) == HG_ERR_NULL_POINTER, "NULL options");
+  hg_uncertainty_options_default(&u);
+  u.friction_model = 0, u.roughness = 0, u.fluid = 0, u.fittings = 0, u.equipment = 0;
+  CHECK(hg_line_set_uncertainty(l, &u) == HG_OK, "no sources");
+  CHECK(hg_fluid_liquid(998.2, 1e-3, &f) == HG_OK, "liquid");
+  hg_line_result x;
+  x.struct_size = sizeof x;
+  CHECK(hg_line_evaluate(l, f, 2e-3, &x) == HG_OK && x.head_loss_low == x.head_loss && x.head_loss_high == x.head_loss,
+        "a band without sources has no width");
+  char name[32];
+  size_t need;
+  CHECK(hg_line_band_source(l, f, 2e-3, 0, name, sizeof name, &need, &a) == HG_ERR_OUT_OF_RANGE, "no source");
+  hg_uncertainty_options_default(&u);
+  CHECK(hg_line_set_uncertainty(l, &u) == HG_OK, "default sources");
+  CHECK(hg_line_band_source(l, f, 2e-3, 0, name, sizeof name, &need, &a) == HG_OK && a > 0 && a <= 1, "dominant");
+  CHECK(hg_line_band_source(l, f, 2e-3, 0, name, 2, &need, &a) == HG_ERR_BUFFER_TOO_SMALL && strlen(name) == 1, "cut");
+  CHECK(hg_line_band_source(l, f, 2e-3, 0, name, sizeof name, NULL, &a) == HG_ERR_NULL_POINTER, "NULL needed");
+  CHECK(hg_line_band_source(l, f, 2e-3, 0, name, sizeof name, &need, NULL) == HG_ERR_NULL_POINTER, "NULL share");
+  CHECK(hg_line_band_source(NULL, f, 2e-3, 0, name, sizeof name, &need, &a) == HG_ERR_NULL_POINTER, "NULL line");
+  CHECK(hg_line_band_source(l, NULL, 2e-3, 0, name, sizeof name, &need, &a) == HG_ERR_NULL_POINTER, "NULL fluid");
+  CHECK(hg_line_band_source(l, f, NAN, 0, name, sizeof name, &need, &a) == HG_ERR_NOT_FINITE, "NaN flow");
+  CHECK(hg_fluid_with_uncertainty(NULL, 0.1, 0.1, &g) == HG_ERR_NULL_POINTER && g == NULL, "with NULL fluid");
+  CHECK(hg_fluid_with_uncertainty(f, 1.5, 0.1, &g) == HG_ERR_OUT_OF_RANGE && g == NULL, "uncertainty 1.5");
+  CHECK(hg_fluid_with_uncertainty(f, 0.1, NAN, &g) == HG_ERR_NOT_FINITE && g == NULL, "uncertainty NaN");
+  CHECK(hg_fluid_with_uncertainty(f, 0.1, 0.1, NULL) == HG_ERR_NULL_POINTER, "with NULL out");
+  CHECK(hg_fluid_with_vapour_pressure(f, -1.0, &g) == HG_ERR_OUT_OF_RANGE && g == NULL, "vapour -1");
+  CHECK(hg_fluid_with_vapour_pressure(NULL, 2e3, &g) == HG_ERR_NULL_POINTER, "vapour NULL fluid");
+  CHECK(hg_fluid_with_vapour_pressure(f, 2e3, NULL) == HG_ERR_NULL_POINTER, "vapour NULL out");
+  CHECK(hg_fluid_with_vapour_pressure(f, 2.5e5, &g) == HG_OK && g != NULL, "vapour pressure");
+  CHECK(hg_line_set_inlet_pressure(l, 1.5e5) == HG_OK, "inlet");
+  CHECK(hg_line_evaluate(l, g, 5e-3, &x) == HG_OK && (x.warnings & HG_WARN_BELOW_VAPOUR_PRESSURE), "cavitation warned");
+  CHECK(hg_fluid_properties(g, &a, &b) == HG_OK && a == 998.2 && b == 1e-3, "copy keeps the properties");
+  CHECK(hg_fluid_gas(1.2, 1.8e-5, 293.15, 1e5, NULL) == HG_ERR_NULL_POINTER, "gas NULL out");
+  CHECK(hg_water_saturation_temperature(1e5, NULL) == HG_ERR_NULL_POINTER, "saturation NULL");
+  hg_fluid_free(g);
+  hg_fluid_free(f);
+  hg_line_free(l);
+}
+
+static void test_handles_and_bad_input(void) {
+  hg_line *l = NULL;
+  hg_fluid *f = NULL;
+  hg_line_result x;
+  hg_element_result e;
+  double q = 1e-3, a, b, c;
+  size_t n = 99, need = 0;
+  char buf[32];
+  x.struct_size = sizeof x, e.struct_size = sizeof e;
+  hg_line_free(NULL);
+  hg_fluid_free(NULL);
+  CHECK(hg_line_new(NULL) == HG_ERR_NULL_POINTER && msg_len() > 0, "line_new NULL");
+  CHECK(hg_fluid_water(293.15, 1e5, NULL) == HG_ERR_NULL_POINTER, "fluid NULL out");
+  CHECK(hg_fluid_water(NAN, 1e5, &f) == HG_ERR_NOT_FINITE && f == NULL, "water NaN");
+  CHECK(hg_fluid_air(150.0, 1e5, &f) == HG_ERR_OUT_OF_RANGE && f == NULL, "air too cold");
+  CHECK(hg_fluid_liquid(-1.0, 1e-3, &f) == HG_ERR_OUT_OF_RANGE && f == NULL, "negative density");
+  CHECK(hg_fluid_liquid(1000.0, INFINITY, &f) == HG_ERR_NOT_FINITE && f == NULL, "inf viscosity");
+  CHECK(hg_fluid_air(293.15, 1e5, &f) == HG_OK && f != NULL, "air");
+  CHECK(hg_fluid_properties(f, &a, &b) == HG_OK && a > 1.0 && a < 1.3 && b > 1e-5, "air properties");
+  double rho, mu;
+  CHECK(hg_air(293.15, 1e5, &rho, &mu) == HG_OK && bits_of(rho) == bits_of(a) && bits_of(mu) == bits_of(b),
+        "hg_air equals the handle's");
+  CHECK(hg_fluid_properties(NULL, &a, &b) == HG_ERR_NULL_POINTER, "properties NULL fluid");
+  CHECK(hg_fluid_properties(f, NULL, &b) == HG_ERR_NULL_POINTER, "properties NULL out");
+  CHECK(hg_fluid_properties(f, &a, NULL) == HG_ERR_NULL_POINTER, "properties NULL out");
+
+  CHECK(hg_line_new(&l) == HG_OK && l != NULL, "line_new");
+  CHECK(hg_line_count(l, &n) == HG_OK && n == 0, "empty count");
+  CHECK(hg_line_count(NULL, &n) == HG_ERR_NULL_POINTER && hg_line_count(l, NULL) == HG_ERR_NULL_POINTER, "count NULL");
+  CHECK(hg_line_evaluate(l, f, q, &x) == HG_ERR_INVALID && msg_len() > 0, "empty line");
+  CHECK(hg_line_add_fitting(l, "gate_valve", 0.0) == HG_OK, "fitting first");
+  CHECK(hg_line_evaluate(l, f, q, &x) == HG_ERR_INVALID && msg_len() > 0, "fitting with no pipe");
+  CHECK(hg_line_add_pipe(l, 0.05, 10.0, 4.5e-5) == HG_OK, "pipe after it");
+  CHECK(hg_line_evaluate(l, f, q, &x) == HG_OK, "fitting takes the next pipe's bore");
+  const double bad[] = {NAN, INFINITY, -INFINITY, -1.0, 0.0};
+  for (int i = 0; i < 5; i++) {
+    double v = bad[i];
+    int neg_or_zero = i >= 3;
+    CHECK(hg_line_add_pipe(l, v, 10, 0) != HG_OK && msg_len() > 0, "pipe diameter %g", v);
+    CHECK(hg_line_add_pipe(l, 0.05, v, 0) != HG_OK && msg_len() > 0, "pipe length %g", v);
+    if (i != 4) CHECK(hg_line_add_pipe(l, 0.05, 10, v) != HG_OK && msg_len() > 0, "pipe roughness %g", v);
+    CHECK(hg_line_add_duct(l, HG_SECTION_RECTANGLE, v, 0.1, 10, 0) != HG_OK, "duct a %g", v);
+    CHECK(hg_line_add_duct(l, HG_SECTION_RECTANGLE, 0.1, v, 10, 0) != HG_OK, "duct b %g", v);
+    if (i != 4) CHECK(hg_line_add_fitting(l, "gate_valve", v) != HG_OK && msg_len() > 0, "fitting diameter %g", v);
+    if (i != 4) CHECK(hg_line_add_fitting_k(l, v, 0.0) != HG_OK, "k %g", v);
+    if (!neg_or_zero) CHECK(hg_line_add_rise(l, v) == HG_ERR_NOT_FINITE && msg_len() > 0, "rise %g", v);
+    CHECK(hg_line_add_equipment(l, "meter", v, 1e-3) != HG_OK, "drop %g", v);
+    CHECK(hg_line_add_equipment(l, "meter", 1e4, v) != HG_OK, "at_flow %g", v);
+    if (i != 4) CHECK(hg_line_set_inlet_pressure(l, v) != HG_OK && msg_len() > 0, "inlet %g", v);
+    int32_t st = hg_line_evaluate(l, f, v, &x);
+    /* -1 m3/s of air would lose far more than its inlet pressure: no solution. */
+    CHECK(neg_or_zero ? st == HG_OK || (st == HG_ERR_NO_SOLUTION && msg_len() > 0) : st == HG_ERR_NOT_FINITE,
+          "flow %g: %d", v, st);
+    CHECK(hg_line_flow_for_head(l, f, v, &a, &b, &c) == (neg_or_zero ? HG_ERR_NO_SOLUTION : HG_ERR_NOT_FINITE) ||
+              (neg_or_zero && hg_line_flow_for_head(l, f, v, &a, &b, &c) == HG_OK),
+          "head %g", v);
+  }
+  CHECK(hg_line_count(l, &n) == HG_OK && n == 2, "bad elements were not added: %zu", n);
+  CHECK(hg_line_add_duct(l, 7, 0.1, 0.1, 10, 0) == HG_ERR_OUT_OF_RANGE, "shape 7");
+  CHECK(hg_line_add_fitting(l, "nonesuch", 0.0) == HG_ERR_UNKNOWN_NAME && msg_len() > 0, "unknown fitting");
+  CHECK(hg_line_add_fitting(l, NULL, 0.0) == HG_ERR_NULL_POINTER, "fitting NULL name");
+  CHECK(hg_line_add_equipment(l, NULL, 1e4, 1e-3) == HG_ERR_NULL_POINTER, "equipment NULL name");
+  CHECK(hg_line_add_equipment(l, "\xff", 1e4, 1e-3) == HG_ERR_INVALID, "equipment not UTF-8");
+  CHECK(hg_line_add_pipe(NULL, 0.05, 10, 0) == HG_ERR_NULL_POINTER, "add to NULL line");
+  CHECK(hg_line_add_duct(NULL, 0, 0.05, 0, 10, 0) == HG_ERR_NULL_POINTER, "add to NULL line");
+  CHECK(hg_line_add_fitting(NULL, "gate_valve", 0) == HG_ERR_NULL_POINTER, "add to NULL line");
+  CHECK(hg_line_add_fitting_k(NULL, 1, 0) == HG_ERR_NULL_POINTER, "add to NULL line");
+  CHECK(hg_line_add_rise(NULL, 1) == HG_ERR_NULL_POINTER, "add to NULL line");
+  CHECK(hg_line_add_equipment(NULL, "m", 1e4, 1e-3) == HG_ERR_NULL_POINTER, "add to NULL line");
+  CHECK(hg_line_set_inlet_pressure(NULL, 1e5) == HG_ERR_NULL_POINTER, "NULL line");
+  CHECK(hg_line_set_friction_options(l, NULL) == HG_ERR_NULL_POINTER, "NULL options");
+  hg_friction_options o;
+  hg_friction_options_default(&o);
+  CHECK(hg_line_set_friction_options(NULL, &o) == HG_ERR_NULL_POINTER, "NULL line");
+  o.turbulent_limit = 1000.0;
+  CHECK(hg_line_set_friction_options(l, &o) == HG_ERR_OUT_OF_RANGE && msg_len() > 0, "crossed limits");
+  o.turbulent_limit = 4000.0, o.transition = HG_TRANSITION_REFUSE;
+  CHECK(hg_line_set_friction_options(l, &o) == HG_OK, "refuse");
+  double q_tr = 0.05 * 0.05 * 3.14159 / 4 * 3000.0 * 1.8e-5 / 1.19 / 0.05; /* Re about 3000 in air */
+  CHECK(hg_line_evaluate(l, f, q_tr, &x) == HG_ERR_NO_SOLUTION && msg_len() > 0, "transitional refused");
+  hg_friction_options_default(&o);
+  CHECK(hg_line_set_friction_options(l, &o) == HG_OK, "defaults back");
+  CHECK(hg_line_set_inlet_pressure(l, 0.0) == HG_OK, "clear inlet pressure");
+
+  CHECK(hg_line_evaluate(NULL, f, q, &x) == HG_ERR_NULL_POINTER, "evaluate NULL line");
+  CHECK(hg_line_evaluate(l, NULL, q, &x) == HG_ERR_NULL_POINTER, "evaluate NULL fluid");
+  CHECK(hg_line_evaluate(l, f, q, NULL) == HG_ERR_NULL_POINTER, "evaluate NULL out");
+  x.struct_size = offsetof(hg_line_result, head_loss_low);
+  CHECK(hg_line_evaluate(l, f, q, &x) == HG_ERR_INVALID && msg_len() > 0, "struct_size below the first release");
+  /* A newer caller's larger struct: the library fills what it knows and leaves the rest. */
+  unsigned char big[sizeof(hg_line_result) + 64];
+  memset(big, 0xAB, sizeof big);
+  hg_line_result *xb = (hg_line_result *)(void *)big;
+  xb->struct_size = sizeof big;
+  CHECK(hg_line_evaluate(l, f, q, xb) == HG_OK && xb->struct_size == sizeof big, "larger struct");
+  int tail_ok = 1;
+  for (size_t i = sizeof(hg_line_result); i < sizeof big; i++) tail_ok &= big[i] == 0xAB;
+  CHECK(tail_ok && xb->element_count == 2, "bytes past our struct untouched");
+  x.struct_size = sizeof x;
+  CHECK(hg_line_evaluate(l, f, q, &x) == HG_OK && x.has_pressures == 1 && x.inlet_pressure == 1e5,
+        "a gas carries its own pressure");
+
+  CHECK(hg_line_element(l, f, q, 1, &e) == HG_OK && e.kind == HG_ELEMENT_PIPE && e.regime == HG_REGIME_LAMINAR && e.reynolds > 0,
+        "element 1 is the pipe");
+  CHECK(hg_line_element(l, f, q, 0, &e) == HG_OK && e.kind == HG_ELEMENT_FITTING && e.regime == -1 && e.k > 0,
+        "element 0 is the valve");
+  CHECK(hg_line_element(l, f, q, 2, &e) == HG_ERR_OUT_OF_RANGE && msg_len() > 0, "index past the end");
+  CHECK(hg_line_element(l, f, q, SIZE_MAX, &e) == HG_ERR_OUT_OF_RANGE, "index SIZE_MAX");
+  CHECK(hg_line_element(NULL, f, q, 0, &e) == HG_ERR_NULL_POINTER, "element NULL line");
+  CHECK(hg_line_element(l, NULL, q, 0, &e) == HG_ERR_NULL_POINTER, "element NULL fluid");
+  CHECK(hg_line_element(l, f, q, 0, NULL) == HG_ERR_NULL_POINTER, "element NULL out");
+  CHECK(hg_line_element(l, f, NAN, 0, &e) == HG_ERR_NOT_FINITE, "element NaN flow");
+  e.struct_size = 0;
+  CHECK(hg_line_element(l, f, q, 0, &e) == HG_ERR_INVALID, "element struct_size 0");
+
+  CHECK(hg_line_element_label(l, f, q, 0, buf, sizeof buf, &need) == HG_OK && strcmp(buf, "gate_valve") == 0 &&
+            need == 10, "label '%s'", buf);
+  CHECK(hg_line_element_label(l, f, q, 1, buf, sizeof buf, &need) == HG_OK && strcmp(buf, "pipe") == 0, "label pipe");
+  CHECK(hg_line_element_label(l, f, q, 0, buf, 4, &need) == HG_ERR_BUFFER_TOO_SMALL && strcmp(buf, "gat") == 0 &&
+            need == 10, "label cut");
+  CHECK(hg_line_element_label(l, f, q, 0, NULL, 0, &need) == HG_ERR_BUFFER_TOO_SMALL && need == 10, "label length");
+  CHECK(hg_line_element_label(l, f, q, 0, NULL, 8, &need) == HG_ERR_NULL_POINTER, "label NULL buf");
+  CHECK(hg_line_element_label(l, f, q, 0, buf, sizeof buf, NULL) == HG_ERR_NULL_POINTER, "label NULL needed");
+  CHECK(hg_line_element_label(l, f, q, 5, buf, sizeof buf, &need) == HG_ERR_OUT_OF_RANGE, "label index");
+  CHECK(hg_line_element_label(NULL, f, q, 0, buf, sizeof buf, &need) == HG_ERR_NULL_POINTER, "label NULL line");
+
+  CHECK(hg_line_required_head(NULL, f, q, &a, &b) == HG_ERR_NULL_POINTER, "required NULL line");
+  CHECK(hg_line_required_head(l, NULL, q, &a, &b) == HG_ERR_NULL_POINTER, "required NULL fluid");
+  CHECK(hg_line_required_head(l, f, q, NULL, &b) == HG_ERR_NULL_POINTER, "required NULL head");
+  CHECK(hg_line_required_head(l, f, q, &a, NULL) == HG_ERR_NULL_POINTER, "required NULL slope");
+  CHECK(hg_line_required_head(l, f, -INFINITY, &a, &b) == HG_ERR_NOT_FINITE && msg_len() > 0, "required -inf");
+  hg_line *u = NULL;
+  CHECK(hg_line_with_uniform_diameter(NULL, 0.05, &u) == HG_ERR_NULL_POINTER && u == NULL, "uniform NULL line");
+  CHECK(hg_line_with_uniform_diameter(l, 0.05, NULL) == HG_ERR_NULL_POINTER, "uniform NULL out");
+  CHECK(hg_line_with_uniform_diameter(l, -0.05, &u) == HG_ERR_OUT_OF_RANGE && u == NULL && msg_len() > 0, "uniform -d");
+  CHECK(hg_line_with_uniform_diameter(l, NAN, &u) == HG_ERR_NOT_FINITE && u == NULL, "uniform NaN");
+  CHECK(hg_line_with_uniform_diameter(l, 0.08, &u) == HG_OK && u != NULL, "uniform");
+  CHECK(hg_line_add_rise(u, 1.0) == HG_OK && hg_line_count(u, &n) == HG_OK && n == 3, "the copy grows on its own");
+  CHECK(hg_line_count(l, &n) == HG_OK && n == 2, "the original is unchanged");
+  hg_line_free(u);
+  CHECK(hg_line_flow_for_head(NULL, f, 1, &a, &b, &c) == HG_ERR_NULL_POINTER, "solve NULL line");
+  CHECK(hg_line_flow_for_head(l, NULL, 1, &a, &b, &c) == HG_ERR_NULL_POINTER, "solve NULL fluid");
+  CHECK(hg_line_flow_for_head(l, f, 1, NULL, &b, &c) == HG_ERR_NULL_POINTER, "solve NULL flow");
+  CHECK(hg_line_flow_for_head(l, f, 1, &a, NULL, &c) == HG_ERR_NULL_POINTER, "solve NULL low");
+  CHECK(hg_line_flow_for_head(l, f, 1, &a, &b, NULL) == HG_ERR_NULL_POINTER, "solve NULL high");
+  CHECK(hg_line_flow_for_head(l, f, 1.0, &a, &b, &c) == HG_OK && b <= a && a <= c, "solve band");
+  /* Round trip: the required head at the solved flow is the head asked for. */
+  CHECK(hg_line_evaluate(l, f, a, &x) == HG_OK && fabs(x.required_head - 1.0) < 1e-9, "round trip %.17g",
+        x.required_head);
+
+  double qs[3] = {1e-3, 2e-3, NAN}, hs[3] = {7, 7, 7};
+  CHECK(hg_line_system_curve(l, f, qs, 3, hs) == HG_ERR_NOT_FINITE && hs[0] == 7 && msg_len() > 0, "curve NaN");
+  CHECK(hg_line_system_curve(l, f, qs, 0, hs) == HG_ERR_INVALID && msg_len() > 0, "curve n 0");
+  CHECK(hg_line_system_curve(l, f, NULL, 2, hs) == HG_ERR_NULL_POINTER, "curve NULL flows");
+  CHECK(hg_line_system_curve(l, f, qs, 2, NULL) == HG_ERR_NULL_POINTER, "curve NULL heads");
+  CHECK(hg_line_system_curve(NULL, f, qs, 2, hs) == HG_ERR_NULL_POINTER, "curve NULL line");
+  CHECK(hg_line_system_curve(l, NULL, qs, 2, hs) == HG_ERR_NULL_POINTER, "curve NULL fluid");
+  CHECK(hg_line_system_curve(l, f, qs, 2, hs) == HG_OK && hs[2] == 7, "curve writes n heads");
+  hg_line_free(l);
+  hg_fluid_free(f);
+}
+
+typedef struct {
+  long bad;
+} thread_arg;
+
+static void *worker(void *p) {
+  thread_arg *t = p;
+  t->bad += for_each_record(ref_path, "line_", check_line_record, 1);
+  t->bad += for_each_record(ref_path, "line_operating_point", check_solve_record, 1);
+  t->bad += for_each_record(ref_path, "line_s", check_solve_record, 1);
+  return NULL;
+}
+
+int main(int argc, char **argv) {
+  if (argc < 2) {
+    fprintf(stderr, "usage: %s REFERENCE_FILE\n", argv[0]);
+    return 2;
+  }
+  ref_path = argv[1];
+  for (int i = 0; i < 3; i++) CHECK(build_scenario(i, &lines[i]) == HG_OK, "scenario %d", i);
+  CHECK(hg_fluid_liquid(998.2, 1.002e-3, &fluids[0]) == HG_OK, "liquid");
+  CHECK(hg_fluid_water(293.15, 2e5, &fluids[1]) == HG_OK, "water");
+  hg_fluid *gas = NULL;
+  CHECK(hg_fluid_gas(1.2, 1.8e-5, 293.15, 101325.0, &gas) == HG_OK, "gas");
+  CHECK(hg_fluid_with_uncertainty(gas, 0.01, 0.02, &fluids[2]) == HG_OK, "gas with uncertainty");
+  hg_fluid_free(gas);
+  const char *tags[] = {"line_eval", "line_element", "line_band_source", "line_required_head", "line_uniform",
+                        "line_flow_for_head", "line_system_curve", "line_operating_point", "line_split_flow",
+                        "line_size"};
+  for (size_t i = 0; i < sizeof tags / sizeof *tags; i++) {
+    for_each_record(ref_path, tags[i], check_line_record, 1);
+    CHECK(records_seen > 0, "no reference record for %s", tags[i]);
+  }
+  long bad = for_each_record(ref_path, "line_", check_line_record, 0);
+  bad += for_each_record(ref_path, "line_operating_point", check_solve_record, 0);
+  bad += for_each_record(ref_path, "line_s", check_solve_record, 0);
+  test_solves_bad_input();
+  test_more_elements_bad_input();
+  printf("bitwise: line records, %ld differ\n", bad);
+  test_handles_and_bad_input();
+  pthread_t th[8];
+  thread_arg args[8];
+  for (int i = 0; i < 8; i++) {
+    args[i].bad = 0;
+    CHECK(pthread_create(&th[i], NULL, worker, &args[i]) == 0, "thread %d", i);
+  }
+  for (int i = 0; i < 8; i++) {
+    pthread_join(th[i], NULL);
+    CHECK(args[i].bad == 0, "thread %d: %ld differences", i, args[i].bad);
+  }
+  for (int i = 0; i < 3; i++) hg_line_free(lines[i]), hg_fluid_free(fluids[i]);
+  return check_summary("test_line");
+}
