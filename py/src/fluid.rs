@@ -92,6 +92,22 @@ impl PyFluid {
             inner: self.inner.at_pressure(pressure).py()?,
         })
     }
+    /// Reynolds number ρ·|V|·D/μ (dimensionless) at ``velocity`` (m/s, either sign) in
+    /// ``diameter`` (m, > 0). Floats give a float; arrays broadcast.
+    fn reynolds<'py>(
+        &self,
+        py: Python<'py>,
+        velocity: &Bound<'py, PyAny>,
+        diameter: &Bound<'py, PyAny>,
+    ) -> PyResult<Bound<'py, PyAny>> {
+        let f = &self.inner;
+        arrays::map(
+            py,
+            ["velocity", "diameter"],
+            [velocity, diameter],
+            |[v, d]| f.reynolds(v, d),
+        )
+    }
     /// Density ρ, kg/m³.
     #[getter]
     fn density(&self) -> f64 {

@@ -223,3 +223,13 @@ def test_line_flags_and_pipe_with_diameter(route, water):
     assert wider.head_loss(water, 3e-3)[0] < pipe.head_loss(water, 3e-3)[0]
     with pytest.raises(hg.OutOfRangeError, match="diameter"):
         pipe.with_diameter(0.0)
+
+
+def test_fluid_reynolds_number():
+    w = hg.Fluid(1000.0, 1e-3)
+    # Exact: Re = ρ|V|D/μ = 1000 · 2 · 0.05 / 1e-3 = 1e5, whatever the direction.
+    assert w.reynolds(2.0, 0.05) == 1e5
+    assert w.reynolds(-2.0, 0.05) == 1e5
+    np.testing.assert_array_equal(w.reynolds(np.array([1.0, -3.0]), 0.1), [1e5, 3e5])
+    with pytest.raises(hg.OutOfRangeError, match="diameter"):
+        w.reynolds(1.0, 0.0)

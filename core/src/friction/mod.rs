@@ -342,10 +342,8 @@ pub fn check_inputs(re: f64, rel_roughness: f64) -> Result<()> {
 pub fn darcy_factor(re: f64, rel_roughness: f64, opts: &Options) -> Result<Friction> {
     // One combined test on the hot path (NaN fails every comparison); the checks that
     // build the error run only when it fails.
-    let inputs_ok = re > 0.0
-        && re <= MAX_REYNOLDS
-        && rel_roughness >= 0.0
-        && rel_roughness <= MAX_REL_ROUGHNESS;
+    let inputs_ok =
+        re > 0.0 && re <= MAX_REYNOLDS && (0.0..=MAX_REL_ROUGHNESS).contains(&rel_roughness);
     if !inputs_ok {
         check_inputs(re, rel_roughness)?;
     }
