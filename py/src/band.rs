@@ -1,7 +1,14 @@
-//! `hydrograde.Band`: an uncertainty band (GUM, coverage factor k = 2).
+//! `hydrograde.Band` (an uncertainty band, GUM, coverage factor k = 2), `Uncertainty`
+//! (which sources enter the bands) and `monte_carlo` (the sampling check).
 
+use crate::errors::CoreResult;
+use crate::fluid::PyFluid;
+use crate::line::PyLine;
 use crate::state;
-use hydrograde::band::Band;
+use hydrograde::band::{
+    Band, MONTE_CARLO_SAMPLES, MonteCarlo, UncertaintyOptions, monte_carlo as core_monte_carlo,
+};
+use pyo3::exceptions::PyTypeError;
 use pyo3::prelude::*;
 use pyo3::types::{PyBytes, PyDict, PyList, PyType};
 
@@ -113,4 +120,352 @@ impl PyBand {
             inner: state::loads(state)?,
         })
     }
+}
+
+/// Which uncertainty sources enter the bands of a :class:`Line`, and the values that
+/// replace the core's defaults. Every number is a relative standard uncertainty (k = 1).
+///
+/// Keyword arguments left out (or ``None``) keep the core's default
+/// (``Uncertainty()`` is the ``"default"`` preset): ``friction_model`` (bool, include the
+/// correlation's model uncertainty), ``turbulent_model``, ``laminar_model``,
+/// ``non_circular_model`` (model uncertainties of turbulent round-pipe, laminar and
+/// non-circular turbulent friction), ``roughness`` (bool), ``roughness_default`` (used
+/// for pipes with no material range), ``diameter`` (manufacturing tolerance of every
+/// bore), ``fluid`` (bool, density and viscosity), ``fittings`` (bool, K spreads),
+/// ``equipment`` (bool, equipment spreads). :meth:`preset` gives ``"default"``,
+/// ``"none"`` or ``"model_only"``; :meth:`replace` changes some fields of a copy.
+#[pyclass(name = "Uncertainty", module = "hydrograde._native", frozen, eq)]
+#[derive(Clone, PartialEq)]
+pub struct PyUncertainty {
+    /// The core value.
+    pub inner: UncertaintyOptions,
+}
+
+/// The keyword arguments of `Uncertainty`; `None` keeps the value of the base.
+#[derive(Default)]
+struct Fields {
+    friction_model: Option<bool>,
+    turbulent_model: Option<f64>,
+    laminar_model: Option<f64>,
+    non_circular_model: Option<f64>,
+    roughness: Option<bool>,
+    roughness_default: Option<f64>,
+    diameter: Option<f64>,
+    fluid: Option<bool>,
+    fittings: Option<bool>,
+    equipment: Option<bool>,
+}
+
+impl Fields {
+    fn apply(self, mut o: UncertaintyOptions) -> PyResult<PyUncertainty> {
+        let set_b = |v: Option<bool>, t: &mut bool| {
+            if let Some(v) = v {
+                *t = v;
+            }
+        };
+        let set_f = |v: Option<f64>, t: &mut f64| {
+            if let Some(v) = v {
+                *t = v;
+            }
+        };
+        set_b(self.friction_model, &mut o.friction_model);
+        set_f(self.turbulent_model, &mut o.turbulent_model);
+        set_f(self.laminar_model, &mut o.laminar_model);
+        set_f(self.non_circular_model, &mut o.non_circular_model);
+        set_b(self.roughness, &mut o.roughness);
+        set_f(self.roughness_default, &mut o.roughness_default);
+        set_f(self.diameter, &mut o.diameter);
+        set_b(self.fluid, &mut o.fluid);
+        set_b(self.fittings, &mut o.fittings);
+        set_b(self.equipment, &mut o.equipment);
+        o.validate().py()?;
+        Ok(PyUncertainty { inner: o })
+    }
+}
+
+impl PyUncertainty {
+    /// Options from a preset name or an `Uncertainty` (the `uncertainty=` argument).
+    pub fn from_arg(obj: &Bound<'_, PyAny>) -> PyResult<UncertaintyOptions> {
+        if let Ok(u) = obj.cast::<PyUncertainty>() {
+            return Ok(u.get().inner.clone());
+        }
+        if let Ok(name) = obj.extract::<String>() {
+            return UncertaintyOptions::preset(&name).py();
+        }
+        Err(PyTypeError::new_err(format!(
+            "uncertainty: expected a preset name ({}) or an Uncertainty, got {}",
+            UncertaintyOptions::PRESETS.join(", "),
+            obj.get_type().name()?
+        )))
+    }
+}
+
+#[pymethods]
+impl PyUncertainty {
+    #[new]
+    #[pyo3(signature = (*, friction_model = None, turbulent_model = None, laminar_model = None, non_circular_model = None, roughness = None, roughness_default = None, diameter = None, fluid = None, fittings = None, equipment = None))]
+    #[allow(clippy::too_many_arguments)]
+    fn new(
+        friction_model: Option<bool>,
+        turbulent_model: Option<f64>,
+        laminar_model: Option<f64>,
+        non_circular_model: Option<f64>,
+        roughness: Option<bool>,
+        roughness_default: Option<f64>,
+        diameter: Option<f64>,
+        fluid: Option<bool>,
+        fittings: Option<bool>,
+        equipment: Option<bool>,
+    ) -> PyResult<Self> {
+        Fields {
+            friction_model,
+            turbulent_model,
+            laminar_model,
+            non_circular_model,
+            roughness,
+            roughness_default,
+            diameter,
+            fluid,
+            fittings,
+            equipment,
+        }
+        .apply(UncertaintyOptions::default())
+    }
+    /// A copy with the given fields changed (same keywords as the constructor).
+    #[pyo3(signature = (*, friction_model = None, turbulent_model = None, laminar_model = None, non_circular_model = None, roughness = None, roughness_default = None, diameter = None, fluid = None, fittings = None, equipment = None))]
+    #[allow(clippy::too_many_arguments)]
+    fn replace(
+        &self,
+        friction_model: Option<bool>,
+        turbulent_model: Option<f64>,
+        laminar_model: Option<f64>,
+        non_circular_model: Option<f64>,
+        roughness: Option<bool>,
+        roughness_default: Option<f64>,
+        diameter: Option<f64>,
+        fluid: Option<bool>,
+        fittings: Option<bool>,
+        equipment: Option<bool>,
+    ) -> PyResult<Self> {
+        Fields {
+            friction_model,
+            turbulent_model,
+            laminar_model,
+            non_circular_model,
+            roughness,
+            roughness_default,
+            diameter,
+            fluid,
+            fittings,
+            equipment,
+        }
+        .apply(self.inner.clone())
+    }
+    /// The core preset ``name``: ``"default"``, ``"none"`` (zero-width bands) or
+    /// ``"model_only"`` (only the friction model).
+    #[classmethod]
+    fn preset(_cls: &Bound<'_, PyType>, name: &str) -> PyResult<Self> {
+        Ok(PyUncertainty {
+            inner: UncertaintyOptions::preset(name).py()?,
+        })
+    }
+    /// The names :meth:`preset` accepts.
+    #[staticmethod]
+    fn presets() -> Vec<&'static str> {
+        UncertaintyOptions::PRESETS.to_vec()
+    }
+    /// Include the friction correlation's model uncertainty.
+    #[getter]
+    fn friction_model(&self) -> bool {
+        self.inner.friction_model
+    }
+    /// Model uncertainty of turbulent round-pipe friction (relative, k = 1).
+    #[getter]
+    fn turbulent_model(&self) -> f64 {
+        self.inner.turbulent_model
+    }
+    /// Model uncertainty of laminar friction (relative, k = 1).
+    #[getter]
+    fn laminar_model(&self) -> f64 {
+        self.inner.laminar_model
+    }
+    /// Model uncertainty of non-circular turbulent friction (relative, k = 1).
+    #[getter]
+    fn non_circular_model(&self) -> f64 {
+        self.inner.non_circular_model
+    }
+    /// Include wall roughness.
+    #[getter]
+    fn roughness(&self) -> bool {
+        self.inner.roughness
+    }
+    /// Roughness uncertainty of pipes with no material range (relative, k = 1).
+    #[getter]
+    fn roughness_default(&self) -> f64 {
+        self.inner.roughness_default
+    }
+    /// Uncertainty of every bore (relative, k = 1).
+    #[getter]
+    fn diameter(&self) -> f64 {
+        self.inner.diameter
+    }
+    /// Include the fluid's density and viscosity uncertainties.
+    #[getter]
+    fn fluid(&self) -> bool {
+        self.inner.fluid
+    }
+    /// Include fitting K spreads.
+    #[getter]
+    fn fittings(&self) -> bool {
+        self.inner.fittings
+    }
+    /// Include equipment spreads.
+    #[getter]
+    fn equipment(&self) -> bool {
+        self.inner.equipment
+    }
+    /// The fields as a dict.
+    fn to_dict<'py>(&self, py: Python<'py>) -> PyResult<Bound<'py, PyDict>> {
+        uncertainty_dict(py, &self.inner)
+    }
+    fn _repr_html_(&self, py: Python<'_>) -> PyResult<String> {
+        state::html(py, "Uncertainty", &self.to_dict(py)?)
+    }
+    fn __repr__(&self) -> String {
+        let o = &self.inner;
+        let b = |v: bool| if v { "True" } else { "False" };
+        format!(
+            "Uncertainty(friction_model={}, turbulent_model={:?}, laminar_model={:?}, \
+             non_circular_model={:?}, roughness={}, roughness_default={:?}, diameter={:?}, \
+             fluid={}, fittings={}, equipment={})",
+            b(o.friction_model),
+            o.turbulent_model,
+            o.laminar_model,
+            o.non_circular_model,
+            b(o.roughness),
+            o.roughness_default,
+            o.diameter,
+            b(o.fluid),
+            b(o.fittings),
+            b(o.equipment)
+        )
+    }
+    fn __reduce__<'py>(
+        slf: &Bound<'py, Self>,
+    ) -> PyResult<(Bound<'py, PyAny>, (Bound<'py, PyBytes>,))> {
+        state::reduce(slf.as_any(), &slf.get().inner)
+    }
+    #[classmethod]
+    fn _from_state(_cls: &Bound<'_, PyType>, state: &[u8]) -> PyResult<Self> {
+        let inner: UncertaintyOptions = state::loads(state)?;
+        inner.validate().py()?;
+        Ok(PyUncertainty { inner })
+    }
+}
+
+/// The dict form of uncertainty options.
+pub fn uncertainty_dict<'py>(
+    py: Python<'py>,
+    o: &UncertaintyOptions,
+) -> PyResult<Bound<'py, PyDict>> {
+    let d = PyDict::new(py);
+    d.set_item("friction_model", o.friction_model)?;
+    d.set_item("turbulent_model", o.turbulent_model)?;
+    d.set_item("laminar_model", o.laminar_model)?;
+    d.set_item("non_circular_model", o.non_circular_model)?;
+    d.set_item("roughness", o.roughness)?;
+    d.set_item("roughness_default", o.roughness_default)?;
+    d.set_item("diameter", o.diameter)?;
+    d.set_item("fluid", o.fluid)?;
+    d.set_item("fittings", o.fittings)?;
+    d.set_item("equipment", o.equipment)?;
+    Ok(d)
+}
+
+/// The result of :func:`monte_carlo`: the sampled required head of a line (m).
+#[pyclass(name = "MonteCarlo", module = "hydrograde._native", frozen, eq)]
+#[derive(Clone, PartialEq)]
+pub struct PyMonteCarlo {
+    /// The core value.
+    pub inner: MonteCarlo,
+}
+
+#[pymethods]
+impl PyMonteCarlo {
+    /// Number of samples.
+    #[getter]
+    fn samples(&self) -> usize {
+        self.inner.samples
+    }
+    /// Sample mean of the required head, m.
+    #[getter]
+    fn mean(&self) -> f64 {
+        self.inner.mean
+    }
+    /// Sample standard deviation of the required head, m.
+    #[getter]
+    fn std_dev(&self) -> f64 {
+        self.inner.std_dev
+    }
+    /// 2.5 % quantile of the required head, m.
+    #[getter]
+    fn low(&self) -> f64 {
+        self.inner.low
+    }
+    /// 97.5 % quantile of the required head, m.
+    #[getter]
+    fn high(&self) -> f64 {
+        self.inner.high
+    }
+    /// The fields as a dict.
+    fn to_dict<'py>(&self, py: Python<'py>) -> PyResult<Bound<'py, PyDict>> {
+        let d = PyDict::new(py);
+        d.set_item("samples", self.inner.samples)?;
+        d.set_item("mean", self.inner.mean)?;
+        d.set_item("std_dev", self.inner.std_dev)?;
+        d.set_item("low", self.inner.low)?;
+        d.set_item("high", self.inner.high)?;
+        Ok(d)
+    }
+    fn _repr_html_(&self, py: Python<'_>) -> PyResult<String> {
+        state::html(py, "MonteCarlo", &self.to_dict(py)?)
+    }
+    fn __repr__(&self) -> String {
+        let m = &self.inner;
+        format!(
+            "MonteCarlo(samples={}, mean={:?}, std_dev={:?}, low={:?}, high={:?})",
+            m.samples, m.mean, m.std_dev, m.low, m.high
+        )
+    }
+    fn __reduce__<'py>(
+        slf: &Bound<'py, Self>,
+    ) -> PyResult<(Bound<'py, PyAny>, (Bound<'py, PyBytes>,))> {
+        state::reduce(slf.as_any(), &slf.get().inner)
+    }
+    #[classmethod]
+    fn _from_state(_cls: &Bound<'_, PyType>, state: &[u8]) -> PyResult<Self> {
+        Ok(PyMonteCarlo {
+            inner: state::loads(state)?,
+        })
+    }
+}
+
+/// Samples ``line``'s required head (m) at ``flow`` (m³/s) ``samples`` times (≥ 100,
+/// default the core's ``MONTE_CARLO_SAMPLES``) from generator ``seed``, with the line's
+/// uncertainty options: a Monte Carlo check (JCGM 101:2008) of the first-order band.
+/// Reproducible: the same seed gives the same numbers. Runs with the GIL released.
+#[pyfunction]
+#[pyo3(signature = (line, fluid, flow, samples = MONTE_CARLO_SAMPLES, seed = 0))]
+pub fn monte_carlo(
+    py: Python<'_>,
+    line: &PyLine,
+    fluid: &PyFluid,
+    flow: f64,
+    samples: usize,
+    seed: u64,
+) -> PyResult<PyMonteCarlo> {
+    let m = py
+        .detach(|| core_monte_carlo(&line.inner, &fluid.inner, flow, samples, seed))
+        .py()?;
+    Ok(PyMonteCarlo { inner: m })
 }

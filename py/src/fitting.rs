@@ -248,6 +248,14 @@ impl PyFitting {
             |[r, b, e]| f.k_at(r, b, e).map(|(k, _)| k),
         )
     }
+    /// ``(k_viscous, k_inertial)``: K split as k_viscous/Re + k_inertial, with the
+    /// velocity and Reynolds number taken in ``bore`` (m, > 0); ``pipe_rel_roughness`` is
+    /// ε/D of the adjoining pipe (0…0.5; L/D fittings and bends use its fully rough
+    /// friction factor).
+    fn resistance(&self, bore: f64, pipe_rel_roughness: f64) -> PyResult<(f64, f64)> {
+        let r = self.inner.resistance(bore, pipe_rel_roughness).py()?;
+        Ok((r.k_viscous, r.k_inertial))
+    }
     /// The fields as a dict.
     fn to_dict<'py>(&self, py: Python<'py>) -> PyResult<Bound<'py, PyDict>> {
         let d = PyDict::new(py);

@@ -3,25 +3,10 @@
 use crate::arrays;
 use crate::errors::CoreResult;
 use crate::state;
-use hydrograde::fluid::{self as core, Fluid, Origin, Phase};
+use hydrograde::fluid::{self as core, Fluid};
 use hydrograde::units::ATMOSPHERE;
 use pyo3::prelude::*;
 use pyo3::types::{PyBytes, PyDict, PyType};
-
-fn phase_name(p: Phase) -> &'static str {
-    match p {
-        Phase::Liquid => "liquid",
-        Phase::Gas => "gas",
-    }
-}
-
-fn origin_name(o: Origin) -> &'static str {
-    match o {
-        Origin::User => "user",
-        Origin::Water => "water",
-        Origin::Air => "air",
-    }
-}
 
 /// A fluid: density (kg/m³), dynamic viscosity (Pa·s), phase, and the relative standard
 /// uncertainties (k = 1) of density and viscosity used by the uncertainty bands.
@@ -107,6 +92,22 @@ impl PyFluid {
             inner: self.inner.at_pressure(pressure).py()?,
         })
     }
+    /// Reynolds number ρ·|V|·D/μ (dimensionless) at ``velocity`` (m/s, either sign) in
+    /// ``diameter`` (m, > 0). Floats give a float; arrays broadcast.
+    fn reynolds<'py>(
+        &self,
+        py: Python<'py>,
+        velocity: &Bound<'py, PyAny>,
+        diameter: &Bound<'py, PyAny>,
+    ) -> PyResult<Bound<'py, PyAny>> {
+        let f = &self.inner;
+        arrays::map(
+            py,
+            ["velocity", "diameter"],
+            [velocity, diameter],
+            |[v, d]| f.reynolds(v, d),
+        )
+    }
     /// Density ρ, kg/m³.
     #[getter]
     fn density(&self) -> f64 {
@@ -125,7 +126,7 @@ impl PyFluid {
     /// "liquid" or "gas".
     #[getter]
     fn phase(&self) -> &'static str {
-        phase_name(self.inner.phase)
+        self.inner.phase.name()
     }
     /// Vapour pressure, Pa, where known (else None).
     #[getter]
@@ -155,7 +156,7 @@ impl PyFluid {
     /// Where the properties came from: "user", "water" or "air".
     #[getter]
     fn origin(&self) -> &'static str {
-        origin_name(self.inner.origin)
+        self.inner.origin.name()
     }
     /// The fields as a dict of plain Python values.
     fn to_dict<'py>(&self, py: Python<'py>) -> PyResult<Bound<'py, PyDict>> {

@@ -3,18 +3,10 @@
 use crate::arrays;
 use crate::errors::CoreResult;
 use crate::state;
-use hydrograde::error::Error;
 use hydrograde::friction::{self as core, Correlation, Options, Transition};
 use pyo3::exceptions::PyTypeError;
 use pyo3::prelude::*;
 use pyo3::types::{PyBytes, PyDict, PyType};
-
-/// The binding names of [`Transition`] (Python strings).
-const TRANSITIONS: [(Transition, &str); 3] = [
-    (Transition::Blend, "blend"),
-    (Transition::Turbulent, "turbulent"),
-    (Transition::Refuse, "refuse"),
-];
 
 /// Friction options from keyword arguments; `None` keeps the core's default.
 pub fn options(
@@ -38,15 +30,7 @@ pub fn options(
         o.turbulent_limit = v;
     }
     if let Some(t) = transition {
-        o.transition = TRANSITIONS
-            .iter()
-            .find(|(_, n)| *n == t)
-            .map(|(v, _)| *v)
-            .ok_or_else(|| {
-                let names: Vec<&str> = TRANSITIONS.iter().map(|(_, n)| *n).collect();
-                Error::unknown_name("transition", t, &names)
-            })
-            .py()?;
+        o.transition = t.parse::<Transition>().py()?;
     }
     o.validate().py()?;
     Ok(o)

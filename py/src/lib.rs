@@ -75,6 +75,9 @@ fn _native(m: &Bound<'_, PyModule>) -> PyResult<()> {
 
     // band
     m.add_class::<band::PyBand>()?;
+    m.add_class::<band::PyUncertainty>()?;
+    m.add_class::<band::PyMonteCarlo>()?;
+    m.add_function(wrap_pyfunction!(band::monte_carlo, m)?)?;
 
     // units
     m.add_function(wrap_pyfunction!(units::convert, m)?)?;

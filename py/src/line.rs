@@ -1,12 +1,12 @@
 //! `hydrograde.Line`, `PumpCurve` and `split_flow`.
 
 use crate::arrays;
+use crate::band::{PyUncertainty, uncertainty_dict};
 use crate::errors::CoreResult;
 use crate::fluid::PyFluid;
 use crate::line_result::{PyFlowSolution, PyLineResult, PyOperatingPoint, PySizing, PySplit};
 use crate::pipe::{element, element_object};
 use crate::state;
-use hydrograde::band::UncertaintyOptions;
 use hydrograde::error::Error;
 use hydrograde::line::{Limit, Line, LineOptions, PumpCurve, split_flow as core_split};
 use hydrograde::section::TurbulentDiameter;
@@ -14,29 +14,16 @@ use hydrograde::sizes::PipeTable;
 use pyo3::prelude::*;
 use pyo3::types::{PyBytes, PyDict, PyList, PyType};
 
-/// The binding names of the uncertainty presets of the core.
-fn uncertainty(name: &str) -> PyResult<UncertaintyOptions> {
-    match name {
-        "default" => Ok(UncertaintyOptions::default()),
-        "none" => Ok(UncertaintyOptions::none()),
-        "model_only" => Ok(UncertaintyOptions::model_only()),
-        _ => Err(Error::unknown_name(
-            "uncertainty",
-            name,
-            &["default", "none", "model_only"],
-        ))
-        .py(),
-    }
-}
-
 /// A route of elements in series (:class:`Pipe`, :class:`Fitting`, :class:`Rise`,
 /// :class:`Equipment`), in flow order.
 ///
-/// Options (``None`` keeps the core's default): ``correlation`` and ``transition`` as
-/// :func:`darcy_factor`; ``turbulent_diameter`` (``"hydraulic"`` or
-/// ``"laminar_equivalent"``); ``inlet_pressure`` (Pa absolute; enables the pressure
-/// profile, cavitation and gas checks); ``uncertainty`` (``"default"``, ``"none"`` or
-/// ``"model_only"``: which sources the bands include).
+/// Options (``None`` keeps the core's default): ``correlation``, ``transition``,
+/// ``laminar_limit`` and ``turbulent_limit`` (Reynolds numbers bounding the
+/// transitional band) as :func:`darcy_factor`; ``turbulent_diameter`` (``"hydraulic"``
+/// or ``"laminar_equivalent"``, Jones 1976, for non-circular sections);
+/// ``inlet_pressure`` (Pa absolute; enables the pressure profile, cavitation and gas
+/// checks); ``uncertainty`` (a preset name, ``"default"``, ``"none"`` or
+/// ``"model_only"``, or an :class:`Uncertainty`: which sources the bands include).
 ///
 /// Results are engineering estimates with stated uncertainty; designs must be checked
 /// by a competent engineer against the codes and standards that apply.
@@ -50,21 +37,30 @@ pub struct PyLine {
 #[pymethods]
 impl PyLine {
     #[new]
-    #[pyo3(signature = (elements, *, correlation = None, transition = None, turbulent_diameter = None, inlet_pressure = None, uncertainty = None))]
+    #[pyo3(signature = (elements, *, correlation = None, transition = None, laminar_limit = None, turbulent_limit = None, turbulent_diameter = None, inlet_pressure = None, uncertainty = None))]
+    #[allow(clippy::too_many_arguments)]
     fn new(
         elements: &Bound<'_, PyAny>,
         correlation: Option<&str>,
         transition: Option<&str>,
+        laminar_limit: Option<f64>,
+        turbulent_limit: Option<f64>,
         turbulent_diameter: Option<&str>,
         inlet_pressure: Option<f64>,
-        uncertainty: Option<&str>,
+        uncertainty: Option<&Bound<'_, PyAny>>,
     ) -> PyResult<Self> {
         let mut items = Vec::new();
         for (i, obj) in elements.try_iter()?.enumerate() {
             items.push(element(&obj?, i)?);
         }
         let mut o = LineOptions {
-            friction: crate::friction::options(correlation, None, None, None, transition)?,
+            friction: crate::friction::options(
+                correlation,
+                None,
+                laminar_limit,
+                turbulent_limit,
+                transition,
+            )?,
             inlet_pressure,
             ..LineOptions::default()
         };
@@ -72,7 +68,7 @@ impl PyLine {
             o.turbulent_diameter = t.parse::<TurbulentDiameter>().py()?;
         }
         if let Some(u) = uncertainty {
-            o.uncertainty = self::uncertainty(u)?;
+            o.uncertainty = PyUncertainty::from_arg(u)?;
         }
         Ok(PyLine {
             inner: Line::with_options(items, o).py()?,
@@ -97,10 +93,66 @@ impl PyLine {
     fn inlet_pressure(&self) -> Option<f64> {
         self.inner.options().inlet_pressure
     }
+    /// True when some element has a loss (otherwise no flow can be solved for).
+    #[getter]
+    fn has_resistance(&self) -> bool {
+        self.inner.has_resistance()
+    }
+    /// True when some fitting stops reverse flow (a check or foot valve).
+    #[getter]
+    fn blocks_reverse_flow(&self) -> bool {
+        self.inner.blocks_reverse_flow()
+    }
+    /// The turbulent friction correlation of every pipe.
+    #[getter]
+    fn correlation(&self) -> &'static str {
+        self.inner.options().friction.correlation.name()
+    }
+    /// The treatment of the transitional band.
+    #[getter]
+    fn transition(&self) -> &'static str {
+        self.inner.options().friction.transition.name()
+    }
+    /// Reynolds number below which flow is laminar.
+    #[getter]
+    fn laminar_limit(&self) -> f64 {
+        self.inner.options().friction.laminar_limit
+    }
+    /// Reynolds number above which flow is turbulent.
+    #[getter]
+    fn turbulent_limit(&self) -> f64 {
+        self.inner.options().friction.turbulent_limit
+    }
+    /// The diameter used for turbulent flow in non-circular sections.
+    #[getter]
+    fn turbulent_diameter(&self) -> &'static str {
+        self.inner.options().turbulent_diameter.name()
+    }
+    /// The uncertainty sources of the bands.
+    #[getter]
+    fn uncertainty(&self) -> PyUncertainty {
+        PyUncertainty {
+            inner: self.inner.options().uncertainty.clone(),
+        }
+    }
     /// The line at signed ``flow`` (m³/s): head loss, pressure loss, required head, the
-    /// per-element breakdown, bands and warnings.
-    fn evaluate(&self, py: Python<'_>, fluid: &PyFluid, flow: f64) -> PyResult<PyLineResult> {
-        let r = py.detach(|| self.inner.evaluate(&fluid.inner, flow)).py()?;
+    /// per-element breakdown, bands and warnings. ``inlet_pressure`` (Pa absolute)
+    /// replaces the line's own for this evaluation (pressure profile, cavitation and gas
+    /// checks); ``None`` keeps the line's.
+    #[pyo3(signature = (fluid, flow, inlet_pressure = None))]
+    fn evaluate(
+        &self,
+        py: Python<'_>,
+        fluid: &PyFluid,
+        flow: f64,
+        inlet_pressure: Option<f64>,
+    ) -> PyResult<PyLineResult> {
+        let r = py
+            .detach(|| match inlet_pressure {
+                Some(p) => self.inner.evaluate_at(&fluid.inner, flow, Some(p)),
+                None => self.inner.evaluate(&fluid.inner, flow),
+            })
+            .py()?;
         PyLineResult::new(py, r)
     }
     /// Required head (m) at signed ``flow`` (m³/s): static head + losses. Floats give a
@@ -214,9 +266,14 @@ impl PyLine {
         let d = PyDict::new(py);
         d.set_item("static_head", self.static_head())?;
         d.set_item("inlet_pressure", self.inlet_pressure())?;
+        d.set_item("correlation", self.correlation())?;
+        d.set_item("transition", self.transition())?;
+        d.set_item("laminar_limit", self.laminar_limit())?;
+        d.set_item("turbulent_limit", self.turbulent_limit())?;
+        d.set_item("turbulent_diameter", self.turbulent_diameter())?;
         d.set_item(
-            "correlation",
-            self.inner.options().friction.correlation.name(),
+            "uncertainty",
+            uncertainty_dict(py, &self.inner.options().uncertainty)?,
         )?;
         let rows = PyList::empty(py);
         for e in self.inner.elements() {

@@ -85,16 +85,28 @@ impl PyPipe {
     fn rel_roughness(&self) -> f64 {
         self.inner.rel_roughness()
     }
-    /// Head loss (m of the flowing fluid) at signed volumetric ``flow`` (m³/s) with the
-    /// core's default friction options; ``flow`` may be an array (broadcasts).
+    /// ``(head_loss, dhead_dflow)`` at signed volumetric ``flow`` (m³/s) with the core's
+    /// default friction options: the head loss (m of the flowing fluid, odd in flow) and
+    /// its derivative with respect to flow (s/m², continuous through zero), the pair a
+    /// Newton solver needs. ``flow`` may be an array: both come back as arrays of its
+    /// shape.
     fn head_loss<'py>(
         &self,
         py: Python<'py>,
         fluid: &PyFluid,
         flow: &Bound<'py, PyAny>,
-    ) -> PyResult<Bound<'py, PyAny>> {
+    ) -> PyResult<(Bound<'py, PyAny>, Bound<'py, PyAny>)> {
         let (p, f) = (&self.inner, &fluid.inner);
-        arrays::map(py, ["flow"], [flow], |[q]| p.head_loss(f, q).map(|r| r.0))
+        let h = arrays::map(py, ["flow"], [flow], |[q]| p.head_loss(f, q).map(|r| r.0))?;
+        let dh = arrays::map(py, ["flow"], [flow], |[q]| p.head_loss(f, q).map(|r| r.1))?;
+        Ok((h, dh))
+    }
+    /// The same run (length, roughness and its range) with a round section of inside
+    /// ``diameter`` (m).
+    fn with_diameter(&self, diameter: f64) -> PyResult<Self> {
+        Ok(PyPipe {
+            inner: self.inner.with_diameter(diameter).py()?,
+        })
     }
     /// The fields as a dict.
     fn to_dict<'py>(&self, py: Python<'py>) -> PyResult<Bound<'py, PyDict>> {

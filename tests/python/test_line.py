@@ -40,7 +40,12 @@ def test_single_pipe_is_darcy_weisbach(water):
     expected = f * 50.0 / 0.1 * v * v / (2 * G0)
     r = hg.Line([pipe]).evaluate(water, q)
     assert r.head_loss == pytest.approx(expected, rel=1e-12)
-    assert pipe.head_loss(water, q) == pytest.approx(expected, rel=1e-12)
+    h, dh_dq = pipe.head_loss(water, q)
+    assert h == pytest.approx(expected, rel=1e-12)
+    # Central difference of the core's own head loss (truncation O(δ²), δ = 1e-6 q).
+    step = 1e-6 * q
+    fd = (pipe.head_loss(water, q + step)[0] - pipe.head_loss(water, q - step)[0]) / (2 * step)
+    assert dh_dq == pytest.approx(fd, rel=1e-7)
     assert r.pressure_loss == pytest.approx(water.density * G0 * r.head_loss, rel=1e-14)
     assert r.elements[0].friction_factor == pytest.approx(f, rel=1e-14)
 

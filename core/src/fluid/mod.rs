@@ -41,6 +41,16 @@ pub enum Phase {
     Gas,
 }
 
+impl Phase {
+    /// The name used by every binding: `"liquid"` or `"gas"`.
+    pub fn name(self) -> &'static str {
+        match self {
+            Phase::Liquid => "liquid",
+            Phase::Gas => "gas",
+        }
+    }
+}
+
 /// Where a fluid's properties came from; decides how [`Fluid::at_pressure`] re-evaluates.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, Serialize, Deserialize)]
 pub enum Origin {
@@ -50,6 +60,17 @@ pub enum Origin {
     Water,
     /// [`Fluid::air`].
     Air,
+}
+
+impl Origin {
+    /// The name used by every binding: `"user"`, `"water"` or `"air"`.
+    pub fn name(self) -> &'static str {
+        match self {
+            Origin::User => "user",
+            Origin::Water => "water",
+            Origin::Air => "air",
+        }
+    }
 }
 
 /// A fluid: its density, dynamic viscosity and what the flow calculations need besides.
@@ -323,6 +344,16 @@ mod tests {
         assert!((pv - 101_418.0).abs() < 5.0, "{pv}");
         assert_eq!(w.phase, Phase::Liquid);
         assert!(w.density_rel_uncertainty > 0.0 && w.viscosity_rel_uncertainty > 0.0);
+    }
+
+    #[test]
+    fn phase_and_origin_have_binding_names() {
+        let w = Fluid::water(293.15, 101_325.0).unwrap();
+        assert_eq!((w.phase.name(), w.origin.name()), ("liquid", "water"));
+        let a = Fluid::air(293.15, 101_325.0).unwrap();
+        assert_eq!((a.phase.name(), a.origin.name()), ("gas", "air"));
+        let u = Fluid::new(1000.0, 1e-3).unwrap();
+        assert_eq!((u.phase.name(), u.origin.name()), ("liquid", "user"));
     }
 
     #[test]

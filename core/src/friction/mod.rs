@@ -187,6 +187,39 @@ pub enum Transition {
     Refuse,
 }
 
+impl Transition {
+    /// Every treatment, in a fixed order (the C constants follow this order).
+    pub const ALL: [Transition; 3] = [Transition::Blend, Transition::Turbulent, Transition::Refuse];
+
+    /// The name used by every binding: `"blend"`, `"turbulent"` or `"refuse"`.
+    pub fn name(self) -> &'static str {
+        match self {
+            Transition::Blend => "blend",
+            Transition::Turbulent => "turbulent",
+            Transition::Refuse => "refuse",
+        }
+    }
+}
+
+impl fmt::Display for Transition {
+    fn fmt(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
+        f.write_str(self.name())
+    }
+}
+
+impl FromStr for Transition {
+    type Err = Error;
+    fn from_str(s: &str) -> Result<Self> {
+        Transition::ALL
+            .into_iter()
+            .find(|t| t.name() == s)
+            .ok_or_else(|| {
+                let names: Vec<&str> = Transition::ALL.iter().map(|t| t.name()).collect();
+                Error::unknown_name("transition", s, &names)
+            })
+    }
+}
+
 /// Options of [`darcy_factor`]. `Options::default()` is Colebrook with the common-practice
 /// regime limits 2300 and 4000 and the circle's laminar constant 64.
 #[derive(Debug, Clone, Copy, PartialEq, Serialize, Deserialize)]
@@ -638,6 +671,17 @@ mod tests {
         }
         let e = "moody".parse::<Correlation>().unwrap_err();
         assert!(e.to_string().contains("colebrook, haaland"));
+    }
+
+    #[test]
+    fn transition_names_round_trip_and_unknown_names_fail() {
+        for t in Transition::ALL {
+            assert_eq!(t.name().parse::<Transition>().unwrap(), t);
+            assert_eq!(t.to_string(), t.name());
+        }
+        let e = "smooth".parse::<Transition>().unwrap_err();
+        assert_eq!(e.kind(), crate::ErrorKind::UnknownName);
+        assert!(e.to_string().contains("blend, turbulent, refuse"), "{e}");
     }
 
     #[test]

@@ -1,0 +1,294 @@
+"""The Python demo behind ``./run.sh demo``: the same two invented scenarios as the Rust
+demo (core/examples/demo.rs), built through the Python API.
+
+1. A hillside orchard's irrigation main: water at 12 °C pumped from a pond through about
+   400 m of PVC and steel pipe, fifteen fittings and valves and 38 m of rise to a header
+   tank.
+2. A workshop's rectangular exhaust duct: air at 30 °C through two duct sizes.
+
+All data are invented for the demonstration. ``python examples/demo.py --numbers`` prints
+the key results as ``name value`` lines with every digit (``repr(float)``), the same lines
+as ``cargo run --release -p hydrograde --example demo -- --numbers``; a test checks that
+both agree bit for bit. With matplotlib installed the demo also draws the orchard's system
+curve against the pump into target/demo/orchard_system_curve.png.
+"""
+
+from __future__ import annotations
+
+import sys
+from pathlib import Path
+from typing import List, Optional, Tuple
+
+import hydrograde as hg
+
+REPO = Path(__file__).resolve().parents[1]
+PLOT = REPO / "target" / "demo" / "orchard_system_curve.png"
+
+# Inside diameters of the orchard main, m (PVC 3 in and steel 2-1/2 in, schedule 40).
+PVC_BORE = 0.0779
+STEEL_BORE = 0.0627
+
+# Water at 12 °C and one standard atmosphere; the orchard's design flow, m³/s.
+WATER_TEMPERATURE = 285.15
+DESIGN_FLOW = 6.0e-3
+# An invented pump: flow L/s against head m.
+PUMP_FLOWS_LPS = [0.0, 2.0, 4.0, 6.0, 8.0, 10.0]
+PUMP_HEADS = [78.0, 77.0, 74.0, 68.5, 60.0, 47.0]
+
+# Air at 30 °C and one standard atmosphere through the duct, m³/s.
+AIR_TEMPERATURE = 303.15
+DUCT_FLOW = 0.9
+
+ATMOSPHERE = 101_325.0
+CAUTION = (
+    "Caution: these are engineering estimates with stated uncertainty. A design built on "
+    "them must be checked by a competent engineer against the codes and standards that apply."
+)
+
+
+def orchard_line() -> hg.Line:
+    def pvc(length: float) -> hg.Pipe:
+        return hg.Pipe.of_material(hg.Section.circle(PVC_BORE), length, "pvc")
+
+    def steel(length: float) -> hg.Pipe:
+        return hg.Pipe.of_material(hg.Section.circle(STEEL_BORE), length, "commercial_steel")
+
+    named = hg.Fitting.named
+    return hg.Line([
+        hg.Fitting.entrance_sharp(),
+        named("y_strainer"),
+        pvc(6.0),
+        named("gate_valve"),
+        named("elbow_90_standard"),
+        pvc(140.0),
+        named("elbow_45_standard"),
+        pvc(120.0),
+        named("tee_run_flanged"),
+        hg.Fitting.contraction(PVC_BORE, STEEL_BORE),
+        steel(95.0),
+        named("elbow_90_long_radius"),
+        named("elbow_90_long_radius"),
+        steel(45.0),
+        named("elbow_45_long_radius"),
+        named("ball_valve"),
+        named("globe_valve"),
+        hg.Rise(38.0),
+        hg.Fitting.exit(),
+    ])
+
+
+def duct_line() -> hg.Line:
+    big = hg.Section.rectangle(0.40, 0.25)
+    small = hg.Section.rectangle(0.30, 0.20)
+    d1, d2 = big.hydraulic_diameter, small.hydraulic_diameter
+    return hg.Line([
+        hg.Fitting.entrance_rounded(0.1),
+        hg.Equipment.pressure_drop("grease filter", 120.0, 0.9),
+        hg.Pipe.of_material(big, 18.0, "galvanized_steel"),
+        hg.Fitting.bend(90.0, 1.5),
+        hg.Fitting.contraction(d1, d2),
+        hg.Pipe.of_material(small, 12.0, "galvanized_steel"),
+        hg.Fitting.bend(45.0, 1.5),
+        hg.Rise(4.5),
+        hg.Fitting.exit(),
+    ])
+
+
+def pump_curve() -> hg.PumpCurve:
+    return hg.PumpCurve([q * 1e-3 for q in PUMP_FLOWS_LPS], PUMP_HEADS)
+
+
+def water() -> hg.Fluid:
+    return hg.Fluid.water(WATER_TEMPERATURE, ATMOSPHERE)
+
+
+def air() -> hg.Fluid:
+    return hg.Fluid.air(AIR_TEMPERATURE, ATMOSPHERE)
+
+
+def band_text(b: hg.Band, digits: int = 3) -> str:
+    return f"{b.low:.{digits}f} … {b.high:.{digits}f}"
+
+
+def source_text(source: Optional[str], index: int, label: str) -> str:
+    """The band's largest source, with an element's own K or rating named briefly."""
+    if source is None:
+        return ""
+    own = source.removesuffix(f" (element {index})")
+    if own == f"K of {label}":
+        return "its own K"
+    if own == label:
+        return "its own rating"
+    return source
+
+
+def breakdown_rows(r: hg.LineResult) -> List[Tuple[str, ...]]:
+    rows: List[Tuple[str, ...]] = []
+    for i, e in enumerate(r.elements):
+        if e.friction_factor is not None:
+            coef = f"f {e.friction_factor:.4f}"
+        elif e.k is not None:
+            coef = f"K {e.k:.3f}"
+        else:
+            coef = ""
+        moving = e.velocity == e.velocity  # NaN for elements without a bore of their own
+        rise = e.static_head != 0.0
+        rows.append((
+            str(i),
+            f"rise {e.static_head:+.1f} m" if rise else e.label,
+            f"{e.velocity:.2f}" if moving else "",
+            f"{e.reynolds:.0f}" if moving else "",
+            coef,
+            f"{e.static_head if rise else e.head_loss:.3f}",
+            "" if rise else band_text(e.head_loss_band),
+            "" if rise else source_text(e.head_loss_band.dominant, i, e.label),
+            ", ".join(e.warnings),
+        ))
+    return rows
+
+
+def print_breakdown(r: hg.LineResult, pressure_unit: str) -> None:
+    head = ("#", "element", "V m/s", "Re", "f or K", "loss m", "band (k = 2) m",
+            "largest source", "warnings")
+    rows = [head] + breakdown_rows(r)
+    widths = [max(len(row[c]) for row in rows) for c in range(len(head))]
+    right = {0, 2, 3, 5}
+    for row in rows:
+        cells = [
+            cell.rjust(w) if c in right else cell.ljust(w)
+            for c, (cell, w) in enumerate(zip(row, widths))
+        ]
+        print("  " + "  ".join(cells).rstrip())
+    if pressure_unit == "kPa":
+        pressure = f"{r.pressure_loss / 1e3:.1f} kPa"
+    else:
+        pressure = f"{r.pressure_loss:.0f} Pa"
+    print(
+        f"  friction + minor loss {r.head_loss:.3f} m ({band_text(r.head_loss_band)}), "
+        f"pressure loss {pressure}, static head {r.static_head:.2f} m"
+    )
+    print(f"  required head {r.required_head:.3f} m, band {band_text(r.required_head_band)} m")
+    top = [f"{s} {100 * share:.0f} %" for s, share in r.required_head_band.contributions[:3]]
+    print(f"  band sources: {', '.join(top)}")
+
+
+def orchard() -> None:
+    print(f"\n1. Hillside orchard irrigation main (water 12 °C, design flow "
+          f"{DESIGN_FLOW * 1e3:.1f} L/s)\n")
+    w, line, pump = water(), orchard_line(), pump_curve()
+    r = line.evaluate(w, DESIGN_FLOW)
+    print_breakdown(r, "kPa")
+
+    print("\n  system curve against the pump")
+    print(f"  {'Q L/s':>8} {'system m':>12} {'pump m':>10}")
+    flows = [i * 1e-3 for i in range(11)]
+    for q, h in zip(flows, line.system_curve(w, flows)):
+        print(f"  {q * 1e3:>8.1f} {h:>12.2f} {pump.head(q):>10.2f}")
+    op = line.operating_point(w, pump)
+    print(
+        f"  operating point: {op.flow * 1e3:.2f} L/s at {op.head:.2f} m (flow band "
+        f"{op.flow_band.low * 1e3:.2f} … {op.flow_band.high * 1e3:.2f} L/s, largest source: "
+        f"{op.flow_band.dominant or '-'})"
+    )
+    back = line.flow_for_head(w, 0.0)
+    print(
+        f"  run backwards by gravity from the tank (pump bypassed): {-back.flow * 1e3:.2f} L/s "
+        f"({-back.flow_band.high * 1e3:.2f} … {-back.flow_band.low * 1e3:.2f} L/s)"
+    )
+    s = line.size(w, DESIGN_FLOW, max_velocity=2.0, table="pvc", schedule="40")
+    print(
+        f"  one size for the whole main, velocity ≤ 2 m/s at {DESIGN_FLOW * 1e3:.0f} L/s: "
+        f"inside diameter ≥ {s.min_inside_diameter * 1e3:.1f} mm"
+    )
+    c = s.standard
+    if c is not None:
+        print(
+            f"  smallest PVC schedule 40: NPS {c['nominal']} (ID {c['inside_diameter'] * 1e3:.1f} "
+            f"mm, {c['velocity']:.2f} m/s, loss {c['pressure_loss'] / 1e3:.1f} kPa)"
+        )
+    plot(line, w, pump)
+
+
+def plot(line: hg.Line, fluid: hg.Fluid, pump: hg.PumpCurve) -> None:
+    """The system curve with its band, the pump and the operating point, as a PNG."""
+    try:
+        import matplotlib
+
+        matplotlib.use("Agg")
+        import matplotlib.pyplot as plt
+    except ImportError:
+        print("  (matplotlib is not installed: no plot drawn)")
+        return
+    import numpy as np
+
+    from hydrograde import plotting
+
+    fig, ax = plt.subplots(figsize=(7.2, 4.6), layout="constrained")
+    plotting.system_curve(line, fluid, np.linspace(0.0, 10e-3, 81), pump=pump, ax=ax)
+    ax.set_title("Orchard main: system curve against the pump (invented data)")
+    ax.set_xlim(0.0, 10.5e-3)
+    PLOT.parent.mkdir(parents=True, exist_ok=True)
+    fig.savefig(PLOT, dpi=130)
+    plt.close(fig)
+    print(f"  plot of the system curve and the pump written to {PLOT}")
+
+
+def duct() -> None:
+    print(f"\n2. Workshop exhaust duct (air 30 °C, {DUCT_FLOW} m³/s, galvanised rectangular duct)\n")
+    r = duct_line().evaluate(air(), DUCT_FLOW)
+    print_breakdown(r, "Pa")
+    b = r.pressure_loss_band
+    print(
+        f"  fan must supply {r.pressure_loss:.0f} Pa ({b.low:.0f} … {b.high:.0f} Pa) "
+        "of pressure loss"
+    )
+
+
+def numbers() -> None:
+    """The key results, one ``name value`` line each with every digit (repr of a float is
+    the shortest string that reads back to the same double, as Rust's ``{:?}``)."""
+    w, line = water(), orchard_line()
+    r = line.evaluate(w, DESIGN_FLOW)
+    op = line.operating_point(w, pump_curve())
+    back = line.flow_for_head(w, 0.0)
+    s = line.size(w, DESIGN_FLOW, max_velocity=2.0, table="pvc", schedule="40")
+    d = duct_line().evaluate(air(), DUCT_FLOW)
+    rows = [
+        ("orchard_required_head", r.required_head),
+        ("orchard_required_head_low", r.required_head_band.low),
+        ("orchard_required_head_high", r.required_head_band.high),
+        ("orchard_pressure_loss", r.pressure_loss),
+        ("orchard_operating_flow", op.flow),
+        ("orchard_operating_head", op.head),
+        ("orchard_gravity_flow", back.flow),
+        ("orchard_min_inside_diameter", s.min_inside_diameter),
+        (
+            "orchard_standard_inside_diameter",
+            float("nan") if s.standard is None else s.standard["inside_diameter"],
+        ),
+        ("duct_pressure_loss", d.pressure_loss),
+        ("duct_pressure_loss_low", d.pressure_loss_band.low),
+        ("duct_pressure_loss_high", d.pressure_loss_band.high),
+    ]
+    for name, value in rows:
+        print(f"{name} {float(value)!r}")
+
+
+def main(argv: List[str]) -> int:
+    try:
+        if "--numbers" in argv:
+            numbers()
+            return 0
+        print(f"hydrograde {hg.__version__} demo (Python): invented scenarios, engineering "
+              "estimates with k = 2 bands.")
+        orchard()
+        duct()
+    except hg.HydrogradeError as e:
+        print(f"error: {e}", file=sys.stderr)
+        return 1
+    print(f"\n{CAUTION}")
+    return 0
+
+
+if __name__ == "__main__":
+    sys.exit(main(sys.argv[1:]))
