@@ -60,6 +60,8 @@ cmd_test() {
   if [ -f scripts/test-c.sh ]; then
     say "C and C++"
     bash scripts/test-c.sh
+    say "README C examples"
+    .venv/bin/python tests/c/readme_c.py
   fi
   if [ -f scripts/test-python.sh ]; then
     say "Python"

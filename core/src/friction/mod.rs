@@ -307,8 +307,22 @@ pub fn check_inputs(re: f64, rel_roughness: f64) -> Result<()> {
 /// assert!((fr.f - 0.018_513_866_077_471_64).abs() < 1e-17);
 /// ```
 pub fn darcy_factor(re: f64, rel_roughness: f64, opts: &Options) -> Result<Friction> {
-    check_inputs(re, rel_roughness)?;
-    opts.validate()?;
+    // One combined test on the hot path (NaN fails every comparison); the checks that
+    // build the error run only when it fails.
+    let inputs_ok =
+        re > 0.0 && re <= MAX_REYNOLDS && (0.0..=MAX_REL_ROUGHNESS).contains(&rel_roughness);
+    if !inputs_ok {
+        check_inputs(re, rel_roughness)?;
+    }
+    let opts_ok = opts.laminar_constant > 0.0
+        && opts.laminar_constant < f64::INFINITY
+        && opts.laminar_limit >= MIN_LAMINAR_LIMIT
+        && opts.laminar_limit < f64::INFINITY
+        && opts.turbulent_limit >= opts.laminar_limit
+        && opts.turbulent_limit < f64::INFINITY;
+    if !opts_ok {
+        opts.validate()?;
+    }
     let corr = opts.correlation;
     if corr == Correlation::FullyRough && rel_roughness == 0.0 {
         return Err(Error::out_of_range(

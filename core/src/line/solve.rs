@@ -50,6 +50,11 @@ pub(crate) fn safeguarded_newton(
             hi = x;
         }
         let newton = x - v / d;
+        // Converged: the Newton step is below the rounding of x. (Tested before the
+        // bracket, since a step that rounds to x itself is not strictly inside it.)
+        if d > 0.0 && (newton - x).abs() <= 2.0 * f64::EPSILON * x.abs() {
+            return Ok((newton, it));
+        }
         let next = if d > 0.0 && newton > lo && newton < hi {
             newton
         } else {
@@ -97,10 +102,20 @@ impl Line {
         let (flow, iterations) = if sign == 0.0 {
             (0.0, 0)
         } else {
-            // Grow a bracket from a microlitre per second by factors of 4.
-            let mut far = 1e-6 * sign;
-            let mut n = 0;
+            // First guess from one trial flow, taking the loss as ∝ Q² (turbulent); then
+            // grow the bracket by factors of 4 until it holds the root.
+            let trial = 1e-3 * sign;
+            let loss_at_trial = g(trial)?.0 + head - h0;
+            let mut far = if loss_at_trial != 0.0 {
+                1.5 * trial * ((head - h0) / loss_at_trial).abs().sqrt()
+            } else {
+                trial
+            };
+            far = sign * far.abs().clamp(1e-12, 1e6);
+            let mut near = 0.0;
+            let mut n = 1;
             while sign * g(far)?.0 < 0.0 {
+                near = far;
                 far *= 4.0;
                 n += 1;
                 if far.abs() > 1e6 {
@@ -109,7 +124,7 @@ impl Line {
                     )));
                 }
             }
-            let (lo, hi) = if sign > 0.0 { (0.0, far) } else { (far, 0.0) };
+            let (lo, hi) = if sign > 0.0 { (near, far) } else { (far, near) };
             let (q, it) = safeguarded_newton(g, lo, hi)?;
             (q, it + n)
         };
