@@ -152,4 +152,20 @@ run "VBA declarations match the header" "$py" tests/c/check_vba.py
 run "ctypes with the VBA types equals the core" env HG_LIB="$prefix/lib/libhydrograde.so" \
   HG_REFERENCE="$out/reference.txt" "$py" -m pytest -q -p no:cacheprovider tests/c/test_ctypes.py
 
+# ---- the demo ----
+# The C demo (capi/examples/demo.c) builds the same scenarios as the Rust demo: its key
+# results must be the same doubles and its tables the same text.
+cargo build -q --release -p hydrograde --example demo || die "cargo build of the Rust demo failed"
+run "compile C demo" gcc -std=c11 "${ccflags[@]}" $cflags capi/examples/demo.c -o "$out/demo_c" \
+  $libs -Wl,-rpath,"$prefix/lib" -lm
+target/release/examples/demo --numbers > "$out/demo_rust_numbers.txt" 2>> "$log"
+"$out/demo_c" --numbers > "$out/demo_c_numbers.txt" 2>> "$log"
+run "demo: C and Rust --numbers are the same doubles" \
+  "$py" tests/c/compare_numbers.py "$out/demo_rust_numbers.txt" "$out/demo_c_numbers.txt"
+grep -h -E '^[0-9]+ values' "$log" | tail -1 | sed 's/^/    demo numbers: /'
+run "demo: C tables equal the Rust tables" \
+  bash -c "diff <(target/release/examples/demo) <('$out/demo_c')"
+run "valgrind: C demo, zero errors and leaks" "${vg[@]}" "$out/demo_c"
+run "scripts/demo-c.sh is executable and runs" bash -c "test -x scripts/demo-c.sh && scripts/demo-c.sh --numbers | cmp - '$out/demo_c_numbers.txt'"
+
 finish

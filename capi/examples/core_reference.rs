@@ -212,6 +212,21 @@ fn others(out: &mut impl Write) -> io::Result<()> {
                 ]
             });
             emit(out, "section", &[I(shape), D(a), D(b)], r)?;
+            for (mi, mode) in [
+                TurbulentDiameter::Hydraulic,
+                TurbulentDiameter::LaminarEquivalent,
+            ]
+            .into_iter()
+            .enumerate()
+            {
+                let r = section(shape, a, b).map(|s| vec![D(s.turbulent_diameter(mode))]);
+                emit(
+                    out,
+                    "turbulent_diameter",
+                    &[I(shape), D(a), D(b), I(mi as i64)],
+                    r,
+                )?;
+            }
         }
     }
     let fluids = [(998.2, 1.002e-3), (1.2, 1.8e-5), (0.0, 1e-3)];
@@ -238,16 +253,14 @@ fn others(out: &mut impl Write) -> io::Result<()> {
     for q in flows {
         for (rho, mu) in fluids {
             for d in [0.05, 0.0] {
-                let r = Pipe::circular(d, 1.0, 0.0)
-                    .and_then(|p| {
-                        p.flow_state(
-                            &Fluid::new(rho, mu)?,
-                            q,
-                            &Options::default(),
-                            TurbulentDiameter::Hydraulic,
-                        )
+                // The checks in the order hg_reynolds makes them.
+                let r = Section::circle(d)
+                    .and_then(|s| {
+                        let f = Fluid::new(rho, mu)?;
+                        hydrograde::error::check::finite("flow", q)?;
+                        f.reynolds(s.velocity(q), d)
                     })
-                    .map(|s| vec![D(s.reynolds)]);
+                    .map(|re| vec![D(re)]);
                 emit(out, "reynolds", &[D(q), D(d), D(rho), D(mu)], r)?;
             }
         }
@@ -439,6 +452,7 @@ fn lines(out: &mut impl Write) -> io::Result<()> {
                         past,
                     )?;
                     for (i, e) in r.elements.iter().enumerate() {
+                        element_sources(out, &[I(sc), I(fi as i64), D(q), I(i as i64)], e)?;
                         let fin = |x: f64| if x.is_finite() { x } else { 0.0 };
                         emit(
                             out,
@@ -460,6 +474,7 @@ fn lines(out: &mut impl Write) -> io::Result<()> {
                     }
                 }
             }
+            line_checks(out, &line, &fluid, sc, fi as i64)?;
             for q in [0.0, 1e-6, -2e-4, 2e-3, f64::INFINITY] {
                 let r = line.required_head(&fluid, q).map(|(h, d)| vec![D(h), D(d)]);
                 emit(out, "line_required_head", &[I(sc), I(fi as i64), D(q)], r)?;
@@ -491,6 +506,92 @@ fn lines(out: &mut impl Write) -> io::Result<()> {
                 .map(|h| h.into_iter().map(D).collect());
             emit(out, "line_system_curve", &[I(sc), I(fi as i64)], r)?;
         }
+    }
+    Ok(())
+}
+
+/// The sources of one element's head-loss band, and one index past the last.
+fn element_sources(
+    out: &mut impl Write,
+    inputs: &[Tok],
+    e: &hydrograde::line::ElementResult,
+) -> io::Result<()> {
+    use Tok::{D, I, S};
+    let list = &e.head_loss_band.contributions;
+    for (j, c) in list.iter().enumerate() {
+        let mut ins: Vec<Tok> = inputs.iter().map(copy_tok).collect();
+        ins.push(I(j as i64));
+        let r = Ok(vec![S(&c.source), D(c.share)]);
+        emit(out, "line_elem_source", &ins, r)?;
+    }
+    let mut ins: Vec<Tok> = inputs.iter().map(copy_tok).collect();
+    ins.push(I(list.len() as i64));
+    let past = Err(hydrograde::Error::out_of_range(
+        "source",
+        list.len() as f64,
+        "past the end",
+    ));
+    emit(out, "line_elem_source", &ins, past)
+}
+
+fn copy_tok<'a>(t: &Tok<'a>) -> Tok<'a> {
+    match t {
+        Tok::D(x) => Tok::D(*x),
+        Tok::S(s) => Tok::S(s),
+        Tok::I(i) => Tok::I(*i),
+    }
+}
+
+/// `hg_line_evaluate_at` (inlet pressure 0 = none) and `hg_line_monte_carlo`.
+fn line_checks(
+    out: &mut impl Write,
+    line: &Line,
+    fluid: &Fluid,
+    sc: i64,
+    fi: i64,
+) -> io::Result<()> {
+    use Tok::{D, I};
+    for q in [2e-3, -2e-4, f64::NAN] {
+        for p in [0.0, 1.5e5, 4e5, -1.0, f64::INFINITY] {
+            let r = line
+                .evaluate_at(fluid, q, if p == 0.0 { None } else { Some(p) })
+                .map(|r| {
+                    vec![
+                        D(r.head_loss),
+                        D(r.pressure_loss),
+                        D(r.required_head),
+                        D(r.inlet_pressure.unwrap_or(0.0)),
+                        D(r.outlet_pressure.unwrap_or(0.0)),
+                        I(r.warnings.bits() as i64),
+                        D(r.required_head_band.low),
+                        D(r.required_head_band.high),
+                    ]
+                });
+            emit(out, "line_eval_at", &[I(sc), I(fi), D(q), D(p)], r)?;
+        }
+    }
+    for (q, samples, seed) in [
+        (2e-3, 400, 7),
+        (2e-3, 400, 8),
+        (-1e-3, 200, 7),
+        (2e-3, 99, 7),
+        (f64::NAN, 200, 7),
+    ] {
+        let r = hydrograde::band::monte_carlo(line, fluid, q, samples, seed).map(|m| {
+            vec![
+                D(m.mean),
+                D(m.std_dev),
+                D(m.low),
+                D(m.high),
+                I(m.samples as i64),
+            ]
+        });
+        emit(
+            out,
+            "line_monte_carlo",
+            &[I(sc), I(fi), D(q), I(samples as i64), I(seed as i64)],
+            r,
+        )?;
     }
     Ok(())
 }
@@ -586,6 +687,30 @@ fn materials(out: &mut impl Write) -> io::Result<()> {
     }
     let r = "cast_iron".parse::<PipeTable>().map(|_| vec![]);
     emit(out, "pipe_size", &[S("cast_iron"), S("2"), S("40")], r)?;
+    // Schedules and nominal sizes by index, one past the end, and an unknown table.
+    let past = |n: usize| {
+        Err(hydrograde::Error::out_of_range(
+            "index",
+            n as f64,
+            "past the end",
+        ))
+    };
+    for table in PipeTable::ALL {
+        let scheds = table.schedules();
+        for i in 0..=scheds.len() {
+            let r = scheds.get(i).map_or_else(|| past(i), |s| Ok(vec![S(s)]));
+            emit(out, "table_schedule", &[S(table.name()), I(i as i64)], r)?;
+        }
+        let noms = table.nominal_sizes();
+        for i in 0..=noms.len() {
+            let r = noms.get(i).map_or_else(|| past(i), |s| Ok(vec![S(s)]));
+            emit(out, "table_nominal", &[S(table.name()), I(i as i64)], r)?;
+        }
+    }
+    for tag in ["table_schedule", "table_nominal"] {
+        let r = "cast_iron".parse::<PipeTable>().map(|_| vec![]);
+        emit(out, tag, &[S("cast_iron"), I(0)], r)?;
+    }
     Ok(())
 }
 

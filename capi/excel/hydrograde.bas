@@ -44,6 +44,9 @@ Public Declare PtrSafe Function hg_pipe_size_at_least Lib "hydrograde.dll" (ByVa
 Public Declare PtrSafe Function hg_correlation_validity Lib "hydrograde.dll" (ByVal correlation As Long, ByRef re_min As Double, ByRef re_max As Double, ByRef rel_roughness_min As Double, ByRef rel_roughness_max As Double, ByRef accuracy As Double) As Long
 Public Declare PtrSafe Function hg_water_saturation_temperature Lib "hydrograde.dll" (ByVal pressure As Double, ByRef temperature As Double) As Long
 Public Declare PtrSafe Function hg_transition_limits Lib "hydrograde.dll" (ByVal re As Double, ByVal rel_roughness As Double, ByVal correlation As Long, ByRef laminar As Double, ByRef turbulent As Double) As Long
+Public Declare PtrSafe Function hg_turbulent_diameter Lib "hydrograde.dll" (ByVal shape As Long, ByVal a As Double, ByVal b As Double, ByVal mode As Long, ByRef diameter As Double) As Long
+Public Declare PtrSafe Function hg_pipe_table_schedule Lib "hydrograde.dll" (ByVal table_name As String, ByVal index As LongPtr, ByVal buf As String, ByVal length As LongPtr, ByRef needed As LongPtr) As Long
+Public Declare PtrSafe Function hg_pipe_table_nominal Lib "hydrograde.dll" (ByVal table_name As String, ByVal index As LongPtr, ByVal buf As String, ByVal length As LongPtr, ByRef needed As LongPtr) As Long
 
 Private Declare PtrSafe Function lstrlenA Lib "kernel32" (ByVal p As LongPtr) As Long
 Private Declare PtrSafe Sub RtlMoveMemory Lib "kernel32" (ByVal dest As String, ByVal src As LongPtr, ByVal n As LongPtr)

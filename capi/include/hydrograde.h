@@ -140,6 +140,12 @@
 #define HG_TRANSITION_REFUSE 2
 
 /**
+ * The largest number of samples `hg_line_monte_carlo` accepts: the samples are kept in
+ * memory (8 bytes each), and a larger request is far more than any check needs.
+ */
+#define HG_MONTE_CARLO_MAX_SAMPLES 10000000
+
+/**
  * A straight run (pipe or duct).
  */
 #define HG_ELEMENT_PIPE 0
@@ -354,6 +360,37 @@ typedef struct hg_friction {
    */
   uint32_t warnings;
 } hg_friction;
+
+/**
+ * The result of `hg_line_monte_carlo`: the required head sampled with the line's
+ * uncertainty sources. Set `struct_size` to `sizeof(hg_monte_carlo)` before the call.
+ */
+typedef struct hg_monte_carlo {
+  /**
+   * Size of this struct in bytes, set by the caller.
+   */
+  size_t struct_size;
+  /**
+   * Sample mean of the required head, m.
+   */
+  double mean;
+  /**
+   * Sample standard deviation, m.
+   */
+  double std_dev;
+  /**
+   * 2.5 % quantile, m (the low end of the 95 % probabilistically symmetric interval).
+   */
+  double low;
+  /**
+   * 97.5 % quantile, m.
+   */
+  double high;
+  /**
+   * Number of samples drawn.
+   */
+  size_t samples;
+} hg_monte_carlo;
 
 /**
  * A line evaluated at one flow. Set `struct_size` to `sizeof(hg_line_result)` before the
@@ -1093,6 +1130,28 @@ int32_t hg_line_add_duct(struct hg_line *line,
                          double roughness);
 
 /**
+ * Appends a straight duct of section `shape` (`HG_SECTION_*`, dimensions `a`, `b` as
+ * for `hg_section_properties`) and `length` (m, > 0) whose wall is the catalogue
+ * `material` (see `hg_roughness`): its roughness is the material's typical value, and
+ * the material's range feeds the roughness uncertainty of the bands (as
+ * `hg_line_add_pipe_material` for a round pipe).
+ *
+ * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`;
+ * `HG_ERR_INVALID` for b ≠ 0 on a one-dimension shape or a name not UTF-8;
+ * `HG_ERR_NULL_POINTER`. Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread; `material` NULL or a
+ * NUL-terminated string.
+ */
+int32_t hg_line_add_duct_material(struct hg_line *line,
+                                  int32_t shape,
+                                  double a,
+                                  double b,
+                                  double length,
+                                  const char *material);
+
+/**
  * Appends the catalogue fitting `name` (see `hg_fitting_catalogue_name`). Its K refers
  * to the velocity in `diameter` (m, > 0), or, when `diameter` is 0, in the bore of the
  * pipe before it (after it when it stands first); a line with no pipe to take it from
@@ -1191,6 +1250,74 @@ int32_t hg_line_set_inlet_pressure(struct hg_line *line,
  */
 int32_t hg_line_count(const struct hg_line *line,
                       size_t *count);
+
+/**
+ * Propagates the uncertainty sources of `line` (see `hg_line_set_uncertainty`) to its
+ * required head at `flow` (m³/s) by sampling (JCGM 101:2008), `samples` times (100 to
+ * `HG_MONTE_CARLO_MAX_SAMPLES`) from the generator seed `seed`, into `*out`: the check
+ * of the first-order band of `hg_line_evaluate`. The same seed gives the same numbers.
+ * Friction model, diameter, density and viscosity are drawn normal; roughness, fitting K
+ * and equipment ratings rectangular. Time grows with `samples` × elements.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE` for the flow; `HG_ERR_OUT_OF_RANGE` for a sample
+ * count outside the range; the codes of `hg_line_evaluate` for the line;
+ * `HG_ERR_INVALID` for a `struct_size` too small; `HG_ERR_NULL_POINTER`. Thread-safe
+ * (the line is only read).
+ *
+ * # Safety
+ * `line` and `fluid` must be NULL or live handles; `out` NULL or a writable
+ * `hg_monte_carlo` of `out->struct_size` bytes.
+ */
+int32_t hg_line_monte_carlo(const struct hg_line *line,
+                            const struct hg_fluid *fluid,
+                            double flow,
+                            size_t samples,
+                            uint64_t seed,
+                            struct hg_monte_carlo *out);
+
+/**
+ * Evaluates `line` as `hg_line_evaluate`, but with the static pressure at the inlet
+ * given for this call: `inlet_pressure` in Pa absolute (> 0), or 0 for none (a gas then
+ * starts at its own pressure). The line's own setting (`hg_line_set_inlet_pressure`) is
+ * not used and not changed, so threads may evaluate one line at different pressures.
+ *
+ * Returns the codes of `hg_line_evaluate`, and `HG_ERR_NOT_FINITE` or
+ * `HG_ERR_OUT_OF_RANGE` for a bad `inlet_pressure`. Thread-safe (the line is only read).
+ *
+ * # Safety
+ * As `hg_line_evaluate`.
+ */
+int32_t hg_line_evaluate_at(const struct hg_line *line,
+                            const struct hg_fluid *fluid,
+                            double flow,
+                            double inlet_pressure,
+                            struct hg_line_result *out);
+
+/**
+ * Source number `source` (0-based, largest share first) of the head-loss band of element
+ * `index` (0-based, route order) of `line` for `fluid` at `flow` (m³/s), as
+ * `hg_line_band_source` gives them for the whole line: the name copied into `buf` (at
+ * most `len - 1` bytes and a NUL; full length in `*needed`) and its share of the
+ * variance (0…1) in `*share`. Source 0 dominates the element's band.
+ *
+ * Returns `HG_OK`; the codes of `hg_line_evaluate`; `HG_ERR_OUT_OF_RANGE` when `index`
+ * is not an element, or `source` is past the last source (a rise, and any band of zero
+ * width, has none); `HG_ERR_BUFFER_TOO_SMALL` when the name did not fit (the share is
+ * still written); `HG_ERR_NULL_POINTER`. Thread-safe (the line is only read).
+ *
+ * # Safety
+ * `line` and `fluid` must be NULL or live handles; `buf` NULL or valid for `len` bytes;
+ * `needed` and `share` NULL or writable.
+ */
+int32_t hg_line_element_band_source(const struct hg_line *line,
+                                    const struct hg_fluid *fluid,
+                                    double flow,
+                                    size_t index,
+                                    size_t source,
+                                    char *buf,
+                                    size_t len,
+                                    size_t *needed,
+                                    double *share);
 
 /**
  * Evaluates `line` for `fluid` at signed volumetric flow `flow` (m³/s; at inlet
@@ -1779,6 +1906,48 @@ int32_t hg_pipe_size_at_least(const char *table,
                               size_t *needed);
 
 /**
+ * Copies schedule (or tube type) number `index` (0-based, the table's order, e.g. "40",
+ * "STD", "K") of pipe `table` (as `hg_pipe_size`) into `buf` (at most `len - 1` bytes and
+ * a NUL) and stores its full length in `*needed`.
+ *
+ * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` for a table; `HG_ERR_OUT_OF_RANGE` when `index`
+ * is past the end (use it to count the schedules); `HG_ERR_BUFFER_TOO_SMALL` when the
+ * name did not fit (the cut copy is still written); `HG_ERR_INVALID` for a table name
+ * not UTF-8; `HG_ERR_NULL_POINTER` for a NULL `table` or `needed`, or a NULL `buf` with
+ * `len` > 0. Thread-safe.
+ *
+ * # Safety
+ * `table` must be NULL or NUL-terminated; `buf` NULL or valid for writing `len` bytes;
+ * `needed` NULL or writable.
+ */
+int32_t hg_pipe_table_schedule(const char *table,
+                               size_t index,
+                               char *buf,
+                               size_t len,
+                               size_t *needed);
+
+/**
+ * Copies nominal size number `index` (0-based, smallest first, as printed: "1/2", "2",
+ * "1-1/2") of pipe `table` (as `hg_pipe_size`) into `buf` (at most `len - 1` bytes and a
+ * NUL) and stores its full length in `*needed`. Not every size exists in every schedule.
+ *
+ * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` for a table; `HG_ERR_OUT_OF_RANGE` when `index`
+ * is past the end (use it to count the sizes); `HG_ERR_BUFFER_TOO_SMALL` when the name
+ * did not fit (the cut copy is still written); `HG_ERR_INVALID` for a table name not
+ * UTF-8; `HG_ERR_NULL_POINTER` for a NULL `table` or `needed`, or a NULL `buf` with
+ * `len` > 0. Thread-safe.
+ *
+ * # Safety
+ * `table` must be NULL or NUL-terminated; `buf` NULL or valid for writing `len` bytes;
+ * `needed` NULL or writable.
+ */
+int32_t hg_pipe_table_nominal(const char *table,
+                              size_t index,
+                              char *buf,
+                              size_t len,
+                              size_t *needed);
+
+/**
  * The library version as a static string, e.g. "0.1.0" (never freed; never NULL).
  * Thread-safe.
  */
@@ -1870,9 +2039,10 @@ int32_t hg_duct_flow_state(int32_t shape,
                            struct hg_pipe_flow *out);
 
 /**
- * Reynolds number `*re` = |V|·D·ρ/μ of flow `flow` (m³/s, signed) in a round pipe of
- * inside `diameter` (m, > 0), for a fluid of `density` (kg/m³, > 0) and `viscosity`
- * (Pa·s, > 0), as the core's pipe flow state computes it.
+ * Reynolds number `*re` = ρ·|V|·D/μ of flow `flow` (m³/s, signed) in a round pipe of
+ * inside `diameter` (m, > 0), with V = Q/A, for a fluid of `density` (kg/m³, > 0) and
+ * `viscosity` (Pa·s, > 0): the core's `Fluid::reynolds`. (The flow state of
+ * `hg_duct_flow_state` computes |V|·D/ν and may differ from it in the last bit.)
  *
  * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
  * Thread-safe.
@@ -1932,6 +2102,27 @@ int32_t hg_section_properties(int32_t shape,
                               double *wetted_perimeter,
                               double *hydraulic_diameter,
                               double *laminar_constant);
+
+/**
+ * The diameter `*diameter` (m) turbulent flow in the section `shape` (`HG_SECTION_*`,
+ * dimensions `a`, `b` as for `hg_section_properties`) is computed on under `mode`
+ * (`HG_TURBULENT_DIAMETER_*`): the hydraulic diameter, or with
+ * `HG_TURBULENT_DIAMETER_LAMINAR_EQUIVALENT` for rectangles and annuli the
+ * laminar-equivalent diameter 64/C·D_h (Jones 1976; Jones & Leung 1981). Lines choose
+ * the mode with `hg_line_set_turbulent_diameter`.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a bad dimension, shape
+ * or mode; `HG_ERR_INVALID` for b ≠ 0 on a one-dimension shape; `HG_ERR_NULL_POINTER`.
+ * Thread-safe.
+ *
+ * # Safety
+ * `diameter` must be NULL or point to a writable double.
+ */
+int32_t hg_turbulent_diameter(int32_t shape,
+                              double a,
+                              double b,
+                              int32_t mode,
+                              double *diameter);
 
 /**
  * Converts `value` from unit `from` to unit `to` into `*out`, with the exact factors of

@@ -168,6 +168,20 @@ inline std::vector<std::string> names(F get) {
 /// Every unit name hg_convert accepts.
 inline std::vector<std::string> unit_names() { return detail::names(hg_unit_name); }
 
+/// The schedules (or tube types) of a pipe table ("steel", "stainless", "copper", "pvc").
+inline std::vector<std::string> pipe_table_schedules(const std::string& table) {
+  return detail::names([&](std::size_t i, char* buf, std::size_t len, std::size_t* need) {
+    return hg_pipe_table_schedule(table.c_str(), i, buf, len, need);
+  });
+}
+
+/// The nominal sizes of a pipe table, smallest first.
+inline std::vector<std::string> pipe_table_nominal_sizes(const std::string& table) {
+  return detail::names([&](std::size_t i, char* buf, std::size_t len, std::size_t* need) {
+    return hg_pipe_table_nominal(table.c_str(), i, buf, len, need);
+  });
+}
+
 /// Every catalogue fitting name.
 inline std::vector<std::string> fitting_catalogue() {
   return detail::names(hg_fitting_catalogue_name);
@@ -253,6 +267,13 @@ inline double reynolds(double flow, double diameter, double density, double visc
 }
 
 /// Published validity range and accuracy of a correlation (HG_CORRELATION_*).
+/// The diameter (m) turbulent flow in a section uses under mode HG_TURBULENT_DIAMETER_*.
+inline double turbulent_diameter(int32_t shape, double a, double b, int32_t mode) {
+  double d = 0.0;
+  check(hg_turbulent_diameter(shape, a, b, mode, &d));
+  return d;
+}
+
 struct validity {
   double re_min, re_max, rel_roughness_min, rel_roughness_max, accuracy;
 };
@@ -549,6 +570,45 @@ class line {
       out.emplace_back(name, share);
     }
     return out;
+  }
+  /// The sources of element `index`'s head-loss band at a flow, largest share first.
+  std::vector<std::pair<std::string, double>> element_band_sources(const fluid& f, double flow,
+                                                                   std::size_t index) const {
+    std::vector<std::pair<std::string, double>> out;
+    std::size_t need = 0;
+    double share = 0.0;
+    // An index past the end is an error; past the last source is the end of the list.
+    if (index >= size()) check(hg_line_element_band_source(l_, f.get(), flow, index, 0, nullptr, 0, &need, &share));
+    for (std::size_t i = 0;; ++i) {
+      int32_t s = hg_line_element_band_source(l_, f.get(), flow, index, i, nullptr, 0, &need, &share);
+      if (s == HG_ERR_OUT_OF_RANGE) break;
+      if (s != HG_ERR_BUFFER_TOO_SMALL) check(s);
+      std::string name(need, '\0');
+      check(hg_line_element_band_source(l_, f.get(), flow, index, i, &name[0], need + 1, &need, &share));
+      out.emplace_back(name, share);
+    }
+    return out;
+  }
+  /// A duct of section `shape` whose wall is a catalogue material.
+  line& add_duct_material(int32_t shape, double a, double b, double length,
+                          const std::string& material) {
+    check(hg_line_add_duct_material(l_, shape, a, b, length, material.c_str()));
+    return *this;
+  }
+  /// Evaluates with an inlet pressure (Pa absolute) for this call only; 0 for none.
+  hg_line_result evaluate_at(const fluid& f, double flow, double inlet_pressure) const {
+    hg_line_result r{};
+    r.struct_size = sizeof r;
+    check(hg_line_evaluate_at(l_, f.get(), flow, inlet_pressure, &r));
+    return r;
+  }
+  /// The Monte Carlo check of the required head's band (samples ≥ 100, reproducible seed).
+  hg_monte_carlo monte_carlo(const fluid& f, double flow, std::size_t samples,
+                             uint64_t seed) const {
+    hg_monte_carlo r{};
+    r.struct_size = sizeof r;
+    check(hg_line_monte_carlo(l_, f.get(), flow, samples, seed, &r));
+    return r;
   }
   line& set_inlet_pressure(double pressure) {
     check(hg_line_set_inlet_pressure(l_, pressure));

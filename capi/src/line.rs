@@ -169,6 +169,39 @@ pub unsafe extern "C" fn hg_line_add_duct(
     }
 }
 
+/// Appends a straight duct of section `shape` (`HG_SECTION_*`, dimensions `a`, `b` as
+/// for `hg_section_properties`) and `length` (m, > 0) whose wall is the catalogue
+/// `material` (see `hg_roughness`): its roughness is the material's typical value, and
+/// the material's range feeds the roughness uncertainty of the bands (as
+/// `hg_line_add_pipe_material` for a round pipe).
+///
+/// Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`;
+/// `HG_ERR_INVALID` for b ≠ 0 on a one-dimension shape or a name not UTF-8;
+/// `HG_ERR_NULL_POINTER`. Needs exclusive use of `line`.
+///
+/// # Safety
+/// `line` must be NULL or a live handle used by no other thread; `material` NULL or a
+/// NUL-terminated string.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_add_duct_material(
+    line: *mut hg_line,
+    shape: i32,
+    a: f64,
+    b: f64,
+    length: f64,
+    material: *const c_char,
+) -> i32 {
+    // SAFETY: forwarded contract.
+    unsafe {
+        with_line(line, |l| {
+            let m = ffi::c_str("material", material)?;
+            let p = Pipe::of_material(section_of(shape, a, b)?, length, m)?;
+            l.push(Element::Pipe(p));
+            Ok(())
+        })
+    }
+}
+
 /// A fitting referred to `diameter`, or to the adjoining pipe's bore when it is 0.
 pub(crate) fn refer(f: Fitting, diameter: f64) -> FfiResult<Fitting> {
     if diameter == 0.0 {

@@ -112,7 +112,7 @@ fn or0(x: f64) -> f64 {
     if x.is_finite() { x } else { 0.0 }
 }
 
-fn line_to_c(r: &LineResult) -> hg_line_result {
+pub(crate) fn line_to_c(r: &LineResult) -> hg_line_result {
     hg_line_result {
         struct_size: std::mem::size_of::<hg_line_result>(),
         flow: r.flow,
@@ -236,7 +236,7 @@ pub unsafe extern "C" fn hg_line_element(
     })
 }
 
-fn element(list: &[ElementResult], index: usize) -> FfiResult<&ElementResult> {
+pub(crate) fn element(list: &[ElementResult], index: usize) -> FfiResult<&ElementResult> {
     list.get(index).ok_or_else(|| {
         hydrograde::Error::out_of_range(
             "index",

@@ -401,6 +401,20 @@ pub unsafe extern "C" fn hg_line_set_roughness_range(
     }
 }
 
+/// The core's turbulent diameter of an `HG_TURBULENT_DIAMETER_*` value.
+pub(crate) fn turbulent_mode(mode: i32) -> FfiResult<TurbulentDiameter> {
+    match mode {
+        HG_TURBULENT_DIAMETER_HYDRAULIC => Ok(TurbulentDiameter::Hydraulic),
+        HG_TURBULENT_DIAMETER_LAMINAR_EQUIVALENT => Ok(TurbulentDiameter::LaminarEquivalent),
+        _ => Err(ffi::bad_constant(
+            "mode",
+            mode,
+            "HG_TURBULENT_DIAMETER_*",
+            2,
+        )),
+    }
+}
+
 /// Chooses the diameter turbulent flow in non-circular ducts uses (`HG_TURBULENT_DIAMETER_*`).
 ///
 /// Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` for an unknown mode; `HG_ERR_NULL_POINTER`.
@@ -413,18 +427,7 @@ pub unsafe extern "C" fn hg_line_set_turbulent_diameter(line: *mut hg_line, mode
     // SAFETY: forwarded contract.
     unsafe {
         with_line(line, |l| {
-            l.options.turbulent_diameter = match mode {
-                HG_TURBULENT_DIAMETER_HYDRAULIC => TurbulentDiameter::Hydraulic,
-                HG_TURBULENT_DIAMETER_LAMINAR_EQUIVALENT => TurbulentDiameter::LaminarEquivalent,
-                _ => {
-                    return Err(ffi::bad_constant(
-                        "mode",
-                        mode,
-                        "HG_TURBULENT_DIAMETER_*",
-                        2,
-                    ));
-                }
-            };
+            l.options.turbulent_diameter = turbulent_mode(mode)?;
             l.changed();
             Ok(())
         })

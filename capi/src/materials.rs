@@ -178,3 +178,76 @@ pub unsafe extern "C" fn hg_pipe_size_at_least(
         }
     })
 }
+
+/// Copies name `index` (0-based) of a list into a caller's buffer for the entry points
+/// below.
+///
+/// # Safety
+/// As `ffi::copy_name`; `table` NULL or a NUL-terminated string.
+unsafe fn table_item(
+    table: *const c_char,
+    list: fn(PipeTable) -> Vec<&'static str>,
+    index: usize,
+    buf: *mut c_char,
+    len: usize,
+    needed: *mut usize,
+) -> i32 {
+    guard(|| {
+        ffi::check_outs(&[out_ptr("needed", needed)])?;
+        // SAFETY: forwarded contract.
+        let t = unsafe { ffi::c_str("table", table)? }.parse::<PipeTable>()?;
+        let name = ffi::list_item("index", &list(t), index)?;
+        // SAFETY: forwarded contract.
+        unsafe { ffi::copy_name(name, buf, len, needed) }
+    })
+}
+
+/// Copies schedule (or tube type) number `index` (0-based, the table's order, e.g. "40",
+/// "STD", "K") of pipe `table` (as `hg_pipe_size`) into `buf` (at most `len - 1` bytes and
+/// a NUL) and stores its full length in `*needed`.
+///
+/// Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` for a table; `HG_ERR_OUT_OF_RANGE` when `index`
+/// is past the end (use it to count the schedules); `HG_ERR_BUFFER_TOO_SMALL` when the
+/// name did not fit (the cut copy is still written); `HG_ERR_INVALID` for a table name
+/// not UTF-8; `HG_ERR_NULL_POINTER` for a NULL `table` or `needed`, or a NULL `buf` with
+/// `len` > 0. Thread-safe.
+///
+/// # Safety
+/// `table` must be NULL or NUL-terminated; `buf` NULL or valid for writing `len` bytes;
+/// `needed` NULL or writable.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_pipe_table_schedule(
+    table: *const c_char,
+    index: usize,
+    buf: *mut c_char,
+    len: usize,
+    needed: *mut usize,
+) -> i32 {
+    // SAFETY: forwarded contract.
+    unsafe { table_item(table, |t| t.schedules().to_vec(), index, buf, len, needed) }
+}
+
+/// Copies nominal size number `index` (0-based, smallest first, as printed: "1/2", "2",
+/// "1-1/2") of pipe `table` (as `hg_pipe_size`) into `buf` (at most `len - 1` bytes and a
+/// NUL) and stores its full length in `*needed`. Not every size exists in every schedule.
+///
+/// Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` for a table; `HG_ERR_OUT_OF_RANGE` when `index`
+/// is past the end (use it to count the sizes); `HG_ERR_BUFFER_TOO_SMALL` when the name
+/// did not fit (the cut copy is still written); `HG_ERR_INVALID` for a table name not
+/// UTF-8; `HG_ERR_NULL_POINTER` for a NULL `table` or `needed`, or a NULL `buf` with
+/// `len` > 0. Thread-safe.
+///
+/// # Safety
+/// `table` must be NULL or NUL-terminated; `buf` NULL or valid for writing `len` bytes;
+/// `needed` NULL or writable.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_pipe_table_nominal(
+    table: *const c_char,
+    index: usize,
+    buf: *mut c_char,
+    len: usize,
+    needed: *mut usize,
+) -> i32 {
+    // SAFETY: forwarded contract.
+    unsafe { table_item(table, PipeTable::nominal_sizes, index, buf, len, needed) }
+}

@@ -3,6 +3,7 @@
 use crate::ffi::{self, FfiResult, SizePrefixed, guard, out_ptr, put};
 use crate::friction::regime_code;
 use crate::section::{HG_SECTION_CIRCLE, section_of};
+use hydrograde::error::check;
 use hydrograde::fluid::Fluid;
 use hydrograde::friction::Options;
 use hydrograde::pipe::{Pipe, PipeFlow};
@@ -145,9 +146,10 @@ pub unsafe extern "C" fn hg_duct_flow_state(
     })
 }
 
-/// Reynolds number `*re` = |V|·D·ρ/μ of flow `flow` (m³/s, signed) in a round pipe of
-/// inside `diameter` (m, > 0), for a fluid of `density` (kg/m³, > 0) and `viscosity`
-/// (Pa·s, > 0), as the core's pipe flow state computes it.
+/// Reynolds number `*re` = ρ·|V|·D/μ of flow `flow` (m³/s, signed) in a round pipe of
+/// inside `diameter` (m, > 0), with V = Q/A, for a fluid of `density` (kg/m³, > 0) and
+/// `viscosity` (Pa·s, > 0): the core's `Fluid::reynolds`. (The flow state of
+/// `hg_duct_flow_state` computes |V|·D/ν and may differ from it in the last bit.)
 ///
 /// Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
 /// Thread-safe.
@@ -164,11 +166,13 @@ pub unsafe extern "C" fn hg_reynolds(
 ) -> i32 {
     guard(|| {
         ffi::check_outs(&[out_ptr("re", re)])?;
-        // The length and roughness play no part in the Reynolds number.
-        let pipe = pipe_of(HG_SECTION_CIRCLE, diameter, 0.0, 1.0, 0.0)?;
-        let s = state(&pipe, density, viscosity, flow)?;
+        let section = section_of(HG_SECTION_CIRCLE, diameter, 0.0)?;
+        let fluid = Fluid::new(density, viscosity)?;
+        // Named as the flow, not as the velocity derived from it.
+        check::finite("flow", flow)?;
+        let value = fluid.reynolds(section.velocity(flow), diameter)?;
         // SAFETY: forwarded contract.
-        unsafe { put("re", re, s.reynolds) }
+        unsafe { put("re", re, value) }
     })
 }
 

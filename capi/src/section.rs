@@ -99,6 +99,36 @@ pub unsafe extern "C" fn hg_section_properties(
     })
 }
 
+/// The diameter `*diameter` (m) turbulent flow in the section `shape` (`HG_SECTION_*`,
+/// dimensions `a`, `b` as for `hg_section_properties`) is computed on under `mode`
+/// (`HG_TURBULENT_DIAMETER_*`): the hydraulic diameter, or with
+/// `HG_TURBULENT_DIAMETER_LAMINAR_EQUIVALENT` for rectangles and annuli the
+/// laminar-equivalent diameter 64/C·D_h (Jones 1976; Jones & Leung 1981). Lines choose
+/// the mode with `hg_line_set_turbulent_diameter`.
+///
+/// Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a bad dimension, shape
+/// or mode; `HG_ERR_INVALID` for b ≠ 0 on a one-dimension shape; `HG_ERR_NULL_POINTER`.
+/// Thread-safe.
+///
+/// # Safety
+/// `diameter` must be NULL or point to a writable double.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_turbulent_diameter(
+    shape: i32,
+    a: f64,
+    b: f64,
+    mode: i32,
+    diameter: *mut f64,
+) -> i32 {
+    guard(|| {
+        ffi::check_outs(&[out_ptr("diameter", diameter)])?;
+        let s = section_of(shape, a, b)?;
+        let m = crate::line_more::turbulent_mode(mode)?;
+        // SAFETY: forwarded contract; checked above.
+        unsafe { put("diameter", diameter, s.turbulent_diameter(m)) }
+    })
+}
+
 #[cfg(test)]
 mod tests {
     use super::*;

@@ -94,6 +94,8 @@ static int32_t call_record(const record *r, double *got, int *ngot, char *name, 
       int32_t sb = hg_pipe_head_loss_batch(a[0].d, a[1].d, a[2].d, a[3].d, a[4].d, q, 3, q, d);
       if (sb != HG_OK || bits_of(q[2]) != bits_of(got[0]) || bits_of(d[1]) != bits_of(got[1])) s = -3;
     }
+  } else if (strcmp(r->tag, "turbulent_diameter") == 0) {
+    s = hg_turbulent_diameter((int32_t)a[0].i, a[1].d, a[2].d, (int32_t)a[3].i, &got[0]), *ngot = 1;
   } else if (strcmp(r->tag, "reynolds") == 0) {
     s = hg_reynolds(a[0].d, a[1].d, a[2].d, a[3].d, &got[0]), *ngot = 1;
   } else if (strcmp(r->tag, "duct_flow_state") == 0) {
@@ -162,6 +164,11 @@ static long check_material_record(const record *r, int quiet) {
   } else if (strcmp(r->tag, "saturation") == 0) {
     s = hg_water_saturation_temperature(a[0].d, &x);
     got[n++] = tok_d(x);
+  } else if (strcmp(r->tag, "table_schedule") == 0 || strcmp(r->tag, "table_nominal") == 0) {
+    s = r->tag[6] == 's' ? hg_pipe_table_schedule(a[0].s, (size_t)a[1].i, name, sizeof name, &need)
+                         : hg_pipe_table_nominal(a[0].s, (size_t)a[1].i, name, sizeof name, &need);
+    if (s == HG_OK && need != strlen(name)) s = -2;
+    got[n++] = tok_s(name);
   } else if (strcmp(r->tag, "pipe_size_at_least") == 0) {
     s = hg_pipe_size_at_least(a[0].s, a[1].s, a[2].d, &x, name, sizeof name, &need);
     got[n++] = tok_d(x), got[n++] = tok_s(name);
@@ -174,15 +181,15 @@ static long check_material_record(const record *r, int quiet) {
 /* Every record of the functions other than the friction factor and the line. */
 static long compare_records(int quiet) {
   const char *tags[] = {"water", "air", "vapour", "convert", "unit_name", "catalogue", "fitting_k",
-                        "section", "pipe_head_loss", "reynolds", "duct_flow_state"};
+                        "section", "turbulent_diameter", "pipe_head_loss", "reynolds", "duct_flow_state"};
   long bad = 0;
   for (size_t i = 0; i < sizeof tags / sizeof *tags; i++) {
     bad += for_each_record(ref_path, tags[i], check_record, quiet);
     if (!quiet) CHECK(records_seen > 0, "no reference record for %s", tags[i]);
   }
   const char *mtags[] = {"material_name", "roughness", "pipe_size", "validity", "saturation", "transition_limits",
-                          "pump_curve_head"};
-  for (size_t i = 0; i < 7; i++) {
+                          "pump_curve_head", "table_schedule", "table_nominal"};
+  for (size_t i = 0; i < sizeof mtags / sizeof *mtags; i++) {
     bad += for_each_record(ref_path, mtags[i], check_material_record, quiet);
     if (!quiet) CHECK(records_seen > 0, "no reference record for %s", mtags[i]);
   }
@@ -462,7 +469,12 @@ static int32_t call_at_least(const double *a, double *out) {
   return hg_pipe_size_at_least("copper", "K", a[0], out, nominal, sizeof nominal, &need);
 }
 
+static int32_t call_turbulent(const double *a, double *out) {
+  return hg_turbulent_diameter(HG_SECTION_RECTANGLE, a[0], a[1], HG_TURBULENT_DIAMETER_LAMINAR_EQUIVALENT, out);
+}
+
 static const scalar_case cases[] = {
+    {"hg_turbulent_diameter", call_turbulent, 2, {0.2, 0.1}, {REJ_ALL, REJ_ALL}},
     {"hg_transition_limits", call_limits, 2, {3000.0, 1e-3}, {REJ_ALL, REJ_NONFINITE | REJ_NEG}},
     {"hg_pump_curve_head", call_pump, 1, {1e-3}, {REJ_NONFINITE | REJ_NEG}},
     {"hg_water_saturation_temperature", call_saturation, 1, {1e5}, {REJ_ALL}},
@@ -645,6 +657,48 @@ static void test_bad_pointers_others(void) {
   CHECK(hg_pipe_head_loss(0.05, 1, 0, 998, 1e-3, 1e-3, NULL, &y) == HG_ERR_NULL_POINTER, "pipe NULL");
   CHECK(hg_pipe_head_loss(0.05, 1, 0, 998, 1e-3, 1e-3, &x, NULL) == HG_ERR_NULL_POINTER, "pipe NULL");
   CHECK(hg_reynolds(1e-3, 0.05, 998, 1e-3, NULL) == HG_ERR_NULL_POINTER, "reynolds NULL");
+  /* Exact: Re = rho V D / mu with V = Q / (pi D^2 / 4) = 4 rho Q / (pi D mu); 1e5 here
+   * to the last few bits (analytical). */
+  double q_re = 1e5 * 3.141592653589793 * 0.05 * 1e-3 / (4.0 * 1000.0);
+  CHECK(hg_reynolds(q_re, 0.05, 1000.0, 1e-3, &x) == HG_OK && fabs(x / 1e5 - 1.0) < 1e-14, "reynolds 1e5: %.17g", x);
+  CHECK(hg_reynolds(-q_re, 0.05, 1000.0, 1e-3, &y) == HG_OK && y == x, "reynolds odd in the flow");
+  x = 5.0;
+  CHECK(hg_turbulent_diameter(0, 0.1, 0, 0, NULL) == HG_ERR_NULL_POINTER && msg_len() > 0, "turbulent NULL");
+  CHECK(hg_turbulent_diameter(0, 0.1, 0, 2, &x) == HG_ERR_OUT_OF_RANGE && x == 5.0 && msg_len() > 0, "mode 2");
+  CHECK(hg_turbulent_diameter(0, 0.1, 0, -1, &x) == HG_ERR_OUT_OF_RANGE, "mode -1");
+  CHECK(hg_turbulent_diameter(7, 0.1, 0, 0, &x) == HG_ERR_OUT_OF_RANGE, "turbulent shape 7");
+  CHECK(hg_turbulent_diameter(HG_SECTION_CIRCLE, 0.1, 0.2, 0, &x) == HG_ERR_INVALID, "turbulent circle b");
+  /* A circle's turbulent diameter is its bore in either mode (exact). */
+  CHECK(hg_turbulent_diameter(HG_SECTION_CIRCLE, 0.1, 0, HG_TURBULENT_DIAMETER_LAMINAR_EQUIVALENT, &x) == HG_OK &&
+            x == 0.1, "circle: %.17g", x);
+  /* A square's laminar-equivalent diameter is 64/56.91 of its side (Jones 1976, from
+   * memory: C = 56.91 for a square), so larger than the side. */
+  CHECK(hg_turbulent_diameter(HG_SECTION_RECTANGLE, 0.1, 0.1, HG_TURBULENT_DIAMETER_LAMINAR_EQUIVALENT, &x) ==
+                HG_OK && fabs(x / (0.1 * 64.0 / 56.91) - 1.0) < 1e-3, "square: %.17g", x);
+  for (int t = 0; t < 2; t++) {
+    int32_t (*fn)(const char *, size_t, char *, size_t, size_t *) = t ? hg_pipe_table_nominal : hg_pipe_table_schedule;
+    CHECK(fn(NULL, 0, buf, sizeof buf, &need) == HG_ERR_NULL_POINTER && msg_len() > 0, "table %d NULL table", t);
+    CHECK(fn("steel", 0, buf, sizeof buf, NULL) == HG_ERR_NULL_POINTER, "table %d NULL needed", t);
+    CHECK(fn("steel", 0, NULL, 4, &need) == HG_ERR_NULL_POINTER, "table %d NULL buf", t);
+    CHECK(fn("steel", 0, NULL, 0, &need) == HG_ERR_BUFFER_TOO_SMALL && need > 0, "table %d length query", t);
+    CHECK(fn("steel", SIZE_MAX, buf, sizeof buf, &need) == HG_ERR_OUT_OF_RANGE && msg_len() > 0, "table %d SIZE_MAX", t);
+    CHECK(fn("cast_iron", 0, buf, sizeof buf, &need) == HG_ERR_UNKNOWN_NAME && msg_len() > 0, "table %d unknown", t);
+    CHECK(fn("", 0, buf, sizeof buf, &need) == HG_ERR_UNKNOWN_NAME, "table %d empty name", t);
+    CHECK(fn("\xff", 0, buf, sizeof buf, &need) == HG_ERR_INVALID, "table %d not UTF-8", t);
+  }
+  /* Every schedule and size listed by index is one hg_pipe_size knows (ASTM D1785 lists
+   * schedule 40 PVC in 2-1/2; common practice). */
+  size_t ns = 0, nn = 0;
+  char sched[16], nom[16];
+  while (hg_pipe_table_schedule("pvc", ns, sched, sizeof sched, &need) == HG_OK) ns++;
+  while (hg_pipe_table_nominal("pvc", nn, nom, sizeof nom, &need) == HG_OK) nn++;
+  CHECK(ns >= 2 && nn >= 10, "pvc: %zu schedules, %zu sizes", ns, nn);
+  int found = 0;
+  for (size_t i = 0; i < nn; i++) {
+    hg_pipe_table_nominal("pvc", i, nom, sizeof nom, &need);
+    found += strcmp(nom, "2-1/2") == 0 && hg_pipe_size("pvc", nom, "40", &x, &y, &z) == HG_OK;
+  }
+  CHECK(found == 1, "pvc 2-1/2 schedule 40 listed once");
   hg_pipe_flow st;
   st.struct_size = 3;
   CHECK(hg_duct_flow_state(0, 0.05, 0, 1, 0, 998, 1e-3, 1e-3, &st) == HG_ERR_INVALID, "struct_size 3");

@@ -188,6 +188,27 @@ static void test_line() {
   double total = 0;
   for (auto& s : sources) total += s.second;
   CHECK(!sources.empty() && std::fabs(total - 1.0) < 1e-12, "shares sum to 1");
+  auto esrc = all.element_band_sources(water, 5e-3, 1);
+  double etotal = 0;
+  for (auto& s : esrc) etotal += s.second;
+  CHECK(!esrc.empty() && std::fabs(etotal - 1.0) < 1e-12, "element shares sum to 1");
+  CHECK(thrown([&] { all.element_band_sources(water, 5e-3, 99); }).first == HG_ERR_OUT_OF_RANGE, "element 99");
+  hg_monte_carlo mc = all.monte_carlo(water, 5e-3, 2000, 3);
+  hg_line_result ev = all.evaluate(water, 5e-3);
+  CHECK(mc.samples == 2000 && mc.low < ev.required_head && ev.required_head < mc.high, "Monte Carlo brackets");
+  CHECK(thrown([&] { all.monte_carlo(water, 5e-3, 10, 3); }).first == HG_ERR_OUT_OF_RANGE, "10 samples");
+  CHECK(all.evaluate_at(water, 5e-3, 2e5).inlet_pressure == 2e5 && all.evaluate_at(water, 5e-3, 0).has_pressures == 0,
+        "inlet pressure per call");
+  hg::line duct;
+  duct.add_duct_material(HG_SECTION_RECTANGLE, 0.3, 0.2, 10, "galvanized_steel");
+  CHECK(duct.size() == 1, "duct of a material");
+  // A circle's turbulent diameter is its bore (exact).
+  CHECK(hg::turbulent_diameter(HG_SECTION_CIRCLE, 0.1, 0, HG_TURBULENT_DIAMETER_LAMINAR_EQUIVALENT) == 0.1, "circle");
+  auto scheds = hg::pipe_table_schedules("pvc");
+  auto noms = hg::pipe_table_nominal_sizes("pvc");
+  CHECK(std::count(scheds.begin(), scheds.end(), "40") == 1 && std::count(noms.begin(), noms.end(), "2-1/2") == 1,
+        "pvc table lists schedule 40 and 2-1/2 (ASTM D1785; common practice)");
+  CHECK(thrown([] { hg::pipe_table_schedules("cast_iron"); }).first == HG_ERR_UNKNOWN_NAME, "unknown table");
   hg::fluid wet = water.with_uncertainty(0.001, 0.02).with_vapour_pressure(2.5e5);
   all.set_inlet_pressure(1.5e5);
   CHECK(all.evaluate(wet, 5e-3).warnings & HG_WARN_BELOW_VAPOUR_PRESSURE, "cavitation");

@@ -147,6 +147,7 @@ TAGS = {
     "validity": "hg_correlation_validity",
     "saturation": "hg_water_saturation_temperature",
     "transition_limits": "hg_transition_limits",
+    "turbulent_diameter": "hg_turbulent_diameter",
 }
 CODES = {"not_finite": 10, "out_of_range": 11, "unknown_name": 12, "invalid": 13, "no_solution": 20}
 OUT_TYPES = {"Double": ctypes.c_double, "Long": ctypes.c_int32, "LongPtr": ctypes.c_ssize_t}
@@ -225,3 +226,24 @@ def test_smallest_standard_size_through_a_string_buffer(vba):
         else:
             assert s == 0
             assert (bits(d.value), "s:" + buf.value.decode()) == (int(outs[0], 16), outs[1])
+
+
+def test_pipe_table_lists_through_string_buffers(vba):
+    """Schedules and nominal sizes by index, as a worksheet loop reads them."""
+    rows = [
+        line.split()
+        for line in Path(os.environ["HG_REFERENCE"]).read_text().splitlines()
+        if line.startswith(("table_schedule ", "table_nominal "))
+    ]
+    assert rows
+    need = ctypes.c_ssize_t()
+    for tag, table, index, _, *outs in rows:
+        fn = "hg_pipe_table_schedule" if tag == "table_schedule" else "hg_pipe_table_nominal"
+        buf = ctypes.create_string_buffer(32)
+        s = vba[fn](token(table), token(index), buf, 32, ctypes.byref(need))
+        if outs[0].startswith("!"):
+            assert s == CODES[outs[0][1:]]
+        else:
+            assert s == 0
+            assert "s:" + buf.value.decode() == outs[0]
+            assert need.value == len(buf.value)

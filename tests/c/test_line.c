@@ -116,6 +116,32 @@ static long check_line_record(const record *r, int quiet) {
                             bits_of(share) == bits_of(r->out[1].d);
     if (!quiet) CHECK(same, "band source %lld: status %d '%s'", r->in[3].i, s, name);
     return !same;
+  } else if (strcmp(r->tag, "line_elem_source") == 0) {
+    char name[64] = "";
+    size_t need = 0;
+    double share = -1;
+    s = hg_line_element_band_source(l, f, r->in[2].d, (size_t)r->in[3].i, (size_t)r->in[4].i, name, sizeof name,
+                                    &need, &share);
+    int same = r->err ? s == code_of_kind(r->kind) && msg_len() > 0
+                      : s == HG_OK && strcmp(name, r->out[0].s) == 0 && need == strlen(name) &&
+                            bits_of(share) == bits_of(r->out[1].d);
+    if (!quiet) CHECK(same, "element %lld source %lld: status %d '%s'", r->in[3].i, r->in[4].i, s, name);
+    return !same;
+  } else if (strcmp(r->tag, "line_eval_at") == 0) {
+    hg_line_result x;
+    memset(&x, 0, sizeof x);
+    x.struct_size = sizeof x;
+    s = hg_line_evaluate_at(l, f, r->in[2].d, r->in[3].d, &x);
+    double g[] = {x.head_loss, x.pressure_loss, x.required_head, x.inlet_pressure, x.outlet_pressure,
+                  x.warnings, x.required_head_low, x.required_head_high};
+    memcpy(got, g, sizeof g), ngot = 8;
+  } else if (strcmp(r->tag, "line_monte_carlo") == 0) {
+    hg_monte_carlo m;
+    memset(&m, 0, sizeof m);
+    m.struct_size = sizeof m;
+    s = hg_line_monte_carlo(l, f, r->in[2].d, (size_t)r->in[3].i, (uint64_t)r->in[4].i, &m);
+    double g[] = {m.mean, m.std_dev, m.low, m.high, (double)m.samples};
+    memcpy(got, g, sizeof g), ngot = 5;
   } else if (strcmp(r->tag, "line_system_curve") == 0) {
     double q[50];
     for (int i = 0; i < 50; i++) q[i] = -5e-3 + 2.5e-4 * i;
@@ -316,6 +342,117 @@ static void test_more_elements_bad_input(void) {
   hg_line_free(l);
 }
 
+/* The per-call inlet pressure, the Monte Carlo check, the sources of one element's band
+ * and ducts of catalogue materials: bad input, and the Monte Carlo interval against the
+ * first-order band. */
+static void test_checks(void) {
+  const hg_line *l = lines[0];
+  hg_fluid *f = fluids[1];
+  hg_line_result x, y;
+  hg_monte_carlo m;
+  x.struct_size = sizeof x, y.struct_size = sizeof y, m.struct_size = sizeof m;
+  m.mean = 7.0;
+  const double bad[] = {NAN, INFINITY, -INFINITY, -1.0};
+  for (int i = 0; i < 4; i++) {
+    double v = bad[i];
+    CHECK(hg_line_evaluate_at(l, f, 2e-3, v, &x) == (i < 3 ? HG_ERR_NOT_FINITE : HG_ERR_OUT_OF_RANGE) &&
+              msg_len() > 0, "inlet %g", v);
+    if (i < 3) CHECK(hg_line_evaluate_at(l, f, v, 2e5, &x) == HG_ERR_NOT_FINITE, "evaluate_at flow %g", v);
+    if (i < 3) CHECK(hg_line_monte_carlo(l, f, v, 200, 1, &m) == HG_ERR_NOT_FINITE && m.mean == 7.0 && msg_len() > 0,
+                     "monte carlo flow %g", v);
+  }
+  /* 0 means no inlet pressure for this call, whatever the line holds (lines[0] holds 3e5). */
+  CHECK(hg_line_evaluate_at(l, f, 2e-3, 0.0, &x) == HG_OK && x.has_pressures == 0, "no inlet pressure");
+  CHECK(hg_line_evaluate_at(l, f, 2e-3, 3e5, &x) == HG_OK && hg_line_evaluate(l, f, 2e-3, &y) == HG_OK &&
+            memcmp(&x, &y, sizeof x) == 0, "at the line's own pressure: the same bytes");
+  CHECK(hg_line_evaluate_at(NULL, f, 2e-3, 2e5, &x) == HG_ERR_NULL_POINTER, "evaluate_at NULL line");
+  CHECK(hg_line_evaluate_at(l, NULL, 2e-3, 2e5, &x) == HG_ERR_NULL_POINTER, "evaluate_at NULL fluid");
+  CHECK(hg_line_evaluate_at(l, f, 2e-3, 2e5, NULL) == HG_ERR_NULL_POINTER, "evaluate_at NULL out");
+  x.struct_size = 0;
+  CHECK(hg_line_evaluate_at(l, f, 2e-3, 2e5, &x) == HG_ERR_INVALID, "evaluate_at struct_size 0");
+  x.struct_size = sizeof x;
+  CHECK(hg_line_monte_carlo(NULL, f, 2e-3, 200, 1, &m) == HG_ERR_NULL_POINTER, "monte carlo NULL line");
+  CHECK(hg_line_monte_carlo(l, NULL, 2e-3, 200, 1, &m) == HG_ERR_NULL_POINTER, "monte carlo NULL fluid");
+  CHECK(hg_line_monte_carlo(l, f, 2e-3, 200, 1, NULL) == HG_ERR_NULL_POINTER, "monte carlo NULL out");
+  CHECK(hg_line_monte_carlo(l, f, 2e-3, 0, 1, &m) == HG_ERR_OUT_OF_RANGE && msg_len() > 0, "0 samples");
+  CHECK(hg_line_monte_carlo(l, f, 2e-3, 99, 1, &m) == HG_ERR_OUT_OF_RANGE, "99 samples");
+  /* Far more samples than memory holds must be refused, not attempted. */
+  CHECK(hg_line_monte_carlo(l, f, 2e-3, SIZE_MAX, 1, &m) == HG_ERR_OUT_OF_RANGE && m.mean == 7.0, "SIZE_MAX samples");
+  CHECK(hg_line_monte_carlo(l, f, 2e-3, HG_MONTE_CARLO_MAX_SAMPLES + 1, 1, &m) == HG_ERR_OUT_OF_RANGE, "max + 1");
+  m.struct_size = 8;
+  CHECK(hg_line_monte_carlo(l, f, 2e-3, 200, 1, &m) == HG_ERR_INVALID, "monte carlo struct_size 8");
+  m.struct_size = sizeof m;
+  hg_monte_carlo m2 = m;
+  CHECK(hg_line_monte_carlo(l, f, 2e-3, 500, 42, &m) == HG_OK && hg_line_monte_carlo(l, f, 2e-3, 500, 42, &m2) == HG_OK &&
+            memcmp(&m, &m2, sizeof m) == 0 && m.samples == 500, "same seed, same bytes");
+  /* JCGM 101:2008 §8: the first-order (GUM) interval is validated when its ends agree
+   * with the Monte Carlo ones; here within 15 % of the band's width at 20000 samples. */
+  CHECK(hg_line_evaluate(l, f, 2e-3, &x) == HG_OK, "evaluate");
+  CHECK(hg_line_monte_carlo(l, f, 2e-3, 20000, 2024, &m) == HG_OK, "20000 samples");
+  double width = x.required_head_high - x.required_head_low;
+  printf("test_checks: band %.6f … %.6f m, Monte Carlo %.6f … %.6f m (mean %.6f, sd %.6f)\n",
+         x.required_head_low, x.required_head_high, m.low, m.high, m.mean, m.std_dev);
+  CHECK(width > 0 && fabs(m.low - x.required_head_low) <= 0.15 * width &&
+            fabs(m.high - x.required_head_high) <= 0.15 * width,
+        "band %.6f..%.6f vs Monte Carlo %.6f..%.6f", x.required_head_low, x.required_head_high, m.low, m.high);
+  CHECK(m.low < x.required_head && x.required_head < m.high, "the nominal head lies inside the interval");
+
+  char name[64];
+  size_t need = 0;
+  double share = -1;
+  CHECK(hg_line_element_band_source(l, f, 2e-3, 0, 0, name, sizeof name, &need, &share) == HG_OK && share > 0 &&
+            share <= 1 && strcmp(name, "friction model") == 0, "pipe band: '%s' %g", name, share);
+  CHECK(hg_line_element_band_source(l, f, 2e-3, 3, 0, name, sizeof name, &need, &share) == HG_ERR_OUT_OF_RANGE &&
+            msg_len() > 0, "a rise has no sources");
+  CHECK(hg_line_element_band_source(l, f, 2e-3, 99, 0, name, sizeof name, &need, &share) == HG_ERR_OUT_OF_RANGE,
+        "element past the end");
+  CHECK(hg_line_element_band_source(l, f, 2e-3, 0, SIZE_MAX, name, sizeof name, &need, &share) ==
+            HG_ERR_OUT_OF_RANGE, "source SIZE_MAX");
+  CHECK(hg_line_element_band_source(l, f, 2e-3, 0, 0, name, 3, &need, &share) == HG_ERR_BUFFER_TOO_SMALL &&
+            strlen(name) == 2 && need == strlen("friction model"), "cut");
+  CHECK(hg_line_element_band_source(l, f, 2e-3, 0, 0, NULL, 0, &need, &share) == HG_ERR_BUFFER_TOO_SMALL, "length");
+  CHECK(hg_line_element_band_source(l, f, 2e-3, 0, 0, NULL, 4, &need, &share) == HG_ERR_NULL_POINTER, "NULL buf");
+  CHECK(hg_line_element_band_source(l, f, 2e-3, 0, 0, name, 8, NULL, &share) == HG_ERR_NULL_POINTER, "NULL needed");
+  CHECK(hg_line_element_band_source(l, f, 2e-3, 0, 0, name, 8, &need, NULL) == HG_ERR_NULL_POINTER, "NULL share");
+  CHECK(hg_line_element_band_source(NULL, f, 2e-3, 0, 0, name, 8, &need, &share) == HG_ERR_NULL_POINTER, "NULL line");
+  CHECK(hg_line_element_band_source(l, NULL, 2e-3, 0, 0, name, 8, &need, &share) == HG_ERR_NULL_POINTER, "NULL fluid");
+  CHECK(hg_line_element_band_source(l, f, NAN, 0, 0, name, 8, &need, &share) == HG_ERR_NOT_FINITE, "NaN flow");
+  CHECK(hg_line_element_band_source(l, f, 0.0, 0, 0, name, 8, &need, &share) == HG_ERR_OUT_OF_RANGE,
+        "no band at zero flow");
+
+  hg_line *d = NULL;
+  CHECK(hg_line_new(&d) == HG_OK, "new");
+  const double dbad[] = {NAN, INFINITY, -INFINITY, -1.0, 0.0};
+  for (int i = 0; i < 5; i++) {
+    double v = dbad[i];
+    CHECK(hg_line_add_duct_material(d, HG_SECTION_RECTANGLE, v, 0.2, 10, "galvanized_steel") != HG_OK &&
+              msg_len() > 0, "duct material a %g", v);
+    CHECK(hg_line_add_duct_material(d, HG_SECTION_RECTANGLE, 0.3, v, 10, "galvanized_steel") != HG_OK, "b %g", v);
+    CHECK(hg_line_add_duct_material(d, HG_SECTION_RECTANGLE, 0.3, 0.2, v, "galvanized_steel") != HG_OK, "L %g", v);
+  }
+  CHECK(hg_line_add_duct_material(d, HG_SECTION_RECTANGLE, 0.3, 0.2, 10, "unobtainium") == HG_ERR_UNKNOWN_NAME &&
+            msg_len() > 0, "unknown material");
+  CHECK(hg_line_add_duct_material(d, HG_SECTION_RECTANGLE, 0.3, 0.2, 10, NULL) == HG_ERR_NULL_POINTER, "NULL material");
+  CHECK(hg_line_add_duct_material(d, HG_SECTION_RECTANGLE, 0.3, 0.2, 10, "\xff") == HG_ERR_INVALID, "not UTF-8");
+  CHECK(hg_line_add_duct_material(d, 9, 0.3, 0.2, 10, "galvanized_steel") == HG_ERR_OUT_OF_RANGE, "shape 9");
+  CHECK(hg_line_add_duct_material(d, HG_SECTION_CIRCLE, 0.3, 0.2, 10, "galvanized_steel") == HG_ERR_INVALID, "circle b");
+  CHECK(hg_line_add_duct_material(NULL, HG_SECTION_RECTANGLE, 0.3, 0.2, 10, "pvc") == HG_ERR_NULL_POINTER, "NULL line");
+  size_t n = 9;
+  CHECK(hg_line_count(d, &n) == HG_OK && n == 0, "no bad duct was added");
+  /* The material's typical roughness and its range, as a duct of that roughness whose
+   * range is set by hand. */
+  double typical, low, high;
+  hg_line *e = NULL;
+  CHECK(hg_roughness("galvanized_steel", &typical, &low, &high) == HG_OK, "roughness");
+  CHECK(hg_line_add_duct_material(d, HG_SECTION_RECTANGLE, 0.3, 0.2, 10, "galvanized_steel") == HG_OK, "duct");
+  CHECK(hg_line_new(&e) == HG_OK && hg_line_add_duct(e, HG_SECTION_RECTANGLE, 0.3, 0.2, 10, typical) == HG_OK &&
+            hg_line_set_roughness_range(e, 0, low, high) == HG_OK, "duct by hand");
+  CHECK(hg_line_evaluate(d, fluids[2], 0.5, &x) == HG_OK && hg_line_evaluate(e, fluids[2], 0.5, &y) == HG_OK &&
+            memcmp(&x, &y, sizeof x) == 0, "duct of a material equals the duct by hand");
+  hg_line_free(d);
+  hg_line_free(e);
+}
+
 static void test_handles_and_bad_input(void) {
   hg_line *l = NULL;
   hg_fluid *f = NULL;
@@ -505,7 +642,7 @@ int main(int argc, char **argv) {
   hg_fluid_free(gas);
   const char *tags[] = {"line_eval", "line_element", "line_band_source", "line_required_head", "line_uniform",
                         "line_flow_for_head", "line_system_curve", "line_operating_point", "line_split_flow",
-                        "line_size"};
+                        "line_size", "line_elem_source", "line_eval_at", "line_monte_carlo"};
   for (size_t i = 0; i < sizeof tags / sizeof *tags; i++) {
     for_each_record(ref_path, tags[i], check_line_record, 1);
     CHECK(records_seen > 0, "no reference record for %s", tags[i]);
@@ -517,6 +654,7 @@ int main(int argc, char **argv) {
   test_more_elements_bad_input();
   printf("bitwise: line records, %ld differ\n", bad);
   test_handles_and_bad_input();
+  test_checks();
   pthread_t th[8];
   thread_arg args[8];
   for (int i = 0; i < 8; i++) {

@@ -1,0 +1,277 @@
+/* The demo of the C ABI behind `./run.sh demo` (built and run by scripts/demo-c.sh): the
+ * same two invented scenarios as core/examples/demo.rs, element for element, printed as
+ * the same table.
+ *
+ * 1. A hillside orchard's irrigation main: water at 12 °C pumped from a pond through
+ *    about 400 m of PVC and steel pipe, fifteen fittings and valves and 38 m of rise to a
+ *    header tank.
+ * 2. A workshop's rectangular exhaust duct: air at 30 °C through two duct sizes.
+ *
+ * All data are invented for the demonstration.
+ *
+ *   demo            the tables
+ *   demo --numbers  the key results as `name value` lines with %.17g (every digit), for
+ *                   the check in scripts/test-c.sh that they equal the Rust demo's bit
+ *                   for bit
+ */
+#include <stdint.h>
+#include <stdio.h>
+#include <stdlib.h>
+#include <string.h>
+
+#include "hydrograde.h"
+
+/* Inside diameters of the orchard main, m (PVC 3 in and steel 2-1/2 in, schedule 40). */
+#define PVC_BORE 0.0779
+#define STEEL_BORE 0.0627
+
+/* Stops the demo with the library's message when a call fails. */
+static void check(int32_t status, const char *what) {
+  if (status == HG_OK) return;
+  char msg[512];
+  hg_last_error(msg, sizeof msg);
+  fprintf(stderr, "error: %s: %s (%s)\n", what, msg, hg_status_name(status));
+  exit(1);
+}
+#define TRY(call) check((call), #call)
+
+/* Prints `s` padded with spaces to `width` characters (not bytes: "…" is one character),
+ * on the left when `right` is set, as Rust's {:>w} and {:<w} do. */
+static void padded(const char *s, int width, int right) {
+  int chars = 0;
+  for (const char *p = s; *p; p++) chars += ((unsigned char)*p & 0xC0) != 0x80;
+  if (!right) fputs(s, stdout);
+  for (int i = chars; i < width; i++) putchar(' ');
+  if (right) fputs(s, stdout);
+}
+
+static void band_text(char *buf, size_t len, double low, double high) {
+  snprintf(buf, len, "%.3f … %.3f", low, high);
+}
+
+static hg_line *orchard_line(void) {
+  hg_line *l = NULL;
+  TRY(hg_line_new(&l));
+  TRY(hg_line_add_entrance(l, HG_ENTRANCE_SHARP, 0.0));
+  TRY(hg_line_add_fitting(l, "y_strainer", 0.0));
+  TRY(hg_line_add_pipe_material(l, PVC_BORE, 6.0, "pvc"));
+  TRY(hg_line_add_fitting(l, "gate_valve", 0.0));
+  TRY(hg_line_add_fitting(l, "elbow_90_standard", 0.0));
+  TRY(hg_line_add_pipe_material(l, PVC_BORE, 140.0, "pvc"));
+  TRY(hg_line_add_fitting(l, "elbow_45_standard", 0.0));
+  TRY(hg_line_add_pipe_material(l, PVC_BORE, 120.0, "pvc"));
+  TRY(hg_line_add_fitting(l, "tee_run_flanged", 0.0));
+  TRY(hg_line_add_contraction(l, PVC_BORE, STEEL_BORE));
+  TRY(hg_line_add_pipe_material(l, STEEL_BORE, 95.0, "commercial_steel"));
+  TRY(hg_line_add_fitting(l, "elbow_90_long_radius", 0.0));
+  TRY(hg_line_add_fitting(l, "elbow_90_long_radius", 0.0));
+  TRY(hg_line_add_pipe_material(l, STEEL_BORE, 45.0, "commercial_steel"));
+  TRY(hg_line_add_fitting(l, "elbow_45_long_radius", 0.0));
+  TRY(hg_line_add_fitting(l, "ball_valve", 0.0));
+  TRY(hg_line_add_fitting(l, "globe_valve", 0.0));
+  TRY(hg_line_add_rise(l, 38.0));
+  TRY(hg_line_add_exit(l));
+  return l;
+}
+
+static hg_line *duct_line(void) {
+  double area, perimeter, d1, d2, c;
+  TRY(hg_section_properties(HG_SECTION_RECTANGLE, 0.40, 0.25, &area, &perimeter, &d1, &c));
+  TRY(hg_section_properties(HG_SECTION_RECTANGLE, 0.30, 0.20, &area, &perimeter, &d2, &c));
+  hg_line *l = NULL;
+  TRY(hg_line_new(&l));
+  TRY(hg_line_add_entrance(l, HG_ENTRANCE_ROUNDED, 0.1));
+  TRY(hg_line_add_equipment(l, "grease filter", 120.0, 0.9));
+  TRY(hg_line_add_duct_material(l, HG_SECTION_RECTANGLE, 0.40, 0.25, 18.0, "galvanized_steel"));
+  TRY(hg_line_add_bend(l, 90.0, 1.5, 0.0));
+  TRY(hg_line_add_contraction(l, d1, d2));
+  TRY(hg_line_add_duct_material(l, HG_SECTION_RECTANGLE, 0.30, 0.20, 12.0, "galvanized_steel"));
+  TRY(hg_line_add_bend(l, 45.0, 1.5, 0.0));
+  TRY(hg_line_add_rise(l, 4.5));
+  TRY(hg_line_add_exit(l));
+  return l;
+}
+
+/* The name of the source with the largest share of element `index`'s band ("" when the
+ * band has no width), or of the whole line's band when `index` is SIZE_MAX. */
+static void dominant(const hg_line *l, const hg_fluid *f, double q, size_t index, char *buf, size_t len) {
+  size_t need = 0;
+  double share = 0.0;
+  int32_t s = index == SIZE_MAX ? hg_line_band_source(l, f, q, 0, buf, len, &need, &share)
+                                : hg_line_element_band_source(l, f, q, index, 0, buf, len, &need, &share);
+  if (s == HG_ERR_OUT_OF_RANGE) buf[0] = '\0'; /* a band without sources */
+  else check(s, "band source");
+}
+
+static void print_breakdown(const hg_line *l, const hg_fluid *f, double q, hg_line_result *r) {
+  char text[128], band[64];
+  r->struct_size = sizeof *r;
+  TRY(hg_line_evaluate(l, f, q, r));
+  printf("  %2s  %-22s %6s %9s %8s  %9s  ", "#", "element", "V m/s", "Re", "f or K", "loss m");
+  padded("band (k = 2) m", 17, 0);
+  printf(" %-22s warnings\n", "largest source");
+  for (size_t i = 0; i < r->element_count; i++) {
+    hg_element_result e;
+    e.struct_size = sizeof e;
+    TRY(hg_line_element(l, f, q, i, &e));
+    char label[64], coef[32] = "", v[32] = "", re[32] = "", source[128], warn[256] = "";
+    size_t need;
+    TRY(hg_line_element_label(l, f, q, i, label, sizeof label, &need));
+    int rise = e.static_head != 0.0;
+    if (rise) snprintf(label, sizeof label, "rise %+.1f m", e.static_head);
+    if (e.kind == HG_ELEMENT_PIPE) snprintf(coef, sizeof coef, "f %.4f", e.friction_factor);
+    else if (e.kind == HG_ELEMENT_FITTING || e.k != 0.0) snprintf(coef, sizeof coef, "K %.3f", e.k);
+    /* Rises and rated drops have no velocity of their own: the library gives 0. */
+    if (e.velocity != 0.0 || e.reynolds != 0.0) {
+      snprintf(v, sizeof v, "%.2f", e.velocity);
+      snprintf(re, sizeof re, "%.0f", e.reynolds);
+    }
+    if (rise) band[0] = '\0';
+    else band_text(band, sizeof band, e.head_loss_low, e.head_loss_high);
+    dominant(l, f, q, i, source, sizeof source);
+    for (uint32_t bit = 1; bit != 0; bit <<= 1) {
+      const char *name = (e.warnings & bit) ? hg_warning_name(bit) : NULL;
+      if (!name) continue;
+      if (warn[0]) strncat(warn, ", ", sizeof warn - strlen(warn) - 1);
+      strncat(warn, name, sizeof warn - strlen(warn) - 1);
+    }
+    printf("  %2zu  %-22s %6s %9s %8s  %9.3f  ", i, label, v, re, coef, rise ? e.static_head : e.head_loss);
+    padded(band, 17, 0);
+    printf(" %-22s %s\n", source, warn);
+  }
+  band_text(band, sizeof band, r->head_loss_low, r->head_loss_high);
+  printf("  friction + minor loss %.3f m (%s), pressure loss %.1f kPa, static head %.2f m\n", r->head_loss, band,
+         r->pressure_loss / 1e3, r->static_head);
+  band_text(band, sizeof band, r->required_head_low, r->required_head_high);
+  printf("  required head %.3f m, band %s m\n", r->required_head, band);
+  /* The required-head band is the loss band shifted by the static head: same sources. */
+  printf("  band sources: ");
+  for (size_t k = 0; k < 3; k++) {
+    size_t need;
+    double share;
+    if (hg_line_band_source(l, f, q, k, text, sizeof text, &need, &share) != HG_OK) break;
+    printf("%s%s %.0f %%", k ? ", " : "", text, 100.0 * share);
+  }
+  printf("\n");
+}
+
+/* The invented pump: flow L/s against head m. */
+static const double pump_q[6] = {0.0 * 1e-3, 2.0 * 1e-3, 4.0 * 1e-3, 6.0 * 1e-3, 8.0 * 1e-3, 10.0 * 1e-3};
+static const double pump_h[6] = {78.0, 77.0, 74.0, 68.5, 60.0, 47.0};
+
+static void orchard(void) {
+  printf("\n1. Hillside orchard irrigation main (water 12 °C, design flow 6.0 L/s)\n\n");
+  hg_fluid *water = NULL;
+  TRY(hg_fluid_water(285.15, 101325.0, &water));
+  hg_line *line = orchard_line();
+  hg_line_result r;
+  print_breakdown(line, water, 6.0e-3, &r);
+
+  printf("\n  system curve against the pump\n");
+  printf("  %8s %12s %10s\n", "Q L/s", "system m", "pump m");
+  double flows[11], curve[11];
+  for (int i = 0; i <= 10; i++) flows[i] = (double)i * 1e-3;
+  TRY(hg_line_system_curve(line, water, flows, 11, curve));
+  for (int i = 0; i <= 10; i++) {
+    double hp, dp;
+    TRY(hg_pump_curve_head(pump_q, pump_h, 6, flows[i], &hp, &dp));
+    printf("  %8.1f %12.2f %10.2f\n", flows[i] * 1e3, curve[i], hp);
+  }
+  double q, h, q_lo, q_hi, h_lo, h_hi;
+  TRY(hg_line_operating_point(line, water, pump_q, pump_h, 6, &q, &h, &q_lo, &q_hi, &h_lo, &h_hi));
+  /* The flow band at the operating point is the head band divided by the slope
+   * difference of the two curves, so its largest source is the line's at that flow. */
+  char source[128];
+  dominant(line, water, q, SIZE_MAX, source, sizeof source);
+  printf("  operating point: %.2f L/s at %.2f m (flow band %.2f … %.2f L/s, largest source: %s)\n", q * 1e3, h,
+         q_lo * 1e3, q_hi * 1e3, source[0] ? source : "-");
+
+  double back, back_lo, back_hi;
+  TRY(hg_line_flow_for_head(line, water, 0.0, &back, &back_lo, &back_hi));
+  printf("  run backwards by gravity from the tank (pump bypassed): %.2f L/s (%.2f … %.2f L/s)\n", -back * 1e3,
+         -back_hi * 1e3, -back_lo * 1e3);
+
+  hg_sizing z;
+  z.struct_size = sizeof z;
+  TRY(hg_line_size(line, water, 6.0e-3, HG_LIMIT_VELOCITY, 2.0, "pvc", "40", &z));
+  printf("  one size for the whole main, velocity ≤ 2 m/s at 6 L/s: inside diameter ≥ %.1f mm\n",
+         z.min_inside_diameter * 1e3);
+  if (z.standard.found)
+    printf("  smallest PVC schedule 40: NPS %s (ID %.1f mm, %.2f m/s, loss %.1f kPa)\n", z.standard.nominal,
+           z.standard.inside_diameter * 1e3, z.standard.velocity, z.standard.pressure_loss / 1e3);
+  hg_line_free(line);
+  hg_fluid_free(water);
+}
+
+static void duct(void) {
+  printf("\n2. Workshop exhaust duct (air 30 °C, 0.9 m³/s, galvanised rectangular duct)\n\n");
+  hg_fluid *air = NULL;
+  TRY(hg_fluid_air(303.15, 101325.0, &air));
+  hg_line *line = duct_line();
+  hg_line_result r;
+  print_breakdown(line, air, 0.9, &r);
+  printf("  fan must supply %.0f Pa (%.0f … %.0f Pa) of pressure loss\n", r.pressure_loss, r.pressure_loss_low,
+         r.pressure_loss_high);
+  hg_line_free(line);
+  hg_fluid_free(air);
+}
+
+/* The same `name value` lines as the Rust demo's --numbers, with every digit. */
+static void numbers(void) {
+  hg_fluid *water = NULL, *air = NULL;
+  TRY(hg_fluid_water(285.15, 101325.0, &water));
+  TRY(hg_fluid_air(303.15, 101325.0, &air));
+  hg_line *line = orchard_line(), *dl = duct_line();
+  hg_line_result r, d;
+  r.struct_size = sizeof r, d.struct_size = sizeof d;
+  TRY(hg_line_evaluate(line, water, 6.0e-3, &r));
+  double q, h, x[4], back, back_lo, back_hi;
+  TRY(hg_line_operating_point(line, water, pump_q, pump_h, 6, &q, &h, &x[0], &x[1], &x[2], &x[3]));
+  TRY(hg_line_flow_for_head(line, water, 0.0, &back, &back_lo, &back_hi));
+  hg_sizing z;
+  z.struct_size = sizeof z;
+  TRY(hg_line_size(line, water, 6.0e-3, HG_LIMIT_VELOCITY, 2.0, "pvc", "40", &z));
+  TRY(hg_line_evaluate(dl, air, 0.9, &d));
+  const struct {
+    const char *name;
+    double value;
+  } rows[] = {
+      {"orchard_required_head", r.required_head},
+      {"orchard_required_head_low", r.required_head_low},
+      {"orchard_required_head_high", r.required_head_high},
+      {"orchard_pressure_loss", r.pressure_loss},
+      {"orchard_operating_flow", q},
+      {"orchard_operating_head", h},
+      {"orchard_gravity_flow", back},
+      {"orchard_min_inside_diameter", z.min_inside_diameter},
+      {"orchard_standard_inside_diameter", z.standard.found ? z.standard.inside_diameter : 0.0 / 0.0},
+      {"duct_pressure_loss", d.pressure_loss},
+      {"duct_pressure_loss_low", d.pressure_loss_low},
+      {"duct_pressure_loss_high", d.pressure_loss_high},
+  };
+  for (size_t i = 0; i < sizeof rows / sizeof *rows; i++) printf("%s %.17g\n", rows[i].name, rows[i].value);
+  hg_line_free(line);
+  hg_line_free(dl);
+  hg_fluid_free(water);
+  hg_fluid_free(air);
+}
+
+int main(int argc, char **argv) {
+  if (hg_abi_version() != HG_ABI_VERSION) {
+    fprintf(stderr, "error: libhydrograde ABI %u, this program was built for %d\n", hg_abi_version(),
+            HG_ABI_VERSION);
+    return 1;
+  }
+  for (int i = 1; i < argc; i++) {
+    if (strcmp(argv[i], "--numbers") == 0) {
+      numbers();
+      return 0;
+    }
+  }
+  printf("hydrograde %s demo: invented scenarios, engineering estimates with k = 2 bands.\n", hg_version());
+  orchard();
+  duct();
+  printf("\nCaution: these are engineering estimates with stated uncertainty. A design built on "
+         "them must be checked by a competent engineer against the codes and standards that apply.\n");
+  return 0;
+}
