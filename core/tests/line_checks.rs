@@ -155,3 +155,28 @@ mod properties {
         }
     }
 }
+
+#[test]
+fn fitting_after_a_rectangular_duct_sees_the_duct_velocity() {
+    // Exact definition of K: h = K V²/(2g) with V = Q/A the mean velocity of the duct the
+    // fitting sits in (not of a round bore of the hydraulic diameter).
+    use hydrograde::fitting::Fitting;
+    use hydrograde::section::Section;
+    let duct = Section::rectangle(0.4, 0.25).unwrap();
+    let line = Line::new(vec![
+        Element::Pipe(Pipe::new(duct, 5.0, 1.5e-4).unwrap()),
+        Element::Fitting(Fitting::k(0.8).unwrap()),
+    ])
+    .unwrap();
+    // Constant density (no gas mean-density correction) so V is exactly Q/A.
+    let fluid = Fluid::new(1.165, 1.86e-5).unwrap();
+    let r = line.evaluate(&fluid, 0.9).unwrap();
+    let v = 0.9 / (0.4 * 0.25);
+    assert!(common::rel_err(r.elements[1].velocity, v) < 1e-15);
+    let h = 0.8 * v * v / (2.0 * STANDARD_GRAVITY);
+    assert!(
+        common::rel_err(r.elements[1].head_loss, h) < 1e-14,
+        "{} vs {h}",
+        r.elements[1].head_loss
+    );
+}

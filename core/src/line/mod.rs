@@ -356,10 +356,14 @@ fn resolve(
     let mut out = Vec::with_capacity(elements.len());
     for (i, e) in elements.iter().enumerate() {
         let neighbour = pipe_before(i).or_else(|| pipe_after(i));
-        let bore_for = |own: Option<f64>, label: &str| -> Result<(f64, f64)> {
-            let bore = match (own, neighbour) {
-                (Some(d), _) => d,
-                (None, Some(p)) => p.bore(),
+        // (bore, ε/D of the neighbouring pipe, flow area). A fitting that follows its pipe
+        // sees that pipe's own mean velocity (its flow area, also for a non-circular duct)
+        // and Reynolds number on the hydraulic diameter; one with its own diameter sees a
+        // round bore.
+        let bore_for = |own: Option<f64>, label: &str| -> Result<(f64, f64, f64)> {
+            let (bore, area) = match (own, neighbour) {
+                (Some(d), _) => (d, 0.25 * std::f64::consts::PI * d * d),
+                (None, Some(p)) => (p.bore(), p.section.area()),
                 (None, None) => {
                     return Err(Error::invalid(
                         "elements",
@@ -370,7 +374,7 @@ fn resolve(
                 }
             };
             let rr = neighbour.map_or(0.0, |p| p.roughness / bore);
-            Ok((bore, rr))
+            Ok((bore, rr, area))
         };
         out.push(match e {
             Element::Pipe(p) => Resolved::Pipe {
@@ -384,10 +388,10 @@ fn resolve(
             },
             Element::Fitting(f) => {
                 let name = f.name();
-                let (bore, rr) = bore_for(f.diameter(), &name)?;
+                let (bore, rr, area) = bore_for(f.diameter(), &name)?;
                 Resolved::Fitting {
                     bore,
-                    area: 0.25 * std::f64::consts::PI * bore * bore,
+                    area,
                     resistance: f.resistance(bore, rr.min(friction::MAX_REL_ROUGHNESS))?,
                     spread: f.k_spread(),
                     name,
@@ -403,10 +407,10 @@ fn resolve(
                     name: eq.name.clone(),
                 },
                 Rating::FixedK { k, diameter } => {
-                    let (bore, _) = bore_for(*diameter, &eq.name)?;
+                    let (bore, _, area) = bore_for(*diameter, &eq.name)?;
                     Resolved::Fitting {
                         bore,
-                        area: 0.25 * std::f64::consts::PI * bore * bore,
+                        area,
                         resistance: Resistance {
                             k_viscous: 0.0,
                             k_inertial: *k,
