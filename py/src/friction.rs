@@ -73,6 +73,9 @@ pub fn darcy_factor<'py>(
         turbulent_limit,
         transition,
     )?;
+    if let Some(out) = batch_fast_path(py, re, rel_roughness, &o)? {
+        return Ok(out);
+    }
     arrays::map(
         py,
         ["re", "rel_roughness"],
@@ -223,4 +226,40 @@ impl PyFriction {
             inner: state::loads(state)?,
         })
     }
+}
+
+/// Same-shape, C-contiguous float64 arrays go straight to the core's batch entry point
+/// (interleaved exact Colebrook, all cores above its threshold) with the GIL released;
+/// anything else (scalars, broadcasting, other dtypes or strides) takes the general path.
+fn batch_fast_path<'py>(
+    py: Python<'py>,
+    re: &Bound<'py, PyAny>,
+    rel_roughness: &Bound<'py, PyAny>,
+    o: &Options,
+) -> PyResult<Option<Bound<'py, PyAny>>> {
+    use numpy::ndarray::{ArrayD, IxDyn};
+    use numpy::{IntoPyArray, PyArrayDyn, PyArrayMethods, PyUntypedArrayMethods};
+    let (Ok(r), Ok(e)) = (
+        re.cast::<PyArrayDyn<f64>>(),
+        rel_roughness.cast::<PyArrayDyn<f64>>(),
+    ) else {
+        return Ok(None);
+    };
+    if r.shape() != e.shape() {
+        return Ok(None);
+    }
+    let (Ok(r), Ok(e)) = (r.try_readonly(), e.try_readonly()) else {
+        return Ok(None);
+    };
+    let (Ok(rs), Ok(es)) = (r.as_slice(), e.as_slice()) else {
+        return Ok(None);
+    };
+    let shape = r.shape().to_vec();
+    let mut out = vec![0.0; rs.len()];
+    py.detach(|| core::darcy_factor_batch(rs, es, o, &mut out))
+        .py()?;
+    let Ok(arr) = ArrayD::from_shape_vec(IxDyn(&shape), out) else {
+        return Ok(None);
+    };
+    Ok(Some(arr.into_pyarray(py).into_any()))
 }
