@@ -784,6 +784,18 @@ fn line_solves(out: &mut impl Write, fluid: &Fluid, fi: i64) -> io::Result<()> {
         let r =
             split_flow(&pair, fluid, total).map(|s| vec![D(s.flows[0]), D(s.flows[1]), D(s.head)]);
         emit(out, "line_split_flow", &[I(0), I(fi), D(total)], r)?;
+        let r = split_flow(&pair, fluid, total).map(|s| {
+            let (a, b) = (&s.flow_bands[0], &s.flow_bands[1]);
+            vec![
+                D(a.low),
+                D(a.high),
+                D(b.low),
+                D(b.high),
+                D(s.head_band.low),
+                D(s.head_band.high),
+            ]
+        });
+        emit(out, "line_split_bands", &[I(0), I(fi), D(total)], r)?;
     }
     let line = scenario(0).map_err(io::Error::other)?;
     for (li, limit) in [

@@ -1735,6 +1735,30 @@ int32_t hg_line_split_flow(const struct hg_line *const *branches,
                            double *head);
 
 /**
+ * The bands (k = 2) of `hg_line_split_flow`: for each branch `i`, `flows_low[i]` …
+ * `flows_high[i]` (m³/s), and the common head's band `*head_low` … `*head_high` (m).
+ * Line-wide sources (friction model, roughness, diameter, fluid) act on all branches
+ * together, each fitting's K on its own branch.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_INVALID` for `n` = 0, a branch without
+ * any loss or that cannot be built; `HG_ERR_NO_SOLUTION`; `HG_ERR_NULL_POINTER` (also
+ * for a NULL branch). Thread-safe (the lines are only read).
+ *
+ * # Safety
+ * `branches` must be NULL or valid for `n` pointers, each NULL or a live handle;
+ * `fluid` NULL or live; `flows_low` and `flows_high` NULL or valid for `n` doubles;
+ * `head_low` and `head_high` NULL or writable.
+ */
+int32_t hg_line_split_flow_bands(const struct hg_line *const *branches,
+                                 size_t n,
+                                 const struct hg_fluid *fluid,
+                                 double total,
+                                 double *flows_low,
+                                 double *flows_high,
+                                 double *head_low,
+                                 double *head_high);
+
+/**
  * Sizes the round pipes of `line` (all set to one inside diameter) for `fluid` at flow
  * `flow` (m³/s, ≠ 0) under the limit `limit` (`HG_LIMIT_*`) of value `limit_value`
  * (Pa or m/s, > 0); with `table` and `schedule` (as `hg_pipe_size`; both NULL for none)

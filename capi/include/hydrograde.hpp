@@ -707,6 +707,25 @@ inline std::pair<std::vector<double>, double> split_flow(const std::vector<const
   return {flows, head};
 }
 
+/// Bands (k = 2) of split_flow: per branch (low, high) flows in m³/s, then the common
+/// head's (low, high) in m.
+struct split_bands {
+  std::vector<std::pair<double, double>> flows;
+  std::pair<double, double> head;
+};
+
+inline split_bands split_flow_bands(const std::vector<const line*>& branches, const fluid& f, double total) {
+  std::vector<const hg_line*> b;
+  for (const line* l : branches) b.push_back(l ? l->get() : nullptr);
+  if (b.empty()) throw error(HG_ERR_INVALID, "branches: need at least one branch");
+  std::vector<double> lo(b.size()), hi(b.size());
+  split_bands out;
+  check(hg_line_split_flow_bands(b.data(), b.size(), f.get(), total, lo.data(), hi.data(), &out.head.first,
+                                 &out.head.second));
+  for (size_t i = 0; i < b.size(); i++) out.flows.emplace_back(lo[i], hi[i]);
+  return out;
+}
+
 }  // namespace hydrograde
 
 #endif  // HYDROGRADE_HPP

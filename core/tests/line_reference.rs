@@ -327,3 +327,37 @@ fn sizing_matches_mpmath_and_standard_sizes_meet_the_limit() {
             .is_err()
     );
 }
+
+#[test]
+fn split_bands_conserve_the_total_flow() {
+    // Exact consequences of the linearised balance (Σ dQ_i = 0 for every source): with two
+    // branches each source moves both flows by equal and opposite amounts, so the flow
+    // bands have equal widths; two identical branches under a source common to both
+    // (the friction model) keep equal flows, so their flow bands have no width.
+    use hydrograde::band::UncertaintyOptions;
+    use hydrograde::line::LineOptions;
+    let f = fluid();
+    let a = Line::new(vec![
+        Element::Pipe(Pipe::circular(0.04, 60.0, 4.5e-5).unwrap()),
+        Element::Fitting(Fitting::named("globe_valve").unwrap()),
+    ])
+    .unwrap();
+    let b = Line::new(vec![
+        Element::Pipe(Pipe::circular(0.065, 140.0, 1.5e-6).unwrap()),
+        Element::Rise(0.5),
+    ])
+    .unwrap();
+    let s = split_flow(&[a.clone(), b], &f, 6e-3).unwrap();
+    let (w0, w1) = (s.flow_bands[0].half_width(), s.flow_bands[1].half_width());
+    assert!(w0 > 0.0 && common::rel_err(w0, w1) < 1e-9, "{w0} vs {w1}");
+    assert!(s.head_band.low < s.head && s.head < s.head_band.high);
+    let model = LineOptions {
+        uncertainty: UncertaintyOptions::model_only(),
+        ..LineOptions::default()
+    };
+    let twin = a.set_options(model).unwrap();
+    let s = split_flow(&[twin.clone(), twin], &f, 6e-3).unwrap();
+    assert!(common::rel_err(s.flows[0], s.flows[1]) < 1e-12);
+    assert!(s.flow_bands[0].half_width() <= 1e-12 * s.flows[0]);
+    assert!(s.head_band.half_width() > 0.0);
+}

@@ -431,7 +431,7 @@ impl PyOperatingPoint {
 }
 
 /// Flows of parallel branches that need the same head: ``flows`` (m³/s, branch
-/// order), ``head`` (m), ``iterations``.
+/// order), ``head`` (m), ``iterations``, with ``head_band`` and ``flow_bands``.
 #[pyclass(name = "Split", module = "hydrograde._native", frozen, eq)]
 #[derive(Clone, PartialEq)]
 pub struct PySplit {
@@ -455,6 +455,16 @@ impl PySplit {
     #[getter]
     fn iterations(&self) -> usize {
         self.inner.iterations
+    }
+    /// Band of the common head, m.
+    #[getter]
+    fn head_band(&self, py: Python<'_>) -> PyResult<Py<PyBand>> {
+        band(py, &self.inner.head_band)
+    }
+    /// Band of each branch flow, m³/s (branch order).
+    #[getter]
+    fn flow_bands(&self, py: Python<'_>) -> PyResult<Vec<Py<PyBand>>> {
+        self.inner.flow_bands.iter().map(|b| band(py, b)).collect()
     }
     fn __repr__(&self) -> String {
         format!(

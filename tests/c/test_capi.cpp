@@ -170,6 +170,10 @@ static void test_line() {
   branch.add_pipe(0.08, 20, 4.5e-5);
   auto sp = hg::split_flow({&moved, &branch}, water, 5e-3);
   CHECK(sp.first.size() == 2 && std::fabs(sp.first[0] + sp.first[1] - 5e-3) < 1e-15, "split adds up");
+  auto sb = hg::split_flow_bands({&moved, &branch}, water, 5e-3);
+  CHECK(sb.flows.size() == 2 && sb.flows[0].first <= sp.first[0] && sp.first[0] <= sb.flows[0].second &&
+            sb.head.first <= sp.second && sp.second <= sb.head.second,
+        "split bands contain the split");
   hg_sizing z = moved.size(water, 3e-3, HG_LIMIT_VELOCITY, 2.0, "steel", "40");
   CHECK(z.standard.found == 1 && z.standard.inside_diameter >= z.min_inside_diameter &&
             std::string(z.standard.nominal) == hg::pipe_size_at_least("steel", "40", z.min_inside_diameter).first,

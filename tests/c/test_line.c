@@ -150,7 +150,7 @@ static long check_line_record(const record *r, int quiet) {
     if (s == HG_OK && (hg_line_system_curve(l, f, q, 50, q) != HG_OK || memcmp(q, got, sizeof q) != 0)) s = -2;
   }
   if (strcmp(r->tag, "line_operating_point") == 0 || strcmp(r->tag, "line_split_flow") == 0 ||
-      strcmp(r->tag, "line_size") == 0)
+      strcmp(r->tag, "line_split_bands") == 0 || strcmp(r->tag, "line_size") == 0)
     return 0; /* checked by check_solve_record */
   int same = r->err ? s == code_of_kind(r->kind) && msg_len() > 0 : s == HG_OK && same_outputs(r, got, ngot);
   if (!quiet) CHECK(same, "%s scenario %lld fluid %lld: status %d (want %s)", r->tag, r->in[0].i, r->in[1].i, s,
@@ -187,6 +187,12 @@ static long check_solve_record(const record *r, int quiet) {
     double q[2], h;
     s = hg_line_split_flow(pair, 2, f, r->in[2].d, q, &h);
     got[n++] = tok_d(q[0]), got[n++] = tok_d(q[1]), got[n++] = tok_d(h);
+  } else if (strcmp(r->tag, "line_split_bands") == 0) {
+    const hg_line *pair[2] = {lines[0], lines[1]};
+    double lo[2], hi[2], hl, hh;
+    s = hg_line_split_flow_bands(pair, 2, f, r->in[2].d, lo, hi, &hl, &hh);
+    got[n++] = tok_d(lo[0]), got[n++] = tok_d(hi[0]), got[n++] = tok_d(lo[1]), got[n++] = tok_d(hi[1]);
+    got[n++] = tok_d(hl), got[n++] = tok_d(hh);
   } else if (strcmp(r->tag, "line_size") == 0) {
     const double limit_value[3] = {5e4, 2.0, -1.0};
     const int32_t limit[3] = {HG_LIMIT_PRESSURE_LOSS, HG_LIMIT_VELOCITY, HG_LIMIT_PRESSURE_LOSS};
@@ -231,6 +237,18 @@ static void test_solves_bad_input(void) {
   CHECK(hg_line_split_flow(pair, 2, f, 1e-3, NULL, &hd) == HG_ERR_NULL_POINTER, "split NULL flows");
   CHECK(hg_line_split_flow(pair, 2, f, 1e-3, fl, NULL) == HG_ERR_NULL_POINTER, "split NULL head");
   CHECK(hg_line_split_flow(pair, 2, f, INFINITY, fl, &hd) == HG_ERR_NOT_FINITE, "split inf");
+  {
+    double lo[2], hi[2], hl, hh;
+    CHECK(hg_line_split_flow_bands(NULL, 2, f, 1e-3, lo, hi, &hl, &hh) == HG_ERR_NULL_POINTER, "split bands NULL branches");
+    CHECK(hg_line_split_flow_bands(pair, 0, f, 1e-3, lo, hi, &hl, &hh) == HG_ERR_INVALID, "split bands n 0");
+    CHECK(hg_line_split_flow_bands(pair, 2, NULL, 1e-3, lo, hi, &hl, &hh) == HG_ERR_NULL_POINTER, "split bands NULL fluid");
+    CHECK(hg_line_split_flow_bands(pair, 2, f, 1e-3, NULL, hi, &hl, &hh) == HG_ERR_NULL_POINTER, "split bands NULL low");
+    CHECK(hg_line_split_flow_bands(pair, 2, f, 1e-3, lo, NULL, &hl, &hh) == HG_ERR_NULL_POINTER, "split bands NULL high");
+    CHECK(hg_line_split_flow_bands(pair, 2, f, 1e-3, lo, hi, NULL, &hh) == HG_ERR_NULL_POINTER, "split bands NULL head_low");
+    CHECK(hg_line_split_flow_bands(pair, 2, f, 1e-3, lo, hi, &hl, NULL) == HG_ERR_NULL_POINTER, "split bands NULL head_high");
+    CHECK(hg_line_split_flow_bands(pair, 2, f, NAN, lo, hi, &hl, &hh) == HG_ERR_NOT_FINITE && msg_len() > 0, "split bands NaN");
+    CHECK(hg_line_split_flow_bands(pair, 2, f, -INFINITY, lo, hi, &hl, &hh) == HG_ERR_NOT_FINITE, "split bands -inf");
+  }
   hg_sizing z;
   z.struct_size = sizeof z;
   CHECK(hg_line_size(NULL, f, 1e-3, 0, 5e4, NULL, NULL, &z) == HG_ERR_NULL_POINTER, "size NULL line");
@@ -641,7 +659,7 @@ int main(int argc, char **argv) {
   CHECK(hg_fluid_with_uncertainty(gas, 0.01, 0.02, &fluids[2]) == HG_OK, "gas with uncertainty");
   hg_fluid_free(gas);
   const char *tags[] = {"line_eval", "line_element", "line_band_source", "line_required_head", "line_uniform",
-                        "line_flow_for_head", "line_system_curve", "line_operating_point", "line_split_flow",
+                        "line_flow_for_head", "line_system_curve", "line_operating_point", "line_split_flow", "line_split_bands",
                         "line_size", "line_elem_source", "line_eval_at", "line_monte_carlo"};
   for (size_t i = 0; i < sizeof tags / sizeof *tags; i++) {
     for_each_record(ref_path, tags[i], check_line_record, 1);

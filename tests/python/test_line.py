@@ -105,6 +105,11 @@ def test_inverse_questions(route, water):
     split = hg.split_flow([twin, twin], water, 0.02)
     # Two identical branches share the flow equally (symmetry, exact).
     assert split.flows == pytest.approx([0.01, 0.01], rel=1e-12)
+    # Every source moves the two flows by equal and opposite amounts (the total is fixed),
+    # so the two flow bands are equally wide (exact property of the linearised split).
+    a, b = split.flow_bands
+    assert (a.high - a.low) == pytest.approx(b.high - b.low, rel=1e-9)
+    assert split.head_band.low < split.head < split.head_band.high
     with pytest.raises(hg.NoSolutionError):
         route.operating_point(water, hg.PumpCurve([0.0, 0.01, 0.02], [5.0, 4.0, 3.0]))
 

@@ -6,8 +6,14 @@
 //! (the simultaneous form of the Hardy Cross correction, Cross 1936). Should Newton not
 //! settle within its cap, a bracketed search on the common head finishes the job, so the
 //! split always converges.
+//!
+//! Bands follow from the linearised balance: with `a_i` the change of branch `i`'s head
+//! from one uncertain input, the common head moves by `dH = Σ(a_i/h_i') / Σ(1/h_i')` and
+//! each branch flow by `(dH − a_i)/h_i'`. Line-wide sources (friction model, roughness,
+//! diameter, fluid) act on all branches together; each fitting's K on its own branch.
 
 use super::Line;
+use crate::band::Band;
 use crate::error::{Error, Result, check};
 use crate::fluid::Fluid;
 use serde::{Deserialize, Serialize};
@@ -24,6 +30,10 @@ pub struct Split {
     pub head: f64,
     /// Newton iterations used (0 when the bracketed search finished).
     pub iterations: usize,
+    /// Band of the common head, m.
+    pub head_band: Band,
+    /// Band of each branch flow, m³/s.
+    pub flow_bands: Vec<Band>,
 }
 
 /// Splits `total` (m³/s) between `branches` so that all need the same head.
@@ -62,11 +72,7 @@ pub fn split_flow(branches: &[Line], fluid: &Fluid, total: f64) -> Result<Split>
             .fold(head.abs(), f64::max)
             .max(1e-300);
         if spread <= HEAD_TOL * scale {
-            return Ok(Split {
-                flows: q,
-                head,
-                iterations: it,
-            });
+            return with_bands(branches, fluid, q, head, it);
         }
         if !inv.is_finite() || !head.is_finite() {
             break;
@@ -109,9 +115,85 @@ fn bracketed(branches: &[Line], fluid: &Fluid, total: f64) -> Result<Split> {
         }
     }
     let head = 0.5 * (lo + hi);
+    with_bands(branches, fluid, flows_at(head)?, head, 0)
+}
+
+/// Line-wide sources keep their names across branches; a branch's own fittings and
+/// equipment are prefixed with the branch index.
+fn is_line_wide(name: &str) -> bool {
+    matches!(
+        name,
+        "friction model" | "roughness" | "diameter" | "density" | "viscosity"
+    )
+}
+
+/// First-order bands of the split (module docs).
+fn with_bands(
+    branches: &[Line],
+    fluid: &Fluid,
+    flows: Vec<f64>,
+    head: f64,
+    iterations: usize,
+) -> Result<Split> {
+    let mut per_branch = Vec::with_capacity(branches.len());
+    let mut slopes = Vec::with_capacity(branches.len());
+    for (i, (b, &q)) in branches.iter().zip(&flows).enumerate() {
+        let r = b.evaluate(fluid, q)?;
+        let states = super::solve::states_of(b, fluid, &r)?;
+        let sources: Vec<(String, f64)> =
+            super::result::head_sources(b, states.iter().enumerate(), fluid)
+                .into_iter()
+                .map(|(n, u)| {
+                    if is_line_wide(&n) {
+                        (n, u)
+                    } else {
+                        (format!("branch {i}: {n}"), u)
+                    }
+                })
+                .collect();
+        per_branch.push(sources);
+        slopes.push(r.drequired_head_dflow);
+    }
+    let inv_sum: f64 = slopes.iter().map(|d| 1.0 / d).sum();
+    let mut names: Vec<String> = Vec::new();
+    for s in &per_branch {
+        for (n, _) in s {
+            if !names.contains(n) {
+                names.push(n.clone());
+            }
+        }
+    }
+    // a[i][k]: signed head change of branch i from source k (one standard uncertainty).
+    let a: Vec<Vec<f64>> = per_branch
+        .iter()
+        .map(|s| {
+            names
+                .iter()
+                .map(|n| s.iter().filter(|(m, _)| m == n).map(|(_, u)| u).sum())
+                .collect()
+        })
+        .collect();
+    let dh: Vec<f64> = (0..names.len())
+        .map(|k| a.iter().zip(&slopes).map(|(ai, d)| ai[k] / d).sum::<f64>() / inv_sum)
+        .collect();
+    let head_sources: Vec<(String, f64)> = names.iter().cloned().zip(dh.iter().copied()).collect();
+    let flow_bands = flows
+        .iter()
+        .enumerate()
+        .map(|(i, &q)| {
+            let srcs: Vec<(String, f64)> = names
+                .iter()
+                .enumerate()
+                .map(|(k, n)| (n.clone(), (dh[k] - a[i][k]) / slopes[i]))
+                .collect();
+            Band::from_sources(q, &srcs)
+        })
+        .collect();
     Ok(Split {
-        flows: flows_at(head)?,
+        flows,
         head,
-        iterations: 0,
+        iterations,
+        head_band: Band::from_sources(head, &head_sources),
+        flow_bands,
     })
 }

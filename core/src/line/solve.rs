@@ -147,7 +147,11 @@ impl Line {
 }
 
 /// Element states at a result's flow (for the band sensitivities).
-fn states_of(line: &Line, fluid: &Fluid, r: &super::LineResult) -> Result<Vec<super::eval::State>> {
+pub(crate) fn states_of(
+    line: &Line,
+    fluid: &Fluid,
+    r: &super::LineResult,
+) -> Result<Vec<super::eval::State>> {
     let (work, q, _) = line.working_fluid(fluid, r.flow, r.inlet_pressure)?;
     (0..line.resolved.len())
         .map(|i| line.element_state(i, &work, q, None, true))
