@@ -180,3 +180,26 @@ fn fitting_after_a_rectangular_duct_sees_the_duct_velocity() {
         r.elements[1].head_loss
     );
 }
+
+#[test]
+fn contraction_between_rectangular_ducts_uses_the_outlet_duct_velocity() {
+    // K of a contraction refers to the outlet velocity (Crane 1988, from memory); between
+    // rectangular ducts given by their hydraulic diameters that is the outlet duct's Q/A.
+    use hydrograde::fitting::Fitting;
+    use hydrograde::section::Section;
+    let (big, small) = (
+        Section::rectangle(0.4, 0.25).unwrap(),
+        Section::rectangle(0.3, 0.2).unwrap(),
+    );
+    let (d1, d2) = (big.hydraulic_diameter(), small.hydraulic_diameter());
+    let line = Line::new(vec![
+        Element::Pipe(Pipe::new(big, 5.0, 1.5e-4).unwrap()),
+        Element::Fitting(Fitting::contraction(d1, d2).unwrap()),
+        Element::Pipe(Pipe::new(small, 5.0, 1.5e-4).unwrap()),
+    ])
+    .unwrap();
+    let r = line
+        .evaluate(&Fluid::new(1.165, 1.86e-5).unwrap(), 0.9)
+        .unwrap();
+    assert!(common::rel_err(r.elements[1].velocity, 0.9 / (0.3 * 0.2)) < 1e-15);
+}

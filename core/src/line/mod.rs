@@ -359,10 +359,21 @@ fn resolve(
         // (bore, ε/D of the neighbouring pipe, flow area). A fitting that follows its pipe
         // sees that pipe's own mean velocity (its flow area, also for a non-circular duct)
         // and Reynolds number on the hydraulic diameter; one with its own diameter sees a
-        // round bore.
+        // round bore of it, unless that diameter is a neighbouring duct's.
         let bore_for = |own: Option<f64>, label: &str| -> Result<(f64, f64, f64)> {
             let (bore, area) = match (own, neighbour) {
-                (Some(d), _) => (d, 0.25 * std::f64::consts::PI * d * d),
+                // A bore equal to a neighbouring duct's hydraulic diameter means that
+                // duct (e.g. the outlet of a contraction between rectangular ducts).
+                (Some(d), _) => {
+                    let duct = [pipe_before(i), pipe_after(i)]
+                        .into_iter()
+                        .flatten()
+                        .find(|p| (p.bore() - d).abs() <= 1e-12 * d);
+                    (
+                        d,
+                        duct.map_or(0.25 * std::f64::consts::PI * d * d, |p| p.section.area()),
+                    )
+                }
                 (None, Some(p)) => (p.bore(), p.section.area()),
                 (None, None) => {
                     return Err(Error::invalid(
