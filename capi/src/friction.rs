@@ -32,7 +32,8 @@ pub const HG_TRANSITION_TURBULENT: i32 = 1;
 /// In the transitional band, refuse with `HG_ERR_NO_SOLUTION`.
 pub const HG_TRANSITION_REFUSE: i32 = 2;
 
-const TRANSITIONS: [Transition; 3] = [Transition::Blend, Transition::Turbulent, Transition::Refuse];
+// The HG_TRANSITION_* values follow the core's fixed order, `Transition::ALL`.
+const TRANSITIONS: [Transition; 3] = Transition::ALL;
 
 /// Options of `hg_darcy_factor_opts`. Fill it with `hg_friction_options_default`, then
 /// change what you need; `struct_size` must be `sizeof(hg_friction_options)`.
