@@ -4,6 +4,7 @@
 use crate::error::{Error, Result};
 use crate::fluid::Fluid;
 use crate::line::Line;
+use crate::math;
 use rand::rngs::StdRng;
 use rand::{Rng, SeedableRng};
 use serde::{Deserialize, Serialize};
@@ -27,7 +28,7 @@ pub struct MonteCarlo {
 fn normal(rng: &mut StdRng) -> f64 {
     let u1: f64 = 1.0 - rng.random::<f64>(); // (0, 1]
     let u2: f64 = rng.random::<f64>();
-    (-2.0 * u1.ln()).sqrt() * (std::f64::consts::TAU * u2).cos()
+    (-2.0 * math::ln(u1)).sqrt() * math::cos(std::f64::consts::TAU * u2)
 }
 
 /// Samples the line's required head at `flow` (m³/s) `samples` times (≥ 100) with the
