@@ -161,7 +161,7 @@ pub unsafe extern "C" fn hg_line_element_band_source(
         // SAFETY: forwarded contract; checked above.
         unsafe {
             put("share", share, c.share)?;
-            ffi::copy_name(&c.source, buf, len, needed)
+            ffi::copy_name(&c.source.name(), buf, len, needed)
         }
     })
 }

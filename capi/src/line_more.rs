@@ -537,6 +537,7 @@ pub unsafe extern "C" fn hg_line_set_uncertainty(
                 non_circular_model: c.non_circular_model,
                 roughness_default: c.roughness_default,
                 diameter: c.diameter,
+                independent_materials: l.options.uncertainty.independent_materials.clone(),
             };
             u.validate()?;
             l.options.uncertainty = u;
@@ -590,7 +591,7 @@ pub unsafe extern "C" fn hg_line_band_source(
         // SAFETY: forwarded contract; checked above.
         unsafe {
             put("share", share, c.share)?;
-            ffi::copy_name(&c.source, buf, len, needed)
+            ffi::copy_name(&c.source.name(), buf, len, needed)
         }
     })
 }
