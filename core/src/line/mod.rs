@@ -19,6 +19,7 @@ mod eval;
 pub(crate) use eval::Perturbation;
 mod parallel;
 mod result;
+pub mod rows;
 mod sizing;
 mod solve;
 
