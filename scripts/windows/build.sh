@@ -45,7 +45,9 @@ ensure_packages() {
 
 # The full path of a file a Debian package installs (rustup's tools come first in PATH).
 package_file() {
-  dpkg -L "$1" | grep -m1 -E "$2" || { echo "no $2 in package $1" >&2; exit 1; }
+  local files
+  files=$(dpkg -L "$1" | grep -E "$2") || { echo "no $2 in package $1" >&2; exit 1; }
+  echo "${files%%$'\n'*}"
 }
 
 # A hash of everything the DLL is built from.
