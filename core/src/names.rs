@@ -96,7 +96,10 @@ mod tests {
         use crate::{Correlation, Fitting, PipeTable, roughness, units};
         assert!(Fitting::named("Gate Valve").is_ok());
         assert!(roughness::material("Commercial Steel").is_ok());
-        assert_eq!("Swamee-Jain".parse::<Correlation>().ok(), Some(Correlation::SwameeJain));
+        assert_eq!(
+            "Swamee-Jain".parse::<Correlation>().ok(),
+            Some(Correlation::SwameeJain)
+        );
         assert_eq!("STEEL".parse::<PipeTable>().ok(), Some(PipeTable::Steel));
         // 20 °C = 293.15 K exactly (definition of the Celsius scale).
         assert_eq!(units::convert(20.0, "°C", "K").ok(), Some(293.15));
