@@ -24,6 +24,8 @@ mod materials;
 mod meta;
 mod pipe;
 mod section;
+/// cbindgen:ignore
+mod sheet;
 mod units;
 
 pub use correlation::*;
@@ -43,4 +45,5 @@ pub use materials::*;
 pub use meta::*;
 pub use pipe::*;
 pub use section::*;
+pub use sheet::*;
 pub use units::*;
