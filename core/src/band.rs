@@ -35,6 +35,7 @@
 //!
 //! [`monte_carlo`] propagates the same inputs by sampling (JCGM 101:2008) for checking.
 
+use crate::math;
 use serde::{Deserialize, Serialize};
 use std::sync::OnceLock;
 
@@ -370,7 +371,7 @@ fn normal_cdf(x: f64) -> f64 {
                         + t * (0.278_868_07
                             + t * (-1.135_203_98
                                 + t * (1.488_515_87 + t * (-0.822_152_23 + t * 0.170_872_77))))))));
-    let erfc = t * poly.exp();
+    let erfc = t * math::exp(poly);
     if x >= 0.0 {
         1.0 - 0.5 * erfc
     } else {
@@ -389,7 +390,7 @@ fn k95(share: f64) -> f64 {
     if sigma < 1e-6 {
         return 0.95 * a;
     }
-    let h = |t: f64| t * normal_cdf(t) + (-0.5 * t * t).exp() / (2.0 * std::f64::consts::PI).sqrt();
+    let h = |t: f64| t * normal_cdf(t) + math::exp(-0.5 * t * t) / (2.0 * std::f64::consts::PI).sqrt();
     let p = |q: f64| {
         if a < 1e-9 {
             return 2.0 * normal_cdf(q / sigma) - 1.0;
@@ -478,7 +479,7 @@ impl Default for UncertaintyOptions {
             laminar_model: 0.005,
             non_circular_model: 0.075,
             roughness: true,
-            roughness_default: 4f64.ln() / 12f64.sqrt(),
+            roughness_default: math::ln(4.0) / 12f64.sqrt(),
             independent_materials: Vec::new(),
             diameter: 0.0,
             fluid: true,
@@ -558,8 +559,8 @@ pub fn rectangular(spread: f64) -> f64 {
 /// Standard uncertainty of ln ε for ε log-uniform on `[low, high]` (ln ε rectangular:
 /// ln(high/low)/√12), and the offset of the mean of ln ε from ln `nominal`.
 pub fn log_uniform(nominal: f64, low: f64, high: f64) -> (f64, f64) {
-    let (a, b) = (low.ln(), high.ln());
-    ((b - a) / 12f64.sqrt(), 0.5 * (a + b) - nominal.ln())
+    let (a, b) = (math::ln(low), math::ln(high));
+    ((b - a) / 12f64.sqrt(), 0.5 * (a + b) - math::ln(nominal))
 }
 
 /// Sample count the bindings use for [`monte_carlo`] when none is given. JCGM 101:2008

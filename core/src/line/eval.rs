@@ -5,6 +5,7 @@ use super::{Line, Resolved};
 use crate::error::{Error, Result, check};
 use crate::fluid::Fluid;
 use crate::friction::{self, Correlation, Regime};
+use crate::math;
 use crate::pipe::Pipe;
 use crate::section::Section;
 use crate::units::STANDARD_GRAVITY;
@@ -133,7 +134,7 @@ impl Line {
         } else {
             crate::band::rectangular(opts.correlation.validity().accuracy)
         };
-        let turbulent = turbulent.hypot(explicit);
+        let turbulent = math::hypot(turbulent, explicit);
         match regime {
             Regime::Laminar => uo.laminar_model,
             Regime::Turbulent => turbulent,
@@ -145,7 +146,7 @@ impl Line {
                 match friction::transition_limits(re_t, rr_t, &o) {
                     // ±2u reaches the farther of the two regime values.
                     Ok((fl, ft)) => {
-                        ((f - fl).abs().max((ft - f).abs()) / (2.0 * f)).hypot(turbulent)
+                        math::hypot((f - fl).abs().max((ft - f).abs()) / (2.0 * f), turbulent)
                     }
                     Err(_) => turbulent,
                 }

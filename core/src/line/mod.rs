@@ -18,6 +18,7 @@
 mod eval;
 mod parallel;
 mod result;
+pub mod rows;
 mod sizing;
 mod solve;
 pub(crate) mod uncertainty;

@@ -10,6 +10,7 @@ use super::{Line, uncertainty};
 use crate::band::Band;
 use crate::error::{Error, Result, check};
 use crate::fluid::Fluid;
+use crate::math;
 use serde::{Deserialize, Serialize};
 
 /// Iteration cap of the safeguarded Newton solver (bisection alone would need ~2100 steps
@@ -207,7 +208,7 @@ impl PumpCurve {
             }
             let a = m[i] / delta[i];
             let b = m[i + 1] / delta[i];
-            let r = a.hypot(b);
+            let r = math::hypot(a, b);
             if r > 3.0 {
                 let t = 3.0 / r;
                 m[i] = t * a * delta[i];

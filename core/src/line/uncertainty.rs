@@ -18,6 +18,7 @@ use super::{Element, Line, LineOptions, Resolved};
 use crate::band::{Band, Source, Term, log_uniform};
 use crate::error::{Error, Result, check};
 use crate::fluid::Fluid;
+use crate::math;
 use crate::pipe::Pipe;
 use crate::units::STANDARD_GRAVITY;
 use rand::rngs::StdRng;
@@ -598,7 +599,7 @@ impl Line {
 fn normal(rng: &mut StdRng) -> f64 {
     let u1: f64 = 1.0 - rng.random::<f64>(); // (0, 1]
     let u2: f64 = rng.random::<f64>();
-    (-2.0 * u1.ln()).sqrt() * (std::f64::consts::TAU * u2).cos()
+    (-2.0 * math::ln(u1)).sqrt() * math::cos(std::f64::consts::TAU * u2)
 }
 
 /// `samples` draws of the required head (m) at `flow` with every source sampled from its
@@ -637,7 +638,7 @@ pub(crate) fn sample_required_head(
             .map(|i| {
                 if let Some((k, shift)) = sources.roughness_of(i) {
                     // ln ε uniform over [ln ε₀ + shift − √3·u, ln ε₀ + shift + √3·u].
-                    (shift + root3 * nominal[i].roughness_u * xi[k]).exp()
+                    math::exp(shift + root3 * nominal[i].roughness_u * xi[k])
                 } else if let Some(k) = sources.own_of(i) {
                     1.0 + root3 * nominal[i].own_u * xi[k]
                 } else {
