@@ -390,7 +390,8 @@ fn k95(share: f64) -> f64 {
     if sigma < 1e-6 {
         return 0.95 * a;
     }
-    let h = |t: f64| t * normal_cdf(t) + math::exp(-0.5 * t * t) / (2.0 * std::f64::consts::PI).sqrt();
+    let h =
+        |t: f64| t * normal_cdf(t) + math::exp(-0.5 * t * t) / (2.0 * std::f64::consts::PI).sqrt();
     let p = |q: f64| {
         if a < 1e-9 {
             return 2.0 * normal_cdf(q / sigma) - 1.0;
