@@ -147,6 +147,11 @@ run "CMake: consumer builds" cmake --build "$out/consumer" -j2
 run "CMake: consumer (shared) equals the core" "$out/consumer/consumer_shared" "$ref_hex"
 run "CMake: consumer (static) equals the core" "$out/consumer/consumer_static" "$ref_hex"
 
+# ---- bounded fuzz: every hg_* function with bad arguments, batches in subprocesses ----
+run "fuzz: every function of the header with bad arguments (25 s at most)" \
+  "$py" tests/fuzz/run_capi_fuzz.py "$header" target/release/libhydrograde.a "$out/fuzz" 25
+grep -h -E '^  fuzz:' "$log" | tail -1 | sed 's/^  /    /'
+
 # ---- packaging as a consumer finds it ----
 # The installed tree moved elsewhere: the .pc finds its prefix from its own place.
 moved="$out/moved-prefix"
