@@ -25,6 +25,8 @@
  *  - Thread-safety: every function may be called from any number of threads at once,
  *    except that one hg_line must not be changed (hg_line_add_*, hg_line_free) while
  *    another thread uses it. Reading a line from several threads at once is safe.
+ *  - The hydro_* exports of the DLL (stdcall on 32-bit Windows, ANSI text) serve the
+ *    spreadsheet module capi/excel/hydrograde.bas and are not declared here.
  *
  * Safety: results are engineering estimates with stated uncertainty (friction
  * correlations are good to about +-10 %). Designs must be checked by a competent engineer

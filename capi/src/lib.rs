@@ -25,6 +25,8 @@ mod materials;
 mod meta;
 mod pipe;
 mod section;
+/// cbindgen:ignore
+mod sheet;
 mod units;
 
 pub use correlation::*;
@@ -45,6 +47,7 @@ pub use materials::*;
 pub use meta::*;
 pub use pipe::*;
 pub use section::*;
+pub use sheet::*;
 pub use units::*;
 
 #[cfg(test)]

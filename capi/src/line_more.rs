@@ -536,6 +536,7 @@ pub unsafe extern "C" fn hg_line_set_uncertainty(
                 non_circular_model: c.non_circular_model,
                 roughness_default: c.roughness_default,
                 diameter: c.diameter,
+                independent_materials: l.options.uncertainty.independent_materials.clone(),
             };
             u.validate()?;
             l.options.uncertainty = u;

@@ -430,7 +430,7 @@ unsafe fn give_source(
     })?;
     // SAFETY: forwarded contract; checked above.
     unsafe {
-        ffi::copy_name(&c.source, buf, len, needed)?;
+        ffi::copy_name(&c.source.name(), buf, len, needed)?;
         put("share", share, c.share)
     }
 }
