@@ -23,10 +23,6 @@ ROOT = Path(__file__).resolve().parents[2]
 CACHE = Path(os.environ.get("HYDROGRADE_CACHE", Path.home() / ".cache" / "hydrograde"))
 MINGW = {"x64": "x86_64-w64-mingw32-gcc", "x86": "i686-w64-mingw32-gcc"}
 
-# Results allowed to differ between Windows and Linux, with the reason. Empty: every
-# export must agree bit for bit.
-ALLOWED_TO_DIFFER: dict[str, str] = {}
-
 SHIM = r"""
 /* Test-only stand-in for bcryptprimitives.dll, which Wine 8 lacks and Rust's std imports
  * (ProcessPrng): forwards to BCryptGenRandom. */
@@ -134,8 +130,6 @@ def main() -> int:
                 got = win.get(key)
                 if got == want:
                     same += 1
-                elif key.split(" ")[0] in ALLOWED_TO_DIFFER:
-                    print(f"{arch}: {key} differs (allowed: {ALLOWED_TO_DIFFER[key.split(' ')[0]]})")
                 else:
                     failures.append(f"{arch}: {key}\n  Linux:   {want}\n  Windows: {got}")
             print(f"{arch} under Wine: {same} of {len(linux)} calls bit-identical to Linux")
