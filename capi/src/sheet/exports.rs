@@ -395,7 +395,7 @@ pub unsafe extern "system" fn hydro_line_head(
         let band = &r.required_head_band;
         let source = band
             .dominant()
-            .map(|s| line.describe_source(s))
+            .map(|s| line.describe_source(&s.name()))
             .unwrap_or_default();
         // SAFETY: forwarded contract.
         unsafe {

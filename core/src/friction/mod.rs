@@ -13,7 +13,7 @@
 //!
 //! | correlation | validity (published) | published | measured max | stated | source |
 //! |---|---|---|---|---|---|
-//! | Colebrook (exact) | Re 4e3…1e8, ε/D 0…0.05 (chart range) | — | ≤ 2 ulp | ≤ 4 ulp | Colebrook 1939 |
+//! | Colebrook (exact) | Re 4e3…1e8, ε/D 0…0.05 (chart range) | — | ≤ 1 ulp | ≤ 4 ulp | Colebrook 1939 |
 //! | Haaland | Re 4e3…1e8, ε/D 1e-6…0.05 | ±1.5 % | 1.42 % | 1.5 % | Haaland 1983 |
 //! | Swamee–Jain | Re 5e3…1e8, ε/D 1e-6…1e-2 | ±1 % | 2.83 % (Re 5e3, ε/D 1e-2) | 3 % | Swamee & Jain 1976 |
 //! | Churchill | all Re, ε/D 0…0.05 | none stated | 3.14 % (Re ≈ 4.4e3) | 3.5 % | Churchill 1977 |
