@@ -24,6 +24,7 @@ mod materials;
 mod meta;
 mod pipe;
 mod section;
+mod threads;
 mod units;
 
 pub use correlation::*;
@@ -43,4 +44,5 @@ pub use materials::*;
 pub use meta::*;
 pub use pipe::*;
 pub use section::*;
+pub use threads::*;
 pub use units::*;

@@ -249,7 +249,7 @@ pub fn rectangular(spread: f64) -> f64 {
 pub const MONTE_CARLO_SAMPLES: usize = 20_000;
 
 mod monte;
-pub use monte::{MonteCarlo, monte_carlo};
+pub use monte::{MAX_SAMPLES, MIN_SAMPLES, MonteCarlo, monte_carlo};
 
 #[cfg(test)]
 mod tests {

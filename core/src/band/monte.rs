@@ -23,6 +23,15 @@ pub struct MonteCarlo {
     pub high: f64,
 }
 
+/// The fewest samples [`monte_carlo`] accepts: fewer cannot place the 2.5 % and 97.5 %
+/// quantiles between samples.
+pub const MIN_SAMPLES: usize = 100;
+
+/// The most samples [`monte_carlo`] accepts, for every binding: the samples are kept in
+/// memory (8 bytes each, 80 MB at the limit), and JCGM 101:2008 needs of the order of
+/// 1e6 for a 95 % interval good to two significant digits.
+pub const MAX_SAMPLES: usize = 10_000_000;
+
 /// A standard normal deviate (Box–Muller).
 fn normal(rng: &mut StdRng) -> f64 {
     let u1: f64 = 1.0 - rng.random::<f64>(); // (0, 1]
@@ -30,12 +39,16 @@ fn normal(rng: &mut StdRng) -> f64 {
     (-2.0 * u1.ln()).sqrt() * (std::f64::consts::TAU * u2).cos()
 }
 
-/// Samples the line's required head at `flow` (m³/s) `samples` times (≥ 100) with the
-/// uncertainty options of the line, from generator seed `seed`.
+/// Samples the line's required head at `flow` (m³/s) `samples` times ([`MIN_SAMPLES`] to
+/// [`MAX_SAMPLES`]) with the uncertainty options of the line, from generator seed `seed`.
 ///
 /// Distributions: friction model, diameter, density and viscosity normal; roughness,
 /// fitting K and equipment ratings rectangular — the same standard uncertainties and the
 /// same correlations as the first-order band.
+///
+/// # Errors
+/// [`Error::OutOfRange`] for `samples` outside [`MIN_SAMPLES`]..=[`MAX_SAMPLES`]; the
+/// errors of [`Line::evaluate`] at `flow`.
 pub fn monte_carlo(
     line: &Line,
     fluid: &Fluid,
@@ -43,11 +56,11 @@ pub fn monte_carlo(
     samples: usize,
     seed: u64,
 ) -> Result<MonteCarlo> {
-    if samples < 100 {
+    if !(MIN_SAMPLES..=MAX_SAMPLES).contains(&samples) {
         return Err(Error::out_of_range(
             "samples",
             samples as f64,
-            "must be at least 100",
+            format!("must lie between {MIN_SAMPLES} and {MAX_SAMPLES}"),
         ));
     }
     let (work, q, _) = line.working_fluid(fluid, flow, line.options().inlet_pressure)?;
@@ -109,4 +122,37 @@ pub fn monte_carlo(
         low: quantile(0.025),
         high: quantile(0.975),
     })
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use crate::{Element, Pipe};
+
+    #[test]
+    fn sample_count_has_one_limit_and_allocates_nothing_beyond_it() {
+        let line = Line::new(vec![Element::Pipe(
+            Pipe::circular(0.05, 10.0, 4.5e-5).unwrap(),
+        )])
+        .unwrap();
+        let water = Fluid::new(998.0, 1.0e-3).unwrap();
+        for bad in [
+            0,
+            MIN_SAMPLES - 1,
+            MAX_SAMPLES + 1,
+            100_000_000_000,
+            1 << 62,
+        ] {
+            let e = monte_carlo(&line, &water, 1e-3, bad, 1).unwrap_err();
+            assert_eq!(e.kind(), crate::ErrorKind::OutOfRange, "{bad}");
+            assert!(e.to_string().starts_with("samples = "), "{e}");
+            assert!(e.to_string().contains("10000000"), "{e}");
+        }
+        assert_eq!(
+            monte_carlo(&line, &water, 1e-3, MIN_SAMPLES, 1)
+                .unwrap()
+                .samples,
+            100
+        );
+    }
 }
