@@ -28,6 +28,7 @@ mod pipe;
 mod section;
 /// cbindgen:ignore
 mod sheet;
+mod threads;
 mod units;
 
 pub use band_curve::*;
@@ -50,6 +51,7 @@ pub use meta::*;
 pub use pipe::*;
 pub use section::*;
 pub use sheet::*;
+pub use threads::*;
 pub use units::*;
 
 #[cfg(test)]

@@ -57,10 +57,7 @@ fn best(reps: usize, mut f: impl FnMut()) -> f64 {
 
 fn main() {
     // One thread: the figures are per core.
-    rayon::ThreadPoolBuilder::new()
-        .num_threads(1)
-        .build_global()
-        .unwrap();
+    hydrograde::threads::set_threads(1).unwrap();
     let water = Fluid::water(288.15, 3e5).unwrap();
     let q = 0.02;
     println!("band timings, one thread (best of 3; seconds, and ns per element)");

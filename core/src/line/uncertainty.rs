@@ -611,7 +611,8 @@ pub struct CurveBand {
 impl Line {
     /// The system curve with its band: the required head at each of `flows` (m³/s) and
     /// the band of `evaluate(fluid, q).required_head_band` at each, in one pass over the
-    /// elements per flow. Runs on all cores above 64 flows; the result is the same.
+    /// elements per flow. Runs on the threads [`crate::threads::set_threads`] allows above
+    /// 64 flows; the result is the same either way.
     ///
     /// # Errors
     /// As [`Line::evaluate`], with the index of the offending flow.
@@ -622,14 +623,21 @@ impl Line {
             let b = ht.required_band(&sources);
             Ok((b.low, ht.required, b.high))
         };
-        let rows: Vec<(f64, f64, f64)> = if flows.len() > 64 {
+        let serial = || {
             flows
-                .par_iter()
+                .iter()
                 .enumerate()
                 .map(one)
-                .collect::<Result<_>>()?
+                .collect::<Result<Vec<_>>>()
+        };
+        let rows = if flows.len() > 64 {
+            match crate::threads::in_pool(|| flows.par_iter().enumerate().map(one).collect()) {
+                Some(Ok(v)) => v,
+                // One thread allowed, or an error: the serial pass gives the first failing flow.
+                _ => serial()?,
+            }
         } else {
-            flows.iter().enumerate().map(one).collect::<Result<_>>()?
+            serial()?
         };
         Ok(CurveBand {
             flows: flows.to_vec(),
