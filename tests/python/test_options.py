@@ -41,15 +41,16 @@ def test_uncertainty_defaults_are_the_core_default_preset():
     assert u == hg.Uncertainty.preset("default")
     assert hg.Uncertainty.presets() == ["default", "none", "model_only"]
     # The core's documented defaults (core/src/band.rs table; common practice: Colebrook
-    # is good to ±10 % at k = 2, i.e. 5 % standard; a factor of 2 on roughness,
-    # rectangular, gives 1.5/√12).
+    # is good to ±10 % at k = 2, i.e. 5 % standard; a factor of 2 either way on
+    # roughness, log-uniform, gives u(ln ε) = ln 4/√12).
     assert u.turbulent_model == 0.05
     assert u.laminar_model == 0.005
     assert u.non_circular_model == 0.075
-    assert u.roughness_default == pytest.approx(1.5 / math.sqrt(12), rel=1e-15)
+    assert u.roughness_default == pytest.approx(math.log(4) / math.sqrt(12), rel=1e-15)
+    assert u.independent_materials == []
     assert u.diameter == 0.0
     assert all(getattr(u, f) for f in ("friction_model", "roughness", "fluid", "fittings", "equipment"))
-    assert set(u.to_dict()) == set(FIELDS)
+    assert set(u.to_dict()) == set(FIELDS) | {"independent_materials"}
     none = hg.Uncertainty.preset("none")
     assert not any(getattr(none, f) for f in ("friction_model", "roughness", "fluid", "fittings"))
     assert hg.Uncertainty.preset("model_only").friction_model
