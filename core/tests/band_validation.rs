@@ -410,3 +410,19 @@ fn bad_roughness_ranges_are_refused() {
             .any(|c| c.source == Source::PipeRoughness { element: 0 })
     );
 }
+
+#[test]
+fn bad_spreads_are_refused() {
+    let e = Equipment::pressure_drop("strainer", 5e4, 0.01).unwrap();
+    for bad in [-0.1, 1.5, f64::NAN, f64::INFINITY] {
+        let err = e.clone().with_spread(bad).unwrap_err();
+        assert!(err.to_string().contains("spread"), "{bad}: {err}");
+    }
+    for bad in [-0.1, 1.5, f64::NAN] {
+        assert!(
+            Fitting::k(1.0).unwrap().with_k_spread(bad).is_err(),
+            "{bad}"
+        );
+    }
+    assert!(e.with_spread(1.0).is_ok());
+}

@@ -99,9 +99,13 @@ impl Equipment {
         })
     }
 
-    /// The same equipment with another spread (relative half-width, ≥ 0).
+    /// The same equipment with another spread (relative half-width, 0…1: a wider
+    /// rectangular range would reach negative losses).
+    ///
+    /// # Errors
+    /// `spread` not finite or outside 0…1.
     pub fn with_spread(mut self, spread: f64) -> Result<Equipment> {
-        self.spread = check::non_negative("spread", spread)?;
+        self.spread = check::within("spread", spread, 0.0, 1.0, "")?;
         Ok(self)
     }
 }
