@@ -267,20 +267,20 @@ fn ten_catalogue_fittings_share_one_error() {
         fittings: true,
         ..UncertaintyOptions::none()
     };
-    let build = |n: usize| {
+    // A short smooth pipe followed by `n` copies of `fitting`: its required-head band.
+    let band = |n: usize, fitting: &Element| {
         let mut els = vec![Element::Pipe(Pipe::circular(0.05, 1.0, 0.0).unwrap())];
-        els.extend((0..n).map(|_| named("elbow_90_standard")));
-        Line::with_options(
-            els,
-            LineOptions {
-                uncertainty: only_k.clone(),
-                ..LineOptions::default()
-            },
-        )
-        .unwrap()
+        els.extend((0..n).map(|_| fitting.clone()));
+        let options = LineOptions {
+            uncertainty: only_k.clone(),
+            ..LineOptions::default()
+        };
+        let l = Line::with_options(els, options).unwrap();
+        l.evaluate(&w, 0.004).unwrap().required_head_band
     };
-    let one = build(1).evaluate(&w, 0.004).unwrap().required_head_band;
-    let ten = build(10).evaluate(&w, 0.004).unwrap().required_head_band;
+    let elbow = named("elbow_90_standard");
+    let one = band(1, &elbow);
+    let ten = band(10, &elbow);
     let ratio = ten.half_width() / one.half_width();
     assert!((ratio - 10.0).abs() < 1e-9, "{ratio}");
     assert_eq!(ten.contributions.len(), 1);
@@ -289,22 +289,8 @@ fn ten_catalogue_fittings_share_one_error() {
         Some(&Source::CatalogueK("elbow_90_standard".into()))
     );
     // User fittings are each their own source: √10.
-    let user = |n: usize| {
-        let mut els = vec![Element::Pipe(Pipe::circular(0.05, 1.0, 0.0).unwrap())];
-        els.extend((0..n).map(|_| Element::Fitting(Fitting::k(0.75).unwrap())));
-        Line::with_options(
-            els,
-            LineOptions {
-                uncertainty: only_k.clone(),
-                ..LineOptions::default()
-            },
-        )
-        .unwrap()
-        .evaluate(&w, 0.004)
-        .unwrap()
-        .required_head_band
-    };
-    let r = user(10).standard_uncertainty() / user(1).standard_uncertainty();
+    let user = Element::Fitting(Fitting::k(0.75).unwrap());
+    let r = band(10, &user).standard_uncertainty() / band(1, &user).standard_uncertainty();
     assert!((r - 10f64.sqrt()).abs() < 1e-9, "{r}");
 }
 
