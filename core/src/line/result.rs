@@ -156,10 +156,12 @@ impl Line {
             total = total.map(|t| t - rho_g * (s.head_loss + s.static_head));
             let pressure_out = total.map(|t| t - 0.5 * work.density * last_v * last_v);
             let mut w = s.warnings;
-            if let (Some(p), Some(pv)) = (pressure_out, work.vapour_pressure) {
-                if p < pv {
-                    w.insert(Warnings::BELOW_VAPOUR_PRESSURE);
-                }
+            // No vapour pressure compares as −∞. Written as a select rather than a match on
+            // both options, so that no branch reads an absent option's payload (memcheck
+            // reports such speculated comparisons).
+            let pv = work.vapour_pressure.unwrap_or(f64::NEG_INFINITY);
+            if pressure_out.is_some_and(|p| p < pv) {
+                w.insert(Warnings::BELOW_VAPOUR_PRESSURE);
             }
             warnings |= w;
             elements.push(self.element_result(&sources, i, s, &work, pressure_out, w));

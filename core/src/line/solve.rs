@@ -384,6 +384,19 @@ impl Line {
         let (_, slope) = self.required_head(fluid, flow)?;
         let (flow_band, head_band) =
             uncertainty::operating_point_bands(self, fluid, flow, head, slope, dpump)?;
+        let values = [
+            ("flow", flow),
+            ("head", head),
+            ("flow band", flow_band.low),
+            ("flow band", flow_band.high),
+            ("head band", head_band.low),
+            ("head band", head_band.high),
+        ];
+        if let Some((name, v)) = values.iter().find(|(_, v)| !v.is_finite()) {
+            return Err(Error::no_solution(format!(
+                "the operating point's {name} is not finite ({v}): the pump curve's heads or the line's losses are too large to combine in double precision"
+            )));
+        }
         Ok(OperatingPoint {
             flow,
             head,
