@@ -121,8 +121,8 @@ static void print_breakdown(const hg_line *l, const hg_fluid *f, double q, hg_li
     if (rise) snprintf(label, sizeof label, "rise %+.1f m", e.static_head);
     if (e.kind == HG_ELEMENT_PIPE) snprintf(coef, sizeof coef, "f %.4f", e.friction_factor);
     else if (e.kind == HG_ELEMENT_FITTING || e.k != 0.0) snprintf(coef, sizeof coef, "K %.3f", e.k);
-    /* Rises and rated drops have no velocity of their own: the library gives 0. */
-    if (e.velocity != 0.0 || e.reynolds != 0.0) {
+    /* Rises and rated drops have no velocity of their own (has_velocity = 0). */
+    if (e.has_velocity) {
       snprintf(v, sizeof v, "%.2f", e.velocity);
       snprintf(re, sizeof re, "%.0f", e.reynolds);
     }

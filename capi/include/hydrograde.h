@@ -166,6 +166,13 @@
 #define HG_ELEMENT_EQUIPMENT 3
 
 /**
+ * An abrupt change of section the route implies between two elements of different bore
+ * with no contraction or expansion element (its own row, with
+ * `HG_WARN_BORE_CHANGE_WITHOUT_TRANSITION`).
+ */
+#define HG_ELEMENT_SECTION_CHANGE 4
+
+/**
  * A sharp-edged entrance from a large space (`r_over_d` must be 0).
  */
 #define HG_ENTRANCE_SHARP 0
@@ -257,6 +264,12 @@
  * A fitting or equipment value used outside the range its data covers.
  */
 #define HG_WARN_FITTING_OUT_OF_RANGE 64
+
+/**
+ * The bore changes between two elements with no contraction or expansion element: the
+ * change is counted as an abrupt contraction or expansion row of its own.
+ */
+#define HG_WARN_BORE_CHANGE_WITHOUT_TRANSITION 128
 
 /**
  * Round pipe: `a` = inside diameter (m), `b` = 0.
@@ -480,7 +493,9 @@ typedef struct hg_line_result {
 /**
  * One element's share of a line evaluated at one flow. Set `struct_size` to
  * `sizeof(hg_element_result)` before the call. Quantities an element does not have
- * (a rise's velocity, a fitting's friction factor) are 0.
+ * (a rise's velocity, a fitting's friction factor) are 0; the flags `has_velocity`
+ * (velocity and Reynolds number), `regime` = -1 (friction factor) and `has_pressure`
+ * tell a true 0 from one that does not apply.
  */
 typedef struct hg_element_result {
   /**
@@ -551,6 +566,16 @@ typedef struct hg_element_result {
    * Upper end of the friction-factor band (pipes; else 0).
    */
   double friction_factor_high;
+  /**
+   * 1 when the element has a bore of its own, so `velocity` and `reynolds` apply;
+   * 0 for rises and rated pressure drops (both then 0).
+   */
+  int32_t has_velocity;
+  /**
+   * Index of the line element this row stands for (as added to the line); -1 for an
+   * abrupt change of section the route implies (`HG_ELEMENT_SECTION_CHANGE`).
+   */
+  int32_t element;
 } hg_element_result;
 
 /**

@@ -15,6 +15,10 @@ pub const HG_ELEMENT_FITTING: i32 = 1;
 pub const HG_ELEMENT_RISE: i32 = 2;
 /// Rated equipment.
 pub const HG_ELEMENT_EQUIPMENT: i32 = 3;
+/// An abrupt change of section the route implies between two elements of different bore
+/// with no contraction or expansion element (its own row, with
+/// `HG_WARN_BORE_CHANGE_WITHOUT_TRANSITION`).
+pub const HG_ELEMENT_SECTION_CHANGE: i32 = 4;
 
 /// A line evaluated at one flow. Set `struct_size` to `sizeof(hg_line_result)` before the
 /// call; fields added in later versions go after the existing ones, so an old caller's
@@ -66,7 +70,9 @@ sized!(hg_line_result);
 
 /// One element's share of a line evaluated at one flow. Set `struct_size` to
 /// `sizeof(hg_element_result)` before the call. Quantities an element does not have
-/// (a rise's velocity, a fitting's friction factor) are 0.
+/// (a rise's velocity, a fitting's friction factor) are 0; the flags `has_velocity`
+/// (velocity and Reynolds number), `regime` = -1 (friction factor) and `has_pressure`
+/// tell a true 0 from one that does not apply.
 #[repr(C)]
 #[derive(Debug, Clone, Copy, PartialEq)]
 pub struct hg_element_result {
@@ -104,6 +110,12 @@ pub struct hg_element_result {
     pub friction_factor_low: f64,
     /// Upper end of the friction-factor band (pipes; else 0).
     pub friction_factor_high: f64,
+    /// 1 when the element has a bore of its own, so `velocity` and `reynolds` apply;
+    /// 0 for rises and rated pressure drops (both then 0).
+    pub has_velocity: i32,
+    /// Index of the line element this row stands for (as added to the line); -1 for an
+    /// abrupt change of section the route implies (`HG_ELEMENT_SECTION_CHANGE`).
+    pub element: i32,
 }
 sized!(hg_element_result);
 
@@ -142,14 +154,15 @@ fn element_to_c(e: &ElementResult) -> hg_element_result {
         ElementKind::Fitting => HG_ELEMENT_FITTING,
         ElementKind::Rise => HG_ELEMENT_RISE,
         ElementKind::Equipment => HG_ELEMENT_EQUIPMENT,
+        ElementKind::SectionChange => HG_ELEMENT_SECTION_CHANGE,
     };
     let fb = e.friction_factor_band.as_ref();
     hg_element_result {
         struct_size: std::mem::size_of::<hg_element_result>(),
         kind,
         regime: e.regime.map_or(-1, regime_code),
-        velocity: or0(e.velocity),
-        reynolds: or0(e.reynolds),
+        velocity: e.velocity.map_or(0.0, or0),
+        reynolds: e.reynolds.map_or(0.0, or0),
         friction_factor: or0(e.friction_factor.unwrap_or(0.0)),
         k: or0(e.k.unwrap_or(0.0)),
         head_loss: e.head_loss,
@@ -162,6 +175,8 @@ fn element_to_c(e: &ElementResult) -> hg_element_result {
         head_loss_high: e.head_loss_band.high,
         friction_factor_low: or0(fb.map_or(0.0, |b| b.low)),
         friction_factor_high: or0(fb.map_or(0.0, |b| b.high)),
+        has_velocity: i32::from(e.velocity.is_some()),
+        element: e.element.and_then(|i| i32::try_from(i).ok()).unwrap_or(-1),
     }
 }
 
@@ -406,9 +421,10 @@ mod tests {
             (ElementKind::Fitting, HG_ELEMENT_FITTING),
             (ElementKind::Rise, HG_ELEMENT_RISE),
             (ElementKind::Equipment, HG_ELEMENT_EQUIPMENT),
+            (ElementKind::SectionChange, HG_ELEMENT_SECTION_CHANGE),
         ] {
             assert_eq!(
-                ["pipe", "fitting", "rise", "equipment"][c as usize],
+                ["pipe", "fitting", "rise", "equipment", "section_change"][c as usize],
                 k.name()
             );
         }

@@ -2,7 +2,7 @@
 //! line and the uncertainty bands.
 
 use super::eval::State;
-use super::{Line, Resolved};
+use super::{Line, Resolved, Role};
 use crate::band::Band;
 use crate::error::{Result, check};
 use crate::fluid::Fluid;
@@ -22,16 +22,20 @@ pub enum ElementKind {
     Rise,
     /// Rated equipment.
     Equipment,
+    /// An abrupt change of section the route implies between two elements of different
+    /// bore with no contraction or expansion element of its own.
+    SectionChange,
 }
 
 impl ElementKind {
-    /// `"pipe"`, `"fitting"`, `"rise"` or `"equipment"`.
+    /// `"pipe"`, `"fitting"`, `"rise"`, `"equipment"` or `"section_change"`.
     pub fn name(self) -> &'static str {
         match self {
             ElementKind::Pipe => "pipe",
             ElementKind::Fitting => "fitting",
             ElementKind::Rise => "rise",
             ElementKind::Equipment => "equipment",
+            ElementKind::SectionChange => "section_change",
         }
     }
 }
@@ -43,10 +47,14 @@ pub struct ElementResult {
     pub kind: ElementKind,
     /// A label: the fitting's or equipment's name, "pipe" or "rise".
     pub label: String,
-    /// Mean velocity in the element's bore, m/s (NaN for rises and rated drops).
-    pub velocity: f64,
-    /// Reynolds number in that bore (NaN where there is none).
-    pub reynolds: f64,
+    /// Index of the line element this row stands for; `None` for an abrupt change of
+    /// section the route implies between two elements.
+    pub element: Option<usize>,
+    /// Mean velocity in the element's bore, m/s (signed; `None` for rises and rated drops,
+    /// which have no bore of their own).
+    pub velocity: Option<f64>,
+    /// Reynolds number in that bore (`None` where there is no bore).
+    pub reynolds: Option<f64>,
     /// Flow regime (pipes).
     pub regime: Option<Regime>,
     /// Darcy friction factor (pipes).
@@ -94,6 +102,8 @@ pub struct LineResult {
     pub elements: Vec<ElementResult>,
     /// Union of the elements' warnings and the line's own (gas, cavitation).
     pub warnings: Warnings,
+    /// What each warning found, in words (the element, the values, the likely cause).
+    pub messages: Vec<String>,
     /// Band of head_loss, m.
     pub head_loss_band: Band,
     /// Band of pressure_loss, Pa.
@@ -122,14 +132,15 @@ pub(crate) fn head_sources<'a>(
         }
         if line.own_source_enabled(i) {
             let own = s.sens.own * s.own_u;
+            let at = line.origin[i].map_or(String::new(), |e| format!(" (element {e})"));
             match &line.resolved[i] {
                 Resolved::Fitting {
                     name,
-                    equipment: false,
+                    role: Role::Fitting | Role::Abrupt,
                     ..
-                } => out.push((format!("K of {name} (element {i})"), own)),
+                } => out.push((format!("K of {name}{at}"), own)),
                 Resolved::Fitting { name, .. } | Resolved::Drop { name, .. } => {
-                    out.push((format!("{name} (element {i})"), own))
+                    out.push((format!("{name}{at}"), own))
                 }
                 _ => {}
             }
@@ -181,18 +192,19 @@ impl Line {
             .fold(0.0, |acc, s| acc + (s.head_loss + s.static_head));
         let slope: f64 = states.iter().map(|s| s.dhead_dflow).sum::<f64>() * dq;
         let mut warnings = gas_warn;
+        let mut messages: Vec<String> = Vec::new();
+        for (w, m) in &self.notes {
+            warnings |= *w;
+            messages.push(m.clone());
+        }
         // Grade line: total pressure falls by ρg(loss + rise); static = total − ½ρV².
-        let first_v = states
-            .iter()
-            .map(|s| s.velocity)
-            .find(|v| v.is_finite())
-            .unwrap_or(0.0);
+        let first_v = states.iter().find_map(|s| s.velocity).unwrap_or(0.0);
         let mut total = inlet.map(|p| p + 0.5 * work.density * first_v * first_v);
         let mut last_v = first_v;
         let mut elements = Vec::with_capacity(states.len());
         for (i, s) in states.iter().enumerate() {
-            if s.velocity.is_finite() {
-                last_v = s.velocity;
+            if let Some(v) = s.velocity {
+                last_v = v;
             }
             total = total.map(|t| t - rho_g * (s.head_loss + s.static_head));
             let pressure_out = total.map(|t| t - 0.5 * work.density * last_v * last_v);
@@ -229,6 +241,7 @@ impl Line {
             inlet_pressure: inlet,
             outlet_pressure: elements.last().and_then(|e| e.pressure_out),
             warnings,
+            messages,
             pressure_loss_band: Band::from_sources(rho_g * head_loss, &pressure_sources),
             required_head_band: head_loss_band.shifted(required_head - head_loss),
             head_loss_band,
@@ -246,18 +259,21 @@ impl Line {
     ) -> ElementResult {
         let (kind, label) = match &self.resolved[i] {
             Resolved::Pipe { .. } => (ElementKind::Pipe, "pipe".to_string()),
-            Resolved::Fitting {
-                name, equipment, ..
-            } => (
-                if *equipment {
-                    ElementKind::Equipment
-                } else {
-                    ElementKind::Fitting
+            Resolved::Fitting { name, role, .. } => (
+                match role {
+                    Role::Fitting => ElementKind::Fitting,
+                    Role::Equipment => ElementKind::Equipment,
+                    Role::Abrupt => ElementKind::SectionChange,
                 },
                 name.clone(),
             ),
             Resolved::Rise(_) => (ElementKind::Rise, "rise".to_string()),
             Resolved::Drop { name, .. } => (ElementKind::Equipment, name.clone()),
+        };
+        let warnings = if self.origin[i].is_none() {
+            warnings | Warnings::BORE_CHANGE_WITHOUT_TRANSITION
+        } else {
+            warnings
         };
         let mut sources = head_sources(self, [(i, s)], fluid);
         sources.retain(|(_, u)| *u != 0.0);
@@ -285,6 +301,7 @@ impl Line {
         ElementResult {
             kind,
             label,
+            element: self.origin[i],
             velocity: s.velocity,
             reynolds: s.reynolds,
             regime: s.regime,
