@@ -17,17 +17,19 @@
 
 mod eval;
 mod path;
-pub(crate) use eval::Perturbation;
 pub(crate) use path::{Resolved, Role};
 mod parallel;
 mod result;
+pub mod rows;
 mod sizing;
 mod solve;
+pub(crate) mod uncertainty;
 
 pub use parallel::{Split, split_flow};
 pub use result::{ElementKind, ElementResult, LineResult};
 pub use sizing::{Limit, SizeChoice, Sizing};
 pub use solve::{FlowSolution, OperatingPoint, PumpCurve};
+pub use uncertainty::CurveBand;
 
 use crate::band::UncertaintyOptions;
 use crate::error::{Error, Result, check};
@@ -235,17 +237,13 @@ impl Line {
     }
 
     /// States the likely range (low, high; m) of the roughness of the pipe at `index`, for
-    /// the roughness uncertainty (rectangular between the two).
+    /// the roughness uncertainty (ε log-uniform between the two; that pipe's roughness
+    /// becomes a source of its own). The pipe's roughness must lie inside the range.
+    ///
+    /// # Errors
+    /// `low` not positive, `high` below `low`, either not finite, the pipe's roughness
+    /// outside the range, or `index` not a pipe.
     pub fn set_roughness_range(&mut self, index: usize, low: f64, high: f64) -> Result<()> {
-        check::non_negative("low", low)?;
-        check::non_negative("high", high)?;
-        if high < low {
-            return Err(Error::out_of_range(
-                "high",
-                high,
-                format!("must not be below low ({low})"),
-            ));
-        }
         match self.elements.get(index) {
             Some(Element::Pipe(_)) => {}
             _ => {
@@ -307,24 +305,5 @@ impl Line {
             self.options.clone(),
             self.roughness_ranges.clone(),
         )
-    }
-}
-
-impl Line {
-    /// Whether element `i`'s own K or rating enters the bands.
-    pub(crate) fn own_source_enabled(&self, i: usize) -> bool {
-        let uo = &self.options.uncertainty;
-        match &self.resolved[i] {
-            Resolved::Fitting {
-                role: Role::Fitting | Role::Abrupt,
-                ..
-            } => uo.fittings,
-            Resolved::Fitting {
-                role: Role::Equipment,
-                ..
-            }
-            | Resolved::Drop { .. } => uo.equipment,
-            _ => false,
-        }
     }
 }

@@ -44,8 +44,12 @@ pub(crate) enum Resolved {
     Pipe {
         pipe: Pipe,
         geometry: crate::pipe::Geometry,
-        /// Relative standard uncertainty of the roughness.
+        /// Standard uncertainty of ln ε (ε log-uniform over its stated range).
         roughness_u: f64,
+        /// Mean of ln ε minus ln of the nominal ε.
+        roughness_shift: f64,
+        /// The range was stated for this pipe alone (its roughness is a source of its own).
+        own_range: bool,
     },
     Fitting {
         bore: f64,
@@ -237,15 +241,18 @@ pub(crate) fn resolve(
             Ok((s, rr.min(friction::MAX_REL_ROUGHNESS)))
         };
         path.rows.push(match e {
-            Element::Pipe(p) => Resolved::Pipe {
-                pipe: p.clone(),
-                geometry: p.geometry(options.turbulent_diameter),
-                roughness_u: match ranges[i].or(p.roughness_range) {
-                    Some((lo, hi)) if p.roughness > 0.0 => (hi - lo) / 12f64.sqrt() / p.roughness,
-                    Some(_) => 0.0,
-                    None => options.uncertainty.roughness_default,
-                },
-            },
+            Element::Pipe(p) => {
+                let (roughness_u, roughness_shift) =
+                    super::uncertainty::roughness_input(p, ranges[i], options)
+                        .map_err(|e| e.at_index(i))?;
+                Resolved::Pipe {
+                    pipe: p.clone(),
+                    geometry: p.geometry(options.turbulent_diameter),
+                    roughness_u,
+                    roughness_shift,
+                    own_range: ranges[i].is_some(),
+                }
+            }
             Element::Fitting(f) => {
                 let name = f.name();
                 // A change of section refers K to its own bore: the outlet of a
