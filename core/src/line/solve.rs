@@ -101,10 +101,13 @@ impl Line {
         } else {
             0.0
         };
-        if sign < 0.0 && self.blocks_reverse_flow() {
-            return Err(Error::no_solution(format!(
-                "head {head} m is below the static head {h0} m, which would reverse the flow through a check valve"
-            )));
+        if sign < 0.0 {
+            if let Some(i) = self.blocking_row() {
+                return Err(Error::no_solution(format!(
+                    "head {head} m is below the static head {h0} m: {}",
+                    self.reverse_blocked_reason(i)
+                )));
+            }
         }
         let g = |q: f64| self.required_head(fluid, q).map(|(h, d)| (h - head, d));
         let (flow, iterations) = if sign == 0.0 {
