@@ -25,6 +25,7 @@ pub mod fluid;
 pub mod friction;
 pub mod line;
 pub mod math;
+mod names;
 pub mod pipe;
 pub mod roughness;
 pub mod section;

@@ -100,9 +100,9 @@ impl TurbulentDiameter {
 impl std::str::FromStr for TurbulentDiameter {
     type Err = Error;
     fn from_str(s: &str) -> Result<Self> {
-        match s {
+        match crate::names::key(s).as_str() {
             "hydraulic" => Ok(TurbulentDiameter::Hydraulic),
-            "laminar_equivalent" => Ok(TurbulentDiameter::LaminarEquivalent),
+            "laminarequivalent" => Ok(TurbulentDiameter::LaminarEquivalent),
             _ => Err(Error::unknown_name(
                 "turbulent diameter",
                 s,

@@ -4,9 +4,6 @@
 use crate::error::{Error, Result};
 use crate::fluid::Fluid;
 use crate::line::Line;
-use crate::math;
-use rand::rngs::StdRng;
-use rand::{Rng, SeedableRng};
 use serde::{Deserialize, Serialize};
 
 /// Summary of a Monte Carlo run on a line's required head.
@@ -24,19 +21,14 @@ pub struct MonteCarlo {
     pub high: f64,
 }
 
-/// A standard normal deviate (Box–Muller).
-fn normal(rng: &mut StdRng) -> f64 {
-    let u1: f64 = 1.0 - rng.random::<f64>(); // (0, 1]
-    let u2: f64 = rng.random::<f64>();
-    (-2.0 * math::ln(u1)).sqrt() * math::cos(std::f64::consts::TAU * u2)
-}
-
 /// Samples the line's required head at `flow` (m³/s) `samples` times (≥ 100) with the
 /// uncertainty options of the line, from generator seed `seed`.
 ///
-/// Distributions: friction model, diameter, density and viscosity normal; roughness,
-/// fitting K and equipment ratings rectangular — the same standard uncertainties and the
-/// same correlations as the first-order band.
+/// Each source is drawn once per sample and acts wherever the first-order band lets it
+/// act: friction model, diameter, density and viscosity normal; each roughness source
+/// log-uniform over its stated range (one draw shared by the pipes of one material);
+/// each K source rectangular on ±its spread (one draw shared by the instances of one
+/// catalogue entry); each equipment rectangular on ±its spread.
 pub fn monte_carlo(
     line: &Line,
     fluid: &Fluid,
@@ -51,49 +43,8 @@ pub fn monte_carlo(
             "must be at least 100",
         ));
     }
-    let (work, q, _) = line.working_fluid(fluid, flow, line.options().inlet_pressure)?;
-    let uo = line.options().uncertainty.clone();
-    let n = line.resolved.len();
-    let own_u: Vec<f64> = (0..n)
-        .map(|i| line.element_state(i, &work, q, None, true).map(|s| s.own_u))
-        .collect::<Result<_>>()?;
-    let own_on: Vec<bool> = (0..n).map(|i| line.own_source_enabled(i)).collect();
-    let mut rng = StdRng::seed_from_u64(seed);
-    let mut values = Vec::with_capacity(samples);
-    let root3 = 3f64.sqrt();
-    for _ in 0..samples {
-        let (dz, vz) = if uo.fluid {
-            (normal(&mut rng), normal(&mut rng))
-        } else {
-            (0.0, 0.0)
-        };
-        let pert = crate::line::Perturbation {
-            model_z: normal(&mut rng),
-            roughness_z: root3 * (2.0 * rng.random::<f64>() - 1.0),
-            diameter: 1.0 + uo.diameter * normal(&mut rng),
-            density: 1.0 + work.density_rel_uncertainty * dz,
-            viscosity: 1.0 + work.viscosity_rel_uncertainty * vz,
-            own: (0..n)
-                .map(|i| {
-                    let xi = 2.0 * rng.random::<f64>() - 1.0;
-                    if own_on[i] {
-                        1.0 + root3 * own_u[i] * xi
-                    } else {
-                        1.0
-                    }
-                })
-                .collect(),
-        };
-        let mut fl = work.clone();
-        fl.density *= pert.density;
-        fl.viscosity *= pert.viscosity;
-        let mut h = 0.0;
-        for i in 0..n {
-            let s = line.element_state(i, &fl, q, Some(&pert), true)?;
-            h += s.head_loss + s.static_head;
-        }
-        values.push(h);
-    }
+    let mut values =
+        crate::line::uncertainty::sample_required_head(line, fluid, flow, samples, seed)?;
     values.sort_by(f64::total_cmp);
     let mean = values.iter().sum::<f64>() / samples as f64;
     let var = values.iter().map(|v| (v - mean) * (v - mean)).sum::<f64>() / (samples - 1) as f64;

@@ -145,13 +145,10 @@ impl fmt::Display for Correlation {
 impl FromStr for Correlation {
     type Err = Error;
     fn from_str(s: &str) -> Result<Self> {
-        Correlation::ALL
-            .into_iter()
-            .find(|c| c.name() == s)
-            .ok_or_else(|| {
-                let names: Vec<&str> = Correlation::ALL.iter().map(|c| c.name()).collect();
-                Error::unknown_name("correlation", s, &names)
-            })
+        crate::names::find(Correlation::ALL, |c| c.name(), s).ok_or_else(|| {
+            let names: Vec<&str> = Correlation::ALL.iter().map(|c| c.name()).collect();
+            Error::unknown_name("correlation", s, &names)
+        })
     }
 }
 
@@ -213,13 +210,10 @@ impl fmt::Display for Transition {
 impl FromStr for Transition {
     type Err = Error;
     fn from_str(s: &str) -> Result<Self> {
-        Transition::ALL
-            .into_iter()
-            .find(|t| t.name() == s)
-            .ok_or_else(|| {
-                let names: Vec<&str> = Transition::ALL.iter().map(|t| t.name()).collect();
-                Error::unknown_name("transition", s, &names)
-            })
+        crate::names::find(Transition::ALL, |t| t.name(), s).ok_or_else(|| {
+            let names: Vec<&str> = Transition::ALL.iter().map(|t| t.name()).collect();
+            Error::unknown_name("transition", s, &names)
+        })
     }
 }
 

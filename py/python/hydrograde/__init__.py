@@ -63,6 +63,7 @@ from hydrograde._native import (
     water_vapour_pressure,
     water_viscosity,
 )
+from hydrograde._units import display, display_units, quantities
 
 __all__ = [
     "__version__",
@@ -73,6 +74,8 @@ __all__ = [
     "correlation_validity",
     "correlations",
     "darcy_factor",
+    "display",
+    "display_units",
     "ElementResult",
     "Equipment",
     "ERROR_KINDS",
@@ -98,6 +101,7 @@ __all__ = [
     "pipe_sizes",
     "pipe_tables",
     "PumpCurve",
+    "quantities",
     "Rise",
     "Section",
     "Sizing",
