@@ -571,7 +571,7 @@ pub fn log_uniform(nominal: f64, low: f64, high: f64) -> (f64, f64) {
 pub const MONTE_CARLO_SAMPLES: usize = 20_000;
 
 mod monte;
-pub use monte::{MonteCarlo, monte_carlo};
+pub use monte::{MAX_SAMPLES, MIN_SAMPLES, MonteCarlo, monte_carlo};
 
 #[cfg(test)]
 mod tests {

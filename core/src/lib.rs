@@ -30,6 +30,7 @@ pub mod pipe;
 pub mod roughness;
 pub mod section;
 pub mod sizes;
+pub mod threads;
 pub mod units;
 pub mod warning;
 
@@ -48,6 +49,7 @@ pub use units::{STANDARD_GRAVITY, convert, convert_head};
 pub use band::{Band, Contribution, UncertaintyOptions};
 pub use line::{Element, Equipment, Limit, Line, LineOptions, LineResult, PumpCurve, split_flow};
 pub use pipe::Pipe;
+pub use threads::{set_threads, threads};
 
 /// The crate version, from Cargo.toml.
 pub const VERSION: &str = env!("CARGO_PKG_VERSION");

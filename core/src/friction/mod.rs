@@ -503,9 +503,9 @@ pub const PARALLEL_THRESHOLD: usize = 16_384;
 
 /// Friction factors of many points at once: `out[i] = darcy_factor(re[i], rel_roughness[i]).f`.
 ///
-/// Runs on all cores (rayon) above [`PARALLEL_THRESHOLD`] elements, and on each core on
-/// the widest vector unit the processor has ([`Isa::detected`]); the result is the same
-/// bit for bit either way.
+/// Runs on the threads [`crate::threads::set_threads`] allows above [`PARALLEL_THRESHOLD`]
+/// elements, and on each thread on the widest vector unit the processor has
+/// ([`Isa::detected`]); the result is the same bit for bit either way.
 ///
 /// # Errors
 /// [`Error::Invalid`] when the three slices differ in length; otherwise the error of the
@@ -545,19 +545,21 @@ pub fn darcy_factor_batch_on(
     }
     opts.validate()?;
     if re.len() < PARALLEL_THRESHOLD {
-        batch_serial(isa, re, rel_roughness, opts, out, 0)
-    } else {
-        let res = out
-            .par_chunks_mut(BATCH_CHUNK)
+        return batch_serial(isa, re, rel_roughness, opts, out, 0);
+    }
+    let parallel = crate::threads::in_pool(|| {
+        out.par_chunks_mut(BATCH_CHUNK)
             .zip(re.par_chunks(BATCH_CHUNK))
             .zip(rel_roughness.par_chunks(BATCH_CHUNK))
             .enumerate()
-            .try_for_each(|(c, ((o, r), e))| batch_serial(isa, r, e, opts, o, c * BATCH_CHUNK));
-        match res {
-            Ok(()) => Ok(()),
-            // Report the first failing element, whichever thread saw an error first.
-            Err(_) => first_error(re, rel_roughness, opts),
-        }
+            .try_for_each(|(c, ((o, r), e))| batch_serial(isa, r, e, opts, o, c * BATCH_CHUNK))
+    });
+    match parallel {
+        // One thread allowed: no pool, the calling thread does it all.
+        None => batch_serial(isa, re, rel_roughness, opts, out, 0),
+        Some(Ok(())) => Ok(()),
+        // Report the first failing element, whichever thread saw an error first.
+        Some(Err(_)) => first_error(re, rel_roughness, opts),
     }
 }
 

@@ -14,7 +14,7 @@
 //! term's shift (an input whose mean is not its nominal value).
 
 use super::eval::{Perturbation, State};
-use super::{Element, Line, LineOptions, Resolved};
+use super::{Element, Line, LineOptions, Resolved, Role};
 use crate::band::{Band, Source, Term, log_uniform};
 use crate::error::{Error, Result, check};
 use crate::fluid::Fluid;
@@ -105,7 +105,13 @@ impl Sources {
             list.push(s);
             (list.len() - 1) as u32
         };
-        for (i, (r, e)) in line.resolved.iter().zip(&line.elements).enumerate() {
+        for (i, r) in line.resolved.iter().enumerate() {
+            // The line element this row stands for; an implied change of section is
+            // named after the element it stands before.
+            let element = line.origin[i]
+                .or_else(|| line.origin[i + 1..].iter().find_map(|o| *o))
+                .unwrap_or(0);
+            let e = line.origin[i].map(|j| &line.elements[j]);
             match (r, e) {
                 (
                     Resolved::Pipe {
@@ -130,14 +136,31 @@ impl Sources {
                                 id
                             }
                         },
-                        None => push(&mut list, Source::PipeRoughness { element: i }),
+                        None => push(&mut list, Source::PipeRoughness { element }),
                     };
                 }
                 (
                     Resolved::Fitting {
-                        equipment: false, ..
+                        role: Role::Abrupt,
+                        name,
+                        ..
                     },
-                    Element::Fitting(f),
+                    _,
+                ) if uo.fittings => {
+                    own[i] = push(
+                        &mut list,
+                        Source::FittingK {
+                            element,
+                            name: name.clone(),
+                        },
+                    );
+                }
+                (
+                    Resolved::Fitting {
+                        role: Role::Fitting,
+                        ..
+                    },
+                    Some(Element::Fitting(f)),
                 ) if uo.fittings => {
                     own[i] = match f.catalogue_name() {
                         Some(name) => match entries.get(name) {
@@ -151,7 +174,7 @@ impl Sources {
                         None => push(
                             &mut list,
                             Source::FittingK {
-                                element: i,
+                                element,
                                 name: f.name(),
                             },
                         ),
@@ -159,7 +182,7 @@ impl Sources {
                 }
                 (
                     Resolved::Fitting {
-                        equipment: true,
+                        role: Role::Equipment,
                         name,
                         ..
                     }
@@ -169,7 +192,7 @@ impl Sources {
                     own[i] = push(
                         &mut list,
                         Source::Equipment {
-                            element: i,
+                            element,
                             name: name.clone(),
                         },
                     );

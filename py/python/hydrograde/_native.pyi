@@ -38,10 +38,12 @@ __all__ = [
     "PumpCurve",
     "Rise",
     "Section",
+    "set_threads",
     "Sizing",
     "smallest_pipe",
     "Split",
     "split_flow",
+    "threads",
     "Uncertainty",
     "unit_names",
     "WARNING_NAMES",
@@ -475,8 +477,14 @@ class MonteCarlo:
     def _from_state(cls, state: bytes) -> MonteCarlo: ...
     def __eq__(self, value: object, /) -> bool: ...
 
+def set_threads(n: int) -> None:
+    """Sets the number of threads array calls and system curves may use (1 to 1024)."""
+
+def threads() -> int:
+    """The number of threads array calls and system curves may use."""
+
 def monte_carlo(
-    line: Line, fluid: Fluid, flow: float, samples: int = ..., seed: int = 0
+    line: Line, fluid: Fluid, flow: float, samples: Optional[int] = None, seed: int = 0
 ) -> MonteCarlo: ...
 
 @final
@@ -593,6 +601,8 @@ class LineResult:
     @property
     def warnings(self) -> List[str]: ...
     @property
+    def messages(self) -> List[str]: ...
+    @property
     def elements(self) -> List[ElementResult]: ...
     @property
     def head_loss_band(self) -> Band: ...
@@ -617,9 +627,11 @@ class ElementResult:
     @property
     def label(self) -> str: ...
     @property
-    def velocity(self) -> float: ...
+    def element(self) -> Optional[int]: ...
     @property
-    def reynolds(self) -> float: ...
+    def velocity(self) -> Optional[float]: ...
+    @property
+    def reynolds(self) -> Optional[float]: ...
     @property
     def regime(self) -> Optional[str]: ...
     @property
