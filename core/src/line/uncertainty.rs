@@ -267,8 +267,12 @@ impl Sources {
         let re_t = s.reynolds * scale;
         let half = P95_RECT * 3f64.sqrt() * s.roughness_u;
         let f_at = |dl: f64| {
-            crate::friction::darcy_factor(re_t, pipe.roughness * dl.exp() / geometry.dt, &o)
-                .map(|r| r.f)
+            crate::friction::darcy_factor(
+                re_t,
+                pipe.roughness * crate::math::exp(dl) / geometry.dt,
+                &o,
+            )
+            .map(|r| r.f)
         };
         match (f_at(shift - half), f_at(shift + half)) {
             (Ok(lo), Ok(hi)) => {
