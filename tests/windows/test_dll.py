@@ -63,13 +63,33 @@ def exports(dll: Path, arch: str) -> set[str]:
 
 
 def stdcall_returns(dll: Path, arch: str) -> dict[str, str]:
-    """The return instruction of each export's own code (x86 only)."""
+    """The first return instruction of each hydro_* export's code (x86): `ret $N` when the
+    callee pops its N bytes of arguments (stdcall), plain `ret` for cdecl."""
     tool = f"{MINGW[arch].removesuffix('-gcc')}-objdump"
-    dis = run([tool, "-d", "--no-show-raw-insn", str(dll)]).stdout
+    dump = run([tool, "-p", str(dll)]).stdout
+    base = int(re.search(r"^ImageBase\s+([0-9a-f]+)", dump, re.M).group(1), 16)
+    rvas = {int(i): int(r, 16) for i, r in re.findall(r"^\s+\[\s*(\d+)\] \+base\[\s*\d+\] ([0-9a-f]+) Export RVA", dump, re.M)}
+    names = {name: int(i) for i, name in re.findall(r"^\s+\[\s*(\d+)\] (hydro_\w+)\s*$", dump, re.M)}
     out = {}
-    for m in re.finditer(r"<(hydro_\w+)>:\n(.*?)\n\n", dis, re.S):
-        rets = re.findall(r"\bret\s*(\$0x[0-9a-f]+)?", m.group(2))
-        out[m.group(1)] = rets[-1] if rets else ""
+    for name, i in names.items():
+        start = base + rvas[i]
+        dis = run([tool, "-d", "--no-show-raw-insn", f"--start-address={start:#x}",
+                   f"--stop-address={start + 0x400:#x}", str(dll)]).stdout
+        ret = re.search(r"\bret\s*(\$0x[0-9a-f]+)?", dis)
+        out[name] = (ret.group(1) or "plain ret") if ret else "no ret"
+    return out
+
+
+def stack_bytes() -> dict[str, int]:
+    """Bytes of arguments a 32-bit stdcall export pops, from the spec: 8 per Double, 4 per
+    Long or pointer."""
+    sys.path.insert(0, str(ROOT / "scripts" / "windows"))
+    import gen_vba
+
+    out = {}
+    for fn in gen_vba.load()["functions"]:
+        params = [p for a, t in gen_vba.all_args(fn) for p in gen_vba.VBA_PARAMS[t](a)]
+        out[fn["export"]] = sum(8 if p.startswith("ByVal") and p.endswith("As Double") else 4 for p in params)
     return out
 
 
@@ -100,11 +120,14 @@ def main() -> int:
                 failures.append(f"{arch}: exports missing {sorted(missing)}, decorated {sorted(decorated)}")
             if arch == "x86":
                 rets = stdcall_returns(dll, arch)
-                bad = {n: r for n, r in rets.items() if not r.startswith("$")}
-                if bad or len(rets) != len(spec_exports):
-                    failures.append(f"x86: not stdcall (callee pops its arguments): {bad}")
+                want = stack_bytes()
+                bad = {n: (r, f"want ret ${want.get(n, 0):#x}") for n, r in rets.items()
+                       if r != f"${want.get(n, 0):#x}"}
+                if bad or set(rets) != spec_exports:
+                    failures.append(f"x86: not stdcall with the spec's arguments: {bad}")
                 else:
-                    print(f"x86: {len(rets)} exports undecorated and stdcall (ret $N)")
+                    print(f"x86: {len(rets)} exports undecorated, stdcall, popping the bytes of the "
+                          "spec's arguments (ret $N)")
             wine = wine_binary(arch)
             if wine is None:
                 print(f"{arch}: no Wine for this architecture; exports checked by objdump only")
@@ -114,11 +137,12 @@ def main() -> int:
             shutil.copy(dll, d / "hydrograde.dll")
             cc = MINGW[arch]
             (d / "shim.c").write_text(SHIM)
-            run([cc, "-shared", "-O1", "-o", str(d / "bcryptprimitives.dll"), str(d / "shim.c"), "-lbcrypt"])
+            run([cc, "-shared", "-O1", "-Wl,--kill-at", "-o", str(d / "bcryptprimitives.dll"),
+                 str(d / "shim.c"), "-lbcrypt"])
             run([cc, "-O1", "-Wall", "-Werror", "-o", str(d / "harness.exe"), str(src)])
             prefix = CACHE / f"wine-{arch}"
             prefix.mkdir(parents=True, exist_ok=True)
-            env = dict(os.environ, WINEPREFIX=str(prefix), WINEDEBUG="-all", WINEDLLOVERRIDES="mscoree,mshtml=")
+            env = dict(os.environ, WINEPREFIX=str(prefix), WINEDEBUG="-all", WINEDLLOVERRIDES="mscoree,mshtml=;bcryptprimitives=n")
             if arch == "x86":
                 env["WINEARCH"] = "win32"
             p = subprocess.run([wine, str(d / "harness.exe"), "hydrograde.dll"], cwd=d, env=env,
