@@ -86,7 +86,12 @@ def build(path: Path) -> None:
     for r, (q, h) in enumerate(PUMP, 11):
         ws.cell(row=r, column=10, value=q)
         ws.cell(row=r, column=11, value=h)
-    for col, width in zip("ABCDEFGHIJK", (38, 22, 11, 24, 22, 9, 32, 3, 3, 16, 15)):
+    # The system curve: one formula over the pump table's flows spills a column of heads
+    # (a dynamic array; older Excel: select L11:L17 and enter it with Ctrl+Shift+Enter).
+    ws["L10"] = "line head (m)"
+    ws["L10"].font = bold
+    ws["L11"] = f'=HydroLineHead({rng}, $B$6, $B$7, $J$11:$J${10 + len(PUMP)}, "L/s", "mm", "m")'
+    for col, width in zip("ABCDEFGHIJKL", (38, 22, 11, 24, 22, 9, 32, 3, 3, 16, 15, 15)):
         ws.column_dimensions[col].width = width
     fixed = datetime(2026, 1, 1)
     wb.properties.created = wb.properties.modified = fixed
