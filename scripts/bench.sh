@@ -6,6 +6,7 @@
 #   scripts/bench.sh compare    only the Python comparison
 #   scripts/bench.sh criterion  only the criterion suites
 #   scripts/bench.sh profile    only the callgrind instruction counts (scripts/profile.sh)
+#   scripts/bench.sh bands      only the band timings against line length (about 1 min)
 #
 # The ratio table and the comparison each run in one process, so their ratios compare
 # like with like on a busy machine; the targets and whether they are met are printed at
@@ -67,11 +68,17 @@ profile() {
   fi
 }
 
+bands() {
+  say "band timings against line length (one thread)"
+  cargo run -q --release -p hydrograde-benches --bin bands
+}
+
 case "$what" in
-  all) criterion; ratios; compare; profile ;;
+  all) criterion; ratios; compare; profile; bands ;;
+  bands) bands ;;
   profile) profile ;;
   criterion) criterion ;;
   ratios) ratios ;;
   compare) compare ;;
-  *) echo "usage: scripts/bench.sh [all|criterion|ratios|compare|profile]" >&2; exit 2 ;;
+  *) echo "usage: scripts/bench.sh [all|criterion|ratios|compare|profile|bands]" >&2; exit 2 ;;
 esac
