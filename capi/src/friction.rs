@@ -1,6 +1,6 @@
 //! The Darcy friction factor: scalar, with derivatives, with options, and in batches.
 
-use crate::ffi::{self, FfiResult, SizePrefixed, bad_constant, guard, out_ptr, put};
+use crate::ffi::{self, FfiResult, bad_constant, guard, out_ptr, put};
 use hydrograde::friction::{self, Correlation, Friction, Options, Regime, Transition};
 
 /// Colebrook–White, solved exactly (the default correlation).
@@ -54,10 +54,7 @@ pub struct hg_friction_options {
     pub turbulent_limit: f64,
 }
 
-// SAFETY: repr(C), first field is the usize size.
-unsafe impl SizePrefixed for hg_friction_options {
-    const MIN_SIZE: usize = std::mem::size_of::<hg_friction_options>();
-}
+crate::ffi::sized!(hg_friction_options, turbulent_limit: f64);
 
 /// A friction factor with its sensitivities. Set `struct_size` to `sizeof(hg_friction)`
 /// before the call; the library fills the other fields.
@@ -78,10 +75,7 @@ pub struct hg_friction {
     pub warnings: u32,
 }
 
-// SAFETY: repr(C), first field is the usize size.
-unsafe impl SizePrefixed for hg_friction {
-    const MIN_SIZE: usize = std::mem::size_of::<hg_friction>();
-}
+crate::ffi::sized!(hg_friction, warnings: u32);
 
 pub(crate) fn regime_code(r: Regime) -> i32 {
     match r {
@@ -313,17 +307,14 @@ pub unsafe extern "C" fn hg_darcy_factor_batch(
                 ffi::slice("rel_roughness", rel_roughness, n)?,
             )
         };
-        let in_place = ffi::overlaps(re, n, out, n) || ffi::overlaps(rel_roughness, n, out, n);
-        if in_place {
-            let (r, e) = (r.to_vec(), e.to_vec());
-            // SAFETY: the inputs were copied, so `out` is not aliased.
-            let o = unsafe { ffi::slice_mut("out", out, n)? };
-            friction::darcy_factor_batch(&r, &e, &opts, o)?;
-        } else {
-            // SAFETY: `out` does not overlap the inputs.
-            let o = unsafe { ffi::slice_mut("out", out, n)? };
-            friction::darcy_factor_batch(r, e, &opts, o)?;
-        }
+        // Checked before computing, without borrowing (it may alias an input).
+        ffi::check_len("out", out.cast_const(), n)?;
+        // Computed aside, so a failing point leaves `out` untouched (one copy of n
+        // doubles, small beside n Colebrook solves).
+        let mut f = vec![0.0; n];
+        friction::darcy_factor_batch(r, e, &opts, &mut f)?;
+        // SAFETY: `r` and `e` are no longer used, so `out` may alias them.
+        unsafe { ffi::slice_mut("out", out, n)? }.copy_from_slice(&f);
         Ok(())
     })
 }

@@ -1,6 +1,6 @@
 //! A straight run: head loss with its derivative, the flow state, batches.
 
-use crate::ffi::{self, FfiResult, SizePrefixed, guard, out_ptr, put};
+use crate::ffi::{self, FfiResult, guard, out_ptr, put};
 use crate::friction::regime_code;
 use crate::section::{HG_SECTION_CIRCLE, section_of};
 use hydrograde::error::check;
@@ -33,10 +33,7 @@ pub struct hg_pipe_flow {
     pub warnings: u32,
 }
 
-// SAFETY: repr(C), first field is the usize size.
-unsafe impl SizePrefixed for hg_pipe_flow {
-    const MIN_SIZE: usize = std::mem::size_of::<hg_pipe_flow>();
-}
+crate::ffi::sized!(hg_pipe_flow, warnings: u32);
 
 fn pipe_of(shape: i32, a: f64, b: f64, length: f64, roughness: f64) -> FfiResult<Pipe> {
     Ok(Pipe::new(section_of(shape, a, b)?, length, roughness)?)
@@ -211,15 +208,17 @@ pub unsafe extern "C" fn hg_pipe_head_loss_batch(
                 "dhead_dflow: must not overlap head_loss",
             ));
         }
-        // SAFETY: the flows were copied, and the two outputs do not overlap.
-        let (h, d) = unsafe {
-            (
-                ffi::slice_mut("head_loss", head_loss, n)?,
-                ffi::slice_mut("dhead_dflow", dhead_dflow, n)?,
-            )
-        };
+        ffi::check_len("head_loss", head_loss.cast_const(), n)?;
+        ffi::check_len("dhead_dflow", dhead_dflow.cast_const(), n)?;
+        // Computed aside, so a failing flow leaves both outputs untouched.
+        let (mut hs, mut ds) = (vec![0.0; n], vec![0.0; n]);
         for (i, &qi) in q.iter().enumerate() {
-            (h[i], d[i]) = pipe.head_loss(&fluid, qi).map_err(|e| e.at_index(i))?;
+            (hs[i], ds[i]) = pipe.head_loss(&fluid, qi).map_err(|e| e.at_index(i))?;
+        }
+        // SAFETY: the flows were copied, and the two outputs do not overlap.
+        unsafe {
+            ffi::slice_mut("head_loss", head_loss, n)?.copy_from_slice(&hs);
+            ffi::slice_mut("dhead_dflow", dhead_dflow, n)?.copy_from_slice(&ds);
         }
         Ok(())
     })

