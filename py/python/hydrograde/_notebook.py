@@ -265,7 +265,7 @@ def _element_rows(elements: Sequence[Mapping[str, Any]]) -> str:
             fk = f"K {number(e['k'])}"
         else:
             fk = DASH
-        band = {"low": e.get("head_loss_low"), "nominal": e.get("head_loss"),
+        band: Dict[str, Any] = {"low": e.get("head_loss_low"), "nominal": e.get("head_loss"),
                 "high": e.get("head_loss_high"), "contributions": []}
         rng = DASH
         if kind != "rise" and band["low"] is not None:
