@@ -184,7 +184,7 @@ fn element_dict<'py>(py: Python<'py>, e: &ElementResult) -> PyResult<Bound<'py, 
     d.set_item("pressure_out", e.pressure_out)?;
     d.set_item("head_loss_low", e.head_loss_band.low)?;
     d.set_item("head_loss_high", e.head_loss_band.high)?;
-    d.set_item("dominant", e.head_loss_band.dominant())?;
+    d.set_item("dominant", e.head_loss_band.dominant().map(|s| s.name()))?;
     d.set_item("warnings", e.warnings.names())?;
     Ok(d)
 }

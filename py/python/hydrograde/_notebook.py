@@ -466,17 +466,20 @@ def render_object(title: str, obj: Any) -> str:
 
 def to_dataframe(data: Mapping[str, Any]) -> Any:
     """A pandas DataFrame in the display units: one row per element when there are
-    elements, else one row; column names carry the unit (``head_loss [kPa]``)."""
+    elements, else one row; ``frame.attrs["units"]`` maps each column to its unit."""
     try:
         import pandas as pd  # type: ignore[import-untyped]
     except ImportError as exc:  # pragma: no cover - exercised without pandas only
         raise ImportError("to_dataframe() needs pandas: pip install pandas") from exc
 
+    units: Dict[str, str] = {}
+
     def column(key: str) -> str:
-        unit = _units.unit_of(key)
-        base = key[: -len("_low")] if key.endswith("_low") else key[: -len("_high")] if key.endswith("_high") else key
-        unit = unit or _units.unit_of(base)
-        return f"{key} [{_units.pretty(unit)}]" if unit else key
+        base = key.rsplit("_", 1)[0] if key.endswith(("_low", "_high")) else key
+        unit = _units.unit_of(key) or _units.unit_of(base) or FIXED_UNITS.get(key)
+        if unit:
+            units[key] = _units.pretty(unit)
+        return key
 
     def shown(key: str, value: Any) -> Any:
         base = key.rsplit("_", 1)[0] if key.endswith(("_low", "_high")) else key
@@ -488,7 +491,9 @@ def to_dataframe(data: Mapping[str, Any]) -> Any:
     if elements:
         rows = [{column(k): shown(k, v) for k, v in e.items() if not isinstance(v, Mapping)}
                 for e in elements]
-        return pd.DataFrame(rows)
+        frame = pd.DataFrame(rows)
+        frame.attrs["units"] = units
+        return frame
     row: Dict[str, Any] = {}
     for key, value in data.items():
         if _is_band(value):
@@ -499,4 +504,6 @@ def to_dataframe(data: Mapping[str, Any]) -> Any:
             row[key] = ", ".join(str(v) for v in value)
         elif not isinstance(value, Mapping):
             row[column(key)] = shown(key, value)
-    return pd.DataFrame([row])
+    frame = pd.DataFrame([row])
+    frame.attrs["units"] = units
+    return frame
