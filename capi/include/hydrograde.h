@@ -154,7 +154,8 @@
 
 /**
  * The largest number of samples `hg_line_monte_carlo` accepts: the samples are kept in
- * memory (8 bytes each), and a larger request is far more than any check needs.
+ * memory (8 bytes each), and a larger request is far more than any check needs. The
+ * same limit holds in every binding.
  */
 #define HG_MONTE_CARLO_MAX_SAMPLES 10000000
 
@@ -305,6 +306,11 @@
  * Equilateral triangle: `a` = side (m), `b` = 0.
  */
 #define HG_SECTION_TRIANGLE 4
+
+/**
+ * The largest number of threads `hg_set_threads` accepts.
+ */
+#define HG_MAX_THREADS 1024
 
 /**
  * A fluid for line evaluations: opaque; made by `hg_fluid_water`, `hg_fluid_air` or
@@ -2229,6 +2235,27 @@ int32_t hg_turbulent_diameter(int32_t shape,
                               double b,
                               int32_t mode,
                               double *diameter);
+
+/**
+ * Sets the number of threads the batch calls (`hg_darcy_factor_batch`,
+ * `hg_line_system_curve`) may use, 1 to `HG_MAX_THREADS`. With 1 the library never
+ * starts a thread: every call runs on the caller's thread (the setting for an embedding
+ * program that runs its own threads, and for valgrind). The default is read once, at the
+ * first batch, from the environment variable `HYDROGRADE_THREADS` (a whole number ≥ 1),
+ * else it is the number of cores. The threads belong to the library's own pool; results
+ * are the same bit for bit whatever the setting.
+ *
+ * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` for 0 or more than `HG_MAX_THREADS` (the
+ * setting is then unchanged). Thread-safe: a batch running when the setting changes
+ * finishes with the threads it started with.
+ */
+int32_t hg_set_threads(size_t n);
+
+/**
+ * The number of threads the batch calls may use (≥ 1); see `hg_set_threads`.
+ * Thread-safe.
+ */
+size_t hg_threads(void);
 
 /**
  * Converts `value` from unit `from` to unit `to` into `*out`, with the exact factors of

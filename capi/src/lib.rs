@@ -27,6 +27,7 @@ mod pipe;
 mod section;
 /// cbindgen:ignore
 mod sheet;
+mod threads;
 mod units;
 
 pub use correlation::*;
@@ -48,6 +49,7 @@ pub use meta::*;
 pub use pipe::*;
 pub use section::*;
 pub use sheet::*;
+pub use threads::*;
 pub use units::*;
 
 #[cfg(test)]

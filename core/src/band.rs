@@ -390,7 +390,8 @@ fn k95(share: f64) -> f64 {
     if sigma < 1e-6 {
         return 0.95 * a;
     }
-    let h = |t: f64| t * normal_cdf(t) + math::exp(-0.5 * t * t) / (2.0 * std::f64::consts::PI).sqrt();
+    let h =
+        |t: f64| t * normal_cdf(t) + math::exp(-0.5 * t * t) / (2.0 * std::f64::consts::PI).sqrt();
     let p = |q: f64| {
         if a < 1e-9 {
             return 2.0 * normal_cdf(q / sigma) - 1.0;
@@ -570,7 +571,7 @@ pub fn log_uniform(nominal: f64, low: f64, high: f64) -> (f64, f64) {
 pub const MONTE_CARLO_SAMPLES: usize = 20_000;
 
 mod monte;
-pub use monte::{MonteCarlo, monte_carlo};
+pub use monte::{MAX_SAMPLES, MIN_SAMPLES, MonteCarlo, monte_carlo};
 
 #[cfg(test)]
 mod tests {

@@ -477,20 +477,24 @@ impl PyMonteCarlo {
     }
 }
 
-/// Samples ``line``'s required head (m) at ``flow`` (m³/s) ``samples`` times (≥ 100,
-/// default the core's ``MONTE_CARLO_SAMPLES``) from generator ``seed``, with the line's
+/// Samples ``line``'s required head (m) at ``flow`` (m³/s) ``samples`` times (100 to
+/// 10,000,000, default the core's ``MONTE_CARLO_SAMPLES``) from generator ``seed``, with the line's
 /// uncertainty options: a Monte Carlo check (JCGM 101:2008) of the first-order band.
 /// Reproducible: the same seed gives the same numbers. Runs with the GIL released.
 #[pyfunction]
-#[pyo3(signature = (line, fluid, flow, samples = MONTE_CARLO_SAMPLES, seed = 0))]
+#[pyo3(signature = (line, fluid, flow, samples = None, seed = 0))]
 pub fn monte_carlo(
     py: Python<'_>,
     line: &PyLine,
     fluid: &PyFluid,
-    flow: f64,
-    samples: usize,
+    #[pyo3(from_py_with = crate::arrays::si::flow)] flow: f64,
+    samples: Option<&Bound<'_, PyAny>>,
     seed: u64,
 ) -> PyResult<PyMonteCarlo> {
+    let samples = match samples {
+        Some(s) => crate::errors::whole_number("samples", s)?,
+        None => MONTE_CARLO_SAMPLES,
+    };
     let m = py
         .detach(|| core_monte_carlo(&line.inner, &fluid.inner, flow, samples, seed))
         .py()?;

@@ -796,6 +796,28 @@ static void *worker(void *p) {
   return NULL;
 }
 
+/* hg_set_threads / hg_threads: bounds, and the same system curve with one thread and
+ * with several. Under valgrind (HYDROGRADE_THREADS=1) no batch runs with more than one
+ * thread, so no pool is ever started there. */
+static void test_threads(void) {
+  size_t n0 = hg_threads();
+  CHECK(n0 >= 1, "threads default %zu", n0);
+  CHECK(hg_set_threads(0) == HG_ERR_OUT_OF_RANGE && msg_len() > 0, "threads 0");
+  CHECK(hg_set_threads(HG_MAX_THREADS + 1) == HG_ERR_OUT_OF_RANGE, "threads max + 1");
+  CHECK(hg_threads() == n0, "a refused setting leaves the threads");
+  CHECK(hg_set_threads(1) == HG_OK && hg_threads() == 1, "threads 1");
+  if (n0 > 1) {
+    enum { N = 5000 };
+    static double q[N], one[N], many[N];
+    for (int i = 0; i < N; i++) q[i] = 1e-3 * (i - N / 2) / N;
+    CHECK(hg_line_system_curve(lines[0], fluids[0], q, N, one) == HG_OK, "curve, 1 thread");
+    CHECK(hg_set_threads(2) == HG_OK && hg_threads() == 2, "threads 2");
+    CHECK(hg_line_system_curve(lines[0], fluids[0], q, N, many) == HG_OK, "curve, 2 threads");
+    CHECK(memcmp(one, many, sizeof one) == 0, "threads change no bit");
+  }
+  CHECK(hg_set_threads(n0) == HG_OK && hg_threads() == n0, "threads restored");
+}
+
 int main(int argc, char **argv) {
   if (argc < 2) {
     fprintf(stderr, "usage: %s REFERENCE_FILE\n", argv[0]);
@@ -825,6 +847,7 @@ int main(int argc, char **argv) {
   test_handles_and_bad_input();
   test_checks();
   test_result_handle();
+  test_threads();
   pthread_t th[8];
   thread_arg args[8];
   for (int i = 0; i < 8; i++) {

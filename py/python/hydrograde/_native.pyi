@@ -38,10 +38,12 @@ __all__ = [
     "PumpCurve",
     "Rise",
     "Section",
+    "set_threads",
     "Sizing",
     "smallest_pipe",
     "Split",
     "split_flow",
+    "threads",
     "Uncertainty",
     "unit_names",
     "WARNING_NAMES",
@@ -475,8 +477,14 @@ class MonteCarlo:
     def _from_state(cls, state: bytes) -> MonteCarlo: ...
     def __eq__(self, value: object, /) -> bool: ...
 
+def set_threads(n: int) -> None:
+    """Sets the number of threads array calls and system curves may use (1 to 1024)."""
+
+def threads() -> int:
+    """The number of threads array calls and system curves may use."""
+
 def monte_carlo(
-    line: Line, fluid: Fluid, flow: float, samples: int = ..., seed: int = 0
+    line: Line, fluid: Fluid, flow: float, samples: Optional[int] = None, seed: int = 0
 ) -> MonteCarlo: ...
 
 @final
