@@ -9,9 +9,9 @@ root="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
 cd "$root"
 export CARGO_BUILD_JOBS="${CARGO_BUILD_JOBS:-2}"
 cargo build -q --release -p hydrograde-capi
-# The library's SONAME is libhydrograde.so.<major>: give it that name beside the build.
-major="$(sed -n 's/^version = "\([0-9]*\)\..*"/\1/p' Cargo.toml | head -1)"
-ln -sf libhydrograde.so "target/release/libhydrograde.so.$major"
+# The library's SONAME is libhydrograde.so.<abi>: give it that name beside the build.
+abi="$(sed -n 's/^pub const HG_ABI_VERSION: u32 = \([0-9]*\);$/\1/p' capi/src/meta.rs)"
+ln -sf libhydrograde.so "target/release/libhydrograde.so.$abi"
 out="$root/target/capi-demo"
 mkdir -p "$out"
 gcc -std=c11 -Wall -Wextra -Werror -O2 -Icapi/include capi/examples/demo.c -o "$out/demo" \

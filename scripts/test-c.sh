@@ -67,7 +67,7 @@ if [ ! -x "$py" ]; then
 fi
 
 version="$(sed -n 's/^version = "\(.*\)"/\1/p' Cargo.toml | head -1)"
-major="${version%%.*}"
+abi="$(sed -n 's/^pub const HG_ABI_VERSION: u32 = \([0-9]*\);$/\1/p' capi/src/meta.rs)"
 echo "hydrograde C ABI $version"
 
 # ---- build ----
@@ -82,8 +82,8 @@ if [ "${1:-}" = "--regenerate" ]; then
 fi
 run "header is what cbindgen generates (cbindgen --verify)" "${gen[@]}" --verify --output "$header"
 
-run "SONAME is libhydrograde.so.$major" \
-  bash -c "readelf -d target/release/libhydrograde.so | grep -q 'SONAME.*\[libhydrograde.so.$major\]'"
+run "SONAME is libhydrograde.so.$abi (HG_ABI_VERSION)" \
+  bash -c "readelf -d target/release/libhydrograde.so | grep -q 'SONAME.*\[libhydrograde.so.$abi\]'"
 # Every entry point catches panics, so none may be exported without a check: the
 # exported symbols must be exactly the header's functions.
 check_exports() {

@@ -437,7 +437,7 @@ fn lines(out: &mut impl Write) -> io::Result<()> {
                             out,
                             "line_band_source",
                             &[I(sc), I(fi as i64), D(q), I(i as i64)],
-                            Ok(vec![S(&c.source), D(c.share)]),
+                            Ok(vec![S(&c.source.name()), D(c.share)]),
                         )?;
                     }
                     let past = Err(hydrograde::Error::out_of_range(
@@ -521,7 +521,8 @@ fn element_sources(
     for (j, c) in list.iter().enumerate() {
         let mut ins: Vec<Tok> = inputs.iter().map(copy_tok).collect();
         ins.push(I(j as i64));
-        let r = Ok(vec![S(&c.source), D(c.share)]);
+        let name = c.source.name();
+        let r = Ok(vec![S(&name), D(c.share)]);
         emit(out, "line_elem_source", &ins, r)?;
     }
     let mut ins: Vec<Tok> = inputs.iter().map(copy_tok).collect();

@@ -93,42 +93,46 @@ static hg_line *duct_line(void) {
 }
 
 /* The name of the source with the largest share of element `index`'s band ("" when the
- * band has no width), or of the whole line's band when `index` is SIZE_MAX. */
-static void dominant(const hg_line *l, const hg_fluid *f, double q, size_t index, char *buf, size_t len) {
+ * band has no sources), or of the whole line's band when `index` is SIZE_MAX. */
+static void dominant(const hg_line_result *r, size_t index, char *buf, size_t len) {
   size_t need = 0;
   double share = 0.0;
-  int32_t s = index == SIZE_MAX ? hg_line_band_source(l, f, q, 0, buf, len, &need, &share)
-                                : hg_line_element_band_source(l, f, q, index, 0, buf, len, &need, &share);
+  int32_t s = index == SIZE_MAX ? hg_line_result_band_source(r, 0, buf, len, &need, &share)
+                                : hg_line_result_element_band_source(r, index, 0, buf, len, &need, &share);
   if (s == HG_ERR_OUT_OF_RANGE) buf[0] = '\0'; /* a band without sources */
   else check(s, "band source");
 }
 
-static void print_breakdown(const hg_line *l, const hg_fluid *f, double q, hg_line_result *r) {
+/* Evaluates once and prints every element's row from the one result; the totals are
+ * left in *t. */
+static void print_breakdown(const hg_line *l, const hg_fluid *f, double q, hg_line_totals *t) {
   char text[128], band[64];
-  r->struct_size = sizeof *r;
-  TRY(hg_line_evaluate(l, f, q, r));
+  hg_line_result *r = NULL;
+  TRY(hg_line_evaluate(l, f, q, &r));
+  t->struct_size = sizeof *t;
+  TRY(hg_line_result_totals(r, t));
   printf("  %2s  %-22s %6s %9s %8s  %9s  ", "#", "element", "V m/s", "Re", "f or K", "loss m");
   padded("band (k = 2) m", 17, 0);
   printf(" %-22s warnings\n", "largest source");
-  for (size_t i = 0; i < r->element_count; i++) {
+  for (size_t i = 0; i < t->element_count; i++) {
     hg_element_result e;
     e.struct_size = sizeof e;
-    TRY(hg_line_element(l, f, q, i, &e));
+    TRY(hg_line_result_element(r, i, &e));
     char label[64], coef[32] = "", v[32] = "", re[32] = "", source[128], warn[256] = "";
     size_t need;
-    TRY(hg_line_element_label(l, f, q, i, label, sizeof label, &need));
+    TRY(hg_line_result_label(r, i, label, sizeof label, &need));
     int rise = e.static_head != 0.0;
     if (rise) snprintf(label, sizeof label, "rise %+.1f m", e.static_head);
-    if (e.kind == HG_ELEMENT_PIPE) snprintf(coef, sizeof coef, "f %.4f", e.friction_factor);
-    else if (e.kind == HG_ELEMENT_FITTING || e.k != 0.0) snprintf(coef, sizeof coef, "K %.3f", e.k);
-    /* Rises and rated drops have no velocity of their own: the library gives 0. */
-    if (e.velocity != 0.0 || e.reynolds != 0.0) {
+    if (e.has_friction_factor) snprintf(coef, sizeof coef, "f %.4f", e.friction_factor);
+    else if (e.has_k) snprintf(coef, sizeof coef, "K %.3f", e.k);
+    /* Rises and rated drops have no velocity of their own. */
+    if (e.has_velocity) {
       snprintf(v, sizeof v, "%.2f", e.velocity);
       snprintf(re, sizeof re, "%.0f", e.reynolds);
     }
     if (rise) band[0] = '\0';
     else band_text(band, sizeof band, e.head_loss_low, e.head_loss_high);
-    dominant(l, f, q, i, source, sizeof source);
+    dominant(r, i, source, sizeof source);
     for (uint32_t bit = 1; bit != 0; bit <<= 1) {
       const char *name = (e.warnings & bit) ? hg_warning_name(bit) : NULL;
       if (!name) continue;
@@ -139,20 +143,21 @@ static void print_breakdown(const hg_line *l, const hg_fluid *f, double q, hg_li
     padded(band, 17, 0);
     printf(" %-22s %s\n", source, warn);
   }
-  band_text(band, sizeof band, r->head_loss_low, r->head_loss_high);
-  printf("  friction + minor loss %.3f m (%s), pressure loss %.1f kPa, static head %.2f m\n", r->head_loss, band,
-         r->pressure_loss / 1e3, r->static_head);
-  band_text(band, sizeof band, r->required_head_low, r->required_head_high);
-  printf("  required head %.3f m, band %s m\n", r->required_head, band);
+  band_text(band, sizeof band, t->head_loss_low, t->head_loss_high);
+  printf("  friction + minor loss %.3f m (%s), pressure loss %.1f kPa, static head %.2f m\n", t->head_loss, band,
+         t->pressure_loss / 1e3, t->static_head);
+  band_text(band, sizeof band, t->required_head_low, t->required_head_high);
+  printf("  required head %.3f m, band %s m\n", t->required_head, band);
   /* The required-head band is the loss band shifted by the static head: same sources. */
   printf("  band sources: ");
-  for (size_t k = 0; k < 3; k++) {
+  for (size_t k = 0; k < 3 && k < t->band_source_count; k++) {
     size_t need;
     double share;
-    if (hg_line_band_source(l, f, q, k, text, sizeof text, &need, &share) != HG_OK) break;
+    TRY(hg_line_result_band_source(r, k, text, sizeof text, &need, &share));
     printf("%s%s %.0f %%", k ? ", " : "", text, 100.0 * share);
   }
   printf("\n");
+  hg_line_result_free(r);
 }
 
 /* The invented pump: flow L/s against head m. */
@@ -164,7 +169,7 @@ static void orchard(void) {
   hg_fluid *water = NULL;
   TRY(hg_fluid_water(285.15, 101325.0, &water));
   hg_line *line = orchard_line();
-  hg_line_result r;
+  hg_line_totals r;
   print_breakdown(line, water, 6.0e-3, &r);
 
   printf("\n  system curve against the pump\n");
@@ -182,7 +187,10 @@ static void orchard(void) {
   /* The flow band at the operating point is the head band divided by the slope
    * difference of the two curves, so its largest source is the line's at that flow. */
   char source[128];
-  dominant(line, water, q, SIZE_MAX, source, sizeof source);
+  hg_line_result *at_q = NULL;
+  TRY(hg_line_evaluate(line, water, q, &at_q));
+  dominant(at_q, SIZE_MAX, source, sizeof source);
+  hg_line_result_free(at_q);
   printf("  operating point: %.2f L/s at %.2f m (flow band %.2f … %.2f L/s, largest source: %s)\n", q * 1e3, h,
          q_lo * 1e3, q_hi * 1e3, source[0] ? source : "-");
 
@@ -208,7 +216,7 @@ static void duct(void) {
   hg_fluid *air = NULL;
   TRY(hg_fluid_air(303.15, 101325.0, &air));
   hg_line *line = duct_line();
-  hg_line_result r;
+  hg_line_totals r;
   print_breakdown(line, air, 0.9, &r);
   printf("  fan must supply %.0f Pa (%.0f … %.0f Pa) of pressure loss\n", r.pressure_loss, r.pressure_loss_low,
          r.pressure_loss_high);
@@ -222,16 +230,21 @@ static void numbers(void) {
   TRY(hg_fluid_water(285.15, 101325.0, &water));
   TRY(hg_fluid_air(303.15, 101325.0, &air));
   hg_line *line = orchard_line(), *dl = duct_line();
-  hg_line_result r, d;
+  hg_line_totals r, d;
   r.struct_size = sizeof r, d.struct_size = sizeof d;
-  TRY(hg_line_evaluate(line, water, 6.0e-3, &r));
+  hg_line_result *res = NULL;
+  TRY(hg_line_evaluate(line, water, 6.0e-3, &res));
+  TRY(hg_line_result_totals(res, &r));
+  hg_line_result_free(res);
   double q, h, x[4], back, back_lo, back_hi;
   TRY(hg_line_operating_point(line, water, pump_q, pump_h, 6, &q, &h, &x[0], &x[1], &x[2], &x[3]));
   TRY(hg_line_flow_for_head(line, water, 0.0, &back, &back_lo, &back_hi));
   hg_sizing z;
   z.struct_size = sizeof z;
   TRY(hg_line_size(line, water, 6.0e-3, HG_LIMIT_VELOCITY, 2.0, "pvc", "40", &z));
-  TRY(hg_line_evaluate(dl, air, 0.9, &d));
+  TRY(hg_line_evaluate(dl, air, 0.9, &res));
+  TRY(hg_line_result_totals(res, &d));
+  hg_line_result_free(res);
   const struct {
     const char *name;
     double value;

@@ -4,16 +4,29 @@
  * Conventions
  *  - Every function that can fail returns an int32_t status: HG_OK (0) or one of the
  *    HG_ERR_* codes below, whose numbers never change meaning. Results come back through
- *    out-pointers, which are left untouched on failure. hg_last_error() gives the calling
- *    thread's message for its last failed call, hg_status_name() names a code.
+ *    out-pointers, which are left untouched on failure, with one exception: a call that
+ *    fills a text buffer and returns HG_ERR_BUFFER_TOO_SMALL still stores the needed
+ *    length and a cut, NUL-terminated copy (like snprintf), and nothing else.
+ *    hg_last_error() gives the calling thread's message for its last failed call,
+ *    hg_status_name() names a code.
  *  - Units are SI everywhere: m, s, kg, Pa, K, m^3/s, Pa*s, kg/m^3. Flow is signed.
  *  - NaN and +-inf are always rejected (HG_ERR_NOT_FINITE); NULL pointers give
  *    HG_ERR_NULL_POINTER; array lengths of 0 give HG_ERR_INVALID. No call aborts the
  *    process on bad input.
  *  - Structs that may grow start with size_t struct_size: set it to sizeof the struct.
+ *    Fields are only ever added at the end, and the size of a struct's first release
+ *    stays accepted, so a program compiled against an older header keeps working.
+ *  - Handles (hg_fluid, hg_line, hg_line_result) are opaque, made by one call and
+ *    released by their _free function; _free(NULL) does nothing.
+ *  - ABI: HG_ABI_VERSION, the number in the SONAME libhydrograde.so.<abi>. While the
+ *    library is 0.x it counts incompatible changes on its own. ABI 1: hg_line_evaluate
+ *    returns an hg_line_result handle (hg_line_result_* accessors); the accessors that
+ *    evaluated the line again are gone.
  *  - Thread-safety: every function may be called from any number of threads at once,
  *    except that one hg_line must not be changed (hg_line_add_*, hg_line_free) while
  *    another thread uses it. Reading a line from several threads at once is safe.
+ *  - The hydro_* exports of the DLL (stdcall on 32-bit Windows, ANSI text) serve the
+ *    spreadsheet module capi/excel/hydrograde.bas and are not declared here.
  *
  * Safety: results are engineering estimates with stated uncertainty (friction
  * correlations are good to about +-10 %). Designs must be checked by a competent engineer
@@ -147,26 +160,6 @@
 #define HG_MONTE_CARLO_MAX_SAMPLES 10000000
 
 /**
- * A straight run (pipe or duct).
- */
-#define HG_ELEMENT_PIPE 0
-
-/**
- * A fitting (minor loss).
- */
-#define HG_ELEMENT_FITTING 1
-
-/**
- * An elevation change.
- */
-#define HG_ELEMENT_RISE 2
-
-/**
- * Rated equipment.
- */
-#define HG_ELEMENT_EQUIPMENT 3
-
-/**
  * A sharp-edged entrance from a large space (`r_over_d` must be 0).
  */
 #define HG_ENTRANCE_SHARP 0
@@ -191,6 +184,31 @@
  * 1976; Jones & Leung 1981).
  */
 #define HG_TURBULENT_DIAMETER_LAMINAR_EQUIVALENT 1
+
+/**
+ * A straight run (pipe or duct).
+ */
+#define HG_ELEMENT_PIPE 0
+
+/**
+ * A fitting (minor loss).
+ */
+#define HG_ELEMENT_FITTING 1
+
+/**
+ * An elevation change.
+ */
+#define HG_ELEMENT_RISE 2
+
+/**
+ * Rated equipment.
+ */
+#define HG_ELEMENT_EQUIPMENT 3
+
+/**
+ * The `regime` of an element that has none (every element but a pipe).
+ */
+#define HG_REGIME_NONE -1
 
 /**
  * Sizing limit: the line's pressure loss (friction + minor, without rises), Pa.
@@ -218,11 +236,15 @@
 #define HG_VERSION_PATCH 0
 
 /**
- * ABI version: the number in the shared library's SONAME (`libhydrograde.so.<abi>`),
- * equal to the major version. A program compiled against this header should check
- * `hg_abi_version() == HG_ABI_VERSION` at start-up.
+ * ABI version: the number in the shared library's SONAME (`libhydrograde.so.<abi>`).
+ * While the library is 0.x it counts the incompatible changes of the C ABI on its own
+ * (from 1.0 on it will equal the major version). ABI 1 (library 0.1): `hg_line_evaluate`
+ * returns an `hg_line_result` handle read by the `hg_line_result_*` accessors, and the
+ * accessors that evaluated the line again (`hg_line_element`, `hg_line_element_label`,
+ * `hg_line_band_source`, `hg_line_element_band_source`) are gone. A program compiled
+ * against this header should check `hg_abi_version() == HG_ABI_VERSION` at start-up.
  */
-#define HG_ABI_VERSION 0
+#define HG_ABI_VERSION 1
 
 /**
  * The Reynolds number lies outside the published range of the correlation.
@@ -304,6 +326,14 @@ typedef struct hg_fluid hg_fluid;
  * evaluate one line at once.
  */
 typedef struct hg_line hg_line;
+
+/**
+ * A line evaluated at one flow: opaque. Made by `hg_line_evaluate` or
+ * `hg_line_evaluate_at`, released by `hg_line_result_free`. It owns a copy of every
+ * number, so it stays valid after the line and the fluid are freed. Reading it is
+ * thread-safe.
+ */
+typedef struct hg_line_result hg_line_result;
 
 /**
  * Options of `hg_darcy_factor_opts`. Fill it with `hg_friction_options_default`, then
@@ -399,167 +429,6 @@ typedef struct hg_monte_carlo {
 } hg_monte_carlo;
 
 /**
- * A line evaluated at one flow. Set `struct_size` to `sizeof(hg_line_result)` before the
- * call; fields added in later versions go after the existing ones, so an old caller's
- * smaller struct keeps working. Heads are in m of the flowing fluid. The `*_low` and
- * `*_high` fields bound the expanded uncertainty (coverage factor k = 2).
- */
-typedef struct hg_line_result {
-  /**
-   * Size of this struct in bytes, set by the caller.
-   */
-  size_t struct_size;
-  /**
-   * The flow, m³/s (signed).
-   */
-  double flow;
-  /**
-   * Friction plus minor losses, m (signed with the flow).
-   */
-  double head_loss;
-  /**
-   * ρ·g·head_loss, Pa.
-   */
-  double pressure_loss;
-  /**
-   * Sum of the rises, m.
-   */
-  double static_head;
-  /**
-   * head_loss + static_head, m.
-   */
-  double required_head;
-  /**
-   * d(required_head)/dQ, s/m².
-   */
-  double drequired_head_dflow;
-  /**
-   * Density the heads refer to, kg/m³ (the mean density for a gas).
-   */
-  double density;
-  /**
-   * Static pressure at the inlet, Pa absolute (0 when `has_pressures` is 0).
-   */
-  double inlet_pressure;
-  /**
-   * Static pressure at the outlet, Pa absolute (0 when `has_pressures` is 0).
-   */
-  double outlet_pressure;
-  /**
-   * 1 when the inlet pressure is known (set, or the gas's own), else 0.
-   */
-  int32_t has_pressures;
-  /**
-   * Warning bits of the whole line, `HG_WARN_*`.
-   */
-  uint32_t warnings;
-  /**
-   * Number of elements (results by index through `hg_line_element`).
-   */
-  size_t element_count;
-  /**
-   * Lower end of the head-loss band, m.
-   */
-  double head_loss_low;
-  /**
-   * Upper end of the head-loss band, m.
-   */
-  double head_loss_high;
-  /**
-   * Lower end of the pressure-loss band, Pa.
-   */
-  double pressure_loss_low;
-  /**
-   * Upper end of the pressure-loss band, Pa.
-   */
-  double pressure_loss_high;
-  /**
-   * Lower end of the required-head band, m.
-   */
-  double required_head_low;
-  /**
-   * Upper end of the required-head band, m.
-   */
-  double required_head_high;
-} hg_line_result;
-
-/**
- * One element's share of a line evaluated at one flow. Set `struct_size` to
- * `sizeof(hg_element_result)` before the call. Quantities an element does not have
- * (a rise's velocity, a fitting's friction factor) are 0.
- */
-typedef struct hg_element_result {
-  /**
-   * Size of this struct in bytes, set by the caller.
-   */
-  size_t struct_size;
-  /**
-   * What the element is, `HG_ELEMENT_*`.
-   */
-  int32_t kind;
-  /**
-   * Flow regime of a pipe, `HG_REGIME_*`; -1 for other elements.
-   */
-  int32_t regime;
-  /**
-   * Mean velocity in the element's bore, m/s (signed).
-   */
-  double velocity;
-  /**
-   * Reynolds number in that bore.
-   */
-  double reynolds;
-  /**
-   * Darcy friction factor (pipes).
-   */
-  double friction_factor;
-  /**
-   * Resistance coefficient K at this Reynolds number (fittings, fixed-K equipment).
-   */
-  double k;
-  /**
-   * Head loss, m (signed with the flow; 0 for rises).
-   */
-  double head_loss;
-  /**
-   * d(head loss)/dQ, s/m².
-   */
-  double dhead_dflow;
-  /**
-   * Elevation change, m (rises).
-   */
-  double static_head;
-  /**
-   * Static pressure at the element's outlet, Pa absolute (0 without an inlet pressure).
-   */
-  double pressure_out;
-  /**
-   * Warning bits of this element, `HG_WARN_*`.
-   */
-  uint32_t warnings;
-  /**
-   * 1 when `pressure_out` is known, else 0.
-   */
-  int32_t has_pressure;
-  /**
-   * Lower end of the head-loss band, m.
-   */
-  double head_loss_low;
-  /**
-   * Upper end of the head-loss band, m.
-   */
-  double head_loss_high;
-  /**
-   * Lower end of the friction-factor band (pipes; else 0).
-   */
-  double friction_factor_low;
-  /**
-   * Upper end of the friction-factor band (pipes; else 0).
-   */
-  double friction_factor_high;
-} hg_element_result;
-
-/**
  * Which uncertainty sources the bands of a line include, and their sizes (relative
  * standard uncertainties, k = 1). Fill it with `hg_uncertainty_options_default`.
  */
@@ -609,6 +478,198 @@ typedef struct hg_uncertainty_options {
    */
   double diameter;
 } hg_uncertainty_options;
+
+/**
+ * The totals of a line evaluated at one flow, from `hg_line_result_totals`. Set
+ * `struct_size` to `sizeof(hg_line_totals)` before the call; fields added in later
+ * versions go after the existing ones, so an old caller's smaller struct keeps working.
+ * Heads are in m of the flowing fluid. The `*_low` and `*_high` fields bound the
+ * expanded uncertainty (coverage factor k = 2).
+ */
+typedef struct hg_line_totals {
+  /**
+   * Size of this struct in bytes, set by the caller.
+   */
+  size_t struct_size;
+  /**
+   * The flow, m³/s (signed).
+   */
+  double flow;
+  /**
+   * Friction plus minor losses, m (signed with the flow).
+   */
+  double head_loss;
+  /**
+   * ρ·g·head_loss, Pa.
+   */
+  double pressure_loss;
+  /**
+   * Sum of the rises, m.
+   */
+  double static_head;
+  /**
+   * head_loss + static_head, m.
+   */
+  double required_head;
+  /**
+   * d(required_head)/dQ, s/m².
+   */
+  double drequired_head_dflow;
+  /**
+   * Density the heads refer to, kg/m³ (the mean density for a gas).
+   */
+  double density;
+  /**
+   * Static pressure at the inlet, Pa absolute; meaningful only when `has_pressures`
+   * is 1 (else 0).
+   */
+  double inlet_pressure;
+  /**
+   * Static pressure at the outlet, Pa absolute; meaningful only when `has_pressures`
+   * is 1 (else 0).
+   */
+  double outlet_pressure;
+  /**
+   * 1 when the inlet pressure is known (set, or the gas's own), else 0.
+   */
+  int32_t has_pressures;
+  /**
+   * Warning bits of the whole line, `HG_WARN_*`.
+   */
+  uint32_t warnings;
+  /**
+   * Number of elements (rows through `hg_line_result_element`).
+   */
+  size_t element_count;
+  /**
+   * Number of sources of the head-loss band (through `hg_line_result_band_source`);
+   * 0 for a band of zero width.
+   */
+  size_t band_source_count;
+  /**
+   * Lower end of the head-loss band, m.
+   */
+  double head_loss_low;
+  /**
+   * Upper end of the head-loss band, m.
+   */
+  double head_loss_high;
+  /**
+   * Lower end of the pressure-loss band, Pa.
+   */
+  double pressure_loss_low;
+  /**
+   * Upper end of the pressure-loss band, Pa.
+   */
+  double pressure_loss_high;
+  /**
+   * Lower end of the required-head band, m.
+   */
+  double required_head_low;
+  /**
+   * Upper end of the required-head band, m.
+   */
+  double required_head_high;
+} hg_line_totals;
+
+/**
+ * One element's row of a line evaluated at one flow, from `hg_line_result_element`. Set
+ * `struct_size` to `sizeof(hg_element_result)` before the call. A quantity the element
+ * does not have (a rise's velocity, a pipe's K) has its `has_*` flag at 0 and the value
+ * 0, which is then not a value.
+ */
+typedef struct hg_element_result {
+  /**
+   * Size of this struct in bytes, set by the caller.
+   */
+  size_t struct_size;
+  /**
+   * What the element is, `HG_ELEMENT_*`.
+   */
+  int32_t kind;
+  /**
+   * Flow regime of a pipe, `HG_REGIME_*`; `HG_REGIME_NONE` for other elements.
+   */
+  int32_t regime;
+  /**
+   * Mean velocity in the element's bore, m/s (signed); only when `has_velocity`.
+   */
+  double velocity;
+  /**
+   * Reynolds number in that bore; only when `has_velocity`.
+   */
+  double reynolds;
+  /**
+   * Darcy friction factor; only when `has_friction_factor` (pipes).
+   */
+  double friction_factor;
+  /**
+   * Resistance coefficient K at this Reynolds number; only when `has_k` (fittings,
+   * fixed-K equipment).
+   */
+  double k;
+  /**
+   * Head loss, m (signed with the flow; 0 for rises).
+   */
+  double head_loss;
+  /**
+   * d(head loss)/dQ, s/m².
+   */
+  double dhead_dflow;
+  /**
+   * Elevation change, m (rises; 0 for the others).
+   */
+  double static_head;
+  /**
+   * Static pressure at the element's outlet, Pa absolute; only when `has_pressure`.
+   */
+  double pressure_out;
+  /**
+   * Warning bits of this element, `HG_WARN_*`.
+   */
+  uint32_t warnings;
+  /**
+   * 1 when `pressure_out` is known, else 0.
+   */
+  int32_t has_pressure;
+  /**
+   * Lower end of the head-loss band, m.
+   */
+  double head_loss_low;
+  /**
+   * Upper end of the head-loss band, m.
+   */
+  double head_loss_high;
+  /**
+   * Lower end of the friction-factor band; only when `has_friction_factor`.
+   */
+  double friction_factor_low;
+  /**
+   * Upper end of the friction-factor band; only when `has_friction_factor`.
+   */
+  double friction_factor_high;
+  /**
+   * 1 when `velocity` and `reynolds` apply (every element but a rise), else 0.
+   */
+  int32_t has_velocity;
+  /**
+   * 1 when `friction_factor` and its band apply (pipes), else 0.
+   */
+  int32_t has_friction_factor;
+  /**
+   * 1 when `k` applies (fittings, fixed-K equipment), else 0.
+   */
+  int32_t has_k;
+  /**
+   * Reserved, 0 (keeps the next field aligned alike on every platform).
+   */
+  int32_t reserved;
+  /**
+   * Number of sources of this element's head-loss band (through
+   * `hg_line_result_element_band_source`); 0 for a band of zero width (a rise).
+   */
+  size_t band_source_count;
+} hg_element_result;
 
 /**
  * A standard size chosen by `hg_line_size`: zero everywhere when `found` is 0.
@@ -1282,106 +1343,6 @@ int32_t hg_line_monte_carlo(const struct hg_line *line,
                             struct hg_monte_carlo *out);
 
 /**
- * Evaluates `line` as `hg_line_evaluate`, but with the static pressure at the inlet
- * given for this call: `inlet_pressure` in Pa absolute (> 0), or 0 for none (a gas then
- * starts at its own pressure). The line's own setting (`hg_line_set_inlet_pressure`) is
- * not used and not changed, so threads may evaluate one line at different pressures.
- *
- * Returns the codes of `hg_line_evaluate`, and `HG_ERR_NOT_FINITE` or
- * `HG_ERR_OUT_OF_RANGE` for a bad `inlet_pressure`. Thread-safe (the line is only read).
- *
- * # Safety
- * As `hg_line_evaluate`.
- */
-int32_t hg_line_evaluate_at(const struct hg_line *line,
-                            const struct hg_fluid *fluid,
-                            double flow,
-                            double inlet_pressure,
-                            struct hg_line_result *out);
-
-/**
- * Source number `source` (0-based, largest share first) of the head-loss band of element
- * `index` (0-based, route order) of `line` for `fluid` at `flow` (m³/s), as
- * `hg_line_band_source` gives them for the whole line: the name copied into `buf` (at
- * most `len - 1` bytes and a NUL; full length in `*needed`) and its share of the
- * variance (0…1) in `*share`. Source 0 dominates the element's band.
- *
- * Returns `HG_OK`; the codes of `hg_line_evaluate`; `HG_ERR_OUT_OF_RANGE` when `index`
- * is not an element, or `source` is past the last source (a rise, and any band of zero
- * width, has none); `HG_ERR_BUFFER_TOO_SMALL` when the name did not fit (the share is
- * still written); `HG_ERR_NULL_POINTER`. Thread-safe (the line is only read).
- *
- * # Safety
- * `line` and `fluid` must be NULL or live handles; `buf` NULL or valid for `len` bytes;
- * `needed` and `share` NULL or writable.
- */
-int32_t hg_line_element_band_source(const struct hg_line *line,
-                                    const struct hg_fluid *fluid,
-                                    double flow,
-                                    size_t index,
-                                    size_t source,
-                                    char *buf,
-                                    size_t len,
-                                    size_t *needed,
-                                    double *share);
-
-/**
- * Evaluates `line` for `fluid` at signed volumetric flow `flow` (m³/s; at inlet
- * conditions for a gas) into `*out`: head loss, pressure loss, static and required
- * head with its derivative, pressures, warnings and uncertainty bands.
- *
- * Returns `HG_OK`; `HG_ERR_NOT_FINITE` for the flow; `HG_ERR_INVALID` for a line that
- * cannot be built (no elements, a fitting with no bore to refer to) or a `struct_size`
- * too small; `HG_ERR_NO_SOLUTION` for transitional flow with `HG_TRANSITION_REFUSE`;
- * `HG_ERR_OUT_OF_RANGE` for a gas losing more than 40 % of its inlet pressure;
- * `HG_ERR_NULL_POINTER`. Thread-safe (the line is only read).
- *
- * # Safety
- * `line` and `fluid` must be NULL or live handles; `out` NULL or a writable
- * `hg_line_result` of `out->struct_size` bytes.
- */
-int32_t hg_line_evaluate(const struct hg_line *line,
-                         const struct hg_fluid *fluid,
-                         double flow,
-                         struct hg_line_result *out);
-
-/**
- * The result of element `index` (0-based, route order) of `line` evaluated for `fluid`
- * at `flow` (m³/s), into `*out` (set `out->struct_size` first).
- *
- * Returns as `hg_line_evaluate`, and `HG_ERR_OUT_OF_RANGE` when `index` is not less
- * than the number of elements. Thread-safe (the line is only read).
- *
- * # Safety
- * As `hg_line_evaluate`, with `out` a writable `hg_element_result`.
- */
-int32_t hg_line_element(const struct hg_line *line,
-                        const struct hg_fluid *fluid,
-                        double flow,
-                        size_t index,
-                        struct hg_element_result *out);
-
-/**
- * Copies the label of element `index` ("pipe", "rise", the fitting's or equipment's
- * name) into `buf` (at most `len - 1` bytes and a NUL) and stores its full length in
- * `*needed`. The label does not depend on the flow, which is needed only to build the
- * result: pass any finite flow.
- *
- * Returns as `hg_line_element`, and `HG_ERR_BUFFER_TOO_SMALL` when the label did not fit
- * (the cut copy is still written). Thread-safe (the line is only read).
- *
- * # Safety
- * As `hg_line_evaluate`; `buf` NULL or valid for `len` bytes; `needed` NULL or writable.
- */
-int32_t hg_line_element_label(const struct hg_line *line,
-                              const struct hg_fluid *fluid,
-                              double flow,
-                              size_t index,
-                              char *buf,
-                              size_t len,
-                              size_t *needed);
-
-/**
  * The flow `*flow` (m³/s, signed: negative when `head` is below the static head) at
  * which the line's required head equals `head` (m of the flowing fluid), with the ends
  * `*flow_low`, `*flow_high` of its uncertainty band (k = 2).
@@ -1669,29 +1630,150 @@ int32_t hg_line_set_uncertainty(struct hg_line *line,
                                 const struct hg_uncertainty_options *opts);
 
 /**
- * Source number `index` (0-based, largest share first) of the head-loss band of `line`
- * for `fluid` at `flow` (m³/s): its name copied into `buf` (e.g. "friction model",
- * "roughness", "K of gate_valve (element 2)"; at most `len - 1` bytes and a NUL; full
- * length in `*needed`) and its share of the variance (0…1) in `*share`. Index 0 is the
- * input that dominates the band.
+ * Evaluates `line` for `fluid` at signed volumetric flow `flow` (m³/s; at inlet
+ * conditions for a gas) and stores the result in `*out`: a new handle to read with
+ * `hg_line_result_totals`, `hg_line_result_element`, `hg_line_result_label` and the
+ * band-source accessors, then free with `hg_line_result_free`. The line is evaluated
+ * once; reading the result computes nothing.
  *
- * Returns `HG_OK`; the codes of `hg_line_evaluate`; `HG_ERR_OUT_OF_RANGE` when `index`
- * is past the last source (a band of zero width, as at zero flow, has none);
- * `HG_ERR_BUFFER_TOO_SMALL` when the name did not fit (the share is still written);
- * `HG_ERR_NULL_POINTER`. Thread-safe (the line is only read).
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE` for the flow; `HG_ERR_INVALID` for a line that
+ * cannot be built (no elements, a fitting with no bore to refer to);
+ * `HG_ERR_NO_SOLUTION` for transitional flow with `HG_TRANSITION_REFUSE`;
+ * `HG_ERR_OUT_OF_RANGE` for a gas losing more than 40 % of its inlet pressure;
+ * `HG_ERR_NULL_POINTER`. On failure `*out` is left untouched. Thread-safe (the line is
+ * only read).
  *
  * # Safety
- * `line` and `fluid` must be NULL or live handles; `buf` NULL or valid for `len` bytes;
- * `needed` and `share` NULL or writable.
+ * `line` and `fluid` must be NULL or live handles; `out` NULL or a writable
+ * `hg_line_result *`.
  */
-int32_t hg_line_band_source(const struct hg_line *line,
+int32_t hg_line_evaluate(const struct hg_line *line,
+                         const struct hg_fluid *fluid,
+                         double flow,
+                         struct hg_line_result **out);
+
+/**
+ * Evaluates `line` as `hg_line_evaluate`, but with the static pressure at the inlet
+ * given for this call: `inlet_pressure` in Pa absolute (> 0), or 0 for none (a gas then
+ * starts at its own pressure). The line's own setting (`hg_line_set_inlet_pressure`) is
+ * not used and not changed, so threads may evaluate one line at different pressures.
+ *
+ * Returns the codes of `hg_line_evaluate`, and `HG_ERR_NOT_FINITE` or
+ * `HG_ERR_OUT_OF_RANGE` for a bad `inlet_pressure`. On failure `*out` is left
+ * untouched. Thread-safe (the line is only read).
+ *
+ * # Safety
+ * As `hg_line_evaluate`.
+ */
+int32_t hg_line_evaluate_at(const struct hg_line *line,
                             const struct hg_fluid *fluid,
                             double flow,
-                            size_t index,
-                            char *buf,
-                            size_t len,
-                            size_t *needed,
-                            double *share);
+                            double inlet_pressure,
+                            struct hg_line_result **out);
+
+/**
+ * Releases a result. NULL is accepted and ignored.
+ *
+ * # Safety
+ * `result` must be NULL or a live handle from `hg_line_evaluate*`, not used afterwards.
+ */
+void hg_line_result_free(struct hg_line_result *result);
+
+/**
+ * The totals of `result` into `*out` (set `out->struct_size` first): flow, losses,
+ * heads with their derivative and bands, pressures, warnings and the counts of elements
+ * and band sources.
+ *
+ * Returns `HG_OK`; `HG_ERR_INVALID` for a `struct_size` too small;
+ * `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * `result` must be NULL or a live handle; `out` NULL or a writable `hg_line_totals` of
+ * `out->struct_size` bytes.
+ */
+int32_t hg_line_result_totals(const struct hg_line_result *result,
+                              struct hg_line_totals *out);
+
+/**
+ * The row of element `index` (0-based, route order) of `result` into `*out` (set
+ * `out->struct_size` first).
+ *
+ * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` when `index` is not less than the number of
+ * elements; `HG_ERR_INVALID` for a `struct_size` too small; `HG_ERR_NULL_POINTER`.
+ * Thread-safe.
+ *
+ * # Safety
+ * `result` must be NULL or a live handle; `out` NULL or a writable `hg_element_result`
+ * of `out->struct_size` bytes.
+ */
+int32_t hg_line_result_element(const struct hg_line_result *result,
+                               size_t index,
+                               struct hg_element_result *out);
+
+/**
+ * Copies the label of element `index` of `result` ("pipe", "rise", the fitting's or
+ * equipment's name) into `buf` (at most `len - 1` bytes and a NUL; `buf` may be NULL
+ * when `len` is 0) and stores its full length in `*needed`.
+ *
+ * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` when `index` is not an element;
+ * `HG_ERR_BUFFER_TOO_SMALL` when the label did not fit (`*needed` and the cut copy are
+ * still written); `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * `result` must be NULL or a live handle; `buf` NULL or valid for `len` bytes; `needed`
+ * NULL or writable.
+ */
+int32_t hg_line_result_label(const struct hg_line_result *result,
+                             size_t index,
+                             char *buf,
+                             size_t len,
+                             size_t *needed);
+
+/**
+ * Source number `source` (0-based, largest share first; fewer than
+ * `hg_line_totals.band_source_count`) of the head-loss band of the whole line in
+ * `result`: its name copied into `buf` (e.g. "friction model", "roughness",
+ * "K of gate_valve (element 2)"; at most `len - 1` bytes and a NUL; full length in
+ * `*needed`) and its share of the variance (0…1) in `*share`. Source 0 is the input
+ * that dominates the band.
+ *
+ * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` when `source` is past the last source (a band
+ * of zero width, as at zero flow, has none); `HG_ERR_BUFFER_TOO_SMALL` when the name did
+ * not fit (`*needed` and the cut copy are written, `*share` is not);
+ * `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * `result` must be NULL or a live handle; `buf` NULL or valid for `len` bytes; `needed`
+ * and `share` NULL or writable.
+ */
+int32_t hg_line_result_band_source(const struct hg_line_result *result,
+                                   size_t source,
+                                   char *buf,
+                                   size_t len,
+                                   size_t *needed,
+                                   double *share);
+
+/**
+ * Source number `source` (0-based, largest share first; fewer than
+ * `hg_element_result.band_source_count`) of the head-loss band of element `index`
+ * (0-based, route order) of `result`, as `hg_line_result_band_source` gives them for
+ * the whole line.
+ *
+ * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` when `index` is not an element or `source` is
+ * past the last source (a rise, and any band of zero width, has none);
+ * `HG_ERR_BUFFER_TOO_SMALL` when the name did not fit (`*needed` and the cut copy are
+ * written, `*share` is not); `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * As `hg_line_result_band_source`.
+ */
+int32_t hg_line_result_element_band_source(const struct hg_line_result *result,
+                                           size_t index,
+                                           size_t source,
+                                           char *buf,
+                                           size_t len,
+                                           size_t *needed,
+                                           double *share);
 
 /**
  * The flow `*flow` (m³/s) and head `*head` (m) where the pump curve given by `n` points

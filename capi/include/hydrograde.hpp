@@ -163,6 +163,27 @@ inline std::vector<std::string> names(F get) {
   }
   return out;
 }
+
+/// A string from a call that fills a buffer like snprintf (asked twice: length, text).
+template <class F>
+inline std::string text(F get) {
+  std::size_t need = 0;
+  int32_t s = get(nullptr, 0, &need);
+  if (s != HG_ERR_BUFFER_TOO_SMALL) check(s);
+  std::string out(need, '\0');
+  check(get(&out[0], need + 1, &need));
+  return out;
+}
+
+/// A band source (name and share) from a call that fills a buffer like snprintf.
+template <class F>
+inline std::pair<std::string, double> source(F get) {
+  double share = 0.0;
+  std::string name = text([&](char* buf, std::size_t len, std::size_t* need) {
+    return get(buf, len, need, &share);
+  });
+  return {name, share};
+}
 }  // namespace detail
 
 /// Every unit name hg_convert accepts.
@@ -448,6 +469,72 @@ struct operating_point {
   double flow, head, flow_low, flow_high, head_low, head_high;
 };
 
+/// A line evaluated at one flow (owns an hg_line_result; movable, not copyable). Every
+/// accessor reads the stored result; nothing is evaluated again. It stays valid after
+/// the line and fluid it came from are gone.
+class line_result {
+ public:
+  line_result(line_result&& o) noexcept : r_(o.r_) { o.r_ = nullptr; }
+  line_result& operator=(line_result&& o) noexcept {
+    std::swap(r_, o.r_);
+    return *this;
+  }
+  line_result(const line_result&) = delete;
+  line_result& operator=(const line_result&) = delete;
+  ~line_result() { hg_line_result_free(r_); }
+
+  /// Flow, losses, heads with bands, pressures, warnings and counts.
+  hg_line_totals totals() const {
+    hg_line_totals t{};
+    t.struct_size = sizeof t;
+    check(hg_line_result_totals(r_, &t));
+    return t;
+  }
+  /// The number of elements.
+  std::size_t size() const { return totals().element_count; }
+  /// The row of element `index` (route order); quantities that do not apply have their
+  /// has_* flag at 0.
+  hg_element_result element(std::size_t index) const {
+    hg_element_result e{};
+    e.struct_size = sizeof e;
+    check(hg_line_result_element(r_, index, &e));
+    return e;
+  }
+  /// The label of element `index` ("pipe", "rise", a fitting's or equipment's name).
+  std::string label(std::size_t index) const {
+    return detail::text([&](char* buf, std::size_t len, std::size_t* need) {
+      return hg_line_result_label(r_, index, buf, len, need);
+    });
+  }
+  /// The sources of the line's head-loss band, largest share first.
+  std::vector<std::pair<std::string, double>> band_sources() const {
+    std::vector<std::pair<std::string, double>> out;
+    std::size_t n = totals().band_source_count;
+    for (std::size_t k = 0; k < n; ++k)
+      out.push_back(detail::source([&](char* buf, std::size_t len, std::size_t* need, double* share) {
+        return hg_line_result_band_source(r_, k, buf, len, need, share);
+      }));
+    return out;
+  }
+  /// The sources of element `index`'s head-loss band, largest share first.
+  std::vector<std::pair<std::string, double>> element_band_sources(std::size_t index) const {
+    std::vector<std::pair<std::string, double>> out;
+    std::size_t n = element(index).band_source_count;
+    for (std::size_t k = 0; k < n; ++k)
+      out.push_back(detail::source([&](char* buf, std::size_t len, std::size_t* need, double* share) {
+        return hg_line_result_element_band_source(r_, index, k, buf, len, need, share);
+      }));
+    return out;
+  }
+  /// The C handle (still owned by this object).
+  const hg_line_result* get() const noexcept { return r_; }
+
+ private:
+  friend class line;
+  explicit line_result(hg_line_result* r) : r_(r) {}
+  hg_line_result* r_;
+};
+
 /// A route of elements in series (owns an hg_line; movable, not copyable). The add_*
 /// methods return *this for chaining.
 class line {
@@ -556,51 +643,17 @@ class line {
     check(hg_line_set_uncertainty(l_, &o));
     return *this;
   }
-  /// The sources of the head-loss band at a flow, largest share first.
-  std::vector<std::pair<std::string, double>> band_sources(const fluid& f, double flow) const {
-    std::vector<std::pair<std::string, double>> out;
-    for (std::size_t i = 0;; ++i) {
-      std::size_t need = 0;
-      double share = 0.0;
-      int32_t s = hg_line_band_source(l_, f.get(), flow, i, nullptr, 0, &need, &share);
-      if (s == HG_ERR_OUT_OF_RANGE) break;
-      if (s != HG_ERR_BUFFER_TOO_SMALL) check(s);
-      std::string name(need, '\0');
-      check(hg_line_band_source(l_, f.get(), flow, i, &name[0], need + 1, &need, &share));
-      out.emplace_back(name, share);
-    }
-    return out;
-  }
-  /// The sources of element `index`'s head-loss band at a flow, largest share first.
-  std::vector<std::pair<std::string, double>> element_band_sources(const fluid& f, double flow,
-                                                                   std::size_t index) const {
-    std::vector<std::pair<std::string, double>> out;
-    std::size_t need = 0;
-    double share = 0.0;
-    // An index past the end is an error; past the last source is the end of the list.
-    if (index >= size()) check(hg_line_element_band_source(l_, f.get(), flow, index, 0, nullptr, 0, &need, &share));
-    for (std::size_t i = 0;; ++i) {
-      int32_t s = hg_line_element_band_source(l_, f.get(), flow, index, i, nullptr, 0, &need, &share);
-      if (s == HG_ERR_OUT_OF_RANGE) break;
-      if (s != HG_ERR_BUFFER_TOO_SMALL) check(s);
-      std::string name(need, '\0');
-      check(hg_line_element_band_source(l_, f.get(), flow, index, i, &name[0], need + 1, &need, &share));
-      out.emplace_back(name, share);
-    }
-    return out;
-  }
   /// A duct of section `shape` whose wall is a catalogue material.
   line& add_duct_material(int32_t shape, double a, double b, double length,
                           const std::string& material) {
     check(hg_line_add_duct_material(l_, shape, a, b, length, material.c_str()));
     return *this;
   }
-  /// Evaluates with an inlet pressure (Pa absolute) for this call only; 0 for none.
-  hg_line_result evaluate_at(const fluid& f, double flow, double inlet_pressure) const {
-    hg_line_result r{};
-    r.struct_size = sizeof r;
+  /// Evaluates once with an inlet pressure (Pa absolute) for this call only; 0 for none.
+  line_result evaluate_at(const fluid& f, double flow, double inlet_pressure) const {
+    hg_line_result* r = nullptr;
     check(hg_line_evaluate_at(l_, f.get(), flow, inlet_pressure, &r));
-    return r;
+    return line_result(r);
   }
   /// The Monte Carlo check of the required head's band (samples ≥ 100, reproducible seed).
   hg_monte_carlo monte_carlo(const fluid& f, double flow, std::size_t samples,
@@ -619,25 +672,16 @@ class line {
     check(hg_line_count(l_, &n));
     return n;
   }
-  hg_line_result evaluate(const fluid& f, double flow) const {
-    hg_line_result r{};
-    r.struct_size = sizeof r;
+  /// Evaluates once at a flow (m³/s); read the totals, rows, labels and band sources
+  /// from the result without evaluating again.
+  line_result evaluate(const fluid& f, double flow) const {
+    hg_line_result* r = nullptr;
     check(hg_line_evaluate(l_, f.get(), flow, &r));
-    return r;
+    return line_result(r);
   }
-  hg_element_result element(const fluid& f, double flow, std::size_t index) const {
-    hg_element_result r{};
-    r.struct_size = sizeof r;
-    check(hg_line_element(l_, f.get(), flow, index, &r));
-    return r;
-  }
-  std::string label(const fluid& f, double flow, std::size_t index) const {
-    std::size_t need = 0;
-    int32_t s = hg_line_element_label(l_, f.get(), flow, index, nullptr, 0, &need);
-    if (s != HG_ERR_BUFFER_TOO_SMALL) check(s);
-    std::string out(need, '\0');
-    check(hg_line_element_label(l_, f.get(), flow, index, &out[0], need + 1, &need));
-    return out;
+  /// The sources of the head-loss band at a flow, largest share first (one evaluation).
+  std::vector<std::pair<std::string, double>> band_sources(const fluid& f, double flow) const {
+    return evaluate(f, flow).band_sources();
   }
   /// Required head (m) and its derivative (s/m²) at a flow: a simulator's Newton call.
   head_loss_result required_head(const fluid& f, double flow) const {

@@ -247,8 +247,32 @@ pub(crate) unsafe fn c_str<'a>(name: &str, p: *const c_char) -> FfiResult<&'a st
 /// The implementor must be `#[repr(C)]` with a `usize` first field holding its size.
 pub(crate) unsafe trait SizePrefixed: Copy {
     /// The size of the struct in its first release: the smallest `struct_size` accepted.
+    /// It never changes when fields are added, so old callers keep working.
     const MIN_SIZE: usize;
 }
+
+/// The size of a `#[repr(C)]` struct that ends with `field` of type `ty`: the offset of
+/// the field's end rounded up to the struct's alignment, i.e. `sizeof` of the struct as
+/// it was when `field` was its last member.
+pub(crate) const fn size_through(field_end: usize, align: usize) -> usize {
+    field_end.div_ceil(align) * align
+}
+
+/// Implements [`SizePrefixed`] for a struct whose first released layout ended with
+/// `$last: $ty`. Fields added later go after it and leave `MIN_SIZE` as it is (the
+/// literal sizes on 64-bit targets are pinned by `min_sizes_are_the_first_layouts`).
+macro_rules! sized {
+    ($t:ty, $last:ident: $ty:ty) => {
+        // SAFETY: repr(C), first field is the usize size.
+        unsafe impl crate::ffi::SizePrefixed for $t {
+            const MIN_SIZE: usize = crate::ffi::size_through(
+                std::mem::offset_of!($t, $last) + std::mem::size_of::<$ty>(),
+                std::mem::align_of::<$t>(),
+            );
+        }
+    };
+}
+pub(crate) use sized;
 
 /// Reads the `struct_size` of a caller's struct and checks it.
 ///
@@ -330,6 +354,12 @@ pub(crate) fn bad_constant(name: &'static str, value: i32, family: &str, max: us
     .into()
 }
 
+/// An out-of-range error for a `size_t` argument, with the value printed exactly (a
+/// `SIZE_MAX` would lose its last digits through a double).
+pub(crate) fn size_out_of_range(name: &str, value: usize, rule: impl std::fmt::Display) -> Fail {
+    Fail::new(HG_ERR_OUT_OF_RANGE, format!("{name} = {value}: {rule}"))
+}
+
 /// Item `index` of a list of names, or an out-of-range error that gives the count.
 pub(crate) fn list_item<'a>(
     name: &'static str,
@@ -337,12 +367,11 @@ pub(crate) fn list_item<'a>(
     index: usize,
 ) -> FfiResult<&'a str> {
     list.get(index).copied().ok_or_else(|| {
-        Error::out_of_range(
+        size_out_of_range(
             name,
-            index as f64,
+            index,
             format!("must be less than {} (the number of entries)", list.len()),
         )
-        .into()
     })
 }
 

@@ -1,6 +1,6 @@
 //! The Darcy friction factor: scalar, with derivatives, with options, and in batches.
 
-use crate::ffi::{self, FfiResult, SizePrefixed, bad_constant, guard, out_ptr, put};
+use crate::ffi::{self, FfiResult, bad_constant, guard, out_ptr, put};
 use hydrograde::friction::{self, Correlation, Friction, Options, Regime, Transition};
 
 /// Colebrook–White, solved exactly (the default correlation).
@@ -54,10 +54,7 @@ pub struct hg_friction_options {
     pub turbulent_limit: f64,
 }
 
-// SAFETY: repr(C), first field is the usize size.
-unsafe impl SizePrefixed for hg_friction_options {
-    const MIN_SIZE: usize = std::mem::size_of::<hg_friction_options>();
-}
+crate::ffi::sized!(hg_friction_options, turbulent_limit: f64);
 
 /// A friction factor with its sensitivities. Set `struct_size` to `sizeof(hg_friction)`
 /// before the call; the library fills the other fields.
@@ -78,10 +75,7 @@ pub struct hg_friction {
     pub warnings: u32,
 }
 
-// SAFETY: repr(C), first field is the usize size.
-unsafe impl SizePrefixed for hg_friction {
-    const MIN_SIZE: usize = std::mem::size_of::<hg_friction>();
-}
+crate::ffi::sized!(hg_friction, warnings: u32);
 
 pub(crate) fn regime_code(r: Regime) -> i32 {
     match r {

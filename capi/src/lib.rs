@@ -19,11 +19,14 @@ mod line;
 mod line_band;
 mod line_eval;
 mod line_more;
+mod line_result;
 mod line_solve;
 mod materials;
 mod meta;
 mod pipe;
 mod section;
+/// cbindgen:ignore
+mod sheet;
 mod threads;
 mod units;
 
@@ -39,10 +42,43 @@ pub use line::*;
 pub use line_band::*;
 pub use line_eval::*;
 pub use line_more::*;
+pub use line_result::*;
 pub use line_solve::*;
 pub use materials::*;
 pub use meta::*;
 pub use pipe::*;
 pub use section::*;
+pub use sheet::*;
 pub use threads::*;
 pub use units::*;
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use crate::ffi::SizePrefixed;
+
+    /// The smallest `struct_size` each growable struct accepts is the size of its first
+    /// released layout (x86-64 and aarch64 Linux sizes, counted field by field). A field
+    /// added at the end must not change these numbers, or old callers are rejected.
+    #[cfg(target_pointer_width = "64")]
+    #[test]
+    fn min_sizes_are_the_first_layouts() {
+        let pinned = [
+            ("hg_friction_options", hg_friction_options::MIN_SIZE, 40),
+            ("hg_friction", hg_friction::MIN_SIZE, 40),
+            ("hg_pipe_flow", hg_pipe_flow::MIN_SIZE, 56),
+            ("hg_monte_carlo", hg_monte_carlo::MIN_SIZE, 48),
+            (
+                "hg_uncertainty_options",
+                hg_uncertainty_options::MIN_SIZE,
+                72,
+            ),
+            ("hg_sizing", hg_sizing::MIN_SIZE, 144),
+            ("hg_line_totals", hg_line_totals::MIN_SIZE, 152),
+            ("hg_element_result", hg_element_result::MIN_SIZE, 144),
+        ];
+        for (name, got, want) in pinned {
+            assert_eq!(got, want, "{name}");
+        }
+    }
+}

@@ -377,14 +377,3 @@ pub unsafe extern "C" fn hg_line_count(line: *const hg_line, count: *mut usize) 
         unsafe { put("count", count, l.elements.len()) }
     })
 }
-
-/// The size-prefixed structs of this module.
-macro_rules! sized {
-    ($t:ty) => {
-        // SAFETY: repr(C), first field is the usize size.
-        unsafe impl crate::ffi::SizePrefixed for $t {
-            const MIN_SIZE: usize = std::mem::size_of::<$t>();
-        }
-    };
-}
-pub(crate) use sized;

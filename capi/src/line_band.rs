@@ -1,13 +1,10 @@
-//! A closer look at a line's bands and pressures: the sources of one element's band, the
-//! Monte Carlo check of the first-order band, and evaluation at a given inlet pressure.
+//! The Monte Carlo check of a line's first-order band.
 
-use crate::ffi::{self, guard, out_ptr, put};
+use crate::ffi::sized;
+use crate::ffi::{self, guard};
 use crate::fluid::hg_fluid;
-use crate::line::{hg_line, sized};
-use crate::line_eval::{element, hg_line_result, line_to_c};
-use hydrograde::Error;
+use crate::line::hg_line;
 use hydrograde::band::monte_carlo;
-use std::ffi::c_char;
 
 /// The largest number of samples `hg_line_monte_carlo` accepts: the samples are kept in
 /// memory (8 bytes each), and a larger request is far more than any check needs. The
@@ -34,7 +31,7 @@ pub struct hg_monte_carlo {
     /// Number of samples drawn.
     pub samples: usize,
 }
-sized!(hg_monte_carlo);
+sized!(hg_monte_carlo, samples: usize);
 
 /// Propagates the uncertainty sources of `line` (see `hg_line_set_uncertainty`) to its
 /// required head at `flow` (m³/s) by sampling (JCGM 101:2008), `samples` times (100 to
@@ -79,88 +76,6 @@ pub unsafe extern "C" fn hg_line_monte_carlo(
     })
 }
 
-/// Evaluates `line` as `hg_line_evaluate`, but with the static pressure at the inlet
-/// given for this call: `inlet_pressure` in Pa absolute (> 0), or 0 for none (a gas then
-/// starts at its own pressure). The line's own setting (`hg_line_set_inlet_pressure`) is
-/// not used and not changed, so threads may evaluate one line at different pressures.
-///
-/// Returns the codes of `hg_line_evaluate`, and `HG_ERR_NOT_FINITE` or
-/// `HG_ERR_OUT_OF_RANGE` for a bad `inlet_pressure`. Thread-safe (the line is only read).
-///
-/// # Safety
-/// As `hg_line_evaluate`.
-#[unsafe(no_mangle)]
-pub unsafe extern "C" fn hg_line_evaluate_at(
-    line: *const hg_line,
-    fluid: *const hg_fluid,
-    flow: f64,
-    inlet_pressure: f64,
-    out: *mut hg_line_result,
-) -> i32 {
-    guard(|| {
-        // SAFETY: forwarded contract.
-        unsafe { ffi::check_sized_out("out", out)? };
-        // SAFETY: forwarded contract.
-        let (l, f) = unsafe { (ffi::handle("line", line)?, ffi::handle("fluid", fluid)?) };
-        let inlet = (inlet_pressure != 0.0).then_some(inlet_pressure);
-        let r = l.line()?.evaluate_at(&f.fluid, flow, inlet)?;
-        // SAFETY: forwarded contract.
-        unsafe { ffi::write_sized("out", out, &line_to_c(&r)) }
-    })
-}
-
-/// Source number `source` (0-based, largest share first) of the head-loss band of element
-/// `index` (0-based, route order) of `line` for `fluid` at `flow` (m³/s), as
-/// `hg_line_band_source` gives them for the whole line: the name copied into `buf` (at
-/// most `len - 1` bytes and a NUL; full length in `*needed`) and its share of the
-/// variance (0…1) in `*share`. Source 0 dominates the element's band.
-///
-/// Returns `HG_OK`; the codes of `hg_line_evaluate`; `HG_ERR_OUT_OF_RANGE` when `index`
-/// is not an element, or `source` is past the last source (a rise, and any band of zero
-/// width, has none); `HG_ERR_BUFFER_TOO_SMALL` when the name did not fit (the share is
-/// still written); `HG_ERR_NULL_POINTER`. Thread-safe (the line is only read).
-///
-/// # Safety
-/// `line` and `fluid` must be NULL or live handles; `buf` NULL or valid for `len` bytes;
-/// `needed` and `share` NULL or writable.
-#[unsafe(no_mangle)]
-#[allow(clippy::too_many_arguments)]
-pub unsafe extern "C" fn hg_line_element_band_source(
-    line: *const hg_line,
-    fluid: *const hg_fluid,
-    flow: f64,
-    index: usize,
-    source: usize,
-    buf: *mut c_char,
-    len: usize,
-    needed: *mut usize,
-    share: *mut f64,
-) -> i32 {
-    guard(|| {
-        ffi::check_outs(&[out_ptr("needed", needed), out_ptr("share", share)])?;
-        // SAFETY: forwarded contract.
-        let (l, f) = unsafe { (ffi::handle("line", line)?, ffi::handle("fluid", fluid)?) };
-        let r = l.line()?.evaluate(&f.fluid, flow)?;
-        let list = &element(&r.elements, index)?.head_loss_band.contributions;
-        let c = list.get(source).ok_or_else(|| -> ffi::Fail {
-            Error::out_of_range(
-                "source",
-                source as f64,
-                format!(
-                    "must be less than {} (the number of sources of element {index}'s band)",
-                    list.len()
-                ),
-            )
-            .into()
-        })?;
-        // SAFETY: forwarded contract; checked above.
-        unsafe {
-            put("share", share, c.share)?;
-            ffi::copy_name(&c.source, buf, len, needed)
-        }
-    })
-}
-
 #[cfg(test)]
 mod tests {
     use super::*;
@@ -175,7 +90,7 @@ mod tests {
     use hydrograde::section::Section;
 
     #[test]
-    fn monte_carlo_and_evaluate_at_equal_the_core() {
+    fn monte_carlo_equals_the_core() {
         let mut l: *mut hg_line = std::ptr::null_mut();
         let mut f: *mut hg_fluid = std::ptr::null_mut();
         // SAFETY: valid out-pointers and live handles; freed at the end.
@@ -229,16 +144,6 @@ mod tests {
                 HG_ERR_INVALID
             );
         }
-        let at = core.evaluate_at(&water, 2e-3, Some(1.5e5)).unwrap();
-        let mut r = line_to_c(&at);
-        r.outlet_pressure = 0.0;
-        // SAFETY: as above.
-        assert_eq!(
-            unsafe { hg_line_evaluate_at(l, f, 2e-3, 1.5e5, &mut r) },
-            HG_OK
-        );
-        assert_eq!(r, line_to_c(&at));
-        assert_eq!(r.has_pressures, 1);
         // SAFETY: handles from the constructors above, not used afterwards.
         unsafe {
             hg_line_free(l);

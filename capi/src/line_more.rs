@@ -1,10 +1,10 @@
 //! More elements and options for lines: every fitting method, pipes of catalogue
 //! materials, custom ducts, roughness ranges, K spreads, the turbulent diameter and the
-//! uncertainty sources, and the sources of a band.
+//! uncertainty sources.
 
-use crate::ffi::{self, FfiResult, guard, out_ptr, put};
-use crate::fluid::hg_fluid;
-use crate::line::{hg_line, refer, sized, with_line};
+use crate::ffi::sized;
+use crate::ffi::{self, FfiResult, guard, put};
+use crate::line::{hg_line, refer, with_line};
 use crate::section::{HG_SECTION_CIRCLE, section_of};
 use hydrograde::Error;
 use hydrograde::band::UncertaintyOptions;
@@ -351,12 +351,11 @@ pub unsafe extern "C" fn hg_line_set_k_spread(
             match l.elements.get_mut(index) {
                 Some(Element::Fitting(f)) => *f = f.clone().with_k_spread(spread)?,
                 _ => {
-                    return Err(Error::out_of_range(
+                    return Err(ffi::size_out_of_range(
                         "index",
-                        index as f64,
+                        index,
                         format!("must be the index of a fitting (the line has {n} elements)"),
-                    )
-                    .into());
+                    ));
                 }
             }
             l.changed();
@@ -462,7 +461,7 @@ pub struct hg_uncertainty_options {
     /// Relative uncertainty of every bore (manufacturing tolerance).
     pub diameter: f64,
 }
-sized!(hg_uncertainty_options);
+sized!(hg_uncertainty_options, diameter: f64);
 
 fn uncertainty_to_c(u: &UncertaintyOptions) -> hg_uncertainty_options {
     hg_uncertainty_options {
@@ -537,6 +536,7 @@ pub unsafe extern "C" fn hg_line_set_uncertainty(
                 non_circular_model: c.non_circular_model,
                 roughness_default: c.roughness_default,
                 diameter: c.diameter,
+                independent_materials: l.options.uncertainty.independent_materials.clone(),
             };
             u.validate()?;
             l.options.uncertainty = u;
@@ -544,53 +544,4 @@ pub unsafe extern "C" fn hg_line_set_uncertainty(
             Ok(())
         })
     }
-}
-
-/// Source number `index` (0-based, largest share first) of the head-loss band of `line`
-/// for `fluid` at `flow` (m³/s): its name copied into `buf` (e.g. "friction model",
-/// "roughness", "K of gate_valve (element 2)"; at most `len - 1` bytes and a NUL; full
-/// length in `*needed`) and its share of the variance (0…1) in `*share`. Index 0 is the
-/// input that dominates the band.
-///
-/// Returns `HG_OK`; the codes of `hg_line_evaluate`; `HG_ERR_OUT_OF_RANGE` when `index`
-/// is past the last source (a band of zero width, as at zero flow, has none);
-/// `HG_ERR_BUFFER_TOO_SMALL` when the name did not fit (the share is still written);
-/// `HG_ERR_NULL_POINTER`. Thread-safe (the line is only read).
-///
-/// # Safety
-/// `line` and `fluid` must be NULL or live handles; `buf` NULL or valid for `len` bytes;
-/// `needed` and `share` NULL or writable.
-#[unsafe(no_mangle)]
-#[allow(clippy::too_many_arguments)]
-pub unsafe extern "C" fn hg_line_band_source(
-    line: *const hg_line,
-    fluid: *const hg_fluid,
-    flow: f64,
-    index: usize,
-    buf: *mut c_char,
-    len: usize,
-    needed: *mut usize,
-    share: *mut f64,
-) -> i32 {
-    guard(|| {
-        ffi::check_outs(&[out_ptr("needed", needed), out_ptr("share", share)])?;
-        // SAFETY: forwarded contract.
-        let (l, f) = unsafe { (ffi::handle("line", line)?, ffi::handle("fluid", fluid)?) };
-        let r = l.line()?.evaluate(&f.fluid, flow)?;
-        let c = r.head_loss_band.contributions.get(index).ok_or_else(|| {
-            Error::out_of_range(
-                "index",
-                index as f64,
-                format!(
-                    "must be less than {} (the number of sources of this band)",
-                    r.head_loss_band.contributions.len()
-                ),
-            )
-        })?;
-        // SAFETY: forwarded contract; checked above.
-        unsafe {
-            put("share", share, c.share)?;
-            ffi::copy_name(&c.source, buf, len, needed)
-        }
-    })
 }

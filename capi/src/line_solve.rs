@@ -1,9 +1,10 @@
 //! Solves on lines: the pump operating point, the split of a flow between parallel
 //! lines, and sizing to a limit.
 
+use crate::ffi::sized;
 use crate::ffi::{self, FfiResult, guard, out_ptr, put};
 use crate::fluid::hg_fluid;
-use crate::line::{hg_line, sized};
+use crate::line::hg_line;
 use hydrograde::line::{Limit, Line, PumpCurve, SizeChoice, split_flow};
 use hydrograde::sizes::PipeTable;
 use std::ffi::c_char;
@@ -221,7 +222,7 @@ pub struct hg_sizing {
     /// band (the high end of the pressure-loss band).
     pub standard_at_band: hg_size_choice,
 }
-sized!(hg_sizing);
+sized!(hg_sizing, standard_at_band: hg_size_choice);
 
 fn choice_to_c(c: Option<&SizeChoice>) -> FfiResult<hg_size_choice> {
     let mut out = hg_size_choice {

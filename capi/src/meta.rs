@@ -10,10 +10,14 @@ pub const HG_VERSION_MAJOR: u32 = 0;
 pub const HG_VERSION_MINOR: u32 = 1;
 /// Patch version of the library (from Cargo.toml; the build fails if they disagree).
 pub const HG_VERSION_PATCH: u32 = 0;
-/// ABI version: the number in the shared library's SONAME (`libhydrograde.so.<abi>`),
-/// equal to the major version. A program compiled against this header should check
-/// `hg_abi_version() == HG_ABI_VERSION` at start-up.
-pub const HG_ABI_VERSION: u32 = 0;
+/// ABI version: the number in the shared library's SONAME (`libhydrograde.so.<abi>`).
+/// While the library is 0.x it counts the incompatible changes of the C ABI on its own
+/// (from 1.0 on it will equal the major version). ABI 1 (library 0.1): `hg_line_evaluate`
+/// returns an `hg_line_result` handle read by the `hg_line_result_*` accessors, and the
+/// accessors that evaluated the line again (`hg_line_element`, `hg_line_element_label`,
+/// `hg_line_band_source`, `hg_line_element_band_source`) are gone. A program compiled
+/// against this header should check `hg_abi_version() == HG_ABI_VERSION` at start-up.
+pub const HG_ABI_VERSION: u32 = 1;
 
 /// Parses a decimal version component at compile time.
 const fn parse_u32(s: &str) -> u32 {
@@ -33,7 +37,9 @@ const fn parse_u32(s: &str) -> u32 {
 const _: () = assert!(HG_VERSION_MAJOR == parse_u32(env!("CARGO_PKG_VERSION_MAJOR")));
 const _: () = assert!(HG_VERSION_MINOR == parse_u32(env!("CARGO_PKG_VERSION_MINOR")));
 const _: () = assert!(HG_VERSION_PATCH == parse_u32(env!("CARGO_PKG_VERSION_PATCH")));
-const _: () = assert!(HG_ABI_VERSION == HG_VERSION_MAJOR);
+// The SONAME comes from the same number (build.rs reads it from this file).
+const _: () = assert!(HG_ABI_VERSION == parse_u32(env!("HG_ABI_VERSION")));
+const _: () = assert!(HG_VERSION_MAJOR == 0 || HG_ABI_VERSION == HG_VERSION_MAJOR);
 
 // The core's bits, typed as literals for cbindgen; a test checks them against the core.
 

@@ -1,6 +1,6 @@
 //! A straight run: head loss with its derivative, the flow state, batches.
 
-use crate::ffi::{self, FfiResult, SizePrefixed, guard, out_ptr, put};
+use crate::ffi::{self, FfiResult, guard, out_ptr, put};
 use crate::friction::regime_code;
 use crate::section::{HG_SECTION_CIRCLE, section_of};
 use hydrograde::error::check;
@@ -33,10 +33,7 @@ pub struct hg_pipe_flow {
     pub warnings: u32,
 }
 
-// SAFETY: repr(C), first field is the usize size.
-unsafe impl SizePrefixed for hg_pipe_flow {
-    const MIN_SIZE: usize = std::mem::size_of::<hg_pipe_flow>();
-}
+crate::ffi::sized!(hg_pipe_flow, warnings: u32);
 
 fn pipe_of(shape: i32, a: f64, b: f64, length: f64, roughness: f64) -> FfiResult<Pipe> {
     Ok(Pipe::new(section_of(shape, a, b)?, length, roughness)?)

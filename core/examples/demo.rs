@@ -110,7 +110,10 @@ fn print_breakdown(r: &LineResult) {
             } else {
                 band(&e.head_loss_band)
             },
-            e.head_loss_band.dominant().unwrap_or(""),
+            e.head_loss_band
+                .dominant()
+                .map(|s| s.name())
+                .unwrap_or_default(),
             e.warnings.names().join(", ")
         );
     }
@@ -161,7 +164,9 @@ fn orchard() -> Result<()> {
         op.head,
         op.flow_band.low * 1e3,
         op.flow_band.high * 1e3,
-        op.flow_band.dominant().unwrap_or("-")
+        op.flow_band
+            .dominant()
+            .map_or("-".to_string(), |s| s.name())
     );
 
     let back = line.flow_for_head(&water, 0.0)?;

@@ -22,6 +22,8 @@ pub mod fitting;
 pub mod fluid;
 pub mod friction;
 pub mod line;
+pub mod math;
+mod names;
 pub mod pipe;
 pub mod roughness;
 pub mod section;

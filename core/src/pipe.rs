@@ -37,9 +37,13 @@ pub struct Pipe {
     /// Absolute wall roughness ε, m.
     pub roughness: f64,
     /// Likely range (low, high) of the roughness, m, when known (from the material
-    /// catalogue); the uncertainty bands read it as a rectangular distribution.
+    /// catalogue); the uncertainty bands read ε as log-uniform over it.
     #[serde(default)]
     pub roughness_range: Option<(f64, f64)>,
+    /// The catalogue material the roughness comes from, if any: pipes of one material
+    /// share one roughness error in the bands.
+    #[serde(default)]
+    pub material: Option<String>,
 }
 
 /// A section's geometry, worked out once: area (m²), hydraulic and turbulent diameters
@@ -100,6 +104,7 @@ impl Pipe {
             length,
             roughness,
             roughness_range: None,
+            material: None,
         })
     }
 
@@ -112,6 +117,7 @@ impl Pipe {
         let m = crate::roughness::material(material)?;
         let mut p = Pipe::new(section, length, m.typical)?;
         p.roughness_range = Some((m.low, m.high));
+        p.material = Some(m.name);
         Ok(p)
     }
 
@@ -135,6 +141,7 @@ impl Pipe {
     pub fn with_diameter(&self, diameter: f64) -> Result<Pipe> {
         let mut p = Pipe::new(Section::circle(diameter)?, self.length, self.roughness)?;
         p.roughness_range = self.roughness_range;
+        p.material = self.material.clone();
         Ok(p)
     }
 

@@ -119,9 +119,10 @@ pub fn names() -> Vec<&'static str> {
 /// # Errors
 /// [`Error::UnknownName`] listing the known names when `name` is not in the catalogue.
 pub fn material(name: &str) -> Result<Material> {
+    let wanted = crate::names::key(name);
     catalogue()
         .into_iter()
-        .find(|m| m.name == name)
+        .find(|m| crate::names::key(&m.name) == wanted)
         .ok_or_else(|| Error::unknown_name("material", name, &names()))
 }
 

@@ -22,6 +22,7 @@
 //! [`Warnings::NON_CIRCULAR_SECTION`].
 
 use crate::error::{Error, Result, check};
+use crate::math;
 use crate::warning::Warnings;
 use serde::{Deserialize, Serialize};
 use std::f64::consts::PI;
@@ -99,9 +100,9 @@ impl TurbulentDiameter {
 impl std::str::FromStr for TurbulentDiameter {
     type Err = Error;
     fn from_str(s: &str) -> Result<Self> {
-        match s {
+        match crate::names::key(s).as_str() {
             "hydraulic" => Ok(TurbulentDiameter::Hydraulic),
-            "laminar_equivalent" => Ok(TurbulentDiameter::LaminarEquivalent),
+            "laminarequivalent" => Ok(TurbulentDiameter::LaminarEquivalent),
             _ => Err(Error::unknown_name(
                 "turbulent diameter",
                 s,
@@ -324,13 +325,13 @@ impl Section {
 /// x < 1 to avoid the cancellation of the textbook form as D_i/D_o → 1.
 fn annulus_constant(outer: f64, inner: f64) -> f64 {
     // (outer − inner) is exact when the two are close (Sterbenz), so x keeps full accuracy.
-    let x = ((outer - inner) / inner).ln_1p();
+    let x = math::ln_1p((outer - inner) / inner);
     if x >= 1.0 {
         // r ≤ 1/e: the textbook form loses at most a couple of bits here.
         let r = inner / outer;
         return 64.0 * (1.0 - r) * (1.0 - r) / (1.0 + r * r - (1.0 - r * r) / x);
     }
-    let s = (x / 2.0).sinh();
+    let s = math::sinh(x / 2.0);
     // cosh x − sinh x / x = Σ_{k≥1} x^{2k} · 2k / (2k+1)!
     let x2 = x * x;
     let mut term = x2 / 6.0; // x^{2k}/(2k+1)! at k = 1
@@ -358,8 +359,8 @@ fn rectangle_constant(alpha: f64) -> f64 {
     let mut n = 1.0f64;
     for _ in 0..64 {
         // 1 − tanh(y) = 2 e^{−2y} / (1 + e^{−2y}), with y = nπ/(2α).
-        let e = (-n * PI / alpha).exp();
-        let add = 2.0 * e / (1.0 + e) / n.powi(5);
+        let e = math::exp(-n * PI / alpha);
+        let add = 2.0 * e / (1.0 + e) / math::powi(n, 5);
         rest += add;
         if add <= f64::EPSILON * 1e-3 {
             break;
@@ -367,7 +368,7 @@ fn rectangle_constant(alpha: f64) -> f64 {
         n += 2.0;
     }
     let sum = 31.0 / 32.0 * ZETA5 - rest;
-    let pi5 = PI.powi(5);
+    let pi5 = math::powi(PI, 5);
     96.0 / ((1.0 + alpha) * (1.0 + alpha) * (1.0 - 192.0 * alpha / pi5 * sum))
 }
 

@@ -148,9 +148,7 @@ pub fn names() -> Vec<&'static str> {
 }
 
 fn lookup(name: &str, parameter: &'static str) -> Result<&'static Unit> {
-    UNITS
-        .iter()
-        .find(|u| u.name == name)
+    crate::names::find_unit(UNITS.iter(), |u| u.name, name)
         .ok_or_else(|| Error::unknown_name(parameter, name, &names()))
 }
 

@@ -40,10 +40,13 @@ pub fn band_dict<'py>(py: Python<'py>, b: &Band) -> PyResult<Bound<'py, PyDict>>
     d.set_item("low", b.low)?;
     d.set_item("nominal", b.nominal)?;
     d.set_item("high", b.high)?;
+    d.set_item("coverage_factor", b.coverage_factor)?;
+    d.set_item("coverage", b.coverage.name())?;
     let rows = PyList::empty(py);
     for c in &b.contributions {
         let r = PyDict::new(py);
-        r.set_item("source", &c.source)?;
+        r.set_item("source", c.source.name())?;
+        r.set_item("kind", c.source.kind())?;
         r.set_item("share", c.share)?;
         rows.append(r)?;
     }
@@ -74,7 +77,31 @@ impl PyBand {
         self.inner
             .contributions
             .iter()
-            .map(|c| (c.source.clone(), c.share))
+            .map(|c| (c.source.name(), c.share))
+            .collect()
+    }
+    /// The coverage factor k of the 95 % interval (2 for a near-normal result, down to
+    /// 1.645 when one rectangular input dominates).
+    #[getter]
+    fn coverage_factor(&self) -> f64 {
+        self.inner.coverage_factor
+    }
+    /// How k was chosen: ``"exact"`` (no width), ``"normal"`` or
+    /// ``"dominant_rectangular"``.
+    #[getter]
+    fn coverage(&self) -> &'static str {
+        self.inner.coverage.name()
+    }
+    /// ``[(source, kind, share of the variance), …]``, largest first; ``kind`` is one of
+    /// ``"friction_model"``, ``"material_roughness"``, ``"pipe_roughness"``,
+    /// ``"diameter"``, ``"density"``, ``"viscosity"``, ``"catalogue_k"``, ``"fitting_k"``,
+    /// ``"equipment"``.
+    #[getter]
+    fn sources(&self) -> Vec<(String, &'static str, f64)> {
+        self.inner
+            .contributions
+            .iter()
+            .map(|c| (c.source.name(), c.source.kind(), c.share))
             .collect()
     }
     /// Half the width of the band, k·u.
@@ -90,7 +117,7 @@ impl PyBand {
     /// The source with the largest share, if any.
     #[getter]
     fn dominant(&self) -> Option<String> {
-        self.inner.dominant().map(str::to_string)
+        self.inner.dominant().map(|s| s.name())
     }
     /// The band as a dict.
     fn to_dict<'py>(&self, py: Python<'py>) -> PyResult<Bound<'py, PyDict>> {

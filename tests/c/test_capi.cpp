@@ -141,15 +141,20 @@ static void test_line() {
   l.add_duct(HG_SECTION_CIRCLE, 0.04, 0, 12, 1.5e-6).add_equipment("strainer", 2e4, 2e-3);
   l.set_inlet_pressure(3e5);
   CHECK(l.size() == 6, "size");
-  hg_line_result r = l.evaluate(water, 2e-3);
-  hg_line_result rc{};
+  hg::line_result res = l.evaluate(water, 2e-3);
+  hg_line_totals r = res.totals();
+  hg_line_totals rc{};
   rc.struct_size = sizeof rc;
-  hg_line_evaluate(l.get(), water.get(), 2e-3, &rc);
+  hg_line_result* cres = nullptr;
+  CHECK(hg_line_evaluate(l.get(), water.get(), 2e-3, &cres) == HG_OK && hg_line_result_totals(cres, &rc) == HG_OK,
+        "C evaluate");
+  hg_line_result_free(cres);
   CHECK(std::memcmp(&r, &rc, sizeof r) == 0, "evaluate equals C");
   CHECK(r.static_head == 3.0 && r.required_head > r.static_head && r.element_count == 6, "totals");
   CHECK(r.head_loss_low < r.head_loss && r.head_loss < r.head_loss_high, "band");
-  CHECK(l.element(water, 2e-3, 0).kind == HG_ELEMENT_PIPE, "element");
-  CHECK(l.label(water, 2e-3, 1) == "elbow_90_standard" && l.label(water, 2e-3, 5) == "strainer", "labels");
+  CHECK(res.element(0).kind == HG_ELEMENT_PIPE && res.size() == 6, "element");
+  CHECK(res.label(1) == "elbow_90_standard" && res.label(5) == "strainer", "labels");
+  CHECK(!res.element(2).has_velocity && res.element(1).has_k && !res.element(0).has_k, "not-applicable flags");
   hg::flow_solution s = l.flow_for_head(water, r.required_head);
   CHECK(std::fabs(s.flow - 2e-3) < 1e-12 && s.flow_low < s.flow && s.flow < s.flow_high, "flow for head");
   std::vector<double> curve = l.system_curve(water, {0.0, 1e-3, 2e-3});
@@ -165,7 +170,7 @@ static void test_line() {
 
   hg::operating_point op = moved.operating_point(water, {0.0, 2e-3, 4e-3}, {40.0, 32.0, 8.0});
   CHECK(op.flow > 0 && op.flow_low < op.flow && op.flow < op.flow_high, "operating point");
-  CHECK(std::fabs(moved.evaluate(water, op.flow).required_head - op.head) < 1e-9 * op.head, "on the system curve");
+  CHECK(std::fabs(moved.evaluate(water, op.flow).totals().required_head - op.head) < 1e-9 * op.head, "on the system curve");
   hg::line branch;
   branch.add_pipe(0.08, 20, 4.5e-5);
   auto sp = hg::split_flow({&moved, &branch}, water, 5e-3);
@@ -192,16 +197,18 @@ static void test_line() {
   double total = 0;
   for (auto& s : sources) total += s.second;
   CHECK(!sources.empty() && std::fabs(total - 1.0) < 1e-12, "shares sum to 1");
-  auto esrc = all.element_band_sources(water, 5e-3, 1);
+  auto esrc = all.evaluate(water, 5e-3).element_band_sources(1);
   double etotal = 0;
   for (auto& s : esrc) etotal += s.second;
   CHECK(!esrc.empty() && std::fabs(etotal - 1.0) < 1e-12, "element shares sum to 1");
-  CHECK(thrown([&] { all.element_band_sources(water, 5e-3, 99); }).first == HG_ERR_OUT_OF_RANGE, "element 99");
+  CHECK(thrown([&] { all.evaluate(water, 5e-3).element_band_sources(99); }).first == HG_ERR_OUT_OF_RANGE,
+        "element 99");
   hg_monte_carlo mc = all.monte_carlo(water, 5e-3, 2000, 3);
-  hg_line_result ev = all.evaluate(water, 5e-3);
+  hg_line_totals ev = all.evaluate(water, 5e-3).totals();
   CHECK(mc.samples == 2000 && mc.low < ev.required_head && ev.required_head < mc.high, "Monte Carlo brackets");
   CHECK(thrown([&] { all.monte_carlo(water, 5e-3, 10, 3); }).first == HG_ERR_OUT_OF_RANGE, "10 samples");
-  CHECK(all.evaluate_at(water, 5e-3, 2e5).inlet_pressure == 2e5 && all.evaluate_at(water, 5e-3, 0).has_pressures == 0,
+  CHECK(all.evaluate_at(water, 5e-3, 2e5).totals().inlet_pressure == 2e5 &&
+            all.evaluate_at(water, 5e-3, 0).totals().has_pressures == 0,
         "inlet pressure per call");
   hg::line duct;
   duct.add_duct_material(HG_SECTION_RECTANGLE, 0.3, 0.2, 10, "galvanized_steel");
@@ -215,7 +222,7 @@ static void test_line() {
   CHECK(thrown([] { hg::pipe_table_schedules("cast_iron"); }).first == HG_ERR_UNKNOWN_NAME, "unknown table");
   hg::fluid wet = water.with_uncertainty(0.001, 0.02).with_vapour_pressure(2.5e5);
   all.set_inlet_pressure(1.5e5);
-  CHECK(all.evaluate(wet, 5e-3).warnings & HG_WARN_BELOW_VAPOUR_PRESSURE, "cavitation");
+  CHECK(all.evaluate(wet, 5e-3).totals().warnings & HG_WARN_BELOW_VAPOUR_PRESSURE, "cavitation");
   CHECK(hg::fluid::gas(1.2, 1.8e-5, 293.15, 1e5).props().density == 1.2, "gas");
   CHECK(hg::correlation_validity(HG_CORRELATION_BLASIUS).re_max == 1e5, "Blasius to 1e5 (Blasius 1913)");
   auto lim = hg::transition_limits(3000.0, 1e-3);
@@ -223,7 +230,7 @@ static void test_line() {
   auto ph = hg::pump_curve_head({0.0, 1e-3, 2e-3}, {30.0, 25.0, 15.0}, 1e-3);
   CHECK(ph.first == 25.0 && ph.second < 0.0, "pump curve through its points");
   hg::head_loss_result rh = all.required_head(wet, 5e-3);
-  CHECK(rh.dhead_dflow > 0.0 && std::fabs(rh.head_loss - all.evaluate(wet, 5e-3).required_head) <= 1e-12 * rh.head_loss,
+  CHECK(rh.dhead_dflow > 0.0 && std::fabs(rh.head_loss - all.evaluate(wet, 5e-3).totals().required_head) <= 1e-12 * rh.head_loss,
         "required head");
   hg::line u = all.with_uniform_diameter(0.1);
   CHECK(u.size() == all.size(), "uniform diameter copy");
@@ -232,7 +239,7 @@ static void test_line() {
   CHECK(e.first == HG_ERR_INVALID && !e.second.empty(), e.second.c_str());
   e = thrown([] { hg::line().add_pipe(0.05, 10, 0).add_fitting("nonesuch"); });
   CHECK(e.first == HG_ERR_UNKNOWN_NAME, e.second.c_str());
-  e = thrown([&] { moved.element(water, 1e-3, 6); });
+  e = thrown([&] { moved.evaluate(water, 1e-3).element(6); });
   CHECK(e.first == HG_ERR_OUT_OF_RANGE, e.second.c_str());
   e = thrown([] { hg::fluid::liquid(-1, 1e-3); });
   CHECK(e.first == HG_ERR_OUT_OF_RANGE, e.second.c_str());

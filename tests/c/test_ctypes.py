@@ -82,7 +82,9 @@ def test_version_and_names(vba):
     cargo = (Path(__file__).resolve().parents[2] / "Cargo.toml").read_text()
     version = next(l.split('"')[1] for l in cargo.splitlines() if l.startswith("version ="))
     assert cstr(vba["hg_version"]()) == version
-    assert vba["hg_abi_version"]() == int(version.split(".")[0])
+    meta = (Path(__file__).resolve().parents[2] / "capi" / "src" / "meta.rs").read_text()
+    abi = next(l for l in meta.splitlines() if l.startswith("pub const HG_ABI_VERSION"))
+    assert vba["hg_abi_version"]() == int(abi.split("=")[1].strip(" ;"))
     assert cstr(vba["hg_status_name"](11)) == "HG_ERR_OUT_OF_RANGE"
     assert cstr(vba["hg_warning_name"](4)) == "transitional_flow"
     assert cstr(vba["hg_regime_name"](2)) == "turbulent"

@@ -19,6 +19,54 @@ static hg_fluid *fluids[3];
 
 static size_t msg_len(void) { return hg_last_error(NULL, 0); }
 
+/* Evaluating through the result handle: each helper evaluates, reads one thing and frees
+ * the result, so the checks below read like one call. The caller sets struct_size. */
+static int32_t totals(const hg_line *l, const hg_fluid *f, double q, hg_line_totals *x) {
+  hg_line_result *r = NULL;
+  int32_t s = hg_line_evaluate(l, f, q, &r);
+  if (s == HG_OK) s = hg_line_result_totals(r, x);
+  hg_line_result_free(r);
+  return s;
+}
+static int32_t totals_at(const hg_line *l, const hg_fluid *f, double q, double p, hg_line_totals *x) {
+  hg_line_result *r = NULL;
+  int32_t s = hg_line_evaluate_at(l, f, q, p, &r);
+  if (s == HG_OK) s = hg_line_result_totals(r, x);
+  hg_line_result_free(r);
+  return s;
+}
+static int32_t element_row(const hg_line *l, const hg_fluid *f, double q, size_t i, hg_element_result *e) {
+  hg_line_result *r = NULL;
+  int32_t s = hg_line_evaluate(l, f, q, &r);
+  if (s == HG_OK) s = hg_line_result_element(r, i, e);
+  hg_line_result_free(r);
+  return s;
+}
+static int32_t element_label(const hg_line *l, const hg_fluid *f, double q, size_t i, char *buf, size_t len,
+                             size_t *need) {
+  hg_line_result *r = NULL;
+  int32_t s = hg_line_evaluate(l, f, q, &r);
+  if (s == HG_OK) s = hg_line_result_label(r, i, buf, len, need);
+  hg_line_result_free(r);
+  return s;
+}
+static int32_t band_source(const hg_line *l, const hg_fluid *f, double q, size_t k, char *buf, size_t len,
+                           size_t *need, double *share) {
+  hg_line_result *r = NULL;
+  int32_t s = hg_line_evaluate(l, f, q, &r);
+  if (s == HG_OK) s = hg_line_result_band_source(r, k, buf, len, need, share);
+  hg_line_result_free(r);
+  return s;
+}
+static int32_t element_band_source(const hg_line *l, const hg_fluid *f, double q, size_t i, size_t k, char *buf,
+                                   size_t len, size_t *need, double *share) {
+  hg_line_result *r = NULL;
+  int32_t s = hg_line_evaluate(l, f, q, &r);
+  if (s == HG_OK) s = hg_line_result_element_band_source(r, i, k, buf, len, need, share);
+  hg_line_result_free(r);
+  return s;
+}
+
 /* The same routes as `scenario` in capi/examples/core_reference.rs. */
 static int32_t build_scenario(int n, hg_line **out) {
   int32_t s = hg_line_new(out);
@@ -75,10 +123,10 @@ static long check_line_record(const record *r, int quiet) {
   int ngot = 0;
   int32_t s = -1;
   if (strcmp(r->tag, "line_eval") == 0) {
-    hg_line_result x;
+    hg_line_totals x;
     memset(&x, 0, sizeof x);
     x.struct_size = sizeof x;
-    s = hg_line_evaluate(l, f, r->in[2].d, &x);
+    s = totals(l, f, r->in[2].d, &x);
     double g[] = {x.head_loss, x.pressure_loss, x.static_head, x.required_head, x.drequired_head_dflow,
                   x.density, x.outlet_pressure, x.warnings, (double)x.element_count, x.head_loss_low,
                   x.head_loss_high, x.required_head_low, x.required_head_high};
@@ -87,7 +135,7 @@ static long check_line_record(const record *r, int quiet) {
     hg_element_result e;
     memset(&e, 0, sizeof e);
     e.struct_size = sizeof e;
-    s = hg_line_element(l, f, r->in[2].d, (size_t)r->in[3].i, &e);
+    s = element_row(l, f, r->in[2].d, (size_t)r->in[3].i, &e);
     double g[] = {e.velocity, e.reynolds, e.friction_factor, e.k, e.head_loss, e.dhead_dflow,
                   e.pressure_out, e.warnings, e.head_loss_low, e.head_loss_high};
     memcpy(got, g, sizeof g), ngot = 10;
@@ -97,10 +145,10 @@ static long check_line_record(const record *r, int quiet) {
     hg_line *u = NULL;
     s = hg_line_with_uniform_diameter(l, r->in[2].d, &u);
     if (s == HG_OK) {
-      hg_line_result x;
+      hg_line_totals x;
       memset(&x, 0, sizeof x);
       x.struct_size = sizeof x;
-      s = hg_line_evaluate(u, f, 2e-3, &x);
+      s = totals(u, f, 2e-3, &x);
       got[0] = x.head_loss, got[1] = x.required_head, got[2] = x.head_loss_high, ngot = 3;
     }
     hg_line_free(u);
@@ -110,7 +158,7 @@ static long check_line_record(const record *r, int quiet) {
     char name[64] = "";
     size_t need = 0;
     double share = -1;
-    s = hg_line_band_source(l, f, r->in[2].d, (size_t)r->in[3].i, name, sizeof name, &need, &share);
+    s = band_source(l, f, r->in[2].d, (size_t)r->in[3].i, name, sizeof name, &need, &share);
     int same = r->err ? s == code_of_kind(r->kind) && msg_len() > 0
                       : s == HG_OK && strcmp(name, r->out[0].s) == 0 && need == strlen(name) &&
                             bits_of(share) == bits_of(r->out[1].d);
@@ -120,7 +168,7 @@ static long check_line_record(const record *r, int quiet) {
     char name[64] = "";
     size_t need = 0;
     double share = -1;
-    s = hg_line_element_band_source(l, f, r->in[2].d, (size_t)r->in[3].i, (size_t)r->in[4].i, name, sizeof name,
+    s = element_band_source(l, f, r->in[2].d, (size_t)r->in[3].i, (size_t)r->in[4].i, name, sizeof name,
                                     &need, &share);
     int same = r->err ? s == code_of_kind(r->kind) && msg_len() > 0
                       : s == HG_OK && strcmp(name, r->out[0].s) == 0 && need == strlen(name) &&
@@ -128,10 +176,10 @@ static long check_line_record(const record *r, int quiet) {
     if (!quiet) CHECK(same, "element %lld source %lld: status %d '%s'", r->in[3].i, r->in[4].i, s, name);
     return !same;
   } else if (strcmp(r->tag, "line_eval_at") == 0) {
-    hg_line_result x;
+    hg_line_totals x;
     memset(&x, 0, sizeof x);
     x.struct_size = sizeof x;
-    s = hg_line_evaluate_at(l, f, r->in[2].d, r->in[3].d, &x);
+    s = totals_at(l, f, r->in[2].d, r->in[3].d, &x);
     double g[] = {x.head_loss, x.pressure_loss, x.required_head, x.inlet_pressure, x.outlet_pressure,
                   x.warnings, x.required_head_low, x.required_head_high};
     memcpy(got, g, sizeof g), ngot = 8;
@@ -326,22 +374,22 @@ static void test_more_elements_bad_input(void) {
   u.friction_model = 0, u.roughness = 0, u.fluid = 0, u.fittings = 0, u.equipment = 0;
   CHECK(hg_line_set_uncertainty(l, &u) == HG_OK, "no sources");
   CHECK(hg_fluid_liquid(998.2, 1e-3, &f) == HG_OK, "liquid");
-  hg_line_result x;
+  hg_line_totals x;
   x.struct_size = sizeof x;
-  CHECK(hg_line_evaluate(l, f, 2e-3, &x) == HG_OK && x.head_loss_low == x.head_loss && x.head_loss_high == x.head_loss,
+  CHECK(totals(l, f, 2e-3, &x) == HG_OK && x.head_loss_low == x.head_loss && x.head_loss_high == x.head_loss,
         "a band without sources has no width");
   char name[32];
   size_t need;
-  CHECK(hg_line_band_source(l, f, 2e-3, 0, name, sizeof name, &need, &a) == HG_ERR_OUT_OF_RANGE, "no source");
+  CHECK(band_source(l, f, 2e-3, 0, name, sizeof name, &need, &a) == HG_ERR_OUT_OF_RANGE, "no source");
   hg_uncertainty_options_default(&u);
   CHECK(hg_line_set_uncertainty(l, &u) == HG_OK, "default sources");
-  CHECK(hg_line_band_source(l, f, 2e-3, 0, name, sizeof name, &need, &a) == HG_OK && a > 0 && a <= 1, "dominant");
-  CHECK(hg_line_band_source(l, f, 2e-3, 0, name, 2, &need, &a) == HG_ERR_BUFFER_TOO_SMALL && strlen(name) == 1, "cut");
-  CHECK(hg_line_band_source(l, f, 2e-3, 0, name, sizeof name, NULL, &a) == HG_ERR_NULL_POINTER, "NULL needed");
-  CHECK(hg_line_band_source(l, f, 2e-3, 0, name, sizeof name, &need, NULL) == HG_ERR_NULL_POINTER, "NULL share");
-  CHECK(hg_line_band_source(NULL, f, 2e-3, 0, name, sizeof name, &need, &a) == HG_ERR_NULL_POINTER, "NULL line");
-  CHECK(hg_line_band_source(l, NULL, 2e-3, 0, name, sizeof name, &need, &a) == HG_ERR_NULL_POINTER, "NULL fluid");
-  CHECK(hg_line_band_source(l, f, NAN, 0, name, sizeof name, &need, &a) == HG_ERR_NOT_FINITE, "NaN flow");
+  CHECK(band_source(l, f, 2e-3, 0, name, sizeof name, &need, &a) == HG_OK && a > 0 && a <= 1, "dominant");
+  CHECK(band_source(l, f, 2e-3, 0, name, 2, &need, &a) == HG_ERR_BUFFER_TOO_SMALL && strlen(name) == 1, "cut");
+  CHECK(band_source(l, f, 2e-3, 0, name, sizeof name, NULL, &a) == HG_ERR_NULL_POINTER, "NULL needed");
+  CHECK(band_source(l, f, 2e-3, 0, name, sizeof name, &need, NULL) == HG_ERR_NULL_POINTER, "NULL share");
+  CHECK(band_source(NULL, f, 2e-3, 0, name, sizeof name, &need, &a) == HG_ERR_NULL_POINTER, "NULL line");
+  CHECK(band_source(l, NULL, 2e-3, 0, name, sizeof name, &need, &a) == HG_ERR_NULL_POINTER, "NULL fluid");
+  CHECK(band_source(l, f, NAN, 0, name, sizeof name, &need, &a) == HG_ERR_NOT_FINITE, "NaN flow");
   CHECK(hg_fluid_with_uncertainty(NULL, 0.1, 0.1, &g) == HG_ERR_NULL_POINTER && g == NULL, "with NULL fluid");
   CHECK(hg_fluid_with_uncertainty(f, 1.5, 0.1, &g) == HG_ERR_OUT_OF_RANGE && g == NULL, "uncertainty 1.5");
   CHECK(hg_fluid_with_uncertainty(f, 0.1, NAN, &g) == HG_ERR_NOT_FINITE && g == NULL, "uncertainty NaN");
@@ -351,7 +399,7 @@ static void test_more_elements_bad_input(void) {
   CHECK(hg_fluid_with_vapour_pressure(f, 2e3, NULL) == HG_ERR_NULL_POINTER, "vapour NULL out");
   CHECK(hg_fluid_with_vapour_pressure(f, 2.5e5, &g) == HG_OK && g != NULL, "vapour pressure");
   CHECK(hg_line_set_inlet_pressure(l, 1.5e5) == HG_OK, "inlet");
-  CHECK(hg_line_evaluate(l, g, 5e-3, &x) == HG_OK && (x.warnings & HG_WARN_BELOW_VAPOUR_PRESSURE), "cavitation warned");
+  CHECK(totals(l, g, 5e-3, &x) == HG_OK && (x.warnings & HG_WARN_BELOW_VAPOUR_PRESSURE), "cavitation warned");
   CHECK(hg_fluid_properties(g, &a, &b) == HG_OK && a == 998.2 && b == 1e-3, "copy keeps the properties");
   CHECK(hg_fluid_gas(1.2, 1.8e-5, 293.15, 1e5, NULL) == HG_ERR_NULL_POINTER, "gas NULL out");
   CHECK(hg_water_saturation_temperature(1e5, NULL) == HG_ERR_NULL_POINTER, "saturation NULL");
@@ -366,28 +414,28 @@ static void test_more_elements_bad_input(void) {
 static void test_checks(void) {
   const hg_line *l = lines[0];
   hg_fluid *f = fluids[1];
-  hg_line_result x, y;
+  hg_line_totals x, y;
   hg_monte_carlo m;
   x.struct_size = sizeof x, y.struct_size = sizeof y, m.struct_size = sizeof m;
   m.mean = 7.0;
   const double bad[] = {NAN, INFINITY, -INFINITY, -1.0};
   for (int i = 0; i < 4; i++) {
     double v = bad[i];
-    CHECK(hg_line_evaluate_at(l, f, 2e-3, v, &x) == (i < 3 ? HG_ERR_NOT_FINITE : HG_ERR_OUT_OF_RANGE) &&
+    CHECK(totals_at(l, f, 2e-3, v, &x) == (i < 3 ? HG_ERR_NOT_FINITE : HG_ERR_OUT_OF_RANGE) &&
               msg_len() > 0, "inlet %g", v);
-    if (i < 3) CHECK(hg_line_evaluate_at(l, f, v, 2e5, &x) == HG_ERR_NOT_FINITE, "evaluate_at flow %g", v);
+    if (i < 3) CHECK(totals_at(l, f, v, 2e5, &x) == HG_ERR_NOT_FINITE, "evaluate_at flow %g", v);
     if (i < 3) CHECK(hg_line_monte_carlo(l, f, v, 200, 1, &m) == HG_ERR_NOT_FINITE && m.mean == 7.0 && msg_len() > 0,
                      "monte carlo flow %g", v);
   }
   /* 0 means no inlet pressure for this call, whatever the line holds (lines[0] holds 3e5). */
-  CHECK(hg_line_evaluate_at(l, f, 2e-3, 0.0, &x) == HG_OK && x.has_pressures == 0, "no inlet pressure");
-  CHECK(hg_line_evaluate_at(l, f, 2e-3, 3e5, &x) == HG_OK && hg_line_evaluate(l, f, 2e-3, &y) == HG_OK &&
+  CHECK(totals_at(l, f, 2e-3, 0.0, &x) == HG_OK && x.has_pressures == 0, "no inlet pressure");
+  CHECK(totals_at(l, f, 2e-3, 3e5, &x) == HG_OK && totals(l, f, 2e-3, &y) == HG_OK &&
             memcmp(&x, &y, sizeof x) == 0, "at the line's own pressure: the same bytes");
-  CHECK(hg_line_evaluate_at(NULL, f, 2e-3, 2e5, &x) == HG_ERR_NULL_POINTER, "evaluate_at NULL line");
-  CHECK(hg_line_evaluate_at(l, NULL, 2e-3, 2e5, &x) == HG_ERR_NULL_POINTER, "evaluate_at NULL fluid");
-  CHECK(hg_line_evaluate_at(l, f, 2e-3, 2e5, NULL) == HG_ERR_NULL_POINTER, "evaluate_at NULL out");
+  CHECK(totals_at(NULL, f, 2e-3, 2e5, &x) == HG_ERR_NULL_POINTER, "evaluate_at NULL line");
+  CHECK(totals_at(l, NULL, 2e-3, 2e5, &x) == HG_ERR_NULL_POINTER, "evaluate_at NULL fluid");
+  CHECK(totals_at(l, f, 2e-3, 2e5, NULL) == HG_ERR_NULL_POINTER, "evaluate_at NULL out");
   x.struct_size = 0;
-  CHECK(hg_line_evaluate_at(l, f, 2e-3, 2e5, &x) == HG_ERR_INVALID, "evaluate_at struct_size 0");
+  CHECK(totals_at(l, f, 2e-3, 2e5, &x) == HG_ERR_INVALID, "evaluate_at struct_size 0");
   x.struct_size = sizeof x;
   CHECK(hg_line_monte_carlo(NULL, f, 2e-3, 200, 1, &m) == HG_ERR_NULL_POINTER, "monte carlo NULL line");
   CHECK(hg_line_monte_carlo(l, NULL, 2e-3, 200, 1, &m) == HG_ERR_NULL_POINTER, "monte carlo NULL fluid");
@@ -405,7 +453,7 @@ static void test_checks(void) {
             memcmp(&m, &m2, sizeof m) == 0 && m.samples == 500, "same seed, same bytes");
   /* JCGM 101:2008 §8: the first-order (GUM) interval is validated when its ends agree
    * with the Monte Carlo ones; here within 15 % of the band's width at 20000 samples. */
-  CHECK(hg_line_evaluate(l, f, 2e-3, &x) == HG_OK, "evaluate");
+  CHECK(totals(l, f, 2e-3, &x) == HG_OK, "evaluate");
   CHECK(hg_line_monte_carlo(l, f, 2e-3, 20000, 2024, &m) == HG_OK, "20000 samples");
   double width = x.required_head_high - x.required_head_low;
   printf("test_checks: band %.6f … %.6f m, Monte Carlo %.6f … %.6f m (mean %.6f, sd %.6f)\n",
@@ -418,24 +466,24 @@ static void test_checks(void) {
   char name[64];
   size_t need = 0;
   double share = -1;
-  CHECK(hg_line_element_band_source(l, f, 2e-3, 0, 0, name, sizeof name, &need, &share) == HG_OK && share > 0 &&
+  CHECK(element_band_source(l, f, 2e-3, 0, 0, name, sizeof name, &need, &share) == HG_OK && share > 0 &&
             share <= 1 && strcmp(name, "friction model") == 0, "pipe band: '%s' %g", name, share);
-  CHECK(hg_line_element_band_source(l, f, 2e-3, 3, 0, name, sizeof name, &need, &share) == HG_ERR_OUT_OF_RANGE &&
+  CHECK(element_band_source(l, f, 2e-3, 3, 0, name, sizeof name, &need, &share) == HG_ERR_OUT_OF_RANGE &&
             msg_len() > 0, "a rise has no sources");
-  CHECK(hg_line_element_band_source(l, f, 2e-3, 99, 0, name, sizeof name, &need, &share) == HG_ERR_OUT_OF_RANGE,
+  CHECK(element_band_source(l, f, 2e-3, 99, 0, name, sizeof name, &need, &share) == HG_ERR_OUT_OF_RANGE,
         "element past the end");
-  CHECK(hg_line_element_band_source(l, f, 2e-3, 0, SIZE_MAX, name, sizeof name, &need, &share) ==
+  CHECK(element_band_source(l, f, 2e-3, 0, SIZE_MAX, name, sizeof name, &need, &share) ==
             HG_ERR_OUT_OF_RANGE, "source SIZE_MAX");
-  CHECK(hg_line_element_band_source(l, f, 2e-3, 0, 0, name, 3, &need, &share) == HG_ERR_BUFFER_TOO_SMALL &&
+  CHECK(element_band_source(l, f, 2e-3, 0, 0, name, 3, &need, &share) == HG_ERR_BUFFER_TOO_SMALL &&
             strlen(name) == 2 && need == strlen("friction model"), "cut");
-  CHECK(hg_line_element_band_source(l, f, 2e-3, 0, 0, NULL, 0, &need, &share) == HG_ERR_BUFFER_TOO_SMALL, "length");
-  CHECK(hg_line_element_band_source(l, f, 2e-3, 0, 0, NULL, 4, &need, &share) == HG_ERR_NULL_POINTER, "NULL buf");
-  CHECK(hg_line_element_band_source(l, f, 2e-3, 0, 0, name, 8, NULL, &share) == HG_ERR_NULL_POINTER, "NULL needed");
-  CHECK(hg_line_element_band_source(l, f, 2e-3, 0, 0, name, 8, &need, NULL) == HG_ERR_NULL_POINTER, "NULL share");
-  CHECK(hg_line_element_band_source(NULL, f, 2e-3, 0, 0, name, 8, &need, &share) == HG_ERR_NULL_POINTER, "NULL line");
-  CHECK(hg_line_element_band_source(l, NULL, 2e-3, 0, 0, name, 8, &need, &share) == HG_ERR_NULL_POINTER, "NULL fluid");
-  CHECK(hg_line_element_band_source(l, f, NAN, 0, 0, name, 8, &need, &share) == HG_ERR_NOT_FINITE, "NaN flow");
-  CHECK(hg_line_element_band_source(l, f, 0.0, 0, 0, name, 8, &need, &share) == HG_ERR_OUT_OF_RANGE,
+  CHECK(element_band_source(l, f, 2e-3, 0, 0, NULL, 0, &need, &share) == HG_ERR_BUFFER_TOO_SMALL, "length");
+  CHECK(element_band_source(l, f, 2e-3, 0, 0, NULL, 4, &need, &share) == HG_ERR_NULL_POINTER, "NULL buf");
+  CHECK(element_band_source(l, f, 2e-3, 0, 0, name, 8, NULL, &share) == HG_ERR_NULL_POINTER, "NULL needed");
+  CHECK(element_band_source(l, f, 2e-3, 0, 0, name, 8, &need, NULL) == HG_ERR_NULL_POINTER, "NULL share");
+  CHECK(element_band_source(NULL, f, 2e-3, 0, 0, name, 8, &need, &share) == HG_ERR_NULL_POINTER, "NULL line");
+  CHECK(element_band_source(l, NULL, 2e-3, 0, 0, name, 8, &need, &share) == HG_ERR_NULL_POINTER, "NULL fluid");
+  CHECK(element_band_source(l, f, NAN, 0, 0, name, 8, &need, &share) == HG_ERR_NOT_FINITE, "NaN flow");
+  CHECK(element_band_source(l, f, 0.0, 0, 0, name, 8, &need, &share) == HG_ERR_OUT_OF_RANGE,
         "no band at zero flow");
 
   hg_line *d = NULL;
@@ -465,7 +513,7 @@ static void test_checks(void) {
   CHECK(hg_line_add_duct_material(d, HG_SECTION_RECTANGLE, 0.3, 0.2, 10, "galvanized_steel") == HG_OK, "duct");
   CHECK(hg_line_new(&e) == HG_OK && hg_line_add_duct(e, HG_SECTION_RECTANGLE, 0.3, 0.2, 10, typical) == HG_OK &&
             hg_line_set_roughness_range(e, 0, low, high) == HG_OK, "duct by hand");
-  CHECK(hg_line_evaluate(d, fluids[2], 0.5, &x) == HG_OK && hg_line_evaluate(e, fluids[2], 0.5, &y) == HG_OK &&
+  CHECK(totals(d, fluids[2], 0.5, &x) == HG_OK && totals(e, fluids[2], 0.5, &y) == HG_OK &&
             memcmp(&x, &y, sizeof x) == 0, "duct of a material equals the duct by hand");
   hg_line_free(d);
   hg_line_free(e);
@@ -474,7 +522,7 @@ static void test_checks(void) {
 static void test_handles_and_bad_input(void) {
   hg_line *l = NULL;
   hg_fluid *f = NULL;
-  hg_line_result x;
+  hg_line_totals x;
   hg_element_result e;
   double q = 1e-3, a, b, c;
   size_t n = 99, need = 0;
@@ -500,11 +548,11 @@ static void test_handles_and_bad_input(void) {
   CHECK(hg_line_new(&l) == HG_OK && l != NULL, "line_new");
   CHECK(hg_line_count(l, &n) == HG_OK && n == 0, "empty count");
   CHECK(hg_line_count(NULL, &n) == HG_ERR_NULL_POINTER && hg_line_count(l, NULL) == HG_ERR_NULL_POINTER, "count NULL");
-  CHECK(hg_line_evaluate(l, f, q, &x) == HG_ERR_INVALID && msg_len() > 0, "empty line");
+  CHECK(totals(l, f, q, &x) == HG_ERR_INVALID && msg_len() > 0, "empty line");
   CHECK(hg_line_add_fitting(l, "gate_valve", 0.0) == HG_OK, "fitting first");
-  CHECK(hg_line_evaluate(l, f, q, &x) == HG_ERR_INVALID && msg_len() > 0, "fitting with no pipe");
+  CHECK(totals(l, f, q, &x) == HG_ERR_INVALID && msg_len() > 0, "fitting with no pipe");
   CHECK(hg_line_add_pipe(l, 0.05, 10.0, 4.5e-5) == HG_OK, "pipe after it");
-  CHECK(hg_line_evaluate(l, f, q, &x) == HG_OK, "fitting takes the next pipe's bore");
+  CHECK(totals(l, f, q, &x) == HG_OK, "fitting takes the next pipe's bore");
   const double bad[] = {NAN, INFINITY, -INFINITY, -1.0, 0.0};
   for (int i = 0; i < 5; i++) {
     double v = bad[i];
@@ -520,7 +568,7 @@ static void test_handles_and_bad_input(void) {
     CHECK(hg_line_add_equipment(l, "meter", v, 1e-3) != HG_OK, "drop %g", v);
     CHECK(hg_line_add_equipment(l, "meter", 1e4, v) != HG_OK, "at_flow %g", v);
     if (i != 4) CHECK(hg_line_set_inlet_pressure(l, v) != HG_OK && msg_len() > 0, "inlet %g", v);
-    int32_t st = hg_line_evaluate(l, f, v, &x);
+    int32_t st = totals(l, f, v, &x);
     /* -1 m3/s of air would lose far more than its inlet pressure: no solution. */
     CHECK(neg_or_zero ? st == HG_OK || (st == HG_ERR_NO_SOLUTION && msg_len() > 0) : st == HG_ERR_NOT_FINITE,
           "flow %g: %d", v, st);
@@ -550,52 +598,52 @@ static void test_handles_and_bad_input(void) {
   o.turbulent_limit = 4000.0, o.transition = HG_TRANSITION_REFUSE;
   CHECK(hg_line_set_friction_options(l, &o) == HG_OK, "refuse");
   double q_tr = 0.05 * 0.05 * 3.14159 / 4 * 3000.0 * 1.8e-5 / 1.19 / 0.05; /* Re about 3000 in air */
-  CHECK(hg_line_evaluate(l, f, q_tr, &x) == HG_ERR_NO_SOLUTION && msg_len() > 0, "transitional refused");
+  CHECK(totals(l, f, q_tr, &x) == HG_ERR_NO_SOLUTION && msg_len() > 0, "transitional refused");
   hg_friction_options_default(&o);
   CHECK(hg_line_set_friction_options(l, &o) == HG_OK, "defaults back");
   CHECK(hg_line_set_inlet_pressure(l, 0.0) == HG_OK, "clear inlet pressure");
 
-  CHECK(hg_line_evaluate(NULL, f, q, &x) == HG_ERR_NULL_POINTER, "evaluate NULL line");
-  CHECK(hg_line_evaluate(l, NULL, q, &x) == HG_ERR_NULL_POINTER, "evaluate NULL fluid");
-  CHECK(hg_line_evaluate(l, f, q, NULL) == HG_ERR_NULL_POINTER, "evaluate NULL out");
-  x.struct_size = offsetof(hg_line_result, head_loss_low);
-  CHECK(hg_line_evaluate(l, f, q, &x) == HG_ERR_INVALID && msg_len() > 0, "struct_size below the first release");
+  CHECK(totals(NULL, f, q, &x) == HG_ERR_NULL_POINTER, "evaluate NULL line");
+  CHECK(totals(l, NULL, q, &x) == HG_ERR_NULL_POINTER, "evaluate NULL fluid");
+  CHECK(totals(l, f, q, NULL) == HG_ERR_NULL_POINTER, "evaluate NULL out");
+  x.struct_size = offsetof(hg_line_totals, head_loss_low);
+  CHECK(totals(l, f, q, &x) == HG_ERR_INVALID && msg_len() > 0, "struct_size below the first release");
   /* A newer caller's larger struct: the library fills what it knows and leaves the rest. */
-  unsigned char big[sizeof(hg_line_result) + 64];
+  unsigned char big[sizeof(hg_line_totals) + 64];
   memset(big, 0xAB, sizeof big);
-  hg_line_result *xb = (hg_line_result *)(void *)big;
+  hg_line_totals *xb = (hg_line_totals *)(void *)big;
   xb->struct_size = sizeof big;
-  CHECK(hg_line_evaluate(l, f, q, xb) == HG_OK && xb->struct_size == sizeof big, "larger struct");
+  CHECK(totals(l, f, q, xb) == HG_OK && xb->struct_size == sizeof big, "larger struct");
   int tail_ok = 1;
-  for (size_t i = sizeof(hg_line_result); i < sizeof big; i++) tail_ok &= big[i] == 0xAB;
+  for (size_t i = sizeof(hg_line_totals); i < sizeof big; i++) tail_ok &= big[i] == 0xAB;
   CHECK(tail_ok && xb->element_count == 2, "bytes past our struct untouched");
   x.struct_size = sizeof x;
-  CHECK(hg_line_evaluate(l, f, q, &x) == HG_OK && x.has_pressures == 1 && x.inlet_pressure == 1e5,
+  CHECK(totals(l, f, q, &x) == HG_OK && x.has_pressures == 1 && x.inlet_pressure == 1e5,
         "a gas carries its own pressure");
 
-  CHECK(hg_line_element(l, f, q, 1, &e) == HG_OK && e.kind == HG_ELEMENT_PIPE && e.regime == HG_REGIME_LAMINAR && e.reynolds > 0,
+  CHECK(element_row(l, f, q, 1, &e) == HG_OK && e.kind == HG_ELEMENT_PIPE && e.regime == HG_REGIME_LAMINAR && e.reynolds > 0,
         "element 1 is the pipe");
-  CHECK(hg_line_element(l, f, q, 0, &e) == HG_OK && e.kind == HG_ELEMENT_FITTING && e.regime == -1 && e.k > 0,
+  CHECK(element_row(l, f, q, 0, &e) == HG_OK && e.kind == HG_ELEMENT_FITTING && e.regime == -1 && e.k > 0,
         "element 0 is the valve");
-  CHECK(hg_line_element(l, f, q, 2, &e) == HG_ERR_OUT_OF_RANGE && msg_len() > 0, "index past the end");
-  CHECK(hg_line_element(l, f, q, SIZE_MAX, &e) == HG_ERR_OUT_OF_RANGE, "index SIZE_MAX");
-  CHECK(hg_line_element(NULL, f, q, 0, &e) == HG_ERR_NULL_POINTER, "element NULL line");
-  CHECK(hg_line_element(l, NULL, q, 0, &e) == HG_ERR_NULL_POINTER, "element NULL fluid");
-  CHECK(hg_line_element(l, f, q, 0, NULL) == HG_ERR_NULL_POINTER, "element NULL out");
-  CHECK(hg_line_element(l, f, NAN, 0, &e) == HG_ERR_NOT_FINITE, "element NaN flow");
+  CHECK(element_row(l, f, q, 2, &e) == HG_ERR_OUT_OF_RANGE && msg_len() > 0, "index past the end");
+  CHECK(element_row(l, f, q, SIZE_MAX, &e) == HG_ERR_OUT_OF_RANGE, "index SIZE_MAX");
+  CHECK(element_row(NULL, f, q, 0, &e) == HG_ERR_NULL_POINTER, "element NULL line");
+  CHECK(element_row(l, NULL, q, 0, &e) == HG_ERR_NULL_POINTER, "element NULL fluid");
+  CHECK(element_row(l, f, q, 0, NULL) == HG_ERR_NULL_POINTER, "element NULL out");
+  CHECK(element_row(l, f, NAN, 0, &e) == HG_ERR_NOT_FINITE, "element NaN flow");
   e.struct_size = 0;
-  CHECK(hg_line_element(l, f, q, 0, &e) == HG_ERR_INVALID, "element struct_size 0");
+  CHECK(element_row(l, f, q, 0, &e) == HG_ERR_INVALID, "element struct_size 0");
 
-  CHECK(hg_line_element_label(l, f, q, 0, buf, sizeof buf, &need) == HG_OK && strcmp(buf, "gate_valve") == 0 &&
+  CHECK(element_label(l, f, q, 0, buf, sizeof buf, &need) == HG_OK && strcmp(buf, "gate_valve") == 0 &&
             need == 10, "label '%s'", buf);
-  CHECK(hg_line_element_label(l, f, q, 1, buf, sizeof buf, &need) == HG_OK && strcmp(buf, "pipe") == 0, "label pipe");
-  CHECK(hg_line_element_label(l, f, q, 0, buf, 4, &need) == HG_ERR_BUFFER_TOO_SMALL && strcmp(buf, "gat") == 0 &&
+  CHECK(element_label(l, f, q, 1, buf, sizeof buf, &need) == HG_OK && strcmp(buf, "pipe") == 0, "label pipe");
+  CHECK(element_label(l, f, q, 0, buf, 4, &need) == HG_ERR_BUFFER_TOO_SMALL && strcmp(buf, "gat") == 0 &&
             need == 10, "label cut");
-  CHECK(hg_line_element_label(l, f, q, 0, NULL, 0, &need) == HG_ERR_BUFFER_TOO_SMALL && need == 10, "label length");
-  CHECK(hg_line_element_label(l, f, q, 0, NULL, 8, &need) == HG_ERR_NULL_POINTER, "label NULL buf");
-  CHECK(hg_line_element_label(l, f, q, 0, buf, sizeof buf, NULL) == HG_ERR_NULL_POINTER, "label NULL needed");
-  CHECK(hg_line_element_label(l, f, q, 5, buf, sizeof buf, &need) == HG_ERR_OUT_OF_RANGE, "label index");
-  CHECK(hg_line_element_label(NULL, f, q, 0, buf, sizeof buf, &need) == HG_ERR_NULL_POINTER, "label NULL line");
+  CHECK(element_label(l, f, q, 0, NULL, 0, &need) == HG_ERR_BUFFER_TOO_SMALL && need == 10, "label length");
+  CHECK(element_label(l, f, q, 0, NULL, 8, &need) == HG_ERR_NULL_POINTER, "label NULL buf");
+  CHECK(element_label(l, f, q, 0, buf, sizeof buf, NULL) == HG_ERR_NULL_POINTER, "label NULL needed");
+  CHECK(element_label(l, f, q, 5, buf, sizeof buf, &need) == HG_ERR_OUT_OF_RANGE, "label index");
+  CHECK(element_label(NULL, f, q, 0, buf, sizeof buf, &need) == HG_ERR_NULL_POINTER, "label NULL line");
 
   CHECK(hg_line_required_head(NULL, f, q, &a, &b) == HG_ERR_NULL_POINTER, "required NULL line");
   CHECK(hg_line_required_head(l, NULL, q, &a, &b) == HG_ERR_NULL_POINTER, "required NULL fluid");
@@ -618,7 +666,7 @@ static void test_handles_and_bad_input(void) {
   CHECK(hg_line_flow_for_head(l, f, 1, &a, &b, NULL) == HG_ERR_NULL_POINTER, "solve NULL high");
   CHECK(hg_line_flow_for_head(l, f, 1.0, &a, &b, &c) == HG_OK && b <= a && a <= c, "solve band");
   /* Round trip: the required head at the solved flow is the head asked for. */
-  CHECK(hg_line_evaluate(l, f, a, &x) == HG_OK && fabs(x.required_head - 1.0) < 1e-9, "round trip %.17g",
+  CHECK(totals(l, f, a, &x) == HG_OK && fabs(x.required_head - 1.0) < 1e-9, "round trip %.17g",
         x.required_head);
 
   double qs[3] = {1e-3, 2e-3, NAN}, hs[3] = {7, 7, 7};
@@ -631,6 +679,109 @@ static void test_handles_and_bad_input(void) {
   CHECK(hg_line_system_curve(l, f, qs, 2, hs) == HG_OK && hs[2] == 7, "curve writes n heads");
   hg_line_free(l);
   hg_fluid_free(f);
+}
+
+/* The result handle: one evaluation read many times, outputs untouched on failure, the
+ * not-applicable flags, the smallest struct sizes of the first release, and a result that
+ * outlives its line and fluid. */
+static void test_result_handle(void) {
+  hg_line *l = NULL;
+  hg_fluid *f = NULL;
+  CHECK(hg_line_new(&l) == HG_OK && hg_fluid_water(293.15, 2e5, &f) == HG_OK, "handles");
+  CHECK(hg_line_add_pipe_material(l, 0.05, 30.0, "commercial_steel") == HG_OK && hg_line_add_rise(l, 2.0) == HG_OK &&
+            hg_line_add_fitting(l, "gate_valve", 0.0) == HG_OK, "a pipe, a rise, a valve");
+  hg_line_result *sentinel = (hg_line_result *)(void *)&sentinel, *r = sentinel;
+  CHECK(hg_line_evaluate(l, f, NAN, &r) == HG_ERR_NOT_FINITE && r == sentinel, "failure leaves *out");
+  CHECK(hg_line_evaluate_at(l, f, 2e-3, -1.0, &r) == HG_ERR_OUT_OF_RANGE && r == sentinel, "evaluate_at leaves *out");
+  CHECK(hg_line_evaluate(NULL, f, 2e-3, &r) == HG_ERR_NULL_POINTER && r == sentinel, "NULL line");
+  CHECK(hg_line_evaluate(l, NULL, 2e-3, &r) == HG_ERR_NULL_POINTER && r == sentinel, "NULL fluid");
+  CHECK(hg_line_evaluate(l, f, 2e-3, NULL) == HG_ERR_NULL_POINTER && msg_len() > 0, "NULL out");
+  CHECK(hg_line_evaluate_at(l, f, 2e-3, 0.0, NULL) == HG_ERR_NULL_POINTER, "evaluate_at NULL out");
+  hg_line_result_free(NULL);
+  CHECK(hg_line_evaluate(l, f, 2e-3, &r) == HG_OK && r != sentinel && r != NULL, "evaluate");
+  /* The result keeps its own numbers: free the line and fluid first. */
+  hg_line_free(l);
+  hg_fluid_free(f);
+
+  hg_line_totals t;
+  memset(&t, 0x5A, sizeof t);
+  t.struct_size = sizeof t;
+  CHECK(hg_line_result_totals(NULL, &t) == HG_ERR_NULL_POINTER, "totals NULL result");
+  CHECK(hg_line_result_totals(r, NULL) == HG_ERR_NULL_POINTER, "totals NULL out");
+  CHECK(hg_line_result_totals(r, &t) == HG_OK && t.element_count == 3 && t.band_source_count > 0, "totals");
+  double share_sum = 0, share = -7;
+  char name[64];
+  size_t need = 0;
+  for (size_t k = 0; k < t.band_source_count; k++) {
+    CHECK(hg_line_result_band_source(r, k, name, sizeof name, &need, &share) == HG_OK && need == strlen(name), "src");
+    share_sum += share;
+  }
+  CHECK(fabs(share_sum - 1.0) < 1e-12, "the shares of a band sum to 1 (exact by construction): %.17g", share_sum);
+  CHECK(hg_line_result_band_source(r, t.band_source_count, name, sizeof name, &need, &share) == HG_ERR_OUT_OF_RANGE &&
+            msg_len() > 0, "past the last source");
+  /* A NULL buffer asks for the length: *needed is written, *share is not. */
+  share = -7, need = 0;
+  CHECK(hg_line_result_band_source(r, 0, NULL, 0, &need, &share) == HG_ERR_BUFFER_TOO_SMALL && need > 0 && share == -7,
+        "length only: share untouched");
+  CHECK(hg_line_result_band_source(r, 0, name, 2, &need, &share) == HG_ERR_BUFFER_TOO_SMALL && strlen(name) == 1 &&
+            share == -7, "cut name: share untouched");
+  CHECK(hg_line_result_band_source(r, 0, NULL, 4, &need, &share) == HG_ERR_NULL_POINTER, "NULL buf, len 4");
+  CHECK(hg_line_result_band_source(r, 0, name, sizeof name, NULL, &share) == HG_ERR_NULL_POINTER, "NULL needed");
+  CHECK(hg_line_result_band_source(r, 0, name, sizeof name, &need, NULL) == HG_ERR_NULL_POINTER, "NULL share");
+  CHECK(hg_line_result_band_source(NULL, 0, name, sizeof name, &need, &share) == HG_ERR_NULL_POINTER, "NULL result");
+
+  hg_element_result e[3];
+  for (size_t i = 0; i < 3; i++) {
+    memset(&e[i], 0x5A, sizeof e[i]);
+    e[i].struct_size = sizeof e[i];
+    CHECK(hg_line_result_element(r, i, &e[i]) == HG_OK, "element %zu", i);
+  }
+  CHECK(e[0].kind == HG_ELEMENT_PIPE && e[0].has_velocity && e[0].has_friction_factor && !e[0].has_k &&
+            e[0].k == 0 && e[0].regime == HG_REGIME_TURBULENT && e[0].band_source_count > 0, "pipe flags");
+  CHECK(e[1].kind == HG_ELEMENT_RISE && !e[1].has_velocity && !e[1].has_friction_factor && !e[1].has_k &&
+            e[1].velocity == 0 && e[1].regime == HG_REGIME_NONE && e[1].band_source_count == 0, "rise flags");
+  CHECK(e[2].kind == HG_ELEMENT_FITTING && e[2].has_velocity && !e[2].has_friction_factor && e[2].has_k && e[2].k > 0,
+        "valve flags");
+  CHECK(hg_line_result_element(r, 3, &e[0]) == HG_ERR_OUT_OF_RANGE && msg_len() > 0, "index past the end");
+  CHECK(hg_line_result_element(r, SIZE_MAX, &e[0]) == HG_ERR_OUT_OF_RANGE, "index SIZE_MAX");
+  /* The message gives SIZE_MAX exactly, not rounded through a double. */
+  char msg[256];
+  hg_last_error(msg, sizeof msg);
+  CHECK(strstr(msg, "18446744073709551615") != NULL || SIZE_MAX != 18446744073709551615ULL, "exact: %s", msg);
+  CHECK(hg_line_result_element(NULL, 0, &e[0]) == HG_ERR_NULL_POINTER, "element NULL result");
+  CHECK(hg_line_result_element(r, 0, NULL) == HG_ERR_NULL_POINTER, "element NULL out");
+  share = -7;
+  CHECK(hg_line_result_element_band_source(r, 0, 0, name, sizeof name, &need, &share) == HG_OK && share > 0 &&
+            share <= 1, "pipe source '%s'", name);
+  CHECK(hg_line_result_element_band_source(r, 1, 0, name, sizeof name, &need, &share) == HG_ERR_OUT_OF_RANGE,
+        "a rise has no sources");
+  CHECK(hg_line_result_element_band_source(r, 3, 0, name, sizeof name, &need, &share) == HG_ERR_OUT_OF_RANGE,
+        "element past the end");
+  share = -7;
+  CHECK(hg_line_result_element_band_source(r, 0, 0, NULL, 0, &need, &share) == HG_ERR_BUFFER_TOO_SMALL && share == -7,
+        "element source length only");
+  CHECK(hg_line_result_element_band_source(NULL, 0, 0, name, sizeof name, &need, &share) == HG_ERR_NULL_POINTER,
+        "element source NULL result");
+  CHECK(hg_line_result_label(r, 2, name, sizeof name, &need) == HG_OK && strcmp(name, "gate_valve") == 0, "label");
+  CHECK(hg_line_result_label(r, 1, name, sizeof name, &need) == HG_OK && strcmp(name, "rise") == 0, "rise label");
+  CHECK(hg_line_result_label(r, 3, name, sizeof name, &need) == HG_ERR_OUT_OF_RANGE, "label past the end");
+  CHECK(hg_line_result_label(NULL, 0, name, sizeof name, &need) == HG_ERR_NULL_POINTER, "label NULL result");
+
+#if SIZE_MAX == 18446744073709551615ULL
+  /* The first released layouts (64-bit sizes): a caller compiled against them keeps
+   * working when fields are added, and one byte less is refused. */
+  hg_line_totals t2;
+  t2.struct_size = 152;
+  CHECK(hg_line_result_totals(r, &t2) == HG_OK, "totals of the first release (152 bytes)");
+  t2.struct_size = 151;
+  CHECK(hg_line_result_totals(r, &t2) == HG_ERR_INVALID && msg_len() > 0, "151 bytes");
+  hg_element_result e2;
+  e2.struct_size = 144;
+  CHECK(hg_line_result_element(r, 0, &e2) == HG_OK, "element of the first release (144 bytes)");
+  e2.struct_size = 143;
+  CHECK(hg_line_result_element(r, 0, &e2) == HG_ERR_INVALID, "143 bytes");
+#endif
+  hg_line_result_free(r);
 }
 
 typedef struct {
@@ -696,6 +847,7 @@ int main(int argc, char **argv) {
   test_handles_and_bad_input();
   test_checks();
   test_threads();
+  test_result_handle();
   pthread_t th[8];
   thread_arg args[8];
   for (int i = 0; i < 8; i++) {

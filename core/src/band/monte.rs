@@ -4,8 +4,6 @@
 use crate::error::{Error, Result};
 use crate::fluid::Fluid;
 use crate::line::Line;
-use rand::rngs::StdRng;
-use rand::{Rng, SeedableRng};
 use serde::{Deserialize, Serialize};
 
 /// Summary of a Monte Carlo run on a line's required head.
@@ -32,19 +30,14 @@ pub const MIN_SAMPLES: usize = 100;
 /// 1e6 for a 95 % interval good to two significant digits.
 pub const MAX_SAMPLES: usize = 10_000_000;
 
-/// A standard normal deviate (Box–Muller).
-fn normal(rng: &mut StdRng) -> f64 {
-    let u1: f64 = 1.0 - rng.random::<f64>(); // (0, 1]
-    let u2: f64 = rng.random::<f64>();
-    (-2.0 * u1.ln()).sqrt() * (std::f64::consts::TAU * u2).cos()
-}
-
 /// Samples the line's required head at `flow` (m³/s) `samples` times ([`MIN_SAMPLES`] to
 /// [`MAX_SAMPLES`]) with the uncertainty options of the line, from generator seed `seed`.
 ///
-/// Distributions: friction model, diameter, density and viscosity normal; roughness,
-/// fitting K and equipment ratings rectangular — the same standard uncertainties and the
-/// same correlations as the first-order band.
+/// Each source is drawn once per sample and acts wherever the first-order band lets it
+/// act: friction model, diameter, density and viscosity normal; each roughness source
+/// log-uniform over its stated range (one draw shared by the pipes of one material);
+/// each K source rectangular on ±its spread (one draw shared by the instances of one
+/// catalogue entry); each equipment rectangular on ±its spread.
 ///
 /// # Errors
 /// [`Error::OutOfRange`] for `samples` outside [`MIN_SAMPLES`]..=[`MAX_SAMPLES`]; the
@@ -63,49 +56,8 @@ pub fn monte_carlo(
             format!("must lie between {MIN_SAMPLES} and {MAX_SAMPLES}"),
         ));
     }
-    let (work, q, _) = line.working_fluid(fluid, flow, line.options().inlet_pressure)?;
-    let uo = line.options().uncertainty.clone();
-    let n = line.resolved.len();
-    let own_u: Vec<f64> = (0..n)
-        .map(|i| line.element_state(i, &work, q, None, true).map(|s| s.own_u))
-        .collect::<Result<_>>()?;
-    let own_on: Vec<bool> = (0..n).map(|i| line.own_source_enabled(i)).collect();
-    let mut rng = StdRng::seed_from_u64(seed);
-    let mut values = Vec::with_capacity(samples);
-    let root3 = 3f64.sqrt();
-    for _ in 0..samples {
-        let (dz, vz) = if uo.fluid {
-            (normal(&mut rng), normal(&mut rng))
-        } else {
-            (0.0, 0.0)
-        };
-        let pert = crate::line::Perturbation {
-            model_z: normal(&mut rng),
-            roughness_z: root3 * (2.0 * rng.random::<f64>() - 1.0),
-            diameter: 1.0 + uo.diameter * normal(&mut rng),
-            density: 1.0 + work.density_rel_uncertainty * dz,
-            viscosity: 1.0 + work.viscosity_rel_uncertainty * vz,
-            own: (0..n)
-                .map(|i| {
-                    let xi = 2.0 * rng.random::<f64>() - 1.0;
-                    if own_on[i] {
-                        1.0 + root3 * own_u[i] * xi
-                    } else {
-                        1.0
-                    }
-                })
-                .collect(),
-        };
-        let mut fl = work.clone();
-        fl.density *= pert.density;
-        fl.viscosity *= pert.viscosity;
-        let mut h = 0.0;
-        for i in 0..n {
-            let s = line.element_state(i, &fl, q, Some(&pert), true)?;
-            h += s.head_loss + s.static_head;
-        }
-        values.push(h);
-    }
+    let mut values =
+        crate::line::uncertainty::sample_required_head(line, fluid, flow, samples, seed)?;
     values.sort_by(f64::total_cmp);
     let mean = values.iter().sum::<f64>() / samples as f64;
     let var = values.iter().map(|v| (v - mean) * (v - mean)).sum::<f64>() / (samples - 1) as f64;

@@ -413,7 +413,7 @@ pub fn catalogue_entries() -> &'static [CatalogueEntry] {
 /// # Errors
 /// [`Error::UnknownName`] listing the catalogue when `name` is not in it.
 pub fn entry(name: &str) -> Result<&'static CatalogueEntry> {
-    CATALOGUE.iter().find(|e| e.name == name).ok_or_else(|| {
+    crate::names::find(CATALOGUE.iter(), |e| e.name, name).ok_or_else(|| {
         let names: Vec<&str> = CATALOGUE.iter().map(|e| e.name).collect();
         Error::unknown_name("fitting", name, &names)
     })

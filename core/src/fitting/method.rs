@@ -7,6 +7,7 @@
 use super::Resistance;
 use crate::error::Result;
 use crate::friction::{Correlation, Options, darcy_factor};
+use crate::math;
 use crate::units::{BAR, GPM, INCH, M3_PER_HOUR, PSI};
 use serde::{Deserialize, Serialize};
 use std::f64::consts::PI;
@@ -221,14 +222,14 @@ impl Method {
             },
             Method::ThreeK { k1, k_inf, k_d } => Resistance {
                 k_viscous: k1,
-                k_inertial: k_inf * (1.0 + k_d / (d / INCH).powf(0.3)),
+                k_inertial: k_inf * (1.0 + k_d / math::pow(d / INCH, 0.3)),
             },
             Method::Expansion { d_in, d_out } => {
-                let area_ratio = (d_in / d_out).powi(2);
-                inertial((1.0 - area_ratio).powi(2))
+                let area_ratio = math::powi(d_in / d_out, 2);
+                inertial(math::powi(1.0 - area_ratio, 2))
             }
             Method::Contraction { d_in, d_out } => {
-                let area_ratio = (d_out / d_in).powi(2);
+                let area_ratio = math::powi(d_out / d_in, 2);
                 inertial(0.5 * (1.0 - area_ratio))
             }
             Method::EntranceSharp => inertial(K_ENTRANCE_SHARP),
@@ -243,8 +244,8 @@ impl Method {
                 r_over_d,
                 fully_rough_factor(rel_roughness, d)?,
             )),
-            Method::Cv { cv } => inertial(CV_K_FACTOR * d.powi(4) / (cv * cv)),
-            Method::Kv { kv } => inertial(KV_K_FACTOR * d.powi(4) / (kv * kv)),
+            Method::Cv { cv } => inertial(CV_K_FACTOR * math::powi(d, 4) / (cv * cv)),
+            Method::Kv { kv } => inertial(KV_K_FACTOR * math::powi(d, 4) / (kv * kv)),
         })
     }
 }
@@ -284,6 +285,8 @@ fn rounded_entrance(r_over_d: f64) -> f64 {
 /// the secondary-flow and separation losses.
 fn bend(angle_deg: f64, r_over_d: f64, f: f64) -> f64 {
     let a = angle_deg.to_radians();
-    let s = (a / 2.0).sin();
-    f * a * r_over_d + (0.10 + 2.4 * f) * s + 6.6 * f * (s.sqrt() + s) / r_over_d.powf(4.0 * a / PI)
+    let s = math::sin(a / 2.0);
+    f * a * r_over_d
+        + (0.10 + 2.4 * f) * s
+        + 6.6 * f * (s.sqrt() + s) / math::pow(r_over_d, 4.0 * a / PI)
 }

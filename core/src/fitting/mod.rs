@@ -385,6 +385,12 @@ impl Fitting {
             .map_or_else(|| self.method.source(), |e| e.source)
     }
 
+    /// The catalogue entry this fitting is, if any (every instance of one entry shares
+    /// one K error in the bands).
+    pub fn catalogue_name(&self) -> Option<&str> {
+        self.name.as_deref()
+    }
+
     /// The catalogue name, or the method's name (`"k"`, `"three_k"`, `"expansion"`…).
     pub fn name(&self) -> String {
         match &self.name {

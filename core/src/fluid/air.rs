@@ -11,6 +11,7 @@
 //! practice), which the stated density uncertainty does not cover.
 
 use crate::error::{Result, check};
+use crate::math;
 
 /// Molar gas constant, J/(mol·K) (exact, SI 2019).
 const R_MOLAR: f64 = 8.314_462_618;
@@ -46,7 +47,7 @@ pub(crate) fn density(t: f64, p: f64) -> f64 {
 
 /// Viscosity of dry air (Pa·s), Sutherland's law.
 pub(crate) fn viscosity(t: f64) -> f64 {
-    MU0 * (t / T0).powf(1.5) * (T0 + S) / (t + S)
+    MU0 * math::pow(t / T0, 1.5) * (T0 + S) / (t + S)
 }
 
 /// Relative standard uncertainty of the ideal-gas density: 1e-4 for the composition plus

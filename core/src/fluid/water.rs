@@ -15,6 +15,7 @@
 //!   point (the enhancement is below 0.1 % outside a small region around it, from memory).
 
 use crate::error::{Error, Result, check};
+use crate::math;
 
 /// Specific gas constant of water used by IF97, J/(kg·K).
 const R_WATER: f64 = 461.526;
@@ -139,7 +140,7 @@ pub(crate) fn p_sat_unchecked(t: f64) -> f64 {
     let b = n[2] * theta * theta + n[3] * theta + n[4];
     let c = n[5] * theta * theta + n[6] * theta + n[7];
     let x = 2.0 * c / (-b + (b * b - 4.0 * a * c).sqrt());
-    x.powi(4) * 1e6
+    math::powi(x, 4) * 1e6
 }
 
 /// Saturation temperature of water at pressure `p` (Pa), in K, from the backward equation
@@ -153,7 +154,7 @@ pub(crate) fn p_sat_unchecked(t: f64) -> f64 {
 pub fn water_saturation_temperature(p: f64) -> Result<f64> {
     check::within("pressure", p, WATER_P_SAT_MIN, P_CRITICAL, "Pa")?;
     let n = &SAT;
-    let beta = (p / 1e6).powf(0.25);
+    let beta = math::pow(p / 1e6, 0.25);
     let e = beta * beta + n[2] * beta + n[5];
     let f = n[0] * beta * beta + n[3] * beta + n[6];
     let g = n[1] * beta * beta + n[4] * beta + n[7];
@@ -174,7 +175,7 @@ pub(crate) fn region1_density(t: f64, p: f64) -> f64 {
     let gamma_pi: f64 = REGION1
         .iter()
         .filter(|(i, _, _)| *i > 0)
-        .map(|&(i, j, n)| -n * f64::from(i) * a.powi(i - 1) * b.powi(j))
+        .map(|&(i, j, n)| -n * f64::from(i) * math::powi(a, i - 1) * math::powi(b, j))
         .sum();
     p / (R_WATER * t * pi * gamma_pi)
 }
@@ -187,16 +188,16 @@ pub(crate) fn viscosity_iapws2008(rho: f64, t: f64) -> f64 {
     let denom: f64 = VISC_H0
         .iter()
         .enumerate()
-        .map(|(i, h)| h / tr.powi(i as i32))
+        .map(|(i, h)| h / math::powi(tr, i as i32))
         .sum();
     let mu0 = 100.0 * tr.sqrt() / denom;
     let x = 1.0 / tr - 1.0;
     let y = dr - 1.0;
     let s: f64 = VISC_H1
         .iter()
-        .map(|&(i, j, h)| h * x.powi(i) * y.powi(j))
+        .map(|&(i, j, h)| h * math::powi(x, i) * math::powi(y, j))
         .sum();
-    let mu1 = (dr * s).exp();
+    let mu1 = math::exp(dr * s);
     // μ_ref = 1e-6 Pa·s.
     mu0 * mu1 * 1e-6
 }

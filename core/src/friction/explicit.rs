@@ -7,6 +7,7 @@
 //! the exact Colebrook solution.
 
 use super::colebrook::Solution;
+use crate::math;
 
 /// 2/ln 10.
 const C: f64 = 2.0 / std::f64::consts::LN_10;
@@ -17,9 +18,9 @@ const C: f64 = 2.0 / std::f64::consts::LN_10;
 pub(crate) fn haaland(re: f64, rr: f64) -> Solution {
     let k = 1.8 / std::f64::consts::LN_10;
     let t = rr / 3.7;
-    let tp = t.powf(1.11);
+    let tp = math::pow(t, 1.11);
     let arg = tp + 6.9 / re;
-    let x = -k * arg.ln();
+    let x = -k * math::ln(arg);
     let f = 1.0 / (x * x);
     let df_dx = -2.0 * f / x;
     let dx_darg = -k / arg;
@@ -35,14 +36,14 @@ pub(crate) fn haaland(re: f64, rr: f64) -> Solution {
 ///
 /// Swamee, P. K. and Jain, A. K. (1976), J. Hydraul. Div. ASCE 102(5) 657–664.
 pub(crate) fn swamee_jain(re: f64, rr: f64) -> Solution {
-    let arg = rr / 3.7 + 5.74 * re.powf(-0.9);
-    let l = arg.log10();
+    let arg = rr / 3.7 + 5.74 * math::pow(re, -0.9);
+    let l = math::log10(arg);
     let f = 0.25 / (l * l);
     let df_dl = -2.0 * f / l;
     let dl_darg = 1.0 / (arg * std::f64::consts::LN_10);
     Solution {
         f,
-        df_dre: df_dl * dl_darg * (-0.9 * 5.74 * re.powf(-1.9)),
+        df_dre: df_dl * dl_darg * (-0.9 * 5.74 * math::pow(re, -1.9)),
         df_drel_roughness: df_dl * dl_darg / 3.7,
     }
 }
@@ -54,22 +55,22 @@ pub(crate) fn swamee_jain(re: f64, rr: f64) -> Solution {
 ///
 /// Churchill, S. W. (1977), Chem. Eng. 84(24) 91–92.
 pub(crate) fn churchill(re: f64, rr: f64, lam: f64) -> Solution {
-    let p = (lam / (8.0 * re)).powi(12);
+    let p = math::powi(lam / (8.0 * re), 12);
     let dp_dre = -12.0 * p / re;
-    let r7 = (7.0 / re).powf(0.9);
+    let r7 = math::pow(7.0 / re, 0.9);
     let t = r7 + 0.27 * rr;
-    let l = -2.457 * t.ln();
-    let a = l.powi(16);
+    let l = -2.457 * math::ln(t);
+    let a = math::powi(l, 16);
     let dl_dt = -2.457 / t;
-    let da_dl = 16.0 * l.powi(15);
+    let da_dl = 16.0 * math::powi(l, 15);
     let dt_dre = -0.9 * r7 / re;
-    let b = (37530.0 / re).powi(16);
+    let b = math::powi(37530.0 / re, 16);
     let db_dre = -16.0 * b / re;
     let ab = a + b;
-    let q = ab.powf(-1.5);
+    let q = math::pow(ab, -1.5);
     let dq_dab = -1.5 * q / ab;
     let sum = p + q;
-    let f = 8.0 * sum.powf(1.0 / 12.0);
+    let f = 8.0 * math::pow(sum, 1.0 / 12.0);
     let df_dsum = f / (12.0 * sum);
     let dq_dre = dq_dab * (da_dl * dl_dt * dt_dre + db_dre);
     let dq_drr = dq_dab * da_dl * dl_dt * 0.27;
@@ -89,14 +90,14 @@ pub(crate) fn serghides(re: f64, rr: f64) -> Solution {
     let a0 = rr / 3.7;
     // (value, d/dRe, d/da) of each sweep.
     let va = a0 + 12.0 / re;
-    let xa = -C * va.ln();
+    let xa = -C * math::ln(va);
     let xa_re = -C / va * (-12.0 / (re * re));
     let xa_a = -C / va;
     let sweep = |x: f64, x_re: f64, x_a: f64| {
         let v = a0 + 2.51 * x / re;
         let v_re = 2.51 * (x_re / re - x / (re * re));
         let v_a = 1.0 + 2.51 * x_a / re;
-        (-C * v.ln(), -C / v * v_re, -C / v * v_a)
+        (-C * math::ln(v), -C / v * v_re, -C / v * v_a)
     };
     let (xb, xb_re, xb_a) = sweep(xa, xa_re, xa_a);
     let (xc, xc_re, xc_a) = sweep(xb, xb_re, xb_a);
@@ -126,7 +127,7 @@ pub(crate) fn serghides(re: f64, rr: f64) -> Solution {
 ///
 /// Blasius, H. (1913), Forschungsarbeiten VDI 131.
 pub(crate) fn blasius(re: f64) -> Solution {
-    let f = 0.3164 * re.powf(-0.25);
+    let f = 0.3164 * math::pow(re, -0.25);
     Solution {
         f,
         df_dre: -0.25 * f / re,
@@ -140,7 +141,7 @@ pub(crate) fn blasius(re: f64) -> Solution {
 /// von Kármán, T. (1930); Nikuradse, J. (1933), VDI Forschungsheft 361.
 pub(crate) fn fully_rough(rr: f64) -> Solution {
     let a = rr / 3.7;
-    let x = -C * a.ln();
+    let x = -C * math::ln(a);
     let f = 1.0 / (x * x);
     Solution {
         f,

@@ -13,7 +13,7 @@
 //!
 //! | correlation | validity (published) | published | measured max | stated | source |
 //! |---|---|---|---|---|---|
-//! | Colebrook (exact) | Re 4e3…1e8, ε/D 0…0.05 (chart range) | — | ≤ 2 ulp | ≤ 4 ulp | Colebrook 1939 |
+//! | Colebrook (exact) | Re 4e3…1e8, ε/D 0…0.05 (chart range) | — | ≤ 1 ulp | ≤ 4 ulp | Colebrook 1939 |
 //! | Haaland | Re 4e3…1e8, ε/D 1e-6…0.05 | ±1.5 % | 1.42 % | 1.5 % | Haaland 1983 |
 //! | Swamee–Jain | Re 5e3…1e8, ε/D 1e-6…1e-2 | ±1 % | 2.83 % (Re 5e3, ε/D 1e-2) | 3 % | Swamee & Jain 1976 |
 //! | Churchill | all Re, ε/D 0…0.05 | none stated | 3.14 % (Re ≈ 4.4e3) | 3.5 % | Churchill 1977 |
@@ -142,13 +142,10 @@ impl fmt::Display for Correlation {
 impl FromStr for Correlation {
     type Err = Error;
     fn from_str(s: &str) -> Result<Self> {
-        Correlation::ALL
-            .into_iter()
-            .find(|c| c.name() == s)
-            .ok_or_else(|| {
-                let names: Vec<&str> = Correlation::ALL.iter().map(|c| c.name()).collect();
-                Error::unknown_name("correlation", s, &names)
-            })
+        crate::names::find(Correlation::ALL, |c| c.name(), s).ok_or_else(|| {
+            let names: Vec<&str> = Correlation::ALL.iter().map(|c| c.name()).collect();
+            Error::unknown_name("correlation", s, &names)
+        })
     }
 }
 
@@ -210,13 +207,10 @@ impl fmt::Display for Transition {
 impl FromStr for Transition {
     type Err = Error;
     fn from_str(s: &str) -> Result<Self> {
-        Transition::ALL
-            .into_iter()
-            .find(|t| t.name() == s)
-            .ok_or_else(|| {
-                let names: Vec<&str> = Transition::ALL.iter().map(|t| t.name()).collect();
-                Error::unknown_name("transition", s, &names)
-            })
+        crate::names::find(Transition::ALL, |t| t.name(), s).ok_or_else(|| {
+            let names: Vec<&str> = Transition::ALL.iter().map(|t| t.name()).collect();
+            Error::unknown_name("transition", s, &names)
+        })
     }
 }
 

@@ -5,6 +5,7 @@ use super::{Line, Resolved};
 use crate::error::{Error, Result, check};
 use crate::fluid::Fluid;
 use crate::friction::{self, Correlation, Regime};
+use crate::math;
 use crate::pipe::Pipe;
 use crate::section::Section;
 use crate::units::STANDARD_GRAVITY;
@@ -17,22 +18,21 @@ pub const GAS_WARN_RATIO: f64 = 0.1;
 /// Beyond this share the incompressible treatment is refused (common practice).
 pub const GAS_REFUSE_RATIO: f64 = 0.4;
 
-/// Perturbations of the uncertain inputs. Model and roughness act through one common
-/// standardised variable each, scaled by every pipe's own relative uncertainty (the
-/// sources are fully correlated along the line, as in the first-order band).
+/// Perturbations of the uncertain inputs. The model acts through one common standard
+/// normal deviate, scaled by every pipe's own relative model uncertainty; the sampled
+/// factors of each element's own input are drawn by the caller, one draw per source.
 #[derive(Debug, Clone)]
 pub(crate) struct Perturbation {
     /// Standard normal deviate of the friction model.
     pub model_z: f64,
-    /// Deviate of the roughness, rectangular on [−√3, √3] (unit variance).
-    pub roughness_z: f64,
     /// Factor on every bore.
     pub diameter: f64,
     /// Factor on the density.
     pub density: f64,
     /// Factor on the viscosity.
     pub viscosity: f64,
-    /// Factor on each element's own K or rating (1 for pipes and rises).
+    /// Factor on each element's own uncertain input: a pipe's roughness, a fitting's K,
+    /// an equipment's rating (1 for rises).
     pub own: Vec<f64>,
 }
 
@@ -134,7 +134,7 @@ impl Line {
         } else {
             crate::band::rectangular(opts.correlation.validity().accuracy)
         };
-        let turbulent = turbulent.hypot(explicit);
+        let turbulent = math::hypot(turbulent, explicit);
         match regime {
             Regime::Laminar => uo.laminar_model,
             Regime::Turbulent => turbulent,
@@ -146,7 +146,7 @@ impl Line {
                 match friction::transition_limits(re_t, rr_t, &o) {
                     // ±2u reaches the farther of the two regime values.
                     Ok((fl, ft)) => {
-                        ((f - fl).abs().max((ft - f).abs()) / (2.0 * f)).hypot(turbulent)
+                        math::hypot((f - fl).abs().max((ft - f).abs()) / (2.0 * f), turbulent)
                     }
                     Err(_) => turbulent,
                 }
@@ -176,6 +176,7 @@ impl Line {
                 pipe,
                 geometry,
                 roughness_u,
+                ..
             } => {
                 let roughness_u = if self.options.uncertainty.roughness {
                     *roughness_u
@@ -187,9 +188,8 @@ impl Line {
                 let (pipe, geometry) = match pert {
                     None => (pipe, *geometry),
                     Some(p) => {
-                        let r = (1.0 + p.roughness_z * roughness_u).max(0.0);
                         let perturbed = Pipe {
-                            roughness: pipe.roughness * r,
+                            roughness: pipe.roughness * p.own[i],
                             ..Pipe::new(
                                 scaled_section(&pipe.section, dk)?,
                                 pipe.length,

@@ -16,16 +16,18 @@
 //! take it from is an error when the line is built.
 
 mod eval;
-pub(crate) use eval::Perturbation;
 mod parallel;
 mod result;
+pub mod rows;
 mod sizing;
 mod solve;
+pub(crate) mod uncertainty;
 
 pub use parallel::{Split, split_flow};
 pub use result::{ElementKind, ElementResult, LineResult};
 pub use sizing::{Limit, SizeChoice, Sizing};
 pub use solve::{FlowSolution, OperatingPoint, PumpCurve};
+pub use uncertainty::CurveBand;
 
 use crate::band::UncertaintyOptions;
 use crate::error::{Error, Result, check};
@@ -166,8 +168,12 @@ pub(crate) enum Resolved {
     Pipe {
         pipe: Pipe,
         geometry: crate::pipe::Geometry,
-        /// Relative standard uncertainty of the roughness.
+        /// Standard uncertainty of ln ε (ε log-uniform over its stated range).
         roughness_u: f64,
+        /// Mean of ln ε minus ln of the nominal ε.
+        roughness_shift: f64,
+        /// The range was stated for this pipe alone (its roughness is a source of its own).
+        own_range: bool,
     },
     Fitting {
         bore: f64,
@@ -253,17 +259,13 @@ impl Line {
     }
 
     /// States the likely range (low, high; m) of the roughness of the pipe at `index`, for
-    /// the roughness uncertainty (rectangular between the two).
+    /// the roughness uncertainty (ε log-uniform between the two; that pipe's roughness
+    /// becomes a source of its own). The pipe's roughness must lie inside the range.
+    ///
+    /// # Errors
+    /// `low` not positive, `high` below `low`, either not finite, the pipe's roughness
+    /// outside the range, or `index` not a pipe.
     pub fn set_roughness_range(&mut self, index: usize, low: f64, high: f64) -> Result<()> {
-        check::non_negative("low", low)?;
-        check::non_negative("high", high)?;
-        if high < low {
-            return Err(Error::out_of_range(
-                "high",
-                high,
-                format!("must not be below low ({low})"),
-            ));
-        }
         match self.elements.get(index) {
             Some(Element::Pipe(_)) => {}
             _ => {
@@ -328,23 +330,6 @@ impl Line {
     }
 }
 
-impl Line {
-    /// Whether element `i`'s own K or rating enters the bands.
-    pub(crate) fn own_source_enabled(&self, i: usize) -> bool {
-        let uo = &self.options.uncertainty;
-        match &self.resolved[i] {
-            Resolved::Fitting {
-                equipment: false, ..
-            } => uo.fittings,
-            Resolved::Fitting {
-                equipment: true, ..
-            }
-            | Resolved::Drop { .. } => uo.equipment,
-            _ => false,
-        }
-    }
-}
-
 /// Works out bores, resistances and roughness uncertainties.
 fn resolve(
     elements: &[Element],
@@ -388,15 +373,18 @@ fn resolve(
             Ok((bore, rr, area))
         };
         out.push(match e {
-            Element::Pipe(p) => Resolved::Pipe {
-                pipe: p.clone(),
-                geometry: p.geometry(options.turbulent_diameter),
-                roughness_u: match ranges[i].or(p.roughness_range) {
-                    Some((lo, hi)) if p.roughness > 0.0 => (hi - lo) / 12f64.sqrt() / p.roughness,
-                    Some(_) => 0.0,
-                    None => options.uncertainty.roughness_default,
-                },
-            },
+            Element::Pipe(p) => {
+                let (roughness_u, roughness_shift) =
+                    uncertainty::roughness_input(p, ranges[i], options)
+                        .map_err(|e| e.at_index(i))?;
+                Resolved::Pipe {
+                    pipe: p.clone(),
+                    geometry: p.geometry(options.turbulent_diameter),
+                    roughness_u,
+                    roughness_shift,
+                    own_range: ranges[i].is_some(),
+                }
+            }
             Element::Fitting(f) => {
                 let name = f.name();
                 let (bore, rr, area) = bore_for(f.diameter(), &name)?;

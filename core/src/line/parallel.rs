@@ -9,8 +9,10 @@
 //!
 //! Bands follow from the linearised balance: with `a_i` the change of branch `i`'s head
 //! from one uncertain input, the common head moves by `dH = Σ(a_i/h_i') / Σ(1/h_i')` and
-//! each branch flow by `(dH − a_i)/h_i'`. Line-wide sources (friction model, roughness,
-//! diameter, fluid) act on all branches together; each fitting's K on its own branch.
+//! each branch flow by `(dH − a_i)/h_i'`. Shared causes (friction model, a material's
+//! roughness, a catalogue entry's K, bore tolerance, fluid) act on all branches together;
+//! what an element owns (a user fitting's K, a pipe's own roughness range, equipment) on
+//! its own branch.
 
 use super::Line;
 use crate::band::Band;
@@ -118,16 +120,7 @@ fn bracketed(branches: &[Line], fluid: &Fluid, total: f64) -> Result<Split> {
     with_bands(branches, fluid, flows_at(head)?, head, 0)
 }
 
-/// Line-wide sources keep their names across branches; a branch's own fittings and
-/// equipment are prefixed with the branch index.
-fn is_line_wide(name: &str) -> bool {
-    matches!(
-        name,
-        "friction model" | "roughness" | "diameter" | "density" | "viscosity"
-    )
-}
-
-/// First-order bands of the split (module docs).
+/// The split with its first-order bands (module docs).
 fn with_bands(
     branches: &[Line],
     fluid: &Fluid,
@@ -135,65 +128,12 @@ fn with_bands(
     head: f64,
     iterations: usize,
 ) -> Result<Split> {
-    let mut per_branch = Vec::with_capacity(branches.len());
-    let mut slopes = Vec::with_capacity(branches.len());
-    for (i, (b, &q)) in branches.iter().zip(&flows).enumerate() {
-        let r = b.evaluate(fluid, q)?;
-        let states = super::solve::states_of(b, fluid, &r)?;
-        let sources: Vec<(String, f64)> =
-            super::result::head_sources(b, states.iter().enumerate(), fluid)
-                .into_iter()
-                .map(|(n, u)| {
-                    if is_line_wide(&n) {
-                        (n, u)
-                    } else {
-                        (format!("branch {i}: {n}"), u)
-                    }
-                })
-                .collect();
-        per_branch.push(sources);
-        slopes.push(r.drequired_head_dflow);
-    }
-    let inv_sum: f64 = slopes.iter().map(|d| 1.0 / d).sum();
-    let mut names: Vec<String> = Vec::new();
-    for s in &per_branch {
-        for (n, _) in s {
-            if !names.contains(n) {
-                names.push(n.clone());
-            }
-        }
-    }
-    // a[i][k]: signed head change of branch i from source k (one standard uncertainty).
-    let a: Vec<Vec<f64>> = per_branch
-        .iter()
-        .map(|s| {
-            names
-                .iter()
-                .map(|n| s.iter().filter(|(m, _)| m == n).map(|(_, u)| u).sum())
-                .collect()
-        })
-        .collect();
-    let dh: Vec<f64> = (0..names.len())
-        .map(|k| a.iter().zip(&slopes).map(|(ai, d)| ai[k] / d).sum::<f64>() / inv_sum)
-        .collect();
-    let head_sources: Vec<(String, f64)> = names.iter().cloned().zip(dh.iter().copied()).collect();
-    let flow_bands = flows
-        .iter()
-        .enumerate()
-        .map(|(i, &q)| {
-            let srcs: Vec<(String, f64)> = names
-                .iter()
-                .enumerate()
-                .map(|(k, n)| (n.clone(), (dh[k] - a[i][k]) / slopes[i]))
-                .collect();
-            Band::from_sources(q, &srcs)
-        })
-        .collect();
+    let (head_band, flow_bands) = super::uncertainty::split_bands(branches, fluid, &flows, head)?;
     Ok(Split {
         flows,
         head,
         iterations,
-        head_band: Band::from_sources(head, &head_sources),
+        head_band,
         flow_bands,
     })
 }

@@ -2,6 +2,7 @@
 //! line and the uncertainty bands.
 
 use super::eval::State;
+use super::uncertainty::{self, Sources};
 use super::{Line, Resolved};
 use crate::band::Band;
 use crate::error::{Result, check};
@@ -102,49 +103,6 @@ pub struct LineResult {
     pub required_head_band: Band,
 }
 
-/// Per-source standard uncertainties of a sum of element head losses, m.
-/// `states` pairs each element's index in the line with its state.
-pub(crate) fn head_sources<'a>(
-    line: &Line,
-    states: impl IntoIterator<Item = (usize, &'a State)>,
-    fluid: &Fluid,
-) -> Vec<(String, f64)> {
-    let uo = &line.options.uncertainty;
-    let (mut model, mut rough, mut diam, mut dens, mut visc) = (0.0, 0.0, 0.0, 0.0, 0.0);
-    let mut out = Vec::new();
-    for (i, s) in states {
-        model += s.sens.model * s.model_u;
-        rough += s.sens.roughness * s.roughness_u;
-        diam += s.sens.diameter * uo.diameter;
-        if uo.fluid {
-            dens += s.sens.density * fluid.density_rel_uncertainty;
-            visc += s.sens.viscosity * fluid.viscosity_rel_uncertainty;
-        }
-        if line.own_source_enabled(i) {
-            let own = s.sens.own * s.own_u;
-            match &line.resolved[i] {
-                Resolved::Fitting {
-                    name,
-                    equipment: false,
-                    ..
-                } => out.push((format!("K of {name} (element {i})"), own)),
-                Resolved::Fitting { name, .. } | Resolved::Drop { name, .. } => {
-                    out.push((format!("{name} (element {i})"), own))
-                }
-                _ => {}
-            }
-        }
-    }
-    out.extend([
-        ("friction model".to_string(), model),
-        ("roughness".to_string(), rough),
-        ("diameter".to_string(), diam),
-        ("density".to_string(), dens),
-        ("viscosity".to_string(), visc),
-    ]);
-    out
-}
-
 impl Line {
     /// Evaluates the line at signed flow `flow` (m³/s; at inlet conditions for a gas) with
     /// the inlet pressure of the options.
@@ -190,6 +148,7 @@ impl Line {
         let mut total = inlet.map(|p| p + 0.5 * work.density * first_v * first_v);
         let mut last_v = first_v;
         let mut elements = Vec::with_capacity(states.len());
+        let sources = Sources::of(self);
         for (i, s) in states.iter().enumerate() {
             if s.velocity.is_finite() {
                 last_v = s.velocity;
@@ -203,21 +162,10 @@ impl Line {
                 }
             }
             warnings |= w;
-            elements.push(self.element_result(i, s, &work, pressure_out, w));
+            elements.push(self.element_result(&sources, i, s, &work, pressure_out, w));
         }
-        let sources = head_sources(self, states.iter().enumerate(), &work);
-        let head_loss_band = Band::from_sources(head_loss, &sources);
-        let pressure_sources: Vec<(String, f64)> = sources
-            .iter()
-            .map(|(n, u)| {
-                let extra = if n == "density" && self.options.uncertainty.fluid {
-                    head_loss * work.density_rel_uncertainty
-                } else {
-                    0.0
-                };
-                (n.clone(), (u + extra) * rho_g)
-            })
-            .collect();
+        let bands =
+            uncertainty::line_bands(self, &sources, &states, &work, head_loss, required_head);
         Ok(LineResult {
             flow,
             head_loss,
@@ -229,15 +177,16 @@ impl Line {
             inlet_pressure: inlet,
             outlet_pressure: elements.last().and_then(|e| e.pressure_out),
             warnings,
-            pressure_loss_band: Band::from_sources(rho_g * head_loss, &pressure_sources),
-            required_head_band: head_loss_band.shifted(required_head - head_loss),
-            head_loss_band,
+            pressure_loss_band: bands.pressure_loss,
+            required_head_band: bands.required_head,
+            head_loss_band: bands.head_loss,
             elements,
         })
     }
 
     fn element_result(
         &self,
+        sources: &Sources,
         i: usize,
         s: &State,
         fluid: &Fluid,
@@ -259,29 +208,6 @@ impl Line {
             Resolved::Rise(_) => (ElementKind::Rise, "rise".to_string()),
             Resolved::Drop { name, .. } => (ElementKind::Equipment, name.clone()),
         };
-        let mut sources = head_sources(self, [(i, s)], fluid);
-        sources.retain(|(_, u)| *u != 0.0);
-        let friction_factor_band = s.friction_factor.map(|f| {
-            let uo = &self.options.uncertainty;
-            let (f_re, f_rr) = s.f_sens;
-            let fl = if uo.fluid { 1.0 } else { 0.0 };
-            Band::from_sources(
-                f,
-                &[
-                    ("friction model".to_string(), f * s.model_u),
-                    ("roughness".to_string(), f_rr * s.roughness_u),
-                    ("diameter".to_string(), -(f_re + f_rr) * uo.diameter),
-                    (
-                        "density".to_string(),
-                        f_re * fluid.density_rel_uncertainty * fl,
-                    ),
-                    (
-                        "viscosity".to_string(),
-                        -f_re * fluid.viscosity_rel_uncertainty * fl,
-                    ),
-                ],
-            )
-        });
         ElementResult {
             kind,
             label,
@@ -295,8 +221,8 @@ impl Line {
             static_head: s.static_head,
             pressure_out,
             warnings,
-            head_loss_band: Band::from_sources(s.head_loss, &sources),
-            friction_factor_band,
+            head_loss_band: sources.element_band(self, i, s, fluid),
+            friction_factor_band: sources.friction_factor_band(self, i, s, fluid),
         }
     }
 }

@@ -11,6 +11,7 @@ use super::solve::safeguarded_newton;
 use crate::band::Band;
 use crate::error::{Error, Result, check};
 use crate::fluid::Fluid;
+use crate::math;
 use crate::sizes::{self, PipeSize, PipeTable};
 use serde::{Deserialize, Serialize};
 
@@ -91,12 +92,12 @@ impl Line {
             Limit::PressureLoss(dp) => {
                 check::positive("pressure_loss", dp)?;
                 let excess = |ln_d: f64| -> Result<(f64, f64)> {
-                    let d = ln_d.exp();
+                    let d = math::exp(ln_d);
                     let r = self.with_uniform_diameter(d)?.evaluate(fluid, q)?;
                     // Decreasing in d: negate so the solver sees an increasing function.
                     Ok((dp - r.pressure_loss, f64::NAN))
                 };
-                let (lo, hi) = (D_MIN.ln(), D_MAX.ln());
+                let (lo, hi) = (math::ln(D_MIN), math::ln(D_MAX));
                 if excess(hi)?.0 < 0.0 {
                     return Err(Error::no_solution(format!(
                         "even a {D_MAX} m bore loses more than {dp} Pa at {q} m³/s (the fixed-bore elements alone may exceed it)"
@@ -105,7 +106,7 @@ impl Line {
                 if excess(lo)?.0 >= 0.0 {
                     D_MIN
                 } else {
-                    safeguarded_newton(excess, lo, hi)?.0.exp()
+                    math::exp(safeguarded_newton(excess, lo, hi)?.0)
                 }
             }
         };
@@ -164,7 +165,7 @@ impl Line {
                 Limit::Velocity(v) => {
                     velocity
                         * if banded {
-                            (1.0 - 2.0 * tol).powi(-2)
+                            math::powi(1.0 - 2.0 * tol, -2)
                         } else {
                             1.0
                         }

@@ -6,10 +6,11 @@
 //! Newton step would leave the bracket. Convergence is therefore guaranteed, and the
 //! iteration count is bounded.
 
-use super::Line;
+use super::{Line, uncertainty};
 use crate::band::Band;
 use crate::error::{Error, Result, check};
 use crate::fluid::Fluid;
+use crate::math;
 use serde::{Deserialize, Serialize};
 
 /// Iteration cap of the safeguarded Newton solver (bisection alone would need ~2100 steps
@@ -135,14 +136,8 @@ impl Line {
             let (q, it) = safeguarded_newton(g, lo, hi)?;
             (q, it + n)
         };
-        let r = self.evaluate(fluid, flow)?;
-        let slope = r.drequired_head_dflow;
-        let sources = super::result::head_sources(
-            self,
-            states_of(self, fluid, &r)?.iter().enumerate(),
-            fluid,
-        );
-        let flow_band = Band::from_sources(flow, &divide(&sources, slope));
+        let (_, slope) = self.required_head(fluid, flow)?;
+        let flow_band = uncertainty::flow_for_head_band(self, fluid, flow, slope)?;
         Ok(FlowSolution {
             flow,
             head,
@@ -151,25 +146,6 @@ impl Line {
             iterations,
         })
     }
-}
-
-/// Element states at a result's flow (for the band sensitivities).
-pub(crate) fn states_of(
-    line: &Line,
-    fluid: &Fluid,
-    r: &super::LineResult,
-) -> Result<Vec<super::eval::State>> {
-    let (work, q, _) = line.working_fluid(fluid, r.flow, r.inlet_pressure)?;
-    (0..line.resolved.len())
-        .map(|i| line.element_state(i, &work, q, None, true))
-        .collect()
-}
-
-fn divide(sources: &[(String, f64)], by: f64) -> Vec<(String, f64)> {
-    sources
-        .iter()
-        .map(|(n, u)| (n.clone(), if by != 0.0 { u / by } else { 0.0 }))
-        .collect()
 }
 
 /// A pump's head against flow, interpolated by a monotone cubic (Fritsch and Carlson,
@@ -305,7 +281,7 @@ impl PumpCurve {
             }
             let a = m[i] / delta[i];
             let b = m[i + 1] / delta[i];
-            let r = a.hypot(b);
+            let r = math::hypot(a, b);
             if r > 3.0 {
                 let t = 3.0 / r;
                 m[i] = t * a * delta[i];
@@ -405,23 +381,14 @@ impl Line {
             safeguarded_newton(gap, lo, hi)?
         };
         let (head, dpump) = pump.head(flow)?;
-        let r = self.evaluate(fluid, flow)?;
-        let slope = r.drequired_head_dflow - dpump;
-        let sources = super::result::head_sources(
-            self,
-            states_of(self, fluid, &r)?.iter().enumerate(),
-            fluid,
-        );
-        let q_sources = divide(&sources, slope);
-        let h_sources: Vec<(String, f64)> = q_sources
-            .iter()
-            .map(|(n, u)| (n.clone(), u * dpump))
-            .collect();
+        let (_, slope) = self.required_head(fluid, flow)?;
+        let (flow_band, head_band) =
+            uncertainty::operating_point_bands(self, fluid, flow, head, slope, dpump)?;
         Ok(OperatingPoint {
             flow,
             head,
-            flow_band: Band::from_sources(flow, &q_sources),
-            head_band: Band::from_sources(head, &h_sources),
+            flow_band,
+            head_band,
         })
     }
 }

@@ -164,13 +164,10 @@ impl fmt::Display for PipeTable {
 impl FromStr for PipeTable {
     type Err = Error;
     fn from_str(s: &str) -> Result<Self> {
-        PipeTable::ALL
-            .into_iter()
-            .find(|t| t.name() == s)
-            .ok_or_else(|| {
-                let names: Vec<&str> = PipeTable::ALL.iter().map(|t| t.name()).collect();
-                Error::unknown_name("pipe table", s, &names)
-            })
+        crate::names::find(PipeTable::ALL, |t| t.name(), s).ok_or_else(|| {
+            let names: Vec<&str> = PipeTable::ALL.iter().map(|t| t.name()).collect();
+            Error::unknown_name("pipe table", s, &names)
+        })
     }
 }
 

@@ -1,0 +1,626 @@
+//! A line evaluated at one flow, kept as an opaque result: totals, each element's row and
+//! label, and the sources of every band, all read without evaluating again.
+
+use crate::ffi::{self, FfiResult, guard, out_ptr, put, sized};
+use crate::fluid::hg_fluid;
+use crate::friction::regime_code;
+use crate::line::hg_line;
+use hydrograde::band::Contribution;
+use hydrograde::line::{ElementKind, ElementResult, LineResult};
+use std::ffi::c_char;
+
+/// A straight run (pipe or duct).
+pub const HG_ELEMENT_PIPE: i32 = 0;
+/// A fitting (minor loss).
+pub const HG_ELEMENT_FITTING: i32 = 1;
+/// An elevation change.
+pub const HG_ELEMENT_RISE: i32 = 2;
+/// Rated equipment.
+pub const HG_ELEMENT_EQUIPMENT: i32 = 3;
+
+/// The `regime` of an element that has none (every element but a pipe).
+pub const HG_REGIME_NONE: i32 = -1;
+
+/// A line evaluated at one flow: opaque. Made by `hg_line_evaluate` or
+/// `hg_line_evaluate_at`, released by `hg_line_result_free`. It owns a copy of every
+/// number, so it stays valid after the line and the fluid are freed. Reading it is
+/// thread-safe.
+pub struct hg_line_result {
+    result: LineResult,
+}
+
+/// The totals of a line evaluated at one flow, from `hg_line_result_totals`. Set
+/// `struct_size` to `sizeof(hg_line_totals)` before the call; fields added in later
+/// versions go after the existing ones, so an old caller's smaller struct keeps working.
+/// Heads are in m of the flowing fluid. The `*_low` and `*_high` fields bound the
+/// expanded uncertainty (coverage factor k = 2).
+#[repr(C)]
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct hg_line_totals {
+    /// Size of this struct in bytes, set by the caller.
+    pub struct_size: usize,
+    /// The flow, m³/s (signed).
+    pub flow: f64,
+    /// Friction plus minor losses, m (signed with the flow).
+    pub head_loss: f64,
+    /// ρ·g·head_loss, Pa.
+    pub pressure_loss: f64,
+    /// Sum of the rises, m.
+    pub static_head: f64,
+    /// head_loss + static_head, m.
+    pub required_head: f64,
+    /// d(required_head)/dQ, s/m².
+    pub drequired_head_dflow: f64,
+    /// Density the heads refer to, kg/m³ (the mean density for a gas).
+    pub density: f64,
+    /// Static pressure at the inlet, Pa absolute; meaningful only when `has_pressures`
+    /// is 1 (else 0).
+    pub inlet_pressure: f64,
+    /// Static pressure at the outlet, Pa absolute; meaningful only when `has_pressures`
+    /// is 1 (else 0).
+    pub outlet_pressure: f64,
+    /// 1 when the inlet pressure is known (set, or the gas's own), else 0.
+    pub has_pressures: i32,
+    /// Warning bits of the whole line, `HG_WARN_*`.
+    pub warnings: u32,
+    /// Number of elements (rows through `hg_line_result_element`).
+    pub element_count: usize,
+    /// Number of sources of the head-loss band (through `hg_line_result_band_source`);
+    /// 0 for a band of zero width.
+    pub band_source_count: usize,
+    /// Lower end of the head-loss band, m.
+    pub head_loss_low: f64,
+    /// Upper end of the head-loss band, m.
+    pub head_loss_high: f64,
+    /// Lower end of the pressure-loss band, Pa.
+    pub pressure_loss_low: f64,
+    /// Upper end of the pressure-loss band, Pa.
+    pub pressure_loss_high: f64,
+    /// Lower end of the required-head band, m.
+    pub required_head_low: f64,
+    /// Upper end of the required-head band, m.
+    pub required_head_high: f64,
+}
+sized!(hg_line_totals, required_head_high: f64);
+
+/// One element's row of a line evaluated at one flow, from `hg_line_result_element`. Set
+/// `struct_size` to `sizeof(hg_element_result)` before the call. A quantity the element
+/// does not have (a rise's velocity, a pipe's K) has its `has_*` flag at 0 and the value
+/// 0, which is then not a value.
+#[repr(C)]
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct hg_element_result {
+    /// Size of this struct in bytes, set by the caller.
+    pub struct_size: usize,
+    /// What the element is, `HG_ELEMENT_*`.
+    pub kind: i32,
+    /// Flow regime of a pipe, `HG_REGIME_*`; `HG_REGIME_NONE` for other elements.
+    pub regime: i32,
+    /// Mean velocity in the element's bore, m/s (signed); only when `has_velocity`.
+    pub velocity: f64,
+    /// Reynolds number in that bore; only when `has_velocity`.
+    pub reynolds: f64,
+    /// Darcy friction factor; only when `has_friction_factor` (pipes).
+    pub friction_factor: f64,
+    /// Resistance coefficient K at this Reynolds number; only when `has_k` (fittings,
+    /// fixed-K equipment).
+    pub k: f64,
+    /// Head loss, m (signed with the flow; 0 for rises).
+    pub head_loss: f64,
+    /// d(head loss)/dQ, s/m².
+    pub dhead_dflow: f64,
+    /// Elevation change, m (rises; 0 for the others).
+    pub static_head: f64,
+    /// Static pressure at the element's outlet, Pa absolute; only when `has_pressure`.
+    pub pressure_out: f64,
+    /// Warning bits of this element, `HG_WARN_*`.
+    pub warnings: u32,
+    /// 1 when `pressure_out` is known, else 0.
+    pub has_pressure: i32,
+    /// Lower end of the head-loss band, m.
+    pub head_loss_low: f64,
+    /// Upper end of the head-loss band, m.
+    pub head_loss_high: f64,
+    /// Lower end of the friction-factor band; only when `has_friction_factor`.
+    pub friction_factor_low: f64,
+    /// Upper end of the friction-factor band; only when `has_friction_factor`.
+    pub friction_factor_high: f64,
+    /// 1 when `velocity` and `reynolds` apply (every element but a rise), else 0.
+    pub has_velocity: i32,
+    /// 1 when `friction_factor` and its band apply (pipes), else 0.
+    pub has_friction_factor: i32,
+    /// 1 when `k` applies (fittings, fixed-K equipment), else 0.
+    pub has_k: i32,
+    /// Reserved, 0 (keeps the next field aligned alike on every platform).
+    pub reserved: i32,
+    /// Number of sources of this element's head-loss band (through
+    /// `hg_line_result_element_band_source`); 0 for a band of zero width (a rise).
+    pub band_source_count: usize,
+}
+sized!(hg_element_result, band_source_count: usize);
+
+/// A value and its flag: `(value, 1)` when it applies and is finite, else `(0, 0)`.
+fn flagged(x: Option<f64>) -> (f64, i32) {
+    match x {
+        Some(v) if v.is_finite() => (v, 1),
+        _ => (0.0, 0),
+    }
+}
+
+pub(crate) fn totals_to_c(r: &LineResult) -> hg_line_totals {
+    let (inlet_pressure, has_pressures) = flagged(r.inlet_pressure);
+    hg_line_totals {
+        struct_size: std::mem::size_of::<hg_line_totals>(),
+        flow: r.flow,
+        head_loss: r.head_loss,
+        pressure_loss: r.pressure_loss,
+        static_head: r.static_head,
+        required_head: r.required_head,
+        drequired_head_dflow: r.drequired_head_dflow,
+        density: r.density,
+        inlet_pressure,
+        outlet_pressure: r.outlet_pressure.unwrap_or(0.0),
+        has_pressures,
+        warnings: r.warnings.bits(),
+        element_count: r.elements.len(),
+        band_source_count: r.head_loss_band.contributions.len(),
+        head_loss_low: r.head_loss_band.low,
+        head_loss_high: r.head_loss_band.high,
+        pressure_loss_low: r.pressure_loss_band.low,
+        pressure_loss_high: r.pressure_loss_band.high,
+        required_head_low: r.required_head_band.low,
+        required_head_high: r.required_head_band.high,
+    }
+}
+
+pub(crate) fn element_to_c(e: &ElementResult) -> hg_element_result {
+    let kind = match e.kind {
+        ElementKind::Pipe => HG_ELEMENT_PIPE,
+        ElementKind::Fitting => HG_ELEMENT_FITTING,
+        ElementKind::Rise => HG_ELEMENT_RISE,
+        ElementKind::Equipment => HG_ELEMENT_EQUIPMENT,
+    };
+    // The core marks a velocity that does not apply (a rise) with NaN.
+    let (velocity, has_velocity) = flagged(Some(e.velocity));
+    let reynolds = if has_velocity == 1 { e.reynolds } else { 0.0 };
+    let (friction_factor, has_friction_factor) = flagged(e.friction_factor);
+    let (k, has_k) = flagged(e.k);
+    let (pressure_out, has_pressure) = flagged(e.pressure_out);
+    let fb = e
+        .friction_factor_band
+        .as_ref()
+        .filter(|_| has_friction_factor == 1);
+    hg_element_result {
+        struct_size: std::mem::size_of::<hg_element_result>(),
+        kind,
+        regime: e.regime.map_or(HG_REGIME_NONE, regime_code),
+        velocity,
+        reynolds,
+        friction_factor,
+        k,
+        head_loss: e.head_loss,
+        dhead_dflow: e.dhead_dflow,
+        static_head: e.static_head,
+        pressure_out,
+        warnings: e.warnings.bits(),
+        has_pressure,
+        head_loss_low: e.head_loss_band.low,
+        head_loss_high: e.head_loss_band.high,
+        friction_factor_low: fb.map_or(0.0, |b| b.low),
+        friction_factor_high: fb.map_or(0.0, |b| b.high),
+        has_velocity,
+        has_friction_factor,
+        has_k,
+        reserved: 0,
+        band_source_count: e.head_loss_band.contributions.len(),
+    }
+}
+
+/// Stores a new result handle in `*out` (checked before anything is computed).
+///
+/// # Safety
+/// `out` must be NULL or point to a writable `hg_line_result *`.
+unsafe fn give(out: *mut *mut hg_line_result, r: LineResult) -> FfiResult {
+    let h = Box::into_raw(Box::new(hg_line_result { result: r }));
+    // SAFETY: forwarded contract; `out` was checked by the caller, so this cannot fail
+    // and leak `h`.
+    unsafe { put("out", out, h) }
+}
+
+/// Evaluates `line` for `fluid` at signed volumetric flow `flow` (m³/s; at inlet
+/// conditions for a gas) and stores the result in `*out`: a new handle to read with
+/// `hg_line_result_totals`, `hg_line_result_element`, `hg_line_result_label` and the
+/// band-source accessors, then free with `hg_line_result_free`. The line is evaluated
+/// once; reading the result computes nothing.
+///
+/// Returns `HG_OK`; `HG_ERR_NOT_FINITE` for the flow; `HG_ERR_INVALID` for a line that
+/// cannot be built (no elements, a fitting with no bore to refer to);
+/// `HG_ERR_NO_SOLUTION` for transitional flow with `HG_TRANSITION_REFUSE`;
+/// `HG_ERR_OUT_OF_RANGE` for a gas losing more than 40 % of its inlet pressure;
+/// `HG_ERR_NULL_POINTER`. On failure `*out` is left untouched. Thread-safe (the line is
+/// only read).
+///
+/// # Safety
+/// `line` and `fluid` must be NULL or live handles; `out` NULL or a writable
+/// `hg_line_result *`.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_evaluate(
+    line: *const hg_line,
+    fluid: *const hg_fluid,
+    flow: f64,
+    out: *mut *mut hg_line_result,
+) -> i32 {
+    guard(|| {
+        ffi::check_outs(&[out_ptr("out", out)])?;
+        // SAFETY: forwarded contract.
+        let (l, f) = unsafe { (ffi::handle("line", line)?, ffi::handle("fluid", fluid)?) };
+        let r = l.line()?.evaluate(&f.fluid, flow)?;
+        // SAFETY: forwarded contract; checked above.
+        unsafe { give(out, r) }
+    })
+}
+
+/// Evaluates `line` as `hg_line_evaluate`, but with the static pressure at the inlet
+/// given for this call: `inlet_pressure` in Pa absolute (> 0), or 0 for none (a gas then
+/// starts at its own pressure). The line's own setting (`hg_line_set_inlet_pressure`) is
+/// not used and not changed, so threads may evaluate one line at different pressures.
+///
+/// Returns the codes of `hg_line_evaluate`, and `HG_ERR_NOT_FINITE` or
+/// `HG_ERR_OUT_OF_RANGE` for a bad `inlet_pressure`. On failure `*out` is left
+/// untouched. Thread-safe (the line is only read).
+///
+/// # Safety
+/// As `hg_line_evaluate`.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_evaluate_at(
+    line: *const hg_line,
+    fluid: *const hg_fluid,
+    flow: f64,
+    inlet_pressure: f64,
+    out: *mut *mut hg_line_result,
+) -> i32 {
+    guard(|| {
+        ffi::check_outs(&[out_ptr("out", out)])?;
+        // SAFETY: forwarded contract.
+        let (l, f) = unsafe { (ffi::handle("line", line)?, ffi::handle("fluid", fluid)?) };
+        let inlet = (inlet_pressure != 0.0).then_some(inlet_pressure);
+        let r = l.line()?.evaluate_at(&f.fluid, flow, inlet)?;
+        // SAFETY: forwarded contract; checked above.
+        unsafe { give(out, r) }
+    })
+}
+
+/// Releases a result. NULL is accepted and ignored.
+///
+/// # Safety
+/// `result` must be NULL or a live handle from `hg_line_evaluate*`, not used afterwards.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_result_free(result: *mut hg_line_result) {
+    if !result.is_null() {
+        // SAFETY: the handle came from Box::into_raw in `give`.
+        ffi::guard_value((), || drop(unsafe { Box::from_raw(result) }));
+    }
+}
+
+/// Checks a result handle and borrows the core result.
+///
+/// # Safety
+/// `p` must be NULL or a live handle.
+unsafe fn read<'a>(p: *const hg_line_result) -> FfiResult<&'a LineResult> {
+    // SAFETY: forwarded contract.
+    Ok(&unsafe { ffi::handle("result", p)? }.result)
+}
+
+/// The totals of `result` into `*out` (set `out->struct_size` first): flow, losses,
+/// heads with their derivative and bands, pressures, warnings and the counts of elements
+/// and band sources.
+///
+/// Returns `HG_OK`; `HG_ERR_INVALID` for a `struct_size` too small;
+/// `HG_ERR_NULL_POINTER`. Thread-safe.
+///
+/// # Safety
+/// `result` must be NULL or a live handle; `out` NULL or a writable `hg_line_totals` of
+/// `out->struct_size` bytes.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_result_totals(
+    result: *const hg_line_result,
+    out: *mut hg_line_totals,
+) -> i32 {
+    guard(|| {
+        // SAFETY: forwarded contract.
+        unsafe { ffi::check_sized_out("out", out)? };
+        // SAFETY: forwarded contract.
+        let r = unsafe { read(result)? };
+        // SAFETY: forwarded contract.
+        unsafe { ffi::write_sized("out", out, &totals_to_c(r)) }
+    })
+}
+
+fn element(r: &LineResult, index: usize) -> FfiResult<&ElementResult> {
+    r.elements.get(index).ok_or_else(|| {
+        ffi::size_out_of_range(
+            "index",
+            index,
+            format!(
+                "must be less than {} (the number of elements)",
+                r.elements.len()
+            ),
+        )
+    })
+}
+
+/// The row of element `index` (0-based, route order) of `result` into `*out` (set
+/// `out->struct_size` first).
+///
+/// Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` when `index` is not less than the number of
+/// elements; `HG_ERR_INVALID` for a `struct_size` too small; `HG_ERR_NULL_POINTER`.
+/// Thread-safe.
+///
+/// # Safety
+/// `result` must be NULL or a live handle; `out` NULL or a writable `hg_element_result`
+/// of `out->struct_size` bytes.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_result_element(
+    result: *const hg_line_result,
+    index: usize,
+    out: *mut hg_element_result,
+) -> i32 {
+    guard(|| {
+        // SAFETY: forwarded contract.
+        unsafe { ffi::check_sized_out("out", out)? };
+        // SAFETY: forwarded contract.
+        let e = element(unsafe { read(result)? }, index)?;
+        // SAFETY: forwarded contract.
+        unsafe { ffi::write_sized("out", out, &element_to_c(e)) }
+    })
+}
+
+/// Copies the label of element `index` of `result` ("pipe", "rise", the fitting's or
+/// equipment's name) into `buf` (at most `len - 1` bytes and a NUL; `buf` may be NULL
+/// when `len` is 0) and stores its full length in `*needed`.
+///
+/// Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` when `index` is not an element;
+/// `HG_ERR_BUFFER_TOO_SMALL` when the label did not fit (`*needed` and the cut copy are
+/// still written); `HG_ERR_NULL_POINTER`. Thread-safe.
+///
+/// # Safety
+/// `result` must be NULL or a live handle; `buf` NULL or valid for `len` bytes; `needed`
+/// NULL or writable.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_result_label(
+    result: *const hg_line_result,
+    index: usize,
+    buf: *mut c_char,
+    len: usize,
+    needed: *mut usize,
+) -> i32 {
+    guard(|| {
+        ffi::check_outs(&[out_ptr("needed", needed)])?;
+        // SAFETY: forwarded contract.
+        let e = element(unsafe { read(result)? }, index)?;
+        // SAFETY: forwarded contract.
+        unsafe { ffi::copy_name(&e.label, buf, len, needed) }
+    })
+}
+
+/// Copies contribution `source` of `list` out: the name as `copy_name`, then the share,
+/// which is written only when the name fitted.
+///
+/// # Safety
+/// As `copy_name`; `share` NULL or writable.
+unsafe fn give_source(
+    list: &[Contribution],
+    source: usize,
+    what: &str,
+    buf: *mut c_char,
+    len: usize,
+    needed: *mut usize,
+    share: *mut f64,
+) -> FfiResult {
+    ffi::check_outs(&[out_ptr("needed", needed), out_ptr("share", share)])?;
+    let c = list.get(source).ok_or_else(|| {
+        ffi::size_out_of_range(
+            "source",
+            source,
+            format!(
+                "must be less than {} (the number of sources of {what})",
+                list.len()
+            ),
+        )
+    })?;
+    // SAFETY: forwarded contract; checked above.
+    unsafe {
+        ffi::copy_name(&c.source.name(), buf, len, needed)?;
+        put("share", share, c.share)
+    }
+}
+
+/// Source number `source` (0-based, largest share first; fewer than
+/// `hg_line_totals.band_source_count`) of the head-loss band of the whole line in
+/// `result`: its name copied into `buf` (e.g. "friction model", "roughness",
+/// "K of gate_valve (element 2)"; at most `len - 1` bytes and a NUL; full length in
+/// `*needed`) and its share of the variance (0…1) in `*share`. Source 0 is the input
+/// that dominates the band.
+///
+/// Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` when `source` is past the last source (a band
+/// of zero width, as at zero flow, has none); `HG_ERR_BUFFER_TOO_SMALL` when the name did
+/// not fit (`*needed` and the cut copy are written, `*share` is not);
+/// `HG_ERR_NULL_POINTER`. Thread-safe.
+///
+/// # Safety
+/// `result` must be NULL or a live handle; `buf` NULL or valid for `len` bytes; `needed`
+/// and `share` NULL or writable.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_result_band_source(
+    result: *const hg_line_result,
+    source: usize,
+    buf: *mut c_char,
+    len: usize,
+    needed: *mut usize,
+    share: *mut f64,
+) -> i32 {
+    guard(|| {
+        // SAFETY: forwarded contract.
+        let r = unsafe { read(result)? };
+        let list = &r.head_loss_band.contributions;
+        // SAFETY: forwarded contract.
+        unsafe { give_source(list, source, "the line's band", buf, len, needed, share) }
+    })
+}
+
+/// Source number `source` (0-based, largest share first; fewer than
+/// `hg_element_result.band_source_count`) of the head-loss band of element `index`
+/// (0-based, route order) of `result`, as `hg_line_result_band_source` gives them for
+/// the whole line.
+///
+/// Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` when `index` is not an element or `source` is
+/// past the last source (a rise, and any band of zero width, has none);
+/// `HG_ERR_BUFFER_TOO_SMALL` when the name did not fit (`*needed` and the cut copy are
+/// written, `*share` is not); `HG_ERR_NULL_POINTER`. Thread-safe.
+///
+/// # Safety
+/// As `hg_line_result_band_source`.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_result_element_band_source(
+    result: *const hg_line_result,
+    index: usize,
+    source: usize,
+    buf: *mut c_char,
+    len: usize,
+    needed: *mut usize,
+    share: *mut f64,
+) -> i32 {
+    guard(|| {
+        // SAFETY: forwarded contract.
+        let e = element(unsafe { read(result)? }, index)?;
+        let list = &e.head_loss_band.contributions;
+        let what = format!("element {index}'s band");
+        // SAFETY: forwarded contract.
+        unsafe { give_source(list, source, &what, buf, len, needed, share) }
+    })
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use crate::ffi::{HG_ERR_BUFFER_TOO_SMALL, HG_ERR_OUT_OF_RANGE, HG_OK};
+    use crate::fluid::{hg_fluid_free, hg_fluid_water};
+    use crate::line::*;
+    use hydrograde::fitting::Fitting;
+    use hydrograde::fluid::Fluid;
+    use hydrograde::line::{Element, Line};
+    use hydrograde::pipe::Pipe;
+
+    #[test]
+    fn a_result_read_through_c_equals_the_core_result() {
+        let mut l: *mut hg_line = std::ptr::null_mut();
+        let mut f: *mut hg_fluid = std::ptr::null_mut();
+        // SAFETY: valid out-pointers and live handles throughout; freed at the end.
+        unsafe {
+            assert_eq!(hg_line_new(&mut l), HG_OK);
+            assert_eq!(hg_fluid_water(293.15, 2e5, &mut f), HG_OK);
+            assert_eq!(hg_line_add_pipe(l, 0.05, 30.0, 4.5e-5), HG_OK);
+            assert_eq!(hg_line_add_fitting(l, c"gate_valve".as_ptr(), 0.0), HG_OK);
+            assert_eq!(hg_line_add_rise(l, 4.0), HG_OK);
+        }
+        let core = Line::new(vec![
+            Element::Pipe(Pipe::circular(0.05, 30.0, 4.5e-5).unwrap()),
+            Element::Fitting(Fitting::named("gate_valve").unwrap()),
+            Element::rise(4.0).unwrap(),
+        ])
+        .unwrap();
+        let water = Fluid::water(293.15, 2e5).unwrap();
+        for q in [0.0, 1e-5, 3e-3, -3e-3] {
+            let want = core.evaluate(&water, q).unwrap();
+            let mut r: *mut hg_line_result = std::ptr::null_mut();
+            // SAFETY: live handles, valid out-pointer.
+            assert_eq!(unsafe { hg_line_evaluate(l, f, q, &mut r) }, HG_OK);
+            let mut t = totals_to_c(&want);
+            t.head_loss = -1.0;
+            // SAFETY: live handle, valid out-pointer.
+            assert_eq!(unsafe { hg_line_result_totals(r, &mut t) }, HG_OK);
+            assert_eq!(t, totals_to_c(&want));
+            for (i, we) in want.elements.iter().enumerate() {
+                let mut e = element_to_c(we);
+                e.head_loss = -1.0;
+                // SAFETY: live handle, valid out-pointer.
+                assert_eq!(unsafe { hg_line_result_element(r, i, &mut e) }, HG_OK);
+                assert_eq!(e, element_to_c(we));
+            }
+            // A rise has no velocity, K or friction factor: flagged, not 0 as a value.
+            let rise = element_to_c(&want.elements[2]);
+            assert_eq!((rise.has_velocity, rise.has_k), (0, 0));
+            assert_eq!((rise.has_friction_factor, rise.regime), (0, HG_REGIME_NONE));
+            let pipe = element_to_c(&want.elements[0]);
+            // At zero flow the friction factor is undefined (no Reynolds number).
+            assert_eq!(
+                (pipe.has_k, pipe.has_friction_factor),
+                (0, i32::from(q != 0.0))
+            );
+            assert_eq!(element_to_c(&want.elements[1]).has_k, i32::from(q != 0.0));
+            // SAFETY: handle from hg_line_evaluate, not used afterwards.
+            unsafe { hg_line_result_free(r) };
+        }
+        // SAFETY: handles from the constructors above, not used afterwards.
+        unsafe {
+            hg_line_free(l);
+            hg_fluid_free(f);
+            hg_line_result_free(std::ptr::null_mut());
+        }
+    }
+
+    #[test]
+    fn a_band_source_that_does_not_fit_leaves_the_share_alone() {
+        let water = Fluid::water(293.15, 2e5).unwrap();
+        let core = Line::new(vec![Element::Pipe(
+            Pipe::circular(0.05, 30.0, 4.5e-5).unwrap(),
+        )])
+        .unwrap();
+        let want = core.evaluate(&water, 3e-3).unwrap();
+        let first = want.head_loss_band.contributions[0].clone();
+        let r = hg_line_result { result: want };
+        let (mut need, mut share) = (0usize, -7.0);
+        // SAFETY: a live result, valid out-pointers, no buffer with len 0.
+        let s = unsafe {
+            hg_line_result_band_source(&r, 0, std::ptr::null_mut(), 0, &mut need, &mut share)
+        };
+        assert_eq!(
+            (s, need, share),
+            (HG_ERR_BUFFER_TOO_SMALL, first.source.len(), -7.0)
+        );
+        let mut buf = [0 as c_char; 64];
+        // SAFETY: as above, with a buffer of 64 bytes.
+        let s = unsafe {
+            hg_line_result_band_source(&r, 0, buf.as_mut_ptr(), 64, &mut need, &mut share)
+        };
+        assert_eq!((s, share), (HG_OK, first.share));
+        // SAFETY: as above.
+        let s = unsafe {
+            hg_line_result_element_band_source(
+                &r,
+                1,
+                0,
+                buf.as_mut_ptr(),
+                64,
+                &mut need,
+                &mut share,
+            )
+        };
+        assert_eq!(s, HG_ERR_OUT_OF_RANGE);
+    }
+
+    #[test]
+    fn element_kinds_follow_the_core() {
+        for (k, c) in [
+            (ElementKind::Pipe, HG_ELEMENT_PIPE),
+            (ElementKind::Fitting, HG_ELEMENT_FITTING),
+            (ElementKind::Rise, HG_ELEMENT_RISE),
+            (ElementKind::Equipment, HG_ELEMENT_EQUIPMENT),
+        ] {
+            assert_eq!(
+                ["pipe", "fitting", "rise", "equipment"][c as usize],
+                k.name()
+            );
+        }
+    }
+}

@@ -1,0 +1,623 @@
+//! Band propagation for lines: every band of a line's results is built here, from the
+//! per-element sensitivities ([`State::sens`]) that evaluation returns.
+//!
+//! Each element's head loss depends on a handful of sources (friction model, its
+//! roughness source, the bore tolerance, density, viscosity, its own K or rating). The
+//! sources of a line are numbered once per call ([`Sources::of`]); a result's
+//! first-order terms are then accumulated in one pass over the elements into a vector
+//! indexed by source, so every band costs time linear in the number of elements.
+//!
+//! Derived results are linear maps of the head-loss terms: the flow for a head moves by
+//! `−a/h'` for a head change `a`; the operating point by `−a/(h' − h_pump')` in flow and
+//! `h_pump'` times that in head; a parallel split by `dH = Σ(a_i/h_i')/Σ(1/h_i')` in the
+//! common head and `(dH − a_i)/h_i'` in branch `i`'s flow. The same maps carry each
+//! term's shift (an input whose mean is not its nominal value).
+
+use super::eval::{Perturbation, State};
+use super::{Element, Line, LineOptions, Resolved};
+use crate::band::{Band, Source, Term, log_uniform};
+use crate::error::{Error, Result, check};
+use crate::fluid::Fluid;
+use crate::math;
+use crate::pipe::Pipe;
+use crate::units::STANDARD_GRAVITY;
+use rand::rngs::StdRng;
+use rand::{Rng, SeedableRng};
+use rayon::prelude::*;
+use serde::{Deserialize, Serialize};
+use std::collections::HashMap;
+
+/// Source numbers shared by every line.
+const MODEL: u32 = 0;
+const DIAMETER: u32 = 1;
+const DENSITY: u32 = 2;
+const VISCOSITY: u32 = 3;
+/// No source.
+const NONE: u32 = u32::MAX;
+
+/// Standard uncertainty of ln ε and the offset of its mean from ln ε₀ for one pipe:
+/// log-uniform over the range stated for the pipe (`own`) or carried by it (its
+/// material's), else a factor of `exp(√3·roughness_default)` either way; nothing for a
+/// smooth pipe without a range.
+///
+/// # Errors
+/// A range whose low end is not positive, whose high end is below its low end or not
+/// finite, or that does not contain the pipe's roughness.
+pub(crate) fn roughness_input(
+    p: &Pipe,
+    own: Option<(f64, f64)>,
+    options: &LineOptions,
+) -> Result<(f64, f64)> {
+    match own.or(p.roughness_range) {
+        Some((lo, hi)) => {
+            check::positive("low", lo)?;
+            check::positive("high", hi)?;
+            if hi < lo {
+                return Err(Error::out_of_range(
+                    "high",
+                    hi,
+                    format!("must not be below low ({lo} m): the roughness range is inverted"),
+                ));
+            }
+            if !(lo..=hi).contains(&p.roughness) {
+                return Err(Error::out_of_range(
+                    "roughness",
+                    p.roughness,
+                    format!("must lie inside its stated range {lo} … {hi} m"),
+                ));
+            }
+            Ok(log_uniform(p.roughness, lo, hi))
+        }
+        None if p.roughness > 0.0 => Ok((options.uncertainty.roughness_default, 0.0)),
+        None => Ok((0.0, 0.0)),
+    }
+}
+
+/// The sources of one line, numbered: the four shared ones first, then each roughness
+/// and each own K or rating in route order of first appearance.
+pub(crate) struct Sources {
+    list: Vec<Source>,
+    /// Per element: its roughness source (pipes) or [`NONE`].
+    rough: Vec<u32>,
+    /// Per element: its own K or rating source or [`NONE`].
+    own: Vec<u32>,
+    /// Per element: the roughness shift in ln ε (pipes; 0 otherwise).
+    shift: Vec<f64>,
+}
+
+impl Sources {
+    /// Numbers the sources of `line` under its uncertainty options.
+    pub(crate) fn of(line: &Line) -> Sources {
+        let uo = &line.options.uncertainty;
+        let n = line.resolved.len();
+        let mut list = vec![
+            Source::FrictionModel,
+            Source::Diameter,
+            Source::Density,
+            Source::Viscosity,
+        ];
+        let (mut rough, mut own, mut shift) = (vec![NONE; n], vec![NONE; n], vec![0.0; n]);
+        let mut materials: HashMap<&str, u32> = HashMap::new();
+        let mut entries: HashMap<&str, u32> = HashMap::new();
+        let push = |list: &mut Vec<Source>, s: Source| {
+            list.push(s);
+            (list.len() - 1) as u32
+        };
+        for (i, (r, e)) in line.resolved.iter().zip(&line.elements).enumerate() {
+            match (r, e) {
+                (
+                    Resolved::Pipe {
+                        pipe,
+                        own_range,
+                        roughness_shift,
+                        ..
+                    },
+                    _,
+                ) if uo.roughness => {
+                    shift[i] = *roughness_shift;
+                    let shared = pipe
+                        .material
+                        .as_deref()
+                        .filter(|m| !own_range && !uo.independent_materials.iter().any(|x| x == m));
+                    rough[i] = match shared {
+                        Some(m) => match materials.get(m) {
+                            Some(&id) => id,
+                            None => {
+                                let id = push(&mut list, Source::Material(m.to_string()));
+                                materials.insert(m, id);
+                                id
+                            }
+                        },
+                        None => push(&mut list, Source::PipeRoughness { element: i }),
+                    };
+                }
+                (
+                    Resolved::Fitting {
+                        equipment: false, ..
+                    },
+                    Element::Fitting(f),
+                ) if uo.fittings => {
+                    own[i] = match f.catalogue_name() {
+                        Some(name) => match entries.get(name) {
+                            Some(&id) => id,
+                            None => {
+                                let id = push(&mut list, Source::CatalogueK(name.to_string()));
+                                entries.insert(name, id);
+                                id
+                            }
+                        },
+                        None => push(
+                            &mut list,
+                            Source::FittingK {
+                                element: i,
+                                name: f.name(),
+                            },
+                        ),
+                    };
+                }
+                (
+                    Resolved::Fitting {
+                        equipment: true,
+                        name,
+                        ..
+                    }
+                    | Resolved::Drop { name, .. },
+                    _,
+                ) if uo.equipment => {
+                    own[i] = push(
+                        &mut list,
+                        Source::Equipment {
+                            element: i,
+                            name: name.clone(),
+                        },
+                    );
+                }
+                _ => {}
+            }
+        }
+        Sources {
+            list,
+            rough,
+            own,
+            shift,
+        }
+    }
+
+    /// Number of sources.
+    pub(crate) fn len(&self) -> usize {
+        self.list.len()
+    }
+
+    /// The sources in number order.
+    pub(crate) fn list(&self) -> &[Source] {
+        &self.list
+    }
+
+    /// Element `i`'s roughness source number and shift of ln ε, if it has one.
+    pub(crate) fn roughness_of(&self, i: usize) -> Option<(usize, f64)> {
+        (self.rough[i] != NONE).then(|| (self.rough[i] as usize, self.shift[i]))
+    }
+
+    /// Element `i`'s own K or rating source number, if it enters the bands.
+    pub(crate) fn own_of(&self, i: usize) -> Option<usize> {
+        (self.own[i] != NONE).then_some(self.own[i] as usize)
+    }
+
+    /// Calls `f(source, term)` for each source of element `i`'s head loss.
+    fn element_terms(
+        &self,
+        line: &Line,
+        i: usize,
+        s: &State,
+        fluid: &Fluid,
+        mut f: impl FnMut(u32, Term),
+    ) {
+        let uo = &line.options.uncertainty;
+        f(MODEL, Term::of(s.sens.model * s.model_u));
+        if self.rough[i] != NONE {
+            f(
+                self.rough[i],
+                Term {
+                    u: s.sens.roughness * s.roughness_u,
+                    shift: s.sens.roughness * self.shift[i],
+                },
+            );
+        }
+        f(DIAMETER, Term::of(s.sens.diameter * uo.diameter));
+        if uo.fluid {
+            f(
+                DENSITY,
+                Term::of(s.sens.density * fluid.density_rel_uncertainty),
+            );
+            f(
+                VISCOSITY,
+                Term::of(s.sens.viscosity * fluid.viscosity_rel_uncertainty),
+            );
+        }
+        if self.own[i] != NONE {
+            f(self.own[i], Term::of(s.sens.own * s.own_u));
+        }
+    }
+
+    /// Adds the terms of elements' head losses into `acc` (indexed by source).
+    fn accumulate<'a>(
+        &self,
+        line: &Line,
+        states: impl IntoIterator<Item = (usize, &'a State)>,
+        fluid: &Fluid,
+        acc: &mut [Term],
+    ) {
+        for (i, s) in states {
+            self.element_terms(line, i, s, fluid, |k, t| {
+                acc[k as usize] = acc[k as usize].plus(t);
+            });
+        }
+    }
+
+    /// The band of `nominal` from terms indexed by source.
+    fn band(&self, nominal: f64, terms: &[Term]) -> Band {
+        Band::from_terms(
+            nominal,
+            self.list
+                .iter()
+                .zip(terms)
+                .filter(|(_, t)| t.u != 0.0)
+                .map(|(s, t)| (s.clone(), *t)),
+        )
+    }
+
+    /// The band of one element's head loss.
+    pub(crate) fn element_band(&self, line: &Line, i: usize, s: &State, fluid: &Fluid) -> Band {
+        let mut terms: Vec<(Source, Term)> = Vec::with_capacity(6);
+        self.element_terms(line, i, s, fluid, |k, t| {
+            if t.u != 0.0 {
+                terms.push((self.list[k as usize].clone(), t));
+            }
+        });
+        Band::from_terms(s.head_loss, terms)
+    }
+
+    /// The band of one pipe's friction factor, if it has one.
+    pub(crate) fn friction_factor_band(
+        &self,
+        line: &Line,
+        i: usize,
+        s: &State,
+        fluid: &Fluid,
+    ) -> Option<Band> {
+        let f = s.friction_factor?;
+        let uo = &line.options.uncertainty;
+        let (f_re, f_rr) = s.f_sens;
+        let fl = if uo.fluid { 1.0 } else { 0.0 };
+        let mut terms = vec![
+            (Source::FrictionModel, Term::of(f * s.model_u)),
+            (Source::Diameter, Term::of(-(f_re + f_rr) * uo.diameter)),
+            (
+                Source::Density,
+                Term::of(f_re * fluid.density_rel_uncertainty * fl),
+            ),
+            (
+                Source::Viscosity,
+                Term::of(-f_re * fluid.viscosity_rel_uncertainty * fl),
+            ),
+        ];
+        if let Some((k, shift)) = self.roughness_of(i) {
+            terms.push((
+                self.list[k].clone(),
+                Term {
+                    u: f_rr * s.roughness_u,
+                    shift: f_rr * shift,
+                },
+            ));
+        }
+        Some(Band::from_terms(f, terms))
+    }
+}
+
+/// The bands of a line's totals at one flow.
+pub(crate) struct LineBands {
+    pub head_loss: Band,
+    pub pressure_loss: Band,
+    pub required_head: Band,
+}
+
+/// Bands of the totals from the element states (`fluid` the working fluid, `head_loss`
+/// and `required_head` the nominal totals).
+pub(crate) fn line_bands(
+    line: &Line,
+    sources: &Sources,
+    states: &[State],
+    fluid: &Fluid,
+    head_loss: f64,
+    required_head: f64,
+) -> LineBands {
+    let mut acc = vec![Term::default(); sources.len()];
+    sources.accumulate(line, states.iter().enumerate(), fluid, &mut acc);
+    let head = sources.band(head_loss, &acc);
+    let rho_g = fluid.density * STANDARD_GRAVITY;
+    // The pressure loss ρ·g·h also moves with ρ directly.
+    if line.options.uncertainty.fluid {
+        let d = DENSITY as usize;
+        acc[d] = acc[d].plus(Term::of(head_loss * fluid.density_rel_uncertainty));
+    }
+    for t in &mut acc {
+        *t = t.times(rho_g);
+    }
+    LineBands {
+        pressure_loss: sources.band(rho_g * head_loss, &acc),
+        required_head: head.shifted(required_head - head_loss),
+        head_loss: head,
+    }
+}
+
+/// A line's head-loss terms at one flow.
+struct HeadTerms {
+    /// Friction plus minor losses, m.
+    head_loss: f64,
+    /// Required head, m.
+    required: f64,
+    /// d(required head)/dQ, s/m².
+    slope: f64,
+    /// Terms of the head loss, indexed by source.
+    terms: Vec<Term>,
+}
+
+impl HeadTerms {
+    /// The band of the required head, built exactly as [`line_bands`] builds it.
+    fn required_band(&self, sources: &Sources) -> Band {
+        sources
+            .band(self.head_loss, &self.terms)
+            .shifted(self.required - self.head_loss)
+    }
+}
+
+/// Head-loss terms of `line` at signed `flow` (m³/s, at inlet conditions for a gas) with
+/// the line's inlet pressure, in one pass over the elements.
+fn head_terms(line: &Line, sources: &Sources, fluid: &Fluid, flow: f64) -> Result<HeadTerms> {
+    let (work, q, _) = line.working_fluid(fluid, flow, line.options.inlet_pressure)?;
+    let mut acc = vec![Term::default(); sources.len()];
+    let (mut hl, mut h, mut d) = (0.0, 0.0, 0.0);
+    for i in 0..line.resolved.len() {
+        let s = line.element_state(i, &work, q, None, true)?;
+        hl += s.head_loss;
+        h += s.head_loss + s.static_head; // the order of the system curve
+        d += s.dhead_dflow;
+        sources.accumulate(line, [(i, &s)], &work, &mut acc);
+    }
+    let dq = if flow == 0.0 { 1.0 } else { q / flow };
+    Ok(HeadTerms {
+        head_loss: hl,
+        required: h,
+        slope: d * dq,
+        terms: acc,
+    })
+}
+
+/// The band of the flow that balances a head, at the solved `flow` (m³/s) with slope
+/// `slope` = d(required head)/dQ (s/m²): a head change `a` moves the flow by `−a/slope`.
+pub(crate) fn flow_for_head_band(
+    line: &Line,
+    fluid: &Fluid,
+    flow: f64,
+    slope: f64,
+) -> Result<Band> {
+    let sources = Sources::of(line);
+    let ht = head_terms(line, &sources, fluid, flow)?;
+    let c = if slope != 0.0 { -1.0 / slope } else { 0.0 };
+    let terms: Vec<Term> = ht.terms.iter().map(|t| t.times(c)).collect();
+    Ok(sources.band(flow, &terms))
+}
+
+/// The flow and head bands of a pump operating point at `flow` (m³/s) and `head` (m),
+/// with the line's slope `slope` and the pump curve's `dpump` (s/m²).
+pub(crate) fn operating_point_bands(
+    line: &Line,
+    fluid: &Fluid,
+    flow: f64,
+    head: f64,
+    slope: f64,
+    dpump: f64,
+) -> Result<(Band, Band)> {
+    let sources = Sources::of(line);
+    let ht = head_terms(line, &sources, fluid, flow)?;
+    let gap = slope - dpump;
+    let c = if gap != 0.0 { -1.0 / gap } else { 0.0 };
+    let q_terms: Vec<Term> = ht.terms.iter().map(|t| t.times(c)).collect();
+    let h_terms: Vec<Term> = q_terms.iter().map(|t| t.times(dpump)).collect();
+    Ok((sources.band(flow, &q_terms), sources.band(head, &h_terms)))
+}
+
+/// Bands of a parallel split at branch `flows` (m³/s) and common `head` (m): the band of
+/// the head and of each branch flow. Sources an element owns are the branch's own
+/// ([`Source::Branch`]); shared causes (friction model, materials, catalogue entries,
+/// bore tolerance, fluid) act on every branch together.
+pub(crate) fn split_bands(
+    branches: &[Line],
+    fluid: &Fluid,
+    flows: &[f64],
+    head: f64,
+) -> Result<(Band, Vec<Band>)> {
+    let mut keys: Vec<Source> = Vec::new();
+    let mut index: HashMap<Source, usize> = HashMap::new();
+    let mut per_branch: Vec<Vec<(usize, Term)>> = Vec::with_capacity(branches.len());
+    let mut slopes = Vec::with_capacity(branches.len());
+    for (b, (line, &q)) in branches.iter().zip(flows).enumerate() {
+        let sources = Sources::of(line);
+        let ht = head_terms(line, &sources, fluid, q)?;
+        let mut mine = Vec::new();
+        for (s, &t) in sources.list().iter().zip(&ht.terms) {
+            if t.u == 0.0 && t.shift == 0.0 {
+                continue;
+            }
+            let key = if s.is_element_scoped() {
+                Source::Branch {
+                    branch: b,
+                    source: Box::new(s.clone()),
+                }
+            } else {
+                s.clone()
+            };
+            let k = match index.get(&key) {
+                Some(&k) => k,
+                None => {
+                    keys.push(key.clone());
+                    index.insert(key, keys.len() - 1);
+                    keys.len() - 1
+                }
+            };
+            mine.push((k, t));
+        }
+        per_branch.push(mine);
+        slopes.push(ht.slope);
+    }
+    let inv_sum: f64 = slopes.iter().map(|d| 1.0 / d).sum();
+    let mut dh = vec![Term::default(); keys.len()];
+    for (mine, d) in per_branch.iter().zip(&slopes) {
+        for &(k, t) in mine {
+            dh[k] = dh[k].plus(t.times(1.0 / (d * inv_sum)));
+        }
+    }
+    let band_of = |nominal: f64, terms: &[Term]| {
+        Band::from_terms(
+            nominal,
+            keys.iter()
+                .zip(terms)
+                .filter(|(_, t)| t.u != 0.0)
+                .map(|(s, t)| (s.clone(), *t)),
+        )
+    };
+    let flow_bands = per_branch
+        .iter()
+        .zip(&slopes)
+        .zip(flows)
+        .map(|((mine, d), &q)| {
+            let mut t = dh.clone();
+            for &(k, a) in mine {
+                t[k] = t[k].plus(a.times(-1.0));
+            }
+            for x in &mut t {
+                *x = x.times(1.0 / d);
+            }
+            band_of(q, &t)
+        })
+        .collect();
+    Ok((band_of(head, &dh), flow_bands))
+}
+
+/// The system curve with its band: required head (m) at each flow, with the 95 % band
+/// from the same sources as [`Line::evaluate`].
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+pub struct CurveBand {
+    /// The flows, m³/s.
+    pub flows: Vec<f64>,
+    /// Lower end of the band of the required head at each flow, m.
+    pub low: Vec<f64>,
+    /// Nominal required head at each flow, m (the same values as
+    /// [`Line::system_curve`]).
+    pub nominal: Vec<f64>,
+    /// Upper end of the band at each flow, m.
+    pub high: Vec<f64>,
+}
+
+impl Line {
+    /// The system curve with its band: the required head at each of `flows` (m³/s) and
+    /// the band of `evaluate(fluid, q).required_head_band` at each, in one pass over the
+    /// elements per flow. Runs on all cores above 64 flows; the result is the same.
+    ///
+    /// # Errors
+    /// As [`Line::evaluate`], with the index of the offending flow.
+    pub fn system_curve_band(&self, fluid: &Fluid, flows: &[f64]) -> Result<CurveBand> {
+        let sources = Sources::of(self);
+        let one = |(i, &q): (usize, &f64)| -> Result<(f64, f64, f64)> {
+            let ht = head_terms(self, &sources, fluid, q).map_err(|e| e.at_index(i))?;
+            let b = ht.required_band(&sources);
+            Ok((b.low, ht.required, b.high))
+        };
+        let rows: Vec<(f64, f64, f64)> = if flows.len() > 64 {
+            flows
+                .par_iter()
+                .enumerate()
+                .map(one)
+                .collect::<Result<_>>()?
+        } else {
+            flows.iter().enumerate().map(one).collect::<Result<_>>()?
+        };
+        Ok(CurveBand {
+            flows: flows.to_vec(),
+            low: rows.iter().map(|r| r.0).collect(),
+            nominal: rows.iter().map(|r| r.1).collect(),
+            high: rows.iter().map(|r| r.2).collect(),
+        })
+    }
+}
+
+/// A standard normal deviate (Box–Muller).
+fn normal(rng: &mut StdRng) -> f64 {
+    let u1: f64 = 1.0 - rng.random::<f64>(); // (0, 1]
+    let u2: f64 = rng.random::<f64>();
+    (-2.0 * math::ln(u1)).sqrt() * math::cos(std::f64::consts::TAU * u2)
+}
+
+/// `samples` draws of the required head (m) at `flow` with every source sampled from its
+/// stated distribution (see [`crate::band::monte_carlo`]), from generator seed `seed`.
+pub(crate) fn sample_required_head(
+    line: &Line,
+    fluid: &Fluid,
+    flow: f64,
+    samples: usize,
+    seed: u64,
+) -> Result<Vec<f64>> {
+    let (work, q, _) = line.working_fluid(fluid, flow, line.options.inlet_pressure)?;
+    let uo = &line.options.uncertainty;
+    let sources = Sources::of(line);
+    let n = line.resolved.len();
+    let nominal: Vec<State> = (0..n)
+        .map(|i| line.element_state(i, &work, q, None, true))
+        .collect::<Result<_>>()?;
+    let root3 = 3f64.sqrt();
+    let mut rng = StdRng::seed_from_u64(seed);
+    let mut xi = vec![0.0; sources.len()];
+    let mut values = Vec::with_capacity(samples);
+    for _ in 0..samples {
+        let model_z = normal(&mut rng);
+        let diameter = 1.0 + uo.diameter * normal(&mut rng);
+        let (dz, vz) = if uo.fluid {
+            (normal(&mut rng), normal(&mut rng))
+        } else {
+            (0.0, 0.0)
+        };
+        // One rectangular deviate on [−1, 1] per source beyond the four shared ones.
+        for x in xi.iter_mut().skip(4) {
+            *x = 2.0 * rng.random::<f64>() - 1.0;
+        }
+        let own = (0..n)
+            .map(|i| {
+                if let Some((k, shift)) = sources.roughness_of(i) {
+                    // ln ε uniform over [ln ε₀ + shift − √3·u, ln ε₀ + shift + √3·u].
+                    math::exp(shift + root3 * nominal[i].roughness_u * xi[k])
+                } else if let Some(k) = sources.own_of(i) {
+                    1.0 + root3 * nominal[i].own_u * xi[k]
+                } else {
+                    1.0
+                }
+            })
+            .collect();
+        let pert = Perturbation {
+            model_z,
+            diameter,
+            density: 1.0 + work.density_rel_uncertainty * dz,
+            viscosity: 1.0 + work.viscosity_rel_uncertainty * vz,
+            own,
+        };
+        let mut fl = work.clone();
+        fl.density *= pert.density;
+        fl.viscosity *= pert.viscosity;
+        let mut h = 0.0;
+        for i in 0..n {
+            let s = line.element_state(i, &fl, q, Some(&pert), true)?;
+            h += s.head_loss + s.static_head;
+        }
+        values.push(h);
+    }
+    Ok(values)
+}
