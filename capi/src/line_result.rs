@@ -586,7 +586,7 @@ mod tests {
         };
         assert_eq!(
             (s, need, share),
-            (HG_ERR_BUFFER_TOO_SMALL, first.source.len(), -7.0)
+            (HG_ERR_BUFFER_TOO_SMALL, first.source.name().len(), -7.0)
         );
         let mut buf = [0 as c_char; 64];
         // SAFETY: as above, with a buffer of 64 bytes.

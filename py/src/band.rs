@@ -487,7 +487,7 @@ pub fn monte_carlo(
     py: Python<'_>,
     line: &PyLine,
     fluid: &PyFluid,
-    flow: f64,
+    #[pyo3(from_py_with = crate::arrays::si::flow)] flow: f64,
     samples: Option<&Bound<'_, PyAny>>,
     seed: u64,
 ) -> PyResult<PyMonteCarlo> {

@@ -1,6 +1,6 @@
 //! `hydrograde.Line`, `PumpCurve` and `split_flow`.
 
-use crate::arrays;
+use crate::arrays::{self, si};
 use crate::band::{PyUncertainty, uncertainty_dict};
 use crate::errors::CoreResult;
 use crate::fluid::PyFluid;
@@ -43,10 +43,10 @@ impl PyLine {
         elements: &Bound<'_, PyAny>,
         correlation: Option<&str>,
         transition: Option<&str>,
-        laminar_limit: Option<f64>,
-        turbulent_limit: Option<f64>,
+        #[pyo3(from_py_with = si::opt_laminar_limit)] laminar_limit: Option<f64>,
+        #[pyo3(from_py_with = si::opt_turbulent_limit)] turbulent_limit: Option<f64>,
         turbulent_diameter: Option<&str>,
-        inlet_pressure: Option<f64>,
+        #[pyo3(from_py_with = si::opt_inlet_pressure)] inlet_pressure: Option<f64>,
         uncertainty: Option<&Bound<'_, PyAny>>,
     ) -> PyResult<Self> {
         let mut items = Vec::new();
@@ -144,8 +144,8 @@ impl PyLine {
         &self,
         py: Python<'_>,
         fluid: &PyFluid,
-        flow: f64,
-        inlet_pressure: Option<f64>,
+        #[pyo3(from_py_with = si::flow)] flow: f64,
+        #[pyo3(from_py_with = si::opt_inlet_pressure)] inlet_pressure: Option<f64>,
     ) -> PyResult<PyLineResult> {
         let r = py
             .detach(|| match inlet_pressure {
@@ -185,7 +185,7 @@ impl PyLine {
         &self,
         py: Python<'_>,
         fluid: &PyFluid,
-        head: f64,
+        #[pyo3(from_py_with = si::head)] head: f64,
     ) -> PyResult<PyFlowSolution> {
         let s = py
             .detach(|| self.inner.flow_for_head(&fluid.inner, head))
@@ -215,9 +215,9 @@ impl PyLine {
         &self,
         py: Python<'_>,
         fluid: &PyFluid,
-        flow: f64,
-        max_pressure_loss: Option<f64>,
-        max_velocity: Option<f64>,
+        #[pyo3(from_py_with = si::flow)] flow: f64,
+        #[pyo3(from_py_with = si::opt_max_pressure_loss)] max_pressure_loss: Option<f64>,
+        #[pyo3(from_py_with = si::opt_max_velocity)] max_velocity: Option<f64>,
         table: Option<&str>,
         schedule: Option<&str>,
     ) -> PyResult<PySizing> {
@@ -250,13 +250,21 @@ impl PyLine {
     }
     /// The same line with the likely range (``low``, ``high``; m) of the roughness of the
     /// pipe at ``index`` stated, for the roughness uncertainty.
-    fn with_roughness_range(&self, index: usize, low: f64, high: f64) -> PyResult<Self> {
+    fn with_roughness_range(
+        &self,
+        index: usize,
+        #[pyo3(from_py_with = si::low)] low: f64,
+        #[pyo3(from_py_with = si::high)] high: f64,
+    ) -> PyResult<Self> {
         let mut l = self.inner.clone();
         l.set_roughness_range(index, low, high).py()?;
         Ok(PyLine { inner: l })
     }
     /// The same line with every round pipe of inside ``diameter`` (m).
-    fn with_uniform_diameter(&self, diameter: f64) -> PyResult<Self> {
+    fn with_uniform_diameter(
+        &self,
+        #[pyo3(from_py_with = si::diameter)] diameter: f64,
+    ) -> PyResult<Self> {
         Ok(PyLine {
             inner: self.inner.with_uniform_diameter(diameter).py()?,
         })
@@ -326,7 +334,10 @@ pub struct PyPumpCurve {
 #[pymethods]
 impl PyPumpCurve {
     #[new]
-    fn new(flows: Vec<f64>, heads: Vec<f64>) -> PyResult<Self> {
+    fn new(
+        #[pyo3(from_py_with = si::flows_vec)] flows: Vec<f64>,
+        #[pyo3(from_py_with = si::heads_vec)] heads: Vec<f64>,
+    ) -> PyResult<Self> {
         Ok(PyPumpCurve {
             inner: PumpCurve::new(&flows, &heads).py()?,
         })
@@ -365,7 +376,7 @@ pub fn split_flow(
     py: Python<'_>,
     branches: Vec<PyRef<'_, PyLine>>,
     fluid: &PyFluid,
-    total: f64,
+    #[pyo3(from_py_with = si::total)] total: f64,
 ) -> PyResult<PySplit> {
     let lines: Vec<Line> = branches.iter().map(|b| b.inner.clone()).collect();
     let s = py.detach(|| core_split(&lines, &fluid.inner, total)).py()?;

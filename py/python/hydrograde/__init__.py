@@ -65,6 +65,7 @@ from hydrograde._native import (
     water_vapour_pressure,
     water_viscosity,
 )
+from hydrograde._units import display, display_units, quantities
 
 __all__ = [
     "__version__",
@@ -75,6 +76,8 @@ __all__ = [
     "correlation_validity",
     "correlations",
     "darcy_factor",
+    "display",
+    "display_units",
     "ElementResult",
     "Equipment",
     "ERROR_KINDS",
@@ -100,6 +103,7 @@ __all__ = [
     "pipe_sizes",
     "pipe_tables",
     "PumpCurve",
+    "quantities",
     "Rise",
     "Section",
     "set_threads",
