@@ -131,7 +131,7 @@ def breakdown_rows(r: hg.LineResult) -> List[Tuple[str, ...]]:
             coef = f"K {e.k:.3f}"
         else:
             coef = ""
-        moving = e.velocity == e.velocity  # NaN for elements without a bore of their own
+        moving = e.velocity is not None  # None for elements without a bore of their own
         rise = e.static_head != 0.0
         rows.append((
             str(i),

@@ -206,6 +206,13 @@
 #define HG_ELEMENT_EQUIPMENT 3
 
 /**
+ * An abrupt change of section the route implies between two elements of different bore
+ * with no contraction or expansion element: a row of its own (not an element of the
+ * line), with `HG_WARN_BORE_CHANGE_WITHOUT_TRANSITION`.
+ */
+#define HG_ELEMENT_SECTION_CHANGE 4
+
+/**
  * The `regime` of an element that has none (every element but a pipe).
  */
 #define HG_REGIME_NONE -1
@@ -280,6 +287,12 @@
  * A fitting or equipment value used outside the range its data covers.
  */
 #define HG_WARN_FITTING_OUT_OF_RANGE 64
+
+/**
+ * The bore changes between two elements with no contraction or expansion element: the
+ * change is counted as an abrupt contraction or expansion row of its own.
+ */
+#define HG_WARN_BORE_CHANGE_WITHOUT_TRANSITION 128
 
 /**
  * Round pipe: `a` = inside diameter (m), `b` = 0.
@@ -649,7 +662,8 @@ typedef struct hg_element_result {
    */
   double friction_factor_high;
   /**
-   * 1 when `velocity` and `reynolds` apply (every element but a rise), else 0.
+   * 1 when `velocity` and `reynolds` apply (elements with a bore: not a rise nor a
+   * rated pressure drop), else 0.
    */
   int32_t has_velocity;
   /**

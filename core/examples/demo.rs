@@ -82,11 +82,8 @@ fn print_breakdown(r: &LineResult) {
             (_, Some(k)) => format!("K {k:.3}"),
             _ => String::new(),
         };
-        let (v, re) = if e.velocity.is_finite() {
-            (format!("{:.2}", e.velocity), format!("{:.0}", e.reynolds))
-        } else {
-            (String::new(), String::new())
-        };
+        let v = e.velocity.map_or(String::new(), |v| format!("{v:.2}"));
+        let re = e.reynolds.map_or(String::new(), |re| format!("{re:.0}"));
         let loss = if e.static_head != 0.0 {
             e.static_head
         } else {

@@ -14,7 +14,7 @@
 //! term's shift (an input whose mean is not its nominal value).
 
 use super::eval::{Perturbation, State};
-use super::{Element, Line, LineOptions, Resolved};
+use super::{Element, Line, LineOptions, Resolved, Role};
 use crate::band::{Band, Source, Term, log_uniform};
 use crate::error::{Error, Result, check};
 use crate::fluid::Fluid;
@@ -115,7 +115,13 @@ impl Sources {
             list.push(s);
             (list.len() - 1) as u32
         };
-        for (i, (r, e)) in line.resolved.iter().zip(&line.elements).enumerate() {
+        for (i, r) in line.resolved.iter().enumerate() {
+            // The line element this row stands for; an implied change of section is
+            // named after the element it stands before.
+            let element = line.origin[i]
+                .or_else(|| line.origin[i + 1..].iter().find_map(|o| *o))
+                .unwrap_or(0);
+            let e = line.origin[i].map(|j| &line.elements[j]);
             match (r, e) {
                 (
                     Resolved::Pipe {
@@ -143,14 +149,31 @@ impl Sources {
                                 id
                             }
                         },
-                        None => push(&mut list, Source::PipeRoughness { element: i }),
+                        None => push(&mut list, Source::PipeRoughness { element }),
                     };
                 }
                 (
                     Resolved::Fitting {
-                        equipment: false, ..
+                        role: Role::Abrupt,
+                        name,
+                        ..
                     },
-                    Element::Fitting(f),
+                    _,
+                ) if uo.fittings => {
+                    own[i] = push(
+                        &mut list,
+                        Source::FittingK {
+                            element,
+                            name: Cow::Owned(name.clone()),
+                        },
+                    );
+                }
+                (
+                    Resolved::Fitting {
+                        role: Role::Fitting,
+                        ..
+                    },
+                    Some(Element::Fitting(f)),
                 ) if uo.fittings => {
                     own[i] = match f.catalogue_name() {
                         Some(name) => match entries.get(name) {
@@ -170,7 +193,7 @@ impl Sources {
                         None => push(
                             &mut list,
                             Source::FittingK {
-                                element: i,
+                                element,
                                 name: Cow::Borrowed(f.method().name()),
                             },
                         ),
@@ -178,7 +201,7 @@ impl Sources {
                 }
                 (
                     Resolved::Fitting {
-                        equipment: true,
+                        role: Role::Equipment,
                         name,
                         ..
                     }
@@ -188,7 +211,7 @@ impl Sources {
                     own[i] = push(
                         &mut list,
                         Source::Equipment {
-                            element: i,
+                            element,
                             name: name.clone(),
                         },
                     );
@@ -247,8 +270,8 @@ impl Sources {
                 shift: f_rr * shift,
             },
         );
-        let (Resolved::Pipe { pipe, geometry, .. }, Some(f0)) =
-            (&line.resolved[i], s.friction_factor)
+        let (Resolved::Pipe { pipe, geometry, .. }, Some(f0), Some(re)) =
+            (&line.resolved[i], s.friction_factor, s.reynolds)
         else {
             return tangent;
         };
@@ -260,10 +283,10 @@ impl Sources {
             laminar_constant: geometry.c * scale,
             ..line.options.friction
         };
-        let re_t = s.reynolds * scale;
+        let re_t = re * scale;
         let half = P95_RECT * 3f64.sqrt() * s.roughness_u;
         let f_at = |dl: f64| {
-            crate::friction::darcy_factor(re_t, pipe.roughness * dl.exp() / geometry.dt, &o)
+            crate::friction::darcy_factor(re_t, pipe.roughness * math::exp(dl) / geometry.dt, &o)
                 .map(|r| r.f)
         };
         match (f_at(shift - half), f_at(shift + half)) {
