@@ -45,7 +45,7 @@ fn orchard_line() -> Result<Line> {
         named("elbow_45_long_radius")?,
         named("ball_valve")?,
         named("globe_valve")?,
-        Element::Rise(38.0),
+        Element::rise(38.0)?,
         Element::Fitting(Fitting::exit()),
     ])
 }
@@ -62,7 +62,7 @@ fn duct_line() -> Result<Line> {
         Element::Fitting(Fitting::contraction(d1, d2)?),
         Element::Pipe(Pipe::of_material(small, 12.0, "galvanized_steel")?),
         Element::Fitting(Fitting::bend(45.0, 1.5)?),
-        Element::Rise(4.5),
+        Element::rise(4.5)?,
         Element::Fitting(Fitting::exit()),
     ])
 }

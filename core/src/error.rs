@@ -15,7 +15,7 @@ pub type Result<T> = std::result::Result<T, Error>;
 #[non_exhaustive]
 pub enum Error {
     /// A number that must be finite was NaN or infinite.
-    #[error("{name} = {value}: must be a finite number")]
+    #[error("{name} = {}: must be a finite number", Shown(*value))]
     NotFinite {
         /// Parameter name as the user wrote it (e.g. `re`, `rel_roughness`).
         name: &'static str,
@@ -23,7 +23,7 @@ pub enum Error {
         value: f64,
     },
     /// A finite number outside the range the calculation accepts.
-    #[error("{name} = {value}: {rule}")]
+    #[error("{name} = {}: {rule}", Shown(*value))]
     OutOfRange {
         /// Parameter name.
         name: &'static str,
@@ -66,6 +66,20 @@ pub enum Error {
         /// The element's own error.
         source: Box<Error>,
     },
+}
+
+/// A value as an error message shows it: as Rust prints it, except that magnitudes of
+/// 1e16 and above (which would print every digit) take the exponent form.
+struct Shown(f64);
+
+impl std::fmt::Display for Shown {
+    fn fmt(&self, f: &mut std::fmt::Formatter<'_>) -> std::fmt::Result {
+        if self.0.is_finite() && self.0.abs() >= 1e16 {
+            write!(f, "{:e}", self.0)
+        } else {
+            write!(f, "{}", self.0)
+        }
+    }
 }
 
 /// The category of an [`Error`]; bindings map it to status codes and exception classes.
@@ -229,6 +243,8 @@ mod tests {
         assert_eq!(e.to_string(), "re = -3: must be greater than 0");
         let e = check::finite("length", f64::NAN).unwrap_err();
         assert_eq!(e.to_string(), "length = NaN: must be a finite number");
+        let e = check::positive("length", -1e300).unwrap_err();
+        assert_eq!(e.to_string(), "length = -1e300: must be greater than 0");
         let e = check::within("temperature", 500.0, 273.15, 423.15, "K").unwrap_err();
         assert_eq!(
             e.to_string(),

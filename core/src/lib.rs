@@ -40,14 +40,16 @@ pub use warning::Warnings;
 // Physical inputs: fluid, section, roughness, sizes.
 pub use fluid::{Fluid, Phase};
 pub use roughness::Material;
-pub use section::{Section, TurbulentDiameter};
+pub use section::{Section, Shape, TurbulentDiameter};
 pub use sizes::{PipeSize, PipeTable};
 // fitting (minor losses) and units
 pub use fitting::{Fitting, Resistance};
 pub use units::{STANDARD_GRAVITY, convert, convert_head};
 // Lines, pipes and bands.
 pub use band::{Band, Contribution, UncertaintyOptions};
-pub use line::{Element, Equipment, Limit, Line, LineOptions, LineResult, PumpCurve, split_flow};
+pub use line::{
+    Element, Equipment, Limit, Line, LineOptions, LineResult, PumpCurve, Rise, split_flow,
+};
 pub use pipe::Pipe;
 pub use threads::{set_threads, threads};
 

@@ -28,23 +28,83 @@ use crate::warning::Warnings;
 use serde::{Deserialize, Serialize};
 
 /// A straight run: a cross-section, a length and an absolute wall roughness.
+///
+/// Built only through the checking constructors ([`Pipe::new`], [`Pipe::circular`],
+/// [`Pipe::of_material`]); the accessors read it. Deserialising runs the same checks.
 #[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+#[serde(try_from = "PipeSpec", into = "PipeSpec")]
 pub struct Pipe {
-    /// The cross-section.
-    pub section: Section,
-    /// Length along the axis, m.
-    pub length: f64,
-    /// Absolute wall roughness ε, m.
-    pub roughness: f64,
-    /// Likely range (low, high) of the roughness, m, when known (from the material
-    /// catalogue); the uncertainty bands read ε as log-uniform over it.
-    #[serde(default)]
-    pub roughness_range: Option<(f64, f64)>,
-    /// The catalogue material the roughness comes from, if any: pipes of one material
-    /// share one roughness error in the bands.
-    #[serde(default)]
-    pub material: Option<String>,
+    section: Section,
+    length: f64,
+    roughness: f64,
+    roughness_range: Option<(f64, f64)>,
+    material: Option<String>,
 }
+
+/// The stored form of a [`Pipe`].
+#[derive(Serialize, Deserialize)]
+struct PipeSpec {
+    section: Section,
+    length: f64,
+    roughness: f64,
+    #[serde(default)]
+    roughness_range: Option<(f64, f64)>,
+    #[serde(default)]
+    material: Option<String>,
+}
+
+impl TryFrom<PipeSpec> for Pipe {
+    type Error = crate::Error;
+    fn try_from(s: PipeSpec) -> Result<Pipe> {
+        let mut p = Pipe::new(s.section, s.length, s.roughness)?;
+        if let Some(name) = &s.material {
+            crate::roughness::material(name)?;
+        }
+        if let Some((lo, hi)) = s.roughness_range {
+            check_range(p.roughness, lo, hi)?;
+        }
+        p.roughness_range = s.roughness_range;
+        p.material = s.material;
+        Ok(p)
+    }
+}
+
+impl From<Pipe> for PipeSpec {
+    fn from(p: Pipe) -> PipeSpec {
+        PipeSpec {
+            section: p.section,
+            length: p.length,
+            roughness: p.roughness,
+            roughness_range: p.roughness_range,
+            material: p.material,
+        }
+    }
+}
+
+/// A roughness range (m): 0 < low ≤ high, finite, holding the roughness.
+fn check_range(roughness: f64, lo: f64, hi: f64) -> Result<()> {
+    check::positive("low", lo)?;
+    check::positive("high", hi)?;
+    if hi < lo {
+        return Err(crate::Error::out_of_range(
+            "high",
+            hi,
+            format!("must not be below low ({lo} m): the roughness range is inverted"),
+        ));
+    }
+    if !(lo..=hi).contains(&roughness) {
+        return Err(crate::Error::out_of_range(
+            "roughness",
+            roughness,
+            format!("must lie inside its stated range {lo} … {hi} m"),
+        ));
+    }
+    Ok(())
+}
+
+/// The longest run a pipe accepts, m (10,000 km: longer than any pipeline, short enough
+/// that its head loss stays a finite number).
+pub const MAX_LENGTH: f64 = 1e7;
 
 /// A section's geometry, worked out once: area (m²), hydraulic and turbulent diameters
 /// (m), laminar constant and the section's warnings.
@@ -87,9 +147,17 @@ impl Pipe {
     /// than half the hydraulic diameter).
     ///
     /// # Errors
-    /// `length` or `roughness` not finite, length ≤ 0, roughness < 0 or ≥ D_h/2.
+    /// `length` or `roughness` not finite, length ≤ 0 or above [`MAX_LENGTH`], roughness < 0
+    /// or ≥ D_h/2.
     pub fn new(section: Section, length: f64, roughness: f64) -> Result<Pipe> {
         check::positive("length", length)?;
+        if length > MAX_LENGTH {
+            return Err(crate::Error::out_of_range(
+                "length",
+                length,
+                format!("must be at most {MAX_LENGTH:e} m"),
+            ));
+        }
         check::non_negative("roughness", roughness)?;
         let dh = section.hydraulic_diameter();
         if roughness / dh > friction::MAX_REL_ROUGHNESS {
@@ -119,6 +187,43 @@ impl Pipe {
         p.roughness_range = Some((m.low, m.high));
         p.material = Some(m.name);
         Ok(p)
+    }
+
+    /// The cross-section.
+    pub fn section(&self) -> &Section {
+        &self.section
+    }
+
+    /// Length along the axis, m.
+    pub fn length(&self) -> f64 {
+        self.length
+    }
+
+    /// Absolute wall roughness ε, m.
+    pub fn roughness(&self) -> f64 {
+        self.roughness
+    }
+
+    /// Likely range (low, high) of the roughness, m, when known (from the material
+    /// catalogue); the uncertainty bands read ε as log-uniform over it.
+    pub fn roughness_range(&self) -> Option<(f64, f64)> {
+        self.roughness_range
+    }
+
+    /// The catalogue material the roughness comes from, if any: pipes of one material
+    /// share one roughness error in the bands.
+    pub fn material(&self) -> Option<&str> {
+        self.material.as_deref()
+    }
+
+    /// The same run with another section and roughness, for a Monte Carlo sample: the
+    /// sampled roughness may stray beyond the limits a user's pipe must keep.
+    pub(crate) fn perturbed(&self, section: Section, roughness: f64) -> Pipe {
+        Pipe {
+            section,
+            roughness,
+            ..self.clone()
+        }
     }
 
     /// A round pipe of inside diameter `diameter` (m).

@@ -29,10 +29,17 @@ use std::f64::consts::PI;
 
 /// The shape and size of a duct's cross-section. All lengths in metres.
 ///
-/// Build it with the validating constructors ([`Section::circle`] …); the variants are
-/// public so bindings and serde can hold them as plain values.
+/// Built only through the checking constructors ([`Section::circle`] …, or
+/// [`Section::from_shape`]), so it always holds a valid shape; [`Section::shape`] gives
+/// its dimensions. Deserialising runs the same checks.
 #[derive(Debug, Clone, Copy, PartialEq, Serialize, Deserialize)]
-pub enum Section {
+#[serde(try_from = "Shape", into = "Shape")]
+pub struct Section(Shape);
+
+/// A cross-section's kind and dimensions as plain numbers, m (the stored form of a
+/// [`Section`]; [`Section::from_shape`] checks it).
+#[derive(Debug, Clone, Copy, PartialEq, Serialize, Deserialize)]
+pub enum Shape {
     /// Round pipe of inside diameter `diameter` (m).
     Circle {
         /// Inside diameter, m.
@@ -112,15 +119,94 @@ impl std::str::FromStr for TurbulentDiameter {
     }
 }
 
+/// The smallest length of a section, m (1 pm: far below any duct, which leaves room for
+/// the limiting shapes of thin slots and rods, and far above the sizes where the area
+/// underflows).
+pub const MIN_DIMENSION: f64 = 1e-12;
+/// The largest length of a section, m (1 km: above any duct or tunnel, and far below the
+/// sizes where the area or a flow's head overflows).
+pub const MAX_DIMENSION: f64 = 1e3;
+
+/// A length of a section: finite, > 0 and within [`MIN_DIMENSION`]..=[`MAX_DIMENSION`].
+fn dimension(name: &'static str, value: f64) -> Result<f64> {
+    let v = check::positive(name, value)?;
+    if (MIN_DIMENSION..=MAX_DIMENSION).contains(&v) {
+        Ok(v)
+    } else {
+        Err(Error::out_of_range(
+            name,
+            v,
+            format!("must lie between {MIN_DIMENSION:e} m and {MAX_DIMENSION:e} m"),
+        ))
+    }
+}
+
+impl TryFrom<Shape> for Section {
+    type Error = Error;
+    fn try_from(shape: Shape) -> Result<Section> {
+        Section::from_shape(shape)
+    }
+}
+
+impl From<Section> for Shape {
+    fn from(s: Section) -> Shape {
+        s.0
+    }
+}
+
 impl Section {
+    /// A section of the given shape, through the same checks as the constructors.
+    ///
+    /// # Errors
+    /// The errors of the constructor of that shape.
+    pub fn from_shape(shape: Shape) -> Result<Section> {
+        match shape {
+            Shape::Circle { diameter } => Section::circle(diameter),
+            Shape::Annulus { outer, inner } => Section::annulus(outer, inner),
+            Shape::Rectangle { width, height } => Section::rectangle(width, height),
+            Shape::Ellipse { major, minor } => Section::ellipse(major, minor),
+            Shape::Triangle { side } => Section::triangle(side),
+            Shape::Custom {
+                area,
+                wetted_perimeter,
+                laminar_constant,
+            } => Section::custom(area, wetted_perimeter, laminar_constant),
+        }
+    }
+
+    /// The kind and dimensions of the section, m.
+    pub fn shape(&self) -> Shape {
+        self.0
+    }
+
+    /// The same shape with every length multiplied by `factor` (> 0).
+    ///
+    /// # Errors
+    /// `factor` not finite or not positive; a scaled length outside the section limits.
+    pub fn scaled(&self, factor: f64) -> Result<Section> {
+        let k = check::positive("factor", factor)?;
+        match self.0 {
+            Shape::Circle { diameter } => Section::circle(diameter * k),
+            Shape::Annulus { outer, inner } => Section::annulus(outer * k, inner * k),
+            Shape::Rectangle { width, height } => Section::rectangle(width * k, height * k),
+            Shape::Ellipse { major, minor } => Section::ellipse(major * k, minor * k),
+            Shape::Triangle { side } => Section::triangle(side * k),
+            Shape::Custom {
+                area,
+                wetted_perimeter,
+                laminar_constant,
+            } => Section::custom(area * k * k, wetted_perimeter * k, laminar_constant),
+        }
+    }
+
     /// A round pipe of inside diameter `diameter` (m).
     ///
     /// # Errors
     /// `diameter` not finite or not greater than 0.
     pub fn circle(diameter: f64) -> Result<Section> {
-        Ok(Section::Circle {
-            diameter: check::positive("diameter", diameter)?,
-        })
+        Ok(Section(Shape::Circle {
+            diameter: dimension("diameter", diameter)?,
+        }))
     }
 
     /// A concentric annulus: `outer` is the bore of the outer pipe, `inner` the outside
@@ -129,8 +215,8 @@ impl Section {
     /// # Errors
     /// Either not finite or not greater than 0; `inner` not less than `outer`.
     pub fn annulus(outer: f64, inner: f64) -> Result<Section> {
-        let outer = check::positive("outer", outer)?;
-        let inner = check::positive("inner", inner)?;
+        let outer = dimension("outer", outer)?;
+        let inner = dimension("inner", inner)?;
         if inner >= outer {
             return Err(Error::out_of_range(
                 "inner",
@@ -138,7 +224,7 @@ impl Section {
                 format!("must be less than outer = {outer}"),
             ));
         }
-        Ok(Section::Annulus { outer, inner })
+        Ok(Section(Shape::Annulus { outer, inner }))
     }
 
     /// A rectangle of `width` × `height` (m).
@@ -146,10 +232,10 @@ impl Section {
     /// # Errors
     /// Either not finite or not greater than 0.
     pub fn rectangle(width: f64, height: f64) -> Result<Section> {
-        Ok(Section::Rectangle {
-            width: check::positive("width", width)?,
-            height: check::positive("height", height)?,
-        })
+        Ok(Section(Shape::Rectangle {
+            width: dimension("width", width)?,
+            height: dimension("height", height)?,
+        }))
     }
 
     /// An ellipse with full axes `major` ≥ `minor` (m).
@@ -157,8 +243,8 @@ impl Section {
     /// # Errors
     /// Either not finite or not greater than 0; `minor` greater than `major`.
     pub fn ellipse(major: f64, minor: f64) -> Result<Section> {
-        let major = check::positive("major", major)?;
-        let minor = check::positive("minor", minor)?;
+        let major = dimension("major", major)?;
+        let minor = dimension("minor", minor)?;
         if minor > major {
             return Err(Error::out_of_range(
                 "minor",
@@ -166,7 +252,7 @@ impl Section {
                 format!("must not exceed major = {major}"),
             ));
         }
-        Ok(Section::Ellipse { major, minor })
+        Ok(Section(Shape::Ellipse { major, minor }))
     }
 
     /// An equilateral triangle of side `side` (m).
@@ -174,9 +260,9 @@ impl Section {
     /// # Errors
     /// `side` not finite or not greater than 0.
     pub fn triangle(side: f64) -> Result<Section> {
-        Ok(Section::Triangle {
-            side: check::positive("side", side)?,
-        })
+        Ok(Section(Shape::Triangle {
+            side: dimension("side", side)?,
+        }))
     }
 
     /// Any shape given by its `area` (m²), wetted `perimeter` (m) and laminar constant
@@ -188,8 +274,22 @@ impl Section {
     /// inequality).
     pub fn custom(area: f64, perimeter: f64, laminar_constant: f64) -> Result<Section> {
         let area = check::positive("area", area)?;
+        if area > MAX_DIMENSION * MAX_DIMENSION {
+            return Err(Error::out_of_range(
+                "area",
+                area,
+                format!("must be at most {:e} m²", MAX_DIMENSION * MAX_DIMENSION),
+            ));
+        }
         let perimeter = check::positive("perimeter", perimeter)?;
-        let laminar_constant = check::positive("laminar_constant", laminar_constant)?;
+        if perimeter > 4.0 * MAX_DIMENSION * 1e3 {
+            return Err(Error::out_of_range(
+                "perimeter",
+                perimeter,
+                format!("must be at most {:e} m", 4.0 * MAX_DIMENSION * 1e3),
+            ));
+        }
+        let laminar_constant = check::within("laminar_constant", laminar_constant, 1.0, 1e4, "")?;
         // Allow rounding in the user's numbers: a circle typed to a few digits must pass.
         if perimeter * perimeter < 4.0 * PI * area * (1.0 - 1e-9) {
             return Err(Error::out_of_range(
@@ -202,47 +302,47 @@ impl Section {
                 ),
             ));
         }
-        Ok(Section::Custom {
+        Ok(Section(Shape::Custom {
             area,
             wetted_perimeter: perimeter,
             laminar_constant,
-        })
+        }))
     }
 
     /// A short name of the shape: `"circle"`, `"annulus"`, `"rectangle"`, `"ellipse"`,
     /// `"triangle"`, `"custom"`.
     pub fn shape_name(&self) -> &'static str {
-        match self {
-            Section::Circle { .. } => "circle",
-            Section::Annulus { .. } => "annulus",
-            Section::Rectangle { .. } => "rectangle",
-            Section::Ellipse { .. } => "ellipse",
-            Section::Triangle { .. } => "triangle",
-            Section::Custom { .. } => "custom",
+        match self.0 {
+            Shape::Circle { .. } => "circle",
+            Shape::Annulus { .. } => "annulus",
+            Shape::Rectangle { .. } => "rectangle",
+            Shape::Ellipse { .. } => "ellipse",
+            Shape::Triangle { .. } => "triangle",
+            Shape::Custom { .. } => "custom",
         }
     }
 
     /// Flow area A, m².
     pub fn area(&self) -> f64 {
-        match *self {
-            Section::Circle { diameter } => PI / 4.0 * diameter * diameter,
-            Section::Annulus { outer, inner } => PI / 4.0 * (outer - inner) * (outer + inner),
-            Section::Rectangle { width, height } => width * height,
-            Section::Ellipse { major, minor } => PI / 4.0 * major * minor,
-            Section::Triangle { side } => 3f64.sqrt() / 4.0 * side * side,
-            Section::Custom { area, .. } => area,
+        match self.0 {
+            Shape::Circle { diameter } => PI / 4.0 * diameter * diameter,
+            Shape::Annulus { outer, inner } => PI / 4.0 * (outer - inner) * (outer + inner),
+            Shape::Rectangle { width, height } => width * height,
+            Shape::Ellipse { major, minor } => PI / 4.0 * major * minor,
+            Shape::Triangle { side } => 3f64.sqrt() / 4.0 * side * side,
+            Shape::Custom { area, .. } => area,
         }
     }
 
     /// Wetted perimeter P, m (for the annulus, both walls).
     pub fn wetted_perimeter(&self) -> f64 {
-        match *self {
-            Section::Circle { diameter } => PI * diameter,
-            Section::Annulus { outer, inner } => PI * (outer + inner),
-            Section::Rectangle { width, height } => 2.0 * (width + height),
-            Section::Ellipse { major, minor } => ellipse_perimeter(major / 2.0, minor / 2.0),
-            Section::Triangle { side } => 3.0 * side,
-            Section::Custom {
+        match self.0 {
+            Shape::Circle { diameter } => PI * diameter,
+            Shape::Annulus { outer, inner } => PI * (outer + inner),
+            Shape::Rectangle { width, height } => 2.0 * (width + height),
+            Shape::Ellipse { major, minor } => ellipse_perimeter(major / 2.0, minor / 2.0),
+            Shape::Triangle { side } => 3.0 * side,
+            Shape::Custom {
                 wetted_perimeter, ..
             } => wetted_perimeter,
         }
@@ -251,11 +351,11 @@ impl Section {
     /// Hydraulic diameter D_h = 4A/P, m. Exactly the diameter for a circle and
     /// `outer − inner` for an annulus.
     pub fn hydraulic_diameter(&self) -> f64 {
-        match *self {
-            Section::Circle { diameter } => diameter,
-            Section::Annulus { outer, inner } => outer - inner,
-            Section::Rectangle { width, height } => 2.0 * width * height / (width + height),
-            Section::Triangle { side } => side / 3f64.sqrt(),
+        match self.0 {
+            Shape::Circle { diameter } => diameter,
+            Shape::Annulus { outer, inner } => outer - inner,
+            Shape::Rectangle { width, height } => 2.0 * width * height / (width + height),
+            Shape::Triangle { side } => side / 3f64.sqrt(),
             _ => 4.0 * self.area() / self.wetted_perimeter(),
         }
     }
@@ -264,19 +364,19 @@ impl Section {
     /// diameter), dimensionless; see the module table for each formula. Accurate to a few
     /// ulp against 40-digit mpmath evaluations (core/tests/section_exact.rs).
     pub fn laminar_constant(&self) -> f64 {
-        match *self {
-            Section::Circle { .. } => 64.0,
-            Section::Annulus { outer, inner } => annulus_constant(outer, inner),
-            Section::Rectangle { width, height } => {
+        match self.0 {
+            Shape::Circle { .. } => 64.0,
+            Shape::Annulus { outer, inner } => annulus_constant(outer, inner),
+            Shape::Rectangle { width, height } => {
                 rectangle_constant(width.min(height) / width.max(height))
             }
-            Section::Ellipse { major, minor } => {
+            Shape::Ellipse { major, minor } => {
                 let (a, b) = (major / 2.0, minor / 2.0);
                 let p = ellipse_perimeter(a, b);
                 128.0 * PI * PI * (a * a + b * b) / (p * p)
             }
-            Section::Triangle { .. } => 160.0 / 3.0,
-            Section::Custom {
+            Shape::Triangle { .. } => 160.0 / 3.0,
+            Shape::Custom {
                 laminar_constant, ..
             } => laminar_constant,
         }
@@ -284,7 +384,7 @@ impl Section {
 
     /// True for a round pipe.
     pub fn is_circular(&self) -> bool {
-        matches!(self, Section::Circle { .. })
+        matches!(self.0, Shape::Circle { .. })
     }
 
     /// The length turbulent correlations use, m: D_h, or with
@@ -294,10 +394,10 @@ impl Section {
     /// proposed and tested for rectangles and annuli only.
     pub fn turbulent_diameter(&self, mode: TurbulentDiameter) -> f64 {
         let dh = self.hydraulic_diameter();
-        match (mode, self) {
+        match (mode, self.0) {
             (
                 TurbulentDiameter::LaminarEquivalent,
-                Section::Rectangle { .. } | Section::Annulus { .. },
+                Shape::Rectangle { .. } | Shape::Annulus { .. },
             ) => 64.0 / self.laminar_constant() * dh,
             _ => dh,
         }

@@ -63,7 +63,10 @@ fn cases() -> Vec<(&'static str, Line, Fluid, f64)> {
     ];
     for (i, m) in rough.iter().enumerate() {
         let d = [0.05, 0.1, 0.3, 0.6][i % 4];
-        let els = vec![pipe(d, 200.0 + 50.0 * i as f64, m), Element::Rise(5.0)];
+        let els = vec![
+            pipe(d, 200.0 + 50.0 * i as f64, m),
+            Element::rise(5.0).unwrap(),
+        ];
         out.push(("roughness", line(els, None), water(288.15), q_of(2.5, d)));
     }
     // Fitting-dominated: short runs with many catalogue and user fittings.

@@ -160,7 +160,7 @@ fn varied_lines() -> Vec<(Line, Fluid, f64)> {
                 Equipment::pressure_drop("filter", 2e4, 0.003).unwrap(),
             ));
         }
-        els.push(Element::Rise(3.0 * (i as f64 - 8.0)));
+        els.push(Element::rise(3.0 * (i as f64 - 8.0)).unwrap());
         els.push(Element::Fitting(Fitting::exit()));
         let u = UncertaintyOptions {
             diameter: if i % 2 == 0 { 0.005 } else { 0.0 },

@@ -52,7 +52,7 @@ fn cavitation_warning_where_the_grade_line_falls_below_vapour_pressure() {
     let line = Line::with_options(
         vec![
             Element::Pipe(Pipe::circular(0.05, 5.0, 4.5e-5).unwrap()),
-            Element::Rise(9.5),
+            Element::rise(9.5).unwrap(),
             Element::Pipe(Pipe::circular(0.05, 5.0, 4.5e-5).unwrap()),
         ],
         opts,
@@ -78,7 +78,7 @@ fn cavitation_warning_where_the_grade_line_falls_below_vapour_pressure() {
     let low = Line::with_options(
         vec![
             Element::Pipe(Pipe::circular(0.05, 5.0, 4.5e-5).unwrap()),
-            Element::Rise(2.0),
+            Element::rise(2.0).unwrap(),
         ],
         LineOptions {
             inlet_pressure: Some(101_325.0),
@@ -126,7 +126,7 @@ mod properties {
             Element::Fitting(Fitting::k(k).unwrap()),
             Element::Fitting(Fitting::three_k(500.0, 0.2, 4.0).unwrap()),
             Element::Pipe(Pipe::circular(d2, 40.0, eps).unwrap()),
-            Element::Rise(rise),
+            Element::rise(rise).unwrap(),
         ])
         .unwrap()
     }

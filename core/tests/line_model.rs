@@ -185,7 +185,7 @@ fn a_check_valve_refuses_reverse_flow_in_every_call() {
         pipe(0.05),
         fitting(Fitting::named("swing_check_valve").unwrap()),
         pipe(0.05),
-        Element::Rise(5.0),
+        Element::rise(5.0).unwrap(),
     ])
     .unwrap();
     let w = water();
@@ -208,7 +208,7 @@ fn a_check_valve_refuses_reverse_flow_in_every_call() {
     let pump = PumpCurve::new(&[0.0, 1e-3, 2e-3], &[3.0, 2.5, 1.5]).unwrap();
     assert!(line.operating_point(&w, &pump).is_err());
     // A split that would drive one branch backwards.
-    let other = Line::new(vec![pipe(0.05), Element::Rise(-20.0)]).unwrap();
+    let other = Line::new(vec![pipe(0.05), Element::rise(-20.0).unwrap()]).unwrap();
     let s = split_flow(&[line.clone(), other], &w, 1e-4);
     named(s.unwrap_err());
 }

@@ -20,7 +20,7 @@ fn main_line() -> Line {
         Element::Fitting(Fitting::three_k(800.0, 0.14, 4.0).unwrap()),
         Element::Fitting(Fitting::expansion(0.0525, 0.0779).unwrap()),
         Element::Pipe(Pipe::circular(0.0779, 250.0, 1.5e-6).unwrap()),
-        Element::Rise(12.5),
+        Element::rise(12.5).unwrap(),
         Element::Fitting(Fitting::k(1.0).unwrap()),
     ])
     .unwrap()
@@ -117,7 +117,7 @@ fn parallel_split_matches_mpmath_and_balances_heads() {
     .unwrap();
     let b = Line::new(vec![
         Element::Pipe(Pipe::circular(0.065, 140.0, 1.5e-6).unwrap()),
-        Element::Rise(2.0),
+        Element::rise(2.0).unwrap(),
     ])
     .unwrap();
     let branches = [a, b];
@@ -226,7 +226,7 @@ fn bad_inputs_are_clear_errors() {
     );
     let e = Line::new(vec![
         Element::Fitting(Fitting::k(1.0).unwrap()),
-        Element::Rise(3.0),
+        Element::rise(3.0).unwrap(),
     ])
     .unwrap_err();
     assert!(e.to_string().contains("no diameter"), "{e}");
@@ -238,7 +238,7 @@ fn bad_inputs_are_clear_errors() {
             .starts_with("flow = NaN")
     );
     assert!(line.flow_for_head(&f, f64::INFINITY).is_err());
-    let rises = Line::new(vec![Element::Rise(3.0)]).unwrap();
+    let rises = Line::new(vec![Element::rise(3.0).unwrap()]).unwrap();
     assert!(rises.flow_for_head(&f, 5.0).is_err());
     // Pump curves: too few points, not monotonic, flows not increasing.
     assert!(
@@ -266,7 +266,7 @@ fn bad_inputs_are_clear_errors() {
     let checked = Line::new(vec![
         Element::Pipe(Pipe::circular(0.05, 10.0, 0.0).unwrap()),
         Element::Fitting(Fitting::named("swing_check_valve").unwrap()),
-        Element::Rise(5.0),
+        Element::rise(5.0).unwrap(),
     ])
     .unwrap();
     assert!(
@@ -357,7 +357,7 @@ fn split_bands_conserve_the_total_flow() {
     .unwrap();
     let b = Line::new(vec![
         Element::Pipe(Pipe::circular(0.065, 140.0, 1.5e-6).unwrap()),
-        Element::Rise(0.5),
+        Element::rise(0.5).unwrap(),
     ])
     .unwrap();
     let s = split_flow(&[a.clone(), b], &f, 6e-3).unwrap();

@@ -6,7 +6,7 @@ use crate::fitting::PyFitting;
 use crate::fluid::PyFluid;
 use crate::section::PySection;
 use crate::state;
-use hydrograde::line::{Element, Equipment, Rating};
+use hydrograde::line::{Element, Equipment, Rating, Rise};
 use hydrograde::pipe::Pipe;
 use pyo3::exceptions::PyTypeError;
 use pyo3::prelude::*;
@@ -60,24 +60,24 @@ impl PyPipe {
     /// Likely (low, high) roughness, m, when stated (from a catalogue material).
     #[getter]
     fn roughness_range(&self) -> Option<(f64, f64)> {
-        self.inner.roughness_range
+        self.inner.roughness_range()
     }
     /// The cross-section.
     #[getter]
     fn section(&self) -> PySection {
         PySection {
-            inner: self.inner.section,
+            inner: *self.inner.section(),
         }
     }
     /// Length, m.
     #[getter]
     fn length(&self) -> f64 {
-        self.inner.length
+        self.inner.length()
     }
     /// Absolute wall roughness, m.
     #[getter]
     fn roughness(&self) -> f64 {
-        self.inner.roughness
+        self.inner.roughness()
     }
     /// The bore fittings beside it refer their K to (hydraulic diameter), m.
     #[getter]
@@ -115,10 +115,10 @@ impl PyPipe {
     /// The fields as a dict.
     fn to_dict<'py>(&self, py: Python<'py>) -> PyResult<Bound<'py, PyDict>> {
         let d = PyDict::new(py);
-        d.set_item("shape", self.inner.section.shape_name())?;
-        d.update(crate::section::dimensions(py, &self.inner.section)?.as_mapping())?;
-        d.set_item("length", self.inner.length)?;
-        d.set_item("roughness", self.inner.roughness)?;
+        d.set_item("shape", self.inner.section().shape_name())?;
+        d.update(crate::section::dimensions(py, self.inner.section())?.as_mapping())?;
+        d.set_item("length", self.inner.length())?;
+        d.set_item("roughness", self.inner.roughness())?;
         d.set_item("rel_roughness", self.inner.rel_roughness())?;
         Ok(d)
     }
@@ -126,14 +126,15 @@ impl PyPipe {
         state::html(py, "Pipe", &self.to_dict(py)?)
     }
     fn __repr__(&self, py: Python<'_>) -> PyResult<String> {
-        let section = if let hydrograde::Section::Circle { diameter } = self.inner.section {
+        let section = if let hydrograde::Shape::Circle { diameter } = self.inner.section().shape() {
             format!("{diameter:?}")
         } else {
             Bound::new(py, self.section())?.repr()?.to_string()
         };
         Ok(format!(
             "Pipe({section}, length={:?}, roughness={:?})",
-            self.inner.length, self.inner.roughness
+            self.inner.length(),
+            self.inner.roughness()
         ))
     }
     fn __reduce__<'py>(
@@ -153,8 +154,8 @@ impl PyPipe {
 #[pyclass(name = "Rise", module = "hydrograde._native", frozen, eq)]
 #[derive(Clone, PartialEq)]
 pub struct PyRise {
-    /// The core element (always `Element::Rise`).
-    pub inner: Element,
+    /// The core value.
+    pub inner: Rise,
 }
 
 #[pymethods]
@@ -162,16 +163,13 @@ impl PyRise {
     #[new]
     fn new(#[pyo3(from_py_with = si::height)] height: f64) -> PyResult<Self> {
         Ok(PyRise {
-            inner: Element::rise(height).py()?,
+            inner: Rise::new(height).py()?,
         })
     }
     /// Height, m (positive up in the flow direction).
     #[getter]
     fn height(&self) -> f64 {
-        match self.inner {
-            Element::Rise(h) => h,
-            _ => f64::NAN,
-        }
+        self.inner.height()
     }
     fn __repr__(&self) -> String {
         format!("Rise({:?})", self.height())
@@ -183,10 +181,9 @@ impl PyRise {
     }
     #[classmethod]
     fn _from_state(_cls: &Bound<'_, PyType>, state: &[u8]) -> PyResult<Self> {
-        match state::loads(state)? {
-            e @ Element::Rise(_) => Ok(PyRise { inner: e }),
-            _ => Err(PyTypeError::new_err("not the state of a Rise")),
-        }
+        Ok(PyRise {
+            inner: state::loads(state)?,
+        })
     }
 }
 
@@ -280,7 +277,7 @@ pub fn element(obj: &Bound<'_, PyAny>, index: usize) -> PyResult<Element> {
         return Ok(Element::Fitting(f.get().inner.clone()));
     }
     if let Ok(r) = obj.cast::<PyRise>() {
-        return Ok(r.get().inner.clone());
+        return Ok(Element::Rise(r.get().inner));
     }
     if let Ok(e) = obj.cast::<PyEquipment>() {
         return Ok(Element::Equipment(e.get().inner.clone()));
@@ -296,7 +293,7 @@ pub fn element_object(py: Python<'_>, e: &Element) -> PyResult<Py<PyAny>> {
     Ok(match e {
         Element::Pipe(p) => Py::new(py, PyPipe { inner: p.clone() })?.into_any(),
         Element::Fitting(f) => Py::new(py, PyFitting { inner: f.clone() })?.into_any(),
-        Element::Rise(_) => Py::new(py, PyRise { inner: e.clone() })?.into_any(),
+        Element::Rise(r) => Py::new(py, PyRise { inner: *r })?.into_any(),
         Element::Equipment(q) => Py::new(py, PyEquipment { inner: q.clone() })?.into_any(),
     })
 }

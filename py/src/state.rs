@@ -20,10 +20,16 @@ pub fn dumps<'py, T: Serialize>(py: Python<'py>, value: &T) -> PyResult<Bound<'p
     Ok(PyBytes::new(py, &bytes))
 }
 
-/// A core value back from its serde (MessagePack) bytes.
+/// A core value back from its serde (MessagePack) bytes. The core's types run their
+/// constructors' checks while deserialising, so tampered or truncated bytes give an
+/// `InvalidInputError` (a `HydrogradeError`), never a value that breaks a rule.
 pub fn loads<T: DeserializeOwned>(bytes: &[u8]) -> PyResult<T> {
-    rmp_serde::from_slice(bytes)
-        .map_err(|e| PyValueError::new_err(format!("not a hydrograde state: {e}")))
+    rmp_serde::from_slice(bytes).map_err(|e| {
+        crate::errors::to_py(hydrograde::Error::invalid(
+            "state",
+            format!("not a valid hydrograde state: {e}"),
+        ))
+    })
 }
 
 /// `(cls._from_state, (state,))`, the `__reduce__` value of every wrapper.

@@ -58,3 +58,56 @@ def test_monte_carlo_sample_limit_is_an_error(line, water, bad):
         hg.monte_carlo(line, water, 1e-3, samples=bad)
     assert isinstance(e.value, hg.HydrogradeError)
     assert e.value.parameter == "samples"
+
+
+def _state(obj) -> bytes:
+    return obj.__reduce__()[1][0]
+
+
+def _mp_str(s: str) -> bytes:
+    b = s.encode()
+    return bytes([0xA0 | len(b)]) + b
+
+
+def _mp_f64(x: float) -> bytes:
+    import struct
+
+    return b"\xcb" + struct.pack(">d", x)
+
+
+def test_pickles_round_trip_through_the_checks(line, water):
+    import pickle
+
+    back = pickle.loads(pickle.dumps(line))
+    assert back.evaluate(water, 1e-3).required_head == line.evaluate(water, 1e-3).required_head
+    assert pickle.loads(pickle.dumps(hg.Rise(-2.5))).height == -2.5
+
+
+def test_truncated_line_state_is_a_hydrograde_error(line):
+    state = _state(line)
+    for cut in (0, 1, len(state) // 2, len(state) - 1):
+        with pytest.raises(hg.HydrogradeError, match="not a valid hydrograde state"):
+            hg.Line._from_state(state[:cut])
+
+
+def test_tampered_states_break_no_rule():
+    # A rise of NaN, a circle of negative diameter, an empty pump curve: each written
+    # by hand in MessagePack, each refused by the constructor's own check.
+    with pytest.raises(hg.HydrogradeError, match="height = NaN"):
+        hg.Rise._from_state(_mp_f64(float("nan")))
+    circle = b"\x81" + _mp_str("Circle") + b"\x81" + _mp_str("diameter") + _mp_f64(-0.05)
+    with pytest.raises(hg.HydrogradeError, match="diameter = -0.05"):
+        hg.Section._from_state(circle)
+    empty = b"\x82" + _mp_str("flows") + b"\x90" + _mp_str("heads") + b"\x90"
+    with pytest.raises(hg.HydrogradeError, match="at least 3 points"):
+        hg.PumpCurve._from_state(empty)
+    assert hg.Section._from_state(
+        b"\x81" + _mp_str("Circle") + b"\x81" + _mp_str("diameter") + _mp_f64(0.05)
+    ) == hg.Section.circle(0.05)
+
+
+def test_overflowing_sizes_are_refused():
+    with pytest.raises(hg.OutOfRangeError, match=r"^diameter = 1e300"):
+        hg.Section.circle(1e300)
+    with pytest.raises(hg.OutOfRangeError, match=r"^height = "):
+        hg.Rise(1e300)

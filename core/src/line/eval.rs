@@ -95,18 +95,7 @@ impl State {
 
 /// A section with every length scaled by `k` (for a perturbed diameter).
 fn scaled_section(s: &Section, k: f64) -> Result<Section> {
-    Ok(match *s {
-        Section::Circle { diameter } => Section::circle(diameter * k)?,
-        Section::Annulus { outer, inner } => Section::annulus(outer * k, inner * k)?,
-        Section::Rectangle { width, height } => Section::rectangle(width * k, height * k)?,
-        Section::Ellipse { major, minor } => Section::ellipse(major * k, minor * k)?,
-        Section::Triangle { side } => Section::triangle(side * k)?,
-        Section::Custom {
-            area,
-            wetted_perimeter,
-            laminar_constant,
-        } => Section::custom(area * k * k, wetted_perimeter * k, laminar_constant)?,
-    })
+    s.scaled(k)
 }
 
 impl Line {
@@ -125,7 +114,7 @@ impl Line {
             return 0.0;
         }
         let opts = &self.options.friction;
-        let turbulent = if pipe.section.is_circular() {
+        let turbulent = if pipe.section().is_circular() {
             uo.turbulent_model
         } else {
             uo.non_circular_model
@@ -141,7 +130,7 @@ impl Line {
             Regime::Turbulent => turbulent,
             Regime::Transitional => {
                 let o = friction::Options {
-                    laminar_constant: pipe.section.laminar_constant() * scale,
+                    laminar_constant: pipe.section().laminar_constant() * scale,
                     ..*opts
                 };
                 match friction::transition_limits(re_t, rr_t, &o) {
@@ -189,14 +178,10 @@ impl Line {
                 let (pipe, geometry) = match pert {
                     None => (pipe, *geometry),
                     Some(p) => {
-                        let perturbed = Pipe {
-                            roughness: pipe.roughness * p.own[i],
-                            ..Pipe::new(
-                                scaled_section(&pipe.section, dk)?,
-                                pipe.length,
-                                pipe.roughness,
-                            )?
-                        };
+                        let perturbed = pipe.perturbed(
+                            scaled_section(pipe.section(), dk)?,
+                            pipe.roughness() * p.own[i],
+                        );
                         let g = perturbed.geometry(self.options.turbulent_diameter);
                         owned = perturbed;
                         (&owned, g)
@@ -206,7 +191,7 @@ impl Line {
                 let (dh, dt) = (geometry.dh, geometry.dt);
                 let scale = dt / dh;
                 let re_t = ps.reynolds * scale;
-                let rr_t = pipe.roughness / dt;
+                let rr_t = pipe.roughness() / dt;
                 let model_u = if bands || pert.is_some() {
                     self.model_u(pipe, ps.regime, re_t, rr_t, ps.friction_factor, scale)
                 } else {

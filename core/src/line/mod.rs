@@ -119,16 +119,58 @@ pub enum Element {
     Pipe(Pipe),
     /// A minor loss.
     Fitting(Fitting),
-    /// An elevation change, m (positive up in the flow direction, negative for a drop).
-    Rise(f64),
+    /// An elevation change (positive up in the flow direction, negative for a drop).
+    Rise(Rise),
     /// Rated equipment.
     Equipment(Equipment),
 }
 
+/// An elevation change of `height` m: positive up in the flow direction, negative for a
+/// drop. Built only through [`Rise::new`], so it always holds a finite height within
+/// ±[`Rise::MAX_HEIGHT`]; deserialising runs the same check.
+#[derive(Debug, Clone, Copy, PartialEq, Serialize, Deserialize)]
+#[serde(try_from = "f64", into = "f64")]
+pub struct Rise(f64);
+
+impl Rise {
+    /// The largest height (in magnitude) a rise accepts, m: above any route on Earth,
+    /// low enough that heads and pressures built from it stay finite.
+    pub const MAX_HEIGHT: f64 = 1e6;
+
+    /// A rise of `height` m.
+    ///
+    /// # Errors
+    /// `height` not finite, or beyond ±[`Rise::MAX_HEIGHT`].
+    pub fn new(height: f64) -> Result<Rise> {
+        check::within("height", height, -Rise::MAX_HEIGHT, Rise::MAX_HEIGHT, "m").map(Rise)
+    }
+
+    /// The height, m (positive up in the flow direction).
+    pub fn height(self) -> f64 {
+        self.0
+    }
+}
+
+impl TryFrom<f64> for Rise {
+    type Error = Error;
+    fn try_from(height: f64) -> Result<Rise> {
+        Rise::new(height)
+    }
+}
+
+impl From<Rise> for f64 {
+    fn from(r: Rise) -> f64 {
+        r.0
+    }
+}
+
 impl Element {
-    /// A rise (m), validated finite.
+    /// A rise element of `height` m (see [`Rise::new`]).
+    ///
+    /// # Errors
+    /// The errors of [`Rise::new`].
     pub fn rise(height: f64) -> Result<Element> {
-        Ok(Element::Rise(check::finite("height", height)?))
+        Rise::new(height).map(Element::Rise)
     }
 }
 
@@ -169,7 +211,12 @@ impl LineOptions {
 }
 
 /// A route of elements in series, ready to evaluate.
+///
+/// Serialised as its elements, options and roughness ranges only; deserialising builds
+/// the line again through the same checks (the worked-out bores and resistances are
+/// never read from the stored form).
 #[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+#[serde(try_from = "LineSpec", into = "LineSpec")]
 pub struct Line {
     pub(crate) elements: Vec<Element>,
     pub(crate) options: LineOptions,
@@ -181,6 +228,31 @@ pub struct Line {
     pub(crate) origin: Vec<Option<usize>>,
     /// Warnings raised when the line was built (bit, message).
     pub(crate) notes: Vec<(crate::warning::Warnings, String)>,
+}
+
+/// The stored form of a [`Line`]: what the user gave, nothing worked out.
+#[derive(Serialize, Deserialize)]
+struct LineSpec {
+    elements: Vec<Element>,
+    options: LineOptions,
+    roughness_ranges: Vec<Option<(f64, f64)>>,
+}
+
+impl TryFrom<LineSpec> for Line {
+    type Error = Error;
+    fn try_from(s: LineSpec) -> Result<Line> {
+        Line::build(s.elements, s.options, s.roughness_ranges)
+    }
+}
+
+impl From<Line> for LineSpec {
+    fn from(l: Line) -> LineSpec {
+        LineSpec {
+            elements: l.elements,
+            options: l.options,
+            roughness_ranges: l.roughness_ranges,
+        }
+    }
 }
 
 impl Line {
@@ -208,6 +280,25 @@ impl Line {
             return Err(Error::invalid(
                 "elements",
                 "a line needs at least one element",
+            ));
+        }
+        if roughness_ranges.len() != elements.len() {
+            return Err(Error::invalid(
+                "roughness_ranges",
+                format!(
+                    "has {} entries for {} elements",
+                    roughness_ranges.len(),
+                    elements.len()
+                ),
+            ));
+        }
+        if let Some(i) = (0..elements.len())
+            .find(|&i| roughness_ranges[i].is_some() && !matches!(elements[i], Element::Pipe(_)))
+        {
+            return Err(Error::out_of_range(
+                "index",
+                i as f64,
+                "a roughness range must belong to a pipe in the line",
             ));
         }
         let path = path::resolve(&elements, &options, &roughness_ranges)?;
@@ -298,7 +389,7 @@ impl Line {
             .elements
             .iter()
             .map(|e| match e {
-                Element::Pipe(p) if p.section.is_circular() => {
+                Element::Pipe(p) if p.section().is_circular() => {
                     Ok(Element::Pipe(p.with_diameter(diameter)?))
                 }
                 other => Ok(other.clone()),

@@ -94,7 +94,7 @@ impl Section {
     fn of_pipe(p: &Pipe) -> Section {
         Section {
             bore: p.bore(),
-            area: p.section.area(),
+            area: p.section().area(),
         }
     }
 
@@ -237,7 +237,7 @@ pub(crate) fn resolve(
                     ));
                 }
             };
-            let rr = neighbour.map_or(0.0, |p| p.roughness / s.bore);
+            let rr = neighbour.map_or(0.0, |p| p.roughness() / s.bore);
             Ok((s, rr.min(friction::MAX_REL_ROUGHNESS)))
         };
         path.rows.push(match e {
@@ -279,7 +279,7 @@ pub(crate) fn resolve(
                     blocks_reverse: f.blocks_reverse_flow(),
                 }
             }
-            Element::Rise(h) => Resolved::Rise(*h),
+            Element::Rise(h) => Resolved::Rise(h.height()),
             Element::Equipment(eq) => match &eq.rating {
                 Rating::PressureDrop { drop, at_flow } => Resolved::Drop {
                     drop: *drop,

@@ -79,7 +79,7 @@ impl Line {
         if !self
             .elements
             .iter()
-            .any(|e| matches!(e, super::Element::Pipe(p) if p.section.is_circular()))
+            .any(|e| matches!(e, super::Element::Pipe(p) if p.section().is_circular()))
         {
             return Err(Error::invalid("line", "has no round pipe to size"));
         }

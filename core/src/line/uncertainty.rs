@@ -51,7 +51,7 @@ pub(crate) fn roughness_input(
     own: Option<(f64, f64)>,
     options: &LineOptions,
 ) -> Result<(f64, f64)> {
-    match own.or(p.roughness_range) {
+    match own.or(p.roughness_range()) {
         Some((lo, hi)) => {
             check::positive("low", lo)?;
             check::positive("high", hi)?;
@@ -62,16 +62,16 @@ pub(crate) fn roughness_input(
                     format!("must not be below low ({lo} m): the roughness range is inverted"),
                 ));
             }
-            if !(lo..=hi).contains(&p.roughness) {
+            if !(lo..=hi).contains(&p.roughness()) {
                 return Err(Error::out_of_range(
                     "roughness",
-                    p.roughness,
+                    p.roughness(),
                     format!("must lie inside its stated range {lo} … {hi} m"),
                 ));
             }
-            Ok(log_uniform(p.roughness, lo, hi))
+            Ok(log_uniform(p.roughness(), lo, hi))
         }
-        None if p.roughness > 0.0 => Ok((options.uncertainty.roughness_default, 0.0)),
+        None if p.roughness() > 0.0 => Ok((options.uncertainty.roughness_default, 0.0)),
         None => Ok((0.0, 0.0)),
     }
 }
@@ -134,8 +134,7 @@ impl Sources {
                 ) if uo.roughness => {
                     shift[i] = *roughness_shift;
                     let shared = pipe
-                        .material
-                        .as_deref()
+                        .material()
                         .filter(|m| !own_range && !uo.independent_materials.iter().any(|x| x == m));
                     rough[i] = match shared {
                         Some(m) => match materials.get(m) {
@@ -286,7 +285,7 @@ impl Sources {
         let re_t = re * scale;
         let half = P95_RECT * 3f64.sqrt() * s.roughness_u;
         let f_at = |dl: f64| {
-            crate::friction::darcy_factor(re_t, pipe.roughness * math::exp(dl) / geometry.dt, &o)
+            crate::friction::darcy_factor(re_t, pipe.roughness() * math::exp(dl) / geometry.dt, &o)
                 .map(|r| r.f)
         };
         match (f_at(shift - half), f_at(shift + half)) {

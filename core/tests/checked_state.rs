@@ -1,0 +1,113 @@
+//! Values that cannot hold bad state: the checks of the constructors also guard
+//! deserialisation, and stored lines carry no worked-out cache.
+
+use hydrograde::{Element, ErrorKind, Fitting, Fluid, Line, Pipe, Rise, Section, Shape};
+
+fn water() -> Fluid {
+    Fluid::new(998.0, 1.0e-3).unwrap()
+}
+
+#[test]
+fn rises_refuse_non_finite_and_absurd_heights() {
+    assert_eq!(
+        Rise::new(f64::NAN).unwrap_err().kind(),
+        ErrorKind::NotFinite
+    );
+    assert_eq!(
+        Element::rise(f64::INFINITY).unwrap_err().kind(),
+        ErrorKind::NotFinite
+    );
+    assert_eq!(Rise::new(2e6).unwrap_err().kind(), ErrorKind::OutOfRange);
+    assert_eq!(Rise::new(-12.5).unwrap().height(), -12.5);
+    for bad in ["NaN", "1e300", "null"] {
+        assert!(serde_json::from_str::<Rise>(bad).is_err(), "{bad}");
+    }
+    assert_eq!(
+        serde_json::to_string(&Rise::new(3.0).unwrap()).unwrap(),
+        "3.0"
+    );
+}
+
+#[test]
+fn sections_have_bounds_and_deserialise_through_the_checks() {
+    // A circle of 1e300 m would have an infinite area.
+    let e = Section::circle(1e300).unwrap_err();
+    assert_eq!(e.kind(), ErrorKind::OutOfRange);
+    assert!(e.to_string().starts_with("diameter = 1e300"), "{e}");
+    assert!(Section::rectangle(1e-300, 1.0).is_err());
+    assert!(Section::custom(1e300, 1e300, 64.0).is_err());
+    let s = Section::annulus(0.1, 0.05).unwrap();
+    assert_eq!(
+        s.shape(),
+        Shape::Annulus {
+            outer: 0.1,
+            inner: 0.05
+        }
+    );
+    let text = serde_json::to_string(&s).unwrap();
+    assert_eq!(serde_json::from_str::<Section>(&text).unwrap(), s);
+    for bad in [
+        r#"{"Circle":{"diameter":-0.05}}"#,
+        r#"{"Annulus":{"outer":0.05,"inner":0.1}}"#,
+        r#"{"Custom":{"area":1.0,"wetted_perimeter":1.0,"laminar_constant":64.0}}"#,
+    ] {
+        assert!(serde_json::from_str::<Section>(bad).is_err(), "{bad}");
+    }
+    assert!(Section::from_shape(Shape::Circle { diameter: f64::NAN }).is_err());
+}
+
+#[test]
+fn pipes_deserialise_through_the_checks() {
+    let p = Pipe::of_material(Section::circle(0.1).unwrap(), 50.0, "commercial_steel").unwrap();
+    let text = serde_json::to_string(&p).unwrap();
+    assert_eq!(serde_json::from_str::<Pipe>(&text).unwrap(), p);
+    let good = serde_json::to_value(&p).unwrap();
+    for (field, value) in [
+        ("length", serde_json::json!(-1.0)),
+        ("length", serde_json::json!(1e300)),
+        ("roughness", serde_json::json!(0.2)),
+        ("roughness_range", serde_json::json!([1e-3, 1e-4])),
+        ("material", serde_json::json!("unobtainium")),
+    ] {
+        let mut v = good.clone();
+        v[field] = value;
+        assert!(serde_json::from_value::<Pipe>(v).is_err(), "{field}");
+    }
+    assert!(Pipe::circular(0.1, 2e7, 0.0).is_err());
+}
+
+#[test]
+fn lines_store_no_cache_and_rebuild_on_load() {
+    let line = Line::new(vec![
+        Element::Pipe(Pipe::circular(0.05, 30.0, 4.5e-5).unwrap()),
+        Element::Fitting(Fitting::k(0.5).unwrap()),
+    ])
+    .unwrap();
+    let v = serde_json::to_value(&line).unwrap();
+    assert!(v.get("resolved").is_none(), "{v}");
+    let back: Line = serde_json::from_value(v.clone()).unwrap();
+    assert_eq!(back, line);
+    let q = 2e-3;
+    assert_eq!(
+        back.evaluate(&water(), q).unwrap().required_head,
+        line.evaluate(&water(), q).unwrap().required_head
+    );
+    // Tampered: an element more than there are roughness ranges; a range on a fitting;
+    // no elements.
+    let mut extra = v.clone();
+    extra["elements"]
+        .as_array_mut()
+        .unwrap()
+        .push(serde_json::json!({"Rise": 3.0}));
+    assert!(serde_json::from_value::<Line>(extra).is_err());
+    let mut on_fitting = v.clone();
+    on_fitting["roughness_ranges"][1] = serde_json::json!([1e-5, 1e-4]);
+    assert!(serde_json::from_value::<Line>(on_fitting).is_err());
+    let mut empty = v.clone();
+    empty["elements"] = serde_json::json!([]);
+    empty["roughness_ranges"] = serde_json::json!([]);
+    assert!(serde_json::from_value::<Line>(empty).is_err());
+    let mut nan_rise = v;
+    nan_rise["elements"][1] = serde_json::json!({"Rise": null});
+    assert!(serde_json::from_value::<Line>(nan_rise).is_err());
+}
