@@ -37,7 +37,7 @@ pub struct PyLine {
 #[pymethods]
 impl PyLine {
     #[new]
-    #[pyo3(signature = (elements, *, correlation = None, transition = None, laminar_limit = None, turbulent_limit = None, turbulent_diameter = None, inlet_pressure = None, uncertainty = None))]
+    #[pyo3(signature = (elements, *, correlation = None, transition = None, laminar_limit = None, turbulent_limit = None, turbulent_diameter = None, inlet_pressure = None, uncertainty = None, surroundings = None, air_column_for_liquids = false))]
     #[allow(clippy::too_many_arguments)]
     fn new(
         elements: &Bound<'_, PyAny>,
@@ -48,6 +48,8 @@ impl PyLine {
         turbulent_diameter: Option<&str>,
         inlet_pressure: Option<f64>,
         uncertainty: Option<&Bound<'_, PyAny>>,
+        surroundings: Option<PyRef<'_, PyFluid>>,
+        air_column_for_liquids: bool,
     ) -> PyResult<Self> {
         let mut items = Vec::new();
         for (i, obj) in elements.try_iter()?.enumerate() {
@@ -62,6 +64,8 @@ impl PyLine {
                 transition,
             )?,
             inlet_pressure,
+            surroundings: surroundings.map(|f| f.inner.clone()),
+            air_column_for_liquids,
             ..LineOptions::default()
         };
         if let Some(t) = turbulent_diameter {

@@ -67,6 +67,12 @@ impl PyLineResult {
     fn drequired_head_dflow(&self) -> f64 {
         self.inner.drequired_head_dflow
     }
+    /// ρ·g·required_head, Pa: the pressure rise a pump, fan or blower must supply (for a
+    /// gas the figure to lead with; rises count (ρ − ρ_surroundings)·g·Δz).
+    #[getter]
+    fn required_pressure(&self) -> f64 {
+        self.inner.required_pressure
+    }
     /// Density used, kg/m³ (the mean density for a gas).
     #[getter]
     fn density(&self) -> f64 {
@@ -137,6 +143,7 @@ impl PyLineResult {
             rows.append(element_dict(py, e)?)?;
         }
         d.set_item("elements", rows)?;
+        d.set_item("required_pressure", r.required_pressure)?;
         d.set_item("warnings", self.warnings())?;
         d.set_item("messages", self.messages())?;
         Ok(d)
