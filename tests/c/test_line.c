@@ -353,7 +353,7 @@ static void test_more_elements_bad_input(void) {
   CHECK(hg_line_add_custom_duct(l, 0.01, 0.1, 60, 10, 0) == HG_ERR_OUT_OF_RANGE, "perimeter below the circle's");
   CHECK(hg_line_add_entrance(l, 3, 0) == HG_ERR_OUT_OF_RANGE && hg_line_add_entrance(l, -1, 0) == HG_ERR_OUT_OF_RANGE, "kind");
   CHECK(hg_line_add_entrance(l, HG_ENTRANCE_SHARP, 0.1) == HG_ERR_INVALID, "radius on a sharp entrance");
-  CHECK(hg_line_add_pipe(l, 0.05, 10, 0) == HG_OK && hg_line_add_cv(l, 40, 0) == HG_OK, "pipe and valve");
+  CHECK(hg_line_add_pipe(l, 0.05, 10, 2e-6) == HG_OK && hg_line_add_cv(l, 40, 0) == HG_OK, "pipe and valve");
   CHECK(hg_line_set_k_spread(l, 1, 0.5) == HG_OK, "spread");
   CHECK(hg_line_set_k_spread(l, 0, 0.5) == HG_ERR_OUT_OF_RANGE && msg_len() > 0, "spread on a pipe");
   CHECK(hg_line_set_k_spread(l, 7, 0.5) == HG_ERR_OUT_OF_RANGE, "spread past the end");
