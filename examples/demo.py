@@ -237,10 +237,13 @@ def duct() -> None:
     print(f"\n2. Workshop exhaust duct (air 30 °C, {DUCT_FLOW} m³/s, galvanised rectangular duct)\n")
     r = duct_line().evaluate(air(), DUCT_FLOW)
     print_breakdown(r, "Pa")
-    b = r.pressure_loss_band
+    # A gas line leads with pressure: rho g (required head), losses plus the stack effect.
+    b = r.required_head_band
+    rho_g = r.density * 9.80665
     print(
-        f"  fan must supply {r.pressure_loss:.0f} Pa ({b.low:.0f} … {b.high:.0f} Pa) "
-        "of pressure loss"
+        f"  fan must supply {r.required_pressure:.0f} Pa ({b.low * rho_g:.0f} … "
+        f"{b.high * rho_g:.0f} Pa): losses {r.pressure_loss:.0f} Pa, stack effect "
+        f"{r.required_pressure - r.pressure_loss:.0f} Pa"
     )
 
 

@@ -218,8 +218,11 @@ static void duct(void) {
   hg_line *line = duct_line();
   hg_line_totals r;
   print_breakdown(line, air, 0.9, &r);
-  printf("  fan must supply %.0f Pa (%.0f … %.0f Pa) of pressure loss\n", r.pressure_loss, r.pressure_loss_low,
-         r.pressure_loss_high);
+  /* A gas line leads with pressure: rho g (required head), losses plus the stack effect. */
+  double rho_g = r.density * 9.80665;
+  printf("  fan must supply %.0f Pa (%.0f … %.0f Pa): losses %.0f Pa, stack effect %.0f Pa\n", r.required_pressure,
+         r.required_head_low * rho_g, r.required_head_high * rho_g, r.pressure_loss,
+         r.required_pressure - r.pressure_loss);
   hg_line_free(line);
   hg_fluid_free(air);
 }

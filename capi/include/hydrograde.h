@@ -583,6 +583,12 @@ typedef struct hg_line_totals {
    * Upper end of the required-head band, m.
    */
   double required_head_high;
+  /**
+   * ρ·g·required_head, Pa: the pressure rise a pump, fan or blower must supply (for a
+   * gas the figure to lead with; a rise counts (ρ − ρ_surroundings)·g·Δz). Added after
+   * the first layout: read it only when `struct_size` covers it.
+   */
+  double required_pressure;
 } hg_line_totals;
 
 /**
@@ -1433,6 +1439,49 @@ int32_t hg_line_system_curve(const struct hg_line *line,
                              const double *flows,
                              size_t n,
                              double *heads);
+
+/**
+ * Sets the air around `line` to `surroundings` (a gas handle, copied), or back to the
+ * default dry air at 20 °C and 101 325 Pa when `surroundings` is NULL. A rise in a gas
+ * line then adds (ρ − ρ_surroundings)·g·Δz of pressure (the stack effect); a liquid line
+ * neglects the air column unless `hg_line_set_air_column_for_liquids` turns it on.
+ *
+ * Returns `HG_OK`; `HG_ERR_INVALID` when `surroundings` is a liquid;
+ * `HG_ERR_NULL_POINTER` for `line`. Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread; `surroundings` NULL or a
+ * live fluid handle.
+ */
+int32_t hg_line_set_surroundings(struct hg_line *line,
+                                 const struct hg_fluid *surroundings);
+
+/**
+ * Counts the surrounding air column for a liquid line too (`on` = 1) or neglects it (0,
+ * the default: for water it changes a rise's head by about 0.12 %).
+ *
+ * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` for `on` other than 0 or 1;
+ * `HG_ERR_NULL_POINTER`. Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_set_air_column_for_liquids(struct hg_line *line,
+                                           int32_t on);
+
+/**
+ * Writes 1 to `*blocks` when some element of `line` stops reverse flow (a check or foot
+ * valve), else 0. Every call that takes a flow refuses a reverse flow through such a
+ * line with `HG_ERR_NO_SOLUTION` and a message naming the valve.
+ *
+ * Returns `HG_OK`; `HG_ERR_INVALID` for a line that cannot be built;
+ * `HG_ERR_NULL_POINTER`. Thread-safe (the line is only read).
+ *
+ * # Safety
+ * `line` must be NULL or a live handle; `blocks` NULL or writable.
+ */
+int32_t hg_line_blocks_reverse_flow(const struct hg_line *line,
+                                    int32_t *blocks);
 
 /**
  * Appends a round pipe of the catalogue wall `material` (see `hg_roughness`): inside

@@ -84,6 +84,10 @@ pub struct hg_line_totals {
     pub required_head_low: f64,
     /// Upper end of the required-head band, m.
     pub required_head_high: f64,
+    /// ρ·g·required_head, Pa: the pressure rise a pump, fan or blower must supply (for a
+    /// gas the figure to lead with; a rise counts (ρ − ρ_surroundings)·g·Δz). Added after
+    /// the first layout: read it only when `struct_size` covers it.
+    pub required_pressure: f64,
 }
 sized!(hg_line_totals, required_head_high: f64);
 
@@ -175,6 +179,7 @@ pub(crate) fn totals_to_c(r: &LineResult) -> hg_line_totals {
         pressure_loss_high: r.pressure_loss_band.high,
         required_head_low: r.required_head_band.low,
         required_head_high: r.required_head_band.high,
+        required_pressure: r.required_pressure,
     }
 }
 

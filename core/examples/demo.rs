@@ -201,9 +201,16 @@ fn duct() -> Result<()> {
     let air = Fluid::air(303.15, 101_325.0)?;
     let r = duct_line()?.evaluate(&air, 0.9)?;
     print_breakdown(&r);
+    // A gas line leads with pressure: what the fan supplies is ρ·g·(required head), the
+    // losses plus the stack effect of the rise in the surrounding air.
+    let rho_g = r.density * hydrograde::units::STANDARD_GRAVITY;
     println!(
-        "  fan must supply {:.0} Pa ({:.0} … {:.0} Pa) of pressure loss",
-        r.pressure_loss, r.pressure_loss_band.low, r.pressure_loss_band.high
+        "  fan must supply {:.0} Pa ({:.0} … {:.0} Pa): losses {:.0} Pa, stack effect {:.0} Pa",
+        r.required_pressure,
+        r.required_head_band.low * rho_g,
+        r.required_head_band.high * rho_g,
+        r.pressure_loss,
+        r.required_pressure - r.pressure_loss
     );
     Ok(())
 }

@@ -212,3 +212,165 @@ fn a_check_valve_refuses_reverse_flow_in_every_call() {
     let s = split_flow(&[line.clone(), other], &w, 1e-4);
     named(s.unwrap_err());
 }
+
+mod surroundings {
+    use super::*;
+    use hydrograde::line::LineOptions;
+
+    /// Ideal-gas density of dry air, ρ = p M/(R T), M = 0.0289647 kg/mol (dry air, from
+    /// memory), R = 8.314462618 J/(mol·K) (exact, SI 2019).
+    fn air_density(t: f64, p: f64) -> f64 {
+        p * 0.028_964_7 / (8.314_462_618 * t)
+    }
+
+    fn duct(rise: f64) -> Line {
+        Line::new(vec![
+            Element::Pipe(Pipe::circular(0.3, 30.0, 1.5e-4).unwrap()),
+            Element::rise(rise).unwrap(),
+        ])
+        .unwrap()
+    }
+
+    #[test]
+    fn air_rising_in_air_of_the_same_state_adds_no_pressure() {
+        // Hydrostatics: inside and outside columns of equal density cancel, so the rise
+        // adds (ρ − ρ_s)·g·Δz = 0 at zero flow exactly; with flow the mean density inside
+        // drops by the friction loss and the rise adds exactly (ρ_mean − ρ_s)·g·100.
+        let air = Fluid::air(293.15, 101_325.0).unwrap();
+        let line = duct(100.0);
+        let still = line.evaluate(&air, 0.0).unwrap();
+        assert_eq!(still.required_pressure, 0.0);
+        assert_eq!(still.elements[1].static_head, 0.0);
+        let r = line.evaluate(&air, 0.5).unwrap();
+        let rho_s = air_density(293.15, 101_325.0);
+        let want = (r.density - rho_s) * G * 100.0;
+        let got = r.elements[1].static_head * r.density * G;
+        assert!((got - want).abs() < 1e-9, "{got} vs {want}");
+        // Far from the 1.2 kPa of a 100 m column of the duct's own air.
+        assert!(got.abs() < 1.0);
+    }
+
+    #[test]
+    fn hot_flue_gas_rising_30_m_gives_the_stack_effect() {
+        // Stack effect (hydrostatics): Δp = −(ρ_amb − ρ_hot)·g·30 m, i.e. the hot column
+        // lifts itself; with ideal-gas densities at 101 325 Pa:
+        // ρ_amb = 1.20412 kg/m³ (20 °C), ρ_hot = 0.74604 kg/m³ (200 °C), Δp ≈ −134.8 Pa.
+        let hot = Fluid::air(473.15, 101_325.0).unwrap();
+        let line = duct(30.0);
+        let r = line.evaluate(&hot, 0.0).unwrap();
+        let rho_amb = air_density(293.15, 101_325.0);
+        let rho_hot = air_density(473.15, 101_325.0);
+        let want = -(rho_amb - rho_hot) * G * 30.0;
+        assert!(
+            common::rel_err(r.required_pressure, want) < 1e-12,
+            "{} vs {want}",
+            r.required_pressure
+        );
+        assert!((want + 134.8).abs() < 0.1);
+    }
+
+    #[test]
+    fn liquids_neglect_the_air_column_unless_asked() {
+        // Water rising 10 m: static head 10 m by default; with the air column counted,
+        // 10 (1 − ρ_air/ρ_water) m (hydrostatics).
+        let w = water();
+        let plain = duct(10.0);
+        assert_eq!(plain.evaluate(&w, 0.0).unwrap().static_head, 10.0);
+        let with_air = plain
+            .set_options(LineOptions {
+                air_column_for_liquids: true,
+                ..LineOptions::default()
+            })
+            .unwrap();
+        let want = 10.0 * (1.0 - air_density(293.15, 101_325.0) / 998.2);
+        let got = with_air.evaluate(&w, 0.0).unwrap().static_head;
+        assert!(common::rel_err(got, want) < 1e-12, "{got} vs {want}");
+    }
+
+    #[test]
+    fn surroundings_must_be_a_gas() {
+        let e = duct(1.0)
+            .set_options(LineOptions {
+                surroundings: Some(water()),
+                ..LineOptions::default()
+            })
+            .unwrap_err();
+        assert_eq!(e.kind(), ErrorKind::Invalid);
+        assert!(e.to_string().starts_with("surroundings:"), "{e}");
+    }
+}
+
+mod pressures {
+    use super::*;
+    use hydrograde::line::LineOptions;
+
+    #[test]
+    fn a_60_c_suction_lift_of_7_m_at_3_m_s_cavitates() {
+        // An open tank (101 325 Pa on its surface) feeds a square-edged inlet (K = 0.5),
+        // a strainer (K = 2) and a 7 m lift in a 100 mm suction at 3 m/s of 60 °C water.
+        // Bernoulli with losses from the tank surface (V = 0) to the top of the lift:
+        //   p_total = p_atm − ρ g (7 + (0.5 + 2) V²/2g),   p_static = p_total − ½ρV²,
+        //   NPSHa = (p_total − p_v)/(ρ g)          (definition).
+        // ρ and p_v are the fluid's (inputs); V = 3 m/s is the scenario.
+        let w = Fluid::water(333.15, 101_325.0).unwrap();
+        let (rho, pv) = (w.density, w.vapour_pressure.unwrap());
+        assert!((pv - 19_946.0).abs() < 10.0); // IAPWS-IF97 saturation at 60 °C, from memory
+        let area = PI * 0.1 * 0.1 / 4.0;
+        let q = 3.0 * area;
+        let line = Line::with_options(
+            vec![
+                fitting(Fitting::entrance_sharp()),
+                fitting(Fitting::k(2.0).unwrap()),
+                Element::rise(7.0).unwrap(),
+                Element::Pipe(Pipe::circular(0.1, 1.0, 4.5e-5).unwrap()),
+            ],
+            LineOptions {
+                inlet_pressure: Some(101_325.0),
+                ..LineOptions::default()
+            },
+        )
+        .unwrap();
+        let r = line.evaluate(&w, q).unwrap();
+        let v = q / area;
+        let hv = v * v / (2.0 * G);
+        let total = 101_325.0 - rho * G * (7.0 + 2.5 * hv);
+        let stat = total - 0.5 * rho * v * v; // ≈ 18.3 kPa, below p_v ≈ 19.9 kPa
+        let top = &r.elements[2];
+        assert!(common::rel_err(top.total_pressure_out.unwrap(), total) < 1e-12);
+        assert!(common::rel_err(top.pressure_out.unwrap(), stat) < 1e-12);
+        assert_eq!(top.elevation_out, 7.0);
+        assert!(stat < pv && (stat - 18_350.0).abs() < 200.0, "{stat}");
+        assert!(top.warnings.contains(Warnings::BELOW_VAPOUR_PRESSURE));
+        assert!(r.messages.iter().any(|m| m.contains("vapour pressure")));
+        let npsha = (total - pv) / (rho * G); // ≈ 0.29 m
+        assert!(common::rel_err(r.npsh_available(2).unwrap(), npsha) < 1e-12);
+        let c = r.npsh_check(2, 0.2, 0.5).unwrap();
+        assert!(!c.sufficient && common::rel_err(c.available, npsha) < 1e-12);
+        // Bad questions.
+        let e = r.npsh_available(9).unwrap_err();
+        assert!(e.to_string().starts_with("index = 9"), "{e}");
+        assert!(r.npsh_check(2, -1.0, 0.0).is_err());
+        let no_p = Line::new(line.elements().to_vec()).unwrap();
+        let e = no_p.evaluate(&w, q).unwrap().npsh_available(2).unwrap_err();
+        assert!(e.to_string().starts_with("inlet_pressure"), "{e}");
+    }
+
+    #[test]
+    fn a_line_starting_in_a_pipe_takes_the_inlet_pressure_as_static() {
+        // Static pressure 2 bar in the first pipe: total = p + ½ρV² (definition).
+        let w = water();
+        let line = Line::with_options(
+            vec![pipe(0.05)],
+            LineOptions {
+                inlet_pressure: Some(2e5),
+                ..LineOptions::default()
+            },
+        )
+        .unwrap();
+        let q = 2e-3;
+        let r = line.evaluate(&w, q).unwrap();
+        let v = q / (PI * 0.05 * 0.05 / 4.0);
+        let want = 2e5 + 0.5 * 998.2 * v * v - 998.2 * G * r.elements[0].head_loss;
+        assert!(common::rel_err(r.elements[0].total_pressure_out.unwrap(), want) < 1e-14);
+    }
+}

@@ -40,7 +40,7 @@ pub struct PyLine {
 #[pymethods]
 impl PyLine {
     #[new]
-    #[pyo3(signature = (elements, *, correlation = None, transition = None, laminar_limit = None, turbulent_limit = None, turbulent_diameter = None, inlet_pressure = None, uncertainty = None))]
+    #[pyo3(signature = (elements, *, correlation = None, transition = None, laminar_limit = None, turbulent_limit = None, turbulent_diameter = None, inlet_pressure = None, uncertainty = None, surroundings = None, air_column_for_liquids = false))]
     #[allow(clippy::too_many_arguments)]
     fn new(
         elements: &Bound<'_, PyAny>,
@@ -51,6 +51,8 @@ impl PyLine {
         turbulent_diameter: Option<&str>,
         #[pyo3(from_py_with = si::opt_inlet_pressure)] inlet_pressure: Option<f64>,
         uncertainty: Option<&Bound<'_, PyAny>>,
+        surroundings: Option<PyRef<'_, PyFluid>>,
+        air_column_for_liquids: bool,
     ) -> PyResult<Self> {
         let mut items = Vec::new();
         for (i, obj) in elements.try_iter()?.enumerate() {
@@ -65,6 +67,8 @@ impl PyLine {
                 transition,
             )?,
             inlet_pressure,
+            surroundings: surroundings.map(|f| f.inner.clone()),
+            air_column_for_liquids,
             ..LineOptions::default()
         };
         if let Some(t) = turbulent_diameter {

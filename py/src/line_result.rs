@@ -2,6 +2,7 @@
 //! `OperatingPoint` and `Split`.
 
 use crate::band::{PyBand, band_dict};
+use crate::errors::CoreResult;
 use crate::state;
 use hydrograde::band::Band;
 use hydrograde::line::{
@@ -67,6 +68,12 @@ impl PyLineResult {
     fn drequired_head_dflow(&self) -> f64 {
         self.inner.drequired_head_dflow
     }
+    /// ρ·g·required_head, Pa: the pressure rise a pump, fan or blower must supply (for a
+    /// gas the figure to lead with; rises count (ρ − ρ_surroundings)·g·Δz).
+    #[getter]
+    fn required_pressure(&self) -> f64 {
+        self.inner.required_pressure
+    }
     /// Density used, kg/m³ (the mean density for a gas).
     #[getter]
     fn density(&self) -> f64 {
@@ -91,6 +98,35 @@ impl PyLineResult {
     #[getter]
     fn messages(&self) -> Vec<String> {
         self.inner.messages.clone()
+    }
+    /// Vapour pressure of the liquid, Pa (None where unknown).
+    #[getter]
+    fn vapour_pressure(&self) -> Option<f64> {
+        self.inner.vapour_pressure
+    }
+    /// NPSH available (m) after row ``index`` of ``elements``: (p_total − p_v)/(ρ g).
+    /// Raises for an index outside the rows, a line without an inlet pressure or a fluid
+    /// without a vapour pressure.
+    fn npsh_available(&self, index: usize) -> PyResult<f64> {
+        self.inner.npsh_available(index).py()
+    }
+    /// NPSH available after row ``index`` against ``required`` (m) plus ``margin`` (m):
+    /// a dict with ``available``, ``required``, ``margin`` and ``sufficient``.
+    #[pyo3(signature = (index, required, margin = 0.0))]
+    fn npsh_check<'py>(
+        &self,
+        py: Python<'py>,
+        index: usize,
+        required: f64,
+        margin: f64,
+    ) -> PyResult<Bound<'py, PyDict>> {
+        let c = self.inner.npsh_check(index, required, margin).py()?;
+        let d = PyDict::new(py);
+        d.set_item("available", c.available)?;
+        d.set_item("required", c.required)?;
+        d.set_item("margin", c.margin)?;
+        d.set_item("sufficient", c.sufficient)?;
+        Ok(d)
     }
     /// The per-element breakdown, in route order.
     #[getter]
@@ -139,6 +175,7 @@ impl PyLineResult {
             rows.append(row)?;
         }
         d.set_item("elements", rows)?;
+        d.set_item("required_pressure", r.required_pressure)?;
         d.set_item("warnings", self.warnings())?;
         d.set_item("messages", self.messages())?;
         Ok(d)
@@ -189,6 +226,8 @@ fn element_dict<'py>(py: Python<'py>, e: &ElementResult) -> PyResult<Bound<'py, 
     d.set_item("dhead_dflow", e.dhead_dflow)?;
     d.set_item("static_head", e.static_head)?;
     d.set_item("pressure_out", e.pressure_out)?;
+    d.set_item("total_pressure_out", e.total_pressure_out)?;
+    d.set_item("elevation_out", e.elevation_out)?;
     d.set_item("head_loss_low", e.head_loss_band.low)?;
     d.set_item("head_loss_high", e.head_loss_band.high)?;
     d.set_item("dominant", e.head_loss_band.dominant().map(|s| s.name()))?;
@@ -272,6 +311,17 @@ impl PyElementResult {
     #[getter]
     fn pressure_out(&self) -> Option<f64> {
         self.inner.pressure_out
+    }
+    /// Total pressure (static + ½ρV²) after the element, Pa absolute (None without an
+    /// inlet pressure).
+    #[getter]
+    fn total_pressure_out(&self) -> Option<f64> {
+        self.inner.total_pressure_out
+    }
+    /// Elevation of the element's outlet above the line's inlet, m.
+    #[getter]
+    fn elevation_out(&self) -> f64 {
+        self.inner.elevation_out
     }
     /// Names of the element's warnings.
     #[getter]

@@ -14,7 +14,7 @@ typedef struct {
   int type; /* 'd', 's', 'i' */
   double d;
   long long i;
-  char s[40];
+  char s[96];
 } tok;
 
 typedef struct {

@@ -138,7 +138,7 @@ static void test_line() {
   hg::fluid water = hg::fluid::water(293.15, 2e5);
   hg::line l;
   l.add_pipe(0.05, 30, 4.5e-5).add_fitting("elbow_90_standard").add_rise(3.0).add_fitting_k(0.5);
-  l.add_duct(HG_SECTION_CIRCLE, 0.04, 0, 12, 1.5e-6).add_equipment("strainer", 2e4, 2e-3);
+  l.add_duct(HG_SECTION_CIRCLE, 0.05, 0, 12, 1.5e-6).add_equipment("strainer", 2e4, 2e-3);
   l.set_inlet_pressure(3e5);
   CHECK(l.size() == 6, "size");
   hg::line_result res = l.evaluate(water, 2e-3);

@@ -18,6 +18,12 @@ static hg_line *lines[3];
 static hg_fluid *fluids[3];
 
 static size_t msg_len(void) { return hg_last_error(NULL, 0); }
+static const char *last_msg(void) {
+  static char buf[512];
+  buf[0] = 0;
+  hg_last_error(buf, sizeof buf);
+  return buf;
+}
 
 /* Evaluating through the result handle: each helper evaluates, reads one thing and frees
  * the result, so the checks below read like one call. The caller sets struct_size. */
@@ -862,6 +868,43 @@ static void test_curve_band(void) {
   hg_fluid_free(f);
 }
 
+/* The air around a line and the direction flow may take (hand-worked values). */
+static void test_line_model(void) {
+  hg_line *l = NULL;
+  hg_fluid *hot = NULL, *water = NULL;
+  CHECK(hg_line_new(&l) == HG_OK && hg_fluid_air(473.15, 101325.0, &hot) == HG_OK &&
+            hg_fluid_water(293.15, 101325.0, &water) == HG_OK, "handles");
+  CHECK(hg_line_add_pipe(l, 0.3, 30.0, 1.5e-4) == HG_OK && hg_line_add_rise(l, 30.0) == HG_OK, "flue");
+  /* Stack effect (hydrostatics): -(rho_amb - rho_hot) g 30 m with ideal-gas densities
+     p M/(R T), M = 0.0289647 kg/mol (from memory), R = 8.314462618 J/(mol K) (SI 2019). */
+  double ra = 101325.0 * 0.0289647 / (8.314462618 * 293.15), rh = 101325.0 * 0.0289647 / (8.314462618 * 473.15);
+  double want = -(ra - rh) * 9.80665 * 30.0;
+  hg_line_totals t;
+  memset(&t, 0, sizeof t);
+  t.struct_size = sizeof t;
+  CHECK(totals(l, hot, 0.0, &t) == HG_OK && fabs(t.required_pressure - want) < 1e-9 * fabs(want),
+        "stack effect %.17g vs %.17g", t.required_pressure, want);
+  CHECK(hg_line_set_surroundings(l, water) == HG_ERR_INVALID && strstr(last_msg(), "surroundings") != NULL,
+        "surroundings must be a gas: %s", last_msg());
+  CHECK(hg_line_set_surroundings(l, hot) == HG_OK && totals(l, hot, 0.0, &t) == HG_OK && t.required_pressure == 0.0,
+        "a column of the surroundings' own air adds nothing");
+  CHECK(hg_line_set_surroundings(l, NULL) == HG_OK, "back to the default surroundings");
+  int blocks = -1;
+  CHECK(hg_line_blocks_reverse_flow(l, &blocks) == HG_OK && blocks == 0, "no check valve");
+  CHECK(hg_line_add_fitting(l, "swing_check_valve", 0.0) == HG_OK, "check valve");
+  CHECK(hg_line_blocks_reverse_flow(l, &blocks) == HG_OK && blocks == 1, "blocks");
+  CHECK(hg_line_blocks_reverse_flow(NULL, &blocks) == HG_ERR_NULL_POINTER, "NULL line");
+  CHECK(hg_line_blocks_reverse_flow(l, NULL) == HG_ERR_NULL_POINTER, "NULL out");
+  double h = 0, d = 0;
+  CHECK(hg_line_required_head(l, water, -1e-3, &h, &d) == HG_ERR_NO_SOLUTION &&
+            strstr(last_msg(), "swing_check_valve (element 2)") != NULL,
+        "reverse flow refused naming the valve: %s", last_msg());
+  CHECK(hg_line_set_air_column_for_liquids(l, 2) == HG_ERR_OUT_OF_RANGE, "on must be 0 or 1");
+  hg_fluid_free(hot);
+  hg_fluid_free(water);
+  hg_line_free(l);
+}
+
 int main(int argc, char **argv) {
   if (argc < 2) {
     fprintf(stderr, "usage: %s REFERENCE_FILE\n", argv[0]);
@@ -893,6 +936,7 @@ int main(int argc, char **argv) {
   test_result_handle();
   test_threads();
   test_curve_band();
+  test_line_model();
   pthread_t th[8];
   thread_arg args[8];
   for (int i = 0; i < 8; i++) {

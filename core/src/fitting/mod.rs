@@ -466,6 +466,15 @@ impl Fitting {
         })
     }
 
+    /// True for an inlet from a tank (square-edged, rounded or re-entrant): a line that
+    /// starts with one starts at the tank's surface.
+    pub fn is_from_tank(&self) -> bool {
+        matches!(
+            self.method,
+            Method::EntranceSharp | Method::EntranceRounded { .. } | Method::EntranceProjecting
+        )
+    }
+
     /// The bores (m) on the upstream and downstream side of a change of section
     /// (contraction or expansion); `None` for every other fitting.
     pub fn transition_bores(&self) -> Option<(f64, f64)> {

@@ -161,7 +161,7 @@ impl Line {
         let dk = pert.map_or(1.0, |p| p.diameter);
         let nu = fluid.viscosity / fluid.density;
         Ok(match &self.resolved[i] {
-            Resolved::Rise(h) => State::passive(*h),
+            r @ Resolved::Rise { .. } => State::passive(self.rise_head(r, fluid)),
             Resolved::Pipe {
                 pipe,
                 geometry,
@@ -361,7 +361,7 @@ impl Line {
         // Converges geometrically (ratio ≈ Δp/2p ≤ 0.2); 60 sweeps reach machine precision.
         for _ in 0..60 {
             let (h, _) = self.head_and_slope(&work, q)?;
-            let new_dp = (h - self.static_head()) * work.density * STANDARD_GRAVITY;
+            let new_dp = (h - self.static_head_in(&work)) * work.density * STANDARD_GRAVITY;
             let ratio = new_dp.abs() / p_in;
             if ratio > GAS_REFUSE_RATIO {
                 return Err(Error::no_solution(format!(

@@ -26,7 +26,7 @@ mod solve;
 pub(crate) mod uncertainty;
 
 pub use parallel::{Split, split_flow};
-pub use result::{ElementKind, ElementResult, LineResult};
+pub use result::{ElementKind, ElementResult, LineResult, NpshCheck};
 pub use sizing::{Limit, SizeChoice, Sizing};
 pub use solve::{FlowSolution, OperatingPoint, PumpCurve};
 pub use uncertainty::CurveBand;
@@ -34,6 +34,7 @@ pub use uncertainty::CurveBand;
 use crate::band::UncertaintyOptions;
 use crate::error::{Error, Result, check};
 use crate::fitting::Fitting;
+use crate::fluid::Fluid;
 use crate::friction;
 use crate::pipe::Pipe;
 use crate::section::TurbulentDiameter;
@@ -186,7 +187,24 @@ pub struct LineOptions {
     pub inlet_pressure: Option<f64>,
     /// Uncertainty sources of the bands.
     pub uncertainty: UncertaintyOptions,
+    /// The air around the line, a gas: `None` for dry air at
+    /// [`SURROUNDINGS_TEMPERATURE`] and [`SURROUNDINGS_PRESSURE`]. A line open to it at
+    /// both ends feels, over a rise Δz, only the difference between the column inside and
+    /// the column outside: (ρ − ρ_surroundings)·g·Δz of pressure (the stack effect of a
+    /// chimney; hydrostatics, exact for uniform densities).
+    #[serde(default)]
+    pub surroundings: Option<Fluid>,
+    /// Count the surrounding air column for a liquid line too. Off by default: for water
+    /// it changes a rise's head by ρ_air/ρ ≈ 0.12 %, and a liquid line usually runs between
+    /// free surfaces whose own air columns cancel it.
+    #[serde(default)]
+    pub air_column_for_liquids: bool,
 }
+
+/// Temperature of the default surroundings, K (20 °C).
+pub const SURROUNDINGS_TEMPERATURE: f64 = 293.15;
+/// Pressure of the default surroundings, Pa (one standard atmosphere).
+pub const SURROUNDINGS_PRESSURE: f64 = 101_325.0;
 
 impl Default for LineOptions {
     fn default() -> Self {
@@ -195,6 +213,8 @@ impl Default for LineOptions {
             turbulent_diameter: TurbulentDiameter::Hydraulic,
             inlet_pressure: None,
             uncertainty: UncertaintyOptions::default(),
+            surroundings: None,
+            air_column_for_liquids: false,
         }
     }
 }
@@ -206,7 +226,26 @@ impl LineOptions {
         if let Some(p) = self.inlet_pressure {
             check::positive("inlet_pressure", p)?;
         }
+        self.surroundings_fluid()?;
         self.uncertainty.validate()
+    }
+
+    /// The surrounding air: the stated one, or dry air at 20 °C and 101 325 Pa.
+    ///
+    /// # Errors
+    /// [`Error::Invalid`] naming `surroundings` when the stated fluid is a liquid.
+    pub fn surroundings_fluid(&self) -> Result<Fluid> {
+        match &self.surroundings {
+            Some(f) if f.is_gas() => Ok(f.clone()),
+            Some(f) => Err(Error::invalid(
+                "surroundings",
+                format!(
+                    "a liquid (density {} kg/m³): the surroundings of a line must be a gas (the air around it)",
+                    f.density
+                ),
+            )),
+            None => Fluid::air(SURROUNDINGS_TEMPERATURE, SURROUNDINGS_PRESSURE),
+        }
     }
 }
 
@@ -355,18 +394,43 @@ impl Line {
         Ok(())
     }
 
-    /// The static head: the sum of the rises, m.
+    /// The static head: the sum of the rises, m (the geometric height; see
+    /// [`Line::static_head_in`] for what a fluid feels of it).
     pub fn static_head(&self) -> f64 {
         self.resolved
             .iter()
-            .map(|r| if let Resolved::Rise(h) = r { *h } else { 0.0 })
+            .map(|r| match r {
+                Resolved::Rise { height, .. } => *height,
+                _ => 0.0,
+            })
             .sum()
+    }
+
+    /// The static head `fluid` feels, m of that fluid: Σ Δz for a liquid (the air column
+    /// neglected unless [`LineOptions::air_column_for_liquids`]); Σ Δz (1 − ρ_s/ρ) for a
+    /// gas, with ρ_s the surroundings' density.
+    pub fn static_head_in(&self, fluid: &Fluid) -> f64 {
+        self.resolved.iter().map(|r| self.rise_head(r, fluid)).sum()
+    }
+
+    /// The head (m of `fluid`) of one row's rise; 0 for other rows.
+    pub(crate) fn rise_head(&self, r: &Resolved, fluid: &Fluid) -> f64 {
+        match r {
+            Resolved::Rise {
+                height,
+                air_density,
+            } if fluid.is_gas() || self.options.air_column_for_liquids => {
+                height * (1.0 - air_density / fluid.density)
+            }
+            Resolved::Rise { height, .. } => *height,
+            _ => 0.0,
+        }
     }
 
     /// True when some element has a loss (otherwise no flow can be solved for).
     pub fn has_resistance(&self) -> bool {
         self.resolved.iter().any(|r| match r {
-            Resolved::Rise(_) => false,
+            Resolved::Rise { .. } => false,
             Resolved::Fitting { resistance, .. } => {
                 resistance.k_viscous > 0.0 || resistance.k_inertial > 0.0
             }

@@ -64,7 +64,12 @@ pub(crate) enum Resolved {
         /// Stops reverse flow (check and foot valves).
         blocks_reverse: bool,
     },
-    Rise(f64),
+    Rise {
+        /// Elevation change, m.
+        height: f64,
+        /// Density of the surrounding air, kg/m³.
+        air_density: f64,
+    },
     Drop {
         drop: f64,
         at_flow: f64,
@@ -108,6 +113,18 @@ impl Section {
                 area: 0.25 * PI * d * d,
             },
         }
+    }
+}
+
+/// A length in m as mm with four significant figures, trailing zeros dropped.
+fn mm(m: f64) -> String {
+    let v = m * 1e3;
+    let digits = (3 - v.abs().log10().floor() as i32).clamp(0, 6) as usize;
+    let s = format!("{v:.digits$}");
+    if s.contains('.') {
+        s.trim_end_matches('0').trim_end_matches('.').to_string()
+    } else {
+        s
     }
 }
 
@@ -168,10 +185,19 @@ fn abrupt(from: Section, to: Section, before: usize) -> (Resolved, String) {
         k_viscous: 0.0,
         k_inertial: k,
     };
-    let name = format!("abrupt {kind} {} m to {} m", from.bore, to.bore);
+    // Named by bore in mm (by area when the bores agree and the shapes do not).
+    let name = if same(from.bore, to.bore) {
+        format!(
+            "abrupt {kind} {} to {} mm²",
+            mm(from.area * 1e3),
+            mm(to.area * 1e3)
+        )
+    } else {
+        format!("abrupt {kind} {} to {} mm", mm(from.bore), mm(to.bore))
+    };
     let note = format!(
-        "the bore changes from {} m to {} m before element {before} with no contraction or expansion element; counted as an abrupt {kind} (add a transition element to state it)",
-        from.bore, to.bore
+        "the bore changes from {} m to {} m (flow area {} m² to {} m²) before element {before} with no contraction or expansion element; counted as an abrupt {kind} (add a transition element to state it)",
+        from.bore, to.bore, from.area, to.area
     );
     (
         Resolved::Fitting {
@@ -207,6 +233,7 @@ pub(crate) fn resolve(
         .iter()
         .find_map(|e| sides(e, None, None).map(|s| s.0));
     let mut path = Path::default();
+    let air_density = options.surroundings_fluid()?.density;
     for (i, e) in elements.iter().enumerate() {
         let after = pipe_after(i).map(Section::of_pipe);
         let here = sides(e, current, after);
@@ -279,7 +306,10 @@ pub(crate) fn resolve(
                     blocks_reverse: f.blocks_reverse_flow(),
                 }
             }
-            Element::Rise(h) => Resolved::Rise(h.height()),
+            Element::Rise(h) => Resolved::Rise {
+                height: h.height(),
+                air_density,
+            },
             Element::Equipment(eq) => match &eq.rating {
                 Rating::PressureDrop { drop, at_flow } => Resolved::Drop {
                     drop: *drop,

@@ -3,7 +3,7 @@
 
 use super::eval::State;
 use super::uncertainty::{self, Sources};
-use super::{Line, Resolved, Role};
+use super::{Element, Line, Resolved, Role};
 use crate::band::Band;
 use crate::error::{Result, check};
 use crate::fluid::Fluid;
@@ -70,6 +70,11 @@ pub struct ElementResult {
     pub static_head: f64,
     /// Static pressure at the element's outlet, Pa absolute (with an inlet pressure).
     pub pressure_out: Option<f64>,
+    /// Total pressure (static + ½ρV²) at the element's outlet, Pa absolute (with an inlet
+    /// pressure).
+    pub total_pressure_out: Option<f64>,
+    /// Elevation of the element's outlet above the line's inlet, m.
+    pub elevation_out: f64,
     /// Warnings of this element.
     pub warnings: Warnings,
     /// Band of the head loss, m.
@@ -93,9 +98,16 @@ pub struct LineResult {
     pub required_head: f64,
     /// d(required_head)/dQ, s/m².
     pub drequired_head_dflow: f64,
+    /// ρ·g·required_head, Pa: the pressure rise a pump, fan or blower must supply to drive
+    /// the flow (for a gas the figure to lead with: friction and fittings plus
+    /// (ρ − ρ_surroundings)·g·Δz for each rise).
+    pub required_pressure: f64,
     /// Density the heads refer to, kg/m³ (the mean density for a gas).
     pub density: f64,
-    /// Static pressure at the inlet, Pa absolute, when known.
+    /// Vapour pressure of the liquid, Pa, where known (for NPSH and cavitation).
+    pub vapour_pressure: Option<f64>,
+    /// Static pressure at the inlet, Pa absolute, when known (for a line that starts with
+    /// an inlet from a tank: the pressure on the tank's surface).
     pub inlet_pressure: Option<f64>,
     /// Static pressure at the outlet, Pa absolute, when the inlet pressure is known.
     pub outlet_pressure: Option<f64>,
@@ -154,10 +166,24 @@ impl Line {
             warnings |= *w;
             messages.push(m.clone());
         }
-        // Grade line: total pressure falls by ρg(loss + rise); static = total − ½ρV².
+        // Grade line: total pressure falls by ρg·loss and by ρg·Δz of the fluid's own
+        // column (absolute pressures inside the line); static = total − ½ρV². A line that
+        // starts with an inlet from a tank starts at the tank's surface, where the
+        // velocity is zero: the inlet pressure is then a total pressure, and the velocity
+        // head is spent through the inlet. Otherwise it is the static pressure in the
+        // first element's bore.
         let first_v = states.iter().find_map(|s| s.velocity).unwrap_or(0.0);
-        let mut total = inlet.map(|p| p + 0.5 * work.density * first_v * first_v);
+        let from_tank =
+            matches!(self.elements.first(), Some(Element::Fitting(f)) if f.is_from_tank());
+        let mut total = inlet.map(|p| {
+            if from_tank {
+                p
+            } else {
+                p + 0.5 * work.density * first_v * first_v
+            }
+        });
         let mut last_v = first_v;
+        let mut elevation = 0.0;
         let mut elements = Vec::with_capacity(states.len());
         let sources = Sources::of(self);
         let mut terms = sources.zero_terms();
@@ -165,7 +191,12 @@ impl Line {
             if let Some(v) = s.velocity {
                 last_v = v;
             }
-            total = total.map(|t| t - rho_g * (s.head_loss + s.static_head));
+            let height = match &self.resolved[i] {
+                Resolved::Rise { height, .. } => *height,
+                _ => 0.0,
+            };
+            elevation += height;
+            total = total.map(|t| t - rho_g * (s.head_loss + height));
             let pressure_out = total.map(|t| t - 0.5 * work.density * last_v * last_v);
             let mut w = s.warnings;
             // No vapour pressure compares as −∞. Written as a select rather than a match on
@@ -173,11 +204,19 @@ impl Line {
             // reports such speculated comparisons).
             let pv = work.vapour_pressure.unwrap_or(f64::NEG_INFINITY);
             if pressure_out.is_some_and(|p| p < pv) {
+                let p = pressure_out.unwrap_or(pv);
                 w.insert(Warnings::BELOW_VAPOUR_PRESSURE);
+                messages.push(format!(
+                    "static pressure {p:.0} Pa after element {} is below the vapour pressure {pv:.0} Pa: cavitation or flashing is likely",
+                    self.origin[i].map_or_else(|| "(implied change of section)".to_string(), |e| e.to_string())
+                ));
             }
             warnings |= w;
             let bands = sources.element_bands(self, i, s, &work, &mut terms);
-            elements.push(self.element_result(i, s, bands, pressure_out, w));
+            let mut e = self.element_result(i, s, bands, pressure_out, w);
+            e.total_pressure_out = total;
+            e.elevation_out = elevation;
+            elements.push(e);
         }
         let bands = uncertainty::line_bands(self, &sources, terms, &work, head_loss, required_head);
         Ok(LineResult {
@@ -187,7 +226,9 @@ impl Line {
             static_head,
             required_head,
             drequired_head_dflow: slope,
+            required_pressure: rho_g * required_head,
             density: work.density,
+            vapour_pressure: work.vapour_pressure,
             inlet_pressure: inlet,
             outlet_pressure: elements.last().and_then(|e| e.pressure_out),
             warnings,
@@ -217,7 +258,7 @@ impl Line {
                 },
                 name.clone(),
             ),
-            Resolved::Rise(_) => (ElementKind::Rise, "rise".to_string()),
+            Resolved::Rise { .. } => (ElementKind::Rise, "rise".to_string()),
             Resolved::Drop { name, .. } => (ElementKind::Equipment, name.clone()),
         };
         let warnings = if self.origin[i].is_none() {
@@ -238,9 +279,79 @@ impl Line {
             dhead_dflow: s.dhead_dflow,
             static_head: s.static_head,
             pressure_out,
+            total_pressure_out: None,
+            elevation_out: 0.0,
             warnings,
             head_loss_band,
             friction_factor_band,
         }
+    }
+}
+
+/// NPSH available at a boundary of a line, checked against a pump's NPSH required.
+#[derive(Debug, Clone, Copy, PartialEq, Serialize, Deserialize)]
+pub struct NpshCheck {
+    /// NPSH available, m: (p_total − p_v)/(ρ g).
+    pub available: f64,
+    /// The NPSH required as stated, m.
+    pub required: f64,
+    /// The margin asked for above the NPSH required, m.
+    pub margin: f64,
+    /// available ≥ required + margin.
+    pub sufficient: bool,
+}
+
+impl LineResult {
+    /// NPSH available (m) at the outlet of row `index` of [`LineResult::elements`]: the
+    /// total pressure there over the vapour pressure, in metres of the liquid,
+    /// NPSHa = (p + ½ρV² − p_v)/(ρ g) (definition, e.g. ISO 9906 and the Hydraulic
+    /// Institute standards).
+    ///
+    /// # Errors
+    /// `index` not a row of the result; no pressure along the line (no inlet pressure);
+    /// no vapour pressure (a gas, or a liquid stated without one).
+    pub fn npsh_available(&self, index: usize) -> Result<f64> {
+        let n = self.elements.len();
+        let row = self.elements.get(index).ok_or_else(|| {
+            crate::Error::out_of_range(
+                "index",
+                index as f64,
+                format!(
+                    "must be the index of a row of the result (0 … {})",
+                    n.saturating_sub(1)
+                ),
+            )
+        })?;
+        let total = row.total_pressure_out.ok_or_else(|| {
+            crate::Error::invalid(
+                "inlet_pressure",
+                "NPSH needs the pressure along the line: state the inlet pressure",
+            )
+        })?;
+        let pv = self.vapour_pressure.ok_or_else(|| {
+            crate::Error::invalid(
+                "fluid",
+                "NPSH needs the liquid's vapour pressure (water has it; give a user liquid one)",
+            )
+        })?;
+        Ok((total - pv) / (self.density * STANDARD_GRAVITY))
+    }
+
+    /// NPSH available at the outlet of row `index` against `required` (m, ≥ 0, the pump
+    /// maker's NPSH required) plus a `margin` (m, ≥ 0; common practice asks 0.5–1 m or
+    /// 10–30 % above NPSH required, by the standard that applies).
+    ///
+    /// # Errors
+    /// As [`LineResult::npsh_available`]; `required` or `margin` negative or not finite.
+    pub fn npsh_check(&self, index: usize, required: f64, margin: f64) -> Result<NpshCheck> {
+        check::non_negative("required", required)?;
+        check::non_negative("margin", margin)?;
+        let available = self.npsh_available(index)?;
+        Ok(NpshCheck {
+            available,
+            required,
+            margin,
+            sufficient: available >= required + margin,
+        })
     }
 }

@@ -93,7 +93,7 @@ impl Line {
                 "has no element with a loss, so no flow balances a head",
             ));
         }
-        let h0 = self.static_head();
+        let h0 = self.static_head_in(fluid);
         let sign = if head > h0 {
             1.0
         } else if head < h0 {

@@ -146,7 +146,10 @@ def grade_line(line: Any, fluid: Any, flow: float, ax: Any = None) -> Any:
     """
     result = line.evaluate(fluid, float(flow))
     x, energy, low, high, elevation = [0.0], [0.0], [0.0], [0.0], [0.0]
-    for element, r in zip(line.elements, result.elements):
+    elements = line.elements
+    for r in result.elements:
+        # A row the route implies (an abrupt change of section) has no element and no length.
+        element = None if r.element is None else elements[r.element]
         band = r.head_loss_band
         x.append(x[-1] + float(getattr(element, "length", 0.0)))
         energy.append(energy[-1] - r.head_loss)

@@ -1,0 +1,89 @@
+//! What a line means beyond its elements: the air around it and the direction flow may
+//! take through it.
+
+use crate::ffi::{self, guard, out_ptr, put};
+use crate::fluid::hg_fluid;
+use crate::line::{hg_line, with_line};
+
+/// Sets the air around `line` to `surroundings` (a gas handle, copied), or back to the
+/// default dry air at 20 °C and 101 325 Pa when `surroundings` is NULL. A rise in a gas
+/// line then adds (ρ − ρ_surroundings)·g·Δz of pressure (the stack effect); a liquid line
+/// neglects the air column unless `hg_line_set_air_column_for_liquids` turns it on.
+///
+/// Returns `HG_OK`; `HG_ERR_INVALID` when `surroundings` is a liquid;
+/// `HG_ERR_NULL_POINTER` for `line`. Needs exclusive use of `line`.
+///
+/// # Safety
+/// `line` must be NULL or a live handle used by no other thread; `surroundings` NULL or a
+/// live fluid handle.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_set_surroundings(
+    line: *mut hg_line,
+    surroundings: *const hg_fluid,
+) -> i32 {
+    // SAFETY: forwarded contract.
+    unsafe {
+        with_line(line, |l| {
+            let air = if surroundings.is_null() {
+                None
+            } else {
+                Some(ffi::handle("surroundings", surroundings)?.fluid.clone())
+            };
+            let mut o = l.options.clone();
+            o.surroundings = air;
+            o.validate()?;
+            l.options = o;
+            l.changed();
+            Ok(())
+        })
+    }
+}
+
+/// Counts the surrounding air column for a liquid line too (`on` = 1) or neglects it (0,
+/// the default: for water it changes a rise's head by about 0.12 %).
+///
+/// Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` for `on` other than 0 or 1;
+/// `HG_ERR_NULL_POINTER`. Needs exclusive use of `line`.
+///
+/// # Safety
+/// `line` must be NULL or a live handle used by no other thread.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_set_air_column_for_liquids(line: *mut hg_line, on: i32) -> i32 {
+    // SAFETY: forwarded contract.
+    unsafe {
+        with_line(line, |l| {
+            if on != 0 && on != 1 {
+                return Err(
+                    hydrograde::Error::out_of_range("on", f64::from(on), "must be 0 or 1").into(),
+                );
+            }
+            l.options.air_column_for_liquids = on == 1;
+            l.changed();
+            Ok(())
+        })
+    }
+}
+
+/// Writes 1 to `*blocks` when some element of `line` stops reverse flow (a check or foot
+/// valve), else 0. Every call that takes a flow refuses a reverse flow through such a
+/// line with `HG_ERR_NO_SOLUTION` and a message naming the valve.
+///
+/// Returns `HG_OK`; `HG_ERR_INVALID` for a line that cannot be built;
+/// `HG_ERR_NULL_POINTER`. Thread-safe (the line is only read).
+///
+/// # Safety
+/// `line` must be NULL or a live handle; `blocks` NULL or writable.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_blocks_reverse_flow(
+    line: *const hg_line,
+    blocks: *mut i32,
+) -> i32 {
+    guard(|| {
+        ffi::check_outs(&[out_ptr("blocks", blocks)])?;
+        // SAFETY: forwarded contract.
+        let l = unsafe { ffi::handle("line", line)? };
+        let b = l.line()?.blocks_reverse_flow();
+        // SAFETY: forwarded contract; checked above.
+        unsafe { put("blocks", blocks, i32::from(b)) }
+    })
+}

@@ -1,0 +1,89 @@
+"""What a line means, from Python: flow path, direction, surroundings, pressures, NPSH.
+
+Each expected value is written out by hand beside its source."""
+
+from __future__ import annotations
+
+import math
+
+import pytest
+
+import hydrograde as hg
+
+G0 = 9.80665  # standard gravity, exact (3rd CGPM 1901; NIST SP 811)
+
+
+def air_density(t: float, p: float) -> float:
+    # Ideal gas, M = 0.0289647 kg/mol (dry air, from memory), R = 8.314462618 J/(mol K) (SI 2019).
+    return p * 0.0289647 / (8.314462618 * t)
+
+
+def test_elbow_after_a_contraction_sees_the_outlet_velocity():
+    line = hg.Line([
+        hg.Pipe(0.1, 10.0, 4.5e-5),
+        hg.Fitting.contraction(0.1, 0.05),
+        hg.Fitting.named("elbow_90_standard"),
+        hg.Pipe(0.05, 10.0, 4.5e-5),
+    ])
+    r = line.evaluate(hg.Fluid(998.2, 1.002e-3), 0.004)
+    # Definition of mean velocity: V = 4Q/(pi d^2) in the 50 mm bore.
+    assert r.elements[2].velocity == pytest.approx(4 * 0.004 / (math.pi * 0.05**2), rel=1e-15)
+
+
+def test_a_bore_change_without_a_transition_is_a_row_and_a_message():
+    line = hg.Line([hg.Pipe(0.1, 10.0, 4.5e-5), hg.Pipe(0.05, 10.0, 4.5e-5)])
+    q = 0.003
+    r = line.evaluate(hg.Fluid(998.2, 1.002e-3), q)
+    row = r.elements[1]
+    assert row.kind == "section_change" and row.element is None
+    v = 4 * q / (math.pi * 0.05**2)
+    # Abrupt contraction K = 0.5 (1 - A2/A1) = 0.375 on V2 (Crane TP-410, 1988, from memory).
+    assert row.head_loss == pytest.approx(0.375 * v * v / (2 * G0), rel=1e-14)
+    assert "bore_change_without_transition" in r.warnings
+    assert any("0.1 m" in m and "0.05 m" in m for m in r.messages)
+
+
+def test_rise_and_rated_drop_have_no_velocity():
+    line = hg.Line([hg.Pipe(0.05, 10.0, 4.5e-5), hg.Rise(2.0)])
+    r = line.evaluate(hg.Fluid(998.2, 1.002e-3), 1e-3)
+    assert r.elements[1].velocity is None and r.elements[1].reynolds is None
+
+
+def test_check_valve_refuses_reverse_flow_naming_it():
+    line = hg.Line([hg.Pipe(0.05, 10.0, 4.5e-5), hg.Fitting.named("swing_check_valve")])
+    w = hg.Fluid(998.2, 1.002e-3)
+    for call in (lambda: line.evaluate(w, -1e-3), lambda: line.system_curve(w, [1e-3, -1e-3])):
+        with pytest.raises(hg.HydrogradeError, match=r"swing_check_valve \(element 1\)"):
+            call()
+
+
+def test_hot_flue_gas_stack_effect_in_pascal():
+    line = hg.Line([hg.Pipe(0.3, 30.0, 1.5e-4), hg.Rise(30.0)])
+    r = line.evaluate(hg.Fluid.air(473.15), 0.0)
+    # Stack effect (hydrostatics): -(rho_amb - rho_hot) g 30 m.
+    want = -(air_density(293.15, 101325.0) - air_density(473.15, 101325.0)) * G0 * 30.0
+    assert r.required_pressure == pytest.approx(want, rel=1e-12)
+    same = hg.Line([hg.Pipe(0.3, 30.0, 1.5e-4), hg.Rise(30.0)], surroundings=hg.Fluid.air(473.15))
+    assert same.evaluate(hg.Fluid.air(473.15), 0.0).required_pressure == 0.0
+    with pytest.raises(hg.HydrogradeError, match="^surroundings"):
+        hg.Line([hg.Rise(1.0)], surroundings=hg.Fluid(998.2, 1e-3))
+
+
+def test_suction_lift_npsh():
+    w = hg.Fluid.water(333.15)
+    q = 3.0 * math.pi * 0.1**2 / 4
+    line = hg.Line(
+        [hg.Fitting.entrance_sharp(), hg.Fitting.k(2.0), hg.Rise(7.0), hg.Pipe(0.1, 1.0, 4.5e-5)],
+        inlet_pressure=101325.0,
+    )
+    r = line.evaluate(w, q)
+    rho, pv = r.density, r.vapour_pressure
+    # Bernoulli from the tank surface with losses 0.5 + 2 velocity heads, V = 3 m/s.
+    total = 101325.0 - rho * G0 * (7.0 + 2.5 * 9.0 / (2 * G0))
+    assert r.elements[2].total_pressure_out == pytest.approx(total, rel=1e-12)
+    assert r.elements[2].pressure_out == pytest.approx(total - 0.5 * rho * 9.0, rel=1e-12)
+    assert "below_vapour_pressure" in r.warnings
+    assert r.npsh_available(2) == pytest.approx((total - pv) / (rho * G0), rel=1e-12)
+    assert r.npsh_check(2, 0.2, margin=0.5)["sufficient"] is False
+    with pytest.raises(hg.HydrogradeError, match="^index = 9"):
+        r.npsh_available(9)
