@@ -6,6 +6,7 @@
 #   scripts/bench.sh compare    only the Python comparison
 #   scripts/bench.sh criterion  only the criterion suites
 #   scripts/bench.sh profile    only the callgrind instruction counts (scripts/profile.sh)
+#   scripts/bench.sh bands      only the band timings against line length (about 1 min)
 #   scripts/bench.sh readme     README's Performance tables from the last runs' tables
 #
 # The ratio table and the comparison each run in one process, so their ratios compare
@@ -72,6 +73,11 @@ profile() {
   fi
 }
 
+bands() {
+  say "band timings against line length (one thread)"
+  cargo run -q --release -p hydrograde-benches --bin bands
+}
+
 readme() {
   say "README.md performance tables (from $out/*.md)"
   python3 - "$out" <<'PY'
@@ -101,11 +107,12 @@ PY
 }
 
 case "$what" in
-  all) criterion; ratios; compare; profile; readme ;;
+  all) criterion; ratios; compare; profile; bands; readme ;;
+  bands) bands ;;
   readme) readme ;;
   profile) profile ;;
   criterion) criterion ;;
   ratios) ratios ;;
   compare) compare ;;
-  *) echo "usage: scripts/bench.sh [all|criterion|ratios|compare|profile|readme]" >&2; exit 2 ;;
+  *) echo "usage: scripts/bench.sh [all|criterion|ratios|compare|profile|bands|readme]" >&2; exit 2 ;;
 esac

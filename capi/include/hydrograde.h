@@ -787,6 +787,45 @@ extern "C" {
 #endif // __cplusplus
 
 /**
+ * The system curve with its 95 % band: at each of the `n` flows `flows[i]` (m³/s),
+ * `nominal[i]` = the required head (m, the same value as `hg_line_system_curve`) and
+ * `low[i]`, `high[i]` = the ends of its band (the band of `hg_line_evaluate`'s required
+ * head at that flow). One pass over the elements per flow; uses all cores above 64
+ * flows, with the same results.
+ *
+ * Returns `HG_OK`; the status of the first failing flow (message "element <i>: ..."),
+ * with the outputs unchanged; `HG_ERR_INVALID` for `n` = 0 or a line that cannot be
+ * built; `HG_ERR_NULL_POINTER`. Thread-safe (the line is only read).
+ *
+ * # Safety
+ * `line` and `fluid` must be NULL or live handles; `flows`, `low`, `nominal` and `high`
+ * NULL or valid for `n` doubles (the outputs may not overlap `flows` or each other).
+ */
+int32_t hg_line_system_curve_band(const struct hg_line *line,
+                                  const struct hg_fluid *fluid,
+                                  const double *flows,
+                                  size_t n,
+                                  double *low,
+                                  double *nominal,
+                                  double *high);
+
+/**
+ * Treats the pipes of catalogue material `material` as independent in the bands (each
+ * pipe its own roughness error, as for pipes from different supplies) when `independent`
+ * is 1, or as sharing one error (the default) when 0.
+ *
+ * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` for a name not in the material catalogue;
+ * `HG_ERR_OUT_OF_RANGE` for `independent` other than 0 or 1; `HG_ERR_NULL_POINTER`.
+ * Not thread-safe for the same line (it changes the line).
+ *
+ * # Safety
+ * `line` must be NULL or a live handle; `material` NULL or a NUL-terminated string.
+ */
+int32_t hg_line_set_material_independent(struct hg_line *line,
+                                         const char *material,
+                                         int32_t independent);
+
+/**
  * The `HG_CORRELATION_*` value of a correlation name: "colebrook", "haaland",
  * "swamee_jain", "churchill", "serghides", "blasius", "fully_rough".
  *

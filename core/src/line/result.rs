@@ -160,6 +160,7 @@ impl Line {
         let mut last_v = first_v;
         let mut elements = Vec::with_capacity(states.len());
         let sources = Sources::of(self);
+        let mut terms = sources.zero_terms();
         for (i, s) in states.iter().enumerate() {
             if let Some(v) = s.velocity {
                 last_v = v;
@@ -175,10 +176,10 @@ impl Line {
                 w.insert(Warnings::BELOW_VAPOUR_PRESSURE);
             }
             warnings |= w;
-            elements.push(self.element_result(&sources, i, s, &work, pressure_out, w));
+            let bands = sources.element_bands(self, i, s, &work, &mut terms);
+            elements.push(self.element_result(i, s, bands, pressure_out, w));
         }
-        let bands =
-            uncertainty::line_bands(self, &sources, &states, &work, head_loss, required_head);
+        let bands = uncertainty::line_bands(self, &sources, terms, &work, head_loss, required_head);
         Ok(LineResult {
             flow,
             head_loss,
@@ -200,10 +201,9 @@ impl Line {
 
     fn element_result(
         &self,
-        sources: &Sources,
         i: usize,
         s: &State,
-        fluid: &Fluid,
+        (head_loss_band, friction_factor_band): (Band, Option<Band>),
         pressure_out: Option<f64>,
         warnings: Warnings,
     ) -> ElementResult {
@@ -239,8 +239,8 @@ impl Line {
             static_head: s.static_head,
             pressure_out,
             warnings,
-            head_loss_band: sources.element_band(self, i, s, fluid),
-            friction_factor_band: sources.friction_factor_band(self, i, s, fluid),
+            head_loss_band,
+            friction_factor_band,
         }
     }
 }
