@@ -315,8 +315,8 @@ impl PyLine {
         d.set_item("elements", rows)?;
         Ok(d)
     }
-    fn _repr_html_(&self, py: Python<'_>) -> PyResult<String> {
-        state::html(py, "Line", &self.to_dict(py)?)
+    fn _repr_html_(slf: &Bound<'_, Self>) -> PyResult<String> {
+        state::html_object(slf.as_any(), "Line")
     }
     fn __repr__(&self, py: Python<'_>) -> PyResult<String> {
         let parts: Vec<String> = self
@@ -373,6 +373,9 @@ impl PyPumpCurve {
     fn head<'py>(&self, py: Python<'py>, flow: &Bound<'py, PyAny>) -> PyResult<Bound<'py, PyAny>> {
         let p = &self.inner;
         arrays::map(py, ["flow"], [flow], |[q]| p.head(q).map(|r| r.0))
+    }
+    fn _repr_html_(slf: &Bound<'_, Self>) -> PyResult<String> {
+        state::html_object(slf.as_any(), "PumpCurve")
     }
     fn __repr__(&self) -> String {
         let (lo, hi) = self.inner.range();
