@@ -48,7 +48,8 @@ def style() -> Iterator[None]:
     import matplotlib as mpl
     from cycler import cycler
 
-    with mpl.rc_context(dict(STYLE, **{"axes.prop_cycle": cycler(color=PALETTE)})):
+    rc: Any = dict(STYLE, **{"axes.prop_cycle": cycler(color=PALETTE)})
+    with mpl.rc_context(rc):
         yield
 
 
