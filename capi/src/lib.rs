@@ -10,6 +10,7 @@
 
 #![allow(non_camel_case_types)]
 
+mod band_curve;
 mod correlation;
 mod ffi;
 mod fitting;
@@ -30,6 +31,7 @@ mod sheet;
 mod threads;
 mod units;
 
+pub use band_curve::*;
 pub use correlation::*;
 pub use ffi::{
     HG_ERR_BUFFER_TOO_SMALL, HG_ERR_INTERNAL, HG_ERR_INVALID, HG_ERR_NO_SOLUTION,

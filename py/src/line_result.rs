@@ -87,6 +87,11 @@ impl PyLineResult {
     fn warnings(&self) -> Vec<&'static str> {
         self.inner.warnings.names()
     }
+    /// What the warnings found, in words (the element, the values given, the likely cause).
+    #[getter]
+    fn messages(&self) -> Vec<String> {
+        self.inner.messages.clone()
+    }
     /// The per-element breakdown, in route order.
     #[getter]
     fn elements(&self) -> Vec<PyElementResult> {
@@ -135,6 +140,7 @@ impl PyLineResult {
         }
         d.set_item("elements", rows)?;
         d.set_item("warnings", self.warnings())?;
+        d.set_item("messages", self.messages())?;
         Ok(d)
     }
     /// The per-element breakdown as a pandas DataFrame (needs pandas).
@@ -185,6 +191,7 @@ fn element_dict<'py>(py: Python<'py>, e: &ElementResult) -> PyResult<Bound<'py, 
     let d = PyDict::new(py);
     d.set_item("kind", e.kind.name())?;
     d.set_item("label", &e.label)?;
+    d.set_item("element", e.element)?;
     d.set_item("velocity", e.velocity)?;
     d.set_item("reynolds", e.reynolds)?;
     d.set_item("regime", e.regime.map(|r| r.name()))?;
@@ -202,7 +209,8 @@ fn element_dict<'py>(py: Python<'py>, e: &ElementResult) -> PyResult<Bound<'py, 
 }
 
 /// One element's share of a :class:`LineResult`: ``kind`` ("pipe", "fitting", "rise",
-/// "equipment"), ``label``, ``velocity`` (m/s), ``reynolds``, ``regime`` and
+/// "equipment", "section_change"), ``label``, ``element`` (index in the line, None for an
+/// implied change of section), ``velocity`` (m/s, None without a bore), ``reynolds``, ``regime`` and
 /// ``friction_factor`` (pipes), ``k`` (fittings), ``head_loss`` (m), ``dhead_dflow``
 /// (s/m²), ``static_head`` (m), ``pressure_out`` (Pa), ``warnings`` and the bands
 /// ``head_loss_band`` and ``friction_factor_band``.
@@ -215,7 +223,7 @@ pub struct PyElementResult {
 
 #[pymethods]
 impl PyElementResult {
-    /// "pipe", "fitting", "rise" or "equipment".
+    /// "pipe", "fitting", "rise", "equipment" or "section_change".
     #[getter]
     fn kind(&self) -> &'static str {
         self.inner.kind.name()
@@ -225,15 +233,22 @@ impl PyElementResult {
     fn label(&self) -> &str {
         &self.inner.label
     }
-    /// Mean velocity, m/s.
+    /// Mean velocity in the element's bore, m/s (signed; None for a rise or a rated
+    /// pressure drop, which have no bore of their own).
     #[getter]
-    fn velocity(&self) -> f64 {
+    fn velocity(&self) -> Option<f64> {
         self.inner.velocity
     }
-    /// Reynolds number.
+    /// Reynolds number in the element's bore (None where there is no bore).
     #[getter]
-    fn reynolds(&self) -> f64 {
+    fn reynolds(&self) -> Option<f64> {
         self.inner.reynolds
+    }
+    /// Index of the line element this row stands for; None for an abrupt change of
+    /// section the route implies between two elements of different bore.
+    #[getter]
+    fn element(&self) -> Option<usize> {
+        self.inner.element
     }
     /// Flow regime of a pipe (None for other elements).
     #[getter]

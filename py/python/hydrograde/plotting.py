@@ -127,12 +127,10 @@ def system_curve(line: Any, fluid: Any, flows: Any, pump: Any = None, ax: Any = 
     flow and head bands. Axes in the display units of flow and head.
     """
     q = np.atleast_1d(_si_flows(flows))
-    heads = line.system_curve(fluid, q)
-    bands = [line.evaluate(fluid, float(x)).required_head_band for x in q]
+    low, heads, high = line.system_curve_band(fluid, q)
     ax = _axes(ax)
-    ax.fill_between(_shown("flow", q), _shown("head", [b.low for b in bands]),
-                    _shown("head", [b.high for b in bands]), color=PALETTE[0], alpha=0.15,
-                    linewidth=0, label="system band (k = 2)")
+    ax.fill_between(_shown("flow", q), _shown("head", low), _shown("head", high),
+                    color=PALETTE[0], alpha=0.15, linewidth=0, label="system band (95 %)")
     ax.plot(_shown("flow", q), _shown("head", heads), color=PALETTE[0], label="system curve")
     if pump is not None:
         lo, hi = pump.range
