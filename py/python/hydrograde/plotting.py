@@ -8,7 +8,7 @@ user made), and returns it. Every plotted number comes from the core.
 from __future__ import annotations
 
 import contextlib
-from typing import Any, Dict, Iterator, Optional, Sequence
+from typing import Any, Dict, Iterator, List, Optional, Sequence
 
 import numpy as np
 
@@ -200,13 +200,18 @@ def grade_line(line: Any, fluid: Any, flow: Any, ax: Any = None) -> Any:
     one is ``required_head_band``).
     """
     result = line.evaluate(fluid, flow)
-    lengths = [float(getattr(e, "length", 0.0)) for e in line.elements]
+    # Result rows follow the route; an abrupt bore change adds a row of its own.
+    elements = iter(line.elements)
+    lengths: List[float] = []
+    labels: List[str] = []
+    for i, r in enumerate(result.elements):
+        e = None if r.kind == "section_change" else next(elements, None)
+        lengths.append(float(getattr(e, "length", 0.0)))
+        labels.append(f"{i} {r.label}")
     gap = 0.015 * (sum(lengths) or 1.0)
     xs = [0.0]
     for length in lengths:
         xs.append(xs[-1] + (length if length > 0.0 else gap))
-    labels = [f"{i} {getattr(e, 'label', None) or getattr(e, 'name', '')}".strip()
-              for i, e in enumerate(line.elements)]
     ax = _grade(result.elements, list(_shown("height", xs)), ax,
                 f"distance along the route [{_unit('height')}] (fittings spread)", labels)
     ax.set_title(f"Grade line at Q = {float(_shown('flow', result.flow)):.4g} {_unit('flow')}")
