@@ -32,6 +32,15 @@ setup_python() {
   fi
 }
 
+setup_browser() {
+  # Headless Chromium renders the notebook views in tests/python/test_notebook_views.py.
+  if ! command -v chromium >/dev/null 2>&1; then
+    say "installing chromium (Debian package, for the notebook view test)"
+    flock /tmp/hydrograde-apt.lock apt-get update -q
+    flock /tmp/hydrograde-apt.lock apt-get install -y -q chromium
+  fi
+}
+
 build_python() {
   setup_python
   say "building the Python wheel (maturin, release)"
@@ -66,6 +75,7 @@ cmd_test() {
     .venv/bin/python tests/c/readme_c.py
   fi
   if [ -f scripts/test-python.sh ]; then
+    setup_browser
     say "Python"
     bash scripts/test-python.sh
   fi

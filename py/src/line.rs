@@ -321,6 +321,34 @@ impl PyLine {
     fn _repr_html_(slf: &Bound<'_, Self>) -> PyResult<String> {
         state::html_object(slf.as_any(), "Line")
     }
+    /// The system curve over ``flows`` (m³/s or a pint quantity) with its band, and with
+    /// ``pump`` its curve and the operating point (needs matplotlib), on ``ax`` (a new
+    /// one when None), in the display units. Returns the Axes.
+    #[pyo3(signature = (fluid, flows, pump = None, ax = None))]
+    fn plot_system<'py>(
+        slf: &Bound<'py, Self>,
+        fluid: &Bound<'py, PyAny>,
+        flows: &Bound<'py, PyAny>,
+        pump: Option<&Bound<'py, PyAny>>,
+        ax: Option<&Bound<'py, PyAny>>,
+    ) -> PyResult<Bound<'py, PyAny>> {
+        slf.py()
+            .import("hydrograde.plotting")?
+            .call_method1("system_curve", (slf, fluid, flows, pump, ax))
+    }
+    /// The grade line at ``flow`` against distance (needs matplotlib); see
+    /// :func:`hydrograde.plotting.grade_line`. Returns the Axes.
+    #[pyo3(signature = (fluid, flow, ax = None))]
+    fn plot_grade<'py>(
+        slf: &Bound<'py, Self>,
+        fluid: &Bound<'py, PyAny>,
+        flow: &Bound<'py, PyAny>,
+        ax: Option<&Bound<'py, PyAny>>,
+    ) -> PyResult<Bound<'py, PyAny>> {
+        slf.py()
+            .import("hydrograde.plotting")?
+            .call_method1("grade_line", (slf, fluid, flow, ax))
+    }
     fn __repr__(&self, py: Python<'_>) -> PyResult<String> {
         let parts: Vec<String> = self
             .inner

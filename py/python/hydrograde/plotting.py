@@ -1,25 +1,28 @@
-"""Plotting helpers for design notebooks (need matplotlib).
+"""Plots for design notebooks (need matplotlib, imported only when a plot is drawn).
 
-Each helper draws on a given Axes (or a new one), in hydrograde's own quiet look, and
-returns the Axes. Every plotted number comes from the core.
+Each helper draws on a given Axes (or a new one) in the display units of
+:func:`hydrograde.display`, applies hydrograde's quiet look to that Axes (also to one the
+user made), and returns it. Every plotted number comes from the core.
 """
 
 from __future__ import annotations
 
 import contextlib
-from typing import Any, Dict, Iterator, Optional, Sequence
+from typing import Any, Dict, Iterator, List, Optional, Sequence
 
 import numpy as np
 
+from hydrograde import _units
 from hydrograde._native import darcy_factor
 
-#: The look of hydrograde plots: light grid, no top/right frame, a muted palette.
+#: The look of hydrograde plots: light grid, no top/right frame, a muted palette. Fonts
+#: keep matplotlib's default family and plain weights, so no font lookup can fail.
 STYLE: Dict[str, Any] = {
     "axes.spines.top": False,
     "axes.spines.right": False,
     "axes.edgecolor": "#5b6770",
     "axes.labelcolor": "#1d3b53",
-    "axes.titleweight": "semibold",
+    "axes.titleweight": "bold",
     "axes.titlesize": 11,
     "axes.labelsize": 10,
     "axes.grid": True,
@@ -31,17 +34,17 @@ STYLE: Dict[str, Any] = {
     "legend.frameon": False,
     "legend.fontsize": 9,
     "lines.linewidth": 1.6,
-    "axes.prop_cycle": None,  # filled in lazily (needs matplotlib's cycler)
 }
 
 PALETTE = ["#1f5f8b", "#c8553d", "#3a8d6f", "#8a5fa8", "#d19a2a", "#4f6d7a", "#b0457a"]
 
-SAFETY = "engineering estimate; designs must be checked by a competent engineer"
+SAFETY = ("engineering estimate (bands k = 2); designs must be checked by a competent "
+          "engineer against the codes and standards that apply")
 
 
 @contextlib.contextmanager
 def style() -> Iterator[None]:
-    """A context in which matplotlib draws in hydrograde's look."""
+    """A context in which matplotlib draws new figures in hydrograde's look."""
     import matplotlib as mpl
     from cycler import cycler
 
@@ -50,20 +53,42 @@ def style() -> Iterator[None]:
         yield
 
 
-def _axes(ax: Any) -> Any:
-    if ax is not None:
-        return ax
-    import matplotlib.pyplot as plt
+def _apply(ax: Any) -> None:
+    """hydrograde's look on an existing Axes (rc settings only reach new ones)."""
+    for side in ("top", "right"):
+        ax.spines[side].set_visible(False)
+    for side in ("left", "bottom"):
+        ax.spines[side].set_color(STYLE["axes.edgecolor"])
+    ax.grid(True, which="major", color=STYLE["grid.color"], linewidth=0.6)
+    ax.grid(True, which="minor", color=STYLE["grid.color"], linewidth=0.3, alpha=0.6)
+    ax.tick_params(colors=STYLE["xtick.color"], which="both")
+    ax.xaxis.label.set_color(STYLE["axes.labelcolor"])
+    ax.yaxis.label.set_color(STYLE["axes.labelcolor"])
+    ax.title.set_fontweight("bold")
+    ax.set_axisbelow(True)
 
-    _, new = plt.subplots(figsize=(6.4, 4.2), layout="constrained")
-    return new
+
+def _axes(ax: Any) -> Any:
+    if ax is None:
+        import matplotlib.pyplot as plt
+
+        with style():
+            _, ax = plt.subplots(figsize=(7.0, 4.4), layout="constrained")
+    _apply(ax)
+    return ax
 
 
 def _note(ax: Any) -> None:
-    ax.text(
-        1.0, -0.14, SAFETY, transform=ax.transAxes, ha="right", va="top",
-        fontsize=7, color="#8a949c", style="italic",
-    )
+    ax.annotate(SAFETY, xy=(0.0, 0.0), xycoords="figure fraction", xytext=(4, 3),
+                textcoords="offset points", fontsize=6.5, color="#8a949c", style="italic")
+
+
+def _unit(field: str) -> str:
+    return _units.pretty(_units.unit_of(field))
+
+
+def _shown(field: str, values: Any) -> Any:
+    return np.asarray(_units.shown(field, np.asarray(values, dtype=float)), dtype=float)
 
 
 def friction_chart(
@@ -77,94 +102,129 @@ def friction_chart(
     ``rel_roughness``: values of ε/D (dimensionless); ``re``: Reynolds numbers (default
     400 points from 600 to 1e8); ``correlation`` as :func:`hydrograde.darcy_factor`.
     Both axes are logarithmic; the laminar–turbulent band (Re 2300…4000, common practice)
-    shows the core's C¹ blend.
+    is shaded and shows the core's C¹ blend. The legend sits outside the plotting area.
     """
     re_values = np.logspace(np.log10(600.0), 8.0, 400) if re is None else np.asarray(re, float)
-    with style():
-        ax = _axes(ax)
-        for rr in rel_roughness:
-            ax.plot(re_values, darcy_factor(re_values, float(rr), correlation), label=f"ε/D = {rr:g}")
-        ax.set_xscale("log")
-        ax.set_yscale("log")
-        ax.set_xlabel("Reynolds number Re")
-        ax.set_ylabel("Darcy friction factor f")
-        ax.set_title(f"Friction factor ({correlation or 'core default'})")
-        ax.legend(loc="upper right")
-        _note(ax)
+    ax = _axes(ax)
+    ax.axvspan(2300.0, 4000.0, color="#eef3f7", zorder=0, label="transitional (2300–4000)")
+    for i, rr in enumerate(rel_roughness):
+        ax.plot(re_values, darcy_factor(re_values, float(rr), correlation),
+                color=PALETTE[i % len(PALETTE)], label=f"ε/D = {rr:g}")
+    ax.set_xscale("log")
+    ax.set_yscale("log")
+    ax.set_xlabel("Reynolds number Re")
+    ax.set_ylabel("Darcy friction factor f")
+    ax.set_title(f"Friction factor ({correlation or 'Colebrook, exact'})")
+    ax.legend(loc="upper left", bbox_to_anchor=(1.01, 1.0), borderaxespad=0.0)
+    _note(ax)
     return ax
 
 
-def system_curve(
-    line: Any,
-    fluid: Any,
-    flows: Any,
-    pump: Any = None,
-    ax: Any = None,
-) -> Any:
-    """The system curve of ``line`` (required head, m, against flow, m³/s) over ``flows``,
-    with the band of the required head shaded; with a ``pump`` (:class:`PumpCurve`), its
-    curve over its range and the operating point with its flow and head bands.
+def system_curve(line: Any, fluid: Any, flows: Any, pump: Any = None, ax: Any = None) -> Any:
+    """The system curve of ``line`` (required head against flow) over ``flows`` (m³/s or
+    a pint quantity), with the band of the required head shaded; with a ``pump``
+    (:class:`PumpCurve`), its curve over its range and the operating point with its
+    flow and head bands. Axes in the display units of flow and head.
     """
-    q = np.asarray(flows, dtype=float)
+    q = np.atleast_1d(_si_flows(flows))
     low, heads, high = line.system_curve_band(fluid, q)
-    with style():
-        ax = _axes(ax)
-        ax.fill_between(
-            q, low, high,
-            color=PALETTE[0], alpha=0.15, linewidth=0, label="system band (95 %)",
-        )
-        ax.plot(q, heads, color=PALETTE[0], label="system curve")
-        if pump is not None:
-            lo, hi = pump.range
-            qp = np.linspace(lo, hi, 200)
-            ax.plot(qp, pump.head(qp), color=PALETTE[1], label="pump")
-            op = line.operating_point(fluid, pump)
-            fb, hb = op.flow_band, op.head_band
-            ax.errorbar(
-                [op.flow], [op.head],
-                xerr=[[op.flow - fb.low], [fb.high - op.flow]],
-                yerr=[[op.head - hb.low], [hb.high - op.head]],
-                fmt="o", color=PALETTE[2], capsize=3,
-                label=f"operating point ({op.flow:.4g} m³/s, {op.head:.4g} m)",
-            )
-        ax.set_xlabel("flow Q [m³/s]")
-        ax.set_ylabel("head [m]")
-        ax.set_title("System curve")
-        ax.legend(loc="best")
-        _note(ax)
+    ax = _axes(ax)
+    ax.fill_between(_shown("flow", q), _shown("head", low), _shown("head", high),
+                    color=PALETTE[0], alpha=0.15, linewidth=0, label="system band (95 %)")
+    ax.plot(_shown("flow", q), _shown("head", heads), color=PALETTE[0], label="system curve")
+    if pump is not None:
+        lo, hi = pump.range
+        qp = np.linspace(lo, hi, 200)
+        ax.plot(_shown("flow", qp), _shown("head", pump.head(qp)), color=PALETTE[1],
+                label="pump")
+        op = line.operating_point(fluid, pump)
+        f, h = float(_shown("flow", op.flow)), float(_shown("head", op.head))
+        fb = _shown("flow", [op.flow_band.low, op.flow_band.high])
+        hb = _shown("head", [op.head_band.low, op.head_band.high])
+        ax.errorbar([f], [h], xerr=[[f - fb[0]], [fb[1] - f]], yerr=[[h - hb[0]], [hb[1] - h]],
+                    fmt="o", color=PALETTE[2], capsize=3,
+                    label=f"operating point {f:.3g} {_unit('flow')}, {h:.3g} {_unit('head')}")
+    ax.set_xlabel(f"flow Q [{_unit('flow')}]")
+    ax.set_ylabel(f"head [{_unit('head')}]")
+    ax.set_title("System curve")
+    ax.legend(loc="best")
+    _note(ax)
     return ax
 
 
-def grade_line(line: Any, fluid: Any, flow: float, ax: Any = None) -> Any:
-    """The energy grade along the route of ``line`` at ``flow`` (m³/s).
+def _si_flows(flows: Any) -> Any:
+    """Flows in m³/s from floats, arrays or a pint quantity."""
+    if hasattr(flows, "m_as") and hasattr(flows, "dimensionality"):
+        return np.asarray(flows.m_as("m**3/s"), dtype=float)
+    return np.asarray(flows, dtype=float)
 
-    Plots the total head left after each element relative to the inlet (m: minus the
-    accumulated losses; rises do not change it) and the elevation profile from the rises,
-    against the distance along the pipes (m); fittings, equipment and rises take no
-    length, so their losses show as steps. The shaded band adds the elements' k = 2 bands
-    end to end, which overstates the line's own band (that one is ``required_head_band``).
-    """
-    result = line.evaluate(fluid, float(flow))
-    x, energy, low, high, elevation = [0.0], [0.0], [0.0], [0.0], [0.0]
-    elements = line.elements
-    for r in result.elements:
-        # A row the route implies (an abrupt change of section) has no element and no length.
-        element = None if r.element is None else elements[r.element]
+
+def _grade(rows: Sequence[Any], xs: Sequence[float], ax: Any, xlabel: str,
+           labels: Sequence[str]) -> Any:
+    """Energy grade (minus accumulated losses), its added band and elevation at the
+    boundaries ``xs`` (len(rows) + 1 positions), with each element's step marked."""
+    energy, low, high, elevation = [0.0], [0.0], [0.0], [0.0]
+    for r in rows:
         band = r.head_loss_band
-        x.append(x[-1] + float(getattr(element, "length", 0.0)))
         energy.append(energy[-1] - r.head_loss)
         low.append(low[-1] - band.high)
         high.append(high[-1] - band.low)
         elevation.append(elevation[-1] + r.static_head)
-    with style():
-        ax = _axes(ax)
-        ax.fill_between(x, low, high, color=PALETTE[0], alpha=0.15, linewidth=0,
-                        label="element bands added (k = 2)")
-        ax.plot(x, energy, color=PALETTE[0], marker=".", label="energy grade")
-        ax.plot(x, elevation, color=PALETTE[5], linestyle="--", label="elevation")
-        ax.set_xlabel("distance along the route [m]")
-        ax.set_ylabel("head relative to the inlet [m]")
-        ax.set_title(f"Grade line at Q = {flow:.4g} m³/s")
-        ax.legend(loc="best")
-        _note(ax)
+    ax = _axes(ax)
+    ax.fill_between(xs, _shown("head", low), _shown("head", high), color=PALETTE[0],
+                    alpha=0.15, linewidth=0, label="element bands added (k = 2)")
+    ax.plot(xs, _shown("head", energy), color=PALETTE[0], marker=".", label="energy grade")
+    ax.plot(xs, _shown("head", elevation), color=PALETTE[5], linestyle="--",
+            label="elevation")
+    for i, r in enumerate(rows):
+        if r.kind != "pipe" and r.head_loss != 0.0:
+            ax.annotate(labels[i], xy=(xs[i + 1], float(_shown("head", energy[i + 1]))),
+                        xytext=(3, -9), textcoords="offset points", fontsize=7,
+                        color="#5b6770")
+    ax.set_xlabel(xlabel)
+    ax.set_ylabel(f"head relative to the inlet [{_unit('head')}]")
+    ax.legend(loc="best")
+    _note(ax)
+    return ax
+
+
+def grade_line(line: Any, fluid: Any, flow: Any, ax: Any = None) -> Any:
+    """The energy grade along the route of ``line`` at ``flow`` (m³/s or a quantity).
+
+    Plots the total head left after each element relative to the inlet (minus the
+    accumulated losses; rises do not change it) and the elevation profile from the rises,
+    against the distance along the pipes (display unit of distance). Fittings and other
+    elements without length are spread over a short gap each (1.5 % of the route) and
+    labelled with their index, so several at one joint show as separate steps. The band
+    adds the elements' k = 2 bands end to end, which overstates the line's own band (that
+    one is ``required_head_band``).
+    """
+    result = line.evaluate(fluid, flow)
+    # Result rows follow the route; an abrupt bore change adds a row of its own.
+    elements = iter(line.elements)
+    lengths: List[float] = []
+    labels: List[str] = []
+    for i, r in enumerate(result.elements):
+        e = None if r.kind == "section_change" else next(elements, None)
+        lengths.append(float(getattr(e, "length", 0.0)))
+        labels.append(f"{i} {r.label}")
+    gap = 0.015 * (sum(lengths) or 1.0)
+    xs = [0.0]
+    for length in lengths:
+        xs.append(xs[-1] + (length if length > 0.0 else gap))
+    ax = _grade(result.elements, list(_shown("height", xs)), ax,
+                f"distance along the route [{_unit('height')}] (fittings spread)", labels)
+    ax.set_title(f"Grade line at Q = {float(_shown('flow', result.flow)):.4g} {_unit('flow')}")
+    return ax
+
+
+def result_plot(result: Any, ax: Any = None) -> Any:
+    """The grade line of a :class:`LineResult` with each element at its own position
+    (x = element index), band shaded, fittings labelled; see :func:`grade_line` for the
+    same against distance."""
+    labels = [f"{i} {r.label}" for i, r in enumerate(result.elements)]
+    xs = list(range(len(result.elements) + 1))
+    ax = _grade(result.elements, xs, ax, "element boundary (route order)", labels)
+    ax.set_xticks(xs)
+    ax.set_title(f"Grade line at Q = {float(_shown('flow', result.flow)):.4g} {_unit('flow')}")
     return ax
