@@ -1,5 +1,26 @@
 //! Lines: an opaque handle that collects elements in route order, then evaluates.
 
+// Building, then solving, sizing and parallel lines, then results and bands: the order of
+// the header's topics.
+mod builder;
+
+mod solve;
+
+mod sizing;
+
+mod parallel;
+
+mod result;
+
+mod uncertainty;
+
+pub use builder::*;
+pub use parallel::*;
+pub use result::*;
+pub use sizing::*;
+pub use solve::*;
+pub use uncertainty::*;
+
 use crate::ffi::{self, FfiResult, guard, out_ptr, put};
 use crate::section::{HG_SECTION_CIRCLE, section_of};
 use hydrograde::Error;
