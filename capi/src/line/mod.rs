@@ -83,6 +83,20 @@ impl hg_line {
     }
 }
 
+/// Checks a line and a fluid handle (in that order) and lends the built line with the
+/// fluid: the start of every entry point that computes on a line.
+///
+/// # Safety
+/// `line` and `fluid` must be NULL or live handles.
+pub(crate) unsafe fn line_and_fluid<'a>(
+    line: *const hg_line,
+    fluid: *const crate::fluid::hg_fluid,
+) -> FfiResult<(&'a Line, &'a hydrograde::fluid::Fluid)> {
+    // SAFETY: forwarded contract.
+    let (l, f) = unsafe { (ffi::handle("line", line)?, ffi::handle("fluid", fluid)?) };
+    Ok((l.line()?, &f.fluid))
+}
+
 /// Makes an empty line with the default options and stores it in `*out`; free it with
 /// `hg_line_free`.
 ///

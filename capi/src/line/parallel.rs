@@ -5,6 +5,36 @@ use crate::fluid::hg_fluid;
 use crate::line::hg_line;
 use hydrograde::line::{Line, split_flow};
 
+/// Checks the branch handles (each by its index) and the fluid, and gives the built
+/// lines (copies: the split owns its branches) with the fluid.
+///
+/// # Safety
+/// `branches` must be NULL or valid for `n` pointers, each NULL or a live handle;
+/// `fluid` NULL or a live handle.
+unsafe fn branches_and_fluid<'a>(
+    branches: *const *const hg_line,
+    n: usize,
+    fluid: *const hg_fluid,
+) -> FfiResult<(Vec<Line>, &'a hydrograde::fluid::Fluid)> {
+    // SAFETY: forwarded contract.
+    let (b, f) = unsafe {
+        (
+            ffi::slice("branches", branches, n)?,
+            ffi::handle("fluid", fluid)?,
+        )
+    };
+    let lines = b
+        .iter()
+        .enumerate()
+        .map(|(i, &p)| -> FfiResult<Line> {
+            // SAFETY: forwarded contract.
+            let l = unsafe { ffi::handle(&format!("branches[{i}]"), p)? };
+            Ok(l.line()?.clone())
+        })
+        .collect::<FfiResult<Vec<Line>>>()?;
+    Ok((lines, &f.fluid))
+}
+
 /// Splits a total flow `total` (m³/s) between `n` lines in parallel so that all need the
 /// same head: `flows[i]` is the flow in `branches[i]` (m³/s) and `*head` the common
 /// required head (m).
@@ -29,21 +59,8 @@ pub unsafe extern "C" fn hg_line_split_flow(
         ffi::check_outs(&[out_ptr("head", head)])?;
         ffi::check_len("flows", flows.cast_const(), n)?;
         // SAFETY: forwarded contract.
-        let (b, f) = unsafe {
-            (
-                ffi::slice("branches", branches, n)?,
-                ffi::handle("fluid", fluid)?,
-            )
-        };
-        let lines = b
-            .iter()
-            .map(|&p| -> FfiResult<Line> {
-                // SAFETY: forwarded contract.
-                let l = unsafe { ffi::handle("branches[i]", p)? };
-                Ok(l.line()?.clone())
-            })
-            .collect::<FfiResult<Vec<Line>>>()?;
-        let s = split_flow(&lines, &f.fluid, total)?;
+        let (lines, f) = unsafe { branches_and_fluid(branches, n, fluid)? };
+        let s = split_flow(&lines, f, total)?;
         // SAFETY: forwarded contract; the length was checked above.
         let out = unsafe { ffi::slice_mut("flows", flows, n)? };
         out.copy_from_slice(&s.flows);
@@ -85,21 +102,8 @@ pub unsafe extern "C" fn hg_line_split_flow_bands(
         ffi::check_len("flows_low", flows_low.cast_const(), n)?;
         ffi::check_len("flows_high", flows_high.cast_const(), n)?;
         // SAFETY: forwarded contract.
-        let (b, f) = unsafe {
-            (
-                ffi::slice("branches", branches, n)?,
-                ffi::handle("fluid", fluid)?,
-            )
-        };
-        let lines = b
-            .iter()
-            .map(|&p| -> FfiResult<Line> {
-                // SAFETY: forwarded contract.
-                let l = unsafe { ffi::handle("branches[i]", p)? };
-                Ok(l.line()?.clone())
-            })
-            .collect::<FfiResult<Vec<Line>>>()?;
-        let s = split_flow(&lines, &f.fluid, total)?;
+        let (lines, f) = unsafe { branches_and_fluid(branches, n, fluid)? };
+        let s = split_flow(&lines, f, total)?;
         // SAFETY: forwarded contract; the lengths were checked above.
         let (lo, hi) = unsafe {
             (

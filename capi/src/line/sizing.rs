@@ -114,7 +114,7 @@ pub unsafe extern "C" fn hg_line_size(
         // SAFETY: forwarded contract.
         unsafe { ffi::check_sized_out("out", out)? };
         // SAFETY: forwarded contract.
-        let (l, f) = unsafe { (ffi::handle("line", line)?, ffi::handle("fluid", fluid)?) };
+        let (l, f) = unsafe { crate::line::line_and_fluid(line, fluid)? };
         let lim = match limit {
             HG_LIMIT_PRESSURE_LOSS => Limit::PressureLoss(limit_value),
             HG_LIMIT_VELOCITY => Limit::Velocity(limit_value),
@@ -133,7 +133,7 @@ pub unsafe extern "C" fn hg_line_size(
                 Some((t.parse::<PipeTable>()?, s))
             }
         };
-        let sz = l.line()?.size(&f.fluid, flow, lim, std_table)?;
+        let sz = l.size(f, flow, lim, std_table)?;
         let c = hg_sizing {
             struct_size: std::mem::size_of::<hg_sizing>(),
             min_inside_diameter: sz.min_inside_diameter,

@@ -33,8 +33,8 @@ pub unsafe extern "C" fn hg_line_flow_for_head(
             out_ptr("flow_high", flow_high),
         ])?;
         // SAFETY: forwarded contract.
-        let (l, f) = unsafe { (ffi::handle("line", line)?, ffi::handle("fluid", fluid)?) };
-        let s = l.line()?.flow_for_head(&f.fluid, head)?;
+        let (l, f) = unsafe { crate::line::line_and_fluid(line, fluid)? };
+        let s = l.flow_for_head(f, head)?;
         // SAFETY: forwarded contract; checked above.
         unsafe {
             put("flow", flow, s.flow)?;
@@ -65,12 +65,12 @@ pub unsafe extern "C" fn hg_line_system_curve(
 ) -> i32 {
     guard(|| {
         // SAFETY: forwarded contract.
-        let (l, f) = unsafe { (ffi::handle("line", line)?, ffi::handle("fluid", fluid)?) };
+        let (l, f) = unsafe { crate::line::line_and_fluid(line, fluid)? };
         // SAFETY: forwarded contract.
         let q = unsafe { ffi::slice("flows", flows, n)? };
         // Checked before computing, without borrowing (it may alias `flows`).
         ffi::check_len("heads", heads.cast_const(), n)?;
-        let h = l.line()?.system_curve(&f.fluid, q)?;
+        let h = l.system_curve(f, q)?;
         // SAFETY: `q` is no longer used, so `heads` may alias `flows`.
         let out = unsafe { ffi::slice_mut("heads", heads, n)? };
         out.copy_from_slice(&h);
@@ -117,15 +117,16 @@ pub unsafe extern "C" fn hg_line_operating_point(
         ])?;
         // SAFETY: forwarded contract.
         let (l, f, q, h) = unsafe {
+            let (l, f) = crate::line::line_and_fluid(line, fluid)?;
             (
-                ffi::handle("line", line)?,
-                ffi::handle("fluid", fluid)?,
+                l,
+                f,
                 ffi::slice("pump_flows", pump_flows, n)?,
                 ffi::slice("pump_heads", pump_heads, n)?,
             )
         };
         let pump = PumpCurve::new(q, h)?;
-        let op = l.line()?.operating_point(&f.fluid, &pump)?;
+        let op = l.operating_point(f, &pump)?;
         // SAFETY: forwarded contract; checked above.
         unsafe {
             put("flow", flow, op.flow)?;
@@ -160,8 +161,8 @@ pub unsafe extern "C" fn hg_line_required_head(
     guard(|| {
         ffi::check_outs(&[out_ptr("head", head), out_ptr("dhead_dflow", dhead_dflow)])?;
         // SAFETY: forwarded contract.
-        let (l, f) = unsafe { (ffi::handle("line", line)?, ffi::handle("fluid", fluid)?) };
-        let (h, d) = l.line()?.required_head(&f.fluid, flow)?;
+        let (l, f) = unsafe { crate::line::line_and_fluid(line, fluid)? };
+        let (h, d) = l.required_head(f, flow)?;
         // SAFETY: forwarded contract; checked above.
         unsafe {
             put("head", head, h)?;

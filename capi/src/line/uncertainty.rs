@@ -176,8 +176,8 @@ pub unsafe extern "C" fn hg_line_monte_carlo(
         // SAFETY: forwarded contract.
         unsafe { ffi::check_sized_out("out", out)? };
         // SAFETY: forwarded contract.
-        let (l, f) = unsafe { (ffi::handle("line", line)?, ffi::handle("fluid", fluid)?) };
-        let m = monte_carlo(l.line()?, &f.fluid, flow, samples, seed)?;
+        let (l, f) = unsafe { crate::line::line_and_fluid(line, fluid)? };
+        let m = monte_carlo(l, f, flow, samples, seed)?;
         let c = hg_monte_carlo {
             struct_size: std::mem::size_of::<hg_monte_carlo>(),
             mean: m.mean,
