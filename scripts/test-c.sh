@@ -145,7 +145,7 @@ grep -h -E '^(bitwise|test_)' "$log" | sort -u | sed 's/^/    /'
 
 # One thread: the library then starts no worker pool, whose threads' storage valgrind
 # would otherwise report as possibly lost at exit.
-vg=(env HYDROGRADE_THREADS=1 valgrind --quiet --error-exitcode=97 --leak-check=full --errors-for-leak-kinds=definite,indirect
+vg=(env HYDROGRADE_THREADS=1 valgrind --quiet --suppressions=tests/c/valgrind.supp --error-exitcode=97 --leak-check=full --errors-for-leak-kinds=definite,indirect
     --show-leak-kinds=definite,indirect)
 run "valgrind: C test, zero errors and leaks" "${vg[@]}" "$out/test_c" "$out/reference.txt" "$version"
 run "valgrind: C line test, zero errors and leaks" "${vg[@]}" "$out/test_line" "$out/reference.txt"
