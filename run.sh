@@ -85,9 +85,7 @@ test_windows() {
   .venv/bin/python tests/c/check_vba.py
   .venv/bin/python scripts/windows/mutate_vba.py
   .venv/bin/python capi/excel/make_example.py --check
-  bash scripts/windows/build.sh
   bash scripts/windows/wine.sh
-  cargo build -q --release -p hydrograde-capi
   .venv/bin/python tests/windows/test_dll.py
 }
 

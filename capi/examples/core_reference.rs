@@ -459,8 +459,8 @@ fn lines(out: &mut impl Write) -> io::Result<()> {
                             "line_element",
                             &[I(sc), I(fi as i64), D(q), I(i as i64)],
                             Ok(vec![
-                                D(fin(e.velocity)),
-                                D(fin(e.reynolds)),
+                                D(fin(e.velocity.unwrap_or(0.0))),
+                                D(fin(e.reynolds.unwrap_or(0.0))),
                                 D(fin(e.friction_factor.unwrap_or(0.0))),
                                 D(fin(e.k.unwrap_or(0.0))),
                                 D(e.head_loss),

@@ -116,6 +116,72 @@ Private Function HydroText(ByVal v As Variant, ByVal name As String, ByVal optio
     End If
 End Function
 
+' Rows and columns of an argument of several cells (a range or an array); False for
+' one value.
+Private Function HydroSize(ByVal v As Variant, ByRef rows As Long, ByRef cols As Long) As Boolean
+    Dim a As Variant
+    If TypeName(v) = "Range" Then
+        If v.Cells.Count = 1 Then Exit Function
+        rows = v.Rows.Count
+        cols = v.Columns.Count
+        HydroSize = True
+    ElseIf IsArray(v) Then
+        a = v
+        rows = 1
+        cols = UBound(a, 1) - LBound(a, 1) + 1
+        If HydroDims(a) = 2 Then
+            rows = cols
+            cols = UBound(a, 2) - LBound(a, 2) + 1
+        End If
+        HydroSize = True
+    End If
+End Function
+
+' The number of dimensions of an array (1 or 2).
+Private Function HydroDims(ByVal a As Variant) As Long
+    Dim n As Long
+    On Error GoTo done
+    n = LBound(a, 2)
+    HydroDims = 2
+    Exit Function
+done:
+    HydroDims = 1
+End Function
+
+' The common shape of the arguments of several cells (rows = 0 when all are single
+' values); "" when fine, else which argument has another shape.
+Private Function HydroGrid(ByVal args As Variant, ByVal names As Variant, ByRef rows As Long, ByRef cols As Long) As String
+    Dim k As Long, r As Long, c As Long
+    rows = 0
+    cols = 0
+    For k = LBound(args) To UBound(args)
+        If HydroSize(args(k), r, c) Then
+            If rows = 0 Then
+                rows = r
+                cols = c
+            ElseIf r <> rows Or c <> cols Then
+                HydroGrid = names(k) & ": " & r & " x " & c & " cells; the other ranges have " & rows & " x " & cols
+                Exit Function
+            End If
+        End If
+    Next k
+End Function
+
+' The cell (r, c) of an argument of several cells, or the argument itself for one value.
+Private Function HydroAt(ByVal v As Variant, ByVal r As Long, ByVal c As Long) As Variant
+    Dim rows As Long, cols As Long, a As Variant
+    If Not HydroSize(v, rows, cols) Then
+        HydroAt = v
+        Exit Function
+    End If
+    If TypeName(v) = "Range" Then a = v.Value2 Else a = v
+    If HydroDims(a) = 1 Then
+        HydroAt = a(LBound(a, 1) + c - 1)
+    Else
+        HydroAt = a(LBound(a, 1) + r - 1, LBound(a, 2) + c - 1)
+    End If
+End Function
+
 ' A range packed for the DLL: type codes (0 blank, 1 number, 2 text), numbers and the
 ' texts joined by the character 31 (unit separator), row by row; "" when fine, else why not.
 Private Function HydroPack(ByVal v As Variant, ByVal name As String, ByRef rows As Long, ByRef cols As Long, _
@@ -166,12 +232,25 @@ Public Function HydroVersion() As Variant
     HydroVersion = HydroTrim(out)
 End Function
 
-' Darcy friction factor (-) at a Reynolds number and relative roughness.
+' Darcy friction factor (-) at a Reynolds number and relative roughness; ranges of them give a range of results.
 '   re: Reynolds number (-), > 0
 '   rel_roughness: relative roughness e/D (-), >= 0
 '   correlation: optional: colebrook (default), haaland, swamee_jain, churchill, serghides, blasius, fully_rough
 Public Function HydroDarcyFactor(ByVal re As Variant, ByVal rel_roughness As Variant, Optional ByVal correlation As Variant) As Variant
     Dim e As String, s As Long, msg As String, re_v As Double, rel_roughness_v As Double, correlation_v As String, f As Double
+    Dim rr As Long, cc As Long, i As Long, j As Long, grid() As Variant
+    e = HydroGrid(Array(re, rel_roughness), Array("re", "rel_roughness"), rr, cc)
+    If e <> "" Then HydroDarcyFactor = HydroFail(e): Exit Function
+    If rr > 0 Then
+        ReDim grid(1 To rr, 1 To cc)
+        For i = 1 To rr
+            For j = 1 To cc
+                grid(i, j) = HydroDarcyFactor(HydroAt(re, i, j), HydroAt(rel_roughness, i, j), correlation)
+            Next j
+        Next i
+        HydroDarcyFactor = grid
+        Exit Function
+    End If
     e = HydroLoad()
     If e = "" Then e = HydroNumber(re, "re", re_v)
     If e = "" Then e = HydroNumber(rel_roughness, "rel_roughness", rel_roughness_v)
@@ -190,6 +269,19 @@ End Function
 '   pressure_unit: optional: Pa (default), kPa, bar, psi, atm
 Public Function HydroWaterDensity(ByVal temperature As Variant, ByVal pressure As Variant, Optional ByVal temperature_unit As Variant, Optional ByVal pressure_unit As Variant) As Variant
     Dim e As String, s As Long, msg As String, temperature_v As Double, temperature_unit_v As String, pressure_v As Double, pressure_unit_v As String, density As Double, viscosity As Double
+    Dim rr As Long, cc As Long, i As Long, j As Long, grid() As Variant
+    e = HydroGrid(Array(temperature, pressure), Array("temperature", "pressure"), rr, cc)
+    If e <> "" Then HydroWaterDensity = HydroFail(e): Exit Function
+    If rr > 0 Then
+        ReDim grid(1 To rr, 1 To cc)
+        For i = 1 To rr
+            For j = 1 To cc
+                grid(i, j) = HydroWaterDensity(HydroAt(temperature, i, j), HydroAt(pressure, i, j), temperature_unit, pressure_unit)
+            Next j
+        Next i
+        HydroWaterDensity = grid
+        Exit Function
+    End If
     e = HydroLoad()
     If e = "" Then e = HydroNumber(temperature, "temperature", temperature_v)
     If e = "" Then e = HydroNumber(pressure, "pressure", pressure_v)
@@ -209,6 +301,19 @@ End Function
 '   pressure_unit: optional: Pa (default), kPa, bar, psi, atm
 Public Function HydroWaterViscosity(ByVal temperature As Variant, ByVal pressure As Variant, Optional ByVal temperature_unit As Variant, Optional ByVal pressure_unit As Variant) As Variant
     Dim e As String, s As Long, msg As String, temperature_v As Double, temperature_unit_v As String, pressure_v As Double, pressure_unit_v As String, density As Double, viscosity As Double
+    Dim rr As Long, cc As Long, i As Long, j As Long, grid() As Variant
+    e = HydroGrid(Array(temperature, pressure), Array("temperature", "pressure"), rr, cc)
+    If e <> "" Then HydroWaterViscosity = HydroFail(e): Exit Function
+    If rr > 0 Then
+        ReDim grid(1 To rr, 1 To cc)
+        For i = 1 To rr
+            For j = 1 To cc
+                grid(i, j) = HydroWaterViscosity(HydroAt(temperature, i, j), HydroAt(pressure, i, j), temperature_unit, pressure_unit)
+            Next j
+        Next i
+        HydroWaterViscosity = grid
+        Exit Function
+    End If
     e = HydroLoad()
     If e = "" Then e = HydroNumber(temperature, "temperature", temperature_v)
     If e = "" Then e = HydroNumber(pressure, "pressure", pressure_v)
@@ -228,6 +333,19 @@ End Function
 '   pressure_unit: optional: Pa (default), kPa, bar, psi, atm
 Public Function HydroAirDensity(ByVal temperature As Variant, ByVal pressure As Variant, Optional ByVal temperature_unit As Variant, Optional ByVal pressure_unit As Variant) As Variant
     Dim e As String, s As Long, msg As String, temperature_v As Double, temperature_unit_v As String, pressure_v As Double, pressure_unit_v As String, density As Double, viscosity As Double
+    Dim rr As Long, cc As Long, i As Long, j As Long, grid() As Variant
+    e = HydroGrid(Array(temperature, pressure), Array("temperature", "pressure"), rr, cc)
+    If e <> "" Then HydroAirDensity = HydroFail(e): Exit Function
+    If rr > 0 Then
+        ReDim grid(1 To rr, 1 To cc)
+        For i = 1 To rr
+            For j = 1 To cc
+                grid(i, j) = HydroAirDensity(HydroAt(temperature, i, j), HydroAt(pressure, i, j), temperature_unit, pressure_unit)
+            Next j
+        Next i
+        HydroAirDensity = grid
+        Exit Function
+    End If
     e = HydroLoad()
     If e = "" Then e = HydroNumber(temperature, "temperature", temperature_v)
     If e = "" Then e = HydroNumber(pressure, "pressure", pressure_v)
@@ -247,6 +365,19 @@ End Function
 '   pressure_unit: optional: Pa (default), kPa, bar, psi, atm
 Public Function HydroAirViscosity(ByVal temperature As Variant, ByVal pressure As Variant, Optional ByVal temperature_unit As Variant, Optional ByVal pressure_unit As Variant) As Variant
     Dim e As String, s As Long, msg As String, temperature_v As Double, temperature_unit_v As String, pressure_v As Double, pressure_unit_v As String, density As Double, viscosity As Double
+    Dim rr As Long, cc As Long, i As Long, j As Long, grid() As Variant
+    e = HydroGrid(Array(temperature, pressure), Array("temperature", "pressure"), rr, cc)
+    If e <> "" Then HydroAirViscosity = HydroFail(e): Exit Function
+    If rr > 0 Then
+        ReDim grid(1 To rr, 1 To cc)
+        For i = 1 To rr
+            For j = 1 To cc
+                grid(i, j) = HydroAirViscosity(HydroAt(temperature, i, j), HydroAt(pressure, i, j), temperature_unit, pressure_unit)
+            Next j
+        Next i
+        HydroAirViscosity = grid
+        Exit Function
+    End If
     e = HydroLoad()
     If e = "" Then e = HydroNumber(temperature, "temperature", temperature_v)
     If e = "" Then e = HydroNumber(pressure, "pressure", pressure_v)
@@ -265,6 +396,19 @@ End Function
 '   to_unit: the unit wanted
 Public Function HydroConvert(ByVal value As Variant, ByVal from_unit As Variant, ByVal to_unit As Variant) As Variant
     Dim e As String, s As Long, msg As String, value_v As Double, from_unit_v As String, to_unit_v As String, result As Double
+    Dim rr As Long, cc As Long, i As Long, j As Long, grid() As Variant
+    e = HydroGrid(Array(value), Array("value"), rr, cc)
+    If e <> "" Then HydroConvert = HydroFail(e): Exit Function
+    If rr > 0 Then
+        ReDim grid(1 To rr, 1 To cc)
+        For i = 1 To rr
+            For j = 1 To cc
+                grid(i, j) = HydroConvert(HydroAt(value, i, j), from_unit, to_unit)
+            Next j
+        Next i
+        HydroConvert = grid
+        Exit Function
+    End If
     e = HydroLoad()
     If e = "" Then e = HydroNumber(value, "value", value_v)
     If e = "" Then e = HydroText(from_unit, "from_unit", False, from_unit_v)
@@ -328,6 +472,19 @@ End Function
 '   flow_unit: optional: m3/s (default), L/s, m3/h, gpm
 Public Function HydroPipeHeadLoss(ByVal diameter As Variant, ByVal roughness As Variant, ByVal length As Variant, ByVal density As Variant, ByVal viscosity As Variant, ByVal flow As Variant, Optional ByVal diameter_unit As Variant, Optional ByVal length_unit As Variant, Optional ByVal flow_unit As Variant) As Variant
     Dim e As String, s As Long, msg As String, diameter_v As Double, roughness_v As Double, diameter_unit_v As String, length_v As Double, length_unit_v As String, density_v As Double, viscosity_v As Double, flow_v As Double, flow_unit_v As String, head_loss As Double
+    Dim rr As Long, cc As Long, i As Long, j As Long, grid() As Variant
+    e = HydroGrid(Array(flow), Array("flow"), rr, cc)
+    If e <> "" Then HydroPipeHeadLoss = HydroFail(e): Exit Function
+    If rr > 0 Then
+        ReDim grid(1 To rr, 1 To cc)
+        For i = 1 To rr
+            For j = 1 To cc
+                grid(i, j) = HydroPipeHeadLoss(diameter, roughness, length, density, viscosity, HydroAt(flow, i, j), diameter_unit, length_unit, flow_unit)
+            Next j
+        Next i
+        HydroPipeHeadLoss = grid
+        Exit Function
+    End If
     e = HydroLoad()
     If e = "" Then e = HydroNumber(diameter, "diameter", diameter_v)
     If e = "" Then e = HydroNumber(roughness, "roughness", roughness_v)
@@ -389,6 +546,19 @@ End Function
 '   length_unit: optional: unit of lengths and rises, m (default), ft
 Public Function HydroLineHead(ByVal rows As Variant, ByVal density As Variant, ByVal viscosity As Variant, ByVal flow As Variant, Optional ByVal flow_unit As Variant, Optional ByVal diameter_unit As Variant, Optional ByVal length_unit As Variant) As Variant
     Dim e As String, s As Long, msg As String, rows_rows As Long, rows_cols As Long, rows_types() As Long, rows_numbers() As Double, rows_texts As String, diameter_unit_v As String, length_unit_v As String, density_v As Double, viscosity_v As Double, flow_v As Double, flow_unit_v As String, head As Double, low As Double, high As Double, dominant As String
+    Dim rr As Long, cc As Long, i As Long, j As Long, grid() As Variant
+    e = HydroGrid(Array(flow), Array("flow"), rr, cc)
+    If e <> "" Then HydroLineHead = HydroFail(e): Exit Function
+    If rr > 0 Then
+        ReDim grid(1 To rr, 1 To cc)
+        For i = 1 To rr
+            For j = 1 To cc
+                grid(i, j) = HydroLineHead(rows, density, viscosity, HydroAt(flow, i, j), flow_unit, diameter_unit, length_unit)
+            Next j
+        Next i
+        HydroLineHead = grid
+        Exit Function
+    End If
     e = HydroLoad()
     If e = "" Then e = HydroPack(rows, "rows", rows_rows, rows_cols, rows_types, rows_numbers, rows_texts)
     If e = "" Then e = HydroNumber(density, "density", density_v)
@@ -415,6 +585,19 @@ End Function
 '   length_unit: optional: unit of lengths and rises, m (default), ft
 Public Function HydroLineHeadLow(ByVal rows As Variant, ByVal density As Variant, ByVal viscosity As Variant, ByVal flow As Variant, Optional ByVal flow_unit As Variant, Optional ByVal diameter_unit As Variant, Optional ByVal length_unit As Variant) As Variant
     Dim e As String, s As Long, msg As String, rows_rows As Long, rows_cols As Long, rows_types() As Long, rows_numbers() As Double, rows_texts As String, diameter_unit_v As String, length_unit_v As String, density_v As Double, viscosity_v As Double, flow_v As Double, flow_unit_v As String, head As Double, low As Double, high As Double, dominant As String
+    Dim rr As Long, cc As Long, i As Long, j As Long, grid() As Variant
+    e = HydroGrid(Array(flow), Array("flow"), rr, cc)
+    If e <> "" Then HydroLineHeadLow = HydroFail(e): Exit Function
+    If rr > 0 Then
+        ReDim grid(1 To rr, 1 To cc)
+        For i = 1 To rr
+            For j = 1 To cc
+                grid(i, j) = HydroLineHeadLow(rows, density, viscosity, HydroAt(flow, i, j), flow_unit, diameter_unit, length_unit)
+            Next j
+        Next i
+        HydroLineHeadLow = grid
+        Exit Function
+    End If
     e = HydroLoad()
     If e = "" Then e = HydroPack(rows, "rows", rows_rows, rows_cols, rows_types, rows_numbers, rows_texts)
     If e = "" Then e = HydroNumber(density, "density", density_v)
@@ -441,6 +624,19 @@ End Function
 '   length_unit: optional: unit of lengths and rises, m (default), ft
 Public Function HydroLineHeadHigh(ByVal rows As Variant, ByVal density As Variant, ByVal viscosity As Variant, ByVal flow As Variant, Optional ByVal flow_unit As Variant, Optional ByVal diameter_unit As Variant, Optional ByVal length_unit As Variant) As Variant
     Dim e As String, s As Long, msg As String, rows_rows As Long, rows_cols As Long, rows_types() As Long, rows_numbers() As Double, rows_texts As String, diameter_unit_v As String, length_unit_v As String, density_v As Double, viscosity_v As Double, flow_v As Double, flow_unit_v As String, head As Double, low As Double, high As Double, dominant As String
+    Dim rr As Long, cc As Long, i As Long, j As Long, grid() As Variant
+    e = HydroGrid(Array(flow), Array("flow"), rr, cc)
+    If e <> "" Then HydroLineHeadHigh = HydroFail(e): Exit Function
+    If rr > 0 Then
+        ReDim grid(1 To rr, 1 To cc)
+        For i = 1 To rr
+            For j = 1 To cc
+                grid(i, j) = HydroLineHeadHigh(rows, density, viscosity, HydroAt(flow, i, j), flow_unit, diameter_unit, length_unit)
+            Next j
+        Next i
+        HydroLineHeadHigh = grid
+        Exit Function
+    End If
     e = HydroLoad()
     If e = "" Then e = HydroPack(rows, "rows", rows_rows, rows_cols, rows_types, rows_numbers, rows_texts)
     If e = "" Then e = HydroNumber(density, "density", density_v)
@@ -493,6 +689,19 @@ End Function
 '   length_unit: optional: unit of lengths and rises, m (default), ft
 Public Function HydroLineFlow(ByVal rows As Variant, ByVal density As Variant, ByVal viscosity As Variant, ByVal head As Variant, Optional ByVal flow_unit As Variant, Optional ByVal diameter_unit As Variant, Optional ByVal length_unit As Variant) As Variant
     Dim e As String, s As Long, msg As String, rows_rows As Long, rows_cols As Long, rows_types() As Long, rows_numbers() As Double, rows_texts As String, diameter_unit_v As String, length_unit_v As String, density_v As Double, viscosity_v As Double, head_v As Double, flow_unit_v As String, flow As Double, low As Double, high As Double
+    Dim rr As Long, cc As Long, i As Long, j As Long, grid() As Variant
+    e = HydroGrid(Array(head), Array("head"), rr, cc)
+    If e <> "" Then HydroLineFlow = HydroFail(e): Exit Function
+    If rr > 0 Then
+        ReDim grid(1 To rr, 1 To cc)
+        For i = 1 To rr
+            For j = 1 To cc
+                grid(i, j) = HydroLineFlow(rows, density, viscosity, HydroAt(head, i, j), flow_unit, diameter_unit, length_unit)
+            Next j
+        Next i
+        HydroLineFlow = grid
+        Exit Function
+    End If
     e = HydroLoad()
     If e = "" Then e = HydroPack(rows, "rows", rows_rows, rows_cols, rows_types, rows_numbers, rows_texts)
     If e = "" Then e = HydroNumber(density, "density", density_v)
@@ -613,7 +822,7 @@ End Function
 Public Sub HydroRegister()
     Application.MacroOptions Macro:="HydroVersion", Description:="The version of hydrograde.dll, e.g. 0.1.0.", Category:="hydrograde", _
         ArgumentDescriptions:=Array()
-    Application.MacroOptions Macro:="HydroDarcyFactor", Description:="Darcy friction factor (-) at a Reynolds number and relative roughness.", Category:="hydrograde", _
+    Application.MacroOptions Macro:="HydroDarcyFactor", Description:="Darcy friction factor (-) at a Reynolds number and relative roughness; ranges of them give a range of results.", Category:="hydrograde", _
         ArgumentDescriptions:=Array("Reynolds number (-), > 0", "relative roughness e/D (-), >= 0", "optional: colebrook (default), haaland, swamee_jain, churchill, serghides, blasius, fully_rough")
     Application.MacroOptions Macro:="HydroWaterDensity", Description:="Density (kg/m3) of liquid water at a temperature and absolute pressure.", Category:="hydrograde", _
         ArgumentDescriptions:=Array("temperature, in temperature_unit", "absolute pressure, in pressure_unit", "optional: K (default), degC, degF", "optional: Pa (default), kPa, bar, psi, atm")

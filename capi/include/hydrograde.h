@@ -59,6 +59,7 @@
  *             hg_line_result_band_source, hg_line_result_element_band_source,
  *             hg_line_result_free
  *  Bands      hg_uncertainty_options, hg_monte_carlo, HG_MONTE_CARLO_MAX_SAMPLES;
+ *             hg_line_system_curve_band,
  *             hg_uncertainty_options_default, hg_line_set_uncertainty,
  *             hg_line_monte_carlo
  *  Units      hg_convert, hg_convert_head, hg_unit_name
@@ -273,6 +274,13 @@
 #define HG_ELEMENT_EQUIPMENT 3
 
 /**
+ * An abrupt change of section the route implies between two elements of different bore
+ * with no contraction or expansion element: a row of its own (not an element of the
+ * line), with `HG_WARN_BORE_CHANGE_WITHOUT_TRANSITION`.
+ */
+#define HG_ELEMENT_SECTION_CHANGE 4
+
+/**
  * The `regime` of an element that has none (every element but a pipe).
  */
 #define HG_REGIME_NONE -1
@@ -318,6 +326,12 @@
  * A fitting or equipment value used outside the range its data covers.
  */
 #define HG_WARN_FITTING_OUT_OF_RANGE 64
+
+/**
+ * The bore changes between two elements with no contraction or expansion element: the
+ * change is counted as an abrupt contraction or expansion row of its own.
+ */
+#define HG_WARN_BORE_CHANGE_WITHOUT_TRANSITION 128
 
 /**
  * Major version of the library (from Cargo.toml; the build fails if they disagree).
@@ -702,7 +716,8 @@ typedef struct hg_element_result {
    */
   double friction_factor_high;
   /**
-   * 1 when `velocity` and `reynolds` apply (every element but a rise), else 0.
+   * 1 when `velocity` and `reynolds` apply (elements with a bore: not a rise nor a
+   * rated pressure drop), else 0.
    */
   int32_t has_velocity;
   /**
@@ -2255,6 +2270,45 @@ int32_t hg_line_monte_carlo(const struct hg_line *line,
                             size_t samples,
                             uint64_t seed,
                             struct hg_monte_carlo *out);
+
+/**
+ * The system curve with its 95 % band: at each of the `n` flows `flows[i]` (m³/s),
+ * `nominal[i]` = the required head (m, the same value as `hg_line_system_curve`) and
+ * `low[i]`, `high[i]` = the ends of its band (the band of `hg_line_evaluate`'s required
+ * head at that flow). One pass over the elements per flow; uses all cores above 64
+ * flows, with the same results.
+ *
+ * Returns `HG_OK`; the status of the first failing flow (message "element <i>: ..."),
+ * with the outputs unchanged; `HG_ERR_INVALID` for `n` = 0 or a line that cannot be
+ * built; `HG_ERR_NULL_POINTER`. Thread-safe (the line is only read).
+ *
+ * # Safety
+ * `line` and `fluid` must be NULL or live handles; `flows`, `low`, `nominal` and `high`
+ * NULL or valid for `n` doubles (the outputs may not overlap `flows` or each other).
+ */
+int32_t hg_line_system_curve_band(const struct hg_line *line,
+                                  const struct hg_fluid *fluid,
+                                  const double *flows,
+                                  size_t n,
+                                  double *low,
+                                  double *nominal,
+                                  double *high);
+
+/**
+ * Treats the pipes of catalogue material `material` as independent in the bands (each
+ * pipe its own roughness error, as for pipes from different supplies) when `independent`
+ * is 1, or as sharing one error (the default) when 0.
+ *
+ * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` for a name not in the material catalogue;
+ * `HG_ERR_OUT_OF_RANGE` for `independent` other than 0 or 1; `HG_ERR_NULL_POINTER`.
+ * Not thread-safe for the same line (it changes the line).
+ *
+ * # Safety
+ * `line` must be NULL or a live handle; `material` NULL or a NUL-terminated string.
+ */
+int32_t hg_line_set_material_independent(struct hg_line *line,
+                                         const char *material,
+                                         int32_t independent);
 
 /**
  * Converts `value` from unit `from` to unit `to` into `*out`, with the exact factors of

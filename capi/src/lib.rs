@@ -34,6 +34,8 @@ mod pipe;
 
 mod line;
 
+mod band_curve;
+
 mod units;
 
 mod warning;
@@ -45,6 +47,7 @@ mod threads;
 /// cbindgen:ignore
 mod sheet;
 
+pub use band_curve::*;
 pub use error::*;
 pub use ffi::{
     HG_ERR_BUFFER_TOO_SMALL, HG_ERR_INTERNAL, HG_ERR_INVALID, HG_ERR_NO_SOLUTION,

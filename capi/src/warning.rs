@@ -19,13 +19,16 @@ pub const HG_WARN_GAS_COMPRESSIBILITY: u32 = 16;
 pub const HG_WARN_BELOW_VAPOUR_PRESSURE: u32 = 32;
 /// A fitting or equipment value used outside the range its data covers.
 pub const HG_WARN_FITTING_OUT_OF_RANGE: u32 = 64;
+/// The bore changes between two elements with no contraction or expansion element: the
+/// change is counted as an abrupt contraction or expansion row of its own.
+pub const HG_WARN_BORE_CHANGE_WITHOUT_TRANSITION: u32 = 128;
 
 /// The name of one warning bit (`HG_WARN_*`) as a static string, e.g.
 /// "transitional_flow"; NULL when `bit` is not exactly one known warning bit.
 /// Thread-safe.
 #[unsafe(no_mangle)]
 pub extern "C" fn hg_warning_name(bit: u32) -> *const c_char {
-    const NAMES: [&str; 7] = [
+    const NAMES: [&str; 8] = [
         "reynolds_out_of_range\0",
         "roughness_out_of_range\0",
         "transitional_flow\0",
@@ -33,6 +36,7 @@ pub extern "C" fn hg_warning_name(bit: u32) -> *const c_char {
         "gas_compressibility\0",
         "below_vapour_pressure\0",
         "fitting_out_of_range\0",
+        "bore_change_without_transition\0",
     ];
     Warnings::ALL
         .iter()
@@ -56,6 +60,7 @@ mod tests {
             HG_WARN_GAS_COMPRESSIBILITY,
             HG_WARN_BELOW_VAPOUR_PRESSURE,
             HG_WARN_FITTING_OUT_OF_RANGE,
+            HG_WARN_BORE_CHANGE_WITHOUT_TRANSITION,
         ];
         assert_eq!(
             ours.len(),

@@ -31,8 +31,12 @@ impl Warnings {
     /// A fitting or equipment value used outside the range its data covers.
     pub const FITTING_OUT_OF_RANGE: Warnings = Warnings(1 << 6);
 
+    /// The bore changes between two elements with no contraction or expansion element:
+    /// counted as an abrupt change of section of its own.
+    pub const BORE_CHANGE_WITHOUT_TRANSITION: Warnings = Warnings(1 << 7);
+
     /// Every named warning with its stable snake_case name, in bit order.
-    pub const ALL: [(Warnings, &'static str); 7] = [
+    pub const ALL: [(Warnings, &'static str); 8] = [
         (Warnings::REYNOLDS_OUT_OF_RANGE, "reynolds_out_of_range"),
         (Warnings::ROUGHNESS_OUT_OF_RANGE, "roughness_out_of_range"),
         (Warnings::TRANSITIONAL_FLOW, "transitional_flow"),
@@ -40,6 +44,10 @@ impl Warnings {
         (Warnings::GAS_COMPRESSIBILITY, "gas_compressibility"),
         (Warnings::BELOW_VAPOUR_PRESSURE, "below_vapour_pressure"),
         (Warnings::FITTING_OUT_OF_RANGE, "fitting_out_of_range"),
+        (
+            Warnings::BORE_CHANGE_WITHOUT_TRANSITION,
+            "bore_change_without_transition",
+        ),
     ];
 
     /// The raw bits (the C ABI's bitmask).
@@ -51,7 +59,13 @@ impl Warnings {
     /// Builds a set from raw bits, dropping unknown bits.
     #[inline]
     pub const fn from_bits_truncate(bits: u32) -> Self {
-        Warnings(bits & 0x7f)
+        let mut known = 0;
+        let mut i = 0;
+        while i < Self::ALL.len() {
+            known |= Self::ALL[i].0.0;
+            i += 1;
+        }
+        Warnings(bits & known)
     }
 
     /// True when no warning is set.

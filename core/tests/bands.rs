@@ -80,9 +80,12 @@ fn transitional_band_spans_both_regimes() {
     let e = &r.elements[0];
     assert_eq!(e.regime, Some(Regime::Transitional));
     let fb = e.friction_factor_band.as_ref().unwrap();
-    let (fl, ft) =
-        hydrograde::friction::transition_limits(e.reynolds, 4.5e-5 / d, &Default::default())
-            .unwrap();
+    let (fl, ft) = hydrograde::friction::transition_limits(
+        e.reynolds.unwrap(),
+        4.5e-5 / d,
+        &Default::default(),
+    )
+    .unwrap();
     assert!(
         fb.low <= fl.min(ft) && fb.high >= fl.max(ft),
         "{fb:?} vs {fl} {ft}"

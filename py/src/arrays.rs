@@ -292,7 +292,7 @@ pub mod si {
         super::vector("heads", obj)
     }
     extractors!(
-        flow opt_flow, flows opt_flows, total opt_total, at_flow opt_at_flow, length opt_length,
+        flow opt_flow, flows opt_flows, bore opt_bore, total opt_total, at_flow opt_at_flow, length opt_length,
         diameter opt_diameter, roughness opt_roughness, height opt_height, head opt_head,
         d_in opt_d_in, d_out opt_d_out, outer opt_outer, inner opt_inner, width opt_width,
         major opt_major, minor opt_minor, side opt_side, perimeter opt_perimeter,

@@ -281,7 +281,7 @@ impl PyFitting {
     /// friction factor).
     fn resistance(
         &self,
-        bore: f64,
+        #[pyo3(from_py_with = si::bore)] bore: f64,
         #[pyo3(from_py_with = si::pipe_rel_roughness)] pipe_rel_roughness: f64,
     ) -> PyResult<(f64, f64)> {
         let r = self.inner.resistance(bore, pipe_rel_roughness).py()?;

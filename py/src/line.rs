@@ -180,6 +180,28 @@ impl PyLine {
             l.required_head(f, q).map(|r| r.0)
         })
     }
+    /// The system curve with its band: ``(low, nominal, high)``, three 1-D arrays of the
+    /// required head (m) at each of ``flows`` (m³/s, 1-D), the same band as
+    /// ``evaluate(fluid, q).required_head_band`` at each flow. Runs with the GIL released.
+    fn system_curve_band<'py>(
+        &self,
+        py: Python<'py>,
+        fluid: &PyFluid,
+        flows: Vec<f64>,
+    ) -> PyResult<(
+        Bound<'py, numpy::PyArray1<f64>>,
+        Bound<'py, numpy::PyArray1<f64>>,
+        Bound<'py, numpy::PyArray1<f64>>,
+    )> {
+        let c = py
+            .detach(|| self.inner.system_curve_band(&fluid.inner, &flows))
+            .py()?;
+        Ok((
+            numpy::PyArray1::from_vec(py, c.low),
+            numpy::PyArray1::from_vec(py, c.nominal),
+            numpy::PyArray1::from_vec(py, c.high),
+        ))
+    }
     /// The signed flow (m³/s) for which the required head equals ``head`` (m), with its band.
     fn flow_for_head(
         &self,
@@ -293,8 +315,8 @@ impl PyLine {
         d.set_item("elements", rows)?;
         Ok(d)
     }
-    fn _repr_html_(&self, py: Python<'_>) -> PyResult<String> {
-        state::html(py, "Line", &self.to_dict(py)?)
+    fn _repr_html_(slf: &Bound<'_, Self>) -> PyResult<String> {
+        state::html_object(slf.as_any(), "Line")
     }
     fn __repr__(&self, py: Python<'_>) -> PyResult<String> {
         let parts: Vec<String> = self
@@ -351,6 +373,9 @@ impl PyPumpCurve {
     fn head<'py>(&self, py: Python<'py>, flow: &Bound<'py, PyAny>) -> PyResult<Bound<'py, PyAny>> {
         let p = &self.inner;
         arrays::map(py, ["flow"], [flow], |[q]| p.head(q).map(|r| r.0))
+    }
+    fn _repr_html_(slf: &Bound<'_, Self>) -> PyResult<String> {
+        state::html_object(slf.as_any(), "PumpCurve")
     }
     fn __repr__(&self) -> String {
         let (lo, hi) = self.inner.range();

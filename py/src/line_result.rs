@@ -87,6 +87,11 @@ impl PyLineResult {
     fn warnings(&self) -> Vec<&'static str> {
         self.inner.warnings.names()
     }
+    /// What the warnings found, in words (the element, the values given, the likely cause).
+    #[getter]
+    fn messages(&self) -> Vec<String> {
+        self.inner.messages.clone()
+    }
     /// The per-element breakdown, in route order.
     #[getter]
     fn elements(&self) -> Vec<PyElementResult> {
@@ -128,11 +133,14 @@ impl PyLineResult {
         d.set_item("pressure_loss_band", band_dict(py, &r.pressure_loss_band)?)?;
         d.set_item("required_head_band", band_dict(py, &r.required_head_band)?)?;
         let rows = PyList::empty(py);
-        for e in &r.elements {
-            rows.append(element_dict(py, e)?)?;
+        for (i, e) in r.elements.iter().enumerate() {
+            let row = element_dict(py, e)?;
+            row.set_item("index", i)?;
+            rows.append(row)?;
         }
         d.set_item("elements", rows)?;
         d.set_item("warnings", self.warnings())?;
+        d.set_item("messages", self.messages())?;
         Ok(d)
     }
     /// The per-element breakdown as a pandas DataFrame (needs pandas).
@@ -171,6 +179,7 @@ fn element_dict<'py>(py: Python<'py>, e: &ElementResult) -> PyResult<Bound<'py, 
     let d = PyDict::new(py);
     d.set_item("kind", e.kind.name())?;
     d.set_item("label", &e.label)?;
+    d.set_item("element", e.element)?;
     d.set_item("velocity", e.velocity)?;
     d.set_item("reynolds", e.reynolds)?;
     d.set_item("regime", e.regime.map(|r| r.name()))?;
@@ -182,12 +191,14 @@ fn element_dict<'py>(py: Python<'py>, e: &ElementResult) -> PyResult<Bound<'py, 
     d.set_item("pressure_out", e.pressure_out)?;
     d.set_item("head_loss_low", e.head_loss_band.low)?;
     d.set_item("head_loss_high", e.head_loss_band.high)?;
+    d.set_item("dominant", e.head_loss_band.dominant().map(|s| s.name()))?;
     d.set_item("warnings", e.warnings.names())?;
     Ok(d)
 }
 
 /// One element's share of a :class:`LineResult`: ``kind`` ("pipe", "fitting", "rise",
-/// "equipment"), ``label``, ``velocity`` (m/s), ``reynolds``, ``regime`` and
+/// "equipment", "section_change"), ``label``, ``element`` (index in the line, None for an
+/// implied change of section), ``velocity`` (m/s, None without a bore), ``reynolds``, ``regime`` and
 /// ``friction_factor`` (pipes), ``k`` (fittings), ``head_loss`` (m), ``dhead_dflow``
 /// (s/m²), ``static_head`` (m), ``pressure_out`` (Pa), ``warnings`` and the bands
 /// ``head_loss_band`` and ``friction_factor_band``.
@@ -200,7 +211,7 @@ pub struct PyElementResult {
 
 #[pymethods]
 impl PyElementResult {
-    /// "pipe", "fitting", "rise" or "equipment".
+    /// "pipe", "fitting", "rise", "equipment" or "section_change".
     #[getter]
     fn kind(&self) -> &'static str {
         self.inner.kind.name()
@@ -210,15 +221,22 @@ impl PyElementResult {
     fn label(&self) -> &str {
         &self.inner.label
     }
-    /// Mean velocity, m/s.
+    /// Mean velocity in the element's bore, m/s (signed; None for a rise or a rated
+    /// pressure drop, which have no bore of their own).
     #[getter]
-    fn velocity(&self) -> f64 {
+    fn velocity(&self) -> Option<f64> {
         self.inner.velocity
     }
-    /// Reynolds number.
+    /// Reynolds number in the element's bore (None where there is no bore).
     #[getter]
-    fn reynolds(&self) -> f64 {
+    fn reynolds(&self) -> Option<f64> {
         self.inner.reynolds
+    }
+    /// Index of the line element this row stands for; None for an abrupt change of
+    /// section the route implies between two elements of different bore.
+    #[getter]
+    fn element(&self) -> Option<usize> {
+        self.inner.element
     }
     /// Flow regime of a pipe (None for other elements).
     #[getter]
@@ -277,6 +295,9 @@ impl PyElementResult {
     /// The fields as a dict.
     fn to_dict<'py>(&self, py: Python<'py>) -> PyResult<Bound<'py, PyDict>> {
         element_dict(py, &self.inner)
+    }
+    fn _repr_html_(&self, py: Python<'_>) -> PyResult<String> {
+        state::html(py, "ElementResult", &self.to_dict(py)?)
     }
     fn __repr__(&self) -> String {
         format!(
@@ -466,6 +487,9 @@ impl PySplit {
     fn flow_bands(&self, py: Python<'_>) -> PyResult<Vec<Py<PyBand>>> {
         self.inner.flow_bands.iter().map(|b| band(py, b)).collect()
     }
+    fn _repr_html_(slf: &Bound<'_, Self>) -> PyResult<String> {
+        state::html_object(slf.as_any(), "Split")
+    }
     fn __repr__(&self) -> String {
         format!(
             "Split(flows={:?}, head={:?})",
@@ -535,6 +559,9 @@ impl PySizing {
         d.set_item("standard", self.standard(py)?)?;
         d.set_item("standard_at_band", self.standard_at_band(py)?)?;
         Ok(d)
+    }
+    fn _repr_html_(&self, py: Python<'_>) -> PyResult<String> {
+        state::html(py, "Sizing", &self.to_dict(py)?)
     }
     fn __repr__(&self) -> String {
         let pick = |c: &Option<SizeChoice>| {

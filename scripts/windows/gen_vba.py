@@ -148,6 +148,72 @@ Private Function HydroText(ByVal v As Variant, ByVal name As String, ByVal optio
     End If
 End Function
 
+' Rows and columns of an argument of several cells (a range or an array); False for
+' one value.
+Private Function HydroSize(ByVal v As Variant, ByRef rows As Long, ByRef cols As Long) As Boolean
+    Dim a As Variant
+    If TypeName(v) = "Range" Then
+        If v.Cells.Count = 1 Then Exit Function
+        rows = v.Rows.Count
+        cols = v.Columns.Count
+        HydroSize = True
+    ElseIf IsArray(v) Then
+        a = v
+        rows = 1
+        cols = UBound(a, 1) - LBound(a, 1) + 1
+        If HydroDims(a) = 2 Then
+            rows = cols
+            cols = UBound(a, 2) - LBound(a, 2) + 1
+        End If
+        HydroSize = True
+    End If
+End Function
+
+' The number of dimensions of an array (1 or 2).
+Private Function HydroDims(ByVal a As Variant) As Long
+    Dim n As Long
+    On Error GoTo done
+    n = LBound(a, 2)
+    HydroDims = 2
+    Exit Function
+done:
+    HydroDims = 1
+End Function
+
+' The common shape of the arguments of several cells (rows = 0 when all are single
+' values); "" when fine, else which argument has another shape.
+Private Function HydroGrid(ByVal args As Variant, ByVal names As Variant, ByRef rows As Long, ByRef cols As Long) As String
+    Dim k As Long, r As Long, c As Long
+    rows = 0
+    cols = 0
+    For k = LBound(args) To UBound(args)
+        If HydroSize(args(k), r, c) Then
+            If rows = 0 Then
+                rows = r
+                cols = c
+            ElseIf r <> rows Or c <> cols Then
+                HydroGrid = names(k) & ": " & r & " x " & c & " cells; the other ranges have " & rows & " x " & cols
+                Exit Function
+            End If
+        End If
+    Next k
+End Function
+
+' The cell (r, c) of an argument of several cells, or the argument itself for one value.
+Private Function HydroAt(ByVal v As Variant, ByVal r As Long, ByVal c As Long) As Variant
+    Dim rows As Long, cols As Long, a As Variant
+    If Not HydroSize(v, rows, cols) Then
+        HydroAt = v
+        Exit Function
+    End If
+    If TypeName(v) = "Range" Then a = v.Value2 Else a = v
+    If HydroDims(a) = 1 Then
+        HydroAt = a(LBound(a, 1) + c - 1)
+    Else
+        HydroAt = a(LBound(a, 1) + r - 1, LBound(a, 2) + c - 1)
+    End If
+End Function
+
 ' A range packed for the DLL: type codes (0 blank, 1 number, 2 text), numbers and the
 ' texts joined by the character 31 (unit separator), row by row; "" when fine, else why not.
 Private Function HydroPack(ByVal v As Variant, ByVal name As String, ByRef rows As Long, ByRef cols As Long, _
@@ -225,6 +291,9 @@ def wrapper(fn: dict, ws: dict) -> list[str]:
             dims += [f"{a}_rows As Long", f"{a}_cols As Long", f"{a}_types() As Long",
                      f"{a}_numbers() As Double", f"{a}_texts As String"]
     lines.append(f"    Dim {', '.join(dims)}")
+    over = ws.get("over_ranges", [])
+    if over:
+        lines += over_ranges(name, sheet_args, over)
     lines.append("    e = HydroLoad()")
     for a in sheet_args:
         t = types[a]
@@ -255,6 +324,28 @@ def wrapper(fn: dict, ws: dict) -> list[str]:
     lines.append(f"    {name} = {value}")
     lines.append("End Function")
     return lines
+
+
+def over_ranges(name: str, sheet_args: list[str], over: list[str]) -> list[str]:
+    """The prologue that maps a function over ranges: when any of `over` is several cells,
+    the function is called on each cell (ranges of one shape, single values repeated) and
+    returns the grid, which spills as a dynamic array."""
+    inner = ", ".join(f"HydroAt({a}, i, j)" if a in over else a for a in sheet_args)
+    return [
+        "    Dim rr As Long, cc As Long, i As Long, j As Long, grid() As Variant",
+        f"    e = HydroGrid(Array({', '.join(over)}), Array({', '.join(vba_string(a) for a in over)}), rr, cc)",
+        f"    If e <> \"\" Then {name} = HydroFail(e): Exit Function",
+        "    If rr > 0 Then",
+        "        ReDim grid(1 To rr, 1 To cc)",
+        "        For i = 1 To rr",
+        "            For j = 1 To cc",
+        f"                grid(i, j) = {name}({inner})",
+        "            Next j",
+        "        Next i",
+        f"        {name} = grid",
+        "        Exit Function",
+        "    End If",
+    ]
 
 
 def vba_string(s: str) -> str:

@@ -8,7 +8,7 @@ against the one specification capi/excel/spec.json, without Office:
 - each Hydro* worksheet function takes the spec's arguments in order, converts each one
   under its own name, calls its export with every argument in the Declare's order,
   passes each text buffer with the length it was allocated with, and returns the output
-  the spec names.
+  the spec names; a function mapped over ranges calls itself with each cell in its place.
 
 The DLL side of the same spec is checked under Wine by tests/windows/test_dll.py. Prints
 the failures and 'N passed, N failed'; exits non-zero on any failure."""
@@ -169,6 +169,14 @@ def check(path: Path) -> list[str]:
                         "cells": f'HydroPack({a}, "{a}", {a}_rows, {a}_cols, {a}_types, {a}_numbers, {a}_texts)'}[t]
                 if not any(conv in s for s in code):
                     fails.append(f"{name}: argument {a} is not converted as a {t} under its own name")
+            over = ws.get("over_ranges", [])
+            if over:
+                inner = ", ".join(f"HydroAt({a}, i, j)" if a in over else a for a in want)
+                if f"grid(i, j) = {name}({inner})" not in code:
+                    fails.append(f"{name}: over ranges, each cell is not passed in its own place ({inner})")
+                grid = f'e = HydroGrid(Array({", ".join(over)}), Array({", ".join(chr(34) + a + chr(34) for a in over)}), rr, cc)'
+                if grid not in code:
+                    fails.append(f"{name}: the shape of the ranges {over} is not checked")
             calls = [s for s in code if s.startswith(f"s = {fn['export']}(")]
             if len(calls) != 1:
                 fails.append(f"{name}: {len(calls)} calls of {fn['export']}")

@@ -260,6 +260,7 @@ static void test_meta(const char *expected_version) {
       {HG_WARN_GAS_COMPRESSIBILITY, "gas_compressibility"},
       {HG_WARN_BELOW_VAPOUR_PRESSURE, "below_vapour_pressure"},
       {HG_WARN_FITTING_OUT_OF_RANGE, "fitting_out_of_range"},
+      {HG_WARN_BORE_CHANGE_WITHOUT_TRANSITION, "bore_change_without_transition"},
   };
   for (size_t i = 0; i < sizeof w / sizeof *w; i++)
     CHECK(hg_warning_name(w[i].bit) && strcmp(hg_warning_name(w[i].bit), w[i].name) == 0,

@@ -123,3 +123,19 @@ def test_pint_is_not_imported_without_quantities():
     )
     out = subprocess.run([sys.executable, "-c", code], capture_output=True, text=True, check=True)
     assert out.stdout.strip() == "False"
+
+
+def test_to_dataframe_follows_the_display_units(line, water):
+    pytest.importorskip("pandas")
+    r = line.evaluate(water, 0.0045)
+    with hg.display(pressure="kPa", flow="L/s"):
+        df = r.to_dataframe()
+        one = hg.friction(1e5, 1e-4).to_dataframe()
+    assert df.attrs["units"]["head_loss"] == "m"
+    assert df.attrs["units"]["pressure_out"] == "kPa"
+    assert list(df["head_loss"]) == [e.head_loss for e in r.elements]
+    assert one.loc[0, "f"] == hg.darcy_factor(1e5, 1e-4)
+    ln = hg.Line([hg.Pipe(0.0525, 30.0, 4.5e-5)], inlet_pressure=3e5)
+    with hg.display(pressure="kPa"):
+        df = ln.evaluate(water, 0.0045).to_dataframe()
+    assert df.loc[0, "pressure_out"] == pytest.approx(ln.evaluate(water, 0.0045).elements[0].pressure_out / 1000, rel=1e-15)

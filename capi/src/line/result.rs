@@ -17,6 +17,10 @@ pub const HG_ELEMENT_FITTING: i32 = 1;
 pub const HG_ELEMENT_RISE: i32 = 2;
 /// Rated equipment.
 pub const HG_ELEMENT_EQUIPMENT: i32 = 3;
+/// An abrupt change of section the route implies between two elements of different bore
+/// with no contraction or expansion element: a row of its own (not an element of the
+/// line), with `HG_WARN_BORE_CHANGE_WITHOUT_TRANSITION`.
+pub const HG_ELEMENT_SECTION_CHANGE: i32 = 4;
 
 /// The `regime` of an element that has none (every element but a pipe).
 pub const HG_REGIME_NONE: i32 = -1;
@@ -125,7 +129,8 @@ pub struct hg_element_result {
     pub friction_factor_low: f64,
     /// Upper end of the friction-factor band; only when `has_friction_factor`.
     pub friction_factor_high: f64,
-    /// 1 when `velocity` and `reynolds` apply (every element but a rise), else 0.
+    /// 1 when `velocity` and `reynolds` apply (elements with a bore: not a rise nor a
+    /// rated pressure drop), else 0.
     pub has_velocity: i32,
     /// 1 when `friction_factor` and its band apply (pipes), else 0.
     pub has_friction_factor: i32,
@@ -179,10 +184,14 @@ pub(crate) fn element_to_c(e: &ElementResult) -> hg_element_result {
         ElementKind::Fitting => HG_ELEMENT_FITTING,
         ElementKind::Rise => HG_ELEMENT_RISE,
         ElementKind::Equipment => HG_ELEMENT_EQUIPMENT,
+        ElementKind::SectionChange => HG_ELEMENT_SECTION_CHANGE,
     };
-    // The core marks a velocity that does not apply (a rise) with NaN.
-    let (velocity, has_velocity) = flagged(Some(e.velocity));
-    let reynolds = if has_velocity == 1 { e.reynolds } else { 0.0 };
+    let (velocity, has_velocity) = flagged(e.velocity);
+    let reynolds = if has_velocity == 1 {
+        e.reynolds.unwrap_or(0.0)
+    } else {
+        0.0
+    };
     let (friction_factor, has_friction_factor) = flagged(e.friction_factor);
     let (k, has_k) = flagged(e.k);
     let (pressure_out, has_pressure) = flagged(e.pressure_out);
@@ -616,9 +625,10 @@ mod tests {
             (ElementKind::Fitting, HG_ELEMENT_FITTING),
             (ElementKind::Rise, HG_ELEMENT_RISE),
             (ElementKind::Equipment, HG_ELEMENT_EQUIPMENT),
+            (ElementKind::SectionChange, HG_ELEMENT_SECTION_CHANGE),
         ] {
             assert_eq!(
-                ["pipe", "fitting", "rise", "equipment"][c as usize],
+                ["pipe", "fitting", "rise", "equipment", "section_change"][c as usize],
                 k.name()
             );
         }

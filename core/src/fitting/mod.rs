@@ -423,6 +423,60 @@ impl Fitting {
             .referred(own, bore))
     }
 
+    /// K for flow through the fitting in the reverse direction, referred to the same
+    /// `bore` (m) as [`Fitting::resistance`]: a contraction passed backwards is a sudden
+    /// expansion (Borda–Carnot) and the reverse, an inlet from a tank is an outlet into a
+    /// tank (K = 1) and an outlet into a tank is a square-edged inlet (K = 0.5; the edge
+    /// of the outlet is not known). Every other fitting loses the same either way.
+    ///
+    /// The viscous part is the forward one, so a loss built from the two directions has a
+    /// continuous derivative through zero flow (the inertial parts have zero slope there).
+    ///
+    /// # Errors
+    /// As [`Fitting::resistance`].
+    pub fn reverse_resistance(&self, bore: f64, pipe_rel_roughness: f64) -> Result<Resistance> {
+        let forward = self.resistance(bore, pipe_rel_roughness)?;
+        let inertial_at = |k: f64, own: f64| {
+            Resistance {
+                k_viscous: 0.0,
+                k_inertial: k,
+            }
+            .referred(own, bore)
+            .k_inertial
+        };
+        let k_inertial = match self.method {
+            // Backwards: from d_out up to d_in, a sudden expansion on the d_out velocity.
+            Method::Contraction { d_in, d_out } => inertial_at(
+                crate::math::powi(1.0 - crate::math::powi(d_out / d_in, 2), 2),
+                d_out,
+            ),
+            // Backwards: from d_out down to d_in, a sudden contraction on the d_in velocity.
+            Method::Expansion { d_in, d_out } => {
+                inertial_at(0.5 * (1.0 - crate::math::powi(d_in / d_out, 2)), d_in)
+            }
+            Method::EntranceSharp | Method::EntranceRounded { .. } | Method::EntranceProjecting => {
+                inertial_at(method::K_EXIT, self.diameter.unwrap_or(bore))
+            }
+            Method::Exit => inertial_at(method::K_ENTRANCE_SHARP, self.diameter.unwrap_or(bore)),
+            _ => forward.k_inertial,
+        };
+        Ok(Resistance {
+            k_viscous: forward.k_viscous,
+            k_inertial,
+        })
+    }
+
+    /// The bores (m) on the upstream and downstream side of a change of section
+    /// (contraction or expansion); `None` for every other fitting.
+    pub fn transition_bores(&self) -> Option<(f64, f64)> {
+        match self.method {
+            Method::Contraction { d_in, d_out } | Method::Expansion { d_in, d_out } => {
+                Some((d_in, d_out))
+            }
+            _ => None,
+        }
+    }
+
     /// K and ∂K/∂Re at Reynolds number `re` (> 0, in `bore`) and bore `bore` (m).
     ///
     /// # Errors

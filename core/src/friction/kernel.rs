@@ -3,7 +3,7 @@
 //!
 //! Every correlation is a fixed, branch-free sequence of IEEE basic operations (the
 //! crate's own [`crate::math`] functions included), so the compiler's vectoriser can run
-//! [`BLOCK`] points side by side without changing a single rounding: no fused
+//! several points side by side without changing a single rounding: no fused
 //! multiply-add is written or allowed to be formed (Rust never contracts `a * b + c`),
 //! and lane-wise IEEE arithmetic is the scalar arithmetic. The same source is compiled
 //! once per instruction set (`#[target_feature]`); [`Isa::detected`] picks the widest
@@ -17,9 +17,6 @@
 use super::{Correlation, MAX_REL_ROUGHNESS, MAX_REYNOLDS, Options, colebrook, explicit};
 use crate::error::{Error, Result};
 use std::sync::OnceLock;
-
-/// Points computed side by side (eight doubles fill an AVX-512 register).
-pub(crate) const BLOCK: usize = 8;
 
 /// The instruction sets the batch kernel is compiled for.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
@@ -103,14 +100,16 @@ impl Kernel {
         }
     }
 
-    /// The factor of one point: the scalar formula itself (its derivatives are dead code
-    /// here and vanish), so the bits are those of [`super::darcy_factor`].
+    /// The factors of a run of points that all qualify: the scalar formula itself (its
+    /// derivatives are dead code here and vanish), so the bits are those of
+    /// [`super::darcy_factor`]. The loop's length is known only at run time, which keeps
+    /// the compiler from unrolling it whole and lets its loop vectoriser take it.
     #[inline(always)]
-    fn block(&self, re: &[f64; BLOCK], rr: &[f64; BLOCK], out: &mut [f64; BLOCK]) {
+    fn segment(&self, re: &[f64], rr: &[f64], out: &mut [f64]) {
         macro_rules! lanes {
             ($f:expr) => {
-                for k in 0..BLOCK {
-                    out[k] = $f(re[k], rr[k]).f;
+                for ((o, &r), &e) in out.iter_mut().zip(re).zip(rr) {
+                    *o = $f(r, e).f;
                 }
             };
         }
@@ -127,9 +126,8 @@ impl Kernel {
     }
 }
 
-/// The loop every instruction set compiles: whole blocks whose points all qualify go
-/// through [`Kernel::block`]; any other point (and the tail) goes to `scalar(i, &mut out)`
-/// with its index in `re`.
+/// The loop every instruction set compiles: each run of consecutive qualifying points
+/// goes through [`Kernel::segment`]; every other point goes to `scalar(i, &mut out[i])`.
 #[inline(always)]
 fn run(
     kern: &Kernel,
@@ -138,33 +136,19 @@ fn run(
     out: &mut [f64],
     scalar: &mut dyn FnMut(usize, &mut f64) -> Result<()>,
 ) -> Result<()> {
-    let blocks = out
-        .chunks_exact_mut(BLOCK)
-        .zip(re.chunks_exact(BLOCK))
-        .zip(rr.chunks_exact(BLOCK));
-    for (b, ((o, r), e)) in blocks.enumerate() {
-        // Always whole blocks (chunks_exact); the conversions cannot fail.
-        if let (Ok(o), Ok(r), Ok(e)) = (
-            <&mut [f64; BLOCK]>::try_from(&mut *o),
-            <&[f64; BLOCK]>::try_from(r),
-            <&[f64; BLOCK]>::try_from(e),
-        ) {
-            let mut all = true;
-            for k in 0..BLOCK {
-                all &= kern.takes(r[k], e[k]);
-            }
-            if all {
-                kern.block(r, e, o);
-                continue;
-            }
+    let n = re.len().min(rr.len()).min(out.len());
+    let mut i = 0;
+    while i < n {
+        let mut j = i;
+        while j < n && kern.takes(re[j], rr[j]) {
+            j += 1;
         }
-        for (k, o) in o.iter_mut().enumerate() {
-            scalar(b * BLOCK + k, o)?;
+        kern.segment(&re[i..j], &rr[i..j], &mut out[i..j]);
+        if j < n {
+            scalar(j, &mut out[j])?;
+            j += 1;
         }
-    }
-    let base = re.len() / BLOCK * BLOCK;
-    for (k, o) in out[base..].iter_mut().enumerate() {
-        scalar(base + k, o)?;
+        i = j;
     }
     Ok(())
 }

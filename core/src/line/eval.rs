@@ -53,9 +53,10 @@ pub(crate) struct State {
     pub head_loss: f64,
     pub dhead_dflow: f64,
     pub static_head: f64,
-    /// Velocity, m/s (NaN when the element has no flow area of its own).
-    pub velocity: f64,
-    pub reynolds: f64,
+    /// Mean velocity, m/s (`None` for an element with no flow area of its own).
+    pub velocity: Option<f64>,
+    /// Reynolds number in the element's bore (`None` where there is no bore).
+    pub reynolds: Option<f64>,
     pub regime: Option<Regime>,
     pub friction_factor: Option<f64>,
     pub k: Option<f64>,
@@ -77,8 +78,8 @@ impl State {
             head_loss: 0.0,
             dhead_dflow: 0.0,
             static_head,
-            velocity: f64::NAN,
-            reynolds: f64::NAN,
+            velocity: None,
+            reynolds: None,
             regime: None,
             friction_factor: None,
             k: None,
@@ -222,8 +223,8 @@ impl Line {
                     head_loss: h,
                     dhead_dflow: ps.dhead_dflow * m,
                     static_head: 0.0,
-                    velocity: ps.velocity,
-                    reynolds: ps.reynolds,
+                    velocity: Some(ps.velocity),
+                    reynolds: Some(ps.reynolds),
                     regime: Some(ps.regime),
                     friction_factor: Some(ps.friction_factor * m).filter(|f| f.is_finite()),
                     k: None,
@@ -246,9 +247,17 @@ impl Line {
                 bore,
                 area,
                 resistance,
+                reverse,
                 spread,
+                blocks_reverse,
                 ..
             } => {
+                if flow < 0.0 && *blocks_reverse {
+                    return Err(self.reverse_blocked(i, flow));
+                }
+                // Each direction has its own inertial K (a contraction passed backwards is
+                // an expansion); the viscous part is common, so the slope is continuous.
+                let resistance = if flow < 0.0 { reverse } else { resistance };
                 let (bore, area) = (bore * dk, area * dk * dk);
                 let v = flow / area;
                 let re = v.abs() * bore / nu;
@@ -261,8 +270,8 @@ impl Line {
                         + 2.0 * resistance.k_inertial * v.abs())
                         / (2.0 * g * area)
                         * own,
-                    velocity: v,
-                    reynolds: re,
+                    velocity: Some(v),
+                    reynolds: Some(re),
                     k: (re > 0.0).then(|| resistance.k(re) * own),
                     sens: Sens {
                         diameter: -3.0 * hv - 4.0 * hi,
@@ -295,6 +304,40 @@ impl Line {
                     ..State::passive(0.0)
                 }
             }
+        })
+    }
+
+    /// The error for reverse flow `flow` (m³/s) through row `i`, which stops it. Every
+    /// call that takes a flow gives this one error kind ([`Error::NoSolution`]).
+    pub(crate) fn reverse_blocked(&self, i: usize, flow: f64) -> Error {
+        Error::no_solution(format!(
+            "flow {flow} m³/s is reverse: {}",
+            self.reverse_blocked_reason(i)
+        ))
+    }
+
+    /// "it would pass backwards through NAME (element N), which stops reverse flow".
+    pub(crate) fn reverse_blocked_reason(&self, i: usize) -> String {
+        let name = match &self.resolved[i] {
+            Resolved::Fitting { name, .. } => name.as_str(),
+            _ => "an element",
+        };
+        let at = self.origin[i].map_or(String::new(), |e| format!(" (element {e})"));
+        format!(
+            "it would pass backwards through {name}{at}, a check valve or foot valve that stops reverse flow"
+        )
+    }
+
+    /// The first row that stops reverse flow (a check or foot valve), if any.
+    pub(crate) fn blocking_row(&self) -> Option<usize> {
+        self.resolved.iter().position(|r| {
+            matches!(
+                r,
+                Resolved::Fitting {
+                    blocks_reverse: true,
+                    ..
+                }
+            )
         })
     }
 

@@ -16,6 +16,8 @@
 //! take it from is an error when the line is built.
 
 mod eval;
+mod path;
+pub(crate) use path::{Resolved, Role};
 mod parallel;
 mod result;
 pub mod rows;
@@ -31,7 +33,7 @@ pub use uncertainty::CurveBand;
 
 use crate::band::UncertaintyOptions;
 use crate::error::{Error, Result, check};
-use crate::fitting::{Fitting, Resistance};
+use crate::fitting::Fitting;
 use crate::friction;
 use crate::pipe::Pipe;
 use crate::section::TurbulentDiameter;
@@ -162,37 +164,6 @@ impl LineOptions {
     }
 }
 
-/// An element with everything that does not depend on the fluid or the flow worked out.
-#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
-pub(crate) enum Resolved {
-    Pipe {
-        pipe: Pipe,
-        geometry: crate::pipe::Geometry,
-        /// Standard uncertainty of ln ε (ε log-uniform over its stated range).
-        roughness_u: f64,
-        /// Mean of ln ε minus ln of the nominal ε.
-        roughness_shift: f64,
-        /// The range was stated for this pipe alone (its roughness is a source of its own).
-        own_range: bool,
-    },
-    Fitting {
-        bore: f64,
-        area: f64,
-        resistance: Resistance,
-        spread: f64,
-        name: String,
-        /// Rated equipment with a fixed K rather than a fitting (for band labels).
-        equipment: bool,
-    },
-    Rise(f64),
-    Drop {
-        drop: f64,
-        at_flow: f64,
-        spread: f64,
-        name: String,
-    },
-}
-
 /// A route of elements in series, ready to evaluate.
 #[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
 pub struct Line {
@@ -201,6 +172,11 @@ pub struct Line {
     /// Roughness ranges (low, high) given per pipe index, m.
     roughness_ranges: Vec<Option<(f64, f64)>>,
     pub(crate) resolved: Vec<Resolved>,
+    /// Per resolved row, the index of the element it comes from (`None` for an abrupt
+    /// change of section the route implies).
+    pub(crate) origin: Vec<Option<usize>>,
+    /// Warnings raised when the line was built (bit, message).
+    pub(crate) notes: Vec<(crate::warning::Warnings, String)>,
 }
 
 impl Line {
@@ -230,12 +206,14 @@ impl Line {
                 "a line needs at least one element",
             ));
         }
-        let resolved = resolve(&elements, &options, &roughness_ranges)?;
+        let path = path::resolve(&elements, &options, &roughness_ranges)?;
         Ok(Line {
             elements,
             options,
             roughness_ranges,
-            resolved,
+            resolved: path.rows,
+            origin: path.origin,
+            notes: path.notes,
         })
     }
 
@@ -327,107 +305,5 @@ impl Line {
             self.options.clone(),
             self.roughness_ranges.clone(),
         )
-    }
-}
-
-/// Works out bores, resistances and roughness uncertainties.
-fn resolve(
-    elements: &[Element],
-    options: &LineOptions,
-    ranges: &[Option<(f64, f64)>],
-) -> Result<Vec<Resolved>> {
-    let pipe_before = |i: usize| elements[..i].iter().rev().find_map(as_pipe);
-    let pipe_after = |i: usize| elements[i + 1..].iter().find_map(as_pipe);
-    let mut out = Vec::with_capacity(elements.len());
-    for (i, e) in elements.iter().enumerate() {
-        let neighbour = pipe_before(i).or_else(|| pipe_after(i));
-        // (bore, ε/D of the neighbouring pipe, flow area). A fitting that follows its pipe
-        // sees that pipe's own mean velocity (its flow area, also for a non-circular duct)
-        // and Reynolds number on the hydraulic diameter; one with its own diameter sees a
-        // round bore of it, unless that diameter is a neighbouring duct's.
-        let bore_for = |own: Option<f64>, label: &str| -> Result<(f64, f64, f64)> {
-            let (bore, area) = match (own, neighbour) {
-                // A bore equal to a neighbouring duct's hydraulic diameter means that
-                // duct (e.g. the outlet of a contraction between rectangular ducts).
-                (Some(d), _) => {
-                    let duct = [pipe_before(i), pipe_after(i)]
-                        .into_iter()
-                        .flatten()
-                        .find(|p| (p.bore() - d).abs() <= 1e-12 * d);
-                    (
-                        d,
-                        duct.map_or(0.25 * std::f64::consts::PI * d * d, |p| p.section.area()),
-                    )
-                }
-                (None, Some(p)) => (p.bore(), p.section.area()),
-                (None, None) => {
-                    return Err(Error::invalid(
-                        "elements",
-                        format!(
-                            "{label} (element {i}) has no diameter and there is no pipe in the line to take it from"
-                        ),
-                    ));
-                }
-            };
-            let rr = neighbour.map_or(0.0, |p| p.roughness / bore);
-            Ok((bore, rr, area))
-        };
-        out.push(match e {
-            Element::Pipe(p) => {
-                let (roughness_u, roughness_shift) =
-                    uncertainty::roughness_input(p, ranges[i], options)
-                        .map_err(|e| e.at_index(i))?;
-                Resolved::Pipe {
-                    pipe: p.clone(),
-                    geometry: p.geometry(options.turbulent_diameter),
-                    roughness_u,
-                    roughness_shift,
-                    own_range: ranges[i].is_some(),
-                }
-            }
-            Element::Fitting(f) => {
-                let name = f.name();
-                let (bore, rr, area) = bore_for(f.diameter(), &name)?;
-                Resolved::Fitting {
-                    bore,
-                    area,
-                    resistance: f.resistance(bore, rr.min(friction::MAX_REL_ROUGHNESS))?,
-                    spread: f.k_spread(),
-                    name,
-                    equipment: false,
-                }
-            }
-            Element::Rise(h) => Resolved::Rise(*h),
-            Element::Equipment(eq) => match &eq.rating {
-                Rating::PressureDrop { drop, at_flow } => Resolved::Drop {
-                    drop: *drop,
-                    at_flow: *at_flow,
-                    spread: eq.spread,
-                    name: eq.name.clone(),
-                },
-                Rating::FixedK { k, diameter } => {
-                    let (bore, _, area) = bore_for(*diameter, &eq.name)?;
-                    Resolved::Fitting {
-                        bore,
-                        area,
-                        resistance: Resistance {
-                            k_viscous: 0.0,
-                            k_inertial: *k,
-                        },
-                        spread: eq.spread,
-                        name: eq.name.clone(),
-                        equipment: true,
-                    }
-                }
-            },
-        });
-    }
-    Ok(out)
-}
-
-fn as_pipe(e: &Element) -> Option<&Pipe> {
-    match e {
-        Element::Pipe(p) => Some(p),
-        _ => None,
     }
 }

@@ -3,7 +3,7 @@
 
 use super::eval::State;
 use super::uncertainty::{self, Sources};
-use super::{Line, Resolved};
+use super::{Line, Resolved, Role};
 use crate::band::Band;
 use crate::error::{Result, check};
 use crate::fluid::Fluid;
@@ -23,16 +23,20 @@ pub enum ElementKind {
     Rise,
     /// Rated equipment.
     Equipment,
+    /// An abrupt change of section the route implies between two elements of different
+    /// bore with no contraction or expansion element of its own.
+    SectionChange,
 }
 
 impl ElementKind {
-    /// `"pipe"`, `"fitting"`, `"rise"` or `"equipment"`.
+    /// `"pipe"`, `"fitting"`, `"rise"`, `"equipment"` or `"section_change"`.
     pub fn name(self) -> &'static str {
         match self {
             ElementKind::Pipe => "pipe",
             ElementKind::Fitting => "fitting",
             ElementKind::Rise => "rise",
             ElementKind::Equipment => "equipment",
+            ElementKind::SectionChange => "section_change",
         }
     }
 }
@@ -44,10 +48,14 @@ pub struct ElementResult {
     pub kind: ElementKind,
     /// A label: the fitting's or equipment's name, "pipe" or "rise".
     pub label: String,
-    /// Mean velocity in the element's bore, m/s (NaN for rises and rated drops).
-    pub velocity: f64,
-    /// Reynolds number in that bore (NaN where there is none).
-    pub reynolds: f64,
+    /// Index of the line element this row stands for; `None` for an abrupt change of
+    /// section the route implies between two elements.
+    pub element: Option<usize>,
+    /// Mean velocity in the element's bore, m/s (signed; `None` for rises and rated drops,
+    /// which have no bore of their own).
+    pub velocity: Option<f64>,
+    /// Reynolds number in that bore (`None` where there is no bore).
+    pub reynolds: Option<f64>,
     /// Flow regime (pipes).
     pub regime: Option<Regime>,
     /// Darcy friction factor (pipes).
@@ -95,6 +103,8 @@ pub struct LineResult {
     pub elements: Vec<ElementResult>,
     /// Union of the elements' warnings and the line's own (gas, cavitation).
     pub warnings: Warnings,
+    /// What each warning found, in words (the element, the values, the likely cause).
+    pub messages: Vec<String>,
     /// Band of head_loss, m.
     pub head_loss_band: Band,
     /// Band of pressure_loss, Pa.
@@ -139,33 +149,37 @@ impl Line {
             .fold(0.0, |acc, s| acc + (s.head_loss + s.static_head));
         let slope: f64 = states.iter().map(|s| s.dhead_dflow).sum::<f64>() * dq;
         let mut warnings = gas_warn;
+        let mut messages: Vec<String> = Vec::new();
+        for (w, m) in &self.notes {
+            warnings |= *w;
+            messages.push(m.clone());
+        }
         // Grade line: total pressure falls by ρg(loss + rise); static = total − ½ρV².
-        let first_v = states
-            .iter()
-            .map(|s| s.velocity)
-            .find(|v| v.is_finite())
-            .unwrap_or(0.0);
+        let first_v = states.iter().find_map(|s| s.velocity).unwrap_or(0.0);
         let mut total = inlet.map(|p| p + 0.5 * work.density * first_v * first_v);
         let mut last_v = first_v;
         let mut elements = Vec::with_capacity(states.len());
         let sources = Sources::of(self);
+        let mut terms = sources.zero_terms();
         for (i, s) in states.iter().enumerate() {
-            if s.velocity.is_finite() {
-                last_v = s.velocity;
+            if let Some(v) = s.velocity {
+                last_v = v;
             }
             total = total.map(|t| t - rho_g * (s.head_loss + s.static_head));
             let pressure_out = total.map(|t| t - 0.5 * work.density * last_v * last_v);
             let mut w = s.warnings;
-            if let (Some(p), Some(pv)) = (pressure_out, work.vapour_pressure) {
-                if p < pv {
-                    w.insert(Warnings::BELOW_VAPOUR_PRESSURE);
-                }
+            // No vapour pressure compares as −∞. Written as a select rather than a match on
+            // both options, so that no branch reads an absent option's payload (memcheck
+            // reports such speculated comparisons).
+            let pv = work.vapour_pressure.unwrap_or(f64::NEG_INFINITY);
+            if pressure_out.is_some_and(|p| p < pv) {
+                w.insert(Warnings::BELOW_VAPOUR_PRESSURE);
             }
             warnings |= w;
-            elements.push(self.element_result(&sources, i, s, &work, pressure_out, w));
+            let bands = sources.element_bands(self, i, s, &work, &mut terms);
+            elements.push(self.element_result(i, s, bands, pressure_out, w));
         }
-        let bands =
-            uncertainty::line_bands(self, &sources, &states, &work, head_loss, required_head);
+        let bands = uncertainty::line_bands(self, &sources, terms, &work, head_loss, required_head);
         Ok(LineResult {
             flow,
             head_loss,
@@ -177,6 +191,7 @@ impl Line {
             inlet_pressure: inlet,
             outlet_pressure: elements.last().and_then(|e| e.pressure_out),
             warnings,
+            messages,
             pressure_loss_band: bands.pressure_loss,
             required_head_band: bands.required_head,
             head_loss_band: bands.head_loss,
@@ -186,31 +201,34 @@ impl Line {
 
     fn element_result(
         &self,
-        sources: &Sources,
         i: usize,
         s: &State,
-        fluid: &Fluid,
+        (head_loss_band, friction_factor_band): (Band, Option<Band>),
         pressure_out: Option<f64>,
         warnings: Warnings,
     ) -> ElementResult {
         let (kind, label) = match &self.resolved[i] {
             Resolved::Pipe { .. } => (ElementKind::Pipe, "pipe".to_string()),
-            Resolved::Fitting {
-                name, equipment, ..
-            } => (
-                if *equipment {
-                    ElementKind::Equipment
-                } else {
-                    ElementKind::Fitting
+            Resolved::Fitting { name, role, .. } => (
+                match role {
+                    Role::Fitting => ElementKind::Fitting,
+                    Role::Equipment => ElementKind::Equipment,
+                    Role::Abrupt => ElementKind::SectionChange,
                 },
                 name.clone(),
             ),
             Resolved::Rise(_) => (ElementKind::Rise, "rise".to_string()),
             Resolved::Drop { name, .. } => (ElementKind::Equipment, name.clone()),
         };
+        let warnings = if self.origin[i].is_none() {
+            warnings | Warnings::BORE_CHANGE_WITHOUT_TRANSITION
+        } else {
+            warnings
+        };
         ElementResult {
             kind,
             label,
+            element: self.origin[i],
             velocity: s.velocity,
             reynolds: s.reynolds,
             regime: s.regime,
@@ -221,8 +239,8 @@ impl Line {
             static_head: s.static_head,
             pressure_out,
             warnings,
-            head_loss_band: sources.element_band(self, i, s, fluid),
-            friction_factor_band: sources.friction_factor_band(self, i, s, fluid),
+            head_loss_band,
+            friction_factor_band,
         }
     }
 }

@@ -101,10 +101,13 @@ impl Line {
         } else {
             0.0
         };
-        if sign < 0.0 && self.blocks_reverse_flow() {
-            return Err(Error::no_solution(format!(
-                "head {head} m is below the static head {h0} m, which would reverse the flow through a check valve"
-            )));
+        if sign < 0.0 {
+            if let Some(i) = self.blocking_row() {
+                return Err(Error::no_solution(format!(
+                    "head {head} m is below the static head {h0} m: {}",
+                    self.reverse_blocked_reason(i)
+                )));
+            }
         }
         let g = |q: f64| self.required_head(fluid, q).map(|(h, d)| (h - head, d));
         let (flow, iterations) = if sign == 0.0 {
@@ -384,6 +387,19 @@ impl Line {
         let (_, slope) = self.required_head(fluid, flow)?;
         let (flow_band, head_band) =
             uncertainty::operating_point_bands(self, fluid, flow, head, slope, dpump)?;
+        let values = [
+            ("flow", flow),
+            ("head", head),
+            ("flow band", flow_band.low),
+            ("flow band", flow_band.high),
+            ("head band", head_band.low),
+            ("head band", head_band.high),
+        ];
+        if let Some((name, v)) = values.iter().find(|(_, v)| !v.is_finite()) {
+            return Err(Error::no_solution(format!(
+                "the operating point's {name} is not finite ({v}): the pump curve's heads or the line's losses are too large to combine in double precision"
+            )));
+        }
         Ok(OperatingPoint {
             flow,
             head,

@@ -14,7 +14,7 @@
 //! term's shift (an input whose mean is not its nominal value).
 
 use super::eval::{Perturbation, State};
-use super::{Element, Line, LineOptions, Resolved};
+use super::{Element, Line, LineOptions, Resolved, Role};
 use crate::band::{Band, Source, Term, log_uniform};
 use crate::error::{Error, Result, check};
 use crate::fluid::Fluid;
@@ -25,6 +25,7 @@ use rand::rngs::StdRng;
 use rand::{Rng, SeedableRng};
 use rayon::prelude::*;
 use serde::{Deserialize, Serialize};
+use std::borrow::Cow;
 use std::collections::HashMap;
 
 /// Source numbers shared by every line.
@@ -75,6 +76,15 @@ pub(crate) fn roughness_input(
     }
 }
 
+/// `name` as the catalogue's own static string when it is one of `known` (so sources
+/// clone without allocating), else owned.
+fn static_name(name: &str, known: &[&'static str]) -> Cow<'static, str> {
+    known
+        .iter()
+        .find(|k| **k == name)
+        .map_or_else(|| Cow::Owned(name.to_string()), |k| Cow::Borrowed(*k))
+}
+
 /// The sources of one line, numbered: the four shared ones first, then each roughness
 /// and each own K or rating in route order of first appearance.
 pub(crate) struct Sources {
@@ -105,7 +115,13 @@ impl Sources {
             list.push(s);
             (list.len() - 1) as u32
         };
-        for (i, (r, e)) in line.resolved.iter().zip(&line.elements).enumerate() {
+        for (i, r) in line.resolved.iter().enumerate() {
+            // The line element this row stands for; an implied change of section is
+            // named after the element it stands before.
+            let element = line.origin[i]
+                .or_else(|| line.origin[i + 1..].iter().find_map(|o| *o))
+                .unwrap_or(0);
+            let e = line.origin[i].map(|j| &line.elements[j]);
             match (r, e) {
                 (
                     Resolved::Pipe {
@@ -125,25 +141,51 @@ impl Sources {
                         Some(m) => match materials.get(m) {
                             Some(&id) => id,
                             None => {
-                                let id = push(&mut list, Source::Material(m.to_string()));
+                                let id = push(
+                                    &mut list,
+                                    Source::Material(static_name(m, &crate::roughness::names())),
+                                );
                                 materials.insert(m, id);
                                 id
                             }
                         },
-                        None => push(&mut list, Source::PipeRoughness { element: i }),
+                        None => push(&mut list, Source::PipeRoughness { element }),
                     };
                 }
                 (
                     Resolved::Fitting {
-                        equipment: false, ..
+                        role: Role::Abrupt,
+                        name,
+                        ..
                     },
-                    Element::Fitting(f),
+                    _,
+                ) if uo.fittings => {
+                    own[i] = push(
+                        &mut list,
+                        Source::FittingK {
+                            element,
+                            name: Cow::Owned(name.clone()),
+                        },
+                    );
+                }
+                (
+                    Resolved::Fitting {
+                        role: Role::Fitting,
+                        ..
+                    },
+                    Some(Element::Fitting(f)),
                 ) if uo.fittings => {
                     own[i] = match f.catalogue_name() {
                         Some(name) => match entries.get(name) {
                             Some(&id) => id,
                             None => {
-                                let id = push(&mut list, Source::CatalogueK(name.to_string()));
+                                let id = push(
+                                    &mut list,
+                                    Source::CatalogueK(static_name(
+                                        name,
+                                        &crate::fitting::Fitting::catalogue(),
+                                    )),
+                                );
                                 entries.insert(name, id);
                                 id
                             }
@@ -151,15 +193,15 @@ impl Sources {
                         None => push(
                             &mut list,
                             Source::FittingK {
-                                element: i,
-                                name: f.name(),
+                                element,
+                                name: Cow::Borrowed(f.method().name()),
                             },
                         ),
                     };
                 }
                 (
                     Resolved::Fitting {
-                        equipment: true,
+                        role: Role::Equipment,
                         name,
                         ..
                     }
@@ -169,7 +211,7 @@ impl Sources {
                     own[i] = push(
                         &mut list,
                         Source::Equipment {
-                            element: i,
+                            element,
                             name: name.clone(),
                         },
                     );
@@ -228,8 +270,8 @@ impl Sources {
                 shift: f_rr * shift,
             },
         );
-        let (Resolved::Pipe { pipe, geometry, .. }, Some(f0)) =
-            (&line.resolved[i], s.friction_factor)
+        let (Resolved::Pipe { pipe, geometry, .. }, Some(f0), Some(re)) =
+            (&line.resolved[i], s.friction_factor, s.reynolds)
         else {
             return tangent;
         };
@@ -241,10 +283,10 @@ impl Sources {
             laminar_constant: geometry.c * scale,
             ..line.options.friction
         };
-        let re_t = s.reynolds * scale;
+        let re_t = re * scale;
         let half = P95_RECT * 3f64.sqrt() * s.roughness_u;
         let f_at = |dl: f64| {
-            crate::friction::darcy_factor(re_t, pipe.roughness * dl.exp() / geometry.dt, &o)
+            crate::friction::darcy_factor(re_t, pipe.roughness * math::exp(dl) / geometry.dt, &o)
                 .map(|r| r.f)
         };
         match (f_at(shift - half), f_at(shift + half)) {
@@ -266,12 +308,26 @@ impl Sources {
         i: usize,
         s: &State,
         fluid: &Fluid,
+        f: impl FnMut(u32, Term),
+    ) {
+        let rough = (self.rough[i] != NONE).then(|| self.roughness_terms(line, i, s).0);
+        self.element_terms_with(line, i, s, fluid, rough, f);
+    }
+
+    /// As [`Sources::element_terms`] with the roughness term already worked out.
+    fn element_terms_with(
+        &self,
+        line: &Line,
+        i: usize,
+        s: &State,
+        fluid: &Fluid,
+        rough: Option<Term>,
         mut f: impl FnMut(u32, Term),
     ) {
         let uo = &line.options.uncertainty;
         f(MODEL, Term::of(s.sens.model * s.model_u));
-        if self.rough[i] != NONE {
-            f(self.rough[i], self.roughness_terms(line, i, s).0);
+        if let Some(t) = rough {
+            f(self.rough[i], t);
         }
         f(DIAMETER, Term::of(s.sens.diameter * uo.diameter));
         if uo.fluid {
@@ -316,45 +372,58 @@ impl Sources {
         )
     }
 
-    /// The band of one element's head loss.
-    pub(crate) fn element_band(&self, line: &Line, i: usize, s: &State, fluid: &Fluid) -> Band {
-        let mut terms: Vec<(Source, Term)> = Vec::with_capacity(6);
-        self.element_terms(line, i, s, fluid, |k, t| {
-            if t.u != 0.0 {
-                terms.push((self.list[k as usize].clone(), t));
-            }
-        });
-        Band::from_terms(s.head_loss, terms)
+    /// A zero term per source.
+    pub(crate) fn zero_terms(&self) -> Vec<Term> {
+        vec![Term::default(); self.len()]
     }
 
-    /// The band of one pipe's friction factor, if it has one.
-    pub(crate) fn friction_factor_band(
+    /// The bands of element `i`'s head loss and (pipes) friction factor, adding the
+    /// element's head-loss terms into `acc` on the way (each term worked out once).
+    pub(crate) fn element_bands(
         &self,
         line: &Line,
         i: usize,
         s: &State,
         fluid: &Fluid,
-    ) -> Option<Band> {
-        let f = s.friction_factor?;
+        acc: &mut [Term],
+    ) -> (Band, Option<Band>) {
         let uo = &line.options.uncertainty;
-        let (f_re, f_rr) = s.f_sens;
-        let fl = if uo.fluid { 1.0 } else { 0.0 };
-        let mut terms = vec![
-            (Source::FrictionModel, Term::of(f * s.model_u)),
-            (Source::Diameter, Term::of(-(f_re + f_rr) * uo.diameter)),
-            (
-                Source::Density,
-                Term::of(f_re * fluid.density_rel_uncertainty * fl),
-            ),
-            (
-                Source::Viscosity,
-                Term::of(-f_re * fluid.viscosity_rel_uncertainty * fl),
-            ),
-        ];
-        if let Some((k, _)) = self.roughness_of(i) {
-            terms.push((self.list[k].clone(), self.roughness_terms(line, i, s).1));
-        }
-        Some(Band::from_terms(f, terms))
+        let rough = (self.rough[i] != NONE).then(|| self.roughness_terms(line, i, s));
+        // At most six sources act on one element: gathered on the stack.
+        let mut mine = [(0u32, Term::default()); 6];
+        let mut n = 0;
+        self.element_terms_with(line, i, s, fluid, rough.map(|r| r.0), |k, t| {
+            acc[k as usize] = acc[k as usize].plus(t);
+            if t.u != 0.0 {
+                mine[n] = (k, t);
+                n += 1;
+            }
+        });
+        let head = Band::from_terms(
+            s.head_loss,
+            mine[..n]
+                .iter()
+                .map(|&(k, t)| (self.list[k as usize].clone(), t)),
+        );
+        let friction = s.friction_factor.map(|f| {
+            let (f_re, f_rr) = s.f_sens;
+            let fl = if uo.fluid { 1.0 } else { 0.0 };
+            let shared = [
+                (Source::FrictionModel, Term::of(f * s.model_u)),
+                (Source::Diameter, Term::of(-(f_re + f_rr) * uo.diameter)),
+                (
+                    Source::Density,
+                    Term::of(f_re * fluid.density_rel_uncertainty * fl),
+                ),
+                (
+                    Source::Viscosity,
+                    Term::of(-f_re * fluid.viscosity_rel_uncertainty * fl),
+                ),
+            ];
+            let own = rough.map(|r| (self.list[self.rough[i] as usize].clone(), r.1));
+            Band::from_terms(f, shared.into_iter().chain(own))
+        });
+        (head, friction)
     }
 }
 
@@ -365,18 +434,17 @@ pub(crate) struct LineBands {
     pub required_head: Band,
 }
 
-/// Bands of the totals from the element states (`fluid` the working fluid, `head_loss`
-/// and `required_head` the nominal totals).
+/// Bands of the totals from the head-loss terms `acc` gathered by
+/// [`Sources::element_bands`] (`fluid` the working fluid, `head_loss` and
+/// `required_head` the nominal totals).
 pub(crate) fn line_bands(
     line: &Line,
     sources: &Sources,
-    states: &[State],
+    mut acc: Vec<Term>,
     fluid: &Fluid,
     head_loss: f64,
     required_head: f64,
 ) -> LineBands {
-    let mut acc = vec![Term::default(); sources.len()];
-    sources.accumulate(line, states.iter().enumerate(), fluid, &mut acc);
     let head = sources.band(head_loss, &acc);
     let rho_g = fluid.density * STANDARD_GRAVITY;
     // The pressure loss ρ·g·h also moves with ρ directly.

@@ -17,6 +17,7 @@ SI: Dict[str, str] = {
     "flow": "m3/s",
     "pressure": "Pa",
     "length": "m",
+    "distance": "m",
     "head": "m",
     "velocity": "m/s",
     "viscosity": "Pa*s",
@@ -41,7 +42,7 @@ FIELDS: Dict[str, str] = {
     "pressure": "pressure",
     "vapour_pressure": "pressure",
     "velocity": "velocity",
-    "length": "length",
+    "length": "distance",
     "diameter": "length",
     "bore": "length",
     "roughness": "length",
@@ -52,7 +53,7 @@ FIELDS: Dict[str, str] = {
     "min_inside_diameter": "length",
     "wall": "length",
     "width": "length",
-    "height": "length",
+    "height": "distance",
     "outer": "length",
     "inner": "length",
     "major": "length",
@@ -78,8 +79,8 @@ class display:
 
     ``hydrograde.display(flow="L/s", pressure="kPa", length="mm", head="m")`` changes
     them from then on; ``with hydrograde.display(flow="m3/h"): ...`` changes them inside
-    the block only. Dimensions: ``flow``, ``pressure``, ``length`` (bores, lengths,
-    roughness), ``head``, ``velocity``, ``viscosity``, ``temperature``; names as
+    the block only. Dimensions: ``flow``, ``pressure``, ``length`` (bores, diameters,
+    walls, roughness), ``distance`` (run lengths and rises), ``head``, ``velocity``, ``viscosity``, ``temperature``; names as
     :func:`hydrograde.unit_names`. An unknown unit or one of another dimension raises
     UnknownNameError / InvalidInputError naming the setting. Attributes stay SI.
     """

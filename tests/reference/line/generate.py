@@ -8,7 +8,9 @@ Everything is written out here with mpmath at 30 digits, formulas visible:
               t = (Re - 2300)/(4000 - 2300)
   K fitting   h = K V|V| / (2 g) on the velocity of the bore it refers to
   3-K         K = K1/Re + Ki (1 + Kd / D_in^0.3), D_in the bore in inches (Darby 2001)
-  expansion   K = (1 - (d1/d2)^2)^2 on the inlet velocity (Borda-Carnot)
+  expansion   K = (1 - (d1/d2)^2)^2 on the inlet velocity (Borda-Carnot); passed
+              backwards it is a sudden contraction, K = 0.5 (1 - (d1/d2)^2) on the same
+              (small-bore) velocity (Crane TP-410, 1988, from memory)
   rise        + dz
   g           9.80665 m/s^2 (standard gravity)
 
@@ -85,7 +87,8 @@ def main_line(q):
     h = k_loss(q, mp.mpf("0.5"), DA)
     h += pipe(q, DA, mp.mpf(120), mp.mpf("4.5e-5"))
     h += three_k(q, mp.mpf(800), mp.mpf("0.14"), mp.mpf("4.0"), DA)
-    h += k_loss(q, (1 - (DA / DB) ** 2) ** 2, DA)
+    forward, backward = (1 - (DA / DB) ** 2) ** 2, (1 - (DA / DB) ** 2) / 2
+    h += k_loss(q, forward if q >= 0 else backward, DA)
     h += pipe(q, DB, mp.mpf(250), mp.mpf("1.5e-6"))
     h += mp.mpf("12.5")
     h += k_loss(q, mp.mpf(1), DB)
