@@ -1,11 +1,11 @@
 //! Sets the SONAME of the shared library to `libhydrograde.so.<abi>`, so programs bind
 //! to an ABI version rather than to one release. The ABI version is `HG_ABI_VERSION` in
-//! src/meta.rs (read here, so there is one number; meta.rs checks it got the same).
+//! src/version.rs (read here, so there is one number; version.rs checks it got the same).
 
 fn main() {
     println!("cargo:rerun-if-changed=build.rs");
-    println!("cargo:rerun-if-changed=src/meta.rs");
-    let meta = std::fs::read_to_string("src/meta.rs").unwrap_or_default();
+    println!("cargo:rerun-if-changed=src/version.rs");
+    let meta = std::fs::read_to_string("src/version.rs").unwrap_or_default();
     let abi = meta
         .lines()
         .find_map(|l| l.strip_prefix("pub const HG_ABI_VERSION: u32 = "))

@@ -10,7 +10,7 @@ cd "$root"
 export CARGO_BUILD_JOBS="${CARGO_BUILD_JOBS:-2}"
 cargo build -q --release -p hydrograde-capi
 # The library's SONAME is libhydrograde.so.<abi>: give it that name beside the build.
-abi="$(sed -n 's/^pub const HG_ABI_VERSION: u32 = \([0-9]*\);$/\1/p' capi/src/meta.rs)"
+abi="$(sed -n 's/^pub const HG_ABI_VERSION: u32 = \([0-9]*\);$/\1/p' capi/src/version.rs)"
 ln -sf libhydrograde.so "target/release/libhydrograde.so.$abi"
 out="$root/target/capi-demo"
 mkdir -p "$out"

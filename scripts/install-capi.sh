@@ -15,8 +15,8 @@ prefix="$(cd "$prefix" && pwd)"
 version="$(sed -n 's/^version = "\(.*\)"/\1/p' "$root/Cargo.toml" | head -1)"
 major="${version%%.*}"
 # The SONAME's number: HG_ABI_VERSION (counts incompatible C ABI changes while 0.x).
-abi="$(sed -n 's/^pub const HG_ABI_VERSION: u32 = \([0-9]*\);$/\1/p' "$root/capi/src/meta.rs")"
-[[ -n "$abi" ]] || { echo "install-capi: HG_ABI_VERSION not found in capi/src/meta.rs" >&2; exit 1; }
+abi="$(sed -n 's/^pub const HG_ABI_VERSION: u32 = \([0-9]*\);$/\1/p' "$root/capi/src/version.rs")"
+[[ -n "$abi" ]] || { echo "install-capi: HG_ABI_VERSION not found in capi/src/version.rs" >&2; exit 1; }
 rel="$target/release"
 for f in libhydrograde.so libhydrograde.a; do
   [[ -f "$rel/$f" ]] || { echo "install-capi: $rel/$f missing; build first" >&2; exit 1; }

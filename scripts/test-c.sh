@@ -67,7 +67,7 @@ if [ ! -x "$py" ]; then
 fi
 
 version="$(sed -n 's/^version = "\(.*\)"/\1/p' Cargo.toml | head -1)"
-abi="$(sed -n 's/^pub const HG_ABI_VERSION: u32 = \([0-9]*\);$/\1/p' capi/src/meta.rs)"
+abi="$(sed -n 's/^pub const HG_ABI_VERSION: u32 = \([0-9]*\);$/\1/p' capi/src/version.rs)"
 echo "hydrograde C ABI $version"
 
 # ---- build ----
@@ -99,6 +99,18 @@ check_coverage() {
   return $missing
 }
 run "the C tests call every function of the header" check_coverage
+# The index at the top of the header names every function (by name or by an hg_*_ family).
+check_index() {
+  local f missing=0 index
+  index="$(sed -n '/^ \* Index/,/^ \* Safety/p' "$header")"
+  for f in $(grep -oE '\bhg_[a-z0-9_]+\(' "$header" | tr -d '(' | sort -u); do
+    grep -qE "\b$f\b" <<< "$index" && continue
+    grep -qE "\b${f%_*}_\*" <<< "$index" || grep -qE "\b${f%_*_*}_\*" <<< "$index" ||
+      { echo "the header's index does not name $f"; missing=1; }
+  done
+  return $missing
+}
+run "the header's index names every function" check_index
 
 # ---- install ----
 rm -rf "$prefix"
@@ -133,7 +145,7 @@ grep -h -E '^(bitwise|test_)' "$log" | sort -u | sed 's/^/    /'
 
 # One thread: the library then starts no worker pool, whose threads' storage valgrind
 # would otherwise report as possibly lost at exit.
-vg=(env HYDROGRADE_THREADS=1 valgrind --quiet --error-exitcode=97 --leak-check=full --errors-for-leak-kinds=definite,indirect
+vg=(env HYDROGRADE_THREADS=1 valgrind --quiet --suppressions=tests/c/valgrind.supp --error-exitcode=97 --leak-check=full --errors-for-leak-kinds=definite,indirect
     --show-leak-kinds=definite,indirect)
 run "valgrind: C test, zero errors and leaks" "${vg[@]}" "$out/test_c" "$out/reference.txt" "$version"
 run "valgrind: C line test, zero errors and leaks" "${vg[@]}" "$out/test_line" "$out/reference.txt"

@@ -28,6 +28,45 @@
  *  - The hydro_* exports of the DLL (stdcall on 32-bit Windows, ANSI text) serve the
  *    spreadsheet module capi/excel/hydrograde.bas and are not declared here.
  *
+ * Index (the header follows this order)
+ *  Errors     HG_OK, HG_ERR_*; hg_status_name, hg_last_error
+ *  Friction   HG_CORRELATION_*, HG_REGIME_*, HG_TRANSITION_*, hg_friction_options,
+ *             hg_friction; hg_friction_options_default, hg_darcy_factor,
+ *             hg_darcy_factor_full, hg_darcy_factor_opts, hg_darcy_factor_batch,
+ *             hg_correlation_name, hg_correlation_from_name, hg_correlation_validity,
+ *             hg_regime_name, hg_transition_limits
+ *  Fluids     hg_fluid (handle); hg_water, hg_air, hg_water_vapour_pressure,
+ *             hg_water_saturation_temperature, hg_fluid_water, hg_fluid_air,
+ *             hg_fluid_liquid, hg_fluid_gas, hg_fluid_with_uncertainty,
+ *             hg_fluid_with_vapour_pressure, hg_fluid_properties, hg_fluid_free
+ *  Sections   HG_SECTION_*; hg_section_properties, hg_turbulent_diameter
+ *  Fittings   hg_fitting_k, hg_fitting_catalogue_name
+ *  Roughness and pipe sizes
+ *             hg_roughness, hg_roughness_material_name, hg_roughness_aged,
+ *             hg_pipe_size, hg_pipe_size_at_least, hg_pipe_table_schedule,
+ *             hg_pipe_table_nominal
+ *  Pipes      hg_pipe_flow; hg_pipe_head_loss, hg_pipe_head_loss_batch,
+ *             hg_duct_flow_state, hg_reynolds
+ *  Lines      hg_line (handle), HG_ENTRANCE_*, HG_TURBULENT_DIAMETER_*, HG_LIMIT_*,
+ *             hg_sizing; hg_line_new, hg_line_free, hg_line_count, hg_line_add_*,
+ *             hg_line_set_*, hg_line_flow_for_head, hg_line_system_curve,
+ *             hg_line_operating_point, hg_line_required_head, hg_pump_curve_head,
+ *             hg_line_with_uniform_diameter, hg_line_size, hg_line_split_flow,
+ *             hg_line_split_flow_bands
+ *  Results    hg_line_result (handle), hg_line_totals, hg_element_result,
+ *             HG_ELEMENT_*, HG_REGIME_NONE; hg_line_evaluate, hg_line_evaluate_at,
+ *             hg_line_result_totals, hg_line_result_element, hg_line_result_label,
+ *             hg_line_result_band_source, hg_line_result_element_band_source,
+ *             hg_line_result_free
+ *  Bands      hg_uncertainty_options, hg_monte_carlo, HG_MONTE_CARLO_MAX_SAMPLES;
+ *             hg_line_system_curve_band,
+ *             hg_uncertainty_options_default, hg_line_set_uncertainty,
+ *             hg_line_monte_carlo
+ *  Units      hg_convert, hg_convert_head, hg_unit_name
+ *  Warnings   HG_WARN_*; hg_warning_name
+ *  Version    HG_VERSION_*, HG_ABI_VERSION; hg_version, hg_abi_version
+ *  Threads    HG_MAX_THREADS; hg_set_threads, hg_threads
+ *
  * Safety: results are engineering estimates with stated uncertainty (friction
  * correlations are good to about +-10 %). Designs must be checked by a competent engineer
  * against the codes and standards that apply where they are built.
@@ -153,11 +192,30 @@
 #define HG_TRANSITION_REFUSE 2
 
 /**
- * The largest number of samples `hg_line_monte_carlo` accepts: the samples are kept in
- * memory (8 bytes each), and a larger request is far more than any check needs. The
- * same limit holds in every binding.
+ * Round pipe: `a` = inside diameter (m), `b` = 0.
  */
-#define HG_MONTE_CARLO_MAX_SAMPLES 10000000
+#define HG_SECTION_CIRCLE 0
+
+/**
+ * Concentric annulus: `a` = bore of the outer pipe, `b` = outside diameter of the inner
+ * tube (m), 0 < b < a.
+ */
+#define HG_SECTION_ANNULUS 1
+
+/**
+ * Rectangle: `a` = width, `b` = height (m).
+ */
+#define HG_SECTION_RECTANGLE 2
+
+/**
+ * Ellipse: `a` = major axis, `b` = minor axis (full axes, m), b ≤ a.
+ */
+#define HG_SECTION_ELLIPSE 3
+
+/**
+ * Equilateral triangle: `a` = side (m), `b` = 0.
+ */
+#define HG_SECTION_TRIANGLE 4
 
 /**
  * A sharp-edged entrance from a large space (`r_over_d` must be 0).
@@ -184,6 +242,16 @@
  * 1976; Jones & Leung 1981).
  */
 #define HG_TURBULENT_DIAMETER_LAMINAR_EQUIVALENT 1
+
+/**
+ * Sizing limit: the line's pressure loss (friction + minor, without rises), Pa.
+ */
+#define HG_LIMIT_PRESSURE_LOSS 0
+
+/**
+ * Sizing limit: the mean velocity in the round pipes, m/s.
+ */
+#define HG_LIMIT_VELOCITY 1
 
 /**
  * A straight run (pipe or duct).
@@ -218,40 +286,11 @@
 #define HG_REGIME_NONE -1
 
 /**
- * Sizing limit: the line's pressure loss (friction + minor, without rises), Pa.
+ * The largest number of samples `hg_line_monte_carlo` accepts: the samples are kept in
+ * memory (8 bytes each), and a larger request is far more than any check needs. The
+ * same limit holds in every binding.
  */
-#define HG_LIMIT_PRESSURE_LOSS 0
-
-/**
- * Sizing limit: the mean velocity in the round pipes, m/s.
- */
-#define HG_LIMIT_VELOCITY 1
-
-/**
- * Major version of the library (from Cargo.toml; the build fails if they disagree).
- */
-#define HG_VERSION_MAJOR 0
-
-/**
- * Minor version of the library (from Cargo.toml; the build fails if they disagree).
- */
-#define HG_VERSION_MINOR 1
-
-/**
- * Patch version of the library (from Cargo.toml; the build fails if they disagree).
- */
-#define HG_VERSION_PATCH 0
-
-/**
- * ABI version: the number in the shared library's SONAME (`libhydrograde.so.<abi>`).
- * While the library is 0.x it counts the incompatible changes of the C ABI on its own
- * (from 1.0 on it will equal the major version). ABI 1 (library 0.1): `hg_line_evaluate`
- * returns an `hg_line_result` handle read by the `hg_line_result_*` accessors, and the
- * accessors that evaluated the line again (`hg_line_element`, `hg_line_element_label`,
- * `hg_line_band_source`, `hg_line_element_band_source`) are gone. A program compiled
- * against this header should check `hg_abi_version() == HG_ABI_VERSION` at start-up.
- */
-#define HG_ABI_VERSION 1
+#define HG_MONTE_CARLO_MAX_SAMPLES 10000000
 
 /**
  * The Reynolds number lies outside the published range of the correlation.
@@ -295,30 +334,30 @@
 #define HG_WARN_BORE_CHANGE_WITHOUT_TRANSITION 128
 
 /**
- * Round pipe: `a` = inside diameter (m), `b` = 0.
+ * Major version of the library (from Cargo.toml; the build fails if they disagree).
  */
-#define HG_SECTION_CIRCLE 0
+#define HG_VERSION_MAJOR 0
 
 /**
- * Concentric annulus: `a` = bore of the outer pipe, `b` = outside diameter of the inner
- * tube (m), 0 < b < a.
+ * Minor version of the library (from Cargo.toml; the build fails if they disagree).
  */
-#define HG_SECTION_ANNULUS 1
+#define HG_VERSION_MINOR 1
 
 /**
- * Rectangle: `a` = width, `b` = height (m).
+ * Patch version of the library (from Cargo.toml; the build fails if they disagree).
  */
-#define HG_SECTION_RECTANGLE 2
+#define HG_VERSION_PATCH 0
 
 /**
- * Ellipse: `a` = major axis, `b` = minor axis (full axes, m), b ≤ a.
+ * ABI version: the number in the shared library's SONAME (`libhydrograde.so.<abi>`).
+ * While the library is 0.x it counts the incompatible changes of the C ABI on its own
+ * (from 1.0 on it will equal the major version). ABI 1 (library 0.1): `hg_line_evaluate`
+ * returns an `hg_line_result` handle read by the `hg_line_result_*` accessors, and the
+ * accessors that evaluated the line again (`hg_line_element`, `hg_line_element_label`,
+ * `hg_line_band_source`, `hg_line_element_band_source`) are gone. A program compiled
+ * against this header should check `hg_abi_version() == HG_ABI_VERSION` at start-up.
  */
-#define HG_SECTION_ELLIPSE 3
-
-/**
- * Equilateral triangle: `a` = side (m), `b` = 0.
- */
-#define HG_SECTION_TRIANGLE 4
+#define HG_ABI_VERSION 1
 
 /**
  * The largest number of threads `hg_set_threads` accepts.
@@ -411,86 +450,101 @@ typedef struct hg_friction {
 } hg_friction;
 
 /**
- * The result of `hg_line_monte_carlo`: the required head sampled with the line's
- * uncertainty sources. Set `struct_size` to `sizeof(hg_monte_carlo)` before the call.
+ * The state of flow in a straight run at one flow rate. Set `struct_size` to
+ * `sizeof(hg_pipe_flow)` before the call.
  */
-typedef struct hg_monte_carlo {
+typedef struct hg_pipe_flow {
   /**
    * Size of this struct in bytes, set by the caller.
    */
   size_t struct_size;
   /**
-   * Sample mean of the required head, m.
+   * Mean velocity Q/A, m/s, signed with the flow.
    */
-  double mean;
+  double velocity;
   /**
-   * Sample standard deviation, m.
+   * Reynolds number on the hydraulic diameter, |V|·D_h·ρ/μ.
    */
-  double std_dev;
+  double reynolds;
   /**
-   * 2.5 % quantile, m (the low end of the 95 % probabilistically symmetric interval).
+   * Darcy friction factor; 0 at zero flow, where it is undefined (`regime` is then
+   * laminar).
    */
-  double low;
+  double friction_factor;
   /**
-   * 97.5 % quantile, m.
+   * Head loss, m of the flowing fluid, signed with the flow.
    */
-  double high;
+  double head_loss;
   /**
-   * Number of samples drawn.
+   * ∂(head loss)/∂Q, s/m² (continuous through zero flow and the transition).
    */
-  size_t samples;
-} hg_monte_carlo;
+  double dhead_dflow;
+  /**
+   * Flow regime, `HG_REGIME_*`.
+   */
+  int32_t regime;
+  /**
+   * Warning bits, `HG_WARN_*`.
+   */
+  uint32_t warnings;
+} hg_pipe_flow;
 
 /**
- * Which uncertainty sources the bands of a line include, and their sizes (relative
- * standard uncertainties, k = 1). Fill it with `hg_uncertainty_options_default`.
+ * A standard size chosen by `hg_line_size`: zero everywhere when `found` is 0.
  */
-typedef struct hg_uncertainty_options {
+typedef struct hg_size_choice {
   /**
-   * Size of this struct in bytes, set by `hg_uncertainty_options_default`.
+   * 1 when a standard size was found, else 0.
+   */
+  int32_t found;
+  /**
+   * Nominal size as printed, NUL-terminated (e.g. "1-1/2").
+   */
+  char nominal[16];
+  /**
+   * Inside diameter, m.
+   */
+  double inside_diameter;
+  /**
+   * Velocity in it, m/s.
+   */
+  double velocity;
+  /**
+   * Pressure loss of the line with it, Pa.
+   */
+  double pressure_loss;
+  /**
+   * Lower end of the pressure-loss band, Pa.
+   */
+  double pressure_loss_low;
+  /**
+   * Upper end of the pressure-loss band, Pa.
+   */
+  double pressure_loss_high;
+} hg_size_choice;
+
+/**
+ * The answer of `hg_line_size`. Set `struct_size` to `sizeof(hg_sizing)` first.
+ */
+typedef struct hg_sizing {
+  /**
+   * Size of this struct in bytes, set by the caller.
    */
   size_t struct_size;
   /**
-   * 1 to include the friction correlation's model uncertainty, else 0.
+   * The smallest inside diameter that meets the limit at the nominal values, m.
    */
-  int32_t friction_model;
+  double min_inside_diameter;
   /**
-   * 1 to include wall roughness, else 0.
+   * The smallest standard size that meets it at the nominal values.
    */
-  int32_t roughness;
+  struct hg_size_choice standard;
   /**
-   * 1 to include the fluid's density and viscosity uncertainties, else 0.
+   * The smallest standard size that still meets it at the unfavourable end of the
+   * band (the high end of the pressure-loss band).
    */
-  int32_t fluid;
-  /**
-   * 1 to include fitting K spreads, else 0.
-   */
-  int32_t fittings;
-  /**
-   * 1 to include equipment spreads, else 0.
-   */
-  int32_t equipment;
-  /**
-   * Model uncertainty of turbulent flow in round pipe.
-   */
-  double turbulent_model;
-  /**
-   * Model uncertainty of laminar flow.
-   */
-  double laminar_model;
-  /**
-   * Model uncertainty of turbulent flow in non-circular ducts.
-   */
-  double non_circular_model;
-  /**
-   * Relative uncertainty of roughness where a pipe states no range.
-   */
-  double roughness_default;
-  /**
-   * Relative uncertainty of every bore (manufacturing tolerance).
-   */
-  double diameter;
-} hg_uncertainty_options;
+  struct hg_size_choice standard_at_band;
+} hg_sizing;
 
 /**
  * The totals of a line evaluated at one flow, from `hg_line_result_totals`. Set
@@ -692,144 +746,206 @@ typedef struct hg_element_result {
 } hg_element_result;
 
 /**
- * A standard size chosen by `hg_line_size`: zero everywhere when `found` is 0.
+ * Which uncertainty sources the bands of a line include, and their sizes (relative
+ * standard uncertainties, k = 1). Fill it with `hg_uncertainty_options_default`.
  */
-typedef struct hg_size_choice {
+typedef struct hg_uncertainty_options {
   /**
-   * 1 when a standard size was found, else 0.
+   * Size of this struct in bytes, set by `hg_uncertainty_options_default`.
    */
-  int32_t found;
+  size_t struct_size;
   /**
-   * Nominal size as printed, NUL-terminated (e.g. "1-1/2").
+   * 1 to include the friction correlation's model uncertainty, else 0.
    */
-  char nominal[16];
+  int32_t friction_model;
   /**
-   * Inside diameter, m.
+   * 1 to include wall roughness, else 0.
    */
-  double inside_diameter;
+  int32_t roughness;
   /**
-   * Velocity in it, m/s.
+   * 1 to include the fluid's density and viscosity uncertainties, else 0.
    */
-  double velocity;
+  int32_t fluid;
   /**
-   * Pressure loss of the line with it, Pa.
+   * 1 to include fitting K spreads, else 0.
    */
-  double pressure_loss;
+  int32_t fittings;
   /**
-   * Lower end of the pressure-loss band, Pa.
+   * 1 to include equipment spreads, else 0.
    */
-  double pressure_loss_low;
+  int32_t equipment;
   /**
-   * Upper end of the pressure-loss band, Pa.
+   * Model uncertainty of turbulent flow in round pipe.
    */
-  double pressure_loss_high;
-} hg_size_choice;
+  double turbulent_model;
+  /**
+   * Model uncertainty of laminar flow.
+   */
+  double laminar_model;
+  /**
+   * Model uncertainty of turbulent flow in non-circular ducts.
+   */
+  double non_circular_model;
+  /**
+   * Relative uncertainty of roughness where a pipe states no range.
+   */
+  double roughness_default;
+  /**
+   * Relative uncertainty of every bore (manufacturing tolerance).
+   */
+  double diameter;
+} hg_uncertainty_options;
 
 /**
- * The answer of `hg_line_size`. Set `struct_size` to `sizeof(hg_sizing)` first.
+ * The result of `hg_line_monte_carlo`: the required head sampled with the line's
+ * uncertainty sources. Set `struct_size` to `sizeof(hg_monte_carlo)` before the call.
  */
-typedef struct hg_sizing {
+typedef struct hg_monte_carlo {
   /**
    * Size of this struct in bytes, set by the caller.
    */
   size_t struct_size;
   /**
-   * The smallest inside diameter that meets the limit at the nominal values, m.
+   * Sample mean of the required head, m.
    */
-  double min_inside_diameter;
+  double mean;
   /**
-   * The smallest standard size that meets it at the nominal values.
+   * Sample standard deviation, m.
    */
-  struct hg_size_choice standard;
+  double std_dev;
   /**
-   * The smallest standard size that still meets it at the unfavourable end of the
-   * band (the high end of the pressure-loss band).
+   * 2.5 % quantile, m (the low end of the 95 % probabilistically symmetric interval).
    */
-  struct hg_size_choice standard_at_band;
-} hg_sizing;
-
-/**
- * The state of flow in a straight run at one flow rate. Set `struct_size` to
- * `sizeof(hg_pipe_flow)` before the call.
- */
-typedef struct hg_pipe_flow {
+  double low;
   /**
-   * Size of this struct in bytes, set by the caller.
+   * 97.5 % quantile, m.
    */
-  size_t struct_size;
+  double high;
   /**
-   * Mean velocity Q/A, m/s, signed with the flow.
+   * Number of samples drawn.
    */
-  double velocity;
-  /**
-   * Reynolds number on the hydraulic diameter, |V|·D_h·ρ/μ.
-   */
-  double reynolds;
-  /**
-   * Darcy friction factor; 0 at zero flow, where it is undefined (`regime` is then
-   * laminar).
-   */
-  double friction_factor;
-  /**
-   * Head loss, m of the flowing fluid, signed with the flow.
-   */
-  double head_loss;
-  /**
-   * ∂(head loss)/∂Q, s/m² (continuous through zero flow and the transition).
-   */
-  double dhead_dflow;
-  /**
-   * Flow regime, `HG_REGIME_*`.
-   */
-  int32_t regime;
-  /**
-   * Warning bits, `HG_WARN_*`.
-   */
-  uint32_t warnings;
-} hg_pipe_flow;
+  size_t samples;
+} hg_monte_carlo;
 
 #ifdef __cplusplus
 extern "C" {
 #endif // __cplusplus
 
 /**
- * The system curve with its 95 % band: at each of the `n` flows `flows[i]` (m³/s),
- * `nominal[i]` = the required head (m, the same value as `hg_line_system_curve`) and
- * `low[i]`, `high[i]` = the ends of its band (the band of `hg_line_evaluate`'s required
- * head at that flow). One pass over the elements per flow; uses all cores above 64
- * flows, with the same results.
- *
- * Returns `HG_OK`; the status of the first failing flow (message "element <i>: ..."),
- * with the outputs unchanged; `HG_ERR_INVALID` for `n` = 0 or a line that cannot be
- * built; `HG_ERR_NULL_POINTER`. Thread-safe (the line is only read).
- *
- * # Safety
- * `line` and `fluid` must be NULL or live handles; `flows`, `low`, `nominal` and `high`
- * NULL or valid for `n` doubles (the outputs may not overlap `flows` or each other).
+ * The name of a status code as a static string, e.g. "HG_ERR_OUT_OF_RANGE"; for a code
+ * that is not one of the `HG_*` status codes, "HG_UNKNOWN_STATUS". Never NULL, never
+ * freed. Thread-safe.
  */
-int32_t hg_line_system_curve_band(const struct hg_line *line,
-                                  const struct hg_fluid *fluid,
-                                  const double *flows,
-                                  size_t n,
-                                  double *low,
-                                  double *nominal,
-                                  double *high);
+const char *hg_status_name(int32_t status);
 
 /**
- * Treats the pipes of catalogue material `material` as independent in the bands (each
- * pipe its own roughness error, as for pipes from different supplies) when `independent`
- * is 1, or as sharing one error (the default) when 0.
+ * The message of the last failed call on the calling thread, e.g.
+ * "re = -1: must be greater than 0" (empty when the thread's last call succeeded).
  *
- * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` for a name not in the material catalogue;
- * `HG_ERR_OUT_OF_RANGE` for `independent` other than 0 or 1; `HG_ERR_NULL_POINTER`.
- * Not thread-safe for the same line (it changes the line).
+ * Copies at most `len - 1` bytes of UTF-8 and a terminating NUL into `buf` (nothing when
+ * `buf` is NULL or `len` is 0) and returns the message's full length in bytes, without
+ * the NUL, like `snprintf`: a return value ≥ `len` means the copy was cut short.
+ * Does not change the thread's last error. Thread-safe: each thread has its own message.
  *
  * # Safety
- * `line` must be NULL or a live handle; `material` NULL or a NUL-terminated string.
+ * `buf` must be NULL or valid for writing `len` bytes.
  */
-int32_t hg_line_set_material_independent(struct hg_line *line,
-                                         const char *material,
-                                         int32_t independent);
+size_t hg_last_error(char *buf,
+                     size_t len);
+
+/**
+ * Fills `opts` with the library's default friction options (Colebrook, regime limits
+ * 2300 and 4000, laminar constant 64, C¹ blend in the transitional band) and sets
+ * `opts->struct_size`.
+ *
+ * Returns `HG_OK`, or `HG_ERR_NULL_POINTER` when `opts` is NULL. Thread-safe.
+ *
+ * # Safety
+ * `opts` must be NULL or point to a writable `hg_friction_options`.
+ */
+int32_t hg_friction_options_default(struct hg_friction_options *opts);
+
+/**
+ * The Darcy friction factor `*f` at Reynolds number `re` and relative roughness
+ * `rel_roughness` = ε/D (both dimensionless), with the turbulent correlation
+ * `correlation` (`HG_CORRELATION_*`) and the default regime treatment: laminar
+ * f = 64/Re below Re 2300, the correlation above 4000, a C¹ blend between.
+ *
+ * Valid ranges: 0 < re ≤ 1e13; 0 ≤ rel_roughness ≤ 0.5 (> 0 for the fully rough law).
+ * Outside a correlation's published range the value still computes (see
+ * `hg_darcy_factor_full` for the warnings).
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE` for NaN or ±inf; `HG_ERR_OUT_OF_RANGE` for values
+ * outside the ranges or an unknown correlation; `HG_ERR_NULL_POINTER` when `f` is NULL.
+ * On error `*f` is unchanged and `hg_last_error` says why. Thread-safe.
+ *
+ * # Safety
+ * `f` must be NULL or point to a writable double.
+ */
+int32_t hg_darcy_factor(double re,
+                        double rel_roughness,
+                        int32_t correlation,
+                        double *f);
+
+/**
+ * Like `hg_darcy_factor`, and also gives `*df_dre` = ∂f/∂Re, `*df_drel_roughness` =
+ * ∂f/∂(ε/D), `*regime` (`HG_REGIME_*`) and `*warnings` (`HG_WARN_*` bits: Reynolds number
+ * or roughness outside the correlation's published range, transitional flow).
+ *
+ * Same ranges and status codes as `hg_darcy_factor`; every pointer must be non-NULL
+ * (`HG_ERR_NULL_POINTER` otherwise, with nothing written). Thread-safe.
+ *
+ * # Safety
+ * Each pointer must be NULL or point to a writable value of its type.
+ */
+int32_t hg_darcy_factor_full(double re,
+                             double rel_roughness,
+                             int32_t correlation,
+                             double *f,
+                             double *df_dre,
+                             double *df_drel_roughness,
+                             int32_t *regime,
+                             uint32_t *warnings);
+
+/**
+ * The friction factor with full options: `opts` (from `hg_friction_options_default`,
+ * then edited) chooses the correlation, the laminar constant of the section and the
+ * regime limits and treatment; the result goes to `*out` (set `out->struct_size` first).
+ *
+ * Ranges as `hg_darcy_factor`, plus: laminar_constant, laminar_limit, turbulent_limit
+ * finite and > 0, turbulent_limit ≥ laminar_limit.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`, `HG_ERR_OUT_OF_RANGE` for bad numbers or
+ * constants; `HG_ERR_NO_SOLUTION` for transitional flow with `HG_TRANSITION_REFUSE`;
+ * `HG_ERR_NULL_POINTER`; `HG_ERR_INVALID` when a `struct_size` is too small.
+ * Thread-safe.
+ *
+ * # Safety
+ * `opts` must be NULL or point to a readable `hg_friction_options`; `out` NULL or a
+ * writable `hg_friction` of at least `out->struct_size` bytes.
+ */
+int32_t hg_darcy_factor_opts(double re,
+                             double rel_roughness,
+                             const struct hg_friction_options *opts,
+                             struct hg_friction *out);
+
+/**
+ * Friction factors of `n` points: `out[i]` = the factor at `re[i]`, `rel_roughness[i]`
+ * with `correlation` (as `hg_darcy_factor`). Uses all cores above 16384 points; the
+ * results equal the scalar call's bit for bit. `out` may be the same array as an input.
+ *
+ * Returns `HG_OK`; the status of the first failing element (the message starts
+ * "element <i>: "), with `out` partly written; `HG_ERR_NULL_POINTER` for a NULL array;
+ * `HG_ERR_INVALID` for `n` = 0. Thread-safe.
+ *
+ * # Safety
+ * `re`, `rel_roughness` and `out` must be NULL or valid for `n` doubles.
+ */
+int32_t hg_darcy_factor_batch(const double *re,
+                              const double *rel_roughness,
+                              size_t n,
+                              int32_t correlation,
+                              double *out);
 
 /**
  * The `HG_CORRELATION_*` value of a correlation name: "colebrook", "haaland",
@@ -892,45 +1008,6 @@ int32_t hg_transition_limits(double re,
                              int32_t correlation,
                              double *laminar,
                              double *turbulent);
-
-/**
- * The resistance coefficient K (dimensionless) of the catalogue fitting `name` and its
- * derivative ∂K/∂Re, at Reynolds number `re` (> 0, in `bore`), for the velocity in
- * `bore` (m, > 0), next to a pipe of relative roughness `pipe_rel_roughness`
- * (0 ≤ ε/D ≤ 0.5; used by fittings whose K follows the pipe's fully rough friction
- * factor). K(Re) = k_viscous/Re + k_inertial; fitting data scatter by ±20–50 %.
- * `hg_fitting_catalogue_name` lists the names.
- *
- * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` (the message lists the catalogue);
- * `HG_ERR_NOT_FINITE`, `HG_ERR_OUT_OF_RANGE` for bad numbers; `HG_ERR_NULL_POINTER`;
- * `HG_ERR_INVALID` for a name that is not UTF-8. Thread-safe.
- *
- * # Safety
- * `name` must be NULL or a NUL-terminated string; `k` and `dk_dre` NULL or writable.
- */
-int32_t hg_fitting_k(const char *name,
-                     double re,
-                     double bore,
-                     double pipe_rel_roughness,
-                     double *k,
-                     double *dk_dre);
-
-/**
- * Copies the name of catalogue fitting number `index` (0-based, catalogue order) into
- * `buf` (at most `len - 1` bytes and a NUL) and stores its full length in `*needed`.
- *
- * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` when `index` is past the end (use it to count
- * the entries); `HG_ERR_NULL_POINTER` for a NULL `needed`, or a NULL `buf` with
- * `len` > 0; `HG_ERR_BUFFER_TOO_SMALL` when the name did not fit (the cut copy is still
- * written). Thread-safe.
- *
- * # Safety
- * `buf` must be NULL or valid for writing `len` bytes; `needed` NULL or writable.
- */
-int32_t hg_fitting_catalogue_name(size_t index,
-                                  char *buf,
-                                  size_t len,
-                                  size_t *needed);
 
 /**
  * Density (kg/m³) and dynamic viscosity (Pa·s) of liquid water at `temperature` (K) and
@@ -1109,98 +1186,312 @@ int32_t hg_fluid_with_vapour_pressure(const struct hg_fluid *fluid,
                                       struct hg_fluid **out);
 
 /**
- * Fills `opts` with the library's default friction options (Colebrook, regime limits
- * 2300 and 4000, laminar constant 64, C¹ blend in the transitional band) and sets
- * `opts->struct_size`.
+ * Geometry of a cross-section `shape` (`HG_SECTION_*`) with dimensions `a`, `b` (m; see
+ * each constant): `*area` (m²), `*wetted_perimeter` (m), `*hydraulic_diameter` = 4A/P
+ * (m) and `*laminar_constant` = f·Re of fully developed laminar flow on the hydraulic
+ * diameter (dimensionless, exact for each shape: 64 for a circle).
  *
- * Returns `HG_OK`, or `HG_ERR_NULL_POINTER` when `opts` is NULL. Thread-safe.
+ * Valid ranges: dimensions finite and > 0 (b = 0 for a circle and a triangle); annulus
+ * b < a; ellipse b ≤ a.
  *
- * # Safety
- * `opts` must be NULL or point to a writable `hg_friction_options`.
- */
-int32_t hg_friction_options_default(struct hg_friction_options *opts);
-
-/**
- * The Darcy friction factor `*f` at Reynolds number `re` and relative roughness
- * `rel_roughness` = ε/D (both dimensionless), with the turbulent correlation
- * `correlation` (`HG_CORRELATION_*`) and the default regime treatment: laminar
- * f = 64/Re below Re 2300, the correlation above 4000, a C¹ blend between.
- *
- * Valid ranges: 0 < re ≤ 1e13; 0 ≤ rel_roughness ≤ 0.5 (> 0 for the fully rough law).
- * Outside a correlation's published range the value still computes (see
- * `hg_darcy_factor_full` for the warnings).
- *
- * Returns `HG_OK`; `HG_ERR_NOT_FINITE` for NaN or ±inf; `HG_ERR_OUT_OF_RANGE` for values
- * outside the ranges or an unknown correlation; `HG_ERR_NULL_POINTER` when `f` is NULL.
- * On error `*f` is unchanged and `hg_last_error` says why. Thread-safe.
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a bad dimension or
+ * shape; `HG_ERR_INVALID` for b ≠ 0 on a one-dimension shape; `HG_ERR_NULL_POINTER`
+ * when an output is NULL (nothing is written). Thread-safe.
  *
  * # Safety
- * `f` must be NULL or point to a writable double.
+ * Each output must be NULL or point to a writable double.
  */
-int32_t hg_darcy_factor(double re,
-                        double rel_roughness,
-                        int32_t correlation,
-                        double *f);
+int32_t hg_section_properties(int32_t shape,
+                              double a,
+                              double b,
+                              double *area,
+                              double *wetted_perimeter,
+                              double *hydraulic_diameter,
+                              double *laminar_constant);
 
 /**
- * Like `hg_darcy_factor`, and also gives `*df_dre` = ∂f/∂Re, `*df_drel_roughness` =
- * ∂f/∂(ε/D), `*regime` (`HG_REGIME_*`) and `*warnings` (`HG_WARN_*` bits: Reynolds number
- * or roughness outside the correlation's published range, transitional flow).
+ * The diameter `*diameter` (m) turbulent flow in the section `shape` (`HG_SECTION_*`,
+ * dimensions `a`, `b` as for `hg_section_properties`) is computed on under `mode`
+ * (`HG_TURBULENT_DIAMETER_*`): the hydraulic diameter, or with
+ * `HG_TURBULENT_DIAMETER_LAMINAR_EQUIVALENT` for rectangles and annuli the
+ * laminar-equivalent diameter 64/C·D_h (Jones 1976; Jones & Leung 1981). Lines choose
+ * the mode with `hg_line_set_turbulent_diameter`.
  *
- * Same ranges and status codes as `hg_darcy_factor`; every pointer must be non-NULL
- * (`HG_ERR_NULL_POINTER` otherwise, with nothing written). Thread-safe.
- *
- * # Safety
- * Each pointer must be NULL or point to a writable value of its type.
- */
-int32_t hg_darcy_factor_full(double re,
-                             double rel_roughness,
-                             int32_t correlation,
-                             double *f,
-                             double *df_dre,
-                             double *df_drel_roughness,
-                             int32_t *regime,
-                             uint32_t *warnings);
-
-/**
- * The friction factor with full options: `opts` (from `hg_friction_options_default`,
- * then edited) chooses the correlation, the laminar constant of the section and the
- * regime limits and treatment; the result goes to `*out` (set `out->struct_size` first).
- *
- * Ranges as `hg_darcy_factor`, plus: laminar_constant, laminar_limit, turbulent_limit
- * finite and > 0, turbulent_limit ≥ laminar_limit.
- *
- * Returns `HG_OK`; `HG_ERR_NOT_FINITE`, `HG_ERR_OUT_OF_RANGE` for bad numbers or
- * constants; `HG_ERR_NO_SOLUTION` for transitional flow with `HG_TRANSITION_REFUSE`;
- * `HG_ERR_NULL_POINTER`; `HG_ERR_INVALID` when a `struct_size` is too small.
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a bad dimension, shape
+ * or mode; `HG_ERR_INVALID` for b ≠ 0 on a one-dimension shape; `HG_ERR_NULL_POINTER`.
  * Thread-safe.
  *
  * # Safety
- * `opts` must be NULL or point to a readable `hg_friction_options`; `out` NULL or a
- * writable `hg_friction` of at least `out->struct_size` bytes.
+ * `diameter` must be NULL or point to a writable double.
  */
-int32_t hg_darcy_factor_opts(double re,
-                             double rel_roughness,
-                             const struct hg_friction_options *opts,
-                             struct hg_friction *out);
+int32_t hg_turbulent_diameter(int32_t shape,
+                              double a,
+                              double b,
+                              int32_t mode,
+                              double *diameter);
 
 /**
- * Friction factors of `n` points: `out[i]` = the factor at `re[i]`, `rel_roughness[i]`
- * with `correlation` (as `hg_darcy_factor`). Uses all cores above 16384 points; the
- * results equal the scalar call's bit for bit. `out` may be the same array as an input.
+ * The resistance coefficient K (dimensionless) of the catalogue fitting `name` and its
+ * derivative ∂K/∂Re, at Reynolds number `re` (> 0, in `bore`), for the velocity in
+ * `bore` (m, > 0), next to a pipe of relative roughness `pipe_rel_roughness`
+ * (0 ≤ ε/D ≤ 0.5; used by fittings whose K follows the pipe's fully rough friction
+ * factor). K(Re) = k_viscous/Re + k_inertial; fitting data scatter by ±20–50 %.
+ * `hg_fitting_catalogue_name` lists the names.
  *
- * Returns `HG_OK`; the status of the first failing element (the message starts
- * "element <i>: "), with `out` partly written; `HG_ERR_NULL_POINTER` for a NULL array;
- * `HG_ERR_INVALID` for `n` = 0. Thread-safe.
+ * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` (the message lists the catalogue);
+ * `HG_ERR_NOT_FINITE`, `HG_ERR_OUT_OF_RANGE` for bad numbers; `HG_ERR_NULL_POINTER`;
+ * `HG_ERR_INVALID` for a name that is not UTF-8. Thread-safe.
  *
  * # Safety
- * `re`, `rel_roughness` and `out` must be NULL or valid for `n` doubles.
+ * `name` must be NULL or a NUL-terminated string; `k` and `dk_dre` NULL or writable.
  */
-int32_t hg_darcy_factor_batch(const double *re,
-                              const double *rel_roughness,
-                              size_t n,
-                              int32_t correlation,
-                              double *out);
+int32_t hg_fitting_k(const char *name,
+                     double re,
+                     double bore,
+                     double pipe_rel_roughness,
+                     double *k,
+                     double *dk_dre);
+
+/**
+ * Copies the name of catalogue fitting number `index` (0-based, catalogue order) into
+ * `buf` (at most `len - 1` bytes and a NUL) and stores its full length in `*needed`.
+ *
+ * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` when `index` is past the end (use it to count
+ * the entries); `HG_ERR_NULL_POINTER` for a NULL `needed`, or a NULL `buf` with
+ * `len` > 0; `HG_ERR_BUFFER_TOO_SMALL` when the name did not fit (the cut copy is still
+ * written). Thread-safe.
+ *
+ * # Safety
+ * `buf` must be NULL or valid for writing `len` bytes; `needed` NULL or writable.
+ */
+int32_t hg_fitting_catalogue_name(size_t index,
+                                  char *buf,
+                                  size_t len,
+                                  size_t *needed);
+
+/**
+ * Absolute roughness of new pipe of the catalogue material `material` (e.g.
+ * "commercial_steel"; see `hg_roughness_material_name`): `*typical`, and the quoted
+ * range `*low` to `*high`, all in m (handbook values; common practice).
+ *
+ * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` (the message lists the catalogue);
+ * `HG_ERR_INVALID` for a name not UTF-8; `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * `material` must be NULL or a NUL-terminated string; the outputs NULL or writable.
+ */
+int32_t hg_roughness(const char *material,
+                     double *typical,
+                     double *low,
+                     double *high);
+
+/**
+ * Copies the name of catalogue material number `index` (0-based) into `buf` (at most
+ * `len - 1` bytes and a NUL) and stores its full length in `*needed`.
+ *
+ * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` past the end; `HG_ERR_BUFFER_TOO_SMALL` when
+ * the name did not fit (the cut copy is still written); `HG_ERR_NULL_POINTER` for a NULL
+ * `needed`, or a NULL `buf` with `len` > 0. Thread-safe.
+ *
+ * # Safety
+ * `buf` must be NULL or valid for writing `len` bytes; `needed` NULL or writable.
+ */
+int32_t hg_roughness_material_name(size_t index,
+                                   char *buf,
+                                   size_t len,
+                                   size_t *needed);
+
+/**
+ * Roughness `*roughness` (m) after `years` of service growing linearly from `initial`
+ * (m) at `rate` (m per year): ε = ε₀ + α·t (Colebrook & White 1937 aging model).
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a negative argument;
+ * `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * `roughness` must be NULL or point to a writable double.
+ */
+int32_t hg_roughness_aged(double initial,
+                          double rate,
+                          double years,
+                          double *roughness);
+
+/**
+ * Dimensions of a standard pipe: `table` ("steel" ASME B36.10M, "stainless" ASME
+ * B36.19M, "copper" ASTM B88, "pvc" ASTM D1785), `nominal` size as printed ("2",
+ * "1-1/2", "3/4") and `schedule` or tube type ("40", "STD", "10S", "K"): outside
+ * diameter, wall thickness and inside diameter, all in m.
+ *
+ * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` for a table, size or schedule not listed (the
+ * message lists the known ones); `HG_ERR_INVALID` for a string not UTF-8;
+ * `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * The strings must be NULL or NUL-terminated; the outputs NULL or writable doubles.
+ */
+int32_t hg_pipe_size(const char *table,
+                     const char *nominal,
+                     const char *schedule,
+                     double *outside_diameter,
+                     double *wall,
+                     double *inside_diameter);
+
+/**
+ * The smallest standard pipe of `table` in `schedule` (as `hg_pipe_size`) whose inside
+ * diameter is at least `min_inside_diameter` (m, > 0): its inside diameter in
+ * `*inside_diameter` (m) and its nominal size copied into `nominal` (at most `len - 1`
+ * bytes and a NUL; full length in `*needed`).
+ *
+ * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`
+ * for a diameter ≤ 0 or larger than the table's largest; `HG_ERR_BUFFER_TOO_SMALL`
+ * when the nominal size did not fit (the diameter is still written);
+ * `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * The strings must be NULL or NUL-terminated; `nominal` NULL or valid for `len` bytes;
+ * `needed` and `inside_diameter` NULL or writable.
+ */
+int32_t hg_pipe_size_at_least(const char *table,
+                              const char *schedule,
+                              double min_inside_diameter,
+                              double *inside_diameter,
+                              char *nominal,
+                              size_t len,
+                              size_t *needed);
+
+/**
+ * Copies schedule (or tube type) number `index` (0-based, the table's order, e.g. "40",
+ * "STD", "K") of pipe `table` (as `hg_pipe_size`) into `buf` (at most `len - 1` bytes and
+ * a NUL) and stores its full length in `*needed`.
+ *
+ * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` for a table; `HG_ERR_OUT_OF_RANGE` when `index`
+ * is past the end (use it to count the schedules); `HG_ERR_BUFFER_TOO_SMALL` when the
+ * name did not fit (the cut copy is still written); `HG_ERR_INVALID` for a table name
+ * not UTF-8; `HG_ERR_NULL_POINTER` for a NULL `table` or `needed`, or a NULL `buf` with
+ * `len` > 0. Thread-safe.
+ *
+ * # Safety
+ * `table` must be NULL or NUL-terminated; `buf` NULL or valid for writing `len` bytes;
+ * `needed` NULL or writable.
+ */
+int32_t hg_pipe_table_schedule(const char *table,
+                               size_t index,
+                               char *buf,
+                               size_t len,
+                               size_t *needed);
+
+/**
+ * Copies nominal size number `index` (0-based, smallest first, as printed: "1/2", "2",
+ * "1-1/2") of pipe `table` (as `hg_pipe_size`) into `buf` (at most `len - 1` bytes and a
+ * NUL) and stores its full length in `*needed`. Not every size exists in every schedule.
+ *
+ * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` for a table; `HG_ERR_OUT_OF_RANGE` when `index`
+ * is past the end (use it to count the sizes); `HG_ERR_BUFFER_TOO_SMALL` when the name
+ * did not fit (the cut copy is still written); `HG_ERR_INVALID` for a table name not
+ * UTF-8; `HG_ERR_NULL_POINTER` for a NULL `table` or `needed`, or a NULL `buf` with
+ * `len` > 0. Thread-safe.
+ *
+ * # Safety
+ * `table` must be NULL or NUL-terminated; `buf` NULL or valid for writing `len` bytes;
+ * `needed` NULL or writable.
+ */
+int32_t hg_pipe_table_nominal(const char *table,
+                              size_t index,
+                              char *buf,
+                              size_t len,
+                              size_t *needed);
+
+/**
+ * Head loss `*head_loss` (m of fluid, signed with the flow) and its derivative
+ * `*dhead_dflow` (s/m²) of a round pipe at volumetric flow `flow` (m³/s, signed): the
+ * call a simulator's Newton loop makes. Darcy–Weisbach with the exact Colebrook
+ * friction factor, laminar f = 64/Re and a C¹ blend between Re 2300 and 4000; the loss
+ * is odd in the flow and zero at zero flow, with a continuous derivative.
+ *
+ * Pipe: inside `diameter` (m, > 0), `length` (m, > 0), absolute wall `roughness` (m,
+ * ≥ 0, at most half the diameter). Fluid: `density` (kg/m³, > 0) and dynamic
+ * `viscosity` (Pa·s, > 0), e.g. from `hg_water`.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a bad pipe or fluid;
+ * `HG_ERR_NULL_POINTER` when an output is NULL (nothing is written). Thread-safe.
+ *
+ * # Safety
+ * `head_loss` and `dhead_dflow` must be NULL or point to writable doubles.
+ */
+int32_t hg_pipe_head_loss(double diameter,
+                          double length,
+                          double roughness,
+                          double density,
+                          double viscosity,
+                          double flow,
+                          double *head_loss,
+                          double *dhead_dflow);
+
+/**
+ * The full flow state of a straight run of any section `shape` (`HG_SECTION_*`, with
+ * dimensions `a`, `b` as for `hg_section_properties`), `length` (m, > 0) and absolute
+ * `roughness` (m, ≥ 0, at most half the hydraulic diameter) at flow `flow` (m³/s,
+ * signed), for a fluid of `density` (kg/m³, > 0) and `viscosity` (Pa·s, > 0). Laminar
+ * flow uses the section's exact laminar constant; turbulent flow the hydraulic diameter
+ * (with `HG_WARN_NON_CIRCULAR_SECTION` for other shapes than a circle).
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_INVALID` for a
+ * `struct_size` too small or b ≠ 0 on a one-dimension shape; `HG_ERR_NULL_POINTER`.
+ * Thread-safe.
+ *
+ * # Safety
+ * `out` must be NULL or point to a writable `hg_pipe_flow` of `out->struct_size` bytes.
+ */
+int32_t hg_duct_flow_state(int32_t shape,
+                           double a,
+                           double b,
+                           double length,
+                           double roughness,
+                           double density,
+                           double viscosity,
+                           double flow,
+                           struct hg_pipe_flow *out);
+
+/**
+ * Reynolds number `*re` = ρ·|V|·D/μ of flow `flow` (m³/s, signed) in a round pipe of
+ * inside `diameter` (m, > 0), with V = Q/A, for a fluid of `density` (kg/m³, > 0) and
+ * `viscosity` (Pa·s, > 0): the core's `Fluid::reynolds`. (The flow state of
+ * `hg_duct_flow_state` computes |V|·D/ν and may differ from it in the last bit.)
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
+ * Thread-safe.
+ *
+ * # Safety
+ * `re` must be NULL or point to a writable double.
+ */
+int32_t hg_reynolds(double flow,
+                    double diameter,
+                    double density,
+                    double viscosity,
+                    double *re);
+
+/**
+ * Head losses and derivatives of one round pipe (as `hg_pipe_head_loss`) at `n` flows:
+ * `head_loss[i]`, `dhead_dflow[i]` at `flow[i]`. The results equal the scalar call's bit
+ * for bit. Either output may be the `flow` array itself (computed in place); the two
+ * outputs must be different arrays.
+ *
+ * Returns `HG_OK`; the status of the bad pipe or fluid; the status of the first bad
+ * flow (message "element <i>: ..."), with the outputs partly written;
+ * `HG_ERR_NULL_POINTER`; `HG_ERR_INVALID` for `n` = 0. Thread-safe.
+ *
+ * # Safety
+ * `flow`, `head_loss` and `dhead_dflow` must be NULL or valid for `n` doubles.
+ */
+int32_t hg_pipe_head_loss_batch(double diameter,
+                                double length,
+                                double roughness,
+                                double density,
+                                double viscosity,
+                                const double *flow,
+                                size_t n,
+                                double *head_loss,
+                                double *dhead_dflow);
 
 /**
  * Makes an empty line with the default options and stores it in `*out`; free it with
@@ -1376,112 +1667,6 @@ int32_t hg_line_set_inlet_pressure(struct hg_line *line,
  */
 int32_t hg_line_count(const struct hg_line *line,
                       size_t *count);
-
-/**
- * Propagates the uncertainty sources of `line` (see `hg_line_set_uncertainty`) to its
- * required head at `flow` (m³/s) by sampling (JCGM 101:2008), `samples` times (100 to
- * `HG_MONTE_CARLO_MAX_SAMPLES`) from the generator seed `seed`, into `*out`: the check
- * of the first-order band of `hg_line_evaluate`. The same seed gives the same numbers.
- * Friction model, diameter, density and viscosity are drawn normal; roughness, fitting K
- * and equipment ratings rectangular. Time grows with `samples` × elements.
- *
- * Returns `HG_OK`; `HG_ERR_NOT_FINITE` for the flow; `HG_ERR_OUT_OF_RANGE` for a sample
- * count outside the range; the codes of `hg_line_evaluate` for the line;
- * `HG_ERR_INVALID` for a `struct_size` too small; `HG_ERR_NULL_POINTER`. Thread-safe
- * (the line is only read).
- *
- * # Safety
- * `line` and `fluid` must be NULL or live handles; `out` NULL or a writable
- * `hg_monte_carlo` of `out->struct_size` bytes.
- */
-int32_t hg_line_monte_carlo(const struct hg_line *line,
-                            const struct hg_fluid *fluid,
-                            double flow,
-                            size_t samples,
-                            uint64_t seed,
-                            struct hg_monte_carlo *out);
-
-/**
- * The flow `*flow` (m³/s, signed: negative when `head` is below the static head) at
- * which the line's required head equals `head` (m of the flowing fluid), with the ends
- * `*flow_low`, `*flow_high` of its uncertainty band (k = 2).
- *
- * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_INVALID` for a line without any loss or
- * that cannot be built; `HG_ERR_NO_SOLUTION` when no flow meets the head (e.g. reverse
- * flow through a check valve); `HG_ERR_NULL_POINTER`. Thread-safe (the line is only
- * read).
- *
- * # Safety
- * `line` and `fluid` must be NULL or live handles; the outputs NULL or writable.
- */
-int32_t hg_line_flow_for_head(const struct hg_line *line,
-                              const struct hg_fluid *fluid,
-                              double head,
-                              double *flow,
-                              double *flow_low,
-                              double *flow_high);
-
-/**
- * The system curve: `heads[i]` = the required head (m) of the line at `flows[i]` (m³/s),
- * for `n` flows; uses all cores above 4096 points, with the same results.
- * `heads` may be the `flows` array itself.
- *
- * Returns `HG_OK`; the status of the first failing flow (message "element <i>: ..."),
- * with `heads` unchanged; `HG_ERR_INVALID` for `n` = 0 or a line that cannot be built;
- * `HG_ERR_NULL_POINTER`. Thread-safe (the line is only read).
- *
- * # Safety
- * `line` and `fluid` must be NULL or live handles; `flows` and `heads` NULL or valid for
- * `n` doubles.
- */
-int32_t hg_line_system_curve(const struct hg_line *line,
-                             const struct hg_fluid *fluid,
-                             const double *flows,
-                             size_t n,
-                             double *heads);
-
-/**
- * Sets the air around `line` to `surroundings` (a gas handle, copied), or back to the
- * default dry air at 20 °C and 101 325 Pa when `surroundings` is NULL. A rise in a gas
- * line then adds (ρ − ρ_surroundings)·g·Δz of pressure (the stack effect); a liquid line
- * neglects the air column unless `hg_line_set_air_column_for_liquids` turns it on.
- *
- * Returns `HG_OK`; `HG_ERR_INVALID` when `surroundings` is a liquid;
- * `HG_ERR_NULL_POINTER` for `line`. Needs exclusive use of `line`.
- *
- * # Safety
- * `line` must be NULL or a live handle used by no other thread; `surroundings` NULL or a
- * live fluid handle.
- */
-int32_t hg_line_set_surroundings(struct hg_line *line,
-                                 const struct hg_fluid *surroundings);
-
-/**
- * Counts the surrounding air column for a liquid line too (`on` = 1) or neglects it (0,
- * the default: for water it changes a rise's head by about 0.12 %).
- *
- * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` for `on` other than 0 or 1;
- * `HG_ERR_NULL_POINTER`. Needs exclusive use of `line`.
- *
- * # Safety
- * `line` must be NULL or a live handle used by no other thread.
- */
-int32_t hg_line_set_air_column_for_liquids(struct hg_line *line,
-                                           int32_t on);
-
-/**
- * Writes 1 to `*blocks` when some element of `line` stops reverse flow (a check or foot
- * valve), else 0. Every call that takes a flow refuses a reverse flow through such a
- * line with `HG_ERR_NO_SOLUTION` and a message naming the valve.
- *
- * Returns `HG_OK`; `HG_ERR_INVALID` for a line that cannot be built;
- * `HG_ERR_NULL_POINTER`. Thread-safe (the line is only read).
- *
- * # Safety
- * `line` must be NULL or a live handle; `blocks` NULL or writable.
- */
-int32_t hg_line_blocks_reverse_flow(const struct hg_line *line,
-                                    int32_t *blocks);
 
 /**
  * Appends a round pipe of the catalogue wall `material` (see `hg_roughness`): inside
@@ -1707,29 +1892,195 @@ int32_t hg_line_set_turbulent_diameter(struct hg_line *line,
                                        int32_t mode);
 
 /**
- * Fills `opts` with the library's default uncertainty sources and sets its
- * `struct_size`.
+ * The flow `*flow` (m³/s, signed: negative when `head` is below the static head) at
+ * which the line's required head equals `head` (m of the flowing fluid), with the ends
+ * `*flow_low`, `*flow_high` of its uncertainty band (k = 2).
  *
- * Returns `HG_OK` or `HG_ERR_NULL_POINTER`. Thread-safe.
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_INVALID` for a line without any loss or
+ * that cannot be built; `HG_ERR_NO_SOLUTION` when no flow meets the head (e.g. reverse
+ * flow through a check valve); `HG_ERR_NULL_POINTER`. Thread-safe (the line is only
+ * read).
  *
  * # Safety
- * `opts` must be NULL or point to a writable `hg_uncertainty_options`.
+ * `line` and `fluid` must be NULL or live handles; the outputs NULL or writable.
  */
-int32_t hg_uncertainty_options_default(struct hg_uncertainty_options *opts);
+int32_t hg_line_flow_for_head(const struct hg_line *line,
+                              const struct hg_fluid *fluid,
+                              double head,
+                              double *flow,
+                              double *flow_low,
+                              double *flow_high);
 
 /**
- * Sets the uncertainty sources of the bands of `line` (see `hg_uncertainty_options`).
+ * The system curve: `heads[i]` = the required head (m) of the line at `flows[i]` (m³/s),
+ * for `n` flows; uses all cores above 4096 points, with the same results.
+ * `heads` may be the `flows` array itself.
  *
- * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a negative size or a
- * flag other than 0 or 1; `HG_ERR_INVALID` for a `struct_size` too small;
- * `HG_ERR_NULL_POINTER`. Needs exclusive use of `line`.
+ * Returns `HG_OK`; the status of the first failing flow (message "element <i>: ..."),
+ * with `heads` unchanged; `HG_ERR_INVALID` for `n` = 0 or a line that cannot be built;
+ * `HG_ERR_NULL_POINTER`. Thread-safe (the line is only read).
  *
  * # Safety
- * `line` must be NULL or a live handle used by no other thread; `opts` NULL or a
- * readable `hg_uncertainty_options`.
+ * `line` and `fluid` must be NULL or live handles; `flows` and `heads` NULL or valid for
+ * `n` doubles.
  */
-int32_t hg_line_set_uncertainty(struct hg_line *line,
-                                const struct hg_uncertainty_options *opts);
+int32_t hg_line_system_curve(const struct hg_line *line,
+                             const struct hg_fluid *fluid,
+                             const double *flows,
+                             size_t n,
+                             double *heads);
+
+/**
+ * The flow `*flow` (m³/s) and head `*head` (m) where the pump curve given by `n` points
+ * (`pump_flows` increasing, m³/s; `pump_heads`, m) meets the line's system curve, with
+ * the ends of their uncertainty bands. The pump curve is interpolated smoothly between
+ * its points and not extrapolated.
+ *
+ * Returns `HG_OK`; `HG_ERR_NO_SOLUTION` when the curves do not cross inside the pump
+ * curve's range; `HG_ERR_NOT_FINITE`, `HG_ERR_OUT_OF_RANGE`, `HG_ERR_INVALID` for a bad
+ * pump curve (too few points, flows not increasing) or line; `HG_ERR_NULL_POINTER`.
+ * Thread-safe (the line is only read).
+ *
+ * # Safety
+ * `line` and `fluid` must be NULL or live handles; the arrays NULL or valid for `n`
+ * doubles; the outputs NULL or writable doubles.
+ */
+int32_t hg_line_operating_point(const struct hg_line *line,
+                                const struct hg_fluid *fluid,
+                                const double *pump_flows,
+                                const double *pump_heads,
+                                size_t n,
+                                double *flow,
+                                double *head,
+                                double *flow_low,
+                                double *flow_high,
+                                double *head_low,
+                                double *head_high);
+
+/**
+ * Required head `*head` (m of the flowing fluid) of `line` for `fluid` at signed flow
+ * `flow` (m³/s) and its derivative `*dhead_dflow` (s/m²): the call a simulator's
+ * Newton loop makes for a whole route. Continuous, with a continuous derivative,
+ * through zero flow and the laminar–turbulent transition.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_INVALID` for a line that cannot be
+ * built; `HG_ERR_NO_SOLUTION` (refused transition, a gas losing over 40 % of its
+ * pressure); `HG_ERR_NULL_POINTER`. Thread-safe (the line is only read).
+ *
+ * # Safety
+ * `line` and `fluid` must be NULL or live handles; the outputs NULL or writable.
+ */
+int32_t hg_line_required_head(const struct hg_line *line,
+                              const struct hg_fluid *fluid,
+                              double flow,
+                              double *head,
+                              double *dhead_dflow);
+
+/**
+ * Head `*head` (m) and slope `*dhead_dflow` (s/m²) of the pump curve through `n` points
+ * (`flows` ≥ 0 strictly increasing, m³/s; `heads` not increasing, m) at `flow` (m³/s,
+ * inside the curve's range), interpolated without overshoot as `hg_line_operating_point`
+ * does.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a flow outside the
+ * curve; `HG_ERR_INVALID` or `HG_ERR_OUT_OF_RANGE` for a bad curve (fewer than 3
+ * points…); `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * `flows` and `heads` must be NULL or valid for `n` doubles; the outputs NULL or
+ * writable.
+ */
+int32_t hg_pump_curve_head(const double *flows,
+                           const double *heads,
+                           size_t n,
+                           double flow,
+                           double *head,
+                           double *dhead_dflow);
+
+/**
+ * Makes a new line, stored in `*out`, equal to `line` with every round pipe set to
+ * inside `diameter` (m, > 0); fittings that follow their pipe's bore follow it too.
+ * Free it with `hg_line_free`; `line` is unchanged.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_INVALID` for a
+ * line that cannot be built; `HG_ERR_NULL_POINTER`. Thread-safe (`line` is only read).
+ *
+ * # Safety
+ * `line` must be NULL or a live handle; `out` NULL or a writable `hg_line *`.
+ */
+int32_t hg_line_with_uniform_diameter(const struct hg_line *line,
+                                      double diameter,
+                                      struct hg_line **out);
+
+/**
+ * Sizes the round pipes of `line` (all set to one inside diameter) for `fluid` at flow
+ * `flow` (m³/s, ≠ 0) under the limit `limit` (`HG_LIMIT_*`) of value `limit_value`
+ * (Pa or m/s, > 0); with `table` and `schedule` (as `hg_pipe_size`; both NULL for none)
+ * it also picks the smallest standard size that meets the limit, at the nominal values
+ * and at the band's unfavourable end. The result goes to `*out`.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a zero flow, a limit
+ * ≤ 0 or an unknown `limit`; `HG_ERR_UNKNOWN_NAME` for a table or schedule;
+ * `HG_ERR_INVALID` for a line without round pipes or a `struct_size` too small;
+ * `HG_ERR_NO_SOLUTION` when no bore up to 20 m or no standard size meets the limit;
+ * `HG_ERR_NULL_POINTER`. Thread-safe (the line is only read).
+ *
+ * # Safety
+ * `line` and `fluid` must be NULL or live handles; `table` and `schedule` NULL or
+ * NUL-terminated; `out` NULL or a writable `hg_sizing` of `out->struct_size` bytes.
+ */
+int32_t hg_line_size(const struct hg_line *line,
+                     const struct hg_fluid *fluid,
+                     double flow,
+                     int32_t limit,
+                     double limit_value,
+                     const char *table,
+                     const char *schedule,
+                     struct hg_sizing *out);
+
+/**
+ * Splits a total flow `total` (m³/s) between `n` lines in parallel so that all need the
+ * same head: `flows[i]` is the flow in `branches[i]` (m³/s) and `*head` the common
+ * required head (m).
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_INVALID` for `n` = 0, a branch without
+ * any loss or that cannot be built; `HG_ERR_NO_SOLUTION`; `HG_ERR_NULL_POINTER` (also
+ * for a NULL branch). Thread-safe (the lines are only read).
+ *
+ * # Safety
+ * `branches` must be NULL or valid for `n` pointers, each NULL or a live handle;
+ * `fluid` NULL or live; `flows` NULL or valid for `n` doubles; `head` NULL or writable.
+ */
+int32_t hg_line_split_flow(const struct hg_line *const *branches,
+                           size_t n,
+                           const struct hg_fluid *fluid,
+                           double total,
+                           double *flows,
+                           double *head);
+
+/**
+ * The bands (k = 2) of `hg_line_split_flow`: for each branch `i`, `flows_low[i]` …
+ * `flows_high[i]` (m³/s), and the common head's band `*head_low` … `*head_high` (m).
+ * Line-wide sources (friction model, roughness, diameter, fluid) act on all branches
+ * together, each fitting's K on its own branch.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_INVALID` for `n` = 0, a branch without
+ * any loss or that cannot be built; `HG_ERR_NO_SOLUTION`; `HG_ERR_NULL_POINTER` (also
+ * for a NULL branch). Thread-safe (the lines are only read).
+ *
+ * # Safety
+ * `branches` must be NULL or valid for `n` pointers, each NULL or a live handle;
+ * `fluid` NULL or live; `flows_low` and `flows_high` NULL or valid for `n` doubles;
+ * `head_low` and `head_high` NULL or writable.
+ */
+int32_t hg_line_split_flow_bands(const struct hg_line *const *branches,
+                                 size_t n,
+                                 const struct hg_fluid *fluid,
+                                 double total,
+                                 double *flows_low,
+                                 double *flows_high,
+                                 double *head_low,
+                                 double *head_high);
 
 /**
  * Evaluates `line` for `fluid` at signed volumetric flow `flow` (m³/s; at inlet
@@ -1878,486 +2229,135 @@ int32_t hg_line_result_element_band_source(const struct hg_line_result *result,
                                            double *share);
 
 /**
- * The flow `*flow` (m³/s) and head `*head` (m) where the pump curve given by `n` points
- * (`pump_flows` increasing, m³/s; `pump_heads`, m) meets the line's system curve, with
- * the ends of their uncertainty bands. The pump curve is interpolated smoothly between
- * its points and not extrapolated.
+ * Fills `opts` with the library's default uncertainty sources and sets its
+ * `struct_size`.
  *
- * Returns `HG_OK`; `HG_ERR_NO_SOLUTION` when the curves do not cross inside the pump
- * curve's range; `HG_ERR_NOT_FINITE`, `HG_ERR_OUT_OF_RANGE`, `HG_ERR_INVALID` for a bad
- * pump curve (too few points, flows not increasing) or line; `HG_ERR_NULL_POINTER`.
- * Thread-safe (the line is only read).
+ * Returns `HG_OK` or `HG_ERR_NULL_POINTER`. Thread-safe.
  *
  * # Safety
- * `line` and `fluid` must be NULL or live handles; the arrays NULL or valid for `n`
- * doubles; the outputs NULL or writable doubles.
+ * `opts` must be NULL or point to a writable `hg_uncertainty_options`.
  */
-int32_t hg_line_operating_point(const struct hg_line *line,
-                                const struct hg_fluid *fluid,
-                                const double *pump_flows,
-                                const double *pump_heads,
-                                size_t n,
-                                double *flow,
-                                double *head,
-                                double *flow_low,
-                                double *flow_high,
-                                double *head_low,
-                                double *head_high);
+int32_t hg_uncertainty_options_default(struct hg_uncertainty_options *opts);
 
 /**
- * Splits a total flow `total` (m³/s) between `n` lines in parallel so that all need the
- * same head: `flows[i]` is the flow in `branches[i]` (m³/s) and `*head` the common
- * required head (m).
+ * Sets the uncertainty sources of the bands of `line` (see `hg_uncertainty_options`).
  *
- * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_INVALID` for `n` = 0, a branch without
- * any loss or that cannot be built; `HG_ERR_NO_SOLUTION`; `HG_ERR_NULL_POINTER` (also
- * for a NULL branch). Thread-safe (the lines are only read).
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a negative size or a
+ * flag other than 0 or 1; `HG_ERR_INVALID` for a `struct_size` too small;
+ * `HG_ERR_NULL_POINTER`. Needs exclusive use of `line`.
  *
  * # Safety
- * `branches` must be NULL or valid for `n` pointers, each NULL or a live handle;
- * `fluid` NULL or live; `flows` NULL or valid for `n` doubles; `head` NULL or writable.
+ * `line` must be NULL or a live handle used by no other thread; `opts` NULL or a
+ * readable `hg_uncertainty_options`.
  */
-int32_t hg_line_split_flow(const struct hg_line *const *branches,
-                           size_t n,
-                           const struct hg_fluid *fluid,
-                           double total,
-                           double *flows,
-                           double *head);
+int32_t hg_line_set_uncertainty(struct hg_line *line,
+                                const struct hg_uncertainty_options *opts);
 
 /**
- * The bands (k = 2) of `hg_line_split_flow`: for each branch `i`, `flows_low[i]` …
- * `flows_high[i]` (m³/s), and the common head's band `*head_low` … `*head_high` (m).
- * Line-wide sources (friction model, roughness, diameter, fluid) act on all branches
- * together, each fitting's K on its own branch.
+ * Propagates the uncertainty sources of `line` (see `hg_line_set_uncertainty`) to its
+ * required head at `flow` (m³/s) by sampling (JCGM 101:2008), `samples` times (100 to
+ * `HG_MONTE_CARLO_MAX_SAMPLES`) from the generator seed `seed`, into `*out`: the check
+ * of the first-order band of `hg_line_evaluate`. The same seed gives the same numbers.
+ * Friction model, diameter, density and viscosity are drawn normal; roughness, fitting K
+ * and equipment ratings rectangular. Time grows with `samples` × elements.
  *
- * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_INVALID` for `n` = 0, a branch without
- * any loss or that cannot be built; `HG_ERR_NO_SOLUTION`; `HG_ERR_NULL_POINTER` (also
- * for a NULL branch). Thread-safe (the lines are only read).
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE` for the flow; `HG_ERR_OUT_OF_RANGE` for a sample
+ * count outside the range; the codes of `hg_line_evaluate` for the line;
+ * `HG_ERR_INVALID` for a `struct_size` too small; `HG_ERR_NULL_POINTER`. Thread-safe
+ * (the line is only read).
  *
  * # Safety
- * `branches` must be NULL or valid for `n` pointers, each NULL or a live handle;
- * `fluid` NULL or live; `flows_low` and `flows_high` NULL or valid for `n` doubles;
- * `head_low` and `head_high` NULL or writable.
+ * `line` and `fluid` must be NULL or live handles; `out` NULL or a writable
+ * `hg_monte_carlo` of `out->struct_size` bytes.
  */
-int32_t hg_line_split_flow_bands(const struct hg_line *const *branches,
-                                 size_t n,
-                                 const struct hg_fluid *fluid,
-                                 double total,
-                                 double *flows_low,
-                                 double *flows_high,
-                                 double *head_low,
-                                 double *head_high);
+int32_t hg_line_monte_carlo(const struct hg_line *line,
+                            const struct hg_fluid *fluid,
+                            double flow,
+                            size_t samples,
+                            uint64_t seed,
+                            struct hg_monte_carlo *out);
 
 /**
- * Sizes the round pipes of `line` (all set to one inside diameter) for `fluid` at flow
- * `flow` (m³/s, ≠ 0) under the limit `limit` (`HG_LIMIT_*`) of value `limit_value`
- * (Pa or m/s, > 0); with `table` and `schedule` (as `hg_pipe_size`; both NULL for none)
- * it also picks the smallest standard size that meets the limit, at the nominal values
- * and at the band's unfavourable end. The result goes to `*out`.
+ * Sets the air around `line` to `surroundings` (a gas handle, copied), or back to the
+ * default dry air at 20 °C and 101 325 Pa when `surroundings` is NULL. A rise in a gas
+ * line then adds (ρ − ρ_surroundings)·g·Δz of pressure (the stack effect); a liquid line
+ * neglects the air column unless `hg_line_set_air_column_for_liquids` turns it on.
  *
- * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a zero flow, a limit
- * ≤ 0 or an unknown `limit`; `HG_ERR_UNKNOWN_NAME` for a table or schedule;
- * `HG_ERR_INVALID` for a line without round pipes or a `struct_size` too small;
- * `HG_ERR_NO_SOLUTION` when no bore up to 20 m or no standard size meets the limit;
+ * Returns `HG_OK`; `HG_ERR_INVALID` when `surroundings` is a liquid;
+ * `HG_ERR_NULL_POINTER` for `line`. Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread; `surroundings` NULL or a
+ * live fluid handle.
+ */
+int32_t hg_line_set_surroundings(struct hg_line *line,
+                                 const struct hg_fluid *surroundings);
+
+/**
+ * Counts the surrounding air column for a liquid line too (`on` = 1) or neglects it (0,
+ * the default: for water it changes a rise's head by about 0.12 %).
+ *
+ * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` for `on` other than 0 or 1;
+ * `HG_ERR_NULL_POINTER`. Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_set_air_column_for_liquids(struct hg_line *line,
+                                           int32_t on);
+
+/**
+ * Writes 1 to `*blocks` when some element of `line` stops reverse flow (a check or foot
+ * valve), else 0. Every call that takes a flow refuses a reverse flow through such a
+ * line with `HG_ERR_NO_SOLUTION` and a message naming the valve.
+ *
+ * Returns `HG_OK`; `HG_ERR_INVALID` for a line that cannot be built;
  * `HG_ERR_NULL_POINTER`. Thread-safe (the line is only read).
  *
  * # Safety
- * `line` and `fluid` must be NULL or live handles; `table` and `schedule` NULL or
- * NUL-terminated; `out` NULL or a writable `hg_sizing` of `out->struct_size` bytes.
+ * `line` must be NULL or a live handle; `blocks` NULL or writable.
  */
-int32_t hg_line_size(const struct hg_line *line,
-                     const struct hg_fluid *fluid,
-                     double flow,
-                     int32_t limit,
-                     double limit_value,
-                     const char *table,
-                     const char *schedule,
-                     struct hg_sizing *out);
+int32_t hg_line_blocks_reverse_flow(const struct hg_line *line,
+                                    int32_t *blocks);
 
 /**
- * Required head `*head` (m of the flowing fluid) of `line` for `fluid` at signed flow
- * `flow` (m³/s) and its derivative `*dhead_dflow` (s/m²): the call a simulator's
- * Newton loop makes for a whole route. Continuous, with a continuous derivative,
- * through zero flow and the laminar–turbulent transition.
+ * The system curve with its 95 % band: at each of the `n` flows `flows[i]` (m³/s),
+ * `nominal[i]` = the required head (m, the same value as `hg_line_system_curve`) and
+ * `low[i]`, `high[i]` = the ends of its band (the band of `hg_line_evaluate`'s required
+ * head at that flow). One pass over the elements per flow; uses all cores above 64
+ * flows, with the same results.
  *
- * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_INVALID` for a line that cannot be
- * built; `HG_ERR_NO_SOLUTION` (refused transition, a gas losing over 40 % of its
- * pressure); `HG_ERR_NULL_POINTER`. Thread-safe (the line is only read).
+ * Returns `HG_OK`; the status of the first failing flow (message "element <i>: ..."),
+ * with the outputs unchanged; `HG_ERR_INVALID` for `n` = 0 or a line that cannot be
+ * built; `HG_ERR_NULL_POINTER`. Thread-safe (the line is only read).
  *
  * # Safety
- * `line` and `fluid` must be NULL or live handles; the outputs NULL or writable.
+ * `line` and `fluid` must be NULL or live handles; `flows`, `low`, `nominal` and `high`
+ * NULL or valid for `n` doubles (the outputs may not overlap `flows` or each other).
  */
-int32_t hg_line_required_head(const struct hg_line *line,
-                              const struct hg_fluid *fluid,
-                              double flow,
-                              double *head,
-                              double *dhead_dflow);
+int32_t hg_line_system_curve_band(const struct hg_line *line,
+                                  const struct hg_fluid *fluid,
+                                  const double *flows,
+                                  size_t n,
+                                  double *low,
+                                  double *nominal,
+                                  double *high);
 
 /**
- * Head `*head` (m) and slope `*dhead_dflow` (s/m²) of the pump curve through `n` points
- * (`flows` ≥ 0 strictly increasing, m³/s; `heads` not increasing, m) at `flow` (m³/s,
- * inside the curve's range), interpolated without overshoot as `hg_line_operating_point`
- * does.
+ * Treats the pipes of catalogue material `material` as independent in the bands (each
+ * pipe its own roughness error, as for pipes from different supplies) when `independent`
+ * is 1, or as sharing one error (the default) when 0.
  *
- * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a flow outside the
- * curve; `HG_ERR_INVALID` or `HG_ERR_OUT_OF_RANGE` for a bad curve (fewer than 3
- * points…); `HG_ERR_NULL_POINTER`. Thread-safe.
+ * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` for a name not in the material catalogue;
+ * `HG_ERR_OUT_OF_RANGE` for `independent` other than 0 or 1; `HG_ERR_NULL_POINTER`.
+ * Not thread-safe for the same line (it changes the line).
  *
  * # Safety
- * `flows` and `heads` must be NULL or valid for `n` doubles; the outputs NULL or
- * writable.
+ * `line` must be NULL or a live handle; `material` NULL or a NUL-terminated string.
  */
-int32_t hg_pump_curve_head(const double *flows,
-                           const double *heads,
-                           size_t n,
-                           double flow,
-                           double *head,
-                           double *dhead_dflow);
-
-/**
- * Makes a new line, stored in `*out`, equal to `line` with every round pipe set to
- * inside `diameter` (m, > 0); fittings that follow their pipe's bore follow it too.
- * Free it with `hg_line_free`; `line` is unchanged.
- *
- * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_INVALID` for a
- * line that cannot be built; `HG_ERR_NULL_POINTER`. Thread-safe (`line` is only read).
- *
- * # Safety
- * `line` must be NULL or a live handle; `out` NULL or a writable `hg_line *`.
- */
-int32_t hg_line_with_uniform_diameter(const struct hg_line *line,
-                                      double diameter,
-                                      struct hg_line **out);
-
-/**
- * Absolute roughness of new pipe of the catalogue material `material` (e.g.
- * "commercial_steel"; see `hg_roughness_material_name`): `*typical`, and the quoted
- * range `*low` to `*high`, all in m (handbook values; common practice).
- *
- * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` (the message lists the catalogue);
- * `HG_ERR_INVALID` for a name not UTF-8; `HG_ERR_NULL_POINTER`. Thread-safe.
- *
- * # Safety
- * `material` must be NULL or a NUL-terminated string; the outputs NULL or writable.
- */
-int32_t hg_roughness(const char *material,
-                     double *typical,
-                     double *low,
-                     double *high);
-
-/**
- * Copies the name of catalogue material number `index` (0-based) into `buf` (at most
- * `len - 1` bytes and a NUL) and stores its full length in `*needed`.
- *
- * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` past the end; `HG_ERR_BUFFER_TOO_SMALL` when
- * the name did not fit (the cut copy is still written); `HG_ERR_NULL_POINTER` for a NULL
- * `needed`, or a NULL `buf` with `len` > 0. Thread-safe.
- *
- * # Safety
- * `buf` must be NULL or valid for writing `len` bytes; `needed` NULL or writable.
- */
-int32_t hg_roughness_material_name(size_t index,
-                                   char *buf,
-                                   size_t len,
-                                   size_t *needed);
-
-/**
- * Roughness `*roughness` (m) after `years` of service growing linearly from `initial`
- * (m) at `rate` (m per year): ε = ε₀ + α·t (Colebrook & White 1937 aging model).
- *
- * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a negative argument;
- * `HG_ERR_NULL_POINTER`. Thread-safe.
- *
- * # Safety
- * `roughness` must be NULL or point to a writable double.
- */
-int32_t hg_roughness_aged(double initial,
-                          double rate,
-                          double years,
-                          double *roughness);
-
-/**
- * Dimensions of a standard pipe: `table` ("steel" ASME B36.10M, "stainless" ASME
- * B36.19M, "copper" ASTM B88, "pvc" ASTM D1785), `nominal` size as printed ("2",
- * "1-1/2", "3/4") and `schedule` or tube type ("40", "STD", "10S", "K"): outside
- * diameter, wall thickness and inside diameter, all in m.
- *
- * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` for a table, size or schedule not listed (the
- * message lists the known ones); `HG_ERR_INVALID` for a string not UTF-8;
- * `HG_ERR_NULL_POINTER`. Thread-safe.
- *
- * # Safety
- * The strings must be NULL or NUL-terminated; the outputs NULL or writable doubles.
- */
-int32_t hg_pipe_size(const char *table,
-                     const char *nominal,
-                     const char *schedule,
-                     double *outside_diameter,
-                     double *wall,
-                     double *inside_diameter);
-
-/**
- * The smallest standard pipe of `table` in `schedule` (as `hg_pipe_size`) whose inside
- * diameter is at least `min_inside_diameter` (m, > 0): its inside diameter in
- * `*inside_diameter` (m) and its nominal size copied into `nominal` (at most `len - 1`
- * bytes and a NUL; full length in `*needed`).
- *
- * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`
- * for a diameter ≤ 0 or larger than the table's largest; `HG_ERR_BUFFER_TOO_SMALL`
- * when the nominal size did not fit (the diameter is still written);
- * `HG_ERR_NULL_POINTER`. Thread-safe.
- *
- * # Safety
- * The strings must be NULL or NUL-terminated; `nominal` NULL or valid for `len` bytes;
- * `needed` and `inside_diameter` NULL or writable.
- */
-int32_t hg_pipe_size_at_least(const char *table,
-                              const char *schedule,
-                              double min_inside_diameter,
-                              double *inside_diameter,
-                              char *nominal,
-                              size_t len,
-                              size_t *needed);
-
-/**
- * Copies schedule (or tube type) number `index` (0-based, the table's order, e.g. "40",
- * "STD", "K") of pipe `table` (as `hg_pipe_size`) into `buf` (at most `len - 1` bytes and
- * a NUL) and stores its full length in `*needed`.
- *
- * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` for a table; `HG_ERR_OUT_OF_RANGE` when `index`
- * is past the end (use it to count the schedules); `HG_ERR_BUFFER_TOO_SMALL` when the
- * name did not fit (the cut copy is still written); `HG_ERR_INVALID` for a table name
- * not UTF-8; `HG_ERR_NULL_POINTER` for a NULL `table` or `needed`, or a NULL `buf` with
- * `len` > 0. Thread-safe.
- *
- * # Safety
- * `table` must be NULL or NUL-terminated; `buf` NULL or valid for writing `len` bytes;
- * `needed` NULL or writable.
- */
-int32_t hg_pipe_table_schedule(const char *table,
-                               size_t index,
-                               char *buf,
-                               size_t len,
-                               size_t *needed);
-
-/**
- * Copies nominal size number `index` (0-based, smallest first, as printed: "1/2", "2",
- * "1-1/2") of pipe `table` (as `hg_pipe_size`) into `buf` (at most `len - 1` bytes and a
- * NUL) and stores its full length in `*needed`. Not every size exists in every schedule.
- *
- * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` for a table; `HG_ERR_OUT_OF_RANGE` when `index`
- * is past the end (use it to count the sizes); `HG_ERR_BUFFER_TOO_SMALL` when the name
- * did not fit (the cut copy is still written); `HG_ERR_INVALID` for a table name not
- * UTF-8; `HG_ERR_NULL_POINTER` for a NULL `table` or `needed`, or a NULL `buf` with
- * `len` > 0. Thread-safe.
- *
- * # Safety
- * `table` must be NULL or NUL-terminated; `buf` NULL or valid for writing `len` bytes;
- * `needed` NULL or writable.
- */
-int32_t hg_pipe_table_nominal(const char *table,
-                              size_t index,
-                              char *buf,
-                              size_t len,
-                              size_t *needed);
-
-/**
- * The library version as a static string, e.g. "0.1.0" (never freed; never NULL).
- * Thread-safe.
- */
-const char *hg_version(void);
-
-/**
- * The ABI version of the loaded library; compare with `HG_ABI_VERSION`. Thread-safe.
- */
-uint32_t hg_abi_version(void);
-
-/**
- * The name of a status code as a static string, e.g. "HG_ERR_OUT_OF_RANGE"; for a code
- * that is not one of the `HG_*` status codes, "HG_UNKNOWN_STATUS". Never NULL, never
- * freed. Thread-safe.
- */
-const char *hg_status_name(int32_t status);
-
-/**
- * The message of the last failed call on the calling thread, e.g.
- * "re = -1: must be greater than 0" (empty when the thread's last call succeeded).
- *
- * Copies at most `len - 1` bytes of UTF-8 and a terminating NUL into `buf` (nothing when
- * `buf` is NULL or `len` is 0) and returns the message's full length in bytes, without
- * the NUL, like `snprintf`: a return value ≥ `len` means the copy was cut short.
- * Does not change the thread's last error. Thread-safe: each thread has its own message.
- *
- * # Safety
- * `buf` must be NULL or valid for writing `len` bytes.
- */
-size_t hg_last_error(char *buf,
-                     size_t len);
-
-/**
- * The name of one warning bit (`HG_WARN_*`) as a static string, e.g.
- * "transitional_flow"; NULL when `bit` is not exactly one known warning bit.
- * Thread-safe.
- */
-const char *hg_warning_name(uint32_t bit);
-
-/**
- * Head loss `*head_loss` (m of fluid, signed with the flow) and its derivative
- * `*dhead_dflow` (s/m²) of a round pipe at volumetric flow `flow` (m³/s, signed): the
- * call a simulator's Newton loop makes. Darcy–Weisbach with the exact Colebrook
- * friction factor, laminar f = 64/Re and a C¹ blend between Re 2300 and 4000; the loss
- * is odd in the flow and zero at zero flow, with a continuous derivative.
- *
- * Pipe: inside `diameter` (m, > 0), `length` (m, > 0), absolute wall `roughness` (m,
- * ≥ 0, at most half the diameter). Fluid: `density` (kg/m³, > 0) and dynamic
- * `viscosity` (Pa·s, > 0), e.g. from `hg_water`.
- *
- * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a bad pipe or fluid;
- * `HG_ERR_NULL_POINTER` when an output is NULL (nothing is written). Thread-safe.
- *
- * # Safety
- * `head_loss` and `dhead_dflow` must be NULL or point to writable doubles.
- */
-int32_t hg_pipe_head_loss(double diameter,
-                          double length,
-                          double roughness,
-                          double density,
-                          double viscosity,
-                          double flow,
-                          double *head_loss,
-                          double *dhead_dflow);
-
-/**
- * The full flow state of a straight run of any section `shape` (`HG_SECTION_*`, with
- * dimensions `a`, `b` as for `hg_section_properties`), `length` (m, > 0) and absolute
- * `roughness` (m, ≥ 0, at most half the hydraulic diameter) at flow `flow` (m³/s,
- * signed), for a fluid of `density` (kg/m³, > 0) and `viscosity` (Pa·s, > 0). Laminar
- * flow uses the section's exact laminar constant; turbulent flow the hydraulic diameter
- * (with `HG_WARN_NON_CIRCULAR_SECTION` for other shapes than a circle).
- *
- * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_INVALID` for a
- * `struct_size` too small or b ≠ 0 on a one-dimension shape; `HG_ERR_NULL_POINTER`.
- * Thread-safe.
- *
- * # Safety
- * `out` must be NULL or point to a writable `hg_pipe_flow` of `out->struct_size` bytes.
- */
-int32_t hg_duct_flow_state(int32_t shape,
-                           double a,
-                           double b,
-                           double length,
-                           double roughness,
-                           double density,
-                           double viscosity,
-                           double flow,
-                           struct hg_pipe_flow *out);
-
-/**
- * Reynolds number `*re` = ρ·|V|·D/μ of flow `flow` (m³/s, signed) in a round pipe of
- * inside `diameter` (m, > 0), with V = Q/A, for a fluid of `density` (kg/m³, > 0) and
- * `viscosity` (Pa·s, > 0): the core's `Fluid::reynolds`. (The flow state of
- * `hg_duct_flow_state` computes |V|·D/ν and may differ from it in the last bit.)
- *
- * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
- * Thread-safe.
- *
- * # Safety
- * `re` must be NULL or point to a writable double.
- */
-int32_t hg_reynolds(double flow,
-                    double diameter,
-                    double density,
-                    double viscosity,
-                    double *re);
-
-/**
- * Head losses and derivatives of one round pipe (as `hg_pipe_head_loss`) at `n` flows:
- * `head_loss[i]`, `dhead_dflow[i]` at `flow[i]`. The results equal the scalar call's bit
- * for bit. Either output may be the `flow` array itself (computed in place); the two
- * outputs must be different arrays.
- *
- * Returns `HG_OK`; the status of the bad pipe or fluid; the status of the first bad
- * flow (message "element <i>: ..."), with the outputs partly written;
- * `HG_ERR_NULL_POINTER`; `HG_ERR_INVALID` for `n` = 0. Thread-safe.
- *
- * # Safety
- * `flow`, `head_loss` and `dhead_dflow` must be NULL or valid for `n` doubles.
- */
-int32_t hg_pipe_head_loss_batch(double diameter,
-                                double length,
-                                double roughness,
-                                double density,
-                                double viscosity,
-                                const double *flow,
-                                size_t n,
-                                double *head_loss,
-                                double *dhead_dflow);
-
-/**
- * Geometry of a cross-section `shape` (`HG_SECTION_*`) with dimensions `a`, `b` (m; see
- * each constant): `*area` (m²), `*wetted_perimeter` (m), `*hydraulic_diameter` = 4A/P
- * (m) and `*laminar_constant` = f·Re of fully developed laminar flow on the hydraulic
- * diameter (dimensionless, exact for each shape: 64 for a circle).
- *
- * Valid ranges: dimensions finite and > 0 (b = 0 for a circle and a triangle); annulus
- * b < a; ellipse b ≤ a.
- *
- * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a bad dimension or
- * shape; `HG_ERR_INVALID` for b ≠ 0 on a one-dimension shape; `HG_ERR_NULL_POINTER`
- * when an output is NULL (nothing is written). Thread-safe.
- *
- * # Safety
- * Each output must be NULL or point to a writable double.
- */
-int32_t hg_section_properties(int32_t shape,
-                              double a,
-                              double b,
-                              double *area,
-                              double *wetted_perimeter,
-                              double *hydraulic_diameter,
-                              double *laminar_constant);
-
-/**
- * The diameter `*diameter` (m) turbulent flow in the section `shape` (`HG_SECTION_*`,
- * dimensions `a`, `b` as for `hg_section_properties`) is computed on under `mode`
- * (`HG_TURBULENT_DIAMETER_*`): the hydraulic diameter, or with
- * `HG_TURBULENT_DIAMETER_LAMINAR_EQUIVALENT` for rectangles and annuli the
- * laminar-equivalent diameter 64/C·D_h (Jones 1976; Jones & Leung 1981). Lines choose
- * the mode with `hg_line_set_turbulent_diameter`.
- *
- * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a bad dimension, shape
- * or mode; `HG_ERR_INVALID` for b ≠ 0 on a one-dimension shape; `HG_ERR_NULL_POINTER`.
- * Thread-safe.
- *
- * # Safety
- * `diameter` must be NULL or point to a writable double.
- */
-int32_t hg_turbulent_diameter(int32_t shape,
-                              double a,
-                              double b,
-                              int32_t mode,
-                              double *diameter);
-
-/**
- * Sets the number of threads the batch calls (`hg_darcy_factor_batch`,
- * `hg_line_system_curve`) may use, 1 to `HG_MAX_THREADS`. With 1 the library never
- * starts a thread: every call runs on the caller's thread (the setting for an embedding
- * program that runs its own threads, and for valgrind). The default is read once, at the
- * first batch, from the environment variable `HYDROGRADE_THREADS` (a whole number ≥ 1),
- * else it is the number of cores. The threads belong to the library's own pool; results
- * are the same bit for bit whatever the setting.
- *
- * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` for 0 or more than `HG_MAX_THREADS` (the
- * setting is then unchanged). Thread-safe: a batch running when the setting changes
- * finishes with the threads it started with.
- */
-int32_t hg_set_threads(size_t n);
-
-/**
- * The number of threads the batch calls may use (≥ 1); see `hg_set_threads`.
- * Thread-safe.
- */
-size_t hg_threads(void);
+int32_t hg_line_set_material_independent(struct hg_line *line,
+                                         const char *material,
+                                         int32_t independent);
 
 /**
  * Converts `value` from unit `from` to unit `to` into `*out`, with the exact factors of
@@ -2415,6 +2415,45 @@ int32_t hg_unit_name(size_t index,
                      char *buf,
                      size_t len,
                      size_t *needed);
+
+/**
+ * The name of one warning bit (`HG_WARN_*`) as a static string, e.g.
+ * "transitional_flow"; NULL when `bit` is not exactly one known warning bit.
+ * Thread-safe.
+ */
+const char *hg_warning_name(uint32_t bit);
+
+/**
+ * The library version as a static string, e.g. "0.1.0" (never freed; never NULL).
+ * Thread-safe.
+ */
+const char *hg_version(void);
+
+/**
+ * The ABI version of the loaded library; compare with `HG_ABI_VERSION`. Thread-safe.
+ */
+uint32_t hg_abi_version(void);
+
+/**
+ * Sets the number of threads the batch calls (`hg_darcy_factor_batch`,
+ * `hg_line_system_curve`) may use, 1 to `HG_MAX_THREADS`. With 1 the library never
+ * starts a thread: every call runs on the caller's thread (the setting for an embedding
+ * program that runs its own threads, and for valgrind). The default is read once, at the
+ * first batch, from the environment variable `HYDROGRADE_THREADS` (a whole number ≥ 1),
+ * else it is the number of cores. The threads belong to the library's own pool; results
+ * are the same bit for bit whatever the setting.
+ *
+ * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` for 0 or more than `HG_MAX_THREADS` (the
+ * setting is then unchanged). Thread-safe: a batch running when the setting changes
+ * finishes with the threads it started with.
+ */
+int32_t hg_set_threads(size_t n);
+
+/**
+ * The number of threads the batch calls may use (≥ 1); see `hg_set_threads`.
+ * Thread-safe.
+ */
+size_t hg_threads(void);
 
 #ifdef __cplusplus
 }  // extern "C"

@@ -86,13 +86,14 @@ enum class warning : uint32_t {
   gas_compressibility = HG_WARN_GAS_COMPRESSIBILITY,
   below_vapour_pressure = HG_WARN_BELOW_VAPOUR_PRESSURE,
   fitting_out_of_range = HG_WARN_FITTING_OUT_OF_RANGE,
+  bore_change_without_transition = HG_WARN_BORE_CHANGE_WITHOUT_TRANSITION,
 };
 
 /// Every warning, in bit order.
 constexpr warning all_warnings[] = {
     warning::reynolds_out_of_range, warning::roughness_out_of_range, warning::transitional_flow,
     warning::non_circular_section,  warning::gas_compressibility,    warning::below_vapour_pressure,
-    warning::fitting_out_of_range,
+    warning::fitting_out_of_range,  warning::bore_change_without_transition,
 };
 
 /// True when the warning bits `bits` hold `w`.

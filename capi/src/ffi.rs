@@ -375,6 +375,24 @@ pub(crate) fn list_item<'a>(
     })
 }
 
+/// Copies name `index` of `list` into a caller's buffer as [`copy_name`], or fails with
+/// an out-of-range error that gives the count: the body of every `hg_*_name` listing.
+///
+/// # Safety
+/// As [`copy_name`].
+pub(crate) unsafe fn copy_list_item(
+    list: &[&str],
+    index: usize,
+    buf: *mut c_char,
+    len: usize,
+    needed: *mut usize,
+) -> FfiResult {
+    check_outs(&[out_ptr("needed", needed)])?;
+    let name = list_item("index", list, index)?;
+    // SAFETY: forwarded contract.
+    unsafe { copy_name(name, buf, len, needed) }
+}
+
 /// Copies `s` into a caller's buffer like `snprintf` and stores its full length.
 ///
 /// # Safety

@@ -10,30 +10,46 @@
 
 #![allow(non_camel_case_types)]
 
-mod band_curve;
-mod correlation;
+// The modules mirror the core's, in the order of the header's topics (cbindgen writes
+// the items in this order): status codes and errors, friction, fluids, sections,
+// fittings, wall roughness and pipe sizes, straight pipes, lines (building, solving,
+// sizing, parallel lines), line results, bands, units, warnings, version, threads.
 mod ffi;
-mod fitting;
-mod fluid;
+
+mod error;
+
 mod friction;
-mod line;
-mod line_band;
-mod line_eval;
-mod line_model;
-mod line_more;
-mod line_result;
-mod line_solve;
-mod materials;
-mod meta;
-mod pipe;
+
+mod fluid;
+
 mod section;
-/// cbindgen:ignore
-mod sheet;
-mod threads;
+
+mod fitting;
+
+mod roughness;
+
+mod sizes;
+
+mod pipe;
+
+mod line;
+mod line_model;
+
+mod band_curve;
+
 mod units;
 
+mod warning;
+
+mod version;
+
+mod threads;
+
+/// cbindgen:ignore
+mod sheet;
+
 pub use band_curve::*;
-pub use correlation::*;
+pub use error::*;
 pub use ffi::{
     HG_ERR_BUFFER_TOO_SMALL, HG_ERR_INTERNAL, HG_ERR_INVALID, HG_ERR_NO_SOLUTION,
     HG_ERR_NOT_FINITE, HG_ERR_NULL_POINTER, HG_ERR_OUT_OF_RANGE, HG_ERR_UNKNOWN_NAME, HG_OK,
@@ -42,19 +58,16 @@ pub use fitting::*;
 pub use fluid::*;
 pub use friction::*;
 pub use line::*;
-pub use line_band::*;
-pub use line_eval::*;
 pub use line_model::*;
-pub use line_more::*;
-pub use line_result::*;
-pub use line_solve::*;
-pub use materials::*;
-pub use meta::*;
 pub use pipe::*;
+pub use roughness::*;
 pub use section::*;
 pub use sheet::*;
+pub use sizes::*;
 pub use threads::*;
 pub use units::*;
+pub use version::*;
+pub use warning::*;
 
 #[cfg(test)]
 mod tests {

@@ -123,7 +123,7 @@ pub unsafe extern "C" fn hg_turbulent_diameter(
     guard(|| {
         ffi::check_outs(&[out_ptr("diameter", diameter)])?;
         let s = section_of(shape, a, b)?;
-        let m = crate::line_more::turbulent_mode(mode)?;
+        let m = crate::line::turbulent_mode(mode)?;
         // SAFETY: forwarded contract; checked above.
         unsafe { put("diameter", diameter, s.turbulent_diameter(m)) }
     })

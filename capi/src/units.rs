@@ -83,8 +83,7 @@ pub unsafe extern "C" fn hg_unit_name(
 ) -> i32 {
     guard(|| {
         let names = units::names();
-        let name = ffi::list_item("index", &names, index)?;
         // SAFETY: forwarded contract.
-        unsafe { ffi::copy_name(name, buf, len, needed) }
+        unsafe { ffi::copy_list_item(&names, index, buf, len, needed) }
     })
 }

@@ -1,5 +1,26 @@
 //! Lines: an opaque handle that collects elements in route order, then evaluates.
 
+// Building, then solving, sizing and parallel lines, then results and bands: the order of
+// the header's topics.
+mod builder;
+
+mod solve;
+
+mod sizing;
+
+mod parallel;
+
+mod result;
+
+mod uncertainty;
+
+pub use builder::*;
+pub use parallel::*;
+pub use result::*;
+pub use sizing::*;
+pub use solve::*;
+pub use uncertainty::*;
+
 use crate::ffi::{self, FfiResult, guard, out_ptr, put};
 use crate::section::{HG_SECTION_CIRCLE, section_of};
 use hydrograde::Error;
@@ -60,6 +81,20 @@ impl hg_line {
         });
         built.as_ref().map_err(|e| e.clone().into())
     }
+}
+
+/// Checks a line and a fluid handle (in that order) and lends the built line with the
+/// fluid: the start of every entry point that computes on a line.
+///
+/// # Safety
+/// `line` and `fluid` must be NULL or live handles.
+pub(crate) unsafe fn line_and_fluid<'a>(
+    line: *const hg_line,
+    fluid: *const crate::fluid::hg_fluid,
+) -> FfiResult<(&'a Line, &'a hydrograde::fluid::Fluid)> {
+    // SAFETY: forwarded contract.
+    let (l, f) = unsafe { (ffi::handle("line", line)?, ffi::handle("fluid", fluid)?) };
+    Ok((l.line()?, &f.fluid))
 }
 
 /// Makes an empty line with the default options and stores it in `*out`; free it with

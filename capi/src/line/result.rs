@@ -267,8 +267,8 @@ pub unsafe extern "C" fn hg_line_evaluate(
     guard(|| {
         ffi::check_outs(&[out_ptr("out", out)])?;
         // SAFETY: forwarded contract.
-        let (l, f) = unsafe { (ffi::handle("line", line)?, ffi::handle("fluid", fluid)?) };
-        let r = l.line()?.evaluate(&f.fluid, flow)?;
+        let (l, f) = unsafe { crate::line::line_and_fluid(line, fluid)? };
+        let r = l.evaluate(f, flow)?;
         // SAFETY: forwarded contract; checked above.
         unsafe { give(out, r) }
     })
@@ -296,9 +296,9 @@ pub unsafe extern "C" fn hg_line_evaluate_at(
     guard(|| {
         ffi::check_outs(&[out_ptr("out", out)])?;
         // SAFETY: forwarded contract.
-        let (l, f) = unsafe { (ffi::handle("line", line)?, ffi::handle("fluid", fluid)?) };
+        let (l, f) = unsafe { crate::line::line_and_fluid(line, fluid)? };
         let inlet = (inlet_pressure != 0.0).then_some(inlet_pressure);
-        let r = l.line()?.evaluate_at(&f.fluid, flow, inlet)?;
+        let r = l.evaluate_at(f, flow, inlet)?;
         // SAFETY: forwarded contract; checked above.
         unsafe { give(out, r) }
     })

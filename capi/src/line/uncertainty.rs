@@ -1,10 +1,125 @@
-//! The Monte Carlo check of a line's first-order band.
+//! The uncertainty of a line's results: which sources its bands include and how
+//! large they are, and the Monte Carlo check of the first-order band.
 
 use crate::ffi::sized;
-use crate::ffi::{self, guard};
+use crate::ffi::{self, FfiResult, guard, put};
 use crate::fluid::hg_fluid;
-use crate::line::hg_line;
-use hydrograde::band::monte_carlo;
+use crate::line::{hg_line, with_line};
+use hydrograde::Error;
+use hydrograde::band::{UncertaintyOptions, monte_carlo};
+
+/// Which uncertainty sources the bands of a line include, and their sizes (relative
+/// standard uncertainties, k = 1). Fill it with `hg_uncertainty_options_default`.
+#[repr(C)]
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct hg_uncertainty_options {
+    /// Size of this struct in bytes, set by `hg_uncertainty_options_default`.
+    pub struct_size: usize,
+    /// 1 to include the friction correlation's model uncertainty, else 0.
+    pub friction_model: i32,
+    /// 1 to include wall roughness, else 0.
+    pub roughness: i32,
+    /// 1 to include the fluid's density and viscosity uncertainties, else 0.
+    pub fluid: i32,
+    /// 1 to include fitting K spreads, else 0.
+    pub fittings: i32,
+    /// 1 to include equipment spreads, else 0.
+    pub equipment: i32,
+    /// Model uncertainty of turbulent flow in round pipe.
+    pub turbulent_model: f64,
+    /// Model uncertainty of laminar flow.
+    pub laminar_model: f64,
+    /// Model uncertainty of turbulent flow in non-circular ducts.
+    pub non_circular_model: f64,
+    /// Relative uncertainty of roughness where a pipe states no range.
+    pub roughness_default: f64,
+    /// Relative uncertainty of every bore (manufacturing tolerance).
+    pub diameter: f64,
+}
+sized!(hg_uncertainty_options, diameter: f64);
+
+fn uncertainty_to_c(u: &UncertaintyOptions) -> hg_uncertainty_options {
+    hg_uncertainty_options {
+        struct_size: std::mem::size_of::<hg_uncertainty_options>(),
+        friction_model: i32::from(u.friction_model),
+        roughness: i32::from(u.roughness),
+        fluid: i32::from(u.fluid),
+        fittings: i32::from(u.fittings),
+        equipment: i32::from(u.equipment),
+        turbulent_model: u.turbulent_model,
+        laminar_model: u.laminar_model,
+        non_circular_model: u.non_circular_model,
+        roughness_default: u.roughness_default,
+        diameter: u.diameter,
+    }
+}
+
+fn flag(name: &'static str, v: i32) -> FfiResult<bool> {
+    match v {
+        0 => Ok(false),
+        1 => Ok(true),
+        _ => Err(Error::out_of_range(name, f64::from(v), "must be 0 or 1").into()),
+    }
+}
+
+/// Fills `opts` with the library's default uncertainty sources and sets its
+/// `struct_size`.
+///
+/// Returns `HG_OK` or `HG_ERR_NULL_POINTER`. Thread-safe.
+///
+/// # Safety
+/// `opts` must be NULL or point to a writable `hg_uncertainty_options`.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_uncertainty_options_default(opts: *mut hg_uncertainty_options) -> i32 {
+    // SAFETY: forwarded contract.
+    guard(|| unsafe {
+        put(
+            "opts",
+            opts,
+            uncertainty_to_c(&UncertaintyOptions::default()),
+        )
+    })
+}
+
+/// Sets the uncertainty sources of the bands of `line` (see `hg_uncertainty_options`).
+///
+/// Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a negative size or a
+/// flag other than 0 or 1; `HG_ERR_INVALID` for a `struct_size` too small;
+/// `HG_ERR_NULL_POINTER`. Needs exclusive use of `line`.
+///
+/// # Safety
+/// `line` must be NULL or a live handle used by no other thread; `opts` NULL or a
+/// readable `hg_uncertainty_options`.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_set_uncertainty(
+    line: *mut hg_line,
+    opts: *const hg_uncertainty_options,
+) -> i32 {
+    // SAFETY: forwarded contract.
+    unsafe {
+        with_line(line, |l| {
+            let d = uncertainty_to_c(&UncertaintyOptions::default());
+            let c = ffi::read_sized("opts", opts, d)?;
+            let u = UncertaintyOptions {
+                friction_model: flag("friction_model", c.friction_model)?,
+                roughness: flag("roughness", c.roughness)?,
+                fluid: flag("fluid", c.fluid)?,
+                fittings: flag("fittings", c.fittings)?,
+                equipment: flag("equipment", c.equipment)?,
+                turbulent_model: c.turbulent_model,
+                laminar_model: c.laminar_model,
+                non_circular_model: c.non_circular_model,
+                roughness_default: c.roughness_default,
+                diameter: c.diameter,
+                independent_materials: l.options.uncertainty.independent_materials.clone(),
+            };
+            u.validate()?;
+            l.options.uncertainty = u;
+            l.changed();
+            Ok(())
+        })
+    }
+}
 
 /// The largest number of samples `hg_line_monte_carlo` accepts: the samples are kept in
 /// memory (8 bytes each), and a larger request is far more than any check needs. The
@@ -61,8 +176,8 @@ pub unsafe extern "C" fn hg_line_monte_carlo(
         // SAFETY: forwarded contract.
         unsafe { ffi::check_sized_out("out", out)? };
         // SAFETY: forwarded contract.
-        let (l, f) = unsafe { (ffi::handle("line", line)?, ffi::handle("fluid", fluid)?) };
-        let m = monte_carlo(l.line()?, &f.fluid, flow, samples, seed)?;
+        let (l, f) = unsafe { crate::line::line_and_fluid(line, fluid)? };
+        let m = monte_carlo(l, f, flow, samples, seed)?;
         let c = hg_monte_carlo {
             struct_size: std::mem::size_of::<hg_monte_carlo>(),
             mean: m.mean,
@@ -81,8 +196,8 @@ mod tests {
     use super::*;
     use crate::ffi::{HG_ERR_INVALID, HG_ERR_OUT_OF_RANGE, HG_OK};
     use crate::fluid::{hg_fluid_free, hg_fluid_water};
+    use crate::line::hg_line_add_pipe_material;
     use crate::line::{hg_line_add_fitting, hg_line_free, hg_line_new};
-    use crate::line_more::hg_line_add_pipe_material;
     use hydrograde::fitting::Fitting;
     use hydrograde::fluid::Fluid;
     use hydrograde::line::{Element, Line};

@@ -2,12 +2,10 @@
 //! materials, custom ducts, roughness ranges, K spreads, the turbulent diameter and the
 //! uncertainty sources.
 
-use crate::ffi::sized;
-use crate::ffi::{self, FfiResult, guard, put};
+use crate::ffi::{self, FfiResult};
 use crate::line::{hg_line, refer, with_line};
 use crate::section::{HG_SECTION_CIRCLE, section_of};
 use hydrograde::Error;
-use hydrograde::band::UncertaintyOptions;
 use hydrograde::fitting::Fitting;
 use hydrograde::line::Element;
 use hydrograde::pipe::Pipe;
@@ -427,119 +425,6 @@ pub unsafe extern "C" fn hg_line_set_turbulent_diameter(line: *mut hg_line, mode
     unsafe {
         with_line(line, |l| {
             l.options.turbulent_diameter = turbulent_mode(mode)?;
-            l.changed();
-            Ok(())
-        })
-    }
-}
-
-/// Which uncertainty sources the bands of a line include, and their sizes (relative
-/// standard uncertainties, k = 1). Fill it with `hg_uncertainty_options_default`.
-#[repr(C)]
-#[derive(Debug, Clone, Copy, PartialEq)]
-pub struct hg_uncertainty_options {
-    /// Size of this struct in bytes, set by `hg_uncertainty_options_default`.
-    pub struct_size: usize,
-    /// 1 to include the friction correlation's model uncertainty, else 0.
-    pub friction_model: i32,
-    /// 1 to include wall roughness, else 0.
-    pub roughness: i32,
-    /// 1 to include the fluid's density and viscosity uncertainties, else 0.
-    pub fluid: i32,
-    /// 1 to include fitting K spreads, else 0.
-    pub fittings: i32,
-    /// 1 to include equipment spreads, else 0.
-    pub equipment: i32,
-    /// Model uncertainty of turbulent flow in round pipe.
-    pub turbulent_model: f64,
-    /// Model uncertainty of laminar flow.
-    pub laminar_model: f64,
-    /// Model uncertainty of turbulent flow in non-circular ducts.
-    pub non_circular_model: f64,
-    /// Relative uncertainty of roughness where a pipe states no range.
-    pub roughness_default: f64,
-    /// Relative uncertainty of every bore (manufacturing tolerance).
-    pub diameter: f64,
-}
-sized!(hg_uncertainty_options, diameter: f64);
-
-fn uncertainty_to_c(u: &UncertaintyOptions) -> hg_uncertainty_options {
-    hg_uncertainty_options {
-        struct_size: std::mem::size_of::<hg_uncertainty_options>(),
-        friction_model: i32::from(u.friction_model),
-        roughness: i32::from(u.roughness),
-        fluid: i32::from(u.fluid),
-        fittings: i32::from(u.fittings),
-        equipment: i32::from(u.equipment),
-        turbulent_model: u.turbulent_model,
-        laminar_model: u.laminar_model,
-        non_circular_model: u.non_circular_model,
-        roughness_default: u.roughness_default,
-        diameter: u.diameter,
-    }
-}
-
-fn flag(name: &'static str, v: i32) -> FfiResult<bool> {
-    match v {
-        0 => Ok(false),
-        1 => Ok(true),
-        _ => Err(Error::out_of_range(name, f64::from(v), "must be 0 or 1").into()),
-    }
-}
-
-/// Fills `opts` with the library's default uncertainty sources and sets its
-/// `struct_size`.
-///
-/// Returns `HG_OK` or `HG_ERR_NULL_POINTER`. Thread-safe.
-///
-/// # Safety
-/// `opts` must be NULL or point to a writable `hg_uncertainty_options`.
-#[unsafe(no_mangle)]
-pub unsafe extern "C" fn hg_uncertainty_options_default(opts: *mut hg_uncertainty_options) -> i32 {
-    // SAFETY: forwarded contract.
-    guard(|| unsafe {
-        put(
-            "opts",
-            opts,
-            uncertainty_to_c(&UncertaintyOptions::default()),
-        )
-    })
-}
-
-/// Sets the uncertainty sources of the bands of `line` (see `hg_uncertainty_options`).
-///
-/// Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a negative size or a
-/// flag other than 0 or 1; `HG_ERR_INVALID` for a `struct_size` too small;
-/// `HG_ERR_NULL_POINTER`. Needs exclusive use of `line`.
-///
-/// # Safety
-/// `line` must be NULL or a live handle used by no other thread; `opts` NULL or a
-/// readable `hg_uncertainty_options`.
-#[unsafe(no_mangle)]
-pub unsafe extern "C" fn hg_line_set_uncertainty(
-    line: *mut hg_line,
-    opts: *const hg_uncertainty_options,
-) -> i32 {
-    // SAFETY: forwarded contract.
-    unsafe {
-        with_line(line, |l| {
-            let d = uncertainty_to_c(&UncertaintyOptions::default());
-            let c = ffi::read_sized("opts", opts, d)?;
-            let u = UncertaintyOptions {
-                friction_model: flag("friction_model", c.friction_model)?,
-                roughness: flag("roughness", c.roughness)?,
-                fluid: flag("fluid", c.fluid)?,
-                fittings: flag("fittings", c.fittings)?,
-                equipment: flag("equipment", c.equipment)?,
-                turbulent_model: c.turbulent_model,
-                laminar_model: c.laminar_model,
-                non_circular_model: c.non_circular_model,
-                roughness_default: c.roughness_default,
-                diameter: c.diameter,
-                independent_materials: l.options.uncertainty.independent_materials.clone(),
-            };
-            u.validate()?;
-            l.options.uncertainty = u;
             l.changed();
             Ok(())
         })

@@ -1,5 +1,8 @@
 //! The Darcy friction factor: scalar, with derivatives, with options, and in batches.
 
+mod correlation;
+pub use correlation::*;
+
 use crate::ffi::{self, FfiResult, bad_constant, guard, out_ptr, put};
 use hydrograde::friction::{self, Correlation, Friction, Options, Regime, Transition};
 
