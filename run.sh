@@ -4,6 +4,8 @@
 #   ./run.sh demo    run the main job on the built-in demo data (Rust, then C and Python)
 #   ./run.sh test    run every test suite: Rust, C/C++ and Python
 #   ./run.sh bench   run the benchmarks and the side-by-side comparison
+#   ./run.sh windows build the Windows DLLs (x64, x86) into dist/windows (cached; see
+#                    scripts/windows/build.sh)
 #
 # Each command installs what it needs, idempotently: a Python virtual environment in
 # .venv with the packages of tests/requirements.txt, and (for the C suite) cbindgen and
@@ -67,6 +69,24 @@ cmd_test() {
     say "Python"
     bash scripts/test-python.sh
   fi
+  test_windows
+}
+
+cmd_windows() {
+  say "Windows DLLs (x64, x86)"
+  bash scripts/windows/build.sh
+}
+
+# The spreadsheet door: the module against its specification, the ten mutations, and the
+# DLLs (built or taken from the cache) under Wine against the Linux library.
+test_windows() {
+  say "Windows: spreadsheet module, mutations, DLLs under Wine"
+  .venv/bin/python scripts/windows/gen_vba.py --check
+  .venv/bin/python tests/c/check_vba.py
+  .venv/bin/python scripts/windows/mutate_vba.py
+  .venv/bin/python capi/excel/make_example.py --check
+  bash scripts/windows/wine.sh
+  .venv/bin/python tests/windows/test_dll.py
 }
 
 cmd_bench() {
@@ -81,5 +101,6 @@ case "${1:-}" in
   demo) cmd_demo ;;
   test) cmd_test ;;
   bench) cmd_bench ;;
-  *) echo "usage: ./run.sh demo|test|bench" >&2; exit 2 ;;
+  windows) cmd_windows ;;
+  *) echo "usage: ./run.sh demo|test|bench|windows" >&2; exit 2 ;;
 esac

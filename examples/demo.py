@@ -148,7 +148,7 @@ def breakdown_rows(r: hg.LineResult) -> List[Tuple[str, ...]]:
 
 
 def print_breakdown(r: hg.LineResult, pressure_unit: str) -> None:
-    head = ("#", "element", "V m/s", "Re", "f or K", "loss m", "band (k = 2) m",
+    head = ("#", "element", "V m/s", "Re", "f or K", "loss m", "band (95 %) m",
             "largest source", "warnings")
     rows = [head] + breakdown_rows(r)
     widths = [max(len(row[c]) for row in rows) for c in range(len(head))]
@@ -283,7 +283,7 @@ def main(argv: List[str]) -> int:
             numbers()
             return 0
         print(f"hydrograde {hg.__version__} demo (Python): invented scenarios, engineering "
-              "estimates with k = 2 bands.")
+              "estimates with 95 % bands.")
         orchard()
         duct()
     except hg.HydrogradeError as e:

@@ -6,6 +6,8 @@
 #   scripts/bench.sh compare    only the Python comparison
 #   scripts/bench.sh criterion  only the criterion suites
 #   scripts/bench.sh profile    only the callgrind instruction counts (scripts/profile.sh)
+#   scripts/bench.sh bands      only the band timings against line length (about 1 min)
+#   scripts/bench.sh readme     README's Performance tables from the last runs' tables
 #
 # The ratio table and the comparison each run in one process, so their ratios compare
 # like with like on a busy machine; the targets and whether they are met are printed at
@@ -16,6 +18,10 @@ set -euo pipefail
 cd "$(dirname "${BASH_SOURCE[0]}")/.."
 export CARGO_BUILD_JOBS="${CARGO_BUILD_JOBS:-2}"
 what="${1:-all}"
+# Each part's table also goes to target/bench/, from which `readme` rebuilds the
+# Performance tables in README.md (between the bench-table markers): never typed by hand.
+out=target/bench
+mkdir -p "$out"
 
 say() { printf '\n== %s\n' "$*"; }
 
@@ -34,7 +40,7 @@ ratios() {
   fi
   say "Rust ratio table (one process)"
   cargo build -q --release -p hydrograde-benches --bin ratios
-  target/release/ratios "${args[@]}"
+  target/release/ratios "${args[@]}" | tee "$out/ratios.md"
 }
 
 python_env() {
@@ -55,23 +61,58 @@ python_env() {
 compare() {
   python_env
   say "Python comparison (one process)"
-  .venv/bin/python benches/compare.py
+  .venv/bin/python benches/compare.py | tee "$out/compare.md"
 }
 
 profile() {
   if command -v valgrind >/dev/null; then
     say "instructions per point (callgrind; reproducible on a busy machine)"
-    bash scripts/profile.sh
+    bash scripts/profile.sh | tee "$out/profile.md"
   else
     say "valgrind not installed: instruction counts skipped"
   fi
 }
 
+bands() {
+  say "band timings against line length (one thread)"
+  cargo run -q --release -p hydrograde-benches --bin bands
+}
+
+readme() {
+  say "README.md performance tables (from $out/*.md)"
+  python3 - "$out" <<'PY'
+import sys
+from pathlib import Path
+
+out = Path(sys.argv[1])
+parts = []
+for name, title in (("ratios", "Rust, one process"), ("compare", "Python, one process"),
+                    ("profile", "instructions per point (callgrind, AVX2 at most under valgrind)")):
+    f = out / f"{name}.md"
+    if f.exists():
+        text = f.read_text()
+        # From the first summary line on (build chatter before it is dropped).
+        start = min((i for i in (text.find("hydrograde speed"), text.find("Python comparison"),
+                                 text.find("| workload")) if i >= 0), default=0)
+        parts.append(f"**{title}** (`scripts/bench.sh {name}`)\n\n" + text[start:].strip())
+readme = Path("README.md")
+s = readme.read_text()
+begin, end = "<!-- bench-table:begin -->", "<!-- bench-table:end -->"
+i, j = s.find(begin), s.find(end)
+if i < 0 or j < 0:
+    sys.exit("README.md has no bench-table markers")
+readme.write_text(s[: i + len(begin)] + "\n" + "\n\n".join(parts) + "\n" + s[j:])
+print("README.md updated")
+PY
+}
+
 case "$what" in
-  all) criterion; ratios; compare; profile ;;
+  all) criterion; ratios; compare; profile; bands; readme ;;
+  bands) bands ;;
+  readme) readme ;;
   profile) profile ;;
   criterion) criterion ;;
   ratios) ratios ;;
   compare) compare ;;
-  *) echo "usage: scripts/bench.sh [all|criterion|ratios|compare|profile]" >&2; exit 2 ;;
+  *) echo "usage: scripts/bench.sh [all|criterion|ratios|compare|profile|bands|readme]" >&2; exit 2 ;;
 esac

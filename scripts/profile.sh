@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
 # Instructions per point of hydrograde's friction paths, counted by callgrind.
-#   scripts/profile.sh [workload ...]     (default: ln, Colebrook scalar and batch, four explicit correlations)
+#   scripts/profile.sh [workload ...]     (default: ln, every correlation per call and through
+#   the batch kernel on the baseline and AVX2 instruction sets, the line)
 # Point generation (workload `none`) is subtracted. `line` is one flow through the
 # 20-element benchmark line (required head), the system curve's work per flow.
 # Each workload runs twice (10k and 20k points); the difference / 10k is the cost of one
@@ -22,7 +23,12 @@ ln=$(( $(per_point ln) - base ))
 cb=$(( $(per_point colebrook) - base ))
 ratio() { awk -v a="$1" -v b="$2" 'BEGIN{printf "%.2f", a/b}'; }
 printf '| workload | instructions per point | vs ln | vs one exact Colebrook call |\n|---|---:|---:|---:|\n'
-for w in ${@:-ln colebrook batch haaland swamee_jain serghides blasius line}; do
+default="ln colebrook batch"
+for c in colebrook haaland swamee_jain churchill serghides blasius fully_rough; do
+  [ "$c" = colebrook ] || default+=" $c"
+  default+=" batch:$c:baseline batch:$c:avx2"
+done
+for w in ${@:-$default line}; do
   n=$(( $(per_point "$w") - base ))
   printf '| %s | %d | %s | %s |\n' "$w" "$n" "$(ratio "$n" "$ln")" "$(ratio "$n" "$cb")"
 done

@@ -154,7 +154,8 @@
 
 /**
  * The largest number of samples `hg_line_monte_carlo` accepts: the samples are kept in
- * memory (8 bytes each), and a larger request is far more than any check needs.
+ * memory (8 bytes each), and a larger request is far more than any check needs. The
+ * same limit holds in every binding.
  */
 #define HG_MONTE_CARLO_MAX_SAMPLES 10000000
 
@@ -318,6 +319,11 @@
  * Equilateral triangle: `a` = side (m), `b` = 0.
  */
 #define HG_SECTION_TRIANGLE 4
+
+/**
+ * The largest number of threads `hg_set_threads` accepts.
+ */
+#define HG_MAX_THREADS 1024
 
 /**
  * A fluid for line evaluations: opaque; made by `hg_fluid_water`, `hg_fluid_air` or
@@ -785,6 +791,45 @@ typedef struct hg_pipe_flow {
 #ifdef __cplusplus
 extern "C" {
 #endif // __cplusplus
+
+/**
+ * The system curve with its 95 % band: at each of the `n` flows `flows[i]` (m³/s),
+ * `nominal[i]` = the required head (m, the same value as `hg_line_system_curve`) and
+ * `low[i]`, `high[i]` = the ends of its band (the band of `hg_line_evaluate`'s required
+ * head at that flow). One pass over the elements per flow; uses all cores above 64
+ * flows, with the same results.
+ *
+ * Returns `HG_OK`; the status of the first failing flow (message "element <i>: ..."),
+ * with the outputs unchanged; `HG_ERR_INVALID` for `n` = 0 or a line that cannot be
+ * built; `HG_ERR_NULL_POINTER`. Thread-safe (the line is only read).
+ *
+ * # Safety
+ * `line` and `fluid` must be NULL or live handles; `flows`, `low`, `nominal` and `high`
+ * NULL or valid for `n` doubles (the outputs may not overlap `flows` or each other).
+ */
+int32_t hg_line_system_curve_band(const struct hg_line *line,
+                                  const struct hg_fluid *fluid,
+                                  const double *flows,
+                                  size_t n,
+                                  double *low,
+                                  double *nominal,
+                                  double *high);
+
+/**
+ * Treats the pipes of catalogue material `material` as independent in the bands (each
+ * pipe its own roughness error, as for pipes from different supplies) when `independent`
+ * is 1, or as sharing one error (the default) when 0.
+ *
+ * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` for a name not in the material catalogue;
+ * `HG_ERR_OUT_OF_RANGE` for `independent` other than 0 or 1; `HG_ERR_NULL_POINTER`.
+ * Not thread-safe for the same line (it changes the line).
+ *
+ * # Safety
+ * `line` must be NULL or a live handle; `material` NULL or a NUL-terminated string.
+ */
+int32_t hg_line_set_material_independent(struct hg_line *line,
+                                         const char *material,
+                                         int32_t independent);
 
 /**
  * The `HG_CORRELATION_*` value of a correlation name: "colebrook", "haaland",
@@ -2292,6 +2337,27 @@ int32_t hg_turbulent_diameter(int32_t shape,
                               double b,
                               int32_t mode,
                               double *diameter);
+
+/**
+ * Sets the number of threads the batch calls (`hg_darcy_factor_batch`,
+ * `hg_line_system_curve`) may use, 1 to `HG_MAX_THREADS`. With 1 the library never
+ * starts a thread: every call runs on the caller's thread (the setting for an embedding
+ * program that runs its own threads, and for valgrind). The default is read once, at the
+ * first batch, from the environment variable `HYDROGRADE_THREADS` (a whole number ≥ 1),
+ * else it is the number of cores. The threads belong to the library's own pool; results
+ * are the same bit for bit whatever the setting.
+ *
+ * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` for 0 or more than `HG_MAX_THREADS` (the
+ * setting is then unchanged). Thread-safe: a batch running when the setting changes
+ * finishes with the threads it started with.
+ */
+int32_t hg_set_threads(size_t n);
+
+/**
+ * The number of threads the batch calls may use (≥ 1); see `hg_set_threads`.
+ * Thread-safe.
+ */
+size_t hg_threads(void);
 
 /**
  * Converts `value` from unit `from` to unit `to` into `*out`, with the exact factors of

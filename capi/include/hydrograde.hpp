@@ -1,7 +1,9 @@
 // hydrograde.hpp: header-only C++17 wrapper of the hydrograde C ABI (hydrograde.h).
 //
 // Every call that fails throws hydrograde::error, which carries the library's message
-// and its HG_ERR_* status. Handles are RAII types (movable, not copyable). Units are SI.
+// and its HG_ERR_* status; for hot loops the try_* functions return a status_or<T>
+// instead and never throw. Arrays come as std::vector or as pointer + length (any
+// contiguous storage). Handles are RAII types (movable, not copyable). Units are SI.
 // Results are engineering estimates with stated uncertainty; designs must be checked by
 // a competent engineer against the codes and standards that apply where they are built.
 #ifndef HYDROGRADE_HPP
@@ -45,6 +47,68 @@ inline void check(int32_t status) {
   if (status != HG_OK) throw error(status, last_error());
 }
 
+/// A value or the status of the failed call that should have made it (never throws).
+template <class T>
+struct status_or {
+  /// HG_OK or an HG_ERR_* code; hg_last_error / last_error() give the message.
+  int32_t status;
+  /// The value; meaningful only when ok().
+  T value;
+  /// True when status is HG_OK.
+  bool ok() const noexcept { return status == HG_OK; }
+};
+
+/// Friction correlations (the HG_CORRELATION_* values).
+enum class correlation : int32_t {
+  colebrook = HG_CORRELATION_COLEBROOK,
+  haaland = HG_CORRELATION_HAALAND,
+  swamee_jain = HG_CORRELATION_SWAMEE_JAIN,
+  churchill = HG_CORRELATION_CHURCHILL,
+  serghides = HG_CORRELATION_SERGHIDES,
+  blasius = HG_CORRELATION_BLASIUS,
+  fully_rough = HG_CORRELATION_FULLY_ROUGH,
+};
+
+/// Flow regimes (the HG_REGIME_* values); none for an element without one.
+enum class regime : int32_t {
+  none = HG_REGIME_NONE,
+  laminar = HG_REGIME_LAMINAR,
+  transitional = HG_REGIME_TRANSITIONAL,
+  turbulent = HG_REGIME_TURBULENT,
+};
+
+/// Warning bits (the HG_WARN_* values) of a result's `warnings` field.
+enum class warning : uint32_t {
+  reynolds_out_of_range = HG_WARN_REYNOLDS_OUT_OF_RANGE,
+  roughness_out_of_range = HG_WARN_ROUGHNESS_OUT_OF_RANGE,
+  transitional_flow = HG_WARN_TRANSITIONAL_FLOW,
+  non_circular_section = HG_WARN_NON_CIRCULAR_SECTION,
+  gas_compressibility = HG_WARN_GAS_COMPRESSIBILITY,
+  below_vapour_pressure = HG_WARN_BELOW_VAPOUR_PRESSURE,
+  fitting_out_of_range = HG_WARN_FITTING_OUT_OF_RANGE,
+};
+
+/// Every warning, in bit order.
+constexpr warning all_warnings[] = {
+    warning::reynolds_out_of_range, warning::roughness_out_of_range, warning::transitional_flow,
+    warning::non_circular_section,  warning::gas_compressibility,    warning::below_vapour_pressure,
+    warning::fitting_out_of_range,
+};
+
+/// True when the warning bits `bits` hold `w`.
+constexpr bool has(uint32_t bits, warning w) noexcept { return (bits & static_cast<uint32_t>(w)) != 0; }
+
+/// The warnings set in `bits`, in bit order.
+inline std::vector<warning> warnings_of(uint32_t bits) {
+  std::vector<warning> out;
+  for (warning w : all_warnings)
+    if (has(bits, w)) out.push_back(w);
+  return out;
+}
+
+/// The regime of an HG_REGIME_* value.
+constexpr regime regime_of(int32_t code) noexcept { return static_cast<regime>(code); }
+
 /// The library version, e.g. "0.1.0".
 inline std::string version() { return hg_version(); }
 
@@ -64,6 +128,19 @@ inline double darcy_factor(double re, double rel_roughness,
   double f = 0.0;
   check(hg_darcy_factor(re, rel_roughness, correlation, &f));
   return f;
+}
+
+/// Darcy friction factor by a correlation given as an enum class value.
+inline double darcy_factor(double re, double rel_roughness, correlation c) {
+  return darcy_factor(re, rel_roughness, static_cast<int32_t>(c));
+}
+
+/// Darcy friction factor without exceptions, for hot loops.
+inline status_or<double> try_darcy_factor(double re, double rel_roughness,
+                                          correlation c = correlation::colebrook) noexcept {
+  status_or<double> r{HG_OK, 0.0};
+  r.status = hg_darcy_factor(re, rel_roughness, static_cast<int32_t>(c), &r.value);
+  return r;
 }
 
 /// A friction factor with its derivatives, regime and warnings (see hg_friction).
@@ -89,6 +166,14 @@ inline hg_friction darcy_factor(double re, double rel_roughness, const hg_fricti
   r.struct_size = sizeof r;
   check(hg_darcy_factor_opts(re, rel_roughness, &opts, &r));
   return r;
+}
+
+/// Friction factors of n points from any contiguous storage into out[0..n) (n = 0 does
+/// nothing; out may be one of the inputs). On failure out is unchanged.
+inline void darcy_factor(const double* re, const double* rel_roughness, std::size_t n, double* out,
+                         correlation c = correlation::colebrook) {
+  if (n == 0) return;
+  check(hg_darcy_factor_batch(re, rel_roughness, n, static_cast<int32_t>(c), out));
 }
 
 /// Friction factors of many points (re and rel_roughness of equal length; empty in,
@@ -270,6 +355,16 @@ inline std::vector<head_loss_result> pipe_head_loss(double diameter, double leng
   return out;
 }
 
+/// Head losses (m) and derivatives (s/m²) of one round pipe at n flows from any
+/// contiguous storage (n = 0 does nothing). On failure the outputs are unchanged.
+inline void pipe_head_loss(double diameter, double length, double roughness, double density,
+                           double viscosity, const double* flows, std::size_t n, double* head_loss,
+                           double* dhead_dflow) {
+  if (n == 0) return;
+  check(hg_pipe_head_loss_batch(diameter, length, roughness, density, viscosity, flows, n, head_loss,
+                                dhead_dflow));
+}
+
 /// The flow state of a straight duct of any section.
 inline hg_pipe_flow duct_flow_state(int32_t shape, double a, double b, double length,
                                     double roughness, double density, double viscosity,
@@ -287,7 +382,6 @@ inline double reynolds(double flow, double diameter, double density, double visc
   return re;
 }
 
-/// Published validity range and accuracy of a correlation (HG_CORRELATION_*).
 /// The diameter (m) turbulent flow in a section uses under mode HG_TURBULENT_DIAMETER_*.
 inline double turbulent_diameter(int32_t shape, double a, double b, int32_t mode) {
   double d = 0.0;
@@ -295,10 +389,13 @@ inline double turbulent_diameter(int32_t shape, double a, double b, int32_t mode
   return d;
 }
 
+/// The published range of a correlation (an unbounded end is +infinity) and its
+/// published largest relative error.
 struct validity {
   double re_min, re_max, rel_roughness_min, rel_roughness_max, accuracy;
 };
 
+/// Published validity range and accuracy of a correlation (HG_CORRELATION_*).
 inline validity correlation_validity(int32_t correlation) {
   validity v{};
   check(hg_correlation_validity(correlation, &v.re_min, &v.re_max, &v.rel_roughness_min,
@@ -549,10 +646,13 @@ class line {
   line& operator=(const line&) = delete;
   ~line() { hg_line_free(l_); }
 
+  /// A round pipe: inside diameter, length and absolute roughness, m.
   line& add_pipe(double diameter, double length, double roughness) {
     check(hg_line_add_pipe(l_, diameter, length, roughness));
     return *this;
   }
+  /// A duct of section `shape` (HG_SECTION_*, dimensions a, b in m), length and
+  /// roughness in m.
   line& add_duct(int32_t shape, double a, double b, double length, double roughness) {
     check(hg_line_add_duct(l_, shape, a, b, length, roughness));
     return *this;
@@ -562,83 +662,103 @@ class line {
     check(hg_line_add_fitting(l_, name.c_str(), diameter));
     return *this;
   }
+  /// A fitting of fixed K on the velocity in diameter (0 = the adjoining pipe's bore).
   line& add_fitting_k(double k, double diameter = 0.0) {
     check(hg_line_add_fitting_k(l_, k, diameter));
     return *this;
   }
+  /// An elevation change, m (up in the flow direction; negative for a drop).
   line& add_rise(double height) {
     check(hg_line_add_rise(l_, height));
     return *this;
   }
+  /// Rated equipment: pressure drop (Pa) at a rating flow (m³/s).
   line& add_equipment(const std::string& name, double drop, double at_flow) {
     check(hg_line_add_equipment(l_, name.c_str(), drop, at_flow));
     return *this;
   }
+  /// Friction options of every pipe (correlation, regime limits, transition).
   line& set_friction_options(const hg_friction_options& o) {
     check(hg_line_set_friction_options(l_, &o));
     return *this;
   }
+  /// A round pipe whose roughness and its range come from a catalogue material.
   line& add_pipe_material(double diameter, double length, const std::string& material) {
     check(hg_line_add_pipe_material(l_, diameter, length, material.c_str()));
     return *this;
   }
+  /// A duct of any shape by area (m²), wetted perimeter (m) and laminar f·Re.
   line& add_custom_duct(double area, double perimeter, double laminar_constant, double length,
                         double roughness) {
     check(hg_line_add_custom_duct(l_, area, perimeter, laminar_constant, length, roughness));
     return *this;
   }
+  /// A sudden expansion between two bores, m.
   line& add_expansion(double d_in, double d_out) {
     check(hg_line_add_expansion(l_, d_in, d_out));
     return *this;
   }
+  /// A sudden contraction between two bores, m.
   line& add_contraction(double d_in, double d_out) {
     check(hg_line_add_contraction(l_, d_in, d_out));
     return *this;
   }
+  /// A fitting by the two-K method (coefficients k1, k_inf; see hg_line_add_two_k).
   line& add_two_k(double k1, double k_inf, double diameter = 0.0) {
     check(hg_line_add_two_k(l_, k1, k_inf, diameter));
     return *this;
   }
+  /// A fitting by the three-K method (coefficients k1, k_inf, k_d; see hg_line_add_three_k).
   line& add_three_k(double k1, double k_inf, double k_d, double diameter = 0.0) {
     check(hg_line_add_three_k(l_, k1, k_inf, k_d, diameter));
     return *this;
   }
+  /// A valve by its flow coefficient Cv (US gal/min at 1 psi).
   line& add_cv(double cv, double diameter = 0.0) {
     check(hg_line_add_cv(l_, cv, diameter));
     return *this;
   }
+  /// A valve by its flow coefficient Kv (m³/h at 1 bar).
   line& add_kv(double kv, double diameter = 0.0) {
     check(hg_line_add_kv(l_, kv, diameter));
     return *this;
   }
+  /// A fitting by its equivalent length in bores (L/D).
   line& add_equivalent_length(double l_over_d, double diameter = 0.0) {
     check(hg_line_add_equivalent_length(l_, l_over_d, diameter));
     return *this;
   }
+  /// A bend of angle (degrees) and relative radius r/D.
   line& add_bend(double angle_deg, double r_over_d, double diameter = 0.0) {
     check(hg_line_add_bend(l_, angle_deg, r_over_d, diameter));
     return *this;
   }
+  /// An entrance from a large space (HG_ENTRANCE_*; r/D for a rounded one).
   line& add_entrance(int32_t kind, double r_over_d = 0.0) {
     check(hg_line_add_entrance(l_, kind, r_over_d));
     return *this;
   }
+  /// An exit into a large space (K = 1).
   line& add_exit() {
     check(hg_line_add_exit(l_));
     return *this;
   }
+  /// The relative spread of fitting `index`'s K (rectangular, for the bands).
   line& set_k_spread(std::size_t index, double spread) {
     check(hg_line_set_k_spread(l_, index, spread));
     return *this;
   }
+  /// The roughness range (m) of pipe `index` for the bands.
   line& set_roughness_range(std::size_t index, double low, double high) {
     check(hg_line_set_roughness_range(l_, index, low, high));
     return *this;
   }
+  /// The diameter turbulent flow in non-circular ducts uses (HG_TURBULENT_DIAMETER_*).
   line& set_turbulent_diameter(int32_t mode) {
     check(hg_line_set_turbulent_diameter(l_, mode));
     return *this;
   }
+  /// The uncertainty sources of the bands.
   line& set_uncertainty(const hg_uncertainty_options& o) {
     check(hg_line_set_uncertainty(l_, &o));
     return *this;
@@ -663,10 +783,12 @@ class line {
     check(hg_line_monte_carlo(l_, f.get(), flow, samples, seed, &r));
     return r;
   }
+  /// The static pressure at the inlet, Pa absolute (0 clears it).
   line& set_inlet_pressure(double pressure) {
     check(hg_line_set_inlet_pressure(l_, pressure));
     return *this;
   }
+  /// The number of elements.
   std::size_t size() const {
     std::size_t n = 0;
     check(hg_line_count(l_, &n));
@@ -683,6 +805,12 @@ class line {
   std::vector<std::pair<std::string, double>> band_sources(const fluid& f, double flow) const {
     return evaluate(f, flow).band_sources();
   }
+  /// Required head and its derivative without exceptions, for a simulator's Newton loop.
+  status_or<head_loss_result> try_required_head(const fluid& f, double flow) const noexcept {
+    status_or<head_loss_result> r{HG_OK, {0.0, 0.0}};
+    r.status = hg_line_required_head(l_, f.get(), flow, &r.value.head_loss, &r.value.dhead_dflow);
+    return r;
+  }
   /// Required head (m) and its derivative (s/m²) at a flow: a simulator's Newton call.
   head_loss_result required_head(const fluid& f, double flow) const {
     head_loss_result r{};
@@ -695,11 +823,25 @@ class line {
     check(hg_line_with_uniform_diameter(l_, diameter, &out));
     return line(out);
   }
+  /// The flow (m³/s) at which the required head is `head` (m), with its band.
   flow_solution flow_for_head(const fluid& f, double head) const {
     flow_solution s{};
     check(hg_line_flow_for_head(l_, f.get(), head, &s.flow, &s.flow_low, &s.flow_high));
     return s;
   }
+  /// Required heads (m) at n flows (m³/s) from any contiguous storage into heads[0..n)
+  /// (heads may be flows itself; n = 0 does nothing). On failure heads is unchanged.
+  void system_curve(const fluid& f, const double* flows, std::size_t n, double* heads) const {
+    if (n == 0) return;
+    check(hg_line_system_curve(l_, f.get(), flows, n, heads));
+  }
+  /// Required heads without exceptions, for a simulator's hot loop: the status of the
+  /// call (heads unchanged on failure).
+  int32_t try_system_curve(const fluid& f, const double* flows, std::size_t n,
+                           double* heads) const noexcept {
+    return hg_line_system_curve(l_, f.get(), flows, n, heads);
+  }
+  /// The system curve: the required head (m) at each flow (m³/s).
   std::vector<double> system_curve(const fluid& f, const std::vector<double>& flows) const {
     std::vector<double> heads(flows.size());
     if (flows.empty()) return heads;

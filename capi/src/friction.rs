@@ -307,17 +307,14 @@ pub unsafe extern "C" fn hg_darcy_factor_batch(
                 ffi::slice("rel_roughness", rel_roughness, n)?,
             )
         };
-        let in_place = ffi::overlaps(re, n, out, n) || ffi::overlaps(rel_roughness, n, out, n);
-        if in_place {
-            let (r, e) = (r.to_vec(), e.to_vec());
-            // SAFETY: the inputs were copied, so `out` is not aliased.
-            let o = unsafe { ffi::slice_mut("out", out, n)? };
-            friction::darcy_factor_batch(&r, &e, &opts, o)?;
-        } else {
-            // SAFETY: `out` does not overlap the inputs.
-            let o = unsafe { ffi::slice_mut("out", out, n)? };
-            friction::darcy_factor_batch(r, e, &opts, o)?;
-        }
+        // Checked before computing, without borrowing (it may alias an input).
+        ffi::check_len("out", out.cast_const(), n)?;
+        // Computed aside, so a failing point leaves `out` untouched (one copy of n
+        // doubles, small beside n Colebrook solves).
+        let mut f = vec![0.0; n];
+        friction::darcy_factor_batch(r, e, &opts, &mut f)?;
+        // SAFETY: `r` and `e` are no longer used, so `out` may alias them.
+        unsafe { ffi::slice_mut("out", out, n)? }.copy_from_slice(&f);
         Ok(())
     })
 }

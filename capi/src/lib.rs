@@ -10,6 +10,7 @@
 
 #![allow(non_camel_case_types)]
 
+mod band_curve;
 mod correlation;
 mod ffi;
 mod fitting;
@@ -28,8 +29,10 @@ mod pipe;
 mod section;
 /// cbindgen:ignore
 mod sheet;
+mod threads;
 mod units;
 
+pub use band_curve::*;
 pub use correlation::*;
 pub use ffi::{
     HG_ERR_BUFFER_TOO_SMALL, HG_ERR_INTERNAL, HG_ERR_INVALID, HG_ERR_NO_SOLUTION,
@@ -50,6 +53,7 @@ pub use meta::*;
 pub use pipe::*;
 pub use section::*;
 pub use sheet::*;
+pub use threads::*;
 pub use units::*;
 
 #[cfg(test)]

@@ -7,8 +7,11 @@ use crate::line::hg_line;
 use hydrograde::band::monte_carlo;
 
 /// The largest number of samples `hg_line_monte_carlo` accepts: the samples are kept in
-/// memory (8 bytes each), and a larger request is far more than any check needs.
+/// memory (8 bytes each), and a larger request is far more than any check needs. The
+/// same limit holds in every binding.
 pub const HG_MONTE_CARLO_MAX_SAMPLES: usize = 10_000_000;
+// The header needs a literal; the build stops if it drifts from the core's limit.
+const _: () = assert!(HG_MONTE_CARLO_MAX_SAMPLES == hydrograde::band::MAX_SAMPLES);
 
 /// The result of `hg_line_monte_carlo`: the required head sampled with the line's
 /// uncertainty sources. Set `struct_size` to `sizeof(hg_monte_carlo)` before the call.
@@ -59,13 +62,6 @@ pub unsafe extern "C" fn hg_line_monte_carlo(
         unsafe { ffi::check_sized_out("out", out)? };
         // SAFETY: forwarded contract.
         let (l, f) = unsafe { (ffi::handle("line", line)?, ffi::handle("fluid", fluid)?) };
-        if samples > HG_MONTE_CARLO_MAX_SAMPLES {
-            return Err(ffi::size_out_of_range(
-                "samples",
-                samples,
-                format!("must be at most {HG_MONTE_CARLO_MAX_SAMPLES}"),
-            ));
-        }
         let m = monte_carlo(l.line()?, &f.fluid, flow, samples, seed)?;
         let c = hg_monte_carlo {
             struct_size: std::mem::size_of::<hg_monte_carlo>(),

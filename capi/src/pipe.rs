@@ -208,15 +208,17 @@ pub unsafe extern "C" fn hg_pipe_head_loss_batch(
                 "dhead_dflow: must not overlap head_loss",
             ));
         }
-        // SAFETY: the flows were copied, and the two outputs do not overlap.
-        let (h, d) = unsafe {
-            (
-                ffi::slice_mut("head_loss", head_loss, n)?,
-                ffi::slice_mut("dhead_dflow", dhead_dflow, n)?,
-            )
-        };
+        ffi::check_len("head_loss", head_loss.cast_const(), n)?;
+        ffi::check_len("dhead_dflow", dhead_dflow.cast_const(), n)?;
+        // Computed aside, so a failing flow leaves both outputs untouched.
+        let (mut hs, mut ds) = (vec![0.0; n], vec![0.0; n]);
         for (i, &qi) in q.iter().enumerate() {
-            (h[i], d[i]) = pipe.head_loss(&fluid, qi).map_err(|e| e.at_index(i))?;
+            (hs[i], ds[i]) = pipe.head_loss(&fluid, qi).map_err(|e| e.at_index(i))?;
+        }
+        // SAFETY: the flows were copied, and the two outputs do not overlap.
+        unsafe {
+            ffi::slice_mut("head_loss", head_loss, n)?.copy_from_slice(&hs);
+            ffi::slice_mut("dhead_dflow", dhead_dflow, n)?.copy_from_slice(&ds);
         }
         Ok(())
     })

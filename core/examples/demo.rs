@@ -74,7 +74,7 @@ fn band(b: &Band) -> String {
 fn print_breakdown(r: &LineResult) {
     println!(
         "  {:>2}  {:<22} {:>6} {:>9} {:>8}  {:>9}  {:<17} {:<22} warnings",
-        "#", "element", "V m/s", "Re", "f or K", "loss m", "band (k = 2) m", "largest source"
+        "#", "element", "V m/s", "Re", "f or K", "loss m", "band (95 %) m", "largest source"
     );
     for (i, e) in r.elements.iter().enumerate() {
         let coef = match (e.friction_factor, e.k) {
@@ -266,7 +266,7 @@ fn main() {
         return;
     }
     println!(
-        "hydrograde {} demo: invented scenarios, engineering estimates with k = 2 bands.",
+        "hydrograde {} demo: invented scenarios, engineering estimates with 95 % bands.",
         hydrograde::VERSION
     );
     if let Err(e) = orchard().and_then(|_| duct()) {

@@ -37,6 +37,7 @@
 
 use crate::math;
 use serde::{Deserialize, Serialize};
+use std::borrow::Cow;
 use std::sync::OnceLock;
 
 /// Coverage factor of a band whose output is close to normal (JCGM 100:2008 §6.3.3:
@@ -62,7 +63,7 @@ pub enum Source {
     /// The friction correlation's model error (one for the whole line).
     FrictionModel,
     /// The roughness of one catalogue material, shared by every pipe of it.
-    Material(String),
+    Material(Cow<'static, str>),
     /// The roughness of one pipe on its own (no material, a range stated for that pipe,
     /// or a material whose pipes are treated as independent).
     PipeRoughness {
@@ -76,13 +77,13 @@ pub enum Source {
     /// The fluid's viscosity.
     Viscosity,
     /// The K of one catalogue entry, shared by every instance of it.
-    CatalogueK(String),
+    CatalogueK(Cow<'static, str>),
     /// The K of one fitting not from the catalogue.
     FittingK {
         /// Index of the fitting in the line.
         element: usize,
         /// The fitting's method name.
-        name: String,
+        name: Cow<'static, str>,
     },
     /// The rating of one piece of equipment.
     Equipment {
@@ -276,26 +277,35 @@ impl Band {
     /// variances add, the shifts add, and the half-width is `k·u` with `k` from
     /// [`coverage_factor`] on the largest rectangular source's share of the variance.
     pub fn from_terms(nominal: f64, terms: impl IntoIterator<Item = (Source, Term)>) -> Band {
-        let mut kept: Vec<(Source, f64)> = Vec::new();
+        let terms = terms.into_iter();
+        // Shares hold the variances until the total is known.
+        let mut kept: Vec<Contribution> = Vec::with_capacity(terms.size_hint().0);
         let (mut var, mut shift, mut rect) = (0.0, 0.0, 0.0f64);
-        for (s, t) in terms {
+        for (source, t) in terms {
             let v = t.u * t.u;
             if !v.is_finite() || v == 0.0 {
                 continue;
             }
-            if s.shape() == Shape::Rectangular {
+            if source.shape() == Shape::Rectangular {
                 rect = rect.max(v);
             }
             var += v;
             if t.shift.is_finite() {
                 shift += t.shift;
             }
-            kept.push((s, v));
+            kept.push(Contribution { source, share: v });
         }
         if var == 0.0 {
             return Band::exact(nominal);
         }
-        kept.sort_by(|a, b| b.1.total_cmp(&a.1).then_with(|| a.0.cmp(&b.0)));
+        kept.sort_by(|a, b| {
+            b.share
+                .total_cmp(&a.share)
+                .then_with(|| a.source.cmp(&b.source))
+        });
+        for c in &mut kept {
+            c.share /= var;
+        }
         let share = rect / var;
         let k = coverage_factor(share);
         let half = k * var.sqrt();
@@ -310,13 +320,7 @@ impl Band {
             } else {
                 Coverage::Normal
             },
-            contributions: kept
-                .into_iter()
-                .map(|(source, v)| Contribution {
-                    source,
-                    share: v / var,
-                })
-                .collect(),
+            contributions: kept,
         }
     }
 
@@ -571,7 +575,7 @@ pub fn log_uniform(nominal: f64, low: f64, high: f64) -> (f64, f64) {
 pub const MONTE_CARLO_SAMPLES: usize = 20_000;
 
 mod monte;
-pub use monte::{MonteCarlo, monte_carlo};
+pub use monte::{MAX_SAMPLES, MIN_SAMPLES, MonteCarlo, monte_carlo};
 
 #[cfg(test)]
 mod tests {

@@ -12,7 +12,9 @@
 //! checked by a competent engineer against the codes and standards that apply where
 //! they are built.
 
-#![forbid(unsafe_code)]
+// `unsafe` only in friction/kernel.rs (calls into code compiled for an instruction set
+// the processor was checked to have); everywhere else it stays an error.
+#![deny(unsafe_code)]
 #![warn(missing_docs)]
 
 // One module per domain; bindings mirror these names.
@@ -28,6 +30,7 @@ pub mod pipe;
 pub mod roughness;
 pub mod section;
 pub mod sizes;
+pub mod threads;
 pub mod units;
 pub mod warning;
 
@@ -46,6 +49,7 @@ pub use units::{STANDARD_GRAVITY, convert, convert_head};
 pub use band::{Band, Contribution, UncertaintyOptions};
 pub use line::{Element, Equipment, Limit, Line, LineOptions, LineResult, PumpCurve, split_flow};
 pub use pipe::Pipe;
+pub use threads::{set_threads, threads};
 
 /// The crate version, from Cargo.toml.
 pub const VERSION: &str = env!("CARGO_PKG_VERSION");

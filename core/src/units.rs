@@ -83,12 +83,16 @@ impl Dimension {
     }
 }
 
-/// A unit: SI value = (value + offset) × scale. The offset is zero except for the
-/// temperature scales, where it moves the zero to absolute zero before scaling.
+/// A unit: SI value = (value + offset) × scale / per. The offset is zero except for the
+/// temperature scales, where it moves the zero to absolute zero before scaling. A
+/// decimal or sexagesimal submultiple divides by its exact integer `per` instead of
+/// multiplying by an inexact 10⁻ⁿ, so 4.5 L/s is the double nearest 0.0045 m³/s (a
+/// division is correctly rounded; 4.5 × 1e-3 is not).
 struct Unit {
     name: &'static str,
     dimension: Dimension,
     scale: f64,
+    per: f64,
     offset: f64,
 }
 
@@ -97,6 +101,17 @@ const fn unit(name: &'static str, dimension: Dimension, scale: f64) -> Unit {
         name,
         dimension,
         scale,
+        per: 1.0,
+        offset: 0.0,
+    }
+}
+
+const fn part(name: &'static str, dimension: Dimension, per: f64) -> Unit {
+    Unit {
+        name,
+        dimension,
+        scale: 1.0,
+        per,
         offset: 0.0,
     }
 }
@@ -104,14 +119,14 @@ const fn unit(name: &'static str, dimension: Dimension, scale: f64) -> Unit {
 /// The table of units. Factors: NIST SP 811 (2008), Appendix B, all exact (see module doc).
 const UNITS: [Unit; 26] = [
     unit("m", Dimension::Length, 1.0),
-    unit("mm", Dimension::Length, 1e-3),
-    unit("cm", Dimension::Length, 1e-2),
+    part("mm", Dimension::Length, 1e3),
+    part("cm", Dimension::Length, 1e2),
     unit("in", Dimension::Length, INCH),
     unit("ft", Dimension::Length, FOOT),
     unit("m3/s", Dimension::Flow, 1.0),
-    unit("L/s", Dimension::Flow, 1e-3),
-    unit("L/min", Dimension::Flow, 1e-3 / 60.0),
-    unit("m3/h", Dimension::Flow, M3_PER_HOUR),
+    part("L/s", Dimension::Flow, 1e3),
+    part("L/min", Dimension::Flow, 6e4),
+    part("m3/h", Dimension::Flow, 3600.0),
     unit("gpm", Dimension::Flow, GPM),
     unit("Pa", Dimension::Pressure, 1.0),
     unit("kPa", Dimension::Pressure, 1e3),
@@ -120,19 +135,21 @@ const UNITS: [Unit; 26] = [
     unit("psi", Dimension::Pressure, PSI),
     unit("atm", Dimension::Pressure, ATMOSPHERE),
     unit("Pa*s", Dimension::Viscosity, 1.0),
-    unit("mPa*s", Dimension::Viscosity, 1e-3),
-    unit("cP", Dimension::Viscosity, 1e-3),
+    part("mPa*s", Dimension::Viscosity, 1e3),
+    part("cP", Dimension::Viscosity, 1e3),
     unit("K", Dimension::Temperature, 1.0),
     Unit {
         name: "degC",
         dimension: Dimension::Temperature,
         scale: 1.0,
+        per: 1.0,
         offset: 273.15,
     },
     Unit {
         name: "degF",
         dimension: Dimension::Temperature,
-        scale: 5.0 / 9.0,
+        scale: 5.0,
+        per: 9.0,
         offset: 459.67,
     },
     unit("m/s", Dimension::Velocity, 1.0),
@@ -154,20 +171,26 @@ fn lookup(name: &str, parameter: &'static str) -> Result<&'static Unit> {
 
 #[inline]
 fn to_si(u: &Unit, value: f64) -> f64 {
-    if u.offset == 0.0 {
-        value * u.scale
+    let v = if u.offset == 0.0 {
+        value
     } else {
-        (value + u.offset) * u.scale
+        value + u.offset
+    };
+    if u.scale == 1.0 {
+        v / u.per
+    } else {
+        v * u.scale / u.per
     }
 }
 
 #[inline]
 fn from_si(u: &Unit, si: f64) -> f64 {
-    if u.offset == 0.0 {
+    let v = if u.per == 1.0 {
         si / u.scale
     } else {
-        si / u.scale - u.offset
-    }
+        si * u.per / u.scale
+    };
+    if u.offset == 0.0 { v } else { v - u.offset }
 }
 
 fn mismatch(from: &Unit, to: &Unit) -> Error {
@@ -264,17 +287,14 @@ pub fn convert_head(value: f64, from: &str, to: &str, density: f64) -> Result<f6
     }
     // Work in pascals; a head of h metres is ρ g₀ h pascals.
     let weight = density * STANDARD_GRAVITY;
-    let pa = match uf.dimension {
-        Dimension::Head => value * uf.scale * weight,
-        _ => value * uf.scale,
-    };
+    let si = to_si(uf, value);
     if uf.dimension == ut.dimension {
         // Same dimension: skip the density so the result is exact in the factors alone.
-        return Ok(value * uf.scale / ut.scale);
+        return Ok(from_si(ut, si));
     }
     Ok(match ut.dimension {
-        Dimension::Head => pa / weight / ut.scale,
-        _ => pa / ut.scale,
+        Dimension::Head => from_si(ut, si / weight),
+        _ => from_si(ut, si * weight),
     })
 }
 

@@ -159,7 +159,9 @@ impl PyBand {
 /// non-circular turbulent friction), ``roughness`` (bool), ``roughness_default`` (used
 /// for pipes with no material range), ``diameter`` (manufacturing tolerance of every
 /// bore), ``fluid`` (bool, density and viscosity), ``fittings`` (bool, K spreads),
-/// ``equipment`` (bool, equipment spreads). :meth:`preset` gives ``"default"``,
+/// ``equipment`` (bool, equipment spreads), ``independent_materials`` (catalogue
+/// material names whose pipes each get their own roughness error; by default the pipes
+/// of one material share one). :meth:`preset` gives ``"default"``,
 /// ``"none"`` or ``"model_only"``; :meth:`replace` changes some fields of a copy.
 #[pyclass(name = "Uncertainty", module = "hydrograde._native", frozen, eq)]
 #[derive(Clone, PartialEq)]
@@ -181,6 +183,7 @@ struct Fields {
     fluid: Option<bool>,
     fittings: Option<bool>,
     equipment: Option<bool>,
+    independent_materials: Option<Vec<String>>,
 }
 
 impl Fields {
@@ -205,6 +208,9 @@ impl Fields {
         set_b(self.fluid, &mut o.fluid);
         set_b(self.fittings, &mut o.fittings);
         set_b(self.equipment, &mut o.equipment);
+        if let Some(m) = self.independent_materials {
+            o.independent_materials = m;
+        }
         o.validate().py()?;
         Ok(PyUncertainty { inner: o })
     }
@@ -230,7 +236,7 @@ impl PyUncertainty {
 #[pymethods]
 impl PyUncertainty {
     #[new]
-    #[pyo3(signature = (*, friction_model = None, turbulent_model = None, laminar_model = None, non_circular_model = None, roughness = None, roughness_default = None, diameter = None, fluid = None, fittings = None, equipment = None))]
+    #[pyo3(signature = (*, friction_model = None, turbulent_model = None, laminar_model = None, non_circular_model = None, roughness = None, roughness_default = None, diameter = None, fluid = None, fittings = None, equipment = None, independent_materials = None))]
     #[allow(clippy::too_many_arguments)]
     fn new(
         friction_model: Option<bool>,
@@ -243,6 +249,7 @@ impl PyUncertainty {
         fluid: Option<bool>,
         fittings: Option<bool>,
         equipment: Option<bool>,
+        independent_materials: Option<Vec<String>>,
     ) -> PyResult<Self> {
         Fields {
             friction_model,
@@ -255,11 +262,12 @@ impl PyUncertainty {
             fluid,
             fittings,
             equipment,
+            independent_materials,
         }
         .apply(UncertaintyOptions::default())
     }
     /// A copy with the given fields changed (same keywords as the constructor).
-    #[pyo3(signature = (*, friction_model = None, turbulent_model = None, laminar_model = None, non_circular_model = None, roughness = None, roughness_default = None, diameter = None, fluid = None, fittings = None, equipment = None))]
+    #[pyo3(signature = (*, friction_model = None, turbulent_model = None, laminar_model = None, non_circular_model = None, roughness = None, roughness_default = None, diameter = None, fluid = None, fittings = None, equipment = None, independent_materials = None))]
     #[allow(clippy::too_many_arguments)]
     fn replace(
         &self,
@@ -273,6 +281,7 @@ impl PyUncertainty {
         fluid: Option<bool>,
         fittings: Option<bool>,
         equipment: Option<bool>,
+        independent_materials: Option<Vec<String>>,
     ) -> PyResult<Self> {
         Fields {
             friction_model,
@@ -285,6 +294,7 @@ impl PyUncertainty {
             fluid,
             fittings,
             equipment,
+            independent_materials,
         }
         .apply(self.inner.clone())
     }
@@ -351,6 +361,12 @@ impl PyUncertainty {
     fn equipment(&self) -> bool {
         self.inner.equipment
     }
+    /// Catalogue materials whose pipes each get their own roughness error (every other
+    /// material's pipes share one).
+    #[getter]
+    fn independent_materials(&self) -> Vec<String> {
+        self.inner.independent_materials.clone()
+    }
     /// The fields as a dict.
     fn to_dict<'py>(&self, py: Python<'py>) -> PyResult<Bound<'py, PyDict>> {
         uncertainty_dict(py, &self.inner)
@@ -364,7 +380,7 @@ impl PyUncertainty {
         format!(
             "Uncertainty(friction_model={}, turbulent_model={:?}, laminar_model={:?}, \
              non_circular_model={:?}, roughness={}, roughness_default={:?}, diameter={:?}, \
-             fluid={}, fittings={}, equipment={})",
+             fluid={}, fittings={}, equipment={}, independent_materials={:?})",
             b(o.friction_model),
             o.turbulent_model,
             o.laminar_model,
@@ -374,7 +390,8 @@ impl PyUncertainty {
             o.diameter,
             b(o.fluid),
             b(o.fittings),
-            b(o.equipment)
+            b(o.equipment),
+            o.independent_materials
         )
     }
     fn __reduce__<'py>(
@@ -406,6 +423,7 @@ pub fn uncertainty_dict<'py>(
     d.set_item("fluid", o.fluid)?;
     d.set_item("fittings", o.fittings)?;
     d.set_item("equipment", o.equipment)?;
+    d.set_item("independent_materials", o.independent_materials.clone())?;
     Ok(d)
 }
 
@@ -477,20 +495,24 @@ impl PyMonteCarlo {
     }
 }
 
-/// Samples ``line``'s required head (m) at ``flow`` (m³/s) ``samples`` times (≥ 100,
-/// default the core's ``MONTE_CARLO_SAMPLES``) from generator ``seed``, with the line's
+/// Samples ``line``'s required head (m) at ``flow`` (m³/s) ``samples`` times (100 to
+/// 10,000,000, default the core's ``MONTE_CARLO_SAMPLES``) from generator ``seed``, with the line's
 /// uncertainty options: a Monte Carlo check (JCGM 101:2008) of the first-order band.
 /// Reproducible: the same seed gives the same numbers. Runs with the GIL released.
 #[pyfunction]
-#[pyo3(signature = (line, fluid, flow, samples = MONTE_CARLO_SAMPLES, seed = 0))]
+#[pyo3(signature = (line, fluid, flow, samples = None, seed = 0))]
 pub fn monte_carlo(
     py: Python<'_>,
     line: &PyLine,
     fluid: &PyFluid,
-    flow: f64,
-    samples: usize,
+    #[pyo3(from_py_with = crate::arrays::si::flow)] flow: f64,
+    samples: Option<&Bound<'_, PyAny>>,
     seed: u64,
 ) -> PyResult<PyMonteCarlo> {
+    let samples = match samples {
+        Some(s) => crate::errors::whole_number("samples", s)?,
+        None => MONTE_CARLO_SAMPLES,
+    };
     let m = py
         .detach(|| core_monte_carlo(&line.inner, &fluid.inner, flow, samples, seed))
         .py()?;

@@ -65,3 +65,26 @@ impl<T> CoreResult<T> for hydrograde::Result<T> {
         self.map_err(to_py)
     }
 }
+
+/// A whole-number argument as `usize`. A negative or too large Python int becomes the
+/// core's out-of-range error naming `name` (never a bare `OverflowError`); anything that
+/// is not an int is a `TypeError`.
+pub fn whole_number(name: &'static str, obj: &Bound<'_, PyAny>) -> PyResult<usize> {
+    if let Ok(n) = obj.extract::<usize>() {
+        return Ok(n);
+    }
+    if !obj.is_instance_of::<pyo3::types::PyInt>() {
+        return Err(pyo3::exceptions::PyTypeError::new_err(format!(
+            "{name} must be an int, not {}",
+            obj.get_type().name()?
+        )));
+    }
+    // A Python int too large for a double converts to infinity, which the message shows.
+    let value = obj.extract::<f64>().unwrap_or(f64::INFINITY);
+    let rule = if obj.lt(0)? {
+        "must not be negative".to_string()
+    } else {
+        format!("must be at most {}", usize::MAX)
+    };
+    Err(to_py(Error::out_of_range(name, value, rule)))
+}

@@ -1,6 +1,6 @@
 //! `hydrograde.Fitting`: minor-loss elements.
 
-use crate::arrays;
+use crate::arrays::{self, si};
 use crate::errors::CoreResult;
 use crate::state;
 use hydrograde::fitting::{Fitting, catalogue_entries};
@@ -50,13 +50,21 @@ impl PyFitting {
     /// A fixed resistance coefficient ``value`` (dimensionless, ≥ 0).
     #[classmethod]
     #[pyo3(signature = (value, diameter = None))]
-    fn k(_cls: &Bound<'_, PyType>, value: f64, diameter: Option<f64>) -> PyResult<Self> {
+    fn k(
+        _cls: &Bound<'_, PyType>,
+        #[pyo3(from_py_with = si::value)] value: f64,
+        #[pyo3(from_py_with = si::opt_diameter)] diameter: Option<f64>,
+    ) -> PyResult<Self> {
         wrap(Fitting::k(value), diameter)
     }
     /// A catalogue fitting by ``name`` (see :meth:`catalogue`).
     #[classmethod]
     #[pyo3(signature = (name, diameter = None))]
-    fn named(_cls: &Bound<'_, PyType>, name: &str, diameter: Option<f64>) -> PyResult<Self> {
+    fn named(
+        _cls: &Bound<'_, PyType>,
+        name: &str,
+        #[pyo3(from_py_with = si::opt_diameter)] diameter: Option<f64>,
+    ) -> PyResult<Self> {
         wrap(Fitting::named(name), diameter)
     }
     /// An equivalent length ``l_over_d`` (L/D, dimensionless): K = f_T·L/D with the fully
@@ -65,8 +73,8 @@ impl PyFitting {
     #[pyo3(signature = (l_over_d, diameter = None))]
     fn equivalent_length(
         _cls: &Bound<'_, PyType>,
-        l_over_d: f64,
-        diameter: Option<f64>,
+        #[pyo3(from_py_with = si::l_over_d)] l_over_d: f64,
+        #[pyo3(from_py_with = si::opt_diameter)] diameter: Option<f64>,
     ) -> PyResult<Self> {
         wrap(Fitting::equivalent_length(l_over_d), diameter)
     }
@@ -75,9 +83,9 @@ impl PyFitting {
     #[pyo3(signature = (k1, k_inf, diameter = None))]
     fn two_k(
         _cls: &Bound<'_, PyType>,
-        k1: f64,
-        k_inf: f64,
-        diameter: Option<f64>,
+        #[pyo3(from_py_with = si::k1)] k1: f64,
+        #[pyo3(from_py_with = si::k_inf)] k_inf: f64,
+        #[pyo3(from_py_with = si::opt_diameter)] diameter: Option<f64>,
     ) -> PyResult<Self> {
         wrap(Fitting::two_k(k1, k_inf), diameter)
     }
@@ -86,22 +94,30 @@ impl PyFitting {
     #[pyo3(signature = (k1, k_inf, k_d, diameter = None))]
     fn three_k(
         _cls: &Bound<'_, PyType>,
-        k1: f64,
-        k_inf: f64,
-        k_d: f64,
-        diameter: Option<f64>,
+        #[pyo3(from_py_with = si::k1)] k1: f64,
+        #[pyo3(from_py_with = si::k_inf)] k_inf: f64,
+        #[pyo3(from_py_with = si::k_d)] k_d: f64,
+        #[pyo3(from_py_with = si::opt_diameter)] diameter: Option<f64>,
     ) -> PyResult<Self> {
         wrap(Fitting::three_k(k1, k_inf, k_d), diameter)
     }
     /// A sudden expansion from bore ``d_in`` to ``d_out`` (m): Borda–Carnot, K on the
     /// inlet velocity.
     #[classmethod]
-    fn expansion(_cls: &Bound<'_, PyType>, d_in: f64, d_out: f64) -> PyResult<Self> {
+    fn expansion(
+        _cls: &Bound<'_, PyType>,
+        #[pyo3(from_py_with = si::d_in)] d_in: f64,
+        #[pyo3(from_py_with = si::d_out)] d_out: f64,
+    ) -> PyResult<Self> {
         wrap(Fitting::expansion(d_in, d_out), None)
     }
     /// A sudden contraction from bore ``d_in`` to ``d_out`` (m), K on the outlet velocity.
     #[classmethod]
-    fn contraction(_cls: &Bound<'_, PyType>, d_in: f64, d_out: f64) -> PyResult<Self> {
+    fn contraction(
+        _cls: &Bound<'_, PyType>,
+        #[pyo3(from_py_with = si::d_in)] d_in: f64,
+        #[pyo3(from_py_with = si::d_out)] d_out: f64,
+    ) -> PyResult<Self> {
         wrap(Fitting::contraction(d_in, d_out), None)
     }
     /// A sharp-edged entrance from a large vessel.
@@ -113,7 +129,10 @@ impl PyFitting {
     }
     /// A rounded entrance of rounding radius ratio ``r_over_d``.
     #[classmethod]
-    fn entrance_rounded(_cls: &Bound<'_, PyType>, r_over_d: f64) -> PyResult<Self> {
+    fn entrance_rounded(
+        _cls: &Bound<'_, PyType>,
+        #[pyo3(from_py_with = si::r_over_d)] r_over_d: f64,
+    ) -> PyResult<Self> {
         wrap(Fitting::entrance_rounded(r_over_d), None)
     }
     /// An inward-projecting (re-entrant) entrance.
@@ -135,9 +154,9 @@ impl PyFitting {
     #[pyo3(signature = (angle_deg, r_over_d, diameter = None))]
     fn bend(
         _cls: &Bound<'_, PyType>,
-        angle_deg: f64,
-        r_over_d: f64,
-        diameter: Option<f64>,
+        #[pyo3(from_py_with = si::angle_deg)] angle_deg: f64,
+        #[pyo3(from_py_with = si::r_over_d)] r_over_d: f64,
+        #[pyo3(from_py_with = si::opt_diameter)] diameter: Option<f64>,
     ) -> PyResult<Self> {
         wrap(Fitting::bend(angle_deg, r_over_d), diameter)
     }
@@ -145,13 +164,21 @@ impl PyFitting {
     /// referred to ``diameter`` (or the adjoining pipe's bore).
     #[classmethod]
     #[pyo3(signature = (value, diameter = None))]
-    fn cv(_cls: &Bound<'_, PyType>, value: f64, diameter: Option<f64>) -> PyResult<Self> {
+    fn cv(
+        _cls: &Bound<'_, PyType>,
+        #[pyo3(from_py_with = si::value)] value: f64,
+        #[pyo3(from_py_with = si::opt_diameter)] diameter: Option<f64>,
+    ) -> PyResult<Self> {
         wrap(Fitting::cv(value), diameter)
     }
     /// A valve of flow coefficient Kv ``value`` (m³/h of water at 1 bar drop).
     #[classmethod]
     #[pyo3(signature = (value, diameter = None))]
-    fn kv(_cls: &Bound<'_, PyType>, value: f64, diameter: Option<f64>) -> PyResult<Self> {
+    fn kv(
+        _cls: &Bound<'_, PyType>,
+        #[pyo3(from_py_with = si::value)] value: f64,
+        #[pyo3(from_py_with = si::opt_diameter)] diameter: Option<f64>,
+    ) -> PyResult<Self> {
         wrap(Fitting::kv(value), diameter)
     }
     /// A tee, flow through the run.
@@ -186,11 +213,11 @@ impl PyFitting {
         Ok(rows)
     }
     /// The same fitting with K referring to bore ``diameter`` (m).
-    fn with_diameter(&self, diameter: f64) -> PyResult<Self> {
+    fn with_diameter(&self, #[pyo3(from_py_with = si::diameter)] diameter: f64) -> PyResult<Self> {
         wrap(Ok(self.inner.clone()), Some(diameter))
     }
     /// The same fitting with relative spread ``k_spread`` of K (0…1; 0.3 = ±30 %).
-    fn with_k_spread(&self, k_spread: f64) -> PyResult<Self> {
+    fn with_k_spread(&self, #[pyo3(from_py_with = si::k_spread)] k_spread: f64) -> PyResult<Self> {
         Ok(PyFitting {
             inner: self.inner.clone().with_k_spread(k_spread).py()?,
         })
@@ -252,7 +279,11 @@ impl PyFitting {
     /// velocity and Reynolds number taken in ``bore`` (m, > 0); ``pipe_rel_roughness`` is
     /// ε/D of the adjoining pipe (0…0.5; L/D fittings and bends use its fully rough
     /// friction factor).
-    fn resistance(&self, bore: f64, pipe_rel_roughness: f64) -> PyResult<(f64, f64)> {
+    fn resistance(
+        &self,
+        #[pyo3(from_py_with = si::bore)] bore: f64,
+        #[pyo3(from_py_with = si::pipe_rel_roughness)] pipe_rel_roughness: f64,
+    ) -> PyResult<(f64, f64)> {
         let r = self.inner.resistance(bore, pipe_rel_roughness).py()?;
         Ok((r.k_viscous, r.k_inertial))
     }

@@ -1,6 +1,6 @@
 //! `hydrograde.Fluid` and the broadcasting water-property functions.
 
-use crate::arrays;
+use crate::arrays::{self, si};
 use crate::errors::CoreResult;
 use crate::state;
 use hydrograde::fluid::{self as core, Fluid};
@@ -26,7 +26,10 @@ pub struct PyFluid {
 #[pymethods]
 impl PyFluid {
     #[new]
-    fn new(density: f64, viscosity: f64) -> PyResult<Self> {
+    fn new(
+        #[pyo3(from_py_with = si::density)] density: f64,
+        #[pyo3(from_py_with = si::viscosity)] viscosity: f64,
+    ) -> PyResult<Self> {
         Ok(PyFluid {
             inner: Fluid::new(density, viscosity).py()?,
         })
@@ -36,7 +39,11 @@ impl PyFluid {
     /// viscosity, IF97 saturation line for the vapour pressure; 273.15…623.15 K.
     #[classmethod]
     #[pyo3(signature = (temperature, pressure = ATMOSPHERE))]
-    fn water(_cls: &Bound<'_, PyType>, temperature: f64, pressure: f64) -> PyResult<Self> {
+    fn water(
+        _cls: &Bound<'_, PyType>,
+        #[pyo3(from_py_with = si::temperature)] temperature: f64,
+        #[pyo3(from_py_with = si::pressure)] pressure: f64,
+    ) -> PyResult<Self> {
         Ok(PyFluid {
             inner: Fluid::water(temperature, pressure).py()?,
         })
@@ -45,7 +52,11 @@ impl PyFluid {
     /// ideal gas (M = 28.9647 g/mol) with Sutherland's law; 200…1000 K, up to 2 MPa.
     #[classmethod]
     #[pyo3(signature = (temperature, pressure = ATMOSPHERE))]
-    fn air(_cls: &Bound<'_, PyType>, temperature: f64, pressure: f64) -> PyResult<Self> {
+    fn air(
+        _cls: &Bound<'_, PyType>,
+        #[pyo3(from_py_with = si::temperature)] temperature: f64,
+        #[pyo3(from_py_with = si::pressure)] pressure: f64,
+    ) -> PyResult<Self> {
         Ok(PyFluid {
             inner: Fluid::air(temperature, pressure).py()?,
         })
@@ -55,10 +66,10 @@ impl PyFluid {
     #[classmethod]
     fn gas(
         _cls: &Bound<'_, PyType>,
-        density: f64,
-        viscosity: f64,
-        temperature: f64,
-        pressure: f64,
+        #[pyo3(from_py_with = si::density)] density: f64,
+        #[pyo3(from_py_with = si::viscosity)] viscosity: f64,
+        #[pyo3(from_py_with = si::temperature)] temperature: f64,
+        #[pyo3(from_py_with = si::pressure)] pressure: f64,
     ) -> PyResult<Self> {
         Ok(PyFluid {
             inner: Fluid::gas(density, viscosity, temperature, pressure).py()?,
@@ -66,7 +77,11 @@ impl PyFluid {
     }
     /// The same fluid with relative standard uncertainties (k = 1) of density and
     /// viscosity, e.g. ``0.01`` for 1 %.
-    fn with_uncertainty(&self, density_rel: f64, viscosity_rel: f64) -> PyResult<Self> {
+    fn with_uncertainty(
+        &self,
+        #[pyo3(from_py_with = si::density_rel)] density_rel: f64,
+        #[pyo3(from_py_with = si::viscosity_rel)] viscosity_rel: f64,
+    ) -> PyResult<Self> {
         Ok(PyFluid {
             inner: self
                 .inner
@@ -76,7 +91,10 @@ impl PyFluid {
         })
     }
     /// The same fluid with its vapour pressure (Pa) set, for cavitation warnings.
-    fn with_vapour_pressure(&self, vapour_pressure: f64) -> PyResult<Self> {
+    fn with_vapour_pressure(
+        &self,
+        #[pyo3(from_py_with = si::vapour_pressure)] vapour_pressure: f64,
+    ) -> PyResult<Self> {
         Ok(PyFluid {
             inner: self
                 .inner
@@ -87,7 +105,7 @@ impl PyFluid {
     }
     /// The fluid re-evaluated at absolute ``pressure`` (Pa) and its own temperature
     /// (liquids are returned unchanged).
-    fn at_pressure(&self, pressure: f64) -> PyResult<Self> {
+    fn at_pressure(&self, #[pyo3(from_py_with = si::pressure)] pressure: f64) -> PyResult<Self> {
         Ok(PyFluid {
             inner: self.inner.at_pressure(pressure).py()?,
         })

@@ -229,8 +229,9 @@ impl PyFriction {
 }
 
 /// Same-shape, C-contiguous float64 arrays go straight to the core's batch entry point
-/// (interleaved exact Colebrook, all cores above its threshold) with the GIL released;
-/// anything else (scalars, broadcasting, other dtypes or strides) takes the general path.
+/// (the vector kernel on the widest instruction set, all cores above its threshold) with
+/// the GIL released; anything else (scalars, broadcasting, other dtypes or strides) takes
+/// the general path.
 fn batch_fast_path<'py>(
     py: Python<'py>,
     re: &Bound<'py, PyAny>,

@@ -17,6 +17,7 @@ mod roughness;
 mod section;
 mod sizes;
 mod state;
+mod threads;
 mod units;
 
 use hydrograde::warning::Warnings;
@@ -78,6 +79,10 @@ fn _native(m: &Bound<'_, PyModule>) -> PyResult<()> {
     m.add_class::<band::PyUncertainty>()?;
     m.add_class::<band::PyMonteCarlo>()?;
     m.add_function(wrap_pyfunction!(band::monte_carlo, m)?)?;
+
+    // threads
+    m.add_function(wrap_pyfunction!(threads::set_threads, m)?)?;
+    m.add_function(wrap_pyfunction!(threads::threads, m)?)?;
 
     // units
     m.add_function(wrap_pyfunction!(units::convert, m)?)?;

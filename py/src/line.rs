@@ -1,6 +1,6 @@
 //! `hydrograde.Line`, `PumpCurve` and `split_flow`.
 
-use crate::arrays;
+use crate::arrays::{self, si};
 use crate::band::{PyUncertainty, uncertainty_dict};
 use crate::errors::CoreResult;
 use crate::fluid::PyFluid;
@@ -43,10 +43,10 @@ impl PyLine {
         elements: &Bound<'_, PyAny>,
         correlation: Option<&str>,
         transition: Option<&str>,
-        laminar_limit: Option<f64>,
-        turbulent_limit: Option<f64>,
+        #[pyo3(from_py_with = si::opt_laminar_limit)] laminar_limit: Option<f64>,
+        #[pyo3(from_py_with = si::opt_turbulent_limit)] turbulent_limit: Option<f64>,
         turbulent_diameter: Option<&str>,
-        inlet_pressure: Option<f64>,
+        #[pyo3(from_py_with = si::opt_inlet_pressure)] inlet_pressure: Option<f64>,
         uncertainty: Option<&Bound<'_, PyAny>>,
         surroundings: Option<PyRef<'_, PyFluid>>,
         air_column_for_liquids: bool,
@@ -148,8 +148,8 @@ impl PyLine {
         &self,
         py: Python<'_>,
         fluid: &PyFluid,
-        flow: f64,
-        inlet_pressure: Option<f64>,
+        #[pyo3(from_py_with = si::flow)] flow: f64,
+        #[pyo3(from_py_with = si::opt_inlet_pressure)] inlet_pressure: Option<f64>,
     ) -> PyResult<PyLineResult> {
         let r = py
             .detach(|| match inlet_pressure {
@@ -184,12 +184,34 @@ impl PyLine {
             l.required_head(f, q).map(|r| r.0)
         })
     }
+    /// The system curve with its band: ``(low, nominal, high)``, three 1-D arrays of the
+    /// required head (m) at each of ``flows`` (m³/s, 1-D), the same band as
+    /// ``evaluate(fluid, q).required_head_band`` at each flow. Runs with the GIL released.
+    fn system_curve_band<'py>(
+        &self,
+        py: Python<'py>,
+        fluid: &PyFluid,
+        flows: Vec<f64>,
+    ) -> PyResult<(
+        Bound<'py, numpy::PyArray1<f64>>,
+        Bound<'py, numpy::PyArray1<f64>>,
+        Bound<'py, numpy::PyArray1<f64>>,
+    )> {
+        let c = py
+            .detach(|| self.inner.system_curve_band(&fluid.inner, &flows))
+            .py()?;
+        Ok((
+            numpy::PyArray1::from_vec(py, c.low),
+            numpy::PyArray1::from_vec(py, c.nominal),
+            numpy::PyArray1::from_vec(py, c.high),
+        ))
+    }
     /// The signed flow (m³/s) for which the required head equals ``head`` (m), with its band.
     fn flow_for_head(
         &self,
         py: Python<'_>,
         fluid: &PyFluid,
-        head: f64,
+        #[pyo3(from_py_with = si::head)] head: f64,
     ) -> PyResult<PyFlowSolution> {
         let s = py
             .detach(|| self.inner.flow_for_head(&fluid.inner, head))
@@ -219,9 +241,9 @@ impl PyLine {
         &self,
         py: Python<'_>,
         fluid: &PyFluid,
-        flow: f64,
-        max_pressure_loss: Option<f64>,
-        max_velocity: Option<f64>,
+        #[pyo3(from_py_with = si::flow)] flow: f64,
+        #[pyo3(from_py_with = si::opt_max_pressure_loss)] max_pressure_loss: Option<f64>,
+        #[pyo3(from_py_with = si::opt_max_velocity)] max_velocity: Option<f64>,
         table: Option<&str>,
         schedule: Option<&str>,
     ) -> PyResult<PySizing> {
@@ -254,13 +276,21 @@ impl PyLine {
     }
     /// The same line with the likely range (``low``, ``high``; m) of the roughness of the
     /// pipe at ``index`` stated, for the roughness uncertainty.
-    fn with_roughness_range(&self, index: usize, low: f64, high: f64) -> PyResult<Self> {
+    fn with_roughness_range(
+        &self,
+        index: usize,
+        #[pyo3(from_py_with = si::low)] low: f64,
+        #[pyo3(from_py_with = si::high)] high: f64,
+    ) -> PyResult<Self> {
         let mut l = self.inner.clone();
         l.set_roughness_range(index, low, high).py()?;
         Ok(PyLine { inner: l })
     }
     /// The same line with every round pipe of inside ``diameter`` (m).
-    fn with_uniform_diameter(&self, diameter: f64) -> PyResult<Self> {
+    fn with_uniform_diameter(
+        &self,
+        #[pyo3(from_py_with = si::diameter)] diameter: f64,
+    ) -> PyResult<Self> {
         Ok(PyLine {
             inner: self.inner.with_uniform_diameter(diameter).py()?,
         })
@@ -289,8 +319,8 @@ impl PyLine {
         d.set_item("elements", rows)?;
         Ok(d)
     }
-    fn _repr_html_(&self, py: Python<'_>) -> PyResult<String> {
-        state::html(py, "Line", &self.to_dict(py)?)
+    fn _repr_html_(slf: &Bound<'_, Self>) -> PyResult<String> {
+        state::html_object(slf.as_any(), "Line")
     }
     fn __repr__(&self, py: Python<'_>) -> PyResult<String> {
         let parts: Vec<String> = self
@@ -330,7 +360,10 @@ pub struct PyPumpCurve {
 #[pymethods]
 impl PyPumpCurve {
     #[new]
-    fn new(flows: Vec<f64>, heads: Vec<f64>) -> PyResult<Self> {
+    fn new(
+        #[pyo3(from_py_with = si::flows_vec)] flows: Vec<f64>,
+        #[pyo3(from_py_with = si::heads_vec)] heads: Vec<f64>,
+    ) -> PyResult<Self> {
         Ok(PyPumpCurve {
             inner: PumpCurve::new(&flows, &heads).py()?,
         })
@@ -344,6 +377,9 @@ impl PyPumpCurve {
     fn head<'py>(&self, py: Python<'py>, flow: &Bound<'py, PyAny>) -> PyResult<Bound<'py, PyAny>> {
         let p = &self.inner;
         arrays::map(py, ["flow"], [flow], |[q]| p.head(q).map(|r| r.0))
+    }
+    fn _repr_html_(slf: &Bound<'_, Self>) -> PyResult<String> {
+        state::html_object(slf.as_any(), "PumpCurve")
     }
     fn __repr__(&self) -> String {
         let (lo, hi) = self.inner.range();
@@ -369,7 +405,7 @@ pub fn split_flow(
     py: Python<'_>,
     branches: Vec<PyRef<'_, PyLine>>,
     fluid: &PyFluid,
-    total: f64,
+    #[pyo3(from_py_with = si::total)] total: f64,
 ) -> PyResult<PySplit> {
     let lines: Vec<Line> = branches.iter().map(|b| b.inner.clone()).collect();
     let s = py.detach(|| core_split(&lines, &fluid.inner, total)).py()?;

@@ -169,8 +169,10 @@ impl PyLineResult {
         d.set_item("pressure_loss_band", band_dict(py, &r.pressure_loss_band)?)?;
         d.set_item("required_head_band", band_dict(py, &r.required_head_band)?)?;
         let rows = PyList::empty(py);
-        for e in &r.elements {
-            rows.append(element_dict(py, e)?)?;
+        for (i, e) in r.elements.iter().enumerate() {
+            let row = element_dict(py, e)?;
+            row.set_item("index", i)?;
+            rows.append(row)?;
         }
         d.set_item("elements", rows)?;
         d.set_item("required_pressure", r.required_pressure)?;
@@ -228,6 +230,7 @@ fn element_dict<'py>(py: Python<'py>, e: &ElementResult) -> PyResult<Bound<'py, 
     d.set_item("elevation_out", e.elevation_out)?;
     d.set_item("head_loss_low", e.head_loss_band.low)?;
     d.set_item("head_loss_high", e.head_loss_band.high)?;
+    d.set_item("dominant", e.head_loss_band.dominant().map(|s| s.name()))?;
     d.set_item("warnings", e.warnings.names())?;
     Ok(d)
 }
@@ -342,6 +345,9 @@ impl PyElementResult {
     /// The fields as a dict.
     fn to_dict<'py>(&self, py: Python<'py>) -> PyResult<Bound<'py, PyDict>> {
         element_dict(py, &self.inner)
+    }
+    fn _repr_html_(&self, py: Python<'_>) -> PyResult<String> {
+        state::html(py, "ElementResult", &self.to_dict(py)?)
     }
     fn __repr__(&self) -> String {
         format!(
@@ -531,6 +537,9 @@ impl PySplit {
     fn flow_bands(&self, py: Python<'_>) -> PyResult<Vec<Py<PyBand>>> {
         self.inner.flow_bands.iter().map(|b| band(py, b)).collect()
     }
+    fn _repr_html_(slf: &Bound<'_, Self>) -> PyResult<String> {
+        state::html_object(slf.as_any(), "Split")
+    }
     fn __repr__(&self) -> String {
         format!(
             "Split(flows={:?}, head={:?})",
@@ -600,6 +609,9 @@ impl PySizing {
         d.set_item("standard", self.standard(py)?)?;
         d.set_item("standard_at_band", self.standard_at_band(py)?)?;
         Ok(d)
+    }
+    fn _repr_html_(&self, py: Python<'_>) -> PyResult<String> {
+        state::html(py, "Sizing", &self.to_dict(py)?)
     }
     fn __repr__(&self) -> String {
         let pick = |c: &Option<SizeChoice>| {

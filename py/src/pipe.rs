@@ -1,6 +1,6 @@
 //! `hydrograde.Pipe`, `Rise` and `Equipment`: the elements of a line besides fittings.
 
-use crate::arrays;
+use crate::arrays::{self, si};
 use crate::errors::CoreResult;
 use crate::fitting::PyFitting;
 use crate::fluid::PyFluid;
@@ -26,7 +26,11 @@ pub struct PyPipe {
 #[pymethods]
 impl PyPipe {
     #[new]
-    fn new(section: &Bound<'_, PyAny>, length: f64, roughness: f64) -> PyResult<Self> {
+    fn new(
+        section: &Bound<'_, PyAny>,
+        #[pyo3(from_py_with = si::length)] length: f64,
+        #[pyo3(from_py_with = si::roughness)] roughness: f64,
+    ) -> PyResult<Self> {
         let pipe = if let Ok(s) = section.cast::<PySection>() {
             Pipe::new(s.get().inner, length, roughness)
         } else {
@@ -41,7 +45,7 @@ impl PyPipe {
     fn of_material(
         _cls: &Bound<'_, PyType>,
         section: &Bound<'_, PyAny>,
-        length: f64,
+        #[pyo3(from_py_with = si::length)] length: f64,
         material: &str,
     ) -> PyResult<Self> {
         let s = if let Ok(s) = section.cast::<PySection>() {
@@ -103,7 +107,7 @@ impl PyPipe {
     }
     /// The same run (length, roughness and its range) with a round section of inside
     /// ``diameter`` (m).
-    fn with_diameter(&self, diameter: f64) -> PyResult<Self> {
+    fn with_diameter(&self, #[pyo3(from_py_with = si::diameter)] diameter: f64) -> PyResult<Self> {
         Ok(PyPipe {
             inner: self.inner.with_diameter(diameter).py()?,
         })
@@ -156,7 +160,7 @@ pub struct PyRise {
 #[pymethods]
 impl PyRise {
     #[new]
-    fn new(height: f64) -> PyResult<Self> {
+    fn new(#[pyo3(from_py_with = si::height)] height: f64) -> PyResult<Self> {
         Ok(PyRise {
             inner: Element::rise(height).py()?,
         })
@@ -203,8 +207,8 @@ impl PyEquipment {
     fn pressure_drop(
         _cls: &Bound<'_, PyType>,
         name: &str,
-        drop: f64,
-        at_flow: f64,
+        #[pyo3(from_py_with = si::drop)] drop: f64,
+        #[pyo3(from_py_with = si::at_flow)] at_flow: f64,
     ) -> PyResult<Self> {
         Ok(PyEquipment {
             inner: Equipment::pressure_drop(name, drop, at_flow).py()?,
@@ -217,15 +221,15 @@ impl PyEquipment {
     fn fixed_k(
         _cls: &Bound<'_, PyType>,
         name: &str,
-        k: f64,
-        diameter: Option<f64>,
+        #[pyo3(from_py_with = si::k)] k: f64,
+        #[pyo3(from_py_with = si::opt_diameter)] diameter: Option<f64>,
     ) -> PyResult<Self> {
         Ok(PyEquipment {
             inner: Equipment::fixed_k(name, k, diameter).py()?,
         })
     }
     /// The same equipment with relative half-width ``spread`` of its loss (0.1 = ±10 %).
-    fn with_spread(&self, spread: f64) -> PyResult<Self> {
+    fn with_spread(&self, #[pyo3(from_py_with = si::spread)] spread: f64) -> PyResult<Self> {
         Ok(PyEquipment {
             inner: self.inner.clone().with_spread(spread).py()?,
         })

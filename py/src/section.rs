@@ -1,6 +1,6 @@
 //! `hydrograde.Section`: cross-sections of pipes and ducts.
 
-use crate::arrays;
+use crate::arrays::{self, si};
 use crate::errors::CoreResult;
 use crate::state;
 use hydrograde::section::{Section, TurbulentDiameter};
@@ -46,28 +46,46 @@ pub fn dimensions<'py>(py: Python<'py>, s: &Section) -> PyResult<Bound<'py, PyDi
 impl PySection {
     /// A round pipe of inside ``diameter`` (m).
     #[classmethod]
-    fn circle(_cls: &Bound<'_, PyType>, diameter: f64) -> PyResult<Self> {
+    fn circle(
+        _cls: &Bound<'_, PyType>,
+        #[pyo3(from_py_with = si::diameter)] diameter: f64,
+    ) -> PyResult<Self> {
         wrap(Section::circle(diameter))
     }
     /// A concentric annulus: ``outer`` = inside diameter of the outer pipe, ``inner`` =
     /// outside diameter of the inner tube (m).
     #[classmethod]
-    fn annulus(_cls: &Bound<'_, PyType>, outer: f64, inner: f64) -> PyResult<Self> {
+    fn annulus(
+        _cls: &Bound<'_, PyType>,
+        #[pyo3(from_py_with = si::outer)] outer: f64,
+        #[pyo3(from_py_with = si::inner)] inner: f64,
+    ) -> PyResult<Self> {
         wrap(Section::annulus(outer, inner))
     }
     /// A rectangular duct of ``width`` and ``height`` (m).
     #[classmethod]
-    fn rectangle(_cls: &Bound<'_, PyType>, width: f64, height: f64) -> PyResult<Self> {
+    fn rectangle(
+        _cls: &Bound<'_, PyType>,
+        #[pyo3(from_py_with = si::width)] width: f64,
+        #[pyo3(from_py_with = si::height)] height: f64,
+    ) -> PyResult<Self> {
         wrap(Section::rectangle(width, height))
     }
     /// An elliptical duct of full axes ``major`` ≥ ``minor`` (m).
     #[classmethod]
-    fn ellipse(_cls: &Bound<'_, PyType>, major: f64, minor: f64) -> PyResult<Self> {
+    fn ellipse(
+        _cls: &Bound<'_, PyType>,
+        #[pyo3(from_py_with = si::major)] major: f64,
+        #[pyo3(from_py_with = si::minor)] minor: f64,
+    ) -> PyResult<Self> {
         wrap(Section::ellipse(major, minor))
     }
     /// An equilateral triangular duct of ``side`` (m).
     #[classmethod]
-    fn triangle(_cls: &Bound<'_, PyType>, side: f64) -> PyResult<Self> {
+    fn triangle(
+        _cls: &Bound<'_, PyType>,
+        #[pyo3(from_py_with = si::side)] side: f64,
+    ) -> PyResult<Self> {
         wrap(Section::triangle(side))
     }
     /// Any other shape: flow ``area`` (m²), wetted ``perimeter`` (m) and its
@@ -75,9 +93,9 @@ impl PySection {
     #[classmethod]
     fn custom(
         _cls: &Bound<'_, PyType>,
-        area: f64,
-        perimeter: f64,
-        laminar_constant: f64,
+        #[pyo3(from_py_with = si::area)] area: f64,
+        #[pyo3(from_py_with = si::perimeter)] perimeter: f64,
+        #[pyo3(from_py_with = si::laminar_constant)] laminar_constant: f64,
     ) -> PyResult<Self> {
         wrap(Section::custom(area, perimeter, laminar_constant))
     }

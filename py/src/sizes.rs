@@ -1,6 +1,7 @@
 //! Standard pipe tables (`hydrograde.pipe_tables`, `pipe_sizes`, `pipe_size`,
 //! `smallest_pipe`).
 
+use crate::arrays::si;
 use crate::errors::CoreResult;
 use hydrograde::sizes::{self, PipeSize, PipeTable};
 use pyo3::prelude::*;
@@ -69,7 +70,7 @@ pub fn smallest_pipe<'py>(
     py: Python<'py>,
     table: &str,
     schedule: &str,
-    min_inside_diameter: f64,
+    #[pyo3(from_py_with = si::min_inside_diameter)] min_inside_diameter: f64,
 ) -> PyResult<Bound<'py, PyDict>> {
     size_dict(
         py,

@@ -46,6 +46,16 @@ pub fn html(py: Python<'_>, title: &str, dict: &Bound<'_, PyDict>) -> PyResult<S
         .extract()
 }
 
+static RENDER_OBJECT: PyOnceLock<Py<PyAny>> = PyOnceLock::new();
+
+/// The HTML view of an object read through its own attributes (`hydrograde._notebook`).
+pub fn html_object(obj: &Bound<'_, PyAny>, title: &str) -> PyResult<String> {
+    RENDER_OBJECT
+        .import(obj.py(), "hydrograde._notebook", "render_object")?
+        .call1((title, obj))?
+        .extract()
+}
+
 /// A pandas DataFrame of an object's `to_dict()` (raises ImportError without pandas).
 pub fn dataframe<'py>(py: Python<'py>, dict: &Bound<'py, PyDict>) -> PyResult<Bound<'py, PyAny>> {
     TO_DATAFRAME

@@ -245,7 +245,67 @@ static void test_line() {
   CHECK(e.first == HG_ERR_OUT_OF_RANGE, e.second.c_str());
 }
 
+// Pointer + length overloads, enum class values and the non-throwing try_* calls: the
+// same doubles as the vector and throwing forms, and a status instead of an exception.
+static void test_spans_enums_and_try() {
+  namespace hg = hydrograde;
+  const double re[3] = {1e4, 1e5, 1e6}, rr[3] = {1e-4, 1e-4, 1e-3};
+  double out[3] = {7, 7, 7};
+  hg::darcy_factor(re, rr, 3, out, hg::correlation::haaland);
+  std::vector<double> v = hg::darcy_factor({1e4, 1e5, 1e6}, {1e-4, 1e-4, 1e-3}, HG_CORRELATION_HAALAND);
+  CHECK(std::memcmp(out, v.data(), sizeof out) == 0, "span equals vector");
+  CHECK(hg::darcy_factor(1e5, 1e-4, hg::correlation::haaland) == hg::darcy_factor(1e5, 1e-4, HG_CORRELATION_HAALAND),
+        "enum class equals the constant");
+  const double bad[2] = {1e5, std::nan("")};
+  double kept[2] = {7, 7};
+  CHECK(thrown([&] { hg::darcy_factor(bad, rr, 2, kept); }).first == HG_ERR_NOT_FINITE && kept[0] == 7,
+        "span: throws, output unchanged");
+  hg::darcy_factor(re, rr, 0, nullptr);  // n = 0 does nothing
+  auto t = hg::try_darcy_factor(1e5, 1e-4);
+  CHECK(t.ok() && t.value == hg::darcy_factor(1e5, 1e-4), "try_ equals the throwing call");
+  auto tf = hg::try_darcy_factor(-1.0, 1e-4);
+  CHECK(!tf.ok() && tf.status == HG_ERR_OUT_OF_RANGE && !hg::last_error().empty(), "try_ gives the status");
+  double h[3], d[3];
+  const double q[3] = {1e-3, 2e-3, 3e-3};
+  hg::pipe_head_loss(0.05, 30, 4.5e-5, 998.2, 1.002e-3, q, 3, h, d);
+  auto hv = hg::pipe_head_loss(0.05, 30, 4.5e-5, 998.2, 1.002e-3, std::vector<double>(q, q + 3));
+  CHECK(h[2] == hv[2].head_loss && d[1] == hv[1].dhead_dflow, "pipe span equals vector");
+
+  // Every warning the library names is in the enum class, and nothing else.
+  std::size_t named = 0;
+  for (uint32_t bit = 1; bit != 0; bit <<= 1) named += hg_warning_name(bit) != nullptr;
+  CHECK(named == sizeof hg::all_warnings / sizeof *hg::all_warnings, "every warning in the enum class");
+  for (hg::warning w : hg::all_warnings) CHECK(hg_warning_name(static_cast<uint32_t>(w)) != nullptr, "named");
+  CHECK(hg::warnings_of(HG_WARN_TRANSITIONAL_FLOW | HG_WARN_GAS_COMPRESSIBILITY).size() == 2 &&
+            hg::has(HG_WARN_TRANSITIONAL_FLOW, hg::warning::transitional_flow),
+        "warnings_of");
+  for (int32_t c = 0;; ++c) {
+    if (!hg_correlation_name(c)) {
+      CHECK(c == static_cast<int32_t>(hg::correlation::fully_rough) + 1, "every correlation in the enum class");
+      break;
+    }
+  }
+
+  hg::fluid water = hg::fluid::water(293.15, 2e5);
+  hg::line l;
+  l.add_pipe(0.05, 30, 4.5e-5).add_fitting("gate_valve").add_rise(2.0);
+  auto rh = l.try_required_head(water, 2e-3);
+  CHECK(rh.ok() && rh.value.head_loss == l.required_head(water, 2e-3).head_loss, "try_required_head");
+  CHECK(l.try_required_head(water, std::nan("")).status == HG_ERR_NOT_FINITE, "try_required_head NaN");
+  double heads[3];
+  l.system_curve(water, q, 3, heads);
+  CHECK(heads[1] == l.system_curve(water, std::vector<double>(q, q + 3))[1], "system curve span");
+  double inplace[2] = {1e-3, std::nan("")};
+  CHECK(l.try_system_curve(water, inplace, 2, inplace) == HG_ERR_NOT_FINITE && inplace[0] == 1e-3,
+        "try_system_curve: status, heads unchanged");
+  hg::line_result r = l.evaluate(water, 2e-3);
+  CHECK(hg::regime_of(r.element(0).regime) == hg::regime::turbulent &&
+            hg::regime_of(r.element(2).regime) == hg::regime::none,
+        "regime enum class");
+}
+
 int main() {
+  test_spans_enums_and_try();
   test_friction();
   test_others();
   test_line();

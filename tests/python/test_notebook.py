@@ -44,9 +44,8 @@ def test_friction_renders_as_a_table_with_warnings_and_the_safety_note():
     fr = hg.friction(3000.0, 1e-4)
     text = rendered_text(fr._repr_html_())
     assert "Friction" in text and "transitional" in text
-    assert "transitional_flow" in text
     assert "competent engineer" in text
-    assert f"{fr.f:.6g}" in text
+    assert f"{fr.f:.4g}" in text  # four significant figures
 
 
 def test_to_dict_round_trips_the_fields():

@@ -1,12 +1,14 @@
 //! One workload per run, for instruction counting under callgrind
-//! (`scripts/profile.sh`): `profile <none|ln|colebrook|haaland|...|batch|line> <points>`
+//! (`scripts/profile.sh`): `profile <none|ln|colebrook|haaland|...|batch|batch:CORR:ISA|line> <points>`
 //! (`none` only draws the points: its count is subtracted from the others).
 //!
 //! Counting instructions is reproducible on a busy machine where wall-clock timings are
 //! not; the per-point count is the difference between two runs of different sizes, which
 //! cancels start-up and point generation.
 
-use hydrograde::friction::{Correlation, Options, darcy_factor, darcy_factor_batch};
+use hydrograde::friction::{
+    Correlation, Isa, Options, darcy_factor, darcy_factor_batch, darcy_factor_batch_on,
+};
 use hydrograde_benches::{flows, line20, turbulent_points, water};
 use std::hint::black_box;
 use std::process::ExitCode;
@@ -40,6 +42,24 @@ fn main() -> ExitCode {
         }
         "batch" => {
             if let Err(e) = darcy_factor_batch(&re, &rr, &Options::default(), &mut out) {
+                eprintln!("{e}");
+                return ExitCode::FAILURE;
+            }
+        }
+        name if name.starts_with("batch:") => {
+            // `batch:<correlation>:<isa>`: the batch kernel on a chosen instruction set
+            // (callgrind runs AVX2 at most).
+            let mut parts = name.split(':').skip(1);
+            let corr = parts.next().and_then(|c| c.parse::<Correlation>().ok());
+            let isa = parts
+                .next()
+                .and_then(|i| Isa::ALL.into_iter().find(|x| x.name() == i));
+            let (Some(corr), Some(isa)) = (corr, isa) else {
+                eprintln!("unknown workload {name}");
+                return ExitCode::from(2);
+            };
+            let opts = Options::with_correlation(corr);
+            if let Err(e) = darcy_factor_batch_on(isa, &re, &rr, &opts, &mut out) {
                 eprintln!("{e}");
                 return ExitCode::FAILURE;
             }

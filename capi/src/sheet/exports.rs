@@ -3,7 +3,7 @@
 
 use super::{SheetResult, arg_cells, arg_text, fail, from_si, in_si, put, run, text};
 use crate::ffi::HG_ERR_INVALID;
-use hydrograde::line::rows::{RowUnits, RowsLine, line_from_rows};
+use hydrograde::line::rows::{Cell, RowUnits, RowsLine, line_from_rows};
 use hydrograde::{Correlation, Fitting, Fluid, Options, PipeTable, PumpCurve, sizes};
 use std::ffi::c_char;
 
@@ -131,37 +131,42 @@ pub unsafe extern "system" fn hydro_air(
     })
 }
 
-/// `value` converted from unit `from` to unit `to`.
+/// `value` converted from unit `from_unit` to unit `to_unit`.
 ///
 /// # Safety
 /// Strings NUL-terminated; `result` writable; `msg` NULL or `msg_len` bytes.
 #[unsafe(no_mangle)]
 pub unsafe extern "system" fn hydro_convert(
     value: f64,
-    from: *const c_char,
-    to: *const c_char,
+    from_unit: *const c_char,
+    to_unit: *const c_char,
     result: *mut f64,
     msg: *mut c_char,
     msg_len: i32,
 ) -> i32 {
     run(msg, msg_len, || {
         // SAFETY: forwarded contract.
-        let (a, b) = unsafe { (arg_text("from", from)?, arg_text("to", to)?) };
+        let (a, b) = unsafe {
+            (
+                arg_text("from_unit", from_unit)?,
+                arg_text("to_unit", to_unit)?,
+            )
+        };
         let r = hydrograde::convert(value, &a, &b)?;
         // SAFETY: forwarded contract.
         unsafe { put("result", result, r) }
     })
 }
 
-/// A pressure or a head of a liquid of `density` (kg/m³) converted from `from` to `to`.
+/// A pressure or a head of a liquid of `density` (kg/m³) converted from `from_unit` to `to_unit`.
 ///
 /// # Safety
 /// Strings NUL-terminated; `result` writable; `msg` NULL or `msg_len` bytes.
 #[unsafe(no_mangle)]
 pub unsafe extern "system" fn hydro_convert_head(
     value: f64,
-    from: *const c_char,
-    to: *const c_char,
+    from_unit: *const c_char,
+    to_unit: *const c_char,
     density: f64,
     result: *mut f64,
     msg: *mut c_char,
@@ -169,21 +174,26 @@ pub unsafe extern "system" fn hydro_convert_head(
 ) -> i32 {
     run(msg, msg_len, || {
         // SAFETY: forwarded contract.
-        let (a, b) = unsafe { (arg_text("from", from)?, arg_text("to", to)?) };
+        let (a, b) = unsafe {
+            (
+                arg_text("from_unit", from_unit)?,
+                arg_text("to_unit", to_unit)?,
+            )
+        };
         let r = hydrograde::convert_head(value, &a, &b, density)?;
         // SAFETY: forwarded contract.
         unsafe { put("result", result, r) }
     })
 }
 
-/// K of the catalogue fitting `name` at Reynolds number `re` in a bore of `bore` (in
+/// K of the catalogue fitting `fitting_name` at Reynolds number `re` in a bore of `bore` (in
 /// `bore_unit`, empty: m), beside a pipe of relative roughness `pipe_rel_roughness`.
 ///
 /// # Safety
 /// Strings NUL-terminated; `k` writable; `msg` NULL or `msg_len` bytes.
 #[unsafe(no_mangle)]
 pub unsafe extern "system" fn hydro_fitting_k(
-    name: *const c_char,
+    fitting_name: *const c_char,
     re: f64,
     bore: f64,
     bore_unit: *const c_char,
@@ -196,7 +206,7 @@ pub unsafe extern "system" fn hydro_fitting_k(
         // SAFETY: forwarded contract.
         let (n, d) = unsafe {
             (
-                arg_text("name", name)?,
+                arg_text("fitting_name", fitting_name)?,
                 in_si("bore", bore, bore_unit, "m")?,
             )
         };
@@ -516,11 +526,19 @@ pub unsafe extern "system" fn hydro_line_operating_point(
         for (i, row) in pump.iter().enumerate() {
             let value = |c: usize| -> SheetResult<f64> {
                 match &row[c] {
-                    hydrograde::line::rows::Cell::Number(v) => Ok(*v),
-                    other => Err(fail(
+                    Cell::Number(v) => Ok(*v),
+                    Cell::Text(t) => Err(fail(
                         HG_ERR_INVALID,
                         format!(
-                            "pump: row {}, column {}: expected a number, got {other:?}",
+                            "pump: row {}, column {}: expected a number, got \"{t}\"",
+                            i + 1,
+                            c + 1
+                        ),
+                    )),
+                    Cell::Blank => Err(fail(
+                        HG_ERR_INVALID,
+                        format!(
+                            "pump: row {}, column {} is blank; expected a number",
                             i + 1,
                             c + 1
                         ),

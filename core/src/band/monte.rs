@@ -21,14 +21,27 @@ pub struct MonteCarlo {
     pub high: f64,
 }
 
-/// Samples the line's required head at `flow` (m³/s) `samples` times (≥ 100) with the
-/// uncertainty options of the line, from generator seed `seed`.
+/// The fewest samples [`monte_carlo`] accepts: fewer cannot place the 2.5 % and 97.5 %
+/// quantiles between samples.
+pub const MIN_SAMPLES: usize = 100;
+
+/// The most samples [`monte_carlo`] accepts, for every binding: the samples are kept in
+/// memory (8 bytes each, 80 MB at the limit), and JCGM 101:2008 needs of the order of
+/// 1e6 for a 95 % interval good to two significant digits.
+pub const MAX_SAMPLES: usize = 10_000_000;
+
+/// Samples the line's required head at `flow` (m³/s) `samples` times ([`MIN_SAMPLES`] to
+/// [`MAX_SAMPLES`]) with the uncertainty options of the line, from generator seed `seed`.
 ///
 /// Each source is drawn once per sample and acts wherever the first-order band lets it
 /// act: friction model, diameter, density and viscosity normal; each roughness source
 /// log-uniform over its stated range (one draw shared by the pipes of one material);
 /// each K source rectangular on ±its spread (one draw shared by the instances of one
 /// catalogue entry); each equipment rectangular on ±its spread.
+///
+/// # Errors
+/// [`Error::OutOfRange`] for `samples` outside [`MIN_SAMPLES`]..=[`MAX_SAMPLES`]; the
+/// errors of [`Line::evaluate`] at `flow`.
 pub fn monte_carlo(
     line: &Line,
     fluid: &Fluid,
@@ -36,11 +49,11 @@ pub fn monte_carlo(
     samples: usize,
     seed: u64,
 ) -> Result<MonteCarlo> {
-    if samples < 100 {
+    if !(MIN_SAMPLES..=MAX_SAMPLES).contains(&samples) {
         return Err(Error::out_of_range(
             "samples",
             samples as f64,
-            "must be at least 100",
+            format!("must lie between {MIN_SAMPLES} and {MAX_SAMPLES}"),
         ));
     }
     let mut values =
@@ -61,4 +74,37 @@ pub fn monte_carlo(
         low: quantile(0.025),
         high: quantile(0.975),
     })
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use crate::{Element, Pipe};
+
+    #[test]
+    fn sample_count_has_one_limit_and_allocates_nothing_beyond_it() {
+        let line = Line::new(vec![Element::Pipe(
+            Pipe::circular(0.05, 10.0, 4.5e-5).unwrap(),
+        )])
+        .unwrap();
+        let water = Fluid::new(998.0, 1.0e-3).unwrap();
+        for bad in [
+            0,
+            MIN_SAMPLES - 1,
+            MAX_SAMPLES + 1,
+            100_000_000_000,
+            1 << 62,
+        ] {
+            let e = monte_carlo(&line, &water, 1e-3, bad, 1).unwrap_err();
+            assert_eq!(e.kind(), crate::ErrorKind::OutOfRange, "{bad}");
+            assert!(e.to_string().starts_with("samples = "), "{e}");
+            assert!(e.to_string().contains("10000000"), "{e}");
+        }
+        assert_eq!(
+            monte_carlo(&line, &water, 1e-3, MIN_SAMPLES, 1)
+                .unwrap()
+                .samples,
+            100
+        );
+    }
 }

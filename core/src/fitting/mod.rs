@@ -446,12 +446,13 @@ impl Fitting {
         };
         let k_inertial = match self.method {
             // Backwards: from d_out up to d_in, a sudden expansion on the d_out velocity.
-            Method::Contraction { d_in, d_out } => {
-                inertial_at((1.0 - (d_out / d_in).powi(2)).powi(2), d_out)
-            }
+            Method::Contraction { d_in, d_out } => inertial_at(
+                crate::math::powi(1.0 - crate::math::powi(d_out / d_in, 2), 2),
+                d_out,
+            ),
             // Backwards: from d_out down to d_in, a sudden contraction on the d_in velocity.
             Method::Expansion { d_in, d_out } => {
-                inertial_at(0.5 * (1.0 - (d_in / d_out).powi(2)), d_in)
+                inertial_at(0.5 * (1.0 - crate::math::powi(d_in / d_out, 2)), d_in)
             }
             Method::EntranceSharp | Method::EntranceRounded { .. } | Method::EntranceProjecting => {
                 inertial_at(method::K_EXIT, self.diameter.unwrap_or(bore))

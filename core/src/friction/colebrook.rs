@@ -50,7 +50,7 @@ pub(crate) struct Solution {
 ///
 /// Splits `x` into `m · 2^e` with `m` in [1, 2) and fits `ln m` by a cubic in `m − 1`
 /// (least squares, max error 9.1e-4). `x` must be a positive normal number.
-#[inline]
+#[inline(always)]
 fn rough_ln(x: f64) -> f64 {
     let bits = x.to_bits();
     let e = math::small_uint_to_f64((bits >> 52) & 0x7ff) - 1023.0;
@@ -62,7 +62,7 @@ fn rough_ln(x: f64) -> f64 {
 
 /// One fifth-order Householder step for `F(s) = s + ln(a + β s)`; returns the
 /// correction δ (the new iterate is `s + δ`).
-#[inline]
+#[inline(always)]
 fn step(s: f64, a: f64, beta: f64) -> f64 {
     let (q, inv_d, _) = slopes(s, a, beta);
     let u = a + beta * s;
@@ -80,7 +80,7 @@ fn step(s: f64, a: f64, beta: f64) -> f64 {
 
 /// `q = β/u` (F' = 1 + q, F'' = −q², F''' = 2q³, F'''' = −6q⁴), `1/F' = u/(u + β)` and
 /// `u + β` at `s`, with one division: w = 1/(u (u + β)) gives both reciprocals.
-#[inline]
+#[inline(always)]
 fn slopes(s: f64, a: f64, beta: f64) -> (f64, f64, f64) {
     let u = a + beta * s;
     let v = u + beta;
@@ -91,7 +91,7 @@ fn slopes(s: f64, a: f64, beta: f64) -> (f64, f64, f64) {
 /// The last correction, from an iterate already within about 1e-6 of the root: the
 /// series reversion to third order in the Newton step r leaves an error of order
 /// r⁴ ≈ 1e-24, far below the rounding of `s`. Returns δ and `u + β` at `s`.
-#[inline]
+#[inline(always)]
 fn final_step(s: f64, a: f64, beta: f64) -> (f64, f64) {
     let (q, inv_d, v) = slopes(s, a, beta);
     let u = a + beta * s;
@@ -106,7 +106,7 @@ fn final_step(s: f64, a: f64, beta: f64) -> (f64, f64) {
 
 /// f = K / (s + δ)² with the square and the quotient carried in double-double, so the
 /// last correction δ is not rounded into `s` before use and the result is rounded once.
-#[inline]
+#[inline(always)]
 fn factor(s: f64, delta: f64) -> f64 {
     let (sq, sq_err) = math::two_prod(s, s);
     let d_hi = sq;
@@ -122,7 +122,7 @@ fn factor(s: f64, delta: f64) -> f64 {
 }
 
 /// Solves Colebrook–White for `re` > 0 and `rel_roughness` ≥ 0 (already validated).
-#[inline]
+#[inline(always)]
 pub(crate) fn solve(re: f64, rel_roughness: f64) -> Solution {
     let a = rel_roughness * (1.0 / 3.7);
     let inv_re = 1.0 / re;
@@ -143,40 +143,6 @@ pub(crate) fn solve(re: f64, rel_roughness: f64) -> Solution {
         df_dre: -g * s * beta * inv_re,     // (∂f/∂s)(∂s/∂β)(∂β/∂Re)
         df_drel_roughness: g * (1.0 / 3.7), // (∂f/∂s)(∂s/∂a)(∂a/∂(ε/D))
     }
-}
-
-/// Points solved side by side by [`solve_lanes`].
-pub(crate) const LANES: usize = 4;
-
-/// The friction factors of [`LANES`] points at once, bit for bit those of [`solve`].
-///
-/// The solver is one long chain of dependent operations (two logarithms, five divisions),
-/// so one point at a time leaves most of the processor idle; interleaving independent
-/// points step by step lets their chains overlap, about halving the time per point.
-#[inline]
-pub(crate) fn solve_lanes(re: &[f64; LANES], rel_roughness: &[f64; LANES]) -> [f64; LANES] {
-    let mut a = [0.0; LANES];
-    let mut beta = [0.0; LANES];
-    let mut s = [0.0; LANES];
-    let mut f = [0.0; LANES];
-    for k in 0..LANES {
-        a[k] = rel_roughness[k] * (1.0 / 3.7);
-        beta[k] = 2.51 * TWO_OVER_LN10 * (1.0 / re[k]);
-    }
-    for k in 0..LANES {
-        s[k] = -rough_ln(a[k] + beta[k] * 8.0);
-    }
-    for k in 0..LANES {
-        s[k] = -rough_ln(a[k] + beta[k] * s[k]);
-    }
-    for k in 0..LANES {
-        s[k] += step(s[k], a[k], beta[k]);
-    }
-    for k in 0..LANES {
-        let (delta, _) = final_step(s[k], a[k], beta[k]);
-        f[k] = factor(s[k], delta);
-    }
-    f
 }
 
 #[cfg(test)]
@@ -213,27 +179,6 @@ mod tests {
             }
         }
         assert!(worst < 1e-14, "worst relative residual {worst}");
-    }
-
-    #[test]
-    fn lanes_match_the_single_solver_bit_for_bit() {
-        // Exact check: the interleaved kernel performs the same operations per point.
-        for i in 0..500 {
-            let re: [f64; LANES] =
-                std::array::from_fn(|k| 1e3 * 10f64.powf(((i * LANES + k) % 997) as f64 / 99.7));
-            let rr: [f64; LANES] =
-                std::array::from_fn(|k| 0.5 * 10f64.powf(-(((i + 3 * k) % 13) as f64)));
-            let f = solve_lanes(&re, &rr);
-            for k in 0..LANES {
-                assert_eq!(
-                    f[k].to_bits(),
-                    solve(re[k], rr[k]).f.to_bits(),
-                    "{} {}",
-                    re[k],
-                    rr[k]
-                );
-            }
-        }
     }
 
     #[test]

@@ -15,12 +15,13 @@ const C: f64 = 2.0 / std::f64::consts::LN_10;
 /// Haaland (1983): 1/√f = −1.8 log10[(ε/3.7D)^1.11 + 6.9/Re].
 ///
 /// Haaland, S. E. (1983), J. Fluids Eng. 105(1) 89–90.
+#[inline(always)]
 pub(crate) fn haaland(re: f64, rr: f64) -> Solution {
     let k = 1.8 / std::f64::consts::LN_10;
     let t = rr / 3.7;
-    let tp = math::pow(t, 1.11);
+    let tp = math::pow_pos(t, 1.11);
     let arg = tp + 6.9 / re;
-    let x = -k * math::ln(arg);
+    let x = -k * math::ln_pos(arg);
     let f = 1.0 / (x * x);
     let df_dx = -2.0 * f / x;
     let dx_darg = -k / arg;
@@ -35,15 +36,16 @@ pub(crate) fn haaland(re: f64, rr: f64) -> Solution {
 /// Swamee and Jain (1976): f = 0.25 / [log10(ε/3.7D + 5.74/Re^0.9)]².
 ///
 /// Swamee, P. K. and Jain, A. K. (1976), J. Hydraul. Div. ASCE 102(5) 657–664.
+#[inline(always)]
 pub(crate) fn swamee_jain(re: f64, rr: f64) -> Solution {
-    let arg = rr / 3.7 + 5.74 * math::pow(re, -0.9);
-    let l = math::log10(arg);
+    let arg = rr / 3.7 + 5.74 * math::pow_pos(re, -0.9);
+    let l = math::log10_pos(arg);
     let f = 0.25 / (l * l);
     let df_dl = -2.0 * f / l;
     let dl_darg = 1.0 / (arg * std::f64::consts::LN_10);
     Solution {
         f,
-        df_dre: df_dl * dl_darg * (-0.9 * 5.74 * math::pow(re, -1.9)),
+        df_dre: df_dl * dl_darg * (-0.9 * 5.74 * math::pow_pos(re, -1.9)),
         df_drel_roughness: df_dl * dl_darg / 3.7,
     }
 }
@@ -54,12 +56,13 @@ pub(crate) fn swamee_jain(re: f64, rr: f64) -> Solution {
 /// A = [2.457 ln(1/((7/Re)^0.9 + 0.27 ε/D))]¹⁶, B = (37530/Re)¹⁶.
 ///
 /// Churchill, S. W. (1977), Chem. Eng. 84(24) 91–92.
+#[inline(always)]
 pub(crate) fn churchill(re: f64, rr: f64, lam: f64) -> Solution {
     let p = math::powi(lam / (8.0 * re), 12);
     let dp_dre = -12.0 * p / re;
-    let r7 = math::pow(7.0 / re, 0.9);
+    let r7 = math::pow_pos(7.0 / re, 0.9);
     let t = r7 + 0.27 * rr;
-    let l = -2.457 * math::ln(t);
+    let l = -2.457 * math::ln_pos(t);
     let a = math::powi(l, 16);
     let dl_dt = -2.457 / t;
     let da_dl = 16.0 * math::powi(l, 15);
@@ -67,10 +70,10 @@ pub(crate) fn churchill(re: f64, rr: f64, lam: f64) -> Solution {
     let b = math::powi(37530.0 / re, 16);
     let db_dre = -16.0 * b / re;
     let ab = a + b;
-    let q = math::pow(ab, -1.5);
+    let q = math::pow_pos(ab, -1.5);
     let dq_dab = -1.5 * q / ab;
     let sum = p + q;
-    let f = 8.0 * math::pow(sum, 1.0 / 12.0);
+    let f = 8.0 * math::pow_pos(sum, 1.0 / 12.0);
     let df_dsum = f / (12.0 * sum);
     let dq_dre = dq_dab * (da_dl * dl_dt * dt_dre + db_dre);
     let dq_drr = dq_dab * da_dl * dl_dt * 0.27;
@@ -86,18 +89,19 @@ pub(crate) fn churchill(re: f64, rr: f64, lam: f64) -> Solution {
 /// B = ψ(A), C = ψ(B), 1/√f = A − (B − A)² / (C − 2B + A).
 ///
 /// Serghides, T. K. (1984), Chem. Eng. 91(5) 63–64.
+#[inline(always)]
 pub(crate) fn serghides(re: f64, rr: f64) -> Solution {
     let a0 = rr / 3.7;
     // (value, d/dRe, d/da) of each sweep.
     let va = a0 + 12.0 / re;
-    let xa = -C * math::ln(va);
+    let xa = -C * math::ln_pos(va);
     let xa_re = -C / va * (-12.0 / (re * re));
     let xa_a = -C / va;
     let sweep = |x: f64, x_re: f64, x_a: f64| {
         let v = a0 + 2.51 * x / re;
         let v_re = 2.51 * (x_re / re - x / (re * re));
         let v_a = 1.0 + 2.51 * x_a / re;
-        (-C * math::ln(v), -C / v * v_re, -C / v * v_a)
+        (-C * math::ln_pos(v), -C / v * v_re, -C / v * v_a)
     };
     let (xb, xb_re, xb_a) = sweep(xa, xa_re, xa_a);
     let (xc, xc_re, xc_a) = sweep(xb, xb_re, xb_a);
@@ -126,8 +130,9 @@ pub(crate) fn serghides(re: f64, rr: f64) -> Solution {
 /// Blasius (1913), smooth pipes: f = 0.3164 Re^−0.25.
 ///
 /// Blasius, H. (1913), Forschungsarbeiten VDI 131.
+#[inline(always)]
 pub(crate) fn blasius(re: f64) -> Solution {
-    let f = 0.3164 * math::pow(re, -0.25);
+    let f = 0.3164 * math::pow_pos(re, -0.25);
     Solution {
         f,
         df_dre: -0.25 * f / re,
@@ -139,9 +144,10 @@ pub(crate) fn blasius(re: f64) -> Solution {
 /// 1/√f = −2 log10(ε/3.7D), independent of Re. Needs ε/D > 0 (checked by the caller).
 ///
 /// von Kármán, T. (1930); Nikuradse, J. (1933), VDI Forschungsheft 361.
+#[inline(always)]
 pub(crate) fn fully_rough(rr: f64) -> Solution {
     let a = rr / 3.7;
-    let x = -C * math::ln(a);
+    let x = -C * math::ln_pos(a);
     let f = 1.0 / (x * x);
     Solution {
         f,

@@ -26,6 +26,9 @@
 
 mod colebrook;
 mod explicit;
+mod kernel;
+
+pub use kernel::Isa;
 
 use crate::error::{Error, Result, check};
 use crate::warning::Warnings;
@@ -500,13 +503,30 @@ pub const PARALLEL_THRESHOLD: usize = 16_384;
 
 /// Friction factors of many points at once: `out[i] = darcy_factor(re[i], rel_roughness[i]).f`.
 ///
-/// Runs on all cores (rayon) above [`PARALLEL_THRESHOLD`] elements; the result is the
-/// same bit for bit either way.
+/// Runs on the threads [`crate::threads::set_threads`] allows above [`PARALLEL_THRESHOLD`]
+/// elements, and on each thread on the widest vector unit the processor has
+/// ([`Isa::detected`]); the result is the same bit for bit either way.
 ///
 /// # Errors
 /// [`Error::Invalid`] when the three slices differ in length; otherwise the error of the
 /// first failing element, wrapped in [`Error::AtIndex`].
 pub fn darcy_factor_batch(
+    re: &[f64],
+    rel_roughness: &[f64],
+    opts: &Options,
+    out: &mut [f64],
+) -> Result<()> {
+    darcy_factor_batch_on(Isa::detected(), re, rel_roughness, opts, out)
+}
+
+/// [`darcy_factor_batch`] on a chosen instruction set, for tests and benchmarks that
+/// compare them: every available one gives the same bits.
+///
+/// # Errors
+/// As [`darcy_factor_batch`], and [`Error::Invalid`] when `isa` is not available on this
+/// processor.
+pub fn darcy_factor_batch_on(
+    isa: Isa,
     re: &[f64],
     rel_roughness: &[f64],
     opts: &Options,
@@ -525,19 +545,21 @@ pub fn darcy_factor_batch(
     }
     opts.validate()?;
     if re.len() < PARALLEL_THRESHOLD {
-        batch_serial(re, rel_roughness, opts, out, 0)
-    } else {
-        let res = out
-            .par_chunks_mut(BATCH_CHUNK)
+        return batch_serial(isa, re, rel_roughness, opts, out, 0);
+    }
+    let parallel = crate::threads::in_pool(|| {
+        out.par_chunks_mut(BATCH_CHUNK)
             .zip(re.par_chunks(BATCH_CHUNK))
             .zip(rel_roughness.par_chunks(BATCH_CHUNK))
             .enumerate()
-            .try_for_each(|(c, ((o, r), e))| batch_serial(r, e, opts, o, c * BATCH_CHUNK));
-        match res {
-            Ok(()) => Ok(()),
-            // Report the first failing element, whichever thread saw an error first.
-            Err(_) => first_error(re, rel_roughness, opts),
-        }
+            .try_for_each(|(c, ((o, r), e))| batch_serial(isa, r, e, opts, o, c * BATCH_CHUNK))
+    });
+    match parallel {
+        // One thread allowed: no pool, the calling thread does it all.
+        None => batch_serial(isa, re, rel_roughness, opts, out, 0),
+        Some(Ok(())) => Ok(()),
+        // Report the first failing element, whichever thread saw an error first.
+        Some(Err(_)) => first_error(re, rel_roughness, opts),
     }
 }
 
@@ -546,53 +568,23 @@ const BATCH_CHUNK: usize = 4096;
 
 /// One thread's share of a batch; `offset` is the index of its first point in the batch.
 ///
-/// With exact Colebrook, groups of [`colebrook::LANES`] valid turbulent points go through
-/// the interleaved solver (the same bits as [`darcy_factor`], about twice the throughput);
-/// every other point takes the scalar path.
+/// Blocks of points that are all valid and take the correlation's formula alone go
+/// through the vector kernel; every other point takes [`darcy_factor`] (same bits).
 fn batch_serial(
+    isa: Isa,
     re: &[f64],
     rr: &[f64],
     opts: &Options,
     out: &mut [f64],
     offset: usize,
 ) -> Result<()> {
-    let one = |i: usize, o: &mut f64, r: f64, e: f64| -> Result<()> {
-        *o = darcy_factor(r, e, opts)
+    let mut one = |i: usize, o: &mut f64| -> Result<()> {
+        *o = darcy_factor(re[i], rr[i], opts)
             .map_err(|err| err.at_index(offset + i))?
             .f;
         Ok(())
     };
-    let lanes = colebrook::LANES;
-    let fast = |r: f64, e: f64| {
-        r > opts.turbulent_limit && r <= MAX_REYNOLDS && (0.0..=MAX_REL_ROUGHNESS).contains(&e)
-    };
-    let mut done = 0;
-    if opts.correlation == Correlation::Colebrook {
-        let chunks = out
-            .chunks_exact_mut(lanes)
-            .zip(re.chunks_exact(lanes))
-            .zip(rr.chunks_exact(lanes));
-        for (c, ((o, r), e)) in chunks.enumerate() {
-            match (
-                <&[f64; colebrook::LANES]>::try_from(r),
-                <&[f64; colebrook::LANES]>::try_from(e),
-            ) {
-                (Ok(r4), Ok(e4)) if r4.iter().zip(e4).all(|(&r, &e)| fast(r, e)) => {
-                    o.copy_from_slice(&colebrook::solve_lanes(r4, e4));
-                }
-                _ => {
-                    for k in 0..o.len() {
-                        one(c * lanes + k, &mut o[k], r[k], e[k])?;
-                    }
-                }
-            }
-        }
-        done = re.len() / lanes * lanes;
-    }
-    for i in done..re.len() {
-        one(i, &mut out[i], re[i], rr[i])?;
-    }
-    Ok(())
+    kernel::run_on(isa, &kernel::Kernel::new(opts), re, rr, out, &mut one)
 }
 
 fn first_error(re: &[f64], rr: &[f64], opts: &Options) -> Result<()> {

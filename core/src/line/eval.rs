@@ -410,8 +410,9 @@ impl Line {
         Ok((h, d * q_ratio(flow, q)))
     }
 
-    /// Required head (m) at each of `flows` (m³/s): the system curve. Runs on all cores
-    /// above 4096 points; the result is the same either way.
+    /// Required head (m) at each of `flows` (m³/s): the system curve. Runs on the threads
+    /// [`crate::threads::set_threads`] allows above 4096 points; the result is the same
+    /// either way.
     pub fn system_curve(&self, fluid: &Fluid, flows: &[f64]) -> Result<Vec<f64>> {
         let one = |(i, &q): (usize, &f64)| {
             self.required_head(fluid, q)
@@ -419,13 +420,15 @@ impl Line {
                 .map_err(|e| e.at_index(i))
         };
         if flows.len() < 4096 {
-            flows.iter().enumerate().map(one).collect()
-        } else {
-            let out: Result<Vec<f64>> = flows.par_iter().enumerate().map(one).collect();
-            match out {
-                Ok(v) => Ok(v),
-                Err(_) => flows.iter().enumerate().map(one).collect(),
-            }
+            return flows.iter().enumerate().map(one).collect();
+        }
+        let parallel = crate::threads::in_pool(|| -> Result<Vec<f64>> {
+            flows.par_iter().enumerate().map(one).collect()
+        });
+        match parallel {
+            Some(Ok(v)) => Ok(v),
+            // One thread allowed, or an error: the serial pass gives the first failing point.
+            _ => flows.iter().enumerate().map(one).collect(),
         }
     }
 }

@@ -186,6 +186,7 @@ impl Line {
         let mut elevation = 0.0;
         let mut elements = Vec::with_capacity(states.len());
         let sources = Sources::of(self);
+        let mut terms = sources.zero_terms();
         for (i, s) in states.iter().enumerate() {
             if let Some(v) = s.velocity {
                 last_v = v;
@@ -198,23 +199,28 @@ impl Line {
             total = total.map(|t| t - rho_g * (s.head_loss + height));
             let pressure_out = total.map(|t| t - 0.5 * work.density * last_v * last_v);
             let mut w = s.warnings;
-            if let (Some(p), Some(pv)) = (pressure_out, work.vapour_pressure) {
-                if p < pv {
-                    w.insert(Warnings::BELOW_VAPOUR_PRESSURE);
-                    messages.push(format!(
-                        "static pressure {p:.0} Pa after element {} is below the vapour pressure {pv:.0} Pa: cavitation or flashing is likely",
-                        self.origin[i].map_or_else(|| "(implied change of section)".to_string(), |e| e.to_string())
-                    ));
-                }
+            // No vapour pressure compares as −∞. Written as a select rather than a match on
+            // both options, so that no branch reads an absent option's payload (memcheck
+            // reports such speculated comparisons).
+            let pv = work.vapour_pressure.unwrap_or(f64::NEG_INFINITY);
+            if let Some(p) = pressure_out.filter(|p| *p < pv) {
+                w.insert(Warnings::BELOW_VAPOUR_PRESSURE);
+                messages.push(format!(
+                    "static pressure {p:.0} Pa after element {} is below the vapour pressure {pv:.0} Pa: cavitation or flashing is likely",
+                    self.origin[i].map_or_else(
+                        || "(implied change of section)".to_string(),
+                        |e| e.to_string()
+                    )
+                ));
             }
             warnings |= w;
-            let mut e = self.element_result(&sources, i, s, &work, pressure_out, w);
+            let bands = sources.element_bands(self, i, s, &work, &mut terms);
+            let mut e = self.element_result(i, s, bands, pressure_out, w);
             e.total_pressure_out = total;
             e.elevation_out = elevation;
             elements.push(e);
         }
-        let bands =
-            uncertainty::line_bands(self, &sources, &states, &work, head_loss, required_head);
+        let bands = uncertainty::line_bands(self, &sources, terms, &work, head_loss, required_head);
         Ok(LineResult {
             flow,
             head_loss,
@@ -238,10 +244,9 @@ impl Line {
 
     fn element_result(
         &self,
-        sources: &Sources,
         i: usize,
         s: &State,
-        fluid: &Fluid,
+        (head_loss_band, friction_factor_band): (Band, Option<Band>),
         pressure_out: Option<f64>,
         warnings: Warnings,
     ) -> ElementResult {
@@ -279,8 +284,8 @@ impl Line {
             total_pressure_out: None,
             elevation_out: 0.0,
             warnings,
-            head_loss_band: sources.element_band(self, i, s, fluid),
-            friction_factor_band: sources.friction_factor_band(self, i, s, fluid),
+            head_loss_band,
+            friction_factor_band,
         }
     }
 }

@@ -34,6 +34,11 @@ pub struct FlowSolution {
 
 /// Finds `x` in the bracket `[lo, hi]` with `g(x) = 0`, where `g` returns (value, slope)
 /// and `g(lo) ≤ 0 ≤ g(hi)` (g increasing). Returns (x, iterations).
+///
+/// # Errors
+/// The errors of `g`; [`Error::NoSolution`] when the iteration limit is reached before
+/// the bracket or the Newton step shrinks to the rounding of `x` (never a result that has
+/// not converged).
 pub(crate) fn safeguarded_newton(
     mut g: impl FnMut(f64) -> Result<(f64, f64)>,
     mut lo: f64,
@@ -68,7 +73,9 @@ pub(crate) fn safeguarded_newton(
         }
         x = next;
     }
-    Ok((x, MAX_ITER))
+    Err(Error::no_solution(format!(
+        "the solver did not converge in {MAX_ITER} iterations (last bracket [{lo}, {hi}])"
+    )))
 }
 
 impl Line {
@@ -146,17 +153,58 @@ impl Line {
 
 /// A pump's head against flow, interpolated by a monotone cubic (Fritsch and Carlson,
 /// 1980, SIAM J. Numer. Anal. 17(2) 238–246), so the interpolant never rises where the
-/// data falls.
+/// data falls. Deserialising runs the checks of [`PumpCurve::new`] on the points and
+/// works the slopes out again (they are never read from the stored form).
 #[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+#[serde(try_from = "PumpCurveSpec", into = "PumpCurveSpec")]
 pub struct PumpCurve {
     flows: Vec<f64>,
     heads: Vec<f64>,
     slopes: Vec<f64>,
 }
 
+/// The stored form of a [`PumpCurve`]: its points only.
+#[derive(Serialize, Deserialize)]
+struct PumpCurveSpec {
+    flows: Vec<f64>,
+    heads: Vec<f64>,
+}
+
+impl TryFrom<PumpCurveSpec> for PumpCurve {
+    type Error = Error;
+    fn try_from(s: PumpCurveSpec) -> Result<PumpCurve> {
+        PumpCurve::new(&s.flows, &s.heads)
+    }
+}
+
+impl From<PumpCurve> for PumpCurveSpec {
+    fn from(c: PumpCurve) -> PumpCurveSpec {
+        PumpCurveSpec {
+            flows: c.flows,
+            heads: c.heads,
+        }
+    }
+}
+
+/// Most points a pump curve accepts (a measured curve has tens).
+pub const PUMP_CURVE_MAX_POINTS: usize = 10_000;
+/// Largest flow of a pump curve point, m³/s (the inverse solvers' range; the largest
+/// pumps built pass tens of m³/s).
+pub const PUMP_CURVE_MAX_FLOW: f64 = 1e6;
+/// Largest head (in magnitude) of a pump curve point, m: far above any pump built, and
+/// low enough that the interpolation cannot overflow.
+pub const PUMP_CURVE_MAX_HEAD: f64 = 1e6;
+
 impl PumpCurve {
-    /// A curve through (flow m³/s, head m) points: at least 3, flows ≥ 0 strictly
-    /// increasing, heads non-increasing with flow.
+    /// A curve through (flow m³/s, head m) points: 3 to [`PUMP_CURVE_MAX_POINTS`], flows
+    /// from 0 to [`PUMP_CURVE_MAX_FLOW`] strictly increasing, heads within
+    /// ±[`PUMP_CURVE_MAX_HEAD`] and non-increasing with flow, every slope between two
+    /// points a finite number.
+    ///
+    /// # Errors
+    /// Lists of different lengths or with too few or too many points; a flow or head not
+    /// finite; flows not strictly increasing; a head that rises with flow; points so close
+    /// together or heads so far apart that the slope between them is not a finite number.
     pub fn new(flows: &[f64], heads: &[f64]) -> Result<PumpCurve> {
         if flows.len() != heads.len() {
             return Err(Error::invalid(
@@ -171,8 +219,10 @@ impl PumpCurve {
             ));
         }
         for (i, (&q, &h)) in flows.iter().zip(heads).enumerate() {
-            check::non_negative("flows", q).map_err(|e| e.at_index(i))?;
-            check::finite("heads", h).map_err(|e| e.at_index(i))?;
+            check::within("flows", q, 0.0, PUMP_CURVE_MAX_FLOW, "m³/s")
+                .map_err(|e| e.at_index(i))?;
+            check::within("heads", h, -PUMP_CURVE_MAX_HEAD, PUMP_CURVE_MAX_HEAD, "m")
+                .map_err(|e| e.at_index(i))?;
             if i > 0 && q <= flows[i - 1] {
                 return Err(Error::out_of_range(
                     "flows",
@@ -188,10 +238,33 @@ impl PumpCurve {
                 return Err(Error::out_of_range("heads", h, format!("must not rise with flow (point {i} is above point {}): the curve is not monotonic", i - 1)).at_index(i));
             }
         }
+        if flows.len() > PUMP_CURVE_MAX_POINTS {
+            return Err(Error::invalid(
+                "flows",
+                format!(
+                    "a pump curve takes at most {PUMP_CURVE_MAX_POINTS} points, got {}",
+                    flows.len()
+                ),
+            ));
+        }
         let n = flows.len();
-        let delta: Vec<f64> = (0..n - 1)
-            .map(|i| (heads[i + 1] - heads[i]) / (flows[i + 1] - flows[i]))
-            .collect();
+        let mut delta = Vec::with_capacity(n - 1);
+        for i in 0..n - 1 {
+            let d = (heads[i + 1] - heads[i]) / (flows[i + 1] - flows[i]);
+            if !d.is_finite() {
+                return Err(Error::out_of_range(
+                    "flows",
+                    flows[i + 1],
+                    format!(
+                        "is too close to point {i} ({}) for the head change between them: \
+                         the slope is not a finite number",
+                        flows[i]
+                    ),
+                )
+                .at_index(i + 1));
+            }
+            delta.push(d);
+        }
         let mut m = vec![0.0; n];
         m[0] = delta[0];
         m[n - 1] = delta[n - 2];
@@ -199,7 +272,7 @@ impl PumpCurve {
             m[i] = if delta[i - 1] * delta[i] <= 0.0 {
                 0.0
             } else {
-                0.5 * (delta[i - 1] + delta[i])
+                0.5 * delta[i - 1] + 0.5 * delta[i]
             };
         }
         // Fritsch–Carlson limiter: keep (α, β) inside the circle of radius 3.
@@ -314,11 +387,89 @@ impl Line {
         let (_, slope) = self.required_head(fluid, flow)?;
         let (flow_band, head_band) =
             uncertainty::operating_point_bands(self, fluid, flow, head, slope, dpump)?;
+        let values = [
+            ("flow", flow),
+            ("head", head),
+            ("flow band", flow_band.low),
+            ("flow band", flow_band.high),
+            ("head band", head_band.low),
+            ("head band", head_band.high),
+        ];
+        if let Some((name, v)) = values.iter().find(|(_, v)| !v.is_finite()) {
+            return Err(Error::no_solution(format!(
+                "the operating point's {name} is not finite ({v}): the pump curve's heads or the line's losses are too large to combine in double precision"
+            )));
+        }
         Ok(OperatingPoint {
             flow,
             head,
             flow_band,
             head_band,
         })
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use crate::ErrorKind;
+
+    #[test]
+    fn newton_reports_no_convergence_instead_of_a_guess() {
+        // A zero slope forces bisection; from [0, 1e300] to a root at 1e-300 bisection
+        // needs about 2000 halvings (log2(1e600)), far beyond the limit.
+        let e = safeguarded_newton(|x| Ok((x - 1e-300, 0.0)), 0.0, 1e300).unwrap_err();
+        assert_eq!(e.kind(), ErrorKind::NoSolution);
+        assert!(e.to_string().contains("did not converge"), "{e}");
+        // The same function from a sane bracket converges (exact root 0.5, by construction).
+        let (x, _) = safeguarded_newton(|x| Ok((x - 0.5, 1.0)), 0.0, 1.0).unwrap();
+        assert_eq!(x, 0.5);
+    }
+
+    #[test]
+    fn degenerate_pump_curves_are_refused() {
+        let invalid = |f: &[f64], h: &[f64]| PumpCurve::new(f, h).unwrap_err();
+        assert_eq!(invalid(&[], &[]).kind(), ErrorKind::Invalid);
+        assert_eq!(invalid(&[0.0, 1.0], &[5.0, 4.0]).kind(), ErrorKind::Invalid);
+        assert_eq!(
+            invalid(&[0.0, 1.0, 2.0], &[5.0, 4.0]).kind(),
+            ErrorKind::Invalid
+        );
+        // Subnormal spacing: the slope between the points overflows.
+        let tiny = f64::from_bits(1); // the smallest subnormal
+        let e = invalid(&[0.0, tiny, 1.0], &[10.0, 9.0, 5.0]);
+        assert_eq!(e.kind(), ErrorKind::OutOfRange);
+        assert!(
+            e.to_string().contains("slope is not a finite number"),
+            "{e}"
+        );
+        let e = invalid(&[0.0, 1.0, 2.0], &[f64::NAN, 9.0, 5.0]);
+        assert_eq!(e.kind(), ErrorKind::NotFinite);
+        let e = invalid(&[0.0, 1.0, 2.0], &[1e300, 9.0, -1e300]);
+        assert_eq!(e.kind(), ErrorKind::OutOfRange);
+        let e = invalid(&[0.0, 1.0, 1e300], &[10.0, 9.0, 5.0]);
+        assert_eq!(e.kind(), ErrorKind::OutOfRange);
+        let many: Vec<f64> = (0..=PUMP_CURVE_MAX_POINTS)
+            .map(|i| i as f64 * 1e-3)
+            .collect();
+        let heads: Vec<f64> = many.iter().map(|q| 100.0 - q).collect();
+        assert_eq!(invalid(&many, &heads).kind(), ErrorKind::Invalid);
+    }
+
+    #[test]
+    fn pump_curve_serde_checks_points_and_rebuilds_slopes() {
+        let c = PumpCurve::new(&[0.0, 0.01, 0.02], &[30.0, 26.0, 18.0]).unwrap();
+        let text = serde_json::to_string(&c).unwrap();
+        assert!(!text.contains("slopes"), "{text}");
+        let back: PumpCurve = serde_json::from_str(&text).unwrap();
+        assert_eq!(back, c);
+        for bad in [
+            r#"{"flows":[],"heads":[]}"#,
+            r#"{"flows":[0.0,0.01],"heads":[30.0,26.0]}"#,
+            r#"{"flows":[0.0,0.02,0.01],"heads":[30.0,26.0,18.0]}"#,
+            r#"{"flows":[0.0,0.01,0.02],"heads":[30.0,36.0,18.0]}"#,
+        ] {
+            assert!(serde_json::from_str::<PumpCurve>(bad).is_err(), "{bad}");
+        }
     }
 }

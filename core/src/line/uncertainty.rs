@@ -25,6 +25,7 @@ use rand::rngs::StdRng;
 use rand::{Rng, SeedableRng};
 use rayon::prelude::*;
 use serde::{Deserialize, Serialize};
+use std::borrow::Cow;
 use std::collections::HashMap;
 
 /// Source numbers shared by every line.
@@ -34,6 +35,8 @@ const DENSITY: u32 = 2;
 const VISCOSITY: u32 = 3;
 /// No source.
 const NONE: u32 = u32::MAX;
+/// The 95 % interval of a rectangular variable is this share of its half-width.
+const P95_RECT: f64 = 0.95;
 
 /// Standard uncertainty of ln ε and the offset of its mean from ln ε₀ for one pipe:
 /// log-uniform over the range stated for the pipe (`own`) or carried by it (its
@@ -71,6 +74,15 @@ pub(crate) fn roughness_input(
         None if p.roughness > 0.0 => Ok((options.uncertainty.roughness_default, 0.0)),
         None => Ok((0.0, 0.0)),
     }
+}
+
+/// `name` as the catalogue's own static string when it is one of `known` (so sources
+/// clone without allocating), else owned.
+fn static_name(name: &str, known: &[&'static str]) -> Cow<'static, str> {
+    known
+        .iter()
+        .find(|k| **k == name)
+        .map_or_else(|| Cow::Owned(name.to_string()), |k| Cow::Borrowed(*k))
 }
 
 /// The sources of one line, numbered: the four shared ones first, then each roughness
@@ -129,7 +141,10 @@ impl Sources {
                         Some(m) => match materials.get(m) {
                             Some(&id) => id,
                             None => {
-                                let id = push(&mut list, Source::Material(m.to_string()));
+                                let id = push(
+                                    &mut list,
+                                    Source::Material(static_name(m, &crate::roughness::names())),
+                                );
                                 materials.insert(m, id);
                                 id
                             }
@@ -149,7 +164,7 @@ impl Sources {
                         &mut list,
                         Source::FittingK {
                             element,
-                            name: name.clone(),
+                            name: Cow::Owned(name.clone()),
                         },
                     );
                 }
@@ -164,7 +179,13 @@ impl Sources {
                         Some(name) => match entries.get(name) {
                             Some(&id) => id,
                             None => {
-                                let id = push(&mut list, Source::CatalogueK(name.to_string()));
+                                let id = push(
+                                    &mut list,
+                                    Source::CatalogueK(static_name(
+                                        name,
+                                        &crate::fitting::Fitting::catalogue(),
+                                    )),
+                                );
                                 entries.insert(name, id);
                                 id
                             }
@@ -173,7 +194,7 @@ impl Sources {
                             &mut list,
                             Source::FittingK {
                                 element,
-                                name: f.name(),
+                                name: Cow::Borrowed(f.method().name()),
                             },
                         ),
                     };
@@ -226,6 +247,60 @@ impl Sources {
         (self.own[i] != NONE).then_some(self.own[i] as usize)
     }
 
+    /// The roughness terms of pipe `i`'s head loss and friction factor.
+    ///
+    /// ln ε is uniform over `[c − √3·u, c + √3·u]` (`c` its centre). The friction
+    /// factor is evaluated at the input's own 95 % points `c ± 0.95·√3·u` (two more
+    /// friction solves): the term is the equivalent rectangular one whose 95 % interval
+    /// has those two values as its ends, centred between them. For a band that this
+    /// roughness dominates the interval is then exact however curved the response is
+    /// over the range (the quoted ranges span factors of 3 to 10, too far for the tangent);
+    /// elsewhere it is the secant over the input's range instead of the tangent at the
+    /// nominal value. Falls back to the tangent where the secant cannot be evaluated.
+    fn roughness_terms(&self, line: &Line, i: usize, s: &State) -> (Term, Term) {
+        let shift = self.shift[i];
+        let f_rr = s.f_sens.1;
+        let tangent = (
+            Term {
+                u: s.sens.roughness * s.roughness_u,
+                shift: s.sens.roughness * shift,
+            },
+            Term {
+                u: f_rr * s.roughness_u,
+                shift: f_rr * shift,
+            },
+        );
+        let (Resolved::Pipe { pipe, geometry, .. }, Some(f0), Some(re)) =
+            (&line.resolved[i], s.friction_factor, s.reynolds)
+        else {
+            return tangent;
+        };
+        if s.sens.roughness == 0.0 || s.roughness_u == 0.0 || f0 == 0.0 {
+            return tangent;
+        }
+        let scale = geometry.dt / geometry.dh;
+        let o = crate::friction::Options {
+            laminar_constant: geometry.c * scale,
+            ..line.options.friction
+        };
+        let re_t = re * scale;
+        let half = P95_RECT * 3f64.sqrt() * s.roughness_u;
+        let f_at = |dl: f64| {
+            crate::friction::darcy_factor(re_t, pipe.roughness * math::exp(dl) / geometry.dt, &o)
+                .map(|r| r.f)
+        };
+        match (f_at(shift - half), f_at(shift + half)) {
+            (Ok(lo), Ok(hi)) => {
+                let f_term = Term {
+                    u: (hi - lo) / (2.0 * P95_RECT * 3f64.sqrt()),
+                    shift: 0.5 * (hi + lo) - f0,
+                };
+                (f_term.times(s.head_loss / f0), f_term)
+            }
+            _ => tangent,
+        }
+    }
+
     /// Calls `f(source, term)` for each source of element `i`'s head loss.
     fn element_terms(
         &self,
@@ -233,18 +308,26 @@ impl Sources {
         i: usize,
         s: &State,
         fluid: &Fluid,
+        f: impl FnMut(u32, Term),
+    ) {
+        let rough = (self.rough[i] != NONE).then(|| self.roughness_terms(line, i, s).0);
+        self.element_terms_with(line, i, s, fluid, rough, f);
+    }
+
+    /// As [`Sources::element_terms`] with the roughness term already worked out.
+    fn element_terms_with(
+        &self,
+        line: &Line,
+        i: usize,
+        s: &State,
+        fluid: &Fluid,
+        rough: Option<Term>,
         mut f: impl FnMut(u32, Term),
     ) {
         let uo = &line.options.uncertainty;
         f(MODEL, Term::of(s.sens.model * s.model_u));
-        if self.rough[i] != NONE {
-            f(
-                self.rough[i],
-                Term {
-                    u: s.sens.roughness * s.roughness_u,
-                    shift: s.sens.roughness * self.shift[i],
-                },
-            );
+        if let Some(t) = rough {
+            f(self.rough[i], t);
         }
         f(DIAMETER, Term::of(s.sens.diameter * uo.diameter));
         if uo.fluid {
@@ -289,51 +372,58 @@ impl Sources {
         )
     }
 
-    /// The band of one element's head loss.
-    pub(crate) fn element_band(&self, line: &Line, i: usize, s: &State, fluid: &Fluid) -> Band {
-        let mut terms: Vec<(Source, Term)> = Vec::with_capacity(6);
-        self.element_terms(line, i, s, fluid, |k, t| {
-            if t.u != 0.0 {
-                terms.push((self.list[k as usize].clone(), t));
-            }
-        });
-        Band::from_terms(s.head_loss, terms)
+    /// A zero term per source.
+    pub(crate) fn zero_terms(&self) -> Vec<Term> {
+        vec![Term::default(); self.len()]
     }
 
-    /// The band of one pipe's friction factor, if it has one.
-    pub(crate) fn friction_factor_band(
+    /// The bands of element `i`'s head loss and (pipes) friction factor, adding the
+    /// element's head-loss terms into `acc` on the way (each term worked out once).
+    pub(crate) fn element_bands(
         &self,
         line: &Line,
         i: usize,
         s: &State,
         fluid: &Fluid,
-    ) -> Option<Band> {
-        let f = s.friction_factor?;
+        acc: &mut [Term],
+    ) -> (Band, Option<Band>) {
         let uo = &line.options.uncertainty;
-        let (f_re, f_rr) = s.f_sens;
-        let fl = if uo.fluid { 1.0 } else { 0.0 };
-        let mut terms = vec![
-            (Source::FrictionModel, Term::of(f * s.model_u)),
-            (Source::Diameter, Term::of(-(f_re + f_rr) * uo.diameter)),
-            (
-                Source::Density,
-                Term::of(f_re * fluid.density_rel_uncertainty * fl),
-            ),
-            (
-                Source::Viscosity,
-                Term::of(-f_re * fluid.viscosity_rel_uncertainty * fl),
-            ),
-        ];
-        if let Some((k, shift)) = self.roughness_of(i) {
-            terms.push((
-                self.list[k].clone(),
-                Term {
-                    u: f_rr * s.roughness_u,
-                    shift: f_rr * shift,
-                },
-            ));
-        }
-        Some(Band::from_terms(f, terms))
+        let rough = (self.rough[i] != NONE).then(|| self.roughness_terms(line, i, s));
+        // At most six sources act on one element: gathered on the stack.
+        let mut mine = [(0u32, Term::default()); 6];
+        let mut n = 0;
+        self.element_terms_with(line, i, s, fluid, rough.map(|r| r.0), |k, t| {
+            acc[k as usize] = acc[k as usize].plus(t);
+            if t.u != 0.0 {
+                mine[n] = (k, t);
+                n += 1;
+            }
+        });
+        let head = Band::from_terms(
+            s.head_loss,
+            mine[..n]
+                .iter()
+                .map(|&(k, t)| (self.list[k as usize].clone(), t)),
+        );
+        let friction = s.friction_factor.map(|f| {
+            let (f_re, f_rr) = s.f_sens;
+            let fl = if uo.fluid { 1.0 } else { 0.0 };
+            let shared = [
+                (Source::FrictionModel, Term::of(f * s.model_u)),
+                (Source::Diameter, Term::of(-(f_re + f_rr) * uo.diameter)),
+                (
+                    Source::Density,
+                    Term::of(f_re * fluid.density_rel_uncertainty * fl),
+                ),
+                (
+                    Source::Viscosity,
+                    Term::of(-f_re * fluid.viscosity_rel_uncertainty * fl),
+                ),
+            ];
+            let own = rough.map(|r| (self.list[self.rough[i] as usize].clone(), r.1));
+            Band::from_terms(f, shared.into_iter().chain(own))
+        });
+        (head, friction)
     }
 }
 
@@ -344,18 +434,17 @@ pub(crate) struct LineBands {
     pub required_head: Band,
 }
 
-/// Bands of the totals from the element states (`fluid` the working fluid, `head_loss`
-/// and `required_head` the nominal totals).
+/// Bands of the totals from the head-loss terms `acc` gathered by
+/// [`Sources::element_bands`] (`fluid` the working fluid, `head_loss` and
+/// `required_head` the nominal totals).
 pub(crate) fn line_bands(
     line: &Line,
     sources: &Sources,
-    states: &[State],
+    mut acc: Vec<Term>,
     fluid: &Fluid,
     head_loss: f64,
     required_head: f64,
 ) -> LineBands {
-    let mut acc = vec![Term::default(); sources.len()];
-    sources.accumulate(line, states.iter().enumerate(), fluid, &mut acc);
     let head = sources.band(head_loss, &acc);
     let rho_g = fluid.density * STANDARD_GRAVITY;
     // The pressure loss ρ·g·h also moves with ρ directly.

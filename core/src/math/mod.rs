@@ -102,12 +102,26 @@ fn log1p_kernel(f: f64) -> (f64, f64) {
     (hfsq, s * (hfsq + (t2 + t1)))
 }
 
-/// ln x for a positive normal finite `x`, branch-free (the core of [`ln`]).
+/// Lifts a subnormal `x` into the normal range, branch-free: returns `(x·2^54, −54)` for
+/// a subnormal, `(x, 0)` otherwise.
 #[inline(always)]
-pub(crate) fn ln_normal(x: f64) -> f64 {
-    let (k, f) = split(x);
+fn lift(x: f64) -> (f64, f64) {
+    let sub = x < f64::MIN_POSITIVE;
+    (
+        if sub { x * TWO54 } else { x },
+        if sub { -54.0 } else { 0.0 },
+    )
+}
+
+/// ln x for 0 ≤ x < ∞, branch-free (the core of [`ln`]; the same bits).
+#[inline(always)]
+pub(crate) fn ln_pos(x: f64) -> f64 {
+    let (xs, k0) = lift(x);
+    let (k, f) = split(xs);
+    let k = k + k0;
     let (hfsq, r) = log1p_kernel(f);
-    k * LN2_HI - ((hfsq - (r + k * LN2_LO)) - f)
+    let v = k * LN2_HI - ((hfsq - (r + k * LN2_LO)) - f);
+    if x == 0.0 { f64::NEG_INFINITY } else { v }
 }
 
 /// `s + ln x` for a positive normal finite `x`, with the logarithm's large part added to
@@ -133,8 +147,8 @@ pub(crate) fn add_ln(s: f64, x: f64) -> f64 {
 /// ```
 #[inline]
 pub fn ln(x: f64) -> f64 {
-    if (f64::MIN_POSITIVE..f64::INFINITY).contains(&x) {
-        ln_normal(x)
+    if (0.0..f64::INFINITY).contains(&x) {
+        ln_pos(x)
     } else {
         ln_special(x)
     }
@@ -142,18 +156,7 @@ pub fn ln(x: f64) -> f64 {
 
 #[cold]
 fn ln_special(x: f64) -> f64 {
-    if x > 0.0 && x < f64::MIN_POSITIVE {
-        let (k, f) = split(x * TWO54);
-        let (hfsq, r) = log1p_kernel(f);
-        let k = k - 54.0;
-        k * LN2_HI - ((hfsq - (r + k * LN2_LO)) - f)
-    } else if x == 0.0 {
-        f64::NEG_INFINITY
-    } else if x == f64::INFINITY {
-        x
-    } else {
-        f64::NAN
-    }
+    if x == f64::INFINITY { x } else { f64::NAN }
 }
 
 /// Base-10 logarithm, with the conversion from ln carried in extra precision (not
@@ -167,19 +170,19 @@ fn ln_special(x: f64) -> f64 {
 /// ```
 #[inline]
 pub fn log10(x: f64) -> f64 {
-    if (f64::MIN_POSITIVE..f64::INFINITY).contains(&x) {
-        log10_normal(x)
-    } else if x > 0.0 && x < f64::MIN_POSITIVE {
-        log10_normal(x * TWO54) - 54.0 * std::f64::consts::LOG10_2
+    if (0.0..f64::INFINITY).contains(&x) {
+        log10_pos(x)
     } else {
         ln_special(x)
     }
 }
 
-/// log10 x for a positive normal finite `x`, branch-free.
+/// log10 x for 0 ≤ x < ∞, branch-free (the core of [`log10`]; the same bits).
 #[inline(always)]
-pub(crate) fn log10_normal(x: f64) -> f64 {
-    let (k, f) = split(x);
+pub(crate) fn log10_pos(x: f64) -> f64 {
+    let (xs, k0) = lift(x);
+    let (k, f) = split(xs);
+    let k = k + k0;
     let (hfsq, r) = log1p_kernel(f);
     // ln(1 + f) = hi + lo with hi of 21 bits, so hi·IVLN10_HI is exact.
     let hi = f64::from_bits((f - hfsq).to_bits() & 0xffff_ffff_0000_0000);
@@ -189,7 +192,8 @@ pub(crate) fn log10_normal(x: f64) -> f64 {
     let mut val_lo = k * LOG10_2_LO + (lo + hi) * IVLN10_LO + lo * IVLN10_HI;
     let w = y2 + val_hi;
     val_lo += (y2 - w) + val_hi;
-    val_lo + w
+    let v = val_lo + w;
+    if x == 0.0 { f64::NEG_INFINITY } else { v }
 }
 
 /// `ln(1 + x)`, accurate also for tiny |x|.
@@ -303,10 +307,25 @@ fn two_sum(a: f64, b: f64) -> (f64, f64) {
     (s, (a - (s - bb)) + (b - bb))
 }
 
-/// x^y for a positive normal `x` and a finite `y`, branch-free (the core of [`pow`]).
+/// x^y for 0 ≤ x ≤ ∞ and a finite `y`, branch-free (the core of [`pow`]; the same bits).
 #[inline(always)]
-pub(crate) fn pow_positive(x: f64, y: f64) -> f64 {
-    pow_scaled(x, y, 0.0)
+pub(crate) fn pow_pos(x: f64, y: f64) -> f64 {
+    let (xs, k0) = lift(x);
+    let v = pow_scaled(xs, y, k0);
+    // 0^y and ∞^y by selection, so that the function stays branch-free.
+    let edge = if x == 0.0 { -y } else { y };
+    let at_edge = if y == 0.0 {
+        1.0
+    } else if edge > 0.0 {
+        f64::INFINITY
+    } else {
+        0.0
+    };
+    if x == 0.0 || x == f64::INFINITY {
+        at_edge
+    } else {
+        v
+    }
 }
 
 #[inline(always)]
@@ -332,11 +351,8 @@ fn pow_scaled(x: f64, y: f64, k0: f64) -> f64 {
 /// ```
 #[inline]
 pub fn pow(x: f64, y: f64) -> f64 {
-    if (f64::MIN_POSITIVE..f64::INFINITY).contains(&x) && y.is_finite() {
-        if x == 1.0 {
-            return 1.0;
-        }
-        pow_positive(x, y)
+    if ((x > 0.0 && x < f64::INFINITY) || x.to_bits() == 0) && y.is_finite() {
+        pow_pos(x, y)
     } else {
         pow_special(x, y)
     }
@@ -372,8 +388,7 @@ fn pow_special(x: f64, y: f64) -> f64 {
     if x == f64::INFINITY {
         return if y > 0.0 { f64::INFINITY } else { 0.0 };
     }
-    // Subnormal x: scale into the normal range and take the 54 back in the logarithm.
-    pow_scaled(x * TWO54, y, -54.0)
+    f64::NAN
 }
 
 /// x^n by repeated squaring (the same operation sequence on every platform).

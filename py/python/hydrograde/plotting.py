@@ -106,13 +106,12 @@ def system_curve(
     curve over its range and the operating point with its flow and head bands.
     """
     q = np.asarray(flows, dtype=float)
-    heads = line.system_curve(fluid, q)
-    bands = [line.evaluate(fluid, float(x)).required_head_band for x in q]
+    low, heads, high = line.system_curve_band(fluid, q)
     with style():
         ax = _axes(ax)
         ax.fill_between(
-            q, [b.low for b in bands], [b.high for b in bands],
-            color=PALETTE[0], alpha=0.15, linewidth=0, label="system band (k = 2)",
+            q, low, high,
+            color=PALETTE[0], alpha=0.15, linewidth=0, label="system band (95 %)",
         )
         ax.plot(q, heads, color=PALETTE[0], label="system curve")
         if pump is not None:

@@ -9,7 +9,9 @@
 mod capi;
 mod table;
 
-use hydrograde::friction::{Correlation, Options, darcy_factor, darcy_factor_batch};
+use hydrograde::friction::{
+    Correlation, Isa, Options, darcy_factor, darcy_factor_batch, darcy_factor_batch_on,
+};
 use hydrograde_benches::{flows, line20, turbulent_points, water};
 use std::hint::black_box;
 use std::time::{Duration, Instant};
@@ -21,11 +23,6 @@ const N: usize = 1_000_000;
 const CURVE_POINTS: usize = 100_000;
 /// Repetitions of each workload; the fastest counts (the least disturbed by other work).
 const REPS: usize = 9;
-
-/// The fastest of `REPS` runs of `f`.
-fn best_of<F: FnMut()>(f: F) -> Duration {
-    best_of_n(REPS, f)
-}
 
 /// The fastest of `reps` runs of `f`.
 fn best_of_n<F: FnMut()>(reps: usize, mut f: F) -> Duration {
@@ -88,6 +85,96 @@ fn batch_in(pool: &rayon::ThreadPool, re: &[f64], rr: &[f64], out: &mut [f64]) {
         }
     });
     black_box(out);
+}
+
+/// `darcy_factor_batch_on(isa)` with `opts` inside `pool`.
+fn batch_on_in(
+    pool: &rayon::ThreadPool,
+    isa: Isa,
+    opts: &Options,
+    re: &[f64],
+    rr: &[f64],
+    out: &mut [f64],
+) {
+    pool.install(|| {
+        if let Err(e) = darcy_factor_batch_on(isa, re, rr, opts, out) {
+            eprintln!("batch on {} failed: {e}", isa.name());
+        }
+    });
+    black_box(out);
+}
+
+/// Exact Colebrook through the batch kernel on each available instruction set, one
+/// thread, against `ln` in the same turns (target: the detected set within 2 × ln).
+fn isa_rows(t: &mut Table, single: &rayon::ThreadPool, re: &[f64], rr: &[f64]) {
+    let isas: Vec<Isa> = Isa::ALL.into_iter().filter(|i| i.is_available()).collect();
+    let mut bufs = vec![vec![0.0; re.len()]; isas.len() + 1];
+    let (b_ln, rest) = bufs.split_at_mut(1);
+    let opts = Options::default();
+    let mut ln_loop = || {
+        for (o, &r) in b_ln[0].iter_mut().zip(re) {
+            *o = black_box(r).ln();
+        }
+        black_box(&mut b_ln[0]);
+    };
+    let mut work: Vec<Box<dyn FnMut() + '_>> = vec![Box::new(&mut ln_loop)];
+    for (&isa, buf) in isas.iter().zip(rest.iter_mut()) {
+        let opts = &opts;
+        work.push(Box::new(move || {
+            batch_on_in(single, isa, opts, re, rr, buf)
+        }));
+    }
+    let mut refs: Vec<&mut dyn FnMut()> = work.iter_mut().map(|w| &mut **w as _).collect();
+    let times: Vec<f64> = race(REPS, &mut refs)
+        .into_iter()
+        .map(|d| per_item(d, re.len()))
+        .collect();
+    let ln = times[0];
+    for (&isa, &ns) in isas.iter().zip(&times[1..]) {
+        let detected = isa == Isa::detected();
+        t.push(Row::ratio(
+            &format!(
+                "exact Colebrook, batch kernel on {}{}, 1 thread",
+                isa.name(),
+                if detected { " (detected)" } else { "" }
+            ),
+            ns,
+            "ln (same turns)",
+            ns / ln,
+            detected.then_some(("<= 2", ns / ln <= 2.0)),
+        ));
+    }
+}
+
+/// Each explicit correlation: one `darcy_factor` call per point against the batch
+/// kernel on one thread, in the same turns (target: the kernel at least 3 × faster).
+fn correlation_rows(t: &mut Table, single: &rayon::ThreadPool, re: &[f64], rr: &[f64]) {
+    let mut a = vec![0.0; re.len()];
+    let mut b = vec![0.0; re.len()];
+    for corr in Correlation::ALL.into_iter().skip(1) {
+        let o = Options::with_correlation(corr);
+        let times = race(
+            5,
+            &mut [&mut || scalar_loop(re, rr, &o, &mut a), &mut || {
+                batch_on_in(single, Isa::detected(), &o, re, rr, &mut b)
+            }],
+        );
+        let [call, kernel] = [0, 1].map(|i| per_item(times[i], re.len()));
+        t.push(Row::ratio(
+            &format!("{}, darcy_factor called per point, 1 thread", corr.name()),
+            call,
+            "",
+            f64::NAN,
+            None,
+        ));
+        t.push(Row::ratio(
+            &format!("{}, batch kernel, 1 thread", corr.name()),
+            kernel,
+            "per point call (speed-up)",
+            call / kernel,
+            Some((">= 3", call / kernel >= 3.0)),
+        ));
+    }
 }
 
 /// Rows of the 20-element line: its system curve over 1e5 flows on one thread and on all,
@@ -226,14 +313,14 @@ fn main() {
         exact,
         "ln",
         exact / ln,
-        Some(("<= 4", exact / ln <= 4.0)),
+        None,
     ));
     t.push(Row::ratio(
         "exact Colebrook, darcy_factor_batch 1e6, 1 thread",
         one,
         "ln",
         one / ln,
-        Some(("<= 4", one / ln <= 4.0)),
+        Some(("<= 2", one / ln <= 2.0)),
     ));
     t.push(Row::ratio(
         &format!("exact Colebrook, darcy_factor_batch 1e6, {threads} threads"),
@@ -252,17 +339,8 @@ fn main() {
         ));
     }
 
-    for corr in Correlation::ALL.into_iter().skip(1) {
-        let o = Options::with_correlation(corr);
-        let ns = per_item(best_of(|| scalar_loop(&re, &rr, &o, b_scalar)), N);
-        t.push(Row::ratio(
-            &format!("{}, darcy_factor called per point, 1 thread", corr.name()),
-            ns,
-            "ln",
-            ns / ln,
-            None,
-        ));
-    }
+    isa_rows(&mut t, &single, &re, &rr);
+    correlation_rows(&mut t, &single, &re, &rr);
 
     line_rows(&mut t, &single, &multi);
 

@@ -57,7 +57,8 @@ impl Table {
         println!("|---|---:|---:|---|---|---|");
         for r in &self.0 {
             let (ratio, against) = match &r.ratio {
-                Some((x, a)) => (format!("{x:.2}"), a.as_str()),
+                Some((x, a)) if x.is_finite() => (format!("{x:.2}"), a.as_str()),
+                Some(_) => ("".to_owned(), ""),
                 None => ("".to_owned(), ""),
             };
             let (target, met) = match &r.target {
