@@ -14,6 +14,9 @@ use hydrograde::sizes::PipeTable;
 use pyo3::prelude::*;
 use pyo3::types::{PyBytes, PyDict, PyList, PyType};
 
+/// A 1-D numpy array of floats.
+type Array1<'py> = Bound<'py, numpy::PyArray1<f64>>;
+
 /// A route of elements in series (:class:`Pipe`, :class:`Fitting`, :class:`Rise`,
 /// :class:`Equipment`), in flow order.
 ///
@@ -192,11 +195,7 @@ impl PyLine {
         py: Python<'py>,
         fluid: &PyFluid,
         flows: Vec<f64>,
-    ) -> PyResult<(
-        Bound<'py, numpy::PyArray1<f64>>,
-        Bound<'py, numpy::PyArray1<f64>>,
-        Bound<'py, numpy::PyArray1<f64>>,
-    )> {
+    ) -> PyResult<(Array1<'py>, Array1<'py>, Array1<'py>)> {
         let c = py
             .detach(|| self.inner.system_curve_band(&fluid.inner, &flows))
             .py()?;
