@@ -190,6 +190,7 @@ impl PyLine {
     /// The system curve with its band: ``(low, nominal, high)``, three 1-D arrays of the
     /// required head (m) at each of ``flows`` (m³/s, 1-D), the same band as
     /// ``evaluate(fluid, q).required_head_band`` at each flow. Runs with the GIL released.
+    #[allow(clippy::type_complexity)]
     fn system_curve_band<'py>(
         &self,
         py: Python<'py>,
