@@ -75,7 +75,7 @@ def test_state_is_the_core_serde_form():
     assert isinstance(state, bytes)
     # MessagePack map of the core's serde field names.
     assert b"df_drel_roughness" in state and b"regime" in state
-    with pytest.raises(ValueError, match="not a hydrograde state"):
+    with pytest.raises(hg.HydrogradeError, match="not a valid hydrograde state"):
         type(fr)._from_state(b"\x80")
 
 

@@ -643,6 +643,12 @@ impl Line {
         let one = |(i, &q): (usize, &f64)| -> Result<(f64, f64, f64)> {
             let ht = head_terms(self, &sources, fluid, q).map_err(|e| e.at_index(i))?;
             let b = ht.required_band(&sources);
+            if !(b.low.is_finite() && ht.required.is_finite() && b.high.is_finite()) {
+                return Err(Error::no_solution(format!(
+                    "the required head or its band at flow {q} m³/s is not finite: the line's losses are too large to represent in double precision"
+                ))
+                .at_index(i));
+            }
             Ok((b.low, ht.required, b.high))
         };
         let serial = || {
