@@ -112,7 +112,7 @@ static void print_breakdown(const hg_line *l, const hg_fluid *f, double q, hg_li
   t->struct_size = sizeof *t;
   TRY(hg_line_result_totals(r, t));
   printf("  %2s  %-22s %6s %9s %8s  %9s  ", "#", "element", "V m/s", "Re", "f or K", "loss m");
-  padded("band (k = 2) m", 17, 0);
+  padded("band (95 %) m", 17, 0);
   printf(" %-22s warnings\n", "largest source");
   for (size_t i = 0; i < t->element_count; i++) {
     hg_element_result e;
@@ -284,7 +284,7 @@ int main(int argc, char **argv) {
       return 0;
     }
   }
-  printf("hydrograde %s demo: invented scenarios, engineering estimates with k = 2 bands.\n", hg_version());
+  printf("hydrograde %s demo: invented scenarios, engineering estimates with 95 %% bands.\n", hg_version());
   orchard();
   duct();
   printf("\nCaution: these are engineering estimates with stated uncertainty. A design built on "

@@ -52,7 +52,8 @@
  *             hg_line_set_*, hg_line_flow_for_head, hg_line_system_curve,
  *             hg_line_operating_point, hg_line_required_head, hg_pump_curve_head,
  *             hg_line_with_uniform_diameter, hg_line_size, hg_line_split_flow,
- *             hg_line_split_flow_bands
+ *             hg_line_split_flow_bands, hg_line_blocks_reverse_flow,
+ *             hg_line_set_air_column_for_liquids
  *  Results    hg_line_result (handle), hg_line_totals, hg_element_result,
  *             HG_ELEMENT_*, HG_REGIME_NONE; hg_line_evaluate, hg_line_evaluate_at,
  *             hg_line_result_totals, hg_line_result_element, hg_line_result_label,
