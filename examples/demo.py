@@ -42,7 +42,7 @@ DUCT_FLOW = 0.9
 ATMOSPHERE = 101_325.0
 CAUTION = (
     "Caution: these are engineering estimates with stated uncertainty. A design built on "
-    "them must be checked by a competent engineer against the codes and standards that apply."
+    "them must be checked by a competent engineer (licensed or registered where the law requires it) against the codes and standards that apply where it is built."
 )
 
 

@@ -288,6 +288,6 @@ int main(int argc, char **argv) {
   orchard();
   duct();
   printf("\nCaution: these are engineering estimates with stated uncertainty. A design built on "
-         "them must be checked by a competent engineer against the codes and standards that apply.\n");
+         "them must be checked by a competent engineer (licensed or registered where the law requires it) against the codes and standards that apply where it is built.\n");
   return 0;
 }

@@ -70,7 +70,8 @@
  *
  * Safety: results are engineering estimates with stated uncertainty (friction
  * correlations are good to about +-10 %). Designs must be checked by a competent engineer
- * against the codes and standards that apply where they are built.
+ * (licensed or registered where the law requires it) against the codes and standards that
+ * apply where they are built.
  */
 
 #ifndef HYDROGRADE_H

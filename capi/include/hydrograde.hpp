@@ -5,7 +5,8 @@
 // instead and never throw. Arrays come as std::vector or as pointer + length (any
 // contiguous storage). Handles are RAII types (movable, not copyable). Units are SI.
 // Results are engineering estimates with stated uncertainty; designs must be checked by
-// a competent engineer against the codes and standards that apply where they are built.
+// a competent engineer (licensed or registered where the law requires it) against the
+// codes and standards that apply where they are built.
 #ifndef HYDROGRADE_HPP
 #define HYDROGRADE_HPP
 

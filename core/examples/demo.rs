@@ -275,6 +275,6 @@ fn main() {
     }
     println!(
         "\nCaution: these are engineering estimates with stated uncertainty. A design built on \
-         them must be checked by a competent engineer against the codes and standards that apply."
+         them must be checked by a competent engineer (licensed or registered where the law requires it) against the codes and standards that apply where it is built."
     );
 }

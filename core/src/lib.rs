@@ -9,8 +9,8 @@
 //!
 //! **Safety.** Results are engineering estimates with stated uncertainty (the friction
 //! correlations are good to about ±10 %, fitting data scatter more). Designs must be
-//! checked by a competent engineer against the codes and standards that apply where
-//! they are built.
+//! checked by a competent engineer (licensed or registered where the law requires it)
+//! against the codes and standards that apply where they are built.
 
 // `unsafe` only in friction/kernel.rs (calls into code compiled for an instruction set
 // the processor was checked to have); everywhere else it stays an error.

@@ -6,7 +6,8 @@ numpy arrays (float64); results render as HTML tables in notebooks.
 
 Safety: results are engineering estimates with stated uncertainty (the friction
 correlations are good to about ±10 %). Designs must be checked by a competent engineer
-against the codes and standards that apply where they are built.
+(licensed or registered where the law requires it) against the codes and standards that
+apply where they are built.
 """
 
 from __future__ import annotations
