@@ -98,4 +98,4 @@ def test_every_class_renders_and_has_a_readable_repr():
         assert type(obj).__name__ in text and "competent engineer" in text
         assert obj.to_dict()
         assert repr(obj).startswith(type(obj).__name__)
-    assert "band (k = 2)" in result._repr_html_()
+    assert "band (95 %)" in result._repr_html_()

@@ -18,7 +18,7 @@ from hydrograde import _units
 DASH = "–"
 
 SAFETY = (
-    "Engineering estimate with stated uncertainty (bands: k = 2, about 95 %). Designs "
+    "Engineering estimate with stated uncertainty (95 % bands). Designs "
     "must be checked by a competent engineer — licensed or registered where the law "
     "requires it — against the codes and standards that apply where they are built."
 )
@@ -226,7 +226,7 @@ def _quantity_rows(data: Mapping[str, Any], fields: Sequence[str]) -> List[List[
 
 def _quantities(data: Mapping[str, Any], fields: Sequence[str]) -> str:
     return _table(
-        ["quantity", "value", "unit", "band (k = 2)", "dominant source"],
+        ["quantity", "value", "unit", "band (95 %)", "dominant source"],
         _quantity_rows(data, fields),
     )
 
@@ -321,7 +321,7 @@ def _band(data: Mapping[str, Any]) -> str:
         rows.append([("t", _breakable(str(c["source"]))), ("n", f"{number(share, 3)} %"),
                      ("t", f"<span class='bar' style='width:{max(share, 0.5):.1f}px'></span>")])
     body = summary + (_table(["source", "share of variance", ""], rows) if rows else "")
-    return _frame("Band · expanded uncertainty, k = 2", body)
+    return _frame("Band · 95 % coverage interval", body)
 
 
 def _sizing(data: Mapping[str, Any]) -> str:
@@ -367,7 +367,7 @@ def _generic(title: str, data: Mapping[str, Any]) -> str:
         rows.append(cells)
     head = ["quantity", "value", "unit"]
     if any(_is_band(v) for v in data.values()):
-        head += ["band (k = 2)", "dominant source"]
+        head += ["band (95 %)", "dominant source"]
     return _frame(title, _table(head, rows), data.get("warnings") or [])
 
 
@@ -451,7 +451,7 @@ def _split(obj: Any) -> str:
         rows.append([("n", str(i)), ("n", value_text("flow", q)), ("b", rng), ("t", dominant)])
     head_band = obj.head_band.to_dict()
     body = (_quantities({"head": obj.head, "head_band": head_band}, ["head"])
-            + _table(["branch", _heading("flow"), "band (k = 2)", "dominant source"], rows)
+            + _table(["branch", _heading("flow"), "band (95 %)", "dominant source"], rows)
             + f"<div class='u'>{obj.iterations} iterations</div>")
     return _frame("Split · parallel branches at one head", body)
 

@@ -38,8 +38,8 @@ STYLE: Dict[str, Any] = {
 
 PALETTE = ["#1f5f8b", "#c8553d", "#3a8d6f", "#8a5fa8", "#d19a2a", "#4f6d7a", "#b0457a"]
 
-SAFETY = ("engineering estimate (bands k = 2); designs must be checked by a competent "
-          "engineer against the codes and standards that apply")
+SAFETY = ("estimate with 95 % bands; designs must be checked by a competent engineer "
+          "(licensed or registered where required) against the codes that apply")
 
 
 @contextlib.contextmanager
@@ -172,7 +172,7 @@ def _grade(rows: Sequence[Any], xs: Sequence[float], ax: Any, xlabel: str,
         elevation.append(elevation[-1] + r.static_head)
     ax = _axes(ax)
     ax.fill_between(xs, _shown("head", low), _shown("head", high), color=PALETTE[0],
-                    alpha=0.15, linewidth=0, label="element bands added (k = 2)")
+                    alpha=0.15, linewidth=0, label="element bands added (95 %)")
     ax.plot(xs, _shown("head", energy), color=PALETTE[0], marker=".", label="energy grade")
     ax.plot(xs, _shown("head", elevation), color=PALETTE[5], linestyle="--",
             label="elevation")
@@ -196,7 +196,7 @@ def grade_line(line: Any, fluid: Any, flow: Any, ax: Any = None) -> Any:
     against the distance along the pipes (display unit of distance). Fittings and other
     elements without length are spread over a short gap each (1.5 % of the route) and
     labelled with their index, so several at one joint show as separate steps. The band
-    adds the elements' k = 2 bands end to end, which overstates the line's own band (that
+    adds the elements' 95 % bands end to end, which overstates the line's own band (that
     one is ``required_head_band``).
     """
     result = line.evaluate(fluid, flow)
