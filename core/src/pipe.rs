@@ -256,7 +256,11 @@ impl Pipe {
     /// replaced by the section's. `diameter_mode` chooses the turbulent diameter.
     ///
     /// # Errors
-    /// Only a non-finite flow, or a transitional flow with the refuse option.
+    /// A non-finite flow, a flow whose Reynolds number exceeds
+    /// [`friction::MAX_REYNOLDS`] (the error names the flow), invalid options, or a
+    /// transitional flow with the refuse option. A Reynolds number below
+    /// [`friction::MIN_REYNOLDS`] counts as zero flow: exact laminar loss, friction factor
+    /// NaN.
     pub fn flow_state(
         &self,
         fluid: &Fluid,
@@ -299,21 +303,38 @@ impl Pipe {
         let g2 = 2.0 * STANDARD_GRAVITY;
         let geom = self.length / (dh * g2);
         let mut warnings = g.warnings;
+        if re_t > friction::MAX_REYNOLDS {
+            return Err(crate::Error::out_of_range(
+                "flow",
+                flow,
+                format!(
+                    "gives Reynolds number {re_t:e} in this duct, above the {:e} the friction correlations accept",
+                    friction::MAX_REYNOLDS
+                ),
+            ));
+        }
         let laminar_direct =
             re_t < opts.laminar_limit && opts.correlation != Correlation::Churchill;
-        if laminar_direct || re_t == 0.0 {
+        // Below the smallest Reynolds number a friction factor is defined for, the flow is
+        // treated as zero flow is: the exact laminar loss, no friction factor.
+        let defined = re_t >= friction::MIN_REYNOLDS;
+        if laminar_direct || !defined {
             // Exact laminar law, written so that zero flow is regular.
             let lam_head_per_speed = c * nu / dh * geom; // h / V
+            let (head_loss, dhead_dflow) = (lam_head_per_speed * velocity, lam_head_per_speed / area);
+            if !(head_loss.is_finite() && dhead_dflow.is_finite()) {
+                return Err(not_finite_loss(flow));
+            }
             return Ok(PipeFlow {
                 velocity,
                 reynolds: re_h,
-                friction_factor: if re_h > 0.0 { c / re_h } else { f64::NAN },
+                friction_factor: if defined { c / re_h } else { f64::NAN },
                 regime: Regime::Laminar,
-                head_loss: lam_head_per_speed * velocity,
-                dhead_dflow: lam_head_per_speed / area,
+                head_loss,
+                dhead_dflow,
                 dhead_dfactor: geom * velocity * speed,
                 df_drel_roughness: 0.0,
-                df_dre: if re_h > 0.0 {
+                df_dre: if defined {
                     -c / (re_h * re_h) / scale
                 } else {
                     0.0
@@ -325,11 +346,21 @@ impl Pipe {
             laminar_constant: c * scale,
             ..*opts
         };
-        let fr: Friction = friction::darcy_factor(re_t, self.roughness / dt, &o)?;
+        let rr = self.roughness / dt;
+        // One combined check of the friction inputs; the full checks (and their message)
+        // run only when it fails.
+        let fr: Friction = if friction::inputs_ok(re_t, rr) && friction::options_ok(&o) {
+            friction::factor_checked(re_t, rr, &o)?
+        } else {
+            friction::darcy_factor(re_t, rr, &o)?
+        };
         warnings |= fr.warnings;
         let head_loss = fr.f * geom * velocity * speed;
         // dh/dQ = geom |V| (Re df/dRe + 2f) / A (derivation in the module docs).
         let dhead_dflow = geom * speed * (re_t * fr.df_dre + 2.0 * fr.f) / area;
+        if !(head_loss.is_finite() && dhead_dflow.is_finite()) {
+            return Err(not_finite_loss(flow));
+        }
         Ok(PipeFlow {
             velocity,
             reynolds: re_h,
@@ -355,6 +386,15 @@ impl Pipe {
         )?;
         Ok((s.head_loss, s.dhead_dflow))
     }
+}
+
+/// The error for a flow whose head loss or slope overflows.
+fn not_finite_loss(flow: f64) -> crate::Error {
+    crate::Error::out_of_range(
+        "flow",
+        flow,
+        "gives a head loss in this duct that is not a finite number (the loss overflows double precision)",
+    )
 }
 
 #[cfg(test)]

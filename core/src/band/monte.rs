@@ -40,8 +40,8 @@ pub const MAX_SAMPLES: usize = 10_000_000;
 /// catalogue entry); each equipment rectangular on ±its spread.
 ///
 /// # Errors
-/// [`Error::OutOfRange`] for `samples` outside [`MIN_SAMPLES`]..=[`MAX_SAMPLES`]; the
-/// errors of [`Line::evaluate`] at `flow`.
+/// [`Error::OutOfRange`] for `samples` outside [`MIN_SAMPLES`]..=[`MAX_SAMPLES`], or for a
+/// `flow` whose sampled heads overflow; the errors of [`Line::evaluate`] at `flow`.
 pub fn monte_carlo(
     line: &Line,
     fluid: &Fluid,
@@ -67,13 +67,24 @@ pub fn monte_carlo(
         let t = x - i as f64;
         values[i] + t * (values[(i + 1).min(samples - 1)] - values[i])
     };
-    Ok(MonteCarlo {
+    let mc = MonteCarlo {
         samples,
         mean,
         std_dev: var.sqrt(),
         low: quantile(0.025),
         high: quantile(0.975),
-    })
+    };
+    if ![mc.mean, mc.std_dev, mc.low, mc.high]
+        .iter()
+        .all(|v| v.is_finite())
+    {
+        return Err(Error::out_of_range(
+            "flow",
+            flow,
+            "gives sampled heads whose mean or spread is not a finite number (the losses overflow double precision)",
+        ));
+    }
+    Ok(mc)
 }
 
 #[cfg(test)]

@@ -123,6 +123,11 @@ pub struct Fitting {
     name: Option<String>,
 }
 
+/// The largest fixed resistance coefficient accepted: far above any fitting or throttled
+/// valve (common practice: a nearly closed globe valve reaches a few thousand), low
+/// enough that a line's head stays a finite number at any flow the solvers try.
+pub const MAX_K: f64 = 1e6;
+
 impl Fitting {
     fn from_method(method: Method) -> Fitting {
         Fitting {
@@ -137,9 +142,16 @@ impl Fitting {
     /// adjoining pipe.
     ///
     /// # Errors
-    /// `k` not finite or negative.
+    /// `k` not finite, negative or above [`MAX_K`].
     pub fn k(value: f64) -> Result<Fitting> {
         check::non_negative("k", value)?;
+        if value > MAX_K {
+            return Err(Error::out_of_range(
+                "k",
+                value,
+                format!("must not exceed {MAX_K:e} (a throttled valve reaches a few thousand)"),
+            ));
+        }
         Ok(Fitting::from_method(Method::K { k: value }))
     }
 
@@ -489,11 +501,28 @@ impl Fitting {
     /// K and ∂K/∂Re at Reynolds number `re` (> 0, in `bore`) and bore `bore` (m).
     ///
     /// # Errors
-    /// As [`Fitting::resistance`], and `re` not positive or not finite.
+    /// As [`Fitting::resistance`]; `re` not finite or below [`crate::friction::MIN_REYNOLDS`];
+    /// a K that overflows at this `re` and bore (the error names `re`).
     pub fn k_at(&self, re: f64, bore: f64, pipe_rel_roughness: f64) -> Result<(f64, f64)> {
         check::positive("re", re)?;
+        let min = crate::friction::MIN_REYNOLDS;
+        if re < min {
+            return Err(Error::out_of_range(
+                "re",
+                re,
+                format!("must be at least {min:e}"),
+            ));
+        }
         let r = self.resistance(bore, pipe_rel_roughness)?;
-        Ok((r.k(re), r.dk_dre(re)))
+        let (k, dk) = (r.k(re), r.dk_dre(re));
+        if !(k.is_finite() && dk.is_finite()) {
+            return Err(Error::out_of_range(
+                "re",
+                re,
+                format!("with bore {bore} m gives a K that is not a finite number"),
+            ));
+        }
+        Ok((k, dk))
     }
 }
 

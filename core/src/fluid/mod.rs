@@ -260,7 +260,9 @@ impl Fluid {
     /// (hydraulic) diameter `diameter` (m).
     ///
     /// # Errors
-    /// A velocity that is not finite; a diameter that is not finite and positive.
+    /// A velocity that is not finite; a diameter that is not finite and positive; a
+    /// velocity and diameter whose Reynolds number overflows (the error names the
+    /// velocity).
     ///
     /// # Example
     /// ```
@@ -272,7 +274,15 @@ impl Fluid {
     pub fn reynolds(&self, velocity: f64, diameter: f64) -> Result<f64> {
         check::finite("velocity", velocity)?;
         check::positive("diameter", diameter)?;
-        Ok(self.density * velocity.abs() * diameter / self.viscosity)
+        let re = self.density * velocity.abs() * diameter / self.viscosity;
+        if !re.is_finite() {
+            return Err(Error::out_of_range(
+                "velocity",
+                velocity,
+                format!("with diameter {diameter} m gives a Reynolds number that is not a finite number"),
+            ));
+        }
+        Ok(re)
     }
 
     /// True for a gas.

@@ -14,7 +14,10 @@
 //! checks first.
 #![allow(unsafe_code)]
 
-use super::{Correlation, MAX_REL_ROUGHNESS, MAX_REYNOLDS, Options, colebrook, explicit};
+use super::{
+    CHURCHILL_LAMINAR_RE, Correlation, MIN_REL_ROUGHNESS_FULLY_ROUGH, Options, colebrook, explicit,
+    inputs_ok,
+};
 use crate::error::{Error, Result};
 use std::sync::OnceLock;
 
@@ -92,10 +95,10 @@ impl Kernel {
     /// [`super::darcy_factor`] returns [`Kernel::factor`].
     #[inline(always)]
     fn takes(&self, re: f64, rr: f64) -> bool {
-        let valid = re > 0.0 && re <= MAX_REYNOLDS && (0.0..=MAX_REL_ROUGHNESS).contains(&rr);
+        let valid = inputs_ok(re, rr);
         match self.corr {
-            Correlation::Churchill => valid,
-            Correlation::FullyRough => valid && re > self.turbulent_limit && rr > 0.0,
+            Correlation::Churchill => valid && re >= CHURCHILL_LAMINAR_RE,
+            Correlation::FullyRough => valid && re > self.turbulent_limit && rr >= MIN_REL_ROUGHNESS_FULLY_ROUGH,
             _ => valid && re > self.turbulent_limit,
         }
     }

@@ -43,6 +43,21 @@ pub const MAX_REL_ROUGHNESS: f64 = 0.5;
 /// Colebrook solver needs the argument of its logarithm to stay a normal number).
 pub const MAX_REYNOLDS: f64 = 1e13;
 
+/// The smallest Reynolds number accepted. Far below any creeping flow met in practice
+/// (from memory: a heavy oil in a capillary stays above 1e-12); the bound keeps the
+/// laminar factor C/Re and its slope −C/Re² finite for every accepted laminar constant.
+pub const MIN_REYNOLDS: f64 = 1e-100;
+/// The largest laminar constant C = f·Re accepted (the exact constants of real sections
+/// lie between about 50 and 100; a custom section accepts up to the same bound).
+pub const MAX_LAMINAR_CONSTANT: f64 = 1e4;
+/// Below this Reynolds number Churchill's formula is the laminar law to the last bit:
+/// its turbulent terms are below 1e-100 of the laminar term there, and evaluating them
+/// would overflow at the smallest accepted Re.
+pub(crate) const CHURCHILL_LAMINAR_RE: f64 = 1.0;
+/// The smallest relative roughness the fully rough law accepts: its slope ∝ 1/(ε/D)
+/// stays finite above it.
+pub const MIN_REL_ROUGHNESS_FULLY_ROUGH: f64 = 1e-100;
+
 /// The smallest laminar limit accepted: the turbulent correlations (and the Colebrook
 /// solver's fixed step count) are not meant for lower Reynolds numbers.
 pub const MIN_LAMINAR_LIMIT: f64 = 1000.0;
@@ -257,6 +272,13 @@ impl Options {
     /// Checks the options themselves.
     pub fn validate(&self) -> Result<()> {
         check::positive("laminar_constant", self.laminar_constant)?;
+        if self.laminar_constant > MAX_LAMINAR_CONSTANT {
+            return Err(Error::out_of_range(
+                "laminar_constant",
+                self.laminar_constant,
+                format!("must not exceed {MAX_LAMINAR_CONSTANT:e}"),
+            ));
+        }
         check::finite("laminar_limit", self.laminar_limit)?;
         if self.laminar_limit < MIN_LAMINAR_LIMIT {
             return Err(Error::out_of_range(
@@ -298,6 +320,13 @@ pub struct Friction {
 #[inline]
 pub fn check_inputs(re: f64, rel_roughness: f64) -> Result<()> {
     check::positive("re", re)?;
+    if re < MIN_REYNOLDS {
+        return Err(Error::out_of_range(
+            "re",
+            re,
+            format!("must be at least {MIN_REYNOLDS:e} (f = C/Re would not be a finite number)"),
+        ));
+    }
     if re > MAX_REYNOLDS {
         return Err(Error::out_of_range(
             "re",
@@ -339,27 +368,41 @@ pub fn check_inputs(re: f64, rel_roughness: f64) -> Result<()> {
 pub fn darcy_factor(re: f64, rel_roughness: f64, opts: &Options) -> Result<Friction> {
     // One combined test on the hot path (NaN fails every comparison); the checks that
     // build the error run only when it fails.
-    let inputs_ok =
-        re > 0.0 && re <= MAX_REYNOLDS && (0.0..=MAX_REL_ROUGHNESS).contains(&rel_roughness);
-    if !inputs_ok {
+    if !inputs_ok(re, rel_roughness) {
         check_inputs(re, rel_roughness)?;
     }
-    let opts_ok = opts.laminar_constant > 0.0
-        && opts.laminar_constant < f64::INFINITY
+    if !options_ok(opts) {
+        opts.validate()?;
+    }
+    factor_checked(re, rel_roughness, opts)
+}
+
+/// True when [`check_inputs`] passes (one combined test: NaN fails every comparison).
+#[inline(always)]
+pub(crate) fn inputs_ok(re: f64, rel_roughness: f64) -> bool {
+    (MIN_REYNOLDS..=MAX_REYNOLDS).contains(&re)
+        && (0.0..=MAX_REL_ROUGHNESS).contains(&rel_roughness)
+}
+
+/// True when [`Options::validate`] passes.
+#[inline(always)]
+pub(crate) fn options_ok(opts: &Options) -> bool {
+    opts.laminar_constant > 0.0
+        && opts.laminar_constant <= MAX_LAMINAR_CONSTANT
         && opts.laminar_limit >= MIN_LAMINAR_LIMIT
         && opts.laminar_limit < f64::INFINITY
         && opts.turbulent_limit >= opts.laminar_limit
-        && opts.turbulent_limit < f64::INFINITY;
-    if !opts_ok {
-        opts.validate()?;
-    }
+        && opts.turbulent_limit < f64::INFINITY
+}
+
+/// [`darcy_factor`] for inputs the caller has already checked ([`inputs_ok`] and
+/// [`options_ok`] hold): a pipe checks its flow once, with an error that names the flow,
+/// and does not pay for the checks again.
+#[inline]
+pub(crate) fn factor_checked(re: f64, rel_roughness: f64, opts: &Options) -> Result<Friction> {
     let corr = opts.correlation;
-    if corr == Correlation::FullyRough && rel_roughness == 0.0 {
-        return Err(Error::out_of_range(
-            "rel_roughness",
-            rel_roughness,
-            "must be greater than 0 for the fully rough law",
-        ));
+    if corr == Correlation::FullyRough && rel_roughness < MIN_REL_ROUGHNESS_FULLY_ROUGH {
+        return Err(too_smooth_for_fully_rough(rel_roughness));
     }
     let regime = if re < opts.laminar_limit {
         Regime::Laminar
@@ -373,7 +416,11 @@ pub fn darcy_factor(re: f64, rel_roughness: f64, opts: &Options) -> Result<Frict
         warnings.insert(Warnings::TRANSITIONAL_FLOW);
     }
     if corr.covers_all_regimes() {
-        let s = explicit::churchill(re, rel_roughness, opts.laminar_constant);
+        let s = if re < CHURCHILL_LAMINAR_RE {
+            laminar(re, opts.laminar_constant)
+        } else {
+            explicit::churchill(re, rel_roughness, opts.laminar_constant)
+        };
         if regime == Regime::Turbulent {
             warnings |= range_warnings(corr, re, rel_roughness, s.f);
         }
@@ -403,6 +450,16 @@ pub fn darcy_factor(re: f64, rel_roughness: f64, opts: &Options) -> Result<Frict
             }
         },
     }
+}
+
+fn too_smooth_for_fully_rough(rel_roughness: f64) -> Error {
+    Error::out_of_range(
+        "rel_roughness",
+        rel_roughness,
+        format!(
+            "must be at least {MIN_REL_ROUGHNESS_FULLY_ROUGH:e} for the fully rough law (a smooth wall is never fully rough)"
+        ),
+    )
 }
 
 /// The laminar law f = C/Re.
@@ -460,9 +517,27 @@ fn blend(re: f64, rr: f64, opts: &Options) -> colebrook::Solution {
 
 /// The laminar and turbulent limiting values at a transitional Re (for bands that span
 /// both regimes): `(laminar f, turbulent f)`.
+///
+/// # Errors
+/// As [`darcy_factor`], and `re` below [`MIN_LAMINAR_LIMIT`] (the turbulent correlations
+/// are not meant there, and the exact Colebrook solver's fixed step count does not hold).
 pub fn transition_limits(re: f64, rel_roughness: f64, opts: &Options) -> Result<(f64, f64)> {
     check_inputs(re, rel_roughness)?;
     opts.validate()?;
+    if re < MIN_LAMINAR_LIMIT {
+        return Err(Error::out_of_range(
+            "re",
+            re,
+            format!(
+                "must be at least {MIN_LAMINAR_LIMIT} for a turbulent limit (the turbulent correlations are not meant below it)"
+            ),
+        ));
+    }
+    if opts.correlation == Correlation::FullyRough
+        && rel_roughness < MIN_REL_ROUGHNESS_FULLY_ROUGH
+    {
+        return Err(too_smooth_for_fully_rough(rel_roughness));
+    }
     Ok((
         laminar(re, opts.laminar_constant).f,
         turbulent(opts.correlation, re, rel_roughness).f,

@@ -336,6 +336,13 @@ impl Line {
             h += s.head_loss + s.static_head; // same order as LineResult::required_head
             d += s.dhead_dflow;
         }
+        if !(h.is_finite() && d.is_finite()) {
+            return Err(Error::out_of_range(
+                "flow",
+                flow,
+                "gives a required head or slope that is not a finite number (the losses overflow double precision)",
+            ));
+        }
         Ok((h, d))
     }
 

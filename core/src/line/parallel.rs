@@ -60,6 +60,17 @@ pub fn split_flow(branches: &[Line], fluid: &Fluid, total: f64) -> Result<Split>
         for (b, &qi) in branches.iter().zip(&q) {
             hs.push(b.required_head(fluid, qi)?);
         }
+        // A branch with no slope here (no pipe, at zero flow) cannot take a Newton step:
+        // the bracketed search does without slopes.
+        if hs.iter().any(|&(_, d)| !(d > 0.0 && d.is_finite())) {
+            // Already balanced (zero total through branches of equal static head)?
+            let h0 = hs[0].0;
+            let spread = hs.iter().map(|(h, _)| (h - h0).abs()).fold(0.0, f64::max);
+            if spread <= HEAD_TOL * h0.abs().max(1e-300) && q.iter().sum::<f64>() == total {
+                return with_bands(branches, fluid, q, h0, it);
+            }
+            break;
+        }
         let inv: f64 = hs.iter().map(|(_, d)| 1.0 / d).sum();
         let head = (total
             - q.iter()
@@ -129,6 +140,16 @@ fn with_bands(
     iterations: usize,
 ) -> Result<Split> {
     let (head_band, flow_bands) = super::uncertainty::split_bands(branches, fluid, &flows, head)?;
+    let band_ok = |b: &Band| b.low.is_finite() && b.high.is_finite();
+    let finite = head.is_finite()
+        && flows.iter().all(|q| q.is_finite())
+        && band_ok(&head_band)
+        && flow_bands.iter().all(band_ok);
+    if !finite {
+        return Err(Error::no_solution(
+            "the split's head, flows or bands are not finite numbers: the branches' losses are too large to combine in double precision",
+        ));
+    }
     Ok(Split {
         flows,
         head,

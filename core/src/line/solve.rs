@@ -17,6 +17,11 @@ use serde::{Deserialize, Serialize};
 /// to exhaust a double's range; Newton with bracketing finishes in well under 100).
 const MAX_ITER: usize = 400;
 
+/// The largest relative mismatch between the head asked for and the head the solved flow
+/// gives before [`Line::flow_for_head`] refuses its answer (relative to the larger of the
+/// head, the static head and 1 m; a converged solve is near 1e-15).
+const HEAD_CHECK_TOL: f64 = 1e-8;
+
 /// The flow a line passes under a given head.
 #[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
 pub struct FlowSolution {
@@ -139,7 +144,15 @@ impl Line {
             let (q, it) = safeguarded_newton(g, lo, hi)?;
             (q, it + n)
         };
-        let (_, slope) = self.required_head(fluid, flow)?;
+        let (reached, slope) = self.required_head(fluid, flow)?;
+        // Self-consistency: the flow found must give back the head asked for (it cannot
+        // when the line's slope is so steep that one rounding of the flow moves the head
+        // by more than the tolerance).
+        if (reached - head).abs() > HEAD_CHECK_TOL * head.abs().max(h0.abs()).max(1.0) {
+            return Err(Error::no_solution(format!(
+                "the flow found ({flow} m³/s) gives {reached} m instead of head {head} m: the line's losses are too steep to resolve in double precision"
+            )));
+        }
         let flow_band = uncertainty::flow_for_head_band(self, fluid, flow, slope)?;
         Ok(FlowSolution {
             flow,
