@@ -5,7 +5,7 @@ use hydrograde::fitting::Fitting;
 use std::ffi::c_char;
 
 /// The resistance coefficient K (dimensionless) of the catalogue fitting `name` and its
-/// derivative ∂K/∂Re, at Reynolds number `re` (> 0, in `bore`), for the velocity in
+/// derivative ∂K/∂Re, at Reynolds number `re` (1e-100 or more, in `bore`), for the velocity in
 /// `bore` (m, > 0), next to a pipe of relative roughness `pipe_rel_roughness`
 /// (0 ≤ ε/D ≤ 0.5; used by fittings whose K follows the pipe's fully rough friction
 /// factor). K(Re) = k_viscous/Re + k_inertial; fitting data scatter by ±20–50 %.

@@ -556,6 +556,10 @@ static void test_bad_pointers_and_constants(void) {
   hg_friction_options_default(&o);
   CHECK(hg_darcy_factor_opts(1e5, 0, NULL, &r) == HG_ERR_NULL_POINTER, "NULL opts");
   CHECK(hg_darcy_factor_opts(1e5, 0, &o, NULL) == HG_ERR_NULL_POINTER, "NULL out");
+  /* Exact: laminar f = 64/Re (Hagen–Poiseuille) at Re 1000. */
+  CHECK(hg_darcy_factor_opts(1000, 0, &o, &r) == HG_OK && r.f == 0.064, "laminar with options");
+  /* The smallest Reynolds number is 1e-100: below it f = 64/Re would overflow. */
+  CHECK(hg_darcy_factor_opts(1e-300, 0, &o, &r) == HG_ERR_OUT_OF_RANGE && msg_len() > 0, "Re below 1e-100");
   o.transition = 3;
   CHECK(hg_darcy_factor_opts(1e5, 0, &o, &r) == HG_ERR_OUT_OF_RANGE, "transition 3");
   o.transition = HG_TRANSITION_REFUSE;
@@ -630,6 +634,10 @@ static void test_bad_pointers_others(void) {
   CHECK(hg_convert(1, "m", "mm", NULL) == HG_ERR_NULL_POINTER, "convert NULL out");
   CHECK(hg_convert(1, "m", "\xc3", &x) == HG_ERR_INVALID, "convert not UTF-8");
   CHECK(hg_convert(1, "m", "", &x) == HG_ERR_UNKNOWN_NAME, "convert empty unit");
+  x = 5.0;
+  /* Exact: −300 °C is below absolute zero (−273.15 °C, SI definition). */
+  CHECK(hg_convert(-300, "degC", "K", &x) == HG_ERR_OUT_OF_RANGE && x == 5.0 && msg_len() > 0,
+        "convert below absolute zero");
   CHECK(hg_convert(1, "m", "Pa", &x) == HG_ERR_INVALID && msg_len() > 0, "convert mismatch");
   CHECK(hg_convert_head(1, NULL, "Pa", 1000, &x) == HG_ERR_NULL_POINTER, "head NULL");
   CHECK(hg_convert_head(1, "m_head", NULL, 1000, &x) == HG_ERR_NULL_POINTER, "head NULL");

@@ -373,7 +373,7 @@ static void test_more_elements_bad_input(void) {
   u.diameter = -0.1;
   CHECK(hg_line_set_uncertainty(l, &u) != HG_OK && msg_len() > 0, "negative tolerance");
   u.diameter = NAN;
-  CHECK(hg_line_set_uncertainty(l, &u) != HG_OK, "NaN tolerance");
+  CHECK(hg_line_set_uncertainty(l, &u) == HG_ERR_NOT_FINITE, "NaN tolerance");
   hg_uncertainty_options_default(&u);
   u.struct_size = 4;
   CHECK(hg_line_set_uncertainty(l, &u) == HG_ERR_INVALID, "struct_size 4");
@@ -598,6 +598,11 @@ static void test_handles_and_bad_input(void) {
   CHECK(hg_line_add_equipment(NULL, "m", 1e4, 1e-3) == HG_ERR_NULL_POINTER, "add to NULL line");
   CHECK(hg_line_set_inlet_pressure(NULL, 1e5) == HG_ERR_NULL_POINTER, "NULL line");
   CHECK(hg_line_set_friction_options(l, NULL) == HG_ERR_NULL_POINTER, "NULL options");
+  {
+    hg_friction_options fo;
+    CHECK(hg_friction_options_default(&fo) == HG_OK && hg_line_set_friction_options(l, &fo) == HG_OK,
+          "default friction options accepted");
+  }
   hg_friction_options o;
   hg_friction_options_default(&o);
   CHECK(hg_line_set_friction_options(NULL, &o) == HG_ERR_NULL_POINTER, "NULL line");

@@ -173,8 +173,21 @@ static void fail(const char *fn, const char *what, int32_t s) {
   if (nseen < 256) seen[nseen][0] = fn, seen[nseen][1] = what, nseen++;
   fprintf(stderr, "FAIL %s: %s (status %d, message \"%.300s\")\n", fn, what, s, msg);
 }
+/* The (function, status) pairs this process has seen, printed at exit as "SEEN fn code"
+ * so that the runner can tell which documented return codes the sweep provoked. */
+static struct { const char *fn; int32_t s; } seen_pairs[4096];
+static int nseen_pairs;
+static void saw(const char *fn, int32_t s) {
+  for (int i = 0; i < nseen_pairs; i++)
+    if (seen_pairs[i].fn == fn && seen_pairs[i].s == s) return;
+  if (nseen_pairs < 4096) seen_pairs[nseen_pairs].fn = fn, seen_pairs[nseen_pairs].s = s, nseen_pairs++;
+}
+static void print_seen(void) {
+  for (int i = 0; i < nseen_pairs; i++) printf("SEEN %s %d\n", seen_pairs[i].fn, (int)seen_pairs[i].s);
+}
 static void check_status(const char *fn, int32_t s) {
   static const int32_t ok[] = {%STATUSES%};
+  saw(fn, s);
   int known = 0;
   for (size_t i = 0; i < sizeof ok / sizeof *ok; i++) known |= s == ok[i];
   if (!known) fail(fn, "undocumented status", s);
@@ -359,6 +372,7 @@ int main(int argc, char **argv) {{
   for (unsigned long i = 0; i < n; i++) call_one(first + (int)(next() % (uint64_t)(last - first + 1)));
   for (int i = first; i <= last; i++) call_one(i); /* each at least once */
   teardown();
+  print_seen();
   printf("%lu calls over %d functions, %lu findings\\n", calls, last - first + 1, failures);
   return failures ? 1 : 0;
 }}

@@ -20,6 +20,43 @@ from pathlib import Path
 HERE = Path(__file__).resolve().parent
 
 
+# Codes no call can be made to return on purpose: HG_ERR_INTERNAL is a caught panic.
+NEVER_ON_PURPOSE = {"HG_ERR_INTERNAL"}
+
+
+def documented_codes(header: str) -> dict:
+    """Each status-returning function's documented codes: the HG_ names of the paragraph of
+    its doc comment that starts with "Returns"."""
+    values = {m.group(1): int(m.group(2)) for m in re.finditer(r"#define (HG_(?:OK|ERR_\w+)) (-?\d+)", header)}
+    out = {}
+    for doc, name in re.findall(r"/\*\*((?:(?!\*/).)*)\*/\s*\nint32_t (hg_\w+)\(", header, flags=re.S):
+        para = re.search(r"Returns .*?(?:\n \*\s*\n|$)", doc, flags=re.S)
+        same = re.search(r"status codes as `(hg_\w+)`", doc)
+        if para is None and same and same.group(1) in out:
+            out[name] = set(out[same.group(1)])  # "same status codes as hg_x"
+            continue
+        names = set(re.findall(r"\b(HG_(?:OK|ERR_[A-Z_]+))\b", para.group(0) if para else ""))
+        out[name] = {(c, values[c]) for c in names & set(values) - NEVER_ON_PURPOSE}
+    return out
+
+
+def checked_in_c_tests() -> set:
+    """(function, code) pairs that a C test asserts: `hg_x(...) == HG_CODE`."""
+    pairs = set()
+    for src in sorted((HERE.parent / "c").glob("*.c")):
+        for fn, code in re.findall(r"\b(hg_\w+)\([^;]*?\)\s*==\s*(HG_(?:OK|ERR_[A-Z_]+))\b", src.read_text()):
+            pairs.add((fn, code))
+    return pairs
+
+
+def unprovoked(header: str, seen: set) -> list:
+    """(function, code) pairs that a function documents and neither a call of the sweep
+    returned nor a C test asserts."""
+    tested = checked_in_c_tests()
+    return sorted((fn, c) for fn, codes in documented_codes(header).items() for c, v in codes
+                  if (fn, v) not in seen and (fn, c) not in tested)
+
+
 def main() -> int:
     header, lib, out = sys.argv[1], sys.argv[2], Path(sys.argv[3])
     budget = float(sys.argv[4]) if len(sys.argv) > 4 else 40.0
@@ -38,6 +75,7 @@ def main() -> int:
     passed = failed = 0
     calls = 0
     seen_known = set()
+    seen_codes = set()
     start = time.monotonic()
     batch = 0
     while time.monotonic() - start < budget and batch < 64:
@@ -53,6 +91,8 @@ def main() -> int:
             failed += 1
             print(f"  FAIL  batch seed {seed}: died with status {p.returncode}\n{p.stderr[-2000:]}")
             continue
+        for f in re.finditer(r"^SEEN (\S+) (-?\d+)$", p.stdout, flags=re.M):
+            seen_codes.add((f.group(1), int(f.group(2))))
         m = re.search(r"(\d+) calls", p.stdout)
         calls += int(m.group(1)) if m else 0
         new = []
@@ -74,6 +114,12 @@ def main() -> int:
             passed += 1
     print(f"  fuzz: {calls} calls over {n} functions in {batch} batches ({time.monotonic() - start:.1f} s); "
           f"{len(seen_known)} known open findings seen")
+    missing = unprovoked(Path(header).read_text(), seen_codes)
+    if missing:
+        failed += 1
+        print(f"  FAIL  documented return codes that neither the sweep nor a C test provoked ({len(missing)}):")
+        for fn, code in missing:
+            print(f"        {fn}: {code}")
     print(f"{passed} passed, {failed} failed")
     return 1 if failed or passed == 0 else 0
 

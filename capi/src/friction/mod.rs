@@ -182,7 +182,7 @@ pub unsafe extern "C" fn hg_friction_options_default(opts: *mut hg_friction_opti
 /// `correlation` (`HG_CORRELATION_*`) and the default regime treatment: laminar
 /// f = 64/Re below Re 2300, the correlation above 4000, a C¹ blend between.
 ///
-/// Valid ranges: 0 < re ≤ 1e13; 0 ≤ rel_roughness ≤ 0.5 (> 0 for the fully rough law).
+/// Valid ranges: 1e-100 ≤ re ≤ 1e13; 0 ≤ rel_roughness ≤ 0.5 (≥ 1e-100 for the fully rough law).
 /// Outside a correlation's published range the value still computes (see
 /// `hg_darcy_factor_full` for the warnings).
 ///
