@@ -321,7 +321,8 @@ impl Pipe {
         if laminar_direct || !defined {
             // Exact laminar law, written so that zero flow is regular.
             let lam_head_per_speed = c * nu / dh * geom; // h / V
-            let (head_loss, dhead_dflow) = (lam_head_per_speed * velocity, lam_head_per_speed / area);
+            let (head_loss, dhead_dflow) =
+                (lam_head_per_speed * velocity, lam_head_per_speed / area);
             if !(head_loss.is_finite() && dhead_dflow.is_finite()) {
                 return Err(not_finite_loss(flow));
             }

@@ -8,9 +8,7 @@ mod common;
 
 use common::rel_err;
 use hydrograde::band::monte_carlo;
-use hydrograde::friction::{
-    self, MIN_REYNOLDS, darcy_factor_batch, transition_limits,
-};
+use hydrograde::friction::{self, MIN_REYNOLDS, darcy_factor_batch, transition_limits};
 use hydrograde::line::split_flow;
 use hydrograde::{
     Correlation, Element, ErrorKind, Fitting, Fluid, Line, Options, Pipe, Regime, darcy_factor,
@@ -37,8 +35,13 @@ fn smallest_reynolds_numbers_are_refused_by_name() {
     assert!(e.to_string().starts_with("re = "), "{e}");
     // The batch reports the element at fault.
     let mut out = [0.0; 3];
-    let e = darcy_factor_batch(&[1e5, 1e-200, 1e5], &[0.0; 3], &Options::default(), &mut out)
-        .unwrap_err();
+    let e = darcy_factor_batch(
+        &[1e5, 1e-200, 1e5],
+        &[0.0; 3],
+        &Options::default(),
+        &mut out,
+    )
+    .unwrap_err();
     assert!(e.to_string().starts_with("element 1: re = "), "{e}");
 }
 
@@ -51,7 +54,11 @@ fn laminar_at_the_smallest_reynolds_number_is_finite_and_exact() {
         }
         let fr = darcy_factor(MIN_REYNOLDS, 1e-3, &Options::with_correlation(corr)).unwrap();
         assert_eq!(fr.regime, Regime::Laminar);
-        assert!(rel_err(fr.f, 64.0 / MIN_REYNOLDS) < 1e-15, "{corr}: {}", fr.f);
+        assert!(
+            rel_err(fr.f, 64.0 / MIN_REYNOLDS) < 1e-15,
+            "{corr}: {}",
+            fr.f
+        );
         assert!(rel_err(fr.df_dre, -64.0 / (MIN_REYNOLDS * MIN_REYNOLDS)) < 1e-15);
         assert_finite(&[fr.df_drel_roughness], "df/d(ε/D)");
     }
@@ -96,7 +103,11 @@ fn a_pipe_names_the_flow_not_the_reynolds_number() {
     let p = Pipe::circular(0.05, 100.0, 4.5e-5).unwrap();
     let e = p.head_loss(&water(), 1e300).unwrap_err();
     assert_eq!(e.kind(), ErrorKind::OutOfRange);
-    assert!(e.to_string().starts_with("flow = 1e300: gives Reynolds number"), "{e}");
+    assert!(
+        e.to_string()
+            .starts_with("flow = 1e300: gives Reynolds number"),
+        "{e}"
+    );
     let e = p.head_loss(&water(), -1e12).unwrap_err();
     assert!(e.to_string().starts_with("flow = -1000000000000:"), "{e}");
 }
@@ -134,7 +145,8 @@ fn a_reynolds_number_that_overflows_names_the_velocity() {
 
 #[test]
 fn fitting_k_is_finite_or_refused() {
-    let f = Fitting::named("gate valve open").unwrap_or_else(|_| Fitting::two_k(500.0, 0.25).unwrap());
+    let f =
+        Fitting::named("gate valve open").unwrap_or_else(|_| Fitting::two_k(500.0, 0.25).unwrap());
     let e = f.k_at(4.9e-324, 0.05, 1e-3).unwrap_err();
     assert!(e.to_string().starts_with("re = "), "{e}");
     let two_k = Fitting::two_k(1e300, 0.25).unwrap();
@@ -142,7 +154,10 @@ fn fitting_k_is_finite_or_refused() {
     assert!(e.to_string().contains("not a finite number"), "{e}");
     // 2-K (Hooper 1981): K = k1/Re + k_inf (1 + 1/D_in); at Re 1e-100 the viscous term
     // alone is 500e100.
-    let (k, dk) = Fitting::two_k(500.0, 0.25).unwrap().k_at(1e-100, 0.05, 1e-3).unwrap();
+    let (k, dk) = Fitting::two_k(500.0, 0.25)
+        .unwrap()
+        .k_at(1e-100, 0.05, 1e-3)
+        .unwrap();
     assert!(rel_err(k, 5e102) < 1e-12, "{k}");
     assert!(dk.is_finite());
 }
@@ -156,7 +171,10 @@ fn fittings_only() -> Line {
 }
 
 fn one_pipe() -> Line {
-    Line::new(vec![Element::Pipe(Pipe::circular(0.05, 30.0, 4.5e-5).unwrap())]).unwrap()
+    Line::new(vec![Element::Pipe(
+        Pipe::circular(0.05, 30.0, 4.5e-5).unwrap(),
+    )])
+    .unwrap()
 }
 
 #[test]

@@ -279,7 +279,9 @@ impl Fluid {
             return Err(Error::out_of_range(
                 "velocity",
                 velocity,
-                format!("with diameter {diameter} m gives a Reynolds number that is not a finite number"),
+                format!(
+                    "with diameter {diameter} m gives a Reynolds number that is not a finite number"
+                ),
             ));
         }
         Ok(re)

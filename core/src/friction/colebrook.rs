@@ -121,9 +121,23 @@ fn factor(s: f64, delta: f64) -> f64 {
     q + rem * inv
 }
 
+#[cfg(test)]
+thread_local! {
+    /// Exact Colebrook solves on this thread (tests count them to pin the solvers' cost).
+    static CALLS: std::cell::Cell<u64> = const { std::cell::Cell::new(0) };
+}
+
+/// The number of exact Colebrook solves this thread has made so far (tests only).
+#[cfg(test)]
+pub(crate) fn calls() -> u64 {
+    CALLS.with(|c| c.get())
+}
+
 /// Solves Colebrook–White for `re` > 0 and `rel_roughness` ≥ 0 (already validated).
 #[inline(always)]
 pub(crate) fn solve(re: f64, rel_roughness: f64) -> Solution {
+    #[cfg(test)]
+    CALLS.with(|c| c.set(c.get() + 1));
     let a = rel_roughness * (1.0 / 3.7);
     let inv_re = 1.0 / re;
     let beta = 2.51 * TWO_OVER_LN10 * inv_re;

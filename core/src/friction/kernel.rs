@@ -98,7 +98,9 @@ impl Kernel {
         let valid = inputs_ok(re, rr);
         match self.corr {
             Correlation::Churchill => valid && re >= CHURCHILL_LAMINAR_RE,
-            Correlation::FullyRough => valid && re > self.turbulent_limit && rr >= MIN_REL_ROUGHNESS_FULLY_ROUGH,
+            Correlation::FullyRough => {
+                valid && re > self.turbulent_limit && rr >= MIN_REL_ROUGHNESS_FULLY_ROUGH
+            }
             _ => valid && re > self.turbulent_limit,
         }
     }

@@ -28,6 +28,8 @@ mod colebrook;
 mod explicit;
 mod kernel;
 
+#[cfg(test)]
+pub(crate) use colebrook::calls as colebrook_calls;
 pub use kernel::Isa;
 
 use crate::error::{Error, Result, check};
@@ -515,6 +517,21 @@ fn blend(re: f64, rr: f64, opts: &Options) -> colebrook::Solution {
     }
 }
 
+/// A cheap turbulent friction factor for solvers' starting guesses only: Haaland's
+/// explicit form (within 1.5 % of Colebrook over its range; see the module table), for
+/// `re` ≥ 1 and `rel_roughness` ≥ 0. Never a result.
+#[inline]
+pub(crate) fn approximate_factor(re: f64, rel_roughness: f64) -> f64 {
+    let re = re.clamp(MIN_LAMINAR_LIMIT, MAX_REYNOLDS);
+    if rel_roughness > 0.0 {
+        explicit::haaland(re, rel_roughness.min(MAX_REL_ROUGHNESS)).f
+    } else {
+        // Haaland's smooth-wall form: 1/√f = −1.8 log10(6.9/Re).
+        let x = -1.8 / std::f64::consts::LN_10 * crate::math::ln_pos(6.9 / re);
+        1.0 / (x * x)
+    }
+}
+
 /// The laminar and turbulent limiting values at a transitional Re (for bands that span
 /// both regimes): `(laminar f, turbulent f)`.
 ///
@@ -533,8 +550,7 @@ pub fn transition_limits(re: f64, rel_roughness: f64, opts: &Options) -> Result<
             ),
         ));
     }
-    if opts.correlation == Correlation::FullyRough
-        && rel_roughness < MIN_REL_ROUGHNESS_FULLY_ROUGH
+    if opts.correlation == Correlation::FullyRough && rel_roughness < MIN_REL_ROUGHNESS_FULLY_ROUGH
     {
         return Err(too_smooth_for_fully_rough(rel_roughness));
     }

@@ -17,10 +17,16 @@ use serde::{Deserialize, Serialize};
 /// to exhaust a double's range; Newton with bracketing finishes in well under 100).
 const MAX_ITER: usize = 400;
 
-/// The largest relative mismatch between the head asked for and the head the solved flow
-/// gives before [`Line::flow_for_head`] refuses its answer (relative to the larger of the
-/// head, the static head and 1 m; a converged solve is near 1e-15).
+/// The largest change of head that one rounding of the solved flow may cause before
+/// [`Line::flow_for_head`] refuses its answer as unresolvable (relative to the larger of
+/// the head, the static head and 1 m; an ordinary line is near 1e-15).
 const HEAD_CHECK_TOL: f64 = 1e-8;
+
+/// The largest flow the inverse solvers look for, m³/s.
+const MAX_FLOW: f64 = 1e6;
+
+#[path = "solve_guess.rs"]
+mod guess;
 
 /// The flow a line passes under a given head.
 #[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
@@ -114,43 +120,29 @@ impl Line {
                 )));
             }
         }
-        let g = |q: f64| self.required_head(fluid, q).map(|(h, d)| (h - head, d));
-        let (flow, iterations) = if sign == 0.0 {
-            (0.0, 0)
+        let (flow, iterations, slope) = if sign == 0.0 {
+            (0.0, 0, self.required_head(fluid, 0.0)?.1)
         } else {
-            // First guess from one trial flow, taking the loss as ∝ Q² (turbulent); then
-            // grow the bracket by factors of 4 until it holds the root.
-            let trial = 1e-3 * sign;
-            let loss_at_trial = g(trial)?.0 + head - h0;
-            let mut far = if loss_at_trial != 0.0 {
-                1.5 * trial * ((head - h0) / loss_at_trial).abs().sqrt()
-            } else {
-                trial
+            // In the direction of flow: y = |Q|, G(y) = sign·(h(sign·y) − head) rises
+            // from G(0) < 0.
+            let g = |y: f64| {
+                self.required_head(fluid, sign * y)
+                    .map(|(h, d)| (sign * (h - head), d))
             };
-            far = sign * far.abs().clamp(1e-12, 1e6);
-            let mut near = 0.0;
-            let mut n = 1;
-            while sign * g(far)?.0 < 0.0 {
-                near = far;
-                far *= 4.0;
-                n += 1;
-                if far.abs() > 1e6 {
-                    return Err(Error::no_solution(format!(
-                        "no flow up to 1e6 m³/s reaches head {head} m"
-                    )));
-                }
-            }
-            let (lo, hi) = if sign > 0.0 { (near, far) } else { (far, near) };
-            let (q, it) = safeguarded_newton(g, lo, hi)?;
-            (q, it + n)
+            let y0 = guess::start(self, fluid, (head - h0).abs(), sign);
+            let Some(root) = guess::newton_up(g, y0, MAX_FLOW, MAX_ITER)? else {
+                return Err(Error::no_solution(format!(
+                    "no flow up to {MAX_FLOW:e} m³/s reaches head {head} m"
+                )));
+            };
+            (sign * root.y, root.evaluations, root.slope)
         };
-        let (reached, slope) = self.required_head(fluid, flow)?;
-        // Self-consistency: the flow found must give back the head asked for (it cannot
-        // when the line's slope is so steep that one rounding of the flow moves the head
-        // by more than the tolerance).
-        if (reached - head).abs() > HEAD_CHECK_TOL * head.abs().max(h0.abs()).max(1.0) {
+        // Self-consistency: one rounding of the flow must not move the head by more than
+        // the tolerance (it does when the line's losses are too steep to resolve).
+        let resolution = (slope * flow).abs() * 4.0 * f64::EPSILON;
+        if resolution > HEAD_CHECK_TOL * head.abs().max(h0.abs()).max(1.0) {
             return Err(Error::no_solution(format!(
-                "the flow found ({flow} m³/s) gives {reached} m instead of head {head} m: the line's losses are too steep to resolve in double precision"
+                "the flow for head {head} m ({flow} m³/s) cannot be resolved in double precision: one rounding of it moves the head by {resolution:e} m (the line's losses are too steep)"
             )));
         }
         let flow_band = uncertainty::flow_for_head_band(self, fluid, flow, slope)?;
@@ -421,6 +413,10 @@ impl Line {
         })
     }
 }
+
+#[cfg(test)]
+#[path = "solve_cost.rs"]
+mod cost;
 
 #[cfg(test)]
 mod tests {
