@@ -9,6 +9,9 @@
 
 use hydrograde::friction::{Correlation, Options, darcy_factor};
 
+mod common;
+use common::rel_err;
+
 /// Relative tolerance between the written-out formula and the crate: both round a few
 /// dozen operations, each within an ulp.
 const REL: f64 = 1e-13;
@@ -20,10 +23,7 @@ fn f(corr: Correlation, re: f64, rr: f64) -> f64 {
 }
 
 fn close(got: f64, want: f64, tol: f64, what: &str) {
-    assert!(
-        ((got - want) / want).abs() <= tol,
-        "{what}: got {got}, want {want}"
-    );
+    assert!(rel_err(got, want) <= tol, "{what}: got {got}, want {want}");
 }
 
 /// Colebrook at Re 1e5, ε/D 1e-4 (mpmath, 40 digits: tests/reference/colebrook).

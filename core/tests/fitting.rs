@@ -5,9 +5,8 @@ use hydrograde::fitting::{Fitting, Method, catalogue_entries, head_loss};
 use hydrograde::{ErrorKind, STANDARD_GRAVITY};
 use std::f64::consts::PI;
 
-fn rel_err(a: f64, b: f64) -> f64 {
-    (a - b).abs() / b.abs()
-}
+mod common;
+use common::rel_err;
 
 /// K (no Re dependence expected) at a bore on a smooth pipe.
 fn k0(f: &Fitting, bore: f64) -> f64 {
@@ -435,4 +434,110 @@ fn sources_are_reported() {
     let e = hydrograde::fitting::catalogue_entry("globe_valve").unwrap();
     assert!(matches!(e.method, Method::ThreeK { k1, .. } if k1 == 1500.0)); // Darby, from memory
     assert!(hydrograde::fitting::catalogue_entry("nope").is_err());
+}
+
+#[test]
+fn every_method_has_a_hand_worked_spot_value() {
+    // One spot value per method, each worked by hand from its formula (sources beside
+    // each line), so a changed constant fails. The match below has no wildcard: a new
+    // method does not compile until it has a row here.
+    let inch = 0.0254;
+    let rows: Vec<(Fitting, f64, f64, f64, f64)> = vec![
+        // (fitting, bore m, ε/D, Re, K); tolerance 1e-6 unless noted
+        // given K, exact
+        (Fitting::k(0.8).unwrap(), 0.1, 0.0, 1e5, 0.8),
+        // fully rough law (von Kármán–Nikuradse), ε/D 1e-3: 30 × 0.0196355 = 0.5890640
+        (
+            Fitting::equivalent_length(30.0).unwrap(),
+            0.1,
+            1e-3,
+            1e5,
+            0.589_064_0,
+        ),
+        // Hooper (1981): 800/2e4 + 0.25 (1 + 1/6) = 0.3316667
+        (
+            Fitting::two_k(800.0, 0.25).unwrap(),
+            6.0 * inch,
+            0.0,
+            2e4,
+            0.331_666_7,
+        ),
+        // Darby (2001): 300/1e5 + 0.037 (1 + 3.9/4^0.3) = 0.1352025
+        (
+            Fitting::three_k(300.0, 0.037, 3.9).unwrap(),
+            4.0 * inch,
+            0.0,
+            1e5,
+            0.135_202_5,
+        ),
+        // Borda–Carnot (exact): (1 − 0.5²)² = 0.5625 on the inlet velocity
+        (
+            Fitting::expansion(0.05, 0.1).unwrap(),
+            0.05,
+            0.0,
+            1e5,
+            0.5625,
+        ),
+        // Crane TP-410 (1988), from memory: 0.5 (1 − 0.25) = 0.375 on the outlet
+        (
+            Fitting::contraction(0.1, 0.05).unwrap(),
+            0.05,
+            0.0,
+            1e5,
+            0.375,
+        ),
+        // Crane TP-410, from memory: 0.5; rounded r/d 0.05 halfway 0.24…0.15 = 0.195; 0.78
+        (Fitting::entrance_sharp(), 0.1, 0.0, 1e5, 0.5),
+        (
+            Fitting::entrance_rounded(0.05).unwrap(),
+            0.1,
+            0.0,
+            1e5,
+            0.195,
+        ),
+        (Fitting::entrance_projecting(), 0.1, 0.0, 1e5, 0.78),
+        // exit into a tank: the velocity head (exact)
+        (Fitting::exit(), 0.1, 0.0, 1e5, 1.0),
+        // Rennels & Hudson (2012), from memory: 90°, r/d 1.5, f_T 0.0196355 → 0.2394591
+        (
+            Fitting::bend(90.0, 1.5).unwrap(),
+            0.1,
+            1e-3,
+            1e5,
+            0.239_459_1,
+        ),
+        // Cv definition: K = 890.3 d⁴/Cv² with d in inches (by hand from the NIST factors
+        // and 999.017 kg/m³): 890.3 × 256 / 1e4 = 22.792
+        (Fitting::cv(100.0).unwrap(), 4.0 * inch, 0.0, 1e5, 22.792),
+        // Kv definition: K = 1.599e-3 d⁴/Kv² with d in mm: 1.599e-3 × 1e8 / 1e4 = 15.99
+        (Fitting::kv(100.0).unwrap(), 0.1, 0.0, 1e5, 15.99),
+    ];
+    let mut seen = [false; 13];
+    for (f, bore, rr, re, want) in &rows {
+        let slot = match f.method() {
+            Method::K { .. } => 0,
+            Method::EquivalentLength { .. } => 1,
+            Method::TwoK { .. } => 2,
+            Method::ThreeK { .. } => 3,
+            Method::Expansion { .. } => 4,
+            Method::Contraction { .. } => 5,
+            Method::EntranceSharp => 6,
+            Method::EntranceRounded { .. } => 7,
+            Method::EntranceProjecting => 8,
+            Method::Exit => 9,
+            Method::Bend { .. } => 10,
+            Method::Cv { .. } => 11,
+            Method::Kv { .. } => 12,
+        };
+        seen[slot] = true;
+        let (k, _) = f.k_at(*re, *bore, *rr).unwrap();
+        // the Cv and Kv factors are typed to 4 digits
+        let tol = if slot >= 11 { 5e-4 } else { 1e-6 };
+        assert!(
+            rel_err(k, *want) < tol,
+            "{}: K = {k}, want {want}",
+            f.method().name()
+        );
+    }
+    assert!(seen.iter().all(|&s| s), "{seen:?}");
 }

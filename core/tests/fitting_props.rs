@@ -3,9 +3,8 @@
 use hydrograde::fitting::{Fitting, head_loss};
 use proptest::prelude::*;
 
-fn rel_err(a: f64, b: f64) -> f64 {
-    (a - b).abs() / b.abs().max(f64::MIN_POSITIVE)
-}
+mod common;
+use common::rel_err;
 
 proptest! {
     // 2-K (Hooper 1981) and 3-K (Darby 2001) with K1 ≥ 0: K never rises with Re

@@ -8,6 +8,9 @@
 use hydrograde::fluid::{Fluid, Phase, water_saturation_temperature, water_vapour_pressure};
 use proptest::prelude::*;
 
+mod common;
+use common::rel_err as rel;
+
 struct Row {
     kind: String,
     t: f64,
@@ -46,10 +49,6 @@ fn table() -> Vec<Row> {
             }
         })
         .collect()
-}
-
-fn rel(a: f64, b: f64) -> f64 {
-    ((a - b) / b).abs()
 }
 
 #[test]

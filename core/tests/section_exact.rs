@@ -18,9 +18,8 @@ use hydrograde::warning::Warnings;
 use proptest::prelude::*;
 use std::f64::consts::PI;
 
-fn rel(a: f64, b: f64) -> f64 {
-    ((a - b) / b).abs()
-}
+mod common;
+use common::rel_err as rel;
 
 #[test]
 fn circle_poiseuille() {
