@@ -223,6 +223,32 @@ pub struct Band {
     /// Each source's share of the variance, largest first; empty when the band has no
     /// width (for example at zero flow).
     pub contributions: Vec<Contribution>,
+    /// The first-order band may be unreliable: it is wider than
+    /// [`NON_LINEAR_HALF_WIDTH`] of its nominal value, or (line results) the Reynolds
+    /// number of some pipe reaches into the laminar–turbulent transition within its own
+    /// 95 % range ([`reaches_transition`]). The Monte Carlo interval
+    /// ([`monte_carlo`]; C `hg_line_monte_carlo`, Python `hydrograde.monte_carlo`) is then
+    /// the one to use.
+    #[serde(default)]
+    pub non_linear: bool,
+}
+
+/// The relative half-width (of the nominal value) above which a band is flagged
+/// non-linear. Losses are products of uncertain factors (f·L/D·V², K·V², D⁻⁵…), so the
+/// result is closer to log-normal than normal once the band is wide: for a log-normal
+/// result of relative standard uncertainty σ the 95 % ends are exp(±1.96σ) against the
+/// first-order 1 ± 2σ, and at σ = 0.1 (a half-width of 20 %) they differ by 5.5 % of the
+/// band's width (by hand: e^0.196 = 1.2165, e^−0.196 = 0.8220) — beyond the 5 % that
+/// the first-order band is validated to against Monte Carlo (core/tests/band_validation.rs).
+pub const NON_LINEAR_HALF_WIDTH: f64 = 0.2;
+
+/// True when a Reynolds number `re` with relative standard uncertainty `u_re` reaches
+/// into the transition between `laminar_limit` and `turbulent_limit` within its 95 %
+/// range re·(1 ± 2u): the friction factor's slope changes abruptly there (and its model
+/// uncertainty with it), so a first-order band does not describe the spread.
+pub fn reaches_transition(re: f64, u_re: f64, laminar_limit: f64, turbulent_limit: f64) -> bool {
+    let (lo, hi) = (re * (1.0 - 2.0 * u_re), re * (1.0 + 2.0 * u_re));
+    hi >= laminar_limit && lo <= turbulent_limit
 }
 
 /// One source's first-order effect on a result: the signed change for one standard
@@ -270,6 +296,7 @@ impl Band {
             coverage_factor: COVERAGE_FACTOR,
             coverage: Coverage::Exact,
             contributions: Vec::new(),
+            non_linear: false,
         }
     }
 
@@ -321,6 +348,7 @@ impl Band {
                 Coverage::Normal
             },
             contributions: kept,
+            non_linear: nominal != 0.0 && half > NON_LINEAR_HALF_WIDTH * nominal.abs(),
         }
     }
 

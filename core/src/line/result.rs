@@ -218,7 +218,17 @@ impl Line {
             e.elevation_out = elevation;
             elements.push(e);
         }
-        let bands = uncertainty::line_bands(self, &sources, terms, &work, head_loss, required_head);
+        let mut bands =
+            uncertainty::line_bands(self, &sources, terms, &work, head_loss, required_head);
+        if self.reaches_transition(&states, &work) {
+            for b in [
+                &mut bands.head_loss,
+                &mut bands.pressure_loss,
+                &mut bands.required_head,
+            ] {
+                b.non_linear = true;
+            }
+        }
         Ok(LineResult {
             flow,
             head_loss,
@@ -299,6 +309,41 @@ pub struct NpshCheck {
     pub margin: f64,
     /// available ≥ required + margin.
     pub sufficient: bool,
+}
+
+impl Line {
+    /// True when some pipe's Reynolds number (on its turbulent diameter) reaches into the
+    /// laminar–turbulent transition within its own 95 % range, from the bore tolerance
+    /// and the fluid's uncertainties ([`crate::band::reaches_transition`]).
+    fn reaches_transition(&self, states: &[State], fluid: &Fluid) -> bool {
+        let uo = &self.options.uncertainty;
+        let u_fluid = if uo.fluid {
+            crate::math::hypot(
+                fluid.viscosity_rel_uncertainty,
+                fluid.density_rel_uncertainty,
+            )
+        } else {
+            0.0
+        };
+        // Re = 4ρQ/(πμD) at a fixed flow: every input enters with exponent ±1.
+        let u_re = crate::math::hypot(uo.diameter, u_fluid);
+        let fo = &self.options.friction;
+        states
+            .iter()
+            .zip(&self.resolved)
+            .any(|(s, r)| match (r, s.reynolds) {
+                (Resolved::Pipe { geometry, .. }, Some(re)) if re > 0.0 => {
+                    let re_t = re * geometry.dt / geometry.dh;
+                    crate::band::reaches_transition(
+                        re_t,
+                        u_re,
+                        fo.laminar_limit,
+                        fo.turbulent_limit,
+                    )
+                }
+                _ => false,
+            })
+    }
 }
 
 impl LineResult {
