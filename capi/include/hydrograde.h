@@ -645,6 +645,14 @@ typedef struct hg_line_totals {
    * the first layout: read it only when `struct_size` covers it.
    */
   double required_pressure;
+  /**
+   * 1 when the first-order bands above are flagged non-linear (wider than 20 % of
+   * their nominal value, or a pipe's Reynolds number reaches into the laminar–turbulent
+   * transition within its own 95 % range): take the interval from
+   * `hg_line_monte_carlo` instead; else 0. Added after the first layout: read it only
+   * when `struct_size` covers it.
+   */
+  int32_t band_non_linear;
 } hg_line_totals;
 
 /**
@@ -873,7 +881,7 @@ int32_t hg_friction_options_default(struct hg_friction_options *opts);
  * `correlation` (`HG_CORRELATION_*`) and the default regime treatment: laminar
  * f = 64/Re below Re 2300, the correlation above 4000, a C¹ blend between.
  *
- * Valid ranges: 0 < re ≤ 1e13; 0 ≤ rel_roughness ≤ 0.5 (> 0 for the fully rough law).
+ * Valid ranges: 1e-100 ≤ re ≤ 1e13; 0 ≤ rel_roughness ≤ 0.5 (≥ 1e-100 for the fully rough law).
  * Outside a correlation's published range the value still computes (see
  * `hg_darcy_factor_full` for the warnings).
  *
@@ -1234,7 +1242,7 @@ int32_t hg_turbulent_diameter(int32_t shape,
 
 /**
  * The resistance coefficient K (dimensionless) of the catalogue fitting `name` and its
- * derivative ∂K/∂Re, at Reynolds number `re` (> 0, in `bore`), for the velocity in
+ * derivative ∂K/∂Re, at Reynolds number `re` (1e-100 or more, in `bore`), for the velocity in
  * `bore` (m, > 0), next to a pipe of relative roughness `pipe_rel_roughness`
  * (0 ≤ ε/D ≤ 0.5; used by fittings whose K follows the pipe's fully rough friction
  * factor). K(Re) = k_viscous/Re + k_inertial; fitting data scatter by ±20–50 %.

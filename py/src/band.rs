@@ -42,6 +42,7 @@ pub fn band_dict<'py>(py: Python<'py>, b: &Band) -> PyResult<Bound<'py, PyDict>>
     d.set_item("high", b.high)?;
     d.set_item("coverage_factor", b.coverage_factor)?;
     d.set_item("coverage", b.coverage.name())?;
+    d.set_item("non_linear", b.non_linear)?;
     let rows = PyList::empty(py);
     for c in &b.contributions {
         let r = PyDict::new(py);
@@ -103,6 +104,14 @@ impl PyBand {
             .iter()
             .map(|c| (c.source.name(), c.source.kind(), c.share))
             .collect()
+    }
+    /// True when the first-order band may be unreliable: wider than 20 % of its nominal
+    /// value, or (line results) a pipe's Reynolds number reaches into the
+    /// laminar–turbulent transition within its own 95 % range. Take the interval from
+    /// :func:`monte_carlo` then.
+    #[getter]
+    fn non_linear(&self) -> bool {
+        self.inner.non_linear
     }
     /// Half the width of the band, k·u.
     #[getter]

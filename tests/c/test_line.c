@@ -873,6 +873,41 @@ static void test_curve_band(void) {
   hg_fluid_free(f);
 }
 
+/* The non-linear flag of the bands: an invented 20 m smooth 20 mm tube at Re = 2200, just
+   below the laminar limit 2300, whose Re band (3 % bore tolerance, 2 % viscosity) reaches
+   into the transition; Monte Carlo then parts from the first-order band. Far from the
+   transition (Re = 2e5) the flag stays 0. Re = 4Q/(pi d nu), exact. */
+static void test_non_linear_flag(void) {
+  hg_line *l = NULL;
+  hg_fluid *plain = NULL, *f = NULL;
+  hg_uncertainty_options u;
+  CHECK(hg_line_new(&l) == HG_OK && hg_line_add_pipe(l, 0.02, 20.0, 0.0) == HG_OK, "tube");
+  CHECK(hg_uncertainty_options_default(&u) == HG_OK, "defaults");
+  u.diameter = 0.03;
+  CHECK(hg_line_set_uncertainty(l, &u) == HG_OK, "bore tolerance");
+  CHECK(hg_fluid_liquid(998.2, 1.002e-3, &plain) == HG_OK &&
+            hg_fluid_with_uncertainty(plain, 0.001, 0.02, &f) == HG_OK,
+        "water with uncertainties");
+  double nu = 1.002e-3 / 998.2, pi = 3.14159265358979323846;
+  double q = 2200.0 * nu * pi * 0.02 / 4.0;
+  hg_line_totals t;
+  memset(&t, 0, sizeof t);
+  t.struct_size = sizeof t;
+  CHECK(totals(l, f, q, &t) == HG_OK && t.band_non_linear == 1, "flagged near the transition");
+  hg_monte_carlo mc;
+  memset(&mc, 0, sizeof mc);
+  mc.struct_size = sizeof mc;
+  CHECK(hg_line_monte_carlo(l, f, q, 20000, 7, &mc) == HG_OK, "monte carlo");
+  double width = t.required_head_high - t.required_head_low;
+  CHECK(fabs(mc.high - t.required_head_high) > 0.05 * width, "Monte Carlo parts: %.6g vs %.6g",
+        mc.high, t.required_head_high);
+  CHECK(totals(l, f, 2e5 * nu * pi * 0.02 / 4.0, &t) == HG_OK && t.band_non_linear == 0,
+        "not flagged at Re 2e5");
+  hg_fluid_free(f);
+  hg_fluid_free(plain);
+  hg_line_free(l);
+}
+
 /* The air around a line and the direction flow may take (hand-worked values). */
 static void test_line_model(void) {
   hg_line *l = NULL;
@@ -942,6 +977,7 @@ int main(int argc, char **argv) {
   test_threads();
   test_curve_band();
   test_line_model();
+  test_non_linear_flag();
   pthread_t th[8];
   thread_arg args[8];
   for (int i = 0; i < 8; i++) {

@@ -114,3 +114,21 @@ def test_curve_band_plot(water, tmp_path):
     labels = [h.get_label() for h in ax.get_legend_handles_labels()[0]]
     assert "system band (95 %)" in labels
     ax.figure.savefig(tmp_path / "curve.png")
+
+
+def test_non_linear_flag_near_the_transition_and_not_far_from_it():
+    # Invented: 20 m of smooth 20 mm tube at Re ≈ 2200, just below the laminar limit 2300;
+    # a 3 % bore tolerance and 2 % viscosity carry Re across 2300 within the band, so the
+    # first-order band is flagged and Monte Carlo parts from it (as in the core's test).
+    fluid = hg.Fluid(998.2, 1.002e-3).with_uncertainty(0.001, 0.02)
+    nu = 1.002e-3 / 998.2
+    flow = 2200.0 * nu * math.pi * 0.02 / 4.0  # Re = 4Q/(π d ν)
+    tube = hg.Line([hg.Pipe(0.02, 20.0, 0.0)], uncertainty=hg.Uncertainty(diameter=0.03))
+    band = tube.evaluate(fluid, flow).required_head_band
+    assert band.non_linear is True
+    assert band.to_dict()["non_linear"] is True
+    mc = hg.monte_carlo(tube, fluid, flow, samples=20_000, seed=7)
+    assert abs(mc.high - band.high) > 0.05 * (band.high - band.low)
+    # Far from the transition (Re ≈ 7.6e4, roughness-dominated): not flagged.
+    steel = hg.Line([hg.Pipe.of_material(0.05, 100.0, "commercial_steel")])
+    assert steel.evaluate(fluid, 3e-3).required_head_band.non_linear is False

@@ -88,6 +88,12 @@ pub struct hg_line_totals {
     /// gas the figure to lead with; a rise counts (ρ − ρ_surroundings)·g·Δz). Added after
     /// the first layout: read it only when `struct_size` covers it.
     pub required_pressure: f64,
+    /// 1 when the first-order bands above are flagged non-linear (wider than 20 % of
+    /// their nominal value, or a pipe's Reynolds number reaches into the laminar–turbulent
+    /// transition within its own 95 % range): take the interval from
+    /// `hg_line_monte_carlo` instead; else 0. Added after the first layout: read it only
+    /// when `struct_size` covers it.
+    pub band_non_linear: i32,
 }
 sized!(hg_line_totals, required_head_high: f64);
 
@@ -180,6 +186,7 @@ pub(crate) fn totals_to_c(r: &LineResult) -> hg_line_totals {
         required_head_low: r.required_head_band.low,
         required_head_high: r.required_head_band.high,
         required_pressure: r.required_pressure,
+        band_non_linear: i32::from(r.required_head_band.non_linear),
     }
 }
 
