@@ -654,6 +654,27 @@ pub fn darcy_factor_batch_on(
     }
 }
 
+/// Friction factors at many points for a caller that handles the points the vector
+/// kernel does not take: those the kernel takes (valid, turbulent; any regime from Re 1
+/// for Churchill) get exactly [`darcy_factor`]'s value; every other point goes to
+/// `other(i, &mut out[i])`. `re`, `rr` and `out` have one length.
+pub(crate) fn factors_with(
+    re: &[f64],
+    rr: &[f64],
+    opts: &Options,
+    out: &mut [f64],
+    other: &mut dyn FnMut(usize, &mut f64) -> Result<()>,
+) -> Result<()> {
+    kernel::run_on(
+        Isa::detected(),
+        &kernel::Kernel::new(opts),
+        re,
+        rr,
+        out,
+        other,
+    )
+}
+
 /// Points per parallel task of [`darcy_factor_batch`].
 const BATCH_CHUNK: usize = 4096;
 

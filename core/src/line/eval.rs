@@ -406,6 +406,10 @@ impl Line {
     /// [`crate::threads::set_threads`] allows above 4096 points; the result is the same
     /// either way.
     pub fn system_curve(&self, fluid: &Fluid, flows: &[f64]) -> Result<Vec<f64>> {
+        // The pipes' friction factors through the vector kernel, same bits (solve_curve.rs).
+        if let Some(heads) = self.system_curve_vectorised(fluid, flows) {
+            return Ok(heads);
+        }
         let one = |(i, &q): (usize, &f64)| {
             self.required_head(fluid, q)
                 .map(|r| r.0)

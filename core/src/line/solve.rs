@@ -28,6 +28,9 @@ const MAX_FLOW: f64 = 1e6;
 #[path = "solve_guess.rs"]
 mod guess;
 
+#[path = "solve_curve.rs"]
+mod curve;
+
 /// The flow a line passes under a given head.
 #[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
 pub struct FlowSolution {

@@ -83,3 +83,42 @@ fn flow_for_head_stays_within_its_solve_budget_and_gives_back_the_head() {
     }
     assert!(worst <= 4 * 9 + 27, "{worst} solves");
 }
+
+#[test]
+fn the_vectorised_system_curve_is_the_required_head_loop_bit_for_bit() {
+    // Exact check: same bits as one required_head call per flow, over laminar,
+    // transitional, turbulent and reverse flows, for every correlation; and the vector
+    // path is the one taken.
+    use crate::friction::{Correlation, Options, Transition};
+    let water = Fluid::water(293.15, 101_325.0).unwrap();
+    let flows: Vec<f64> = (0..1000)
+        .map(|i| -0.02 + 0.04 * i as f64 / 999.0)
+        .chain([0.0, -0.0, 1e-9, 2.5e-4, 3.1e-4])
+        .collect();
+    for corr in Correlation::ALL {
+        for transition in Transition::ALL {
+            let mut options = line20().options().clone();
+            options.friction = Options {
+                correlation: corr,
+                transition,
+                ..Options::default()
+            };
+            let line = line20().set_options(options).unwrap();
+            let looped: Result<Vec<f64>, _> = flows
+                .iter()
+                .map(|&q| line.required_head(&water, q).map(|r| r.0))
+                .collect();
+            let curve = line.system_curve(&water, &flows);
+            match (looped, curve) {
+                (Ok(a), Ok(b)) => {
+                    assert!(line.system_curve_vectorised(&water, &flows).is_some());
+                    for (x, y) in a.iter().zip(&b) {
+                        assert_eq!(x.to_bits(), y.to_bits(), "{corr} {transition}");
+                    }
+                }
+                (Err(_), Err(e)) => assert!(e.to_string().starts_with("element "), "{e}"),
+                (a, b) => panic!("{corr} {transition}: {a:?} vs {b:?}"),
+            }
+        }
+    }
+}
