@@ -653,6 +653,10 @@ typedef struct hg_line_totals {
    * when `struct_size` covers it.
    */
   int32_t band_non_linear;
+  /**
+   * Always 0 (keeps the struct free of padding, so whole structs compare bytewise).
+   */
+  int32_t band_reserved;
 } hg_line_totals;
 
 /**

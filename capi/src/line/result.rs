@@ -94,6 +94,8 @@ pub struct hg_line_totals {
     /// `hg_line_monte_carlo` instead; else 0. Added after the first layout: read it only
     /// when `struct_size` covers it.
     pub band_non_linear: i32,
+    /// Always 0 (keeps the struct free of padding, so whole structs compare bytewise).
+    pub band_reserved: i32,
 }
 sized!(hg_line_totals, required_head_high: f64);
 
@@ -187,6 +189,7 @@ pub(crate) fn totals_to_c(r: &LineResult) -> hg_line_totals {
         required_head_high: r.required_head_band.high,
         required_pressure: r.required_pressure,
         band_non_linear: i32::from(r.required_head_band.non_linear),
+        band_reserved: 0,
     }
 }
 
