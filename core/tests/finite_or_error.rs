@@ -231,3 +231,14 @@ fn the_friction_module_constants_are_what_the_docs_say() {
     assert_eq!(friction::MIN_REYNOLDS, 1e-100);
     assert_eq!(friction::MAX_LAMINAR_CONSTANT, 1e4);
 }
+
+#[test]
+fn flow_for_an_unreachable_head_names_the_head() {
+    // A head of 1e300 m needs a flow far beyond what any pipe carries: the error names the
+    // head the caller gave, not a trial flow or a Reynolds number.
+    let e = one_pipe().flow_for_head(&water(), 1e300).unwrap_err();
+    assert!(
+        e.to_string().starts_with("head = 1e300") || e.to_string().contains("head 1e300"),
+        "{e}"
+    );
+}

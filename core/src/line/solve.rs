@@ -133,7 +133,20 @@ impl Line {
                     .map(|(h, d)| (sign * (h - head), d))
             };
             let y0 = guess::start(self, fluid, (head - h0).abs(), sign);
-            let Some(root) = guess::newton_up(g, y0, MAX_FLOW, MAX_ITER)? else {
+            // A trial flow the line cannot carry (its losses overflow) is the head's fault:
+            // the message names the head the caller gave.
+            let solved = guess::newton_up(g, y0, MAX_FLOW, MAX_ITER).map_err(|e| {
+                if e.kind() == crate::ErrorKind::OutOfRange {
+                    Error::out_of_range(
+                        "head",
+                        head,
+                        format!("needs a flow whose losses cannot be evaluated ({e})"),
+                    )
+                } else {
+                    e
+                }
+            })?;
+            let Some(root) = solved else {
                 return Err(Error::no_solution(format!(
                     "no flow up to {MAX_FLOW:e} m³/s reaches head {head} m"
                 )));
