@@ -402,6 +402,27 @@ pub(crate) fn options_ok(opts: &Options) -> bool {
 /// and does not pay for the checks again.
 #[inline]
 pub(crate) fn factor_checked(re: f64, rel_roughness: f64, opts: &Options) -> Result<Friction> {
+    let (s, regime) = solution(re, rel_roughness, opts)?;
+    let corr = opts.correlation;
+    let mut warnings = Warnings::NONE;
+    match regime {
+        Regime::Transitional => warnings.insert(Warnings::TRANSITIONAL_FLOW),
+        Regime::Turbulent => warnings |= range_warnings(corr, re, rel_roughness, s.f),
+        Regime::Laminar => {}
+    }
+    Ok(finish(s, regime, warnings))
+}
+
+/// The factor and its slope ∂f/∂Re alone, for checked inputs (as [`factor_checked`]):
+/// the solvers' hot path, which needs no warnings. Same bits as [`darcy_factor`].
+#[inline]
+pub(crate) fn factor_slope(re: f64, rel_roughness: f64, opts: &Options) -> Result<(f64, f64)> {
+    solution(re, rel_roughness, opts).map(|(s, _)| (s.f, s.df_dre))
+}
+
+/// The factor with its sensitivities and the regime, for checked inputs.
+#[inline(always)]
+fn solution(re: f64, rel_roughness: f64, opts: &Options) -> Result<(colebrook::Solution, Regime)> {
     let corr = opts.correlation;
     if corr == Correlation::FullyRough && rel_roughness < MIN_REL_ROUGHNESS_FULLY_ROUGH {
         return Err(too_smooth_for_fully_rough(rel_roughness));
@@ -413,45 +434,31 @@ pub(crate) fn factor_checked(re: f64, rel_roughness: f64, opts: &Options) -> Res
     } else {
         Regime::Turbulent
     };
-    let mut warnings = Warnings::NONE;
-    if regime == Regime::Transitional {
-        warnings.insert(Warnings::TRANSITIONAL_FLOW);
-    }
     if corr.covers_all_regimes() {
         let s = if re < CHURCHILL_LAMINAR_RE {
             laminar(re, opts.laminar_constant)
         } else {
             explicit::churchill(re, rel_roughness, opts.laminar_constant)
         };
-        if regime == Regime::Turbulent {
-            warnings |= range_warnings(corr, re, rel_roughness, s.f);
-        }
-        return Ok(finish(s, regime, warnings));
+        return Ok((s, regime));
     }
-    match regime {
-        Regime::Laminar => Ok(finish(laminar(re, opts.laminar_constant), regime, warnings)),
-        Regime::Turbulent => {
-            let s = turbulent(corr, re, rel_roughness);
-            warnings |= range_warnings(corr, re, rel_roughness, s.f);
-            Ok(finish(s, regime, warnings))
-        }
+    let s = match regime {
+        Regime::Laminar => laminar(re, opts.laminar_constant),
+        Regime::Turbulent => turbulent(corr, re, rel_roughness),
         Regime::Transitional => match opts.transition {
-            Transition::Refuse => Err(Error::NoSolution {
-                reason: format!(
-                    "re = {re} is transitional (between {} and {}) and the transition option is 'refuse'",
-                    opts.laminar_limit, opts.turbulent_limit
-                ),
-            }),
-            Transition::Turbulent => {
-                let s = turbulent(corr, re, rel_roughness);
-                Ok(finish(s, regime, warnings))
+            Transition::Refuse => {
+                return Err(Error::NoSolution {
+                    reason: format!(
+                        "re = {re} is transitional (between {} and {}) and the transition option is 'refuse'",
+                        opts.laminar_limit, opts.turbulent_limit
+                    ),
+                });
             }
-            Transition::Blend => {
-                let s = blend(re, rel_roughness, opts);
-                Ok(finish(s, regime, warnings))
-            }
+            Transition::Turbulent => turbulent(corr, re, rel_roughness),
+            Transition::Blend => blend(re, rel_roughness, opts),
         },
-    }
+    };
+    Ok((s, regime))
 }
 
 fn too_smooth_for_fully_rough(rel_roughness: f64) -> Error {

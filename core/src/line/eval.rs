@@ -329,13 +329,8 @@ impl Line {
     /// Required head (m) and its derivative (s/m²) at one flow, for a liquid or a gas at
     /// a fixed density. No allocation: this is the hot path of solvers and curves.
     pub(crate) fn head_and_slope(&self, fluid: &Fluid, flow: f64) -> Result<(f64, f64)> {
-        let mut h = 0.0;
-        let mut d = 0.0;
-        for i in 0..self.resolved.len() {
-            let s = self.element_state(i, fluid, flow, None, false)?;
-            h += s.head_loss + s.static_head; // same order as LineResult::required_head
-            d += s.dhead_dflow;
-        }
+        // element_state's numbers without the rest (solve_hot.rs), same bits.
+        let (h, d) = self.hot_head_and_slope(fluid, flow)?;
         if !(h.is_finite() && d.is_finite()) {
             return Err(Error::out_of_range(
                 "flow",

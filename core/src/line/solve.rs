@@ -31,6 +31,9 @@ mod guess;
 #[path = "solve_curve.rs"]
 mod curve;
 
+#[path = "solve_hot.rs"]
+mod hot;
+
 /// The flow a line passes under a given head.
 #[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
 pub struct FlowSolution {

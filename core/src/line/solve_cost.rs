@@ -122,3 +122,27 @@ fn the_vectorised_system_curve_is_the_required_head_loop_bit_for_bit() {
         }
     }
 }
+
+#[test]
+fn the_hot_path_gives_the_evaluated_numbers_bit_for_bit() {
+    // Exact check: required_head (the lean hot path) against evaluate (every element's
+    // full state) at laminar, transitional, turbulent and reverse flows, for every
+    // correlation.
+    use crate::friction::{Correlation, Options};
+    let water = Fluid::water(293.15, 101_325.0).unwrap();
+    for corr in Correlation::ALL {
+        let mut options = line20().options().clone();
+        options.friction = Options::with_correlation(corr);
+        let line = line20().set_options(options).unwrap();
+        for q in [0.0, 1e-9, 1e-5, 2.5e-4, 3.1e-4, 2e-3, 0.012, -0.012, 0.03] {
+            let (h, d) = line.required_head(&water, q).unwrap();
+            let r = line.evaluate(&water, q).unwrap();
+            assert_eq!(h.to_bits(), r.required_head.to_bits(), "{corr} at {q}");
+            assert_eq!(
+                d.to_bits(),
+                r.drequired_head_dflow.to_bits(),
+                "{corr} at {q}"
+            );
+        }
+    }
+}
