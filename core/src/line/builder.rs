@@ -80,6 +80,67 @@ pub fn check_count(count: i64) -> Result<u32> {
     }
 }
 
+/// A label and a count an element carries into a line: what the bindings attach to an
+/// element before it is pushed (`Fitting.k(0.3, label="riser", count=6)` in Python).
+/// Built only through [`Tag::new`]; deserialising runs the same checks.
+#[derive(Debug, Clone, PartialEq, Eq, Serialize, Deserialize)]
+#[serde(try_from = "TagSpec")]
+pub struct Tag {
+    label: Option<String>,
+    count: u32,
+}
+
+#[derive(Deserialize)]
+struct TagSpec {
+    label: Option<String>,
+    count: i64,
+}
+
+impl TryFrom<TagSpec> for Tag {
+    type Error = Error;
+    fn try_from(s: TagSpec) -> Result<Tag> {
+        Tag::new(s.label.as_deref(), s.count)
+    }
+}
+
+impl Default for Tag {
+    fn default() -> Tag {
+        Tag {
+            label: None,
+            count: 1,
+        }
+    }
+}
+
+impl Tag {
+    /// A tag of an optional label (see [`check_label`]) and a count (see [`check_count`];
+    /// only fittings take a count above 1, checked when the element is pushed).
+    ///
+    /// # Errors
+    /// A bad label or count.
+    pub fn new(label: Option<&str>, count: i64) -> Result<Tag> {
+        Ok(Tag {
+            label: label.map(check_label).transpose()?,
+            count: check_count(count)?,
+        })
+    }
+
+    /// The label, if one was given.
+    pub fn label(&self) -> Option<&str> {
+        self.label.as_deref()
+    }
+
+    /// The count (1 unless given).
+    pub fn count(&self) -> u32 {
+        self.count
+    }
+
+    /// True for no label and a count of 1.
+    pub fn is_default(&self) -> bool {
+        *self == Tag::default()
+    }
+}
+
 /// What the user gave for a line, nothing worked out: its stored form and the builder's
 /// contents. Per-element lists may be empty (all default).
 #[derive(Debug, Clone, Default, PartialEq, Serialize, Deserialize)]
@@ -234,14 +295,37 @@ impl LineBuilder {
         Ok(self.len() - 1)
     }
 
-    /// Appends every element of `line` with its label, count and roughness range (the
-    /// options stay this builder's).
-    pub fn push_line(&mut self, line: &Line) {
+    /// Appends an element with a [`Tag`]'s label and count; returns its index.
+    ///
+    /// # Errors
+    /// A count above 1 on an element that is not a fitting (nothing is appended).
+    pub fn push_tagged(&mut self, e: Element, tag: &Tag) -> Result<usize> {
+        let count = count_fits(&e, i64::from(tag.count))?;
+        self.edit().push(e, tag.label.clone(), count);
+        Ok(self.len() - 1)
+    }
+
+    /// Appends every element of `line` with its label, count and roughness range, under
+    /// this builder's options: `line`'s options must be the same except its inlet
+    /// pressure (which in the middle of a route means nothing).
+    ///
+    /// # Errors
+    /// Options that differ, naming `other` (nothing is appended).
+    pub fn push_line(&mut self, line: &Line) -> Result<()> {
+        let mut theirs = line.options.clone();
+        theirs.inlet_pressure = self.spec.options.inlet_pressure;
+        if theirs != self.spec.options {
+            return Err(Error::invalid(
+                "other",
+                "its options (friction, turbulent diameter, uncertainty or surroundings) differ from this line's: give both lines the same options before joining them",
+            ));
+        }
         let s = self.edit();
         s.elements.extend_from_slice(&line.elements);
         s.roughness_ranges.extend_from_slice(&line.roughness_ranges);
         s.labels.extend_from_slice(&line.labels);
         s.counts.extend_from_slice(&line.counts);
+        Ok(())
     }
 
     /// The element at `index`, or an error naming `index`.
@@ -451,6 +535,15 @@ impl Line {
         })
     }
 
+    /// The label and count of element `index` as a [`Tag`]; `None` when `index` is not
+    /// an element.
+    pub fn tag(&self, index: usize) -> Option<Tag> {
+        Some(Tag {
+            label: self.labels.get(index)?.clone(),
+            count: self.counts[index],
+        })
+    }
+
     /// The label the user gave element `index`, if any.
     pub fn user_label(&self, index: usize) -> Option<&str> {
         self.labels.get(index)?.as_deref()
@@ -511,22 +604,14 @@ impl Line {
     }
 
     /// This line followed by `other`: its elements with their labels, counts and
-    /// roughness ranges appended, under this line's options. `other`'s options must be
-    /// the same except its inlet pressure (which in the middle of a route means nothing).
+    /// roughness ranges appended, under this line's options (see
+    /// [`LineBuilder::push_line`]).
     ///
     /// # Errors
     /// Options that differ (naming `other`); the errors of building the joined route.
     pub fn join(&self, other: &Line) -> Result<Line> {
-        let mut theirs = other.options.clone();
-        theirs.inlet_pressure = self.options.inlet_pressure;
-        if theirs != self.options {
-            return Err(Error::invalid(
-                "other",
-                "its options (friction, turbulent diameter, uncertainty or surroundings) differ from this line's: give both lines the same options before joining them",
-            ));
-        }
         let mut b = LineBuilder::from_line(self.clone());
-        b.push_line(other);
+        b.push_line(other)?;
         b.build()
     }
 }

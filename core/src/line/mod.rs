@@ -28,7 +28,7 @@ mod solve;
 pub(crate) mod uncertainty;
 
 use builder::LineSpec;
-pub use builder::{LineBuilder, MAX_COUNT, MAX_LABEL_CHARS, check_count, check_label};
+pub use builder::{LineBuilder, MAX_COUNT, MAX_LABEL_CHARS, Tag, check_count, check_label};
 pub use parallel::{Split, split_flow};
 pub use result::{ElementKind, ElementResult, LineResult, NpshCheck};
 pub use shares::{Share, Shares};
