@@ -323,3 +323,22 @@ fn element_band_shares_sum_to_one_with_shared_sources() {
     let sum: f64 = s.by_source.iter().filter_map(|e| e.band_share).sum();
     assert!((sum - 1.0).abs() < 1e-12, "{sum}");
 }
+
+#[test]
+fn k_has_an_upper_bound_so_inverse_flows_stay_meaningful() {
+    let e = Fitting::k(1e300).unwrap_err();
+    assert_eq!(e.kind(), ErrorKind::OutOfRange);
+    assert!(e.to_string().starts_with("k = 1e300"), "{e}");
+    assert!(Fitting::k(Fitting::MAX_K * 1.000_001).is_err());
+    assert!(hydrograde::Equipment::fixed_k("orifice", 2e6, Some(0.05)).is_err());
+    // At the bound the inverse is exact: K·V²/(2g) = 10 m gives
+    // V = √(2 g · 10 / K) (definition of K).
+    let d = 0.05;
+    let line = Line::new(vec![Element::Fitting(
+        Fitting::k(Fitting::MAX_K).unwrap().with_diameter(d).unwrap(),
+    )])
+    .unwrap();
+    let q = line.flow_for_head(&water(), 10.0).unwrap().flow;
+    let v = (2.0 * STANDARD_GRAVITY * 10.0 / Fitting::MAX_K).sqrt();
+    assert!(rel_err(q, flow_at(v, d)) < 1e-9, "{q}");
+}

@@ -642,12 +642,12 @@ static void test_handles_and_bad_input(void) {
   e.struct_size = 0;
   CHECK(element_row(l, f, q, 0, &e) == HG_ERR_INVALID, "element struct_size 0");
 
-  CHECK(element_label(l, f, q, 0, buf, sizeof buf, &need) == HG_OK && strcmp(buf, "gate_valve") == 0 &&
-            need == 10, "label '%s'", buf);
-  CHECK(element_label(l, f, q, 1, buf, sizeof buf, &need) == HG_OK && strcmp(buf, "pipe") == 0, "label pipe");
+  CHECK(element_label(l, f, q, 0, buf, sizeof buf, &need) == HG_OK && strcmp(buf, "gate_valve 0") == 0 &&
+            need == 12, "label '%s'", buf);
+  CHECK(element_label(l, f, q, 1, buf, sizeof buf, &need) == HG_OK && strcmp(buf, "pipe 1") == 0, "label pipe");
   CHECK(element_label(l, f, q, 0, buf, 4, &need) == HG_ERR_BUFFER_TOO_SMALL && strcmp(buf, "gat") == 0 &&
-            need == 10, "label cut");
-  CHECK(element_label(l, f, q, 0, NULL, 0, &need) == HG_ERR_BUFFER_TOO_SMALL && need == 10, "label length");
+            need == 12, "label cut");
+  CHECK(element_label(l, f, q, 0, NULL, 0, &need) == HG_ERR_BUFFER_TOO_SMALL && need == 12, "label length");
   CHECK(element_label(l, f, q, 0, NULL, 8, &need) == HG_ERR_NULL_POINTER, "label NULL buf");
   CHECK(element_label(l, f, q, 0, buf, sizeof buf, NULL) == HG_ERR_NULL_POINTER, "label NULL needed");
   CHECK(element_label(l, f, q, 5, buf, sizeof buf, &need) == HG_ERR_OUT_OF_RANGE, "label index");
@@ -770,8 +770,8 @@ static void test_result_handle(void) {
         "element source length only");
   CHECK(hg_line_result_element_band_source(NULL, 0, 0, name, sizeof name, &need, &share) == HG_ERR_NULL_POINTER,
         "element source NULL result");
-  CHECK(hg_line_result_label(r, 2, name, sizeof name, &need) == HG_OK && strcmp(name, "gate_valve") == 0, "label");
-  CHECK(hg_line_result_label(r, 1, name, sizeof name, &need) == HG_OK && strcmp(name, "rise") == 0, "rise label");
+  CHECK(hg_line_result_label(r, 2, name, sizeof name, &need) == HG_OK && strcmp(name, "gate_valve 2") == 0, "label");
+  CHECK(hg_line_result_label(r, 1, name, sizeof name, &need) == HG_OK && strcmp(name, "rise 1") == 0, "rise label");
   CHECK(hg_line_result_label(r, 3, name, sizeof name, &need) == HG_ERR_OUT_OF_RANGE, "label past the end");
   CHECK(hg_line_result_label(NULL, 0, name, sizeof name, &need) == HG_ERR_NULL_POINTER, "label NULL result");
 

@@ -133,13 +133,19 @@ impl Fitting {
         }
     }
 
-    /// A fixed resistance coefficient `value` (dimensionless, ≥ 0) on the velocity of the
-    /// adjoining pipe.
+    /// The largest fixed K accepted. Published K values stop in the thousands (a nearly
+    /// closed valve; from memory); a K of 1e6 already costs 51 km of head at 1 m/s. Beyond
+    /// it a "fitting" is a closed line, and the inverse solvers would return flows so
+    /// small that no stated tolerance means anything.
+    pub const MAX_K: f64 = 1e6;
+
+    /// A fixed resistance coefficient `value` (dimensionless, 0 … [`Fitting::MAX_K`]) on
+    /// the velocity of the adjoining pipe.
     ///
     /// # Errors
-    /// `k` not finite or negative.
+    /// `k` not finite, negative or above [`Fitting::MAX_K`].
     pub fn k(value: f64) -> Result<Fitting> {
-        check::non_negative("k", value)?;
+        check::within("k", value, 0.0, Fitting::MAX_K, "")?;
         Ok(Fitting::from_method(Method::K { k: value }))
     }
 

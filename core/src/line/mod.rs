@@ -93,10 +93,10 @@ impl Equipment {
         })
     }
 
-    /// Equipment with a fixed K (≥ 0) on the velocity in `diameter` (m) or the adjoining
-    /// pipe's bore.
+    /// Equipment with a fixed K (0 … [`Fitting::MAX_K`]) on the velocity in `diameter` (m)
+    /// or the adjoining pipe's bore.
     pub fn fixed_k(name: &str, k: f64, diameter: Option<f64>) -> Result<Equipment> {
-        check::non_negative("k", k)?;
+        check::within("k", k, 0.0, Fitting::MAX_K, "")?;
         if let Some(d) = diameter {
             check::positive("diameter", d)?;
         }
