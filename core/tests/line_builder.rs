@@ -335,7 +335,10 @@ fn k_has_an_upper_bound_so_inverse_flows_stay_meaningful() {
     // V = √(2 g · 10 / K) (definition of K).
     let d = 0.05;
     let line = Line::new(vec![Element::Fitting(
-        Fitting::k(Fitting::MAX_K).unwrap().with_diameter(d).unwrap(),
+        Fitting::k(Fitting::MAX_K)
+            .unwrap()
+            .with_diameter(d)
+            .unwrap(),
     )])
     .unwrap();
     let q = line.flow_for_head(&water(), 10.0).unwrap().flow;

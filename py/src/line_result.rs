@@ -190,7 +190,11 @@ impl PyLineResult {
             list.append(d)?;
         }
         match py.import("pandas") {
-            Ok(pd) => pd.getattr("DataFrame")?.call1((list, columns.to_vec())),
+            Ok(pd) => {
+                let kw = PyDict::new(py);
+                kw.set_item("columns", columns.to_vec())?;
+                pd.getattr("DataFrame")?.call((list,), Some(&kw))
+            }
             Err(_) => Ok(list.into_any()),
         }
     }
