@@ -109,12 +109,10 @@ impl PyLine {
         if let Ok(s) = key.cast::<PySlice>() {
             let ix = s.indices(n as isize)?;
             if ix.step != 1 {
-                return Err(Error::invalid(
+                return Err(Error::out_of_range(
                     "step",
-                    format!(
-                        "step = {}: a line slice takes consecutive elements (step 1)",
-                        ix.step
-                    ),
+                    ix.step as f64,
+                    "a line slice takes consecutive elements (step 1)",
                 ))
                 .py();
             }
