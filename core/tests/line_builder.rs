@@ -345,3 +345,25 @@ fn k_has_an_upper_bound_so_inverse_flows_stay_meaningful() {
     let v = (2.0 * STANDARD_GRAVITY * 10.0 / Fitting::MAX_K).sqrt();
     assert!(rel_err(q, flow_at(v, d)) < 1e-9, "{q}");
 }
+
+#[test]
+fn equipment_deserialises_through_its_checks() {
+    let e = hydrograde::Equipment::pressure_drop("strainer", 2000.0, 0.003)
+        .unwrap()
+        .with_spread(0.2)
+        .unwrap();
+    assert_eq!((e.name(), e.spread()), ("strainer", 0.2));
+    let text = serde_json::to_string(&e).unwrap();
+    assert_eq!(
+        serde_json::from_str::<hydrograde::Equipment>(&text).unwrap(),
+        e
+    );
+    for (from, to) in [("2000.0", "-2000.0"), ("0.2", "1.5"), ("0.003", "0.0")] {
+        let bad = text.replace(from, to);
+        assert_ne!(bad, text);
+        assert!(
+            serde_json::from_str::<hydrograde::Equipment>(&bad).is_err(),
+            "{bad}"
+        );
+    }
+}

@@ -266,26 +266,26 @@ impl PyEquipment {
     /// The label given.
     #[getter]
     fn name(&self) -> &str {
-        &self.inner.name
+        self.inner.name()
     }
     /// Relative half-width of the likely range of the loss.
     #[getter]
     fn spread(&self) -> f64 {
-        self.inner.spread
+        self.inner.spread()
     }
     fn __repr__(&self) -> String {
-        match &self.inner.rating {
+        match self.inner.rating() {
             Rating::PressureDrop { drop, at_flow } => format!(
                 "Equipment.pressure_drop('{}', drop={drop:?}, at_flow={at_flow:?}, spread={:?}{})",
-                self.inner.name,
-                self.inner.spread,
+                self.inner.name(),
+                self.inner.spread(),
                 state::tag_repr(&self.tag)
             ),
             Rating::FixedK { k, diameter } => format!(
                 "Equipment.fixed_k('{}', k={k:?}, diameter={}, spread={:?}{})",
-                self.inner.name,
+                self.inner.name(),
                 diameter.map_or("None".to_string(), |d| format!("{d:?}")),
-                self.inner.spread,
+                self.inner.spread(),
                 state::tag_repr(&self.tag)
             ),
         }

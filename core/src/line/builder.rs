@@ -527,7 +527,7 @@ impl Line {
                 None if f.method().name() == "k" => format!("fitting {index}"),
                 None => format!("{} {index}", f.method().name()),
             },
-            Element::Equipment(q) => q.name.clone(),
+            Element::Equipment(q) => q.name().to_string(),
         });
         Some(match self.counts[index] {
             1 => own,

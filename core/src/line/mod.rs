@@ -45,15 +45,36 @@ use crate::pipe::Pipe;
 use crate::section::TurbulentDiameter;
 use serde::{Deserialize, Serialize};
 
-/// Equipment in a line: a component known by its rating rather than its geometry.
+/// Equipment in a line: a component known by its rating rather than its geometry. Built
+/// only through [`Equipment::pressure_drop`] and [`Equipment::fixed_k`] (and
+/// [`Equipment::with_spread`]); deserialising runs the same checks.
 #[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+#[serde(try_from = "EquipmentSpec")]
 pub struct Equipment {
-    /// A label of the user's choosing (shown in results).
-    pub name: String,
-    /// How its loss is stated.
-    pub rating: Rating,
-    /// Relative half-width of the likely range of the loss (rectangular), e.g. 0.1 = ±10 %.
-    pub spread: f64,
+    name: String,
+    rating: Rating,
+    spread: f64,
+}
+
+/// The stored form of [`Equipment`], checked when read.
+#[derive(Deserialize)]
+struct EquipmentSpec {
+    name: String,
+    rating: Rating,
+    spread: f64,
+}
+
+impl TryFrom<EquipmentSpec> for Equipment {
+    type Error = Error;
+    fn try_from(s: EquipmentSpec) -> Result<Equipment> {
+        match s.rating {
+            Rating::PressureDrop { drop, at_flow } => {
+                Equipment::pressure_drop(&s.name, drop, at_flow)
+            }
+            Rating::FixedK { k, diameter } => Equipment::fixed_k(&s.name, k, diameter),
+        }?
+        .with_spread(s.spread)
+    }
 }
 
 /// How an equipment's loss is stated.
@@ -105,6 +126,21 @@ impl Equipment {
             rating: Rating::FixedK { k, diameter },
             spread: EQUIPMENT_DEFAULT_SPREAD,
         })
+    }
+
+    /// The name the user gave it (its label in results unless it has another).
+    pub fn name(&self) -> &str {
+        &self.name
+    }
+
+    /// How its loss is stated.
+    pub fn rating(&self) -> &Rating {
+        &self.rating
+    }
+
+    /// Relative half-width of the likely range of the loss (rectangular), e.g. 0.1 = ±10 %.
+    pub fn spread(&self) -> f64 {
+        self.spread
     }
 
     /// The same equipment with another spread (relative half-width, 0…1: a wider
