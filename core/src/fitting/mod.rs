@@ -139,13 +139,29 @@ impl Fitting {
     /// small that no stated tolerance means anything.
     pub const MAX_K: f64 = 1e6;
 
+    /// Checks a fixed K: finite, not negative, at most [`Fitting::MAX_K`]; errors name `k`.
+    pub fn check_k(value: f64) -> Result<f64> {
+        let k = check::non_negative("k", value)?;
+        if k > Fitting::MAX_K {
+            return Err(Error::out_of_range(
+                "k",
+                k,
+                format!(
+                    "must not exceed {:e} (a larger K is a closed line, not a fitting)",
+                    Fitting::MAX_K
+                ),
+            ));
+        }
+        Ok(k)
+    }
+
     /// A fixed resistance coefficient `value` (dimensionless, 0 … [`Fitting::MAX_K`]) on
     /// the velocity of the adjoining pipe.
     ///
     /// # Errors
     /// `k` not finite, negative or above [`Fitting::MAX_K`].
     pub fn k(value: f64) -> Result<Fitting> {
-        check::within("k", value, 0.0, Fitting::MAX_K, "")?;
+        Fitting::check_k(value)?;
         Ok(Fitting::from_method(Method::K { k: value }))
     }
 

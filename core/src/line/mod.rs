@@ -117,7 +117,7 @@ impl Equipment {
     /// Equipment with a fixed K (0 … [`Fitting::MAX_K`]) on the velocity in `diameter` (m)
     /// or the adjoining pipe's bore.
     pub fn fixed_k(name: &str, k: f64, diameter: Option<f64>) -> Result<Equipment> {
-        check::within("k", k, 0.0, Fitting::MAX_K, "")?;
+        Fitting::check_k(k)?;
         if let Some(d) = diameter {
             check::positive("diameter", d)?;
         }
