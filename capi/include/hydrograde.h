@@ -53,7 +53,8 @@
  *             hg_line_operating_point, hg_line_required_head, hg_pump_curve_head,
  *             hg_line_with_uniform_diameter, hg_line_size, hg_line_split_flow,
  *             hg_line_split_flow_bands, hg_line_blocks_reverse_flow,
- *             hg_line_set_air_column_for_liquids
+ *             hg_line_set_air_column_for_liquids, hg_line_set_label,
+ *             hg_line_set_count, hg_line_slice, hg_line_append_line
  *  Results    hg_line_result (handle), hg_line_totals, hg_element_result,
  *             HG_ELEMENT_*, HG_REGIME_NONE; hg_line_evaluate, hg_line_evaluate_at,
  *             hg_line_result_totals, hg_line_result_element, hg_line_result_label,
@@ -757,6 +758,26 @@ typedef struct hg_element_result {
    * `hg_line_result_element_band_source`); 0 for a band of zero width (a rise).
    */
   size_t band_source_count;
+  /**
+   * How many identical fittings the row stands for (`hg_line_set_count`; 1 for every
+   * other row). This and the fields after it came after the struct's first layout: a
+   * caller whose `struct_size` ends before them does not get them.
+   */
+  size_t count;
+  /**
+   * The row's share of the variance of the line's head loss: the covariance of its
+   * loss with the total over the total's variance (the shares of all rows sum to 1; a
+   * negative share offsets the rest); only when `has_band_share`.
+   */
+  double band_share;
+  /**
+   * 1 when `band_share` applies (the line's head-loss band has a width), else 0.
+   */
+  int32_t has_band_share;
+  /**
+   * Reserved, 0.
+   */
+  int32_t reserved_end;
 } hg_element_result;
 
 /**
@@ -1878,9 +1899,8 @@ int32_t hg_line_set_k_spread(struct hg_line *line,
 
 /**
  * States the likely range `low`…`high` (m, 0 ≤ low ≤ high) of the roughness of the pipe
- * at `index` (0-based), for the roughness uncertainty of the bands (rectangular between
- * the two). Checked at once when the line can be built (else when it is next
- * evaluated): an index that is not a pipe gives `HG_ERR_OUT_OF_RANGE`.
+ * at `index` (0-based), for the roughness uncertainty of the bands (log-uniform between
+ * the two). Checked at once: an index that is not a pipe gives `HG_ERR_OUT_OF_RANGE`.
  *
  * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
  * Needs exclusive use of `line`.
@@ -1904,6 +1924,76 @@ int32_t hg_line_set_roughness_range(struct hg_line *line,
  */
 int32_t hg_line_set_turbulent_diameter(struct hg_line *line,
                                        int32_t mode);
+
+/**
+ * Sets the label of element `index` (0-based) to `label` (UTF-8, 1 to 120 characters,
+ * one line), shown in its result row (`hg_line_result_label`); NULL gives back the
+ * default label: kind and index, such as "pipe 3", "fitting 4", "rise 5", a fitting's
+ * catalogue or method name and index, or an equipment's name. A count above 1 shows as
+ * "6 × …" before either.
+ *
+ * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` for an index that is not an element;
+ * `HG_ERR_INVALID` for a label empty, too long, with a control character or not UTF-8;
+ * `HG_ERR_NULL_POINTER` for `line`. Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread; `label` NULL or a
+ * NUL-terminated string.
+ */
+int32_t hg_line_set_label(struct hg_line *line,
+                          size_t index,
+                          const char *label);
+
+/**
+ * Makes the fitting at `index` (0-based) stand for `count` identical fittings (1 to
+ * 10000): one result row with `count` times the fitting's K, so `count`·K·V²/(2g) of
+ * head loss, and one shared K error (its band is `count` times one fitting's).
+ *
+ * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` for a count out of range or an index that is
+ * not an element; `HG_ERR_INVALID` for a count above 1 on an element that is not a
+ * fitting; `HG_ERR_NULL_POINTER`. Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_set_count(struct hg_line *line,
+                          size_t index,
+                          uint32_t count);
+
+/**
+ * Makes a new line, stored in `*out`, of the elements `start` to `end - 1` of `line`
+ * (0-based, `start < end ≤` the element count) with their labels, counts and roughness
+ * ranges and `line`'s options; default labels follow the new indices. Free it with
+ * `hg_line_free`; `line` is unchanged.
+ *
+ * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` for `end` past the last element or `start`
+ * after `end`; `HG_ERR_INVALID` when `start == end` (a line needs an element) or the
+ * slice cannot be built (a fitting left with no bore to take); `HG_ERR_NULL_POINTER`.
+ * Thread-safe (`line` is only read).
+ *
+ * # Safety
+ * `line` must be NULL or a live handle; `out` NULL or a writable `hg_line *`.
+ */
+int32_t hg_line_slice(const struct hg_line *line,
+                      size_t start,
+                      size_t end,
+                      struct hg_line **out);
+
+/**
+ * Appends every element of `other` to `line`, with their labels, counts and roughness
+ * ranges; `line` keeps its options, and `other`'s must be the same except its inlet
+ * pressure. `other` must be complete (it is built to be read); it is unchanged.
+ *
+ * Returns `HG_OK`; `HG_ERR_INVALID` when the options differ or `other` cannot be built;
+ * `HG_ERR_NULL_POINTER`. Needs exclusive use of `line`; `other` may be `line` itself
+ * (the route is then doubled).
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread; `other` NULL or a live
+ * handle.
+ */
+int32_t hg_line_append_line(struct hg_line *line,
+                            const struct hg_line *other);
 
 /**
  * The flow `*flow` (m³/s, signed: negative when `head` is below the static head) at
@@ -2178,8 +2268,8 @@ int32_t hg_line_result_element(const struct hg_line_result *result,
                                struct hg_element_result *out);
 
 /**
- * Copies the label of element `index` of `result` ("pipe", "rise", the fitting's or
- * equipment's name) into `buf` (at most `len - 1` bytes and a NUL; `buf` may be NULL
+ * Copies the label of element `index` of `result` (the user's, see `hg_line_set_label`,
+ * or the default: "pipe 3", "fitting 4", "rise 5", …; "6 × …" for counted fittings) into `buf` (at most `len - 1` bytes and a NUL; `buf` may be NULL
  * when `len` is 0) and stores its full length in `*needed`.
  *
  * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` when `index` is not an element;

@@ -750,6 +750,27 @@ class line {
     check(hg_line_set_k_spread(l_, index, spread));
     return *this;
   }
+  /// The label of element `index` shown in its result row (empty: back to the default).
+  line& set_label(std::size_t index, const std::string& label) {
+    check(hg_line_set_label(l_, index, label.empty() ? nullptr : label.c_str()));
+    return *this;
+  }
+  /// Makes fitting `index` stand for `count` identical fittings (one row, count·K).
+  line& set_count(std::size_t index, uint32_t count) {
+    check(hg_line_set_count(l_, index, count));
+    return *this;
+  }
+  /// Appends the elements of `other` (labels and counts kept; the options must match).
+  line& append(const line& other) {
+    check(hg_line_append_line(l_, other.l_));
+    return *this;
+  }
+  /// A new line of elements [start, end) with their labels and counts.
+  line slice(std::size_t start, std::size_t end) const {
+    hg_line* out = nullptr;
+    check(hg_line_slice(l_, start, end, &out));
+    return line(out);
+  }
   /// The roughness range (m) of pipe `index` for the bands.
   line& set_roughness_range(std::size_t index, double low, double high) {
     check(hg_line_set_roughness_range(l_, index, low, high));

@@ -75,15 +75,12 @@ pub unsafe extern "C" fn hg_line_set_material_independent(
                 )
                 .into());
             }
-            let mut u = l.options.uncertainty.clone();
+            let mut u = l.builder.options().uncertainty.clone();
             u.independent_materials.retain(|m| m != name);
             if independent == 1 {
                 u.independent_materials.push(name.to_string());
             }
-            u.validate()?;
-            l.options.uncertainty = u;
-            l.changed();
-            Ok(())
+            Ok(l.builder.set_uncertainty(u)?)
         })
     }
 }

@@ -29,12 +29,7 @@ pub unsafe extern "C" fn hg_line_set_surroundings(
             } else {
                 Some(ffi::handle("surroundings", surroundings)?.fluid.clone())
             };
-            let mut o = l.options.clone();
-            o.surroundings = air;
-            o.validate()?;
-            l.options = o;
-            l.changed();
-            Ok(())
+            Ok(l.builder.set_surroundings(air)?)
         })
     }
 }
@@ -57,8 +52,7 @@ pub unsafe extern "C" fn hg_line_set_air_column_for_liquids(line: *mut hg_line, 
                     hydrograde::Error::out_of_range("on", f64::from(on), "must be 0 or 1").into(),
                 );
             }
-            l.options.air_column_for_liquids = on == 1;
-            l.changed();
+            l.builder.set_air_column_for_liquids(on == 1);
             Ok(())
         })
     }

@@ -4,6 +4,7 @@ use crate::arrays::{self, si};
 use crate::errors::CoreResult;
 use crate::state;
 use hydrograde::fitting::{Fitting, catalogue_entries};
+use hydrograde::line::Tag;
 use pyo3::prelude::*;
 use pyo3::types::{PyBytes, PyDict, PyList, PyType};
 
@@ -21,6 +22,16 @@ use pyo3::types::{PyBytes, PyDict, PyList, PyType};
 pub struct PyFitting {
     /// The core value.
     pub inner: Fitting,
+    /// The label and count it carries into a line.
+    pub tag: Tag,
+}
+
+/// A fitting with the label and count given to its constructor.
+fn tagged(f: PyResult<PyFitting>, label: Option<&str>, count: i64) -> PyResult<PyFitting> {
+    Ok(PyFitting {
+        tag: Tag::new(label, count).py()?,
+        ..f?
+    })
 }
 
 fn wrap(f: hydrograde::Result<Fitting>, diameter: Option<f64>) -> PyResult<PyFitting> {
@@ -28,7 +39,10 @@ fn wrap(f: hydrograde::Result<Fitting>, diameter: Option<f64>) -> PyResult<PyFit
     if let Some(d) = diameter {
         f = f.with_diameter(d).py()?;
     }
-    Ok(PyFitting { inner: f })
+    Ok(PyFitting {
+        inner: f,
+        tag: Tag::default(),
+    })
 }
 
 /// The method's own parameters as a dict (from the core's serde form).
@@ -49,151 +63,191 @@ fn parameters<'py>(py: Python<'py>, f: &Fitting) -> PyResult<Bound<'py, PyDict>>
 impl PyFitting {
     /// A fixed resistance coefficient ``value`` (dimensionless, ≥ 0).
     #[classmethod]
-    #[pyo3(signature = (value, diameter = None))]
+    #[pyo3(signature = (value, diameter = None, *, label = None, count = 1))]
     fn k(
         _cls: &Bound<'_, PyType>,
         #[pyo3(from_py_with = si::value)] value: f64,
         #[pyo3(from_py_with = si::opt_diameter)] diameter: Option<f64>,
+        label: Option<&str>,
+        count: i64,
     ) -> PyResult<Self> {
-        wrap(Fitting::k(value), diameter)
+        tagged(wrap(Fitting::k(value), diameter), label, count)
     }
     /// A catalogue fitting by ``name`` (see :meth:`catalogue`).
     #[classmethod]
-    #[pyo3(signature = (name, diameter = None))]
+    #[pyo3(signature = (name, diameter = None, *, label = None, count = 1))]
     fn named(
         _cls: &Bound<'_, PyType>,
         name: &str,
         #[pyo3(from_py_with = si::opt_diameter)] diameter: Option<f64>,
+        label: Option<&str>,
+        count: i64,
     ) -> PyResult<Self> {
-        wrap(Fitting::named(name), diameter)
+        tagged(wrap(Fitting::named(name), diameter), label, count)
     }
     /// An equivalent length ``l_over_d`` (L/D, dimensionless): K = f_T·L/D with the fully
     /// rough friction factor f_T of the adjoining pipe.
     #[classmethod]
-    #[pyo3(signature = (l_over_d, diameter = None))]
+    #[pyo3(signature = (l_over_d, diameter = None, *, label = None, count = 1))]
     fn equivalent_length(
         _cls: &Bound<'_, PyType>,
         #[pyo3(from_py_with = si::l_over_d)] l_over_d: f64,
         #[pyo3(from_py_with = si::opt_diameter)] diameter: Option<f64>,
+        label: Option<&str>,
+        count: i64,
     ) -> PyResult<Self> {
-        wrap(Fitting::equivalent_length(l_over_d), diameter)
+        tagged(
+            wrap(Fitting::equivalent_length(l_over_d), diameter),
+            label,
+            count,
+        )
     }
     /// The 2-K method (Hooper 1981): K = k1/Re + k_inf·(1 + 1/D[in]).
     #[classmethod]
-    #[pyo3(signature = (k1, k_inf, diameter = None))]
+    #[pyo3(signature = (k1, k_inf, diameter = None, *, label = None, count = 1))]
     fn two_k(
         _cls: &Bound<'_, PyType>,
         #[pyo3(from_py_with = si::k1)] k1: f64,
         #[pyo3(from_py_with = si::k_inf)] k_inf: f64,
         #[pyo3(from_py_with = si::opt_diameter)] diameter: Option<f64>,
+        label: Option<&str>,
+        count: i64,
     ) -> PyResult<Self> {
-        wrap(Fitting::two_k(k1, k_inf), diameter)
+        tagged(wrap(Fitting::two_k(k1, k_inf), diameter), label, count)
     }
     /// The 3-K method (Darby 1999, 2001): K = k1/Re + k_inf·(1 + k_d/D[in]^0.3).
     #[classmethod]
-    #[pyo3(signature = (k1, k_inf, k_d, diameter = None))]
+    #[pyo3(signature = (k1, k_inf, k_d, diameter = None, *, label = None, count = 1))]
     fn three_k(
         _cls: &Bound<'_, PyType>,
         #[pyo3(from_py_with = si::k1)] k1: f64,
         #[pyo3(from_py_with = si::k_inf)] k_inf: f64,
         #[pyo3(from_py_with = si::k_d)] k_d: f64,
         #[pyo3(from_py_with = si::opt_diameter)] diameter: Option<f64>,
+        label: Option<&str>,
+        count: i64,
     ) -> PyResult<Self> {
-        wrap(Fitting::three_k(k1, k_inf, k_d), diameter)
+        tagged(
+            wrap(Fitting::three_k(k1, k_inf, k_d), diameter),
+            label,
+            count,
+        )
     }
     /// A sudden expansion from bore ``d_in`` to ``d_out`` (m): Borda–Carnot, K on the
     /// inlet velocity.
     #[classmethod]
+    #[pyo3(signature = (d_in, d_out, *, label = None, count = 1))]
     fn expansion(
         _cls: &Bound<'_, PyType>,
         #[pyo3(from_py_with = si::d_in)] d_in: f64,
         #[pyo3(from_py_with = si::d_out)] d_out: f64,
+        label: Option<&str>,
+        count: i64,
     ) -> PyResult<Self> {
-        wrap(Fitting::expansion(d_in, d_out), None)
+        tagged(wrap(Fitting::expansion(d_in, d_out), None), label, count)
     }
     /// A sudden contraction from bore ``d_in`` to ``d_out`` (m), K on the outlet velocity.
     #[classmethod]
+    #[pyo3(signature = (d_in, d_out, *, label = None, count = 1))]
     fn contraction(
         _cls: &Bound<'_, PyType>,
         #[pyo3(from_py_with = si::d_in)] d_in: f64,
         #[pyo3(from_py_with = si::d_out)] d_out: f64,
+        label: Option<&str>,
+        count: i64,
     ) -> PyResult<Self> {
-        wrap(Fitting::contraction(d_in, d_out), None)
+        tagged(wrap(Fitting::contraction(d_in, d_out), None), label, count)
     }
     /// A sharp-edged entrance from a large vessel.
     #[classmethod]
-    fn entrance_sharp(_cls: &Bound<'_, PyType>) -> Self {
-        PyFitting {
-            inner: Fitting::entrance_sharp(),
-        }
+    #[pyo3(signature = (*, label = None, count = 1))]
+    fn entrance_sharp(_cls: &Bound<'_, PyType>, label: Option<&str>, count: i64) -> PyResult<Self> {
+        tagged(wrap(Ok(Fitting::entrance_sharp()), None), label, count)
     }
     /// A rounded entrance of rounding radius ratio ``r_over_d``.
     #[classmethod]
+    #[pyo3(signature = (r_over_d, *, label = None, count = 1))]
     fn entrance_rounded(
         _cls: &Bound<'_, PyType>,
         #[pyo3(from_py_with = si::r_over_d)] r_over_d: f64,
+        label: Option<&str>,
+        count: i64,
     ) -> PyResult<Self> {
-        wrap(Fitting::entrance_rounded(r_over_d), None)
+        tagged(
+            wrap(Fitting::entrance_rounded(r_over_d), None),
+            label,
+            count,
+        )
     }
     /// An inward-projecting (re-entrant) entrance.
     #[classmethod]
-    fn entrance_projecting(_cls: &Bound<'_, PyType>) -> Self {
-        PyFitting {
-            inner: Fitting::entrance_projecting(),
-        }
+    #[pyo3(signature = (*, label = None, count = 1))]
+    fn entrance_projecting(
+        _cls: &Bound<'_, PyType>,
+        label: Option<&str>,
+        count: i64,
+    ) -> PyResult<Self> {
+        tagged(wrap(Ok(Fitting::entrance_projecting()), None), label, count)
     }
     /// The exit into a large vessel (the velocity head is lost).
     #[classmethod]
-    fn exit(_cls: &Bound<'_, PyType>) -> Self {
-        PyFitting {
-            inner: Fitting::exit(),
-        }
+    #[pyo3(signature = (*, label = None, count = 1))]
+    fn exit(_cls: &Bound<'_, PyType>, label: Option<&str>, count: i64) -> PyResult<Self> {
+        tagged(wrap(Ok(Fitting::exit()), None), label, count)
     }
     /// A bend of ``angle_deg`` (degrees) and bend radius ratio ``r_over_d``.
     #[classmethod]
-    #[pyo3(signature = (angle_deg, r_over_d, diameter = None))]
+    #[pyo3(signature = (angle_deg, r_over_d, diameter = None, *, label = None, count = 1))]
     fn bend(
         _cls: &Bound<'_, PyType>,
         #[pyo3(from_py_with = si::angle_deg)] angle_deg: f64,
         #[pyo3(from_py_with = si::r_over_d)] r_over_d: f64,
         #[pyo3(from_py_with = si::opt_diameter)] diameter: Option<f64>,
+        label: Option<&str>,
+        count: i64,
     ) -> PyResult<Self> {
-        wrap(Fitting::bend(angle_deg, r_over_d), diameter)
+        tagged(
+            wrap(Fitting::bend(angle_deg, r_over_d), diameter),
+            label,
+            count,
+        )
     }
     /// A valve of flow coefficient Cv ``value`` (US gpm of water at 1 psi drop); K is
     /// referred to ``diameter`` (or the adjoining pipe's bore).
     #[classmethod]
-    #[pyo3(signature = (value, diameter = None))]
+    #[pyo3(signature = (value, diameter = None, *, label = None, count = 1))]
     fn cv(
         _cls: &Bound<'_, PyType>,
         #[pyo3(from_py_with = si::value)] value: f64,
         #[pyo3(from_py_with = si::opt_diameter)] diameter: Option<f64>,
+        label: Option<&str>,
+        count: i64,
     ) -> PyResult<Self> {
-        wrap(Fitting::cv(value), diameter)
+        tagged(wrap(Fitting::cv(value), diameter), label, count)
     }
     /// A valve of flow coefficient Kv ``value`` (m³/h of water at 1 bar drop).
     #[classmethod]
-    #[pyo3(signature = (value, diameter = None))]
+    #[pyo3(signature = (value, diameter = None, *, label = None, count = 1))]
     fn kv(
         _cls: &Bound<'_, PyType>,
         #[pyo3(from_py_with = si::value)] value: f64,
         #[pyo3(from_py_with = si::opt_diameter)] diameter: Option<f64>,
+        label: Option<&str>,
+        count: i64,
     ) -> PyResult<Self> {
-        wrap(Fitting::kv(value), diameter)
+        tagged(wrap(Fitting::kv(value), diameter), label, count)
     }
     /// A tee, flow through the run.
     #[classmethod]
-    fn tee_run(_cls: &Bound<'_, PyType>) -> Self {
-        PyFitting {
-            inner: Fitting::tee_run(),
-        }
+    #[pyo3(signature = (*, label = None, count = 1))]
+    fn tee_run(_cls: &Bound<'_, PyType>, label: Option<&str>, count: i64) -> PyResult<Self> {
+        tagged(wrap(Ok(Fitting::tee_run()), None), label, count)
     }
     /// A tee, flow through the branch.
     #[classmethod]
-    fn tee_branch(_cls: &Bound<'_, PyType>) -> Self {
-        PyFitting {
-            inner: Fitting::tee_branch(),
-        }
+    #[pyo3(signature = (*, label = None, count = 1))]
+    fn tee_branch(_cls: &Bound<'_, PyType>, label: Option<&str>, count: i64) -> PyResult<Self> {
+        tagged(wrap(Ok(Fitting::tee_branch()), None), label, count)
     }
     /// The catalogue: one dict per named fitting with ``name``, ``description``,
     /// ``method``, ``k_spread`` and ``source``.
@@ -214,12 +268,16 @@ impl PyFitting {
     }
     /// The same fitting with K referring to bore ``diameter`` (m).
     fn with_diameter(&self, #[pyo3(from_py_with = si::diameter)] diameter: f64) -> PyResult<Self> {
-        wrap(Ok(self.inner.clone()), Some(diameter))
+        Ok(PyFitting {
+            tag: self.tag.clone(),
+            ..wrap(Ok(self.inner.clone()), Some(diameter))?
+        })
     }
     /// The same fitting with relative spread ``k_spread`` of K (0…1; 0.3 = ±30 %).
     fn with_k_spread(&self, #[pyo3(from_py_with = si::k_spread)] k_spread: f64) -> PyResult<Self> {
         Ok(PyFitting {
             inner: self.inner.clone().with_k_spread(k_spread).py()?,
+            tag: self.tag.clone(),
         })
     }
     /// The catalogue name, or the method's name.
@@ -315,17 +373,31 @@ impl PyFitting {
             args.push(format!("diameter={d:?}"));
         }
         args.push(format!("k_spread={:?}", self.inner.k_spread()));
-        Ok(format!("Fitting('{}', {})", self.name(), args.join(", ")))
+        Ok(format!(
+            "Fitting('{}', {}{})",
+            self.name(),
+            args.join(", "),
+            state::tag_repr(&self.tag)
+        ))
     }
     fn __reduce__<'py>(
         slf: &Bound<'py, Self>,
     ) -> PyResult<(Bound<'py, PyAny>, (Bound<'py, PyBytes>,))> {
-        state::reduce(slf.as_any(), &slf.get().inner)
+        state::reduce_tagged(slf.as_any(), &slf.get().inner, &slf.get().tag)
     }
     #[classmethod]
     fn _from_state(_cls: &Bound<'_, PyType>, state: &[u8]) -> PyResult<Self> {
-        Ok(PyFitting {
-            inner: state::loads(state)?,
-        })
+        let (inner, tag) = state::loads_tagged(state)?;
+        Ok(PyFitting { inner, tag })
+    }
+    /// The label given (``None``: the line's default, kind and index).
+    #[getter]
+    fn label(&self) -> Option<&str> {
+        self.tag.label()
+    }
+    /// How many identical fittings this stands for in a line (one row, N·K).
+    #[getter]
+    fn count(&self) -> u32 {
+        self.tag.count()
     }
 }

@@ -8,11 +8,11 @@ use crate::line_result::{PyFlowSolution, PyLineResult, PyOperatingPoint, PySizin
 use crate::pipe::{element, element_object};
 use crate::state;
 use hydrograde::error::Error;
-use hydrograde::line::{Limit, Line, LineOptions, PumpCurve, split_flow as core_split};
+use hydrograde::line::{Limit, Line, LineBuilder, PumpCurve, split_flow as core_split};
 use hydrograde::section::TurbulentDiameter;
 use hydrograde::sizes::PipeTable;
 use pyo3::prelude::*;
-use pyo3::types::{PyBytes, PyDict, PyList, PyType};
+use pyo3::types::{PyBytes, PyDict, PyList, PySlice, PyType};
 
 /// A 1-D numpy array of floats.
 type Array1<'py> = Bound<'py, numpy::PyArray1<f64>>;
@@ -54,41 +54,105 @@ impl PyLine {
         surroundings: Option<PyRef<'_, PyFluid>>,
         air_column_for_liquids: bool,
     ) -> PyResult<Self> {
-        let mut items = Vec::new();
+        let mut b = LineBuilder::new();
         for (i, obj) in elements.try_iter()?.enumerate() {
-            items.push(element(&obj?, i)?);
+            let (e, tag) = element(&obj?, i)?;
+            b.push_tagged(e, &tag).map_err(|e| e.at_index(i)).py()?;
         }
-        let mut o = LineOptions {
-            friction: crate::friction::options(
-                correlation,
-                None,
-                laminar_limit,
-                turbulent_limit,
-                transition,
-            )?,
-            inlet_pressure,
-            surroundings: surroundings.map(|f| f.inner.clone()),
-            air_column_for_liquids,
-            ..LineOptions::default()
-        };
+        b.set_friction(crate::friction::options(
+            correlation,
+            None,
+            laminar_limit,
+            turbulent_limit,
+            transition,
+        )?)
+        .py()?;
+        b.set_inlet_pressure(inlet_pressure).py()?;
+        b.set_surroundings(surroundings.map(|f| f.inner.clone()))
+            .py()?;
+        b.set_air_column_for_liquids(air_column_for_liquids);
         if let Some(t) = turbulent_diameter {
-            o.turbulent_diameter = t.parse::<TurbulentDiameter>().py()?;
+            b.set_turbulent_diameter(t.parse::<TurbulentDiameter>().py()?);
         }
         if let Some(u) = uncertainty {
-            o.uncertainty = PyUncertainty::from_arg(u)?;
+            b.set_uncertainty(PyUncertainty::from_arg(u)?).py()?;
         }
         Ok(PyLine {
-            inner: Line::with_options(items, o).py()?,
+            inner: b.build().py()?,
         })
     }
     /// The elements in route order.
     #[getter]
     fn elements<'py>(&self, py: Python<'py>) -> PyResult<Bound<'py, PyList>> {
         let list = PyList::empty(py);
-        for e in self.inner.elements() {
-            list.append(element_object(py, e)?)?;
+        for i in 0..self.inner.len() {
+            list.append(self.element_at(py, i)?)?;
         }
         Ok(list)
+    }
+    /// The label of each element as result rows show it: the one given, or the default
+    /// (kind and index, ``"pipe 3"``), with ``"6 × "`` before a counted fitting's.
+    #[getter]
+    fn labels(&self) -> Vec<String> {
+        (0..self.inner.len())
+            .filter_map(|i| self.inner.label(i))
+            .collect()
+    }
+    /// ``line[i]`` is element ``i`` (with its label and count); ``line[a:b]`` is the line
+    /// of elements ``a`` to ``b - 1`` (same options; default labels renumber).
+    fn __getitem__<'py>(
+        &self,
+        py: Python<'py>,
+        key: &Bound<'py, PyAny>,
+    ) -> PyResult<Bound<'py, PyAny>> {
+        let n = self.inner.len();
+        if let Ok(s) = key.cast::<PySlice>() {
+            let ix = s.indices(n as isize)?;
+            if ix.step != 1 {
+                return Err(Error::out_of_range(
+                    "step",
+                    ix.step as f64,
+                    "a line slice takes consecutive elements (step 1)",
+                ))
+                .py();
+            }
+            // Python's empty slices (line[3:1]) leave no element like line[3:3].
+            let start = ix.start as usize;
+            let end = if ix.slicelength == 0 {
+                start
+            } else {
+                ix.stop as usize
+            };
+            let part = self.inner.slice(start..end).py()?;
+            return Ok(Bound::new(py, PyLine { inner: part })?.into_any());
+        }
+        let i: isize = key.extract()?;
+        let at = if i < 0 { i + n as isize } else { i };
+        if !(0..n as isize).contains(&at) {
+            return Err(pyo3::exceptions::PyIndexError::new_err(format!(
+                "index = {i}: the line has {n} elements"
+            )));
+        }
+        Ok(self.element_at(py, at as usize)?.into_bound(py))
+    }
+    /// ``line + other``: this line followed by ``other`` (labels and counts kept), under
+    /// this line's options; ``other``'s must be the same except its inlet pressure.
+    fn __add__(&self, other: &Bound<'_, PyAny>) -> PyResult<Py<PyAny>> {
+        let py = other.py();
+        match other.cast::<PyLine>() {
+            Ok(o) => Ok(Py::new(
+                py,
+                PyLine {
+                    inner: self.inner.join(&o.get().inner).py()?,
+                },
+            )?
+            .into_any()),
+            Err(_) => Ok(py.NotImplemented()),
+        }
+    }
+    /// The elements in route order.
+    fn __iter__<'py>(&self, py: Python<'py>) -> PyResult<Bound<'py, PyAny>> {
+        Ok(self.elements(py)?.try_iter()?.into_any())
     }
     /// Sum of the rises, m.
     #[getter]
@@ -310,8 +374,8 @@ impl PyLine {
             uncertainty_dict(py, &self.inner.options().uncertainty)?,
         )?;
         let rows = PyList::empty(py);
-        for e in self.inner.elements() {
-            let obj = element_object(py, e)?;
+        for i in 0..self.inner.len() {
+            let obj = self.element_at(py, i)?;
             let row = PyDict::new(py);
             row.set_item("element", obj.bind(py).repr()?)?;
             rows.append(row)?;
@@ -351,11 +415,8 @@ impl PyLine {
             .call_method1("grade_line", (slf, fluid, flow, ax))
     }
     fn __repr__(&self, py: Python<'_>) -> PyResult<String> {
-        let parts: Vec<String> = self
-            .inner
-            .elements()
-            .iter()
-            .map(|e| Ok(element_object(py, e)?.bind(py).repr()?.to_string()))
+        let parts: Vec<String> = (0..self.inner.len())
+            .map(|i| Ok(self.element_at(py, i)?.bind(py).repr()?.to_string()))
             .collect::<PyResult<_>>()?;
         Ok(format!("Line([{}])", parts.join(", ")))
     }
@@ -372,6 +433,14 @@ impl PyLine {
         Ok(PyLine {
             inner: state::loads(state)?,
         })
+    }
+}
+
+impl PyLine {
+    /// The Python object of element `i` (an index of the line) with its label and count.
+    fn element_at(&self, py: Python<'_>, i: usize) -> PyResult<Py<PyAny>> {
+        let e = &self.inner.elements()[i];
+        element_object(py, e, self.inner.tag(i).unwrap_or_default())
     }
 }
 

@@ -6,7 +6,7 @@ use crate::errors::CoreResult;
 use crate::state;
 use hydrograde::band::Band;
 use hydrograde::line::{
-    ElementResult, FlowSolution, LineResult, OperatingPoint, SizeChoice, Sizing, Split,
+    ElementResult, FlowSolution, LineResult, OperatingPoint, Share, SizeChoice, Sizing, Split,
 };
 use pyo3::prelude::*;
 use pyo3::types::{PyBytes, PyDict, PyList, PyType};
@@ -136,6 +136,67 @@ impl PyLineResult {
             .iter()
             .map(|e| PyElementResult { inner: e.clone() })
             .collect()
+    }
+    /// Which items dominate: a table of shares, one row per element (``by="element"``:
+    /// ``row``, ``name`` (its label), ``kind``, ``head_loss`` m, ``loss_share``,
+    /// ``band_share``), per kind of element (``by="kind"``) or per uncertainty source
+    /// (``by="source"``: ``name``, ``kind``, ``band_share``). ``loss_share`` is the share
+    /// of the line's head loss; ``band_share`` the share of the variance of its band (for
+    /// an element, its covariance with the total over the total's variance: the shares
+    /// sum to 1 and a negative one offsets the rest). ``None`` where there is no loss or
+    /// no band to share. A pandas DataFrame when pandas is installed, else a list of dicts.
+    #[pyo3(signature = (by = "element"))]
+    fn shares<'py>(&self, py: Python<'py>, by: &str) -> PyResult<Bound<'py, PyAny>> {
+        let s = self.inner.shares();
+        let (rows, columns): (&[Share], &[&str]) = match by {
+            "element" => (
+                &s.by_element,
+                &[
+                    "row",
+                    "name",
+                    "kind",
+                    "head_loss",
+                    "loss_share",
+                    "band_share",
+                ],
+            ),
+            "kind" => (
+                &s.by_kind,
+                &["kind", "head_loss", "loss_share", "band_share"],
+            ),
+            "source" => (&s.by_source, &["name", "kind", "band_share"]),
+            _ => {
+                return Err(hydrograde::Error::unknown_name(
+                    "by",
+                    by,
+                    &["element", "kind", "source"],
+                ))
+                .py();
+            }
+        };
+        let list = PyList::empty(py);
+        for r in rows {
+            let d = PyDict::new(py);
+            for &c in columns {
+                match c {
+                    "row" => d.set_item(c, r.row)?,
+                    "name" => d.set_item(c, &r.name)?,
+                    "kind" => d.set_item(c, &r.kind)?,
+                    "head_loss" => d.set_item(c, r.head_loss)?,
+                    "loss_share" => d.set_item(c, r.loss_share)?,
+                    _ => d.set_item(c, r.band_share)?,
+                }
+            }
+            list.append(d)?;
+        }
+        match py.import("pandas") {
+            Ok(pd) => {
+                let kw = PyDict::new(py);
+                kw.set_item("columns", columns.to_vec())?;
+                pd.getattr("DataFrame")?.call((list,), Some(&kw))
+            }
+            Err(_) => Ok(list.into_any()),
+        }
     }
     /// Band of head_loss, m.
     #[getter]
@@ -267,10 +328,24 @@ impl PyElementResult {
     fn kind(&self) -> &'static str {
         self.inner.kind.name()
     }
-    /// A short description of the element.
+    /// The element's label: the one given (``label=``), or its kind and index
+    /// (``"pipe 3"``, ``"fitting 4"``, a catalogue name and index), with ``"6 × "``
+    /// before a counted fitting's; an implied change of section is named by its bores.
     #[getter]
     fn label(&self) -> &str {
         &self.inner.label
+    }
+    /// How many identical fittings the row stands for (``count=`` of the fitting; 1
+    /// for every other row).
+    #[getter]
+    fn count(&self) -> u32 {
+        self.inner.count
+    }
+    /// The row's share of the variance of the line's head loss (see
+    /// :meth:`LineResult.shares`); None when the line's band has no width.
+    #[getter]
+    fn band_share(&self) -> Option<f64> {
+        self.inner.band_share
     }
     /// Mean velocity in the element's bore, m/s (signed; None for a rise or a rated
     /// pressure drop, which have no bore of their own).

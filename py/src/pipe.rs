@@ -6,7 +6,7 @@ use crate::fitting::PyFitting;
 use crate::fluid::PyFluid;
 use crate::section::PySection;
 use crate::state;
-use hydrograde::line::{Element, Equipment, Rating, Rise};
+use hydrograde::line::{Element, Equipment, Rating, Rise, Tag};
 use hydrograde::pipe::Pipe;
 use pyo3::exceptions::PyTypeError;
 use pyo3::prelude::*;
@@ -21,15 +21,19 @@ use pyo3::types::{PyBytes, PyDict, PyType};
 pub struct PyPipe {
     /// The core value.
     pub inner: Pipe,
+    /// The label it carries into a line.
+    pub tag: Tag,
 }
 
 #[pymethods]
 impl PyPipe {
     #[new]
+    #[pyo3(signature = (section, length, roughness, *, label = None))]
     fn new(
         section: &Bound<'_, PyAny>,
         #[pyo3(from_py_with = si::length)] length: f64,
         #[pyo3(from_py_with = si::roughness)] roughness: f64,
+        label: Option<&str>,
     ) -> PyResult<Self> {
         let pipe = if let Ok(s) = section.cast::<PySection>() {
             Pipe::new(s.get().inner, length, roughness)
@@ -37,16 +41,21 @@ impl PyPipe {
             let d = crate::friction::scalar("section", section)?;
             Pipe::circular(d, length, roughness)
         };
-        Ok(PyPipe { inner: pipe.py()? })
+        Ok(PyPipe {
+            inner: pipe.py()?,
+            tag: Tag::new(label, 1).py()?,
+        })
     }
     /// A run of catalogue wall ``material`` (see :func:`materials`): its typical
     /// roughness, with the material's low–high range carried into the bands.
     #[classmethod]
+    #[pyo3(signature = (section, length, material, *, label = None))]
     fn of_material(
         _cls: &Bound<'_, PyType>,
         section: &Bound<'_, PyAny>,
         #[pyo3(from_py_with = si::length)] length: f64,
         material: &str,
+        label: Option<&str>,
     ) -> PyResult<Self> {
         let s = if let Ok(s) = section.cast::<PySection>() {
             s.get().inner
@@ -55,6 +64,7 @@ impl PyPipe {
         };
         Ok(PyPipe {
             inner: Pipe::of_material(s, length, material).py()?,
+            tag: Tag::new(label, 1).py()?,
         })
     }
     /// Likely (low, high) roughness, m, when stated (from a catalogue material).
@@ -110,6 +120,7 @@ impl PyPipe {
     fn with_diameter(&self, #[pyo3(from_py_with = si::diameter)] diameter: f64) -> PyResult<Self> {
         Ok(PyPipe {
             inner: self.inner.with_diameter(diameter).py()?,
+            tag: self.tag.clone(),
         })
     }
     /// The fields as a dict.
@@ -132,21 +143,26 @@ impl PyPipe {
             Bound::new(py, self.section())?.repr()?.to_string()
         };
         Ok(format!(
-            "Pipe({section}, length={:?}, roughness={:?})",
+            "Pipe({section}, length={:?}, roughness={:?}{})",
             self.inner.length(),
-            self.inner.roughness()
+            self.inner.roughness(),
+            state::tag_repr(&self.tag)
         ))
     }
     fn __reduce__<'py>(
         slf: &Bound<'py, Self>,
     ) -> PyResult<(Bound<'py, PyAny>, (Bound<'py, PyBytes>,))> {
-        state::reduce(slf.as_any(), &slf.get().inner)
+        state::reduce_tagged(slf.as_any(), &slf.get().inner, &slf.get().tag)
     }
     #[classmethod]
     fn _from_state(_cls: &Bound<'_, PyType>, state: &[u8]) -> PyResult<Self> {
-        Ok(PyPipe {
-            inner: state::loads(state)?,
-        })
+        let (inner, tag) = state::loads_tagged(state)?;
+        Ok(PyPipe { inner, tag })
+    }
+    /// The label given (``None``: the line's default, kind and index).
+    #[getter]
+    fn label(&self) -> Option<&str> {
+        self.tag.label()
     }
 }
 
@@ -156,14 +172,18 @@ impl PyPipe {
 pub struct PyRise {
     /// The core value.
     pub inner: Rise,
+    /// The label it carries into a line.
+    pub tag: Tag,
 }
 
 #[pymethods]
 impl PyRise {
     #[new]
-    fn new(#[pyo3(from_py_with = si::height)] height: f64) -> PyResult<Self> {
+    #[pyo3(signature = (height, *, label = None))]
+    fn new(#[pyo3(from_py_with = si::height)] height: f64, label: Option<&str>) -> PyResult<Self> {
         Ok(PyRise {
             inner: Rise::new(height).py()?,
+            tag: Tag::new(label, 1).py()?,
         })
     }
     /// Height, m (positive up in the flow direction).
@@ -172,18 +192,22 @@ impl PyRise {
         self.inner.height()
     }
     fn __repr__(&self) -> String {
-        format!("Rise({:?})", self.height())
+        format!("Rise({:?}{})", self.height(), state::tag_repr(&self.tag))
     }
     fn __reduce__<'py>(
         slf: &Bound<'py, Self>,
     ) -> PyResult<(Bound<'py, PyAny>, (Bound<'py, PyBytes>,))> {
-        state::reduce(slf.as_any(), &slf.get().inner)
+        state::reduce_tagged(slf.as_any(), &slf.get().inner, &slf.get().tag)
     }
     #[classmethod]
     fn _from_state(_cls: &Bound<'_, PyType>, state: &[u8]) -> PyResult<Self> {
-        Ok(PyRise {
-            inner: state::loads(state)?,
-        })
+        let (inner, tag) = state::loads_tagged(state)?;
+        Ok(PyRise { inner, tag })
+    }
+    /// The label given (``None``: the line's default, kind and index).
+    #[getter]
+    fn label(&self) -> Option<&str> {
+        self.tag.label()
     }
 }
 
@@ -195,105 +219,144 @@ impl PyRise {
 pub struct PyEquipment {
     /// The core value.
     pub inner: Equipment,
+    /// The label it carries into a line.
+    pub tag: Tag,
 }
 
 #[pymethods]
 impl PyEquipment {
     /// Equipment of rated pressure ``drop`` (Pa) at flow ``at_flow`` (m³/s).
     #[classmethod]
+    #[pyo3(signature = (name, drop, at_flow, *, label = None))]
     fn pressure_drop(
         _cls: &Bound<'_, PyType>,
         name: &str,
         #[pyo3(from_py_with = si::drop)] drop: f64,
         #[pyo3(from_py_with = si::at_flow)] at_flow: f64,
+        label: Option<&str>,
     ) -> PyResult<Self> {
         Ok(PyEquipment {
             inner: Equipment::pressure_drop(name, drop, at_flow).py()?,
+            tag: Tag::new(label, 1).py()?,
         })
     }
     /// Equipment of fixed resistance coefficient ``k`` on bore ``diameter`` (m; None =
     /// the adjoining pipe's).
     #[classmethod]
-    #[pyo3(signature = (name, k, diameter = None))]
+    #[pyo3(signature = (name, k, diameter = None, *, label = None))]
     fn fixed_k(
         _cls: &Bound<'_, PyType>,
         name: &str,
         #[pyo3(from_py_with = si::k)] k: f64,
         #[pyo3(from_py_with = si::opt_diameter)] diameter: Option<f64>,
+        label: Option<&str>,
     ) -> PyResult<Self> {
         Ok(PyEquipment {
             inner: Equipment::fixed_k(name, k, diameter).py()?,
+            tag: Tag::new(label, 1).py()?,
         })
     }
     /// The same equipment with relative half-width ``spread`` of its loss (0.1 = ±10 %).
     fn with_spread(&self, #[pyo3(from_py_with = si::spread)] spread: f64) -> PyResult<Self> {
         Ok(PyEquipment {
             inner: self.inner.clone().with_spread(spread).py()?,
+            tag: self.tag.clone(),
         })
     }
     /// The label given.
     #[getter]
     fn name(&self) -> &str {
-        &self.inner.name
+        self.inner.name()
     }
     /// Relative half-width of the likely range of the loss.
     #[getter]
     fn spread(&self) -> f64 {
-        self.inner.spread
+        self.inner.spread()
     }
     fn __repr__(&self) -> String {
-        match &self.inner.rating {
+        match self.inner.rating() {
             Rating::PressureDrop { drop, at_flow } => format!(
-                "Equipment.pressure_drop('{}', drop={drop:?}, at_flow={at_flow:?}, spread={:?})",
-                self.inner.name, self.inner.spread
+                "Equipment.pressure_drop('{}', drop={drop:?}, at_flow={at_flow:?}, spread={:?}{})",
+                self.inner.name(),
+                self.inner.spread(),
+                state::tag_repr(&self.tag)
             ),
             Rating::FixedK { k, diameter } => format!(
-                "Equipment.fixed_k('{}', k={k:?}, diameter={}, spread={:?})",
-                self.inner.name,
+                "Equipment.fixed_k('{}', k={k:?}, diameter={}, spread={:?}{})",
+                self.inner.name(),
                 diameter.map_or("None".to_string(), |d| format!("{d:?}")),
-                self.inner.spread
+                self.inner.spread(),
+                state::tag_repr(&self.tag)
             ),
         }
     }
     fn __reduce__<'py>(
         slf: &Bound<'py, Self>,
     ) -> PyResult<(Bound<'py, PyAny>, (Bound<'py, PyBytes>,))> {
-        state::reduce(slf.as_any(), &slf.get().inner)
+        state::reduce_tagged(slf.as_any(), &slf.get().inner, &slf.get().tag)
     }
     #[classmethod]
     fn _from_state(_cls: &Bound<'_, PyType>, state: &[u8]) -> PyResult<Self> {
-        Ok(PyEquipment {
-            inner: state::loads(state)?,
-        })
+        let (inner, tag) = state::loads_tagged(state)?;
+        Ok(PyEquipment { inner, tag })
+    }
+    /// The label given (``None``: the line's default, kind and index).
+    #[getter]
+    fn label(&self) -> Option<&str> {
+        self.tag.label()
     }
 }
 
 /// A core element from a Python Pipe, Fitting, Rise or Equipment.
-pub fn element(obj: &Bound<'_, PyAny>, index: usize) -> PyResult<Element> {
+pub fn element(obj: &Bound<'_, PyAny>, index: usize) -> PyResult<(Element, Tag)> {
     if let Ok(p) = obj.cast::<PyPipe>() {
-        return Ok(Element::Pipe(p.get().inner.clone()));
+        let p = p.get();
+        return Ok((Element::Pipe(p.inner.clone()), p.tag.clone()));
     }
     if let Ok(f) = obj.cast::<PyFitting>() {
-        return Ok(Element::Fitting(f.get().inner.clone()));
+        let f = f.get();
+        return Ok((Element::Fitting(f.inner.clone()), f.tag.clone()));
     }
     if let Ok(r) = obj.cast::<PyRise>() {
-        return Ok(Element::Rise(r.get().inner));
+        let r = r.get();
+        return Ok((Element::Rise(r.inner), r.tag.clone()));
     }
     if let Ok(e) = obj.cast::<PyEquipment>() {
-        return Ok(Element::Equipment(e.get().inner.clone()));
+        let e = e.get();
+        return Ok((Element::Equipment(e.inner.clone()), e.tag.clone()));
     }
     Err(PyTypeError::new_err(format!(
         "elements[{index}]: expected Pipe, Fitting, Rise or Equipment, got {}",
         obj.get_type().name()?
     )))
 }
-
-/// The Python object of a core element.
-pub fn element_object(py: Python<'_>, e: &Element) -> PyResult<Py<PyAny>> {
+/// The Python object of a line element with its label and count.
+pub fn element_object(py: Python<'_>, e: &Element, tag: Tag) -> PyResult<Py<PyAny>> {
     Ok(match e {
-        Element::Pipe(p) => Py::new(py, PyPipe { inner: p.clone() })?.into_any(),
-        Element::Fitting(f) => Py::new(py, PyFitting { inner: f.clone() })?.into_any(),
-        Element::Rise(r) => Py::new(py, PyRise { inner: *r })?.into_any(),
-        Element::Equipment(q) => Py::new(py, PyEquipment { inner: q.clone() })?.into_any(),
+        Element::Pipe(p) => Py::new(
+            py,
+            PyPipe {
+                inner: p.clone(),
+                tag,
+            },
+        )?
+        .into_any(),
+        Element::Fitting(f) => Py::new(
+            py,
+            PyFitting {
+                inner: f.clone(),
+                tag,
+            },
+        )?
+        .into_any(),
+        Element::Rise(r) => Py::new(py, PyRise { inner: *r, tag })?.into_any(),
+        Element::Equipment(q) => Py::new(
+            py,
+            PyEquipment {
+                inner: q.clone(),
+                tag,
+            },
+        )?
+        .into_any(),
     })
 }

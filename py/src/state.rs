@@ -6,6 +6,7 @@
 //! that) but it keeps every f64 bit for bit, NaN included (results hold NaN where a
 //! field does not apply, e.g. the velocity of a rise), which JSON cannot.
 
+use hydrograde::line::Tag;
 use pyo3::exceptions::PyValueError;
 use pyo3::prelude::*;
 use pyo3::sync::PyOnceLock;
@@ -73,4 +74,38 @@ pub fn dataframe<'py>(py: Python<'py>, dict: &Bound<'py, PyDict>) -> PyResult<Bo
 pub fn names_repr(names: &[&str]) -> String {
     let quoted: Vec<String> = names.iter().map(|n| format!("'{n}'")).collect();
     format!("[{}]", quoted.join(", "))
+}
+
+/// A line element's core value and its [`Tag`] (label and count) back from
+/// [`reduce_tagged`] bytes; bytes of the value alone (no tag) read with the default tag.
+pub fn loads_tagged<T: DeserializeOwned>(bytes: &[u8]) -> PyResult<(T, Tag)> {
+    match rmp_serde::from_slice::<(T, Tag)>(bytes) {
+        Ok(pair) => Ok(pair),
+        Err(_) => Ok((loads(bytes)?, Tag::default())),
+    }
+}
+
+/// `__reduce__` of a line element: its core value alone when untagged, else with its tag.
+pub fn reduce_tagged<'py, T: Serialize>(
+    obj: &Bound<'py, PyAny>,
+    value: &T,
+    tag: &Tag,
+) -> PyResult<(Bound<'py, PyAny>, (Bound<'py, PyBytes>,))> {
+    if tag.is_default() {
+        reduce(obj, value)
+    } else {
+        reduce(obj, &(value, tag))
+    }
+}
+
+/// The `label=…, count=…` arguments of a line element's repr (empty when untagged).
+pub fn tag_repr(tag: &Tag) -> String {
+    let mut s = String::new();
+    if let Some(l) = tag.label() {
+        s.push_str(&format!(", label={l:?}"));
+    }
+    if tag.count() != 1 {
+        s.push_str(&format!(", count={}", tag.count()));
+    }
+    s
 }

@@ -153,7 +153,27 @@ static void test_line() {
   CHECK(r.static_head == 3.0 && r.required_head > r.static_head && r.element_count == 6, "totals");
   CHECK(r.head_loss_low < r.head_loss && r.head_loss < r.head_loss_high, "band");
   CHECK(res.element(0).kind == HG_ELEMENT_PIPE && res.size() == 6, "element");
-  CHECK(res.label(1) == "elbow_90_standard" && res.label(5) == "strainer", "labels");
+  CHECK(res.label(1) == "elbow_90_standard 1" && res.label(5) == "strainer", "labels");
+  {
+    // Labels, counts, slices and joins through the wrapper (the core's builder).
+    hg::line b;
+    b.add_pipe(0.05, 10, 4.5e-5).add_fitting_k(0.3).set_count(1, 6).set_label(0, "suction");
+    hg::line_result br = b.evaluate(water, 2e-3);
+    CHECK(br.label(0) == "suction" && br.label(1) == "6 × fitting 1" && br.element(1).count == 6, "tagged rows");
+    hg::line head = b.slice(0, 1);
+    hg::line tail;
+    tail.add_fitting_k(0.3, 0.05).set_count(0, 6);  // a fitting alone needs its own bore
+    head.append(tail);
+    double h1 = head.evaluate(water, 2e-3).totals().required_head, h0 = br.totals().required_head;
+    CHECK(head.size() == 2 && std::fabs(h1 - h0) <= 1e-12 * h0, "slice and append give the same line");
+    bool threw = false;
+    try {
+      b.set_count(0, 2);
+    } catch (const hg::error& e) {
+      threw = std::string(e.what()).find("count") != std::string::npos;
+    }
+    CHECK(threw, "a count on a pipe throws naming count");
+  }
   CHECK(!res.element(2).has_velocity && res.element(1).has_k && !res.element(0).has_k, "not-applicable flags");
   hg::flow_solution s = l.flow_for_head(water, r.required_head);
   CHECK(std::fabs(s.flow - 2e-3) < 1e-12 && s.flow_low < s.flow && s.flow < s.flow_high, "flow for head");

@@ -647,12 +647,12 @@ static void test_handles_and_bad_input(void) {
   e.struct_size = 0;
   CHECK(element_row(l, f, q, 0, &e) == HG_ERR_INVALID, "element struct_size 0");
 
-  CHECK(element_label(l, f, q, 0, buf, sizeof buf, &need) == HG_OK && strcmp(buf, "gate_valve") == 0 &&
-            need == 10, "label '%s'", buf);
-  CHECK(element_label(l, f, q, 1, buf, sizeof buf, &need) == HG_OK && strcmp(buf, "pipe") == 0, "label pipe");
+  CHECK(element_label(l, f, q, 0, buf, sizeof buf, &need) == HG_OK && strcmp(buf, "gate_valve 0") == 0 &&
+            need == 12, "label '%s'", buf);
+  CHECK(element_label(l, f, q, 1, buf, sizeof buf, &need) == HG_OK && strcmp(buf, "pipe 1") == 0, "label pipe");
   CHECK(element_label(l, f, q, 0, buf, 4, &need) == HG_ERR_BUFFER_TOO_SMALL && strcmp(buf, "gat") == 0 &&
-            need == 10, "label cut");
-  CHECK(element_label(l, f, q, 0, NULL, 0, &need) == HG_ERR_BUFFER_TOO_SMALL && need == 10, "label length");
+            need == 12, "label cut");
+  CHECK(element_label(l, f, q, 0, NULL, 0, &need) == HG_ERR_BUFFER_TOO_SMALL && need == 12, "label length");
   CHECK(element_label(l, f, q, 0, NULL, 8, &need) == HG_ERR_NULL_POINTER, "label NULL buf");
   CHECK(element_label(l, f, q, 0, buf, sizeof buf, NULL) == HG_ERR_NULL_POINTER, "label NULL needed");
   CHECK(element_label(l, f, q, 5, buf, sizeof buf, &need) == HG_ERR_OUT_OF_RANGE, "label index");
@@ -775,8 +775,8 @@ static void test_result_handle(void) {
         "element source length only");
   CHECK(hg_line_result_element_band_source(NULL, 0, 0, name, sizeof name, &need, &share) == HG_ERR_NULL_POINTER,
         "element source NULL result");
-  CHECK(hg_line_result_label(r, 2, name, sizeof name, &need) == HG_OK && strcmp(name, "gate_valve") == 0, "label");
-  CHECK(hg_line_result_label(r, 1, name, sizeof name, &need) == HG_OK && strcmp(name, "rise") == 0, "rise label");
+  CHECK(hg_line_result_label(r, 2, name, sizeof name, &need) == HG_OK && strcmp(name, "gate_valve 2") == 0, "label");
+  CHECK(hg_line_result_label(r, 1, name, sizeof name, &need) == HG_OK && strcmp(name, "rise 1") == 0, "rise label");
   CHECK(hg_line_result_label(r, 3, name, sizeof name, &need) == HG_ERR_OUT_OF_RANGE, "label past the end");
   CHECK(hg_line_result_label(NULL, 0, name, sizeof name, &need) == HG_ERR_NULL_POINTER, "label NULL result");
 
@@ -948,6 +948,86 @@ static void test_line_model(void) {
   hg_line_free(l);
 }
 
+/* The builder: labels, counted fittings, slices and joins (hg_line wraps the core's
+ * LineBuilder). */
+static void test_builder(void) {
+  hg_line *l = NULL, *part = NULL, *tail = NULL;
+  hg_fluid *w = NULL;
+  CHECK(hg_line_new(&l) == HG_OK && hg_fluid_liquid(998.0, 1.0e-3, &w) == HG_OK, "handles");
+  CHECK(hg_line_add_pipe(l, 0.05, 10.0, 4.5e-5) == HG_OK && hg_line_add_fitting_k(l, 0.3, 0.0) == HG_OK &&
+            hg_line_add_rise(l, 6.0) == HG_OK, "route");
+  CHECK(hg_line_set_count(l, 1, 6) == HG_OK, "six elbows");
+  CHECK(hg_line_set_label(l, 2, "up to the roof") == HG_OK, "label");
+  double q = 2.0 * 3.14159265358979323846 * 0.05 * 0.05 / 4.0; /* 2 m/s in 50 mm */
+  hg_line_result *r = NULL;
+  CHECK(hg_line_evaluate(l, w, q, &r) == HG_OK, "evaluate");
+  hg_element_result e;
+  memset(&e, 0, sizeof e);
+  e.struct_size = sizeof e;
+  /* 6 * 0.3 * (2 m/s)^2 / (2 g): exact from the definition of K. */
+  double want = 6.0 * 0.3 * 4.0 / (2.0 * 9.80665);
+  CHECK(hg_line_result_element(r, 1, &e) == HG_OK && fabs(e.head_loss - want) < 1e-12 * want && e.count == 6,
+        "counted row %.17g vs %.17g, count %zu", e.head_loss, want, e.count);
+  CHECK(e.has_band_share == 1 && e.band_share > 0.0 && e.band_share < 1.0, "band share %g", e.band_share);
+  char buf[64];
+  size_t need = 0;
+  CHECK(hg_line_result_label(r, 1, buf, sizeof buf, &need) == HG_OK && strcmp(buf, "6 × fitting 1") == 0,
+        "counted label '%s'", buf);
+  CHECK(hg_line_result_label(r, 2, buf, sizeof buf, &need) == HG_OK && strcmp(buf, "up to the roof") == 0,
+        "user label '%s'", buf);
+  CHECK(hg_line_result_label(r, 0, buf, sizeof buf, &need) == HG_OK && strcmp(buf, "pipe 0") == 0,
+        "default label '%s'", buf);
+  hg_line_result_free(r);
+
+  /* Bad input names the parameter. */
+  CHECK(hg_line_set_count(l, 1, 0) == HG_ERR_OUT_OF_RANGE && strstr(last_msg(), "count = 0") != NULL,
+        "count 0: %s", last_msg());
+  CHECK(hg_line_set_count(l, 0, 2) == HG_ERR_INVALID && strstr(last_msg(), "count") != NULL,
+        "count on a pipe: %s", last_msg());
+  CHECK(hg_line_set_count(l, 9, 2) == HG_ERR_OUT_OF_RANGE && strstr(last_msg(), "index = 9") != NULL,
+        "count index: %s", last_msg());
+  CHECK(hg_line_set_label(l, 9, "x") == HG_ERR_OUT_OF_RANGE && strstr(last_msg(), "index = 9") != NULL,
+        "label index: %s", last_msg());
+  char longer[200];
+  memset(longer, 'x', sizeof longer - 1);
+  longer[sizeof longer - 1] = 0;
+  CHECK(hg_line_set_label(l, 0, longer) == HG_ERR_INVALID && strncmp(last_msg(), "label: ", 7) == 0,
+        "label too long: %s", last_msg());
+  CHECK(hg_line_set_label(l, 0, "\xff\xfe") == HG_ERR_INVALID && strncmp(last_msg(), "label: ", 7) == 0,
+        "label not UTF-8: %s", last_msg());
+  CHECK(hg_line_set_label(l, 0, "") == HG_ERR_INVALID, "empty label");
+  CHECK(hg_line_set_label(NULL, 0, "x") == HG_ERR_NULL_POINTER, "NULL line");
+  CHECK(hg_line_set_label(l, 2, NULL) == HG_OK, "NULL gives back the default label");
+
+  /* Slices and joins. */
+  CHECK(hg_line_slice(l, 1, 1, &part) == HG_ERR_INVALID && strncmp(last_msg(), "slice: ", 7) == 0,
+        "empty slice: %s", last_msg());
+  CHECK(hg_line_slice(l, 0, 9, &part) == HG_ERR_OUT_OF_RANGE && strstr(last_msg(), "end = 9") != NULL,
+        "slice end: %s", last_msg());
+  CHECK(hg_line_slice(l, 2, 1, &part) == HG_ERR_OUT_OF_RANGE && part == NULL, "slice reversed");
+  CHECK(hg_line_slice(l, 0, 1, NULL) == HG_ERR_NULL_POINTER, "slice NULL out");
+  CHECK(hg_line_slice(l, 0, 2, &part) == HG_OK && hg_line_slice(l, 2, 3, &tail) == HG_OK, "slices");
+  size_t n = 0;
+  CHECK(hg_line_count(part, &n) == HG_OK && n == 2, "slice length %zu", n);
+  CHECK(hg_line_append_line(part, tail) == HG_OK && hg_line_count(part, &n) == HG_OK && n == 3, "joined");
+  double h1 = 0, h2 = 0, d = 0;
+  CHECK(hg_line_required_head(l, w, q, &h1, &d) == HG_OK && hg_line_required_head(part, w, q, &h2, &d) == HG_OK &&
+            bits_of(h1) == bits_of(h2),
+        "a line cut and joined again is the same line: %.17g vs %.17g", h1, h2);
+  CHECK(hg_line_append_line(part, part) == HG_OK && hg_line_count(part, &n) == HG_OK && n == 6, "self-append");
+  CHECK(hg_line_append_line(part, NULL) == HG_ERR_NULL_POINTER, "append NULL");
+  hg_uncertainty_options u;
+  memset(&u, 0, sizeof u);
+  u.struct_size = sizeof u;
+  CHECK(hg_line_set_uncertainty(tail, &u) == HG_OK, "tail without bands");
+  CHECK(hg_line_append_line(l, tail) == HG_ERR_INVALID && strncmp(last_msg(), "other: ", 7) == 0,
+        "options differ: %s", last_msg());
+  hg_line_free(part);
+  hg_line_free(tail);
+  hg_fluid_free(w);
+  hg_line_free(l);
+}
+
 int main(int argc, char **argv) {
   if (argc < 2) {
     fprintf(stderr, "usage: %s REFERENCE_FILE\n", argv[0]);
@@ -981,6 +1061,7 @@ int main(int argc, char **argv) {
   test_curve_band();
   test_line_model();
   test_non_linear_flag();
+  test_builder();
   pthread_t th[8];
   thread_arg args[8];
   for (int i = 0; i < 8; i++) {

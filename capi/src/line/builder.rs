@@ -2,7 +2,7 @@
 //! materials, custom ducts, roughness ranges, K spreads, the turbulent diameter and the
 //! uncertainty sources.
 
-use crate::ffi::{self, FfiResult};
+use crate::ffi::{self, FfiResult, guard, out_ptr, put};
 use crate::line::{hg_line, refer, with_line};
 use crate::section::{HG_SECTION_CIRCLE, section_of};
 use hydrograde::Error;
@@ -343,29 +343,12 @@ pub unsafe extern "C" fn hg_line_set_k_spread(
     spread: f64,
 ) -> i32 {
     // SAFETY: forwarded contract.
-    unsafe {
-        with_line(line, |l| {
-            let n = l.elements.len();
-            match l.elements.get_mut(index) {
-                Some(Element::Fitting(f)) => *f = f.clone().with_k_spread(spread)?,
-                _ => {
-                    return Err(ffi::size_out_of_range(
-                        "index",
-                        index,
-                        format!("must be the index of a fitting (the line has {n} elements)"),
-                    ));
-                }
-            }
-            l.changed();
-            Ok(())
-        })
-    }
+    unsafe { with_line(line, |l| Ok(l.builder.set_k_spread(index, spread)?)) }
 }
 
 /// States the likely range `low`…`high` (m, 0 ≤ low ≤ high) of the roughness of the pipe
-/// at `index` (0-based), for the roughness uncertainty of the bands (rectangular between
-/// the two). Checked at once when the line can be built (else when it is next
-/// evaluated): an index that is not a pipe gives `HG_ERR_OUT_OF_RANGE`.
+/// at `index` (0-based), for the roughness uncertainty of the bands (log-uniform between
+/// the two). Checked at once: an index that is not a pipe gives `HG_ERR_OUT_OF_RANGE`.
 ///
 /// Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`.
 /// Needs exclusive use of `line`.
@@ -382,18 +365,7 @@ pub unsafe extern "C" fn hg_line_set_roughness_range(
     // SAFETY: forwarded contract.
     unsafe {
         with_line(line, |l| {
-            // Checked at once when the line can already be built; otherwise when it is.
-            if let Ok(mut trial) =
-                hydrograde::line::Line::with_options(l.elements.clone(), l.options.clone())
-            {
-                trial.set_roughness_range(index, low, high)?;
-            }
-            let mut ranges = l.roughness_ranges.clone();
-            ranges.retain(|r| r.0 != index);
-            ranges.push((index, low, high));
-            l.roughness_ranges = ranges;
-            l.changed();
-            Ok(())
+            Ok(l.builder.set_roughness_range(index, low, high)?)
         })
     }
 }
@@ -424,9 +396,113 @@ pub unsafe extern "C" fn hg_line_set_turbulent_diameter(line: *mut hg_line, mode
     // SAFETY: forwarded contract.
     unsafe {
         with_line(line, |l| {
-            l.options.turbulent_diameter = turbulent_mode(mode)?;
-            l.changed();
+            l.builder.set_turbulent_diameter(turbulent_mode(mode)?);
             Ok(())
+        })
+    }
+}
+
+/// Sets the label of element `index` (0-based) to `label` (UTF-8, 1 to 120 characters,
+/// one line), shown in its result row (`hg_line_result_label`); NULL gives back the
+/// default label: kind and index, such as "pipe 3", "fitting 4", "rise 5", a fitting's
+/// catalogue or method name and index, or an equipment's name. A count above 1 shows as
+/// "6 × …" before either.
+///
+/// Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` for an index that is not an element;
+/// `HG_ERR_INVALID` for a label empty, too long, with a control character or not UTF-8;
+/// `HG_ERR_NULL_POINTER` for `line`. Needs exclusive use of `line`.
+///
+/// # Safety
+/// `line` must be NULL or a live handle used by no other thread; `label` NULL or a
+/// NUL-terminated string.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_set_label(
+    line: *mut hg_line,
+    index: usize,
+    label: *const c_char,
+) -> i32 {
+    // SAFETY: forwarded contract.
+    unsafe {
+        with_line(line, |l| {
+            let text = if label.is_null() {
+                None
+            } else {
+                Some(ffi::c_str("label", label)?)
+            };
+            Ok(l.builder.set_label(index, text)?)
+        })
+    }
+}
+
+/// Makes the fitting at `index` (0-based) stand for `count` identical fittings (1 to
+/// 10000): one result row with `count` times the fitting's K, so `count`·K·V²/(2g) of
+/// head loss, and one shared K error (its band is `count` times one fitting's).
+///
+/// Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` for a count out of range or an index that is
+/// not an element; `HG_ERR_INVALID` for a count above 1 on an element that is not a
+/// fitting; `HG_ERR_NULL_POINTER`. Needs exclusive use of `line`.
+///
+/// # Safety
+/// `line` must be NULL or a live handle used by no other thread.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_set_count(line: *mut hg_line, index: usize, count: u32) -> i32 {
+    // SAFETY: forwarded contract.
+    unsafe { with_line(line, |l| Ok(l.builder.set_count(index, count)?)) }
+}
+
+/// Makes a new line, stored in `*out`, of the elements `start` to `end - 1` of `line`
+/// (0-based, `start < end ≤` the element count) with their labels, counts and roughness
+/// ranges and `line`'s options; default labels follow the new indices. Free it with
+/// `hg_line_free`; `line` is unchanged.
+///
+/// Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` for `end` past the last element or `start`
+/// after `end`; `HG_ERR_INVALID` when `start == end` (a line needs an element) or the
+/// slice cannot be built (a fitting left with no bore to take); `HG_ERR_NULL_POINTER`.
+/// Thread-safe (`line` is only read).
+///
+/// # Safety
+/// `line` must be NULL or a live handle; `out` NULL or a writable `hg_line *`.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_slice(
+    line: *const hg_line,
+    start: usize,
+    end: usize,
+    out: *mut *mut hg_line,
+) -> i32 {
+    guard(|| {
+        ffi::check_outs(&[out_ptr("out", out)])?;
+        // SAFETY: forwarded contract.
+        let l = unsafe { ffi::handle("line", line)? };
+        let part = l.line()?.slice(start..end)?;
+        let handle = Box::new(hg_line::from_line(part));
+        // SAFETY: forwarded contract; checked above.
+        unsafe { put("out", out, Box::into_raw(handle)) }
+    })
+}
+
+/// Appends every element of `other` to `line`, with their labels, counts and roughness
+/// ranges; `line` keeps its options, and `other`'s must be the same except its inlet
+/// pressure. `other` must be complete (it is built to be read); it is unchanged.
+///
+/// Returns `HG_OK`; `HG_ERR_INVALID` when the options differ or `other` cannot be built;
+/// `HG_ERR_NULL_POINTER`. Needs exclusive use of `line`; `other` may be `line` itself
+/// (the route is then doubled).
+///
+/// # Safety
+/// `line` must be NULL or a live handle used by no other thread; `other` NULL or a live
+/// handle.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_append_line(line: *mut hg_line, other: *const hg_line) -> i32 {
+    // SAFETY: forwarded contract.
+    unsafe {
+        with_line(line, |l| {
+            // `other` may be `line` itself: then it is read through the exclusive borrow.
+            let o = if std::ptr::eq(other, &raw const *l) {
+                l.line()?.clone()
+            } else {
+                ffi::handle("other", other)?.line()?.clone()
+            };
+            Ok(l.builder.push_line(&o)?)
         })
     }
 }

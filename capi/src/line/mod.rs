@@ -23,63 +23,36 @@ pub use uncertainty::*;
 
 use crate::ffi::{self, FfiResult, guard, out_ptr, put};
 use crate::section::{HG_SECTION_CIRCLE, section_of};
-use hydrograde::Error;
 use hydrograde::fitting::Fitting;
 use hydrograde::friction::Options;
-use hydrograde::line::{Element, Equipment, Line, LineOptions};
+use hydrograde::line::{Element, Equipment, Line, LineBuilder};
 use hydrograde::pipe::Pipe;
 use std::ffi::c_char;
-use std::sync::OnceLock;
 
 /// A route of pipes, fittings, rises and equipment in series: opaque. Made by
 /// `hg_line_new`, released by `hg_line_free`. Adding elements or changing options needs
 /// exclusive use of the handle; evaluating only reads it, so several threads may
 /// evaluate one line at once.
 pub struct hg_line {
-    pub(crate) elements: Vec<Element>,
-    pub(crate) options: LineOptions,
-    /// Roughness ranges (element index, low, high; m) applied when the line is built.
-    pub(crate) roughness_ranges: Vec<(usize, f64, f64)>,
-    /// The built line, made on first use after a change (fittings without a diameter
-    /// take it from a neighbouring pipe, which may be added after them).
-    pub(crate) built: OnceLock<Result<Line, Error>>,
+    /// The core's builder: it holds the elements, labels, counts and options, and builds
+    /// (and keeps) the checked line on first use after a change.
+    pub(crate) builder: LineBuilder,
 }
 
 impl hg_line {
     pub(crate) fn push(&mut self, e: Element) {
-        self.elements.push(e);
-        self.changed();
+        self.builder.push(e);
     }
 
-    /// A handle holding an already built line (its elements and options are kept, so
-    /// later additions rebuild it as usual).
-    pub(crate) fn from_line(line: Line, roughness_ranges: Vec<(usize, f64, f64)>) -> hg_line {
-        let built = OnceLock::new();
-        let h = hg_line {
-            elements: line.elements().to_vec(),
-            options: line.options().clone(),
-            roughness_ranges,
-            built,
-        };
-        // A fresh OnceLock is empty, so this set cannot fail.
-        let _ = h.built.set(Ok(line));
-        h
-    }
-
-    /// Forgets the built line after a change.
-    pub(crate) fn changed(&mut self) {
-        self.built = OnceLock::new();
+    /// A handle holding an already built line.
+    pub(crate) fn from_line(line: Line) -> hg_line {
+        hg_line {
+            builder: LineBuilder::from_line(line),
+        }
     }
 
     pub(crate) fn line(&self) -> FfiResult<&Line> {
-        let built = self.built.get_or_init(|| {
-            let mut line = Line::with_options(self.elements.clone(), self.options.clone())?;
-            for &(i, low, high) in &self.roughness_ranges {
-                line.set_roughness_range(i, low, high)?;
-            }
-            Ok(line)
-        });
-        built.as_ref().map_err(|e| e.clone().into())
+        Ok(self.builder.line()?)
     }
 }
 
@@ -109,10 +82,7 @@ pub unsafe extern "C" fn hg_line_new(out: *mut *mut hg_line) -> i32 {
     guard(|| {
         ffi::check_outs(&[out_ptr("out", out)])?;
         let line = Box::new(hg_line {
-            elements: Vec::new(),
-            options: LineOptions::default(),
-            roughness_ranges: Vec::new(),
-            built: OnceLock::new(),
+            builder: LineBuilder::new(),
         });
         // SAFETY: forwarded contract; checked above.
         unsafe { put("out", out, Box::into_raw(line)) }
@@ -361,10 +331,7 @@ pub unsafe extern "C" fn hg_line_set_friction_options(
     unsafe {
         with_line(line, |l| {
             let o: Options = crate::friction::read_options("opts", opts)?;
-            o.validate()?;
-            l.options.friction = o;
-            l.changed();
-            Ok(())
+            Ok(l.builder.set_friction(o)?)
         })
     }
 }
@@ -382,16 +349,12 @@ pub unsafe extern "C" fn hg_line_set_inlet_pressure(line: *mut hg_line, pressure
     // SAFETY: forwarded contract.
     unsafe {
         with_line(line, |l| {
-            let mut o = l.options.clone();
-            o.inlet_pressure = if pressure == 0.0 {
+            let p = if pressure == 0.0 {
                 None
             } else {
                 Some(pressure)
             };
-            o.validate()?;
-            l.options = o;
-            l.changed();
-            Ok(())
+            Ok(l.builder.set_inlet_pressure(p)?)
         })
     }
 }
@@ -409,6 +372,6 @@ pub unsafe extern "C" fn hg_line_count(line: *const hg_line, count: *mut usize) 
         // SAFETY: forwarded contract.
         let l = unsafe { ffi::handle("line", line)? };
         // SAFETY: forwarded contract; checked above.
-        unsafe { put("count", count, l.elements.len()) }
+        unsafe { put("count", count, l.builder.len()) }
     })
 }

@@ -153,6 +153,18 @@ pub struct hg_element_result {
     /// Number of sources of this element's head-loss band (through
     /// `hg_line_result_element_band_source`); 0 for a band of zero width (a rise).
     pub band_source_count: usize,
+    /// How many identical fittings the row stands for (`hg_line_set_count`; 1 for every
+    /// other row). This and the fields after it came after the struct's first layout: a
+    /// caller whose `struct_size` ends before them does not get them.
+    pub count: usize,
+    /// The row's share of the variance of the line's head loss: the covariance of its
+    /// loss with the total over the total's variance (the shares of all rows sum to 1; a
+    /// negative share offsets the rest); only when `has_band_share`.
+    pub band_share: f64,
+    /// 1 when `band_share` applies (the line's head-loss band has a width), else 0.
+    pub has_band_share: i32,
+    /// Reserved, 0.
+    pub reserved_end: i32,
 }
 sized!(hg_element_result, band_source_count: usize);
 
@@ -208,6 +220,7 @@ pub(crate) fn element_to_c(e: &ElementResult) -> hg_element_result {
         0.0
     };
     let (friction_factor, has_friction_factor) = flagged(e.friction_factor);
+    let (band_share, has_band_share) = flagged(e.band_share);
     let (k, has_k) = flagged(e.k);
     let (pressure_out, has_pressure) = flagged(e.pressure_out);
     let fb = e
@@ -237,6 +250,10 @@ pub(crate) fn element_to_c(e: &ElementResult) -> hg_element_result {
         has_k,
         reserved: 0,
         band_source_count: e.head_loss_band.contributions.len(),
+        count: e.count as usize,
+        band_share,
+        has_band_share,
+        reserved_end: 0,
     }
 }
 
@@ -399,8 +416,8 @@ pub unsafe extern "C" fn hg_line_result_element(
     })
 }
 
-/// Copies the label of element `index` of `result` ("pipe", "rise", the fitting's or
-/// equipment's name) into `buf` (at most `len - 1` bytes and a NUL; `buf` may be NULL
+/// Copies the label of element `index` of `result` (the user's, see `hg_line_set_label`,
+/// or the default: "pipe 3", "fitting 4", "rise 5", …; "6 × …" for counted fittings) into `buf` (at most `len - 1` bytes and a NUL; `buf` may be NULL
 /// when `len` is 0) and stores its full length in `*needed`.
 ///
 /// Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` when `index` is not an element;

@@ -230,7 +230,7 @@ pub unsafe extern "C" fn hg_line_with_uniform_diameter(
         // SAFETY: forwarded contract.
         let l = unsafe { ffi::handle("line", line)? };
         let new = l.line()?.with_uniform_diameter(diameter)?;
-        let handle = Box::new(hg_line::from_line(new, l.roughness_ranges.clone()));
+        let handle = Box::new(hg_line::from_line(new));
         // SAFETY: forwarded contract; checked above.
         unsafe { put("out", out, Box::into_raw(handle)) }
     })

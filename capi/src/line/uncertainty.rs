@@ -111,12 +111,14 @@ pub unsafe extern "C" fn hg_line_set_uncertainty(
                 non_circular_model: c.non_circular_model,
                 roughness_default: c.roughness_default,
                 diameter: c.diameter,
-                independent_materials: l.options.uncertainty.independent_materials.clone(),
+                independent_materials: l
+                    .builder
+                    .options()
+                    .uncertainty
+                    .independent_materials
+                    .clone(),
             };
-            u.validate()?;
-            l.options.uncertainty = u;
-            l.changed();
-            Ok(())
+            Ok(l.builder.set_uncertainty(u)?)
         })
     }
 }

@@ -123,10 +123,8 @@ pub struct Fitting {
     name: Option<String>,
 }
 
-/// The largest fixed resistance coefficient accepted: far above any fitting or throttled
-/// valve (common practice: a nearly closed globe valve reaches a few thousand), low
-/// enough that a line's head stays a finite number at any flow the solvers try.
-pub const MAX_K: f64 = 1e6;
+/// The largest fixed resistance coefficient accepted; see [`Fitting::MAX_K`].
+pub const MAX_K: f64 = Fitting::MAX_K;
 
 impl Fitting {
     fn from_method(method: Method) -> Fitting {
@@ -138,20 +136,35 @@ impl Fitting {
         }
     }
 
-    /// A fixed resistance coefficient `value` (dimensionless, ≥ 0) on the velocity of the
-    /// adjoining pipe.
-    ///
-    /// # Errors
-    /// `k` not finite, negative or above [`MAX_K`].
-    pub fn k(value: f64) -> Result<Fitting> {
-        check::non_negative("k", value)?;
-        if value > MAX_K {
+    /// The largest fixed K accepted. Published K values stop in the thousands (a nearly
+    /// closed valve; from memory); a K of 1e6 already costs 51 km of head at 1 m/s. Beyond
+    /// it a "fitting" is a closed line, and the inverse solvers would return flows so
+    /// small that no stated tolerance means anything.
+    pub const MAX_K: f64 = 1e6;
+
+    /// Checks a fixed K: finite, not negative, at most [`Fitting::MAX_K`]; errors name `k`.
+    pub fn check_k(value: f64) -> Result<f64> {
+        let k = check::non_negative("k", value)?;
+        if k > Fitting::MAX_K {
             return Err(Error::out_of_range(
                 "k",
-                value,
-                format!("must not exceed {MAX_K:e} (a throttled valve reaches a few thousand)"),
+                k,
+                format!(
+                    "must not exceed {:e} (a larger K is a closed line, not a fitting)",
+                    Fitting::MAX_K
+                ),
             ));
         }
+        Ok(k)
+    }
+
+    /// A fixed resistance coefficient `value` (dimensionless, 0 … [`Fitting::MAX_K`]) on
+    /// the velocity of the adjoining pipe.
+    ///
+    /// # Errors
+    /// `k` not finite, negative or above [`Fitting::MAX_K`].
+    pub fn k(value: f64) -> Result<Fitting> {
+        Fitting::check_k(value)?;
         Ok(Fitting::from_method(Method::K { k: value }))
     }
 

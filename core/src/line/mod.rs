@@ -15,18 +15,23 @@
 //! (of the pipe after it when no pipe comes before); a line where no pipe is there to
 //! take it from is an error when the line is built.
 
+mod builder;
 mod eval;
 mod path;
 pub(crate) use path::{Resolved, Role};
 mod parallel;
 mod result;
 pub mod rows;
+mod shares;
 mod sizing;
 mod solve;
 pub(crate) mod uncertainty;
 
+use builder::LineSpec;
+pub use builder::{LineBuilder, MAX_COUNT, MAX_LABEL_CHARS, Tag, check_count, check_label};
 pub use parallel::{Split, split_flow};
 pub use result::{ElementKind, ElementResult, LineResult, NpshCheck};
+pub use shares::{Share, Shares};
 pub use sizing::{Limit, SizeChoice, Sizing};
 pub use solve::{FlowSolution, OperatingPoint, PumpCurve};
 pub use uncertainty::CurveBand;
@@ -40,15 +45,36 @@ use crate::pipe::Pipe;
 use crate::section::TurbulentDiameter;
 use serde::{Deserialize, Serialize};
 
-/// Equipment in a line: a component known by its rating rather than its geometry.
+/// Equipment in a line: a component known by its rating rather than its geometry. Built
+/// only through [`Equipment::pressure_drop`] and [`Equipment::fixed_k`] (and
+/// [`Equipment::with_spread`]); deserialising runs the same checks.
 #[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+#[serde(try_from = "EquipmentSpec")]
 pub struct Equipment {
-    /// A label of the user's choosing (shown in results).
-    pub name: String,
-    /// How its loss is stated.
-    pub rating: Rating,
-    /// Relative half-width of the likely range of the loss (rectangular), e.g. 0.1 = ±10 %.
-    pub spread: f64,
+    name: String,
+    rating: Rating,
+    spread: f64,
+}
+
+/// The stored form of [`Equipment`], checked when read.
+#[derive(Deserialize)]
+struct EquipmentSpec {
+    name: String,
+    rating: Rating,
+    spread: f64,
+}
+
+impl TryFrom<EquipmentSpec> for Equipment {
+    type Error = Error;
+    fn try_from(s: EquipmentSpec) -> Result<Equipment> {
+        match s.rating {
+            Rating::PressureDrop { drop, at_flow } => {
+                Equipment::pressure_drop(&s.name, drop, at_flow)
+            }
+            Rating::FixedK { k, diameter } => Equipment::fixed_k(&s.name, k, diameter),
+        }?
+        .with_spread(s.spread)
+    }
 }
 
 /// How an equipment's loss is stated.
@@ -88,10 +114,10 @@ impl Equipment {
         })
     }
 
-    /// Equipment with a fixed K (≥ 0) on the velocity in `diameter` (m) or the adjoining
-    /// pipe's bore.
+    /// Equipment with a fixed K (0 … [`Fitting::MAX_K`]) on the velocity in `diameter` (m)
+    /// or the adjoining pipe's bore.
     pub fn fixed_k(name: &str, k: f64, diameter: Option<f64>) -> Result<Equipment> {
-        check::non_negative("k", k)?;
+        Fitting::check_k(k)?;
         if let Some(d) = diameter {
             check::positive("diameter", d)?;
         }
@@ -100,6 +126,21 @@ impl Equipment {
             rating: Rating::FixedK { k, diameter },
             spread: EQUIPMENT_DEFAULT_SPREAD,
         })
+    }
+
+    /// The name the user gave it (its label in results unless it has another).
+    pub fn name(&self) -> &str {
+        &self.name
+    }
+
+    /// How its loss is stated.
+    pub fn rating(&self) -> &Rating {
+        &self.rating
+    }
+
+    /// Relative half-width of the likely range of the loss (rectangular), e.g. 0.1 = ±10 %.
+    pub fn spread(&self) -> f64 {
+        self.spread
     }
 
     /// The same equipment with another spread (relative half-width, 0…1: a wider
@@ -249,11 +290,12 @@ impl LineOptions {
     }
 }
 
-/// A route of elements in series, ready to evaluate.
+/// A route of elements in series, ready to evaluate. Built by [`Line::new`],
+/// [`Line::with_options`] or a [`LineBuilder`].
 ///
-/// Serialised as its elements, options and roughness ranges only; deserialising builds
-/// the line again through the same checks (the worked-out bores and resistances are
-/// never read from the stored form).
+/// Serialised as its elements, labels, counts, options and roughness ranges only;
+/// deserialising builds the line again through the same checks (the worked-out bores and
+/// resistances are never read from the stored form).
 #[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
 #[serde(try_from = "LineSpec", into = "LineSpec")]
 pub struct Line {
@@ -261,6 +303,10 @@ pub struct Line {
     pub(crate) options: LineOptions,
     /// Roughness ranges (low, high) given per pipe index, m.
     roughness_ranges: Vec<Option<(f64, f64)>>,
+    /// Per element, the user's label.
+    labels: Vec<Option<String>>,
+    /// Per element, how many identical fittings it stands for (1 for other elements).
+    counts: Vec<u32>,
     pub(crate) resolved: Vec<Resolved>,
     /// Per resolved row, the index of the element it comes from (`None` for an abrupt
     /// change of section the route implies).
@@ -269,28 +315,16 @@ pub struct Line {
     pub(crate) notes: Vec<(crate::warning::Warnings, String)>,
 }
 
-/// The stored form of a [`Line`]: what the user gave, nothing worked out.
-#[derive(Serialize, Deserialize)]
-struct LineSpec {
-    elements: Vec<Element>,
-    options: LineOptions,
-    roughness_ranges: Vec<Option<(f64, f64)>>,
-}
-
 impl TryFrom<LineSpec> for Line {
     type Error = Error;
     fn try_from(s: LineSpec) -> Result<Line> {
-        Line::build(s.elements, s.options, s.roughness_ranges)
+        Line::from_spec(s)
     }
 }
 
 impl From<Line> for LineSpec {
     fn from(l: Line) -> LineSpec {
-        LineSpec {
-            elements: l.elements,
-            options: l.options,
-            roughness_ranges: l.roughness_ranges,
-        }
+        l.spec()
     }
 }
 
@@ -305,32 +339,29 @@ impl Line {
 
     /// A line with options.
     pub fn with_options(elements: Vec<Element>, options: LineOptions) -> Result<Line> {
-        let n = elements.len();
-        Line::build(elements, options, vec![None; n])
+        Line::from_spec(LineSpec {
+            elements,
+            options,
+            ..LineSpec::default()
+        })
     }
 
-    fn build(
-        elements: Vec<Element>,
-        options: LineOptions,
-        roughness_ranges: Vec<Option<(f64, f64)>>,
-    ) -> Result<Line> {
-        options.validate()?;
-        if elements.is_empty() {
+    /// Checks what the user gave and works out the flow path.
+    pub(crate) fn from_spec(spec: LineSpec) -> Result<Line> {
+        spec.options.validate()?;
+        if spec.elements.is_empty() {
             return Err(Error::invalid(
                 "elements",
                 "a line needs at least one element",
             ));
         }
-        if roughness_ranges.len() != elements.len() {
-            return Err(Error::invalid(
-                "roughness_ranges",
-                format!(
-                    "has {} entries for {} elements",
-                    roughness_ranges.len(),
-                    elements.len()
-                ),
-            ));
-        }
+        let LineSpec {
+            elements,
+            options,
+            roughness_ranges,
+            labels,
+            counts,
+        } = spec.normalised()?;
         if let Some(i) = (0..elements.len())
             .find(|&i| roughness_ranges[i].is_some() && !matches!(elements[i], Element::Pipe(_)))
         {
@@ -340,14 +371,42 @@ impl Line {
                 "a roughness range must belong to a pipe in the line",
             ));
         }
-        let path = path::resolve(&elements, &options, &roughness_ranges)?;
+        let mut path = path::resolve(&elements, &options, &roughness_ranges)?;
+        // N counted fittings: N times the resistance in both directions (see builder).
+        for (row, origin) in path.rows.iter_mut().zip(&path.origin) {
+            if let (
+                Resolved::Fitting {
+                    resistance,
+                    reverse,
+                    ..
+                },
+                Some(i),
+            ) = (row, origin)
+            {
+                let n = f64::from(counts[*i]);
+                for r in [resistance, reverse] {
+                    r.k_viscous *= n;
+                    r.k_inertial *= n;
+                }
+            }
+        }
         Ok(Line {
             elements,
             options,
             roughness_ranges,
+            labels,
+            counts,
             resolved: path.rows,
             origin: path.origin,
             notes: path.notes,
+        })
+    }
+
+    /// The same line with other elements (one per element of this line, in order).
+    fn with_elements(&self, elements: Vec<Element>) -> Result<Line> {
+        Line::from_spec(LineSpec {
+            elements,
+            ..self.spec()
         })
     }
 
@@ -363,11 +422,10 @@ impl Line {
 
     /// The same line with other options.
     pub fn set_options(&self, options: LineOptions) -> Result<Line> {
-        Line::build(
-            self.elements.clone(),
+        Line::from_spec(LineSpec {
             options,
-            self.roughness_ranges.clone(),
-        )
+            ..self.spec()
+        })
     }
 
     /// States the likely range (low, high; m) of the roughness of the pipe at `index`, for
@@ -388,9 +446,9 @@ impl Line {
                 ));
             }
         }
-        let mut ranges = self.roughness_ranges.clone();
-        ranges[index] = Some((low, high));
-        *self = Line::build(self.elements.clone(), self.options.clone(), ranges)?;
+        let mut spec = self.spec();
+        spec.roughness_ranges[index] = Some((low, high));
+        *self = Line::from_spec(spec)?;
         Ok(())
     }
 
@@ -459,10 +517,6 @@ impl Line {
                 other => Ok(other.clone()),
             })
             .collect::<Result<Vec<_>>>()?;
-        Line::build(
-            elements,
-            self.options.clone(),
-            self.roughness_ranges.clone(),
-        )
+        self.with_elements(elements)
     }
 }

@@ -310,15 +310,15 @@ pub(crate) fn resolve(
                 height: h.height(),
                 air_density,
             },
-            Element::Equipment(eq) => match &eq.rating {
+            Element::Equipment(eq) => match eq.rating() {
                 Rating::PressureDrop { drop, at_flow } => Resolved::Drop {
                     drop: *drop,
                     at_flow: *at_flow,
-                    spread: eq.spread,
-                    name: eq.name.clone(),
+                    spread: eq.spread(),
+                    name: eq.name().to_string(),
                 },
                 Rating::FixedK { k, diameter } => {
-                    let (s, _) = section_for(*diameter, &eq.name)?;
+                    let (s, _) = section_for(*diameter, eq.name())?;
                     let r = Resistance {
                         k_viscous: 0.0,
                         k_inertial: *k,
@@ -328,8 +328,8 @@ pub(crate) fn resolve(
                         area: s.area,
                         resistance: r,
                         reverse: r,
-                        spread: eq.spread,
-                        name: eq.name.clone(),
+                        spread: eq.spread(),
+                        name: eq.name().to_string(),
                         role: Role::Equipment,
                         blocks_reverse: false,
                     }

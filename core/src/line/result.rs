@@ -46,7 +46,9 @@ impl ElementKind {
 pub struct ElementResult {
     /// What the element is.
     pub kind: ElementKind,
-    /// A label: the fitting's or equipment's name, "pipe" or "rise".
+    /// The element's label (see [`Line::label`]: the user's, or kind and index such as
+    /// `"pipe 3"`, `"6 × elbow_90_long 2"` for counted fittings); an implied change of
+    /// section is named by its bores.
     pub label: String,
     /// Index of the line element this row stands for; `None` for an abrupt change of
     /// section the route implies between two elements.
@@ -81,6 +83,17 @@ pub struct ElementResult {
     pub head_loss_band: Band,
     /// Band of the friction factor (pipes).
     pub friction_factor_band: Option<Band>,
+    /// How many identical fittings the row stands for (1 for every other row).
+    #[serde(default = "one")]
+    pub count: u32,
+    /// The row's share of the variance of the line's head loss (see
+    /// [`LineResult::shares`]); `None` when the line's band has no width.
+    #[serde(default)]
+    pub band_share: Option<f64>,
+}
+
+fn one() -> u32 {
+    1
 }
 
 /// A line evaluated at one flow.
@@ -187,6 +200,7 @@ impl Line {
         let mut elements = Vec::with_capacity(states.len());
         let sources = Sources::of(self);
         let mut terms = sources.zero_terms();
+        let mut element_terms = Vec::with_capacity(states.len());
         for (i, s) in states.iter().enumerate() {
             if let Some(v) = s.velocity {
                 last_v = v;
@@ -212,11 +226,18 @@ impl Line {
                 ));
             }
             warnings |= w;
-            let bands = sources.element_bands(self, i, s, &work, &mut terms);
+            let (bands, own) = sources.element_bands(self, i, s, &work, &mut terms);
+            element_terms.push(own);
             let mut e = self.element_result(i, s, bands, pressure_out, w);
             e.total_pressure_out = total;
             e.elevation_out = elevation;
             elements.push(e);
+        }
+        for (e, share) in elements
+            .iter_mut()
+            .zip(uncertainty::variance_shares(&element_terms, &terms))
+        {
+            e.band_share = share;
         }
         let mut bands =
             uncertainty::line_bands(self, &sources, terms, &work, head_loss, required_head);
@@ -258,7 +279,7 @@ impl Line {
         pressure_out: Option<f64>,
         warnings: Warnings,
     ) -> ElementResult {
-        let (kind, label) = match &self.resolved[i] {
+        let (kind, name) = match &self.resolved[i] {
             Resolved::Pipe { .. } => (ElementKind::Pipe, "pipe".to_string()),
             Resolved::Fitting { name, role, .. } => (
                 match role {
@@ -276,9 +297,14 @@ impl Line {
         } else {
             warnings
         };
+        // A row of the route shows its element's label; an implied change of section its
+        // own name.
+        let label = self.origin[i].and_then(|j| self.label(j)).unwrap_or(name);
         ElementResult {
             kind,
             label,
+            count: self.origin[i].and_then(|j| self.count(j)).unwrap_or(1),
+            band_share: None,
             element: self.origin[i],
             velocity: s.velocity,
             reynolds: s.reynolds,

@@ -377,7 +377,8 @@ impl Sources {
     }
 
     /// The bands of element `i`'s head loss and (pipes) friction factor, adding the
-    /// element's head-loss terms into `acc` on the way (each term worked out once).
+    /// element's head-loss terms into `acc` on the way (each term worked out once), and
+    /// those terms themselves (for the element's share of the line's band).
     pub(crate) fn element_bands(
         &self,
         line: &Line,
@@ -385,7 +386,7 @@ impl Sources {
         s: &State,
         fluid: &Fluid,
         acc: &mut [Term],
-    ) -> (Band, Option<Band>) {
+    ) -> ((Band, Option<Band>), ElementTerms) {
         let uo = &line.options.uncertainty;
         let rough = (self.rough[i] != NONE).then(|| self.roughness_terms(line, i, s));
         // At most six sources act on one element: gathered on the stack.
@@ -422,8 +423,36 @@ impl Sources {
             let own = rough.map(|r| (self.list[self.rough[i] as usize].clone(), r.1));
             Band::from_terms(f, shared.into_iter().chain(own))
         });
-        (head, friction)
+        ((head, friction), ElementTerms { terms: mine, n })
     }
+}
+
+/// One element's head-loss terms, by source index (at most six sources act on one).
+pub(crate) struct ElementTerms {
+    terms: [(u32, Term); 6],
+    n: usize,
+}
+
+/// Each element's share of the variance of the line's head loss: the covariance of its
+/// loss with the total over the total's variance, Σₛ uₛ,ᵢ·uₛ / Σₛ uₛ² with uₛ,ᵢ the
+/// element's term of source s and uₛ = Σᵢ uₛ,ᵢ the line's (first order, JCGM 100:2008
+/// §5.2). The shares sum to 1; one is negative when the element's error offsets the
+/// rest's. `None` for every element when the line's band has no width.
+pub(crate) fn variance_shares(elements: &[ElementTerms], total: &[Term]) -> Vec<Option<f64>> {
+    let usable = |u: f64| if (u * u).is_finite() { u } else { 0.0 };
+    let var: f64 = total.iter().map(|t| usable(t.u) * usable(t.u)).sum();
+    elements
+        .iter()
+        .map(|e| {
+            (var > 0.0).then(|| {
+                e.terms[..e.n]
+                    .iter()
+                    .map(|&(k, t)| usable(t.u) * usable(total[k as usize].u))
+                    .sum::<f64>()
+                    / var
+            })
+        })
+        .collect()
 }
 
 /// The bands of a line's totals at one flow.
