@@ -48,7 +48,7 @@ pub use units::{STANDARD_GRAVITY, convert, convert_head};
 // Lines, pipes and bands.
 pub use band::{Band, Contribution, UncertaintyOptions};
 pub use line::{
-    Element, Equipment, Limit, Line, LineOptions, LineResult, PumpCurve, Rise, split_flow,
+    Element, Equipment, Limit, Line, LineOptions, LineResult, PumpCurve, PumpFit, Rise, split_flow,
 };
 pub use pipe::Pipe;
 pub use threads::{set_threads, threads};

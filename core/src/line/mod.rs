@@ -17,6 +17,7 @@
 
 mod eval;
 mod path;
+mod pump;
 pub(crate) use path::{Resolved, Role};
 mod parallel;
 mod result;
@@ -28,7 +29,10 @@ pub(crate) mod uncertainty;
 pub use parallel::{Split, split_flow};
 pub use result::{ElementKind, ElementResult, LineResult, NpshCheck};
 pub use sizing::{Limit, SizeChoice, Sizing};
-pub use solve::{FlowSolution, OperatingPoint, PumpCurve};
+pub use pump::{
+    PUMP_CURVE_MAX_FLOW, PUMP_CURVE_MAX_HEAD, PUMP_CURVE_MAX_POINTS, PumpCurve, PumpFit,
+};
+pub use solve::{FlowSolution, OperatingPoint};
 pub use uncertainty::CurveBand;
 
 use crate::band::UncertaintyOptions;
