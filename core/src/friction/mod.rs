@@ -27,8 +27,10 @@
 mod colebrook;
 mod explicit;
 mod kernel;
+mod strided;
 
 pub use kernel::Isa;
+pub use strided::{Strided, darcy_factor_batch_strided};
 
 use crate::error::{Error, Result, check};
 use crate::warning::Warnings;
