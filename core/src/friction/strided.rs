@@ -67,45 +67,53 @@ impl Strided<'_> {
     }
 
     /// Copies the elements at flat (C-order) indices `start..start + dst.len()` of
-    /// `shape` into `dst`, stepping the multi-index like an odometer.
+    /// `shape` into `dst`: a run along the innermost axis at a time (a fill for a
+    /// broadcast axis, a slice copy for a contiguous one), then an odometer step of the
+    /// outer axes.
     fn gather(&self, shape: &[usize], start: usize, dst: &mut [f64]) {
-        let nd = shape.len();
+        let Some((&inner, outer)) = shape.split_last() else {
+            dst.fill(self.data[self.offset]);
+            return;
+        };
+        let step = self.strides[shape.len() - 1];
         let mut idx = [0usize; 32];
         let mut rest = start;
         let mut pos = self.offset as isize;
-        for k in (0..nd).rev() {
+        for k in (0..shape.len()).rev() {
             idx[k] = rest % shape[k];
             rest /= shape[k];
             pos += idx[k] as isize * self.strides[k];
         }
-        let (inner, step) = match nd {
-            0 => (usize::MAX, 0),
-            _ => (shape[nd - 1], self.strides[nd - 1]),
-        };
-        for d in dst.iter_mut() {
-            *d = self.data[pos as usize];
-            if nd == 0 {
-                continue;
-            }
-            idx[nd - 1] += 1;
-            pos += step;
-            if idx[nd - 1] < inner {
-                continue;
-            }
-            // Carry into the outer axes.
-            let mut k = nd - 1;
-            loop {
-                pos -= idx[k] as isize * self.strides[k];
-                idx[k] = 0;
-                if k == 0 {
-                    break;
+        let mut done = 0;
+        while done < dst.len() {
+            let run = (inner - idx[shape.len() - 1]).min(dst.len() - done);
+            let out = &mut dst[done..done + run];
+            let p = pos as usize;
+            match step {
+                0 => out.fill(self.data[p]),
+                1 => out.copy_from_slice(&self.data[p..p + run]),
+                _ => {
+                    for (j, d) in out.iter_mut().enumerate() {
+                        *d = self.data[(pos + j as isize * step) as usize];
+                    }
                 }
-                k -= 1;
+            }
+            done += run;
+            if done == dst.len() {
+                break;
+            }
+            // The run reached the end of the innermost axis: back to its start, and carry
+            // into the outer axes.
+            pos -= idx[shape.len() - 1] as isize * step;
+            idx[shape.len() - 1] = 0;
+            for k in (0..outer.len()).rev() {
                 idx[k] += 1;
                 pos += self.strides[k];
                 if idx[k] < shape[k] {
                     break;
                 }
+                pos -= idx[k] as isize * self.strides[k];
+                idx[k] = 0;
             }
         }
     }
