@@ -89,7 +89,10 @@ fn distance(a: &[char], b: &[char]) -> usize {
 /// three: those within one edit per three characters of the loose form (at least one for
 /// names of three characters or more), and those whose loose form contains `given`'s
 /// (three characters or more: "iso4427" finds "pe_iso4427").
-pub(crate) fn suggestions<'a>(given: &str, known: impl IntoIterator<Item = &'a str>) -> Vec<&'a str> {
+pub(crate) fn suggestions<'a>(
+    given: &str,
+    known: impl IntoIterator<Item = &'a str>,
+) -> Vec<&'a str> {
     let g: Vec<char> = key(given).chars().collect();
     if g.is_empty() {
         return Vec::new();
@@ -127,7 +130,12 @@ impl std::fmt::Display for DidYouMean<'_> {
         match quoted.len() {
             0 => Ok(()),
             1 => write!(f, "; did you mean {}?", quoted[0]),
-            n => write!(f, "; did you mean {} or {}?", quoted[..n - 1].join(", "), quoted[n - 1]),
+            n => write!(
+                f,
+                "; did you mean {} or {}?",
+                quoted[..n - 1].join(", "),
+                quoted[n - 1]
+            ),
         }
     }
 }
@@ -182,7 +190,14 @@ mod tests {
 
     #[test]
     fn suggestions_by_edit_distance_and_containment() {
-        let tables = ["steel", "stainless", "copper", "pvc", "pe_iso4427", "hygienic_bpe"];
+        let tables = [
+            "steel",
+            "stainless",
+            "copper",
+            "pvc",
+            "pe_iso4427",
+            "hygienic_bpe",
+        ];
         assert_eq!(suggestions("stel", tables), vec!["steel"]);
         assert_eq!(suggestions("pcv", tables), vec!["pvc"]);
         assert_eq!(suggestions("coper", tables), vec!["copper"]);

@@ -27,8 +27,16 @@ fn broadcast_tables_equal_the_scalar_bit_for_bit() {
         },
     ] {
         let mut out = vec![0.0; 300 * 70];
-        let a = Strided { data: &re, offset: 0, strides: &[1, 0] };
-        let b = Strided { data: &rr, offset: 0, strides: &[0, 1] };
+        let a = Strided {
+            data: &re,
+            offset: 0,
+            strides: &[1, 0],
+        };
+        let b = Strided {
+            data: &rr,
+            offset: 0,
+            strides: &[0, 1],
+        };
         darcy_factor_batch_strided(&a, &b, &[300, 70], &opts, &mut out).unwrap();
         // The same points as full arrays through the contiguous batch.
         let full_re: Vec<f64> = (0..300 * 70).map(|i| re[i / 70]).collect();
@@ -50,8 +58,16 @@ fn reversed_sliced_and_three_axis_views() {
     let opts = Options::default();
     // re reversed along axis 0 (offset at its last element, stride −1), rr every second
     // value along axis 2, a middle axis of 3 broadcast from both: shape (24, 3, 5).
-    let a = Strided { data: &re, offset: 23, strides: &[-1, 0, 0] };
-    let b = Strided { data: &rr, offset: 0, strides: &[0, 0, 2] };
+    let a = Strided {
+        data: &re,
+        offset: 23,
+        strides: &[-1, 0, 0],
+    };
+    let b = Strided {
+        data: &rr,
+        offset: 0,
+        strides: &[0, 0, 2],
+    };
     let mut out = vec![0.0; 24 * 3 * 5];
     darcy_factor_batch_strided(&a, &b, &[24, 3, 5], &opts, &mut out).unwrap();
     for i in 0..24 {
@@ -64,8 +80,16 @@ fn reversed_sliced_and_three_axis_views() {
     }
     // A scalar shape: one point.
     let mut one = [0.0];
-    let c = Strided { data: &re[..1], offset: 0, strides: &[] };
-    let d = Strided { data: &rr[..1], offset: 0, strides: &[] };
+    let c = Strided {
+        data: &re[..1],
+        offset: 0,
+        strides: &[],
+    };
+    let d = Strided {
+        data: &rr[..1],
+        offset: 0,
+        strides: &[],
+    };
     darcy_factor_batch_strided(&c, &d, &[], &opts, &mut one).unwrap();
     assert_eq!(one[0], darcy_factor(re[0], rr[0], &opts).unwrap().f);
 }
@@ -76,17 +100,33 @@ fn views_that_do_not_fit_are_refused_and_bad_points_named_in_c_order() {
     let rr = [1e-4, 1e-3];
     let opts = Options::default();
     let mut out = vec![0.0; 6];
-    let a = Strided { data: &re, offset: 0, strides: &[1, 0] };
-    let b = Strided { data: &rr, offset: 0, strides: &[0, 1] };
+    let a = Strided {
+        data: &re,
+        offset: 0,
+        strides: &[1, 0],
+    };
+    let b = Strided {
+        data: &rr,
+        offset: 0,
+        strides: &[0, 1],
+    };
     // re[2] = −1 is out of range: the first bad point in C order is flat index 4.
     let e = darcy_factor_batch_strided(&a, &b, &[3, 2], &opts, &mut out).unwrap_err();
     assert_eq!(e.kind(), ErrorKind::OutOfRange);
     assert!(e.to_string().starts_with("element 4:"), "{e}");
-    let past = Strided { data: &rr, offset: 1, strides: &[0, 1] };
+    let past = Strided {
+        data: &rr,
+        offset: 1,
+        strides: &[0, 1],
+    };
     let e = darcy_factor_batch_strided(&a, &past, &[3, 2], &opts, &mut out).unwrap_err();
     assert_eq!(e.kind(), ErrorKind::Invalid);
     let e = darcy_factor_batch_strided(&a, &b, &[3, 3], &opts, &mut out).unwrap_err();
     assert!(e.to_string().contains("out"), "{e}");
-    let short = Strided { data: &rr, offset: 0, strides: &[1] };
+    let short = Strided {
+        data: &rr,
+        offset: 0,
+        strides: &[1],
+    };
     assert!(darcy_factor_batch_strided(&a, &short, &[3, 2], &opts, &mut out).is_err());
 }

@@ -37,7 +37,10 @@ fn exact_quadratic_and_cubic_data_give_their_polynomials() {
     }
     // A cubic fit of exact quadratic data has no cubic term (exact solution): its
     // contribution over the range stays at rounding level.
-    let h: Vec<f64> = q.iter().map(|&x| 40.0 + 300.0 * x - 20000.0 * x * x).collect();
+    let h: Vec<f64> = q
+        .iter()
+        .map(|&x| 40.0 + 300.0 * x - 20000.0 * x * x)
+        .collect();
     let c3 = PumpCurve::fit(&q, &h, 3).unwrap();
     assert!((c3.fit_info().unwrap().coefficients[3] * 0.03f64.powi(3)).abs() < 1e-11);
     // Exactly degree + 1 points: the polynomial through them (exact solution).
@@ -51,7 +54,9 @@ fn exact_quadratic_and_cubic_data_give_their_polynomials() {
 #[test]
 fn noisy_data_matches_numpy_polyfit() {
     // tests/reference/pump_fit/reference.txt (numpy.polyfit, numpy 2.4).
-    let flows = [0.0, 0.0015, 0.003, 0.0045, 0.006, 0.0075, 0.009, 0.0105, 0.012];
+    let flows = [
+        0.0, 0.0015, 0.003, 0.0045, 0.006, 0.0075, 0.009, 0.0105, 0.012,
+    ];
     let heads = [
         42.031,
         40.748,
@@ -104,7 +109,11 @@ fn degenerate_data_is_refused_clearly() {
     let fail = |q: &[f64], h: &[f64], d: usize| PumpCurve::fit(q, h, d).unwrap_err();
     let e = fail(&q[..3], &h[..3], 3);
     assert_eq!(e.kind(), ErrorKind::Invalid);
-    assert!(e.to_string().contains("degree-3 fit needs at least 4 points, got 3"), "{e}");
+    assert!(
+        e.to_string()
+            .contains("degree-3 fit needs at least 4 points, got 3"),
+        "{e}"
+    );
     let e = fail(&q, &h, 4);
     assert_eq!(e.kind(), ErrorKind::OutOfRange);
     assert!(e.to_string().starts_with("degree = 4"), "{e}");
@@ -115,7 +124,10 @@ fn degenerate_data_is_refused_clearly() {
     assert_eq!(e.kind(), ErrorKind::NotFinite);
     assert!(e.to_string().contains("element 1"), "{e}");
     assert_eq!(fail(&q, &h[..3], 2).kind(), ErrorKind::Invalid);
-    assert_eq!(fail(&[0.0, 0.01, f64::INFINITY], &h[..3], 2).kind(), ErrorKind::NotFinite);
+    assert_eq!(
+        fail(&[0.0, 0.01, f64::INFINITY], &h[..3], 2).kind(),
+        ErrorKind::NotFinite
+    );
     // Rising heads are measured data, not an error, for a fit.
     assert!(PumpCurve::fit(&q, &[30.0, 30.5, 26.0, 20.0], 2).is_ok());
 }
@@ -135,7 +147,11 @@ fn operating_point_works_with_a_fit() {
     let op = line.operating_point(&water, &fit).unwrap();
     // At the operating point the pump's head is the line's required head (definition).
     let (need, _) = line.required_head(&water, op.flow).unwrap();
-    assert!((need - op.head).abs() < 1e-9 * op.head, "{need} vs {}", op.head);
+    assert!(
+        (need - op.head).abs() < 1e-9 * op.head,
+        "{need} vs {}",
+        op.head
+    );
     assert!((op.head - (40.0 - 20000.0 * op.flow * op.flow)).abs() < 1e-10);
     // The monotone cubic through the same points is within 0.1 % of the parabola there.
     let through = PumpCurve::new(&q, &h).unwrap();
@@ -149,7 +165,10 @@ fn fitted_curves_round_trip_through_serde() {
     let q = [0.0, 0.01, 0.02, 0.03];
     let c = PumpCurve::fit(&q, &[30.0, 29.0, 26.0, 20.1], 3).unwrap();
     let text = serde_json::to_string(&c).unwrap();
-    assert!(text.contains("\"degree\":3") && !text.contains("coefficients"), "{text}");
+    assert!(
+        text.contains("\"degree\":3") && !text.contains("coefficients"),
+        "{text}"
+    );
     let back: PumpCurve = serde_json::from_str(&text).unwrap();
     assert_eq!(back, c);
     let bad = r#"{"flows":[0.0,0.01,0.02],"heads":[30.0,29.0,26.0],"degree":3}"#;

@@ -60,7 +60,10 @@ fn pe_minimum_walls_match_published_copies() {
     ];
     for (dn, sdr, e) in checked {
         let got = wall_mm(PE, &dn.to_string(), sdr);
-        assert!((got - e).abs() < 1e-9, "PE {dn} {sdr}: {got} mm, printed {e}");
+        assert!(
+            (got - e).abs() < 1e-9,
+            "PE {dn} {sdr}: {got} mm, printed {e}"
+        );
     }
     // SDR 26 from memory of ISO 4427-2: 110 × 4.2, 160 × 6.2, 315 × 12.1.
     for (dn, e) in [(110, 4.2), (160, 6.2), (315, 12.1)] {
@@ -90,11 +93,20 @@ fn plastic_bores_come_from_the_mean_wall() {
     for t in [PipeTable::Pvc, PipeTable::PeIso4427, PipeTable::PvcIso1452] {
         for p in t.sizes() {
             let e = p.minimum_wall.unwrap();
-            assert!(p.wall > e && p.wall - e <= 0.5 * (0.16 * e + 0.00051), "{t} {}", p.nominal);
+            assert!(
+                p.wall > e && p.wall - e <= 0.5 * (0.16 * e + 0.00051),
+                "{t} {}",
+                p.nominal
+            );
         }
     }
     // Metal tables print nominal walls: no minimum wall.
-    assert!(PipeTable::CopperEn1057.sizes().iter().all(|p| p.minimum_wall.is_none()));
+    assert!(
+        PipeTable::CopperEn1057
+            .sizes()
+            .iter()
+            .all(|p| p.minimum_wall.is_none())
+    );
 }
 
 #[test]
@@ -154,7 +166,10 @@ fn copper_en1057_sizes_match_makers_lists() {
         assert!(lookup(CU, od, w).is_ok(), "{od}×{w}");
     }
     // Not an EN 1057 size (from memory): 15 × 2.0.
-    assert_eq!(lookup(CU, "15", "2.0").unwrap_err().kind(), ErrorKind::UnknownName);
+    assert_eq!(
+        lookup(CU, "15", "2.0").unwrap_err().kind(),
+        ErrorKind::UnknownName
+    );
 }
 
 #[test]
@@ -184,7 +199,9 @@ fn schedules_are_read_loosely() {
         assert_eq!(lookup(PipeTable::PeIso4427, "110", s).unwrap(), a, "{s}");
     }
     assert_eq!(
-        lookup(PipeTable::PvcIso1452, "110", "13.6").unwrap().schedule,
+        lookup(PipeTable::PvcIso1452, "110", "13.6")
+            .unwrap()
+            .schedule,
         "SDR 13.6"
     );
 }
@@ -218,10 +235,16 @@ fn unknown_names_suggest_the_close_ones() {
     assert_eq!(e.kind(), ErrorKind::UnknownName);
     assert!(e.to_string().contains("did you mean \"steel\"?"), "{e}");
     let e = "iso4427".parse::<PipeTable>().unwrap_err();
-    assert!(e.to_string().contains("did you mean \"pe_iso4427\"?"), "{e}");
+    assert!(
+        e.to_string().contains("did you mean \"pe_iso4427\"?"),
+        "{e}"
+    );
     let e = lookup(PipeTable::PeIso4427, "110", "SDR 1").unwrap_err();
     let m = e.to_string();
-    assert!(m.contains("did you mean") && m.contains("or \"SDR 11\"?"), "{e}");
+    assert!(
+        m.contains("did you mean") && m.contains("or \"SDR 11\"?"),
+        "{e}"
+    );
     let e = lookup(PipeTable::Steel, "2", "STF").unwrap_err();
     assert!(e.to_string().contains("did you mean \"STD\"?"), "{e}");
     // Nothing close: the list of known names only.

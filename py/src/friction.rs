@@ -77,9 +77,10 @@ pub fn darcy_factor<'py>(
         return Ok(out);
     }
     // Broadcast views (re[:, None] against rr[None, :]) in place, through the core batch.
-    let strided = |a: &core::Strided<'_>, b: &core::Strided<'_>, shape: &[usize], out: &mut [f64]| {
-        core::darcy_factor_batch_strided(a, b, shape, &o, out)
-    };
+    let strided =
+        |a: &core::Strided<'_>, b: &core::Strided<'_>, shape: &[usize], out: &mut [f64]| {
+            core::darcy_factor_batch_strided(a, b, shape, &o, out)
+        };
     if let Some(out) = arrays::broadcast2(py, [re, rel_roughness], strided)? {
         return Ok(out);
     }

@@ -705,12 +705,14 @@ static void test_bad_pointers_others(void) {
    * and Python's pipe_tables(); metric and plastic tables through hg_pipe_size. */
   size_t nt = 0;
   int has_pe = 0;
-  while (hg_pipe_tables(nt, nom, sizeof nom, &need) == HG_OK) {
-    has_pe += strcmp(nom, "pe_iso4427") == 0;
+  char tname[64];
+  while (hg_pipe_tables(nt, tname, sizeof tname, &need) == HG_OK) {
+    has_pe += strcmp(tname, "pe_iso4427") == 0;
     nt++;
   }
   CHECK(nt == 12 && has_pe == 1, "%zu pipe tables", nt);
-  CHECK(hg_pipe_tables(0, nom, sizeof nom, &need) == HG_OK && strcmp(nom, "steel") == 0, "first table");
+  CHECK(hg_pipe_tables(0, tname, sizeof tname, &need) == HG_OK && strcmp(tname, "steel") == 0, "first table");
+  CHECK(hg_pipe_tables(12, tname, sizeof tname, &need) == HG_ERR_OUT_OF_RANGE && msg_len() > 0, "past the last table");
   CHECK(hg_pipe_tables(0, NULL, 0, NULL) == HG_ERR_NULL_POINTER, "tables NULL needed");
   char text[512];
   CHECK(hg_pipe_table_source("pe_iso4427", text, sizeof text, &need) == HG_OK && strstr(text, "ISO 4427"), "PE source");

@@ -108,8 +108,8 @@ pub unsafe extern "C" fn hg_line_operating_point(
     // SAFETY: forwarded contract.
     unsafe {
         crate::line::hg_line_operating_point_fit(
-            line, fluid, pump_flows, pump_heads, n, 0, flow, head, flow_low, flow_high,
-            head_low, head_high,
+            line, fluid, pump_flows, pump_heads, n, 0, flow, head, flow_low, flow_high, head_low,
+            head_high,
         )
     }
 }

@@ -27,11 +27,11 @@ mod solve;
 pub(crate) mod uncertainty;
 
 pub use parallel::{Split, split_flow};
-pub use result::{ElementKind, ElementResult, LineResult, NpshCheck};
-pub use sizing::{Limit, SizeChoice, Sizing};
 pub use pump::{
     PUMP_CURVE_MAX_FLOW, PUMP_CURVE_MAX_HEAD, PUMP_CURVE_MAX_POINTS, PumpCurve, PumpFit,
 };
+pub use result::{ElementKind, ElementResult, LineResult, NpshCheck};
+pub use sizing::{Limit, SizeChoice, Sizing};
 pub use solve::{FlowSolution, OperatingPoint};
 pub use uncertainty::CurveBand;
 

@@ -308,12 +308,7 @@ impl PumpCurve {
         let (x0, x1) = (self.flows[i], self.flows[i + 1]);
         let hgap = x1 - x0;
         let t = (flow - x0) / hgap;
-        let (y0, y1, m0, m1) = (
-            self.heads[i],
-            self.heads[i + 1],
-            slopes[i],
-            slopes[i + 1],
-        );
+        let (y0, y1, m0, m1) = (self.heads[i], self.heads[i + 1], slopes[i], slopes[i + 1]);
         let (t2, t3) = (t * t, t * t * t);
         let h00 = 2.0 * t3 - 3.0 * t2 + 1.0;
         let h10 = t3 - 2.0 * t2 + t;

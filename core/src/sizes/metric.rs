@@ -41,7 +41,10 @@ const fn span<const N: usize>(series: [f64; N], lo: f64, hi: f64) -> [f64; N] {
         }
         i += 1;
     }
-    assert!(seen == 2 || (seen == 1 && lo == hi), "span ends not in the wall series");
+    assert!(
+        seen == 2 || (seen == 1 && lo == hi),
+        "span ends not in the wall series"
+    );
     out
 }
 
@@ -125,8 +128,9 @@ pub const STAINLESS_ISO1127: [(&str, f64, [f64; 14]); 17] = [
 
 const COPPER_WALLS: [f64; 10] = [0.6, 0.7, 0.8, 0.9, 1.0, 1.2, 1.5, 2.0, 2.5, 3.0];
 /// Walls of [`COPPER_EN1057`] (mm), in column order.
-pub const COPPER_EN1057_SCHEDULES: [&str; 10] =
-    ["0.6", "0.7", "0.8", "0.9", "1.0", "1.2", "1.5", "2.0", "2.5", "3.0"];
+pub const COPPER_EN1057_SCHEDULES: [&str; 10] = [
+    "0.6", "0.7", "0.8", "0.9", "1.0", "1.2", "1.5", "2.0", "2.5", "3.0",
+];
 
 const fn cu(walls: &[f64]) -> [f64; 10] {
     pick(COPPER_WALLS, walls)

@@ -41,8 +41,9 @@ pub const PE: [(&str, f64, [f64; 6]); 24] = [
 ];
 
 /// Series of [`PVC_U`], in column order (thinnest wall first).
-pub const PVC_U_SCHEDULES: [&str; 7] =
-    ["SDR 41", "SDR 33", "SDR 26", "SDR 21", "SDR 17", "SDR 13.6", "SDR 11"];
+pub const PVC_U_SCHEDULES: [&str; 7] = [
+    "SDR 41", "SDR 33", "SDR 26", "SDR 21", "SDR 17", "SDR 13.6", "SDR 11",
+];
 
 /// PVC-U pressure pipe, ISO 1452-2 (and EN 1452-2): minimum wall e_min in mm by SDR
 /// (pipe series S = (SDR − 1)/2), dn 20 to 630 (from memory). Cells under 1.5 mm are
@@ -114,9 +115,15 @@ impl WallTolerance {
     /// How the rule reads, for documentation and the table listing.
     pub(crate) fn rule(self) -> &'static str {
         match self {
-            WallTolerance::GradeV => "mean wall = e_min + tolerance/2, tolerance 0.1·e_min + 0.1 mm rounded up to 0.1 mm (ISO 11922-1 grade V, as ISO 4427-2 applies it)",
-            WallTolerance::Pvc => "mean wall = e_min + tolerance/2, tolerance 0.1·e_min + 0.2 mm rounded up to 0.1 mm (ISO 1452-2, from memory)",
-            WallTolerance::D1785 => "mean wall = minimum wall + tolerance/2, tolerance 12 % of the minimum wall, at least 0.020 in, to 0.001 in (ASTM D1785)",
+            WallTolerance::GradeV => {
+                "mean wall = e_min + tolerance/2, tolerance 0.1·e_min + 0.1 mm rounded up to 0.1 mm (ISO 11922-1 grade V, as ISO 4427-2 applies it)"
+            }
+            WallTolerance::Pvc => {
+                "mean wall = e_min + tolerance/2, tolerance 0.1·e_min + 0.2 mm rounded up to 0.1 mm (ISO 1452-2, from memory)"
+            }
+            WallTolerance::D1785 => {
+                "mean wall = minimum wall + tolerance/2, tolerance 12 % of the minimum wall, at least 0.020 in, to 0.001 in (ASTM D1785)"
+            }
         }
     }
 }
