@@ -88,7 +88,8 @@ fn distance(a: &[char], b: &[char]) -> usize {
 /// The names of `known` a person most likely meant by `given`, best first, at most
 /// three: those within one edit per three characters of the loose form (at least one for
 /// names of three characters or more), and those whose loose form contains `given`'s
-/// (three characters or more: "iso4427" finds "pe_iso4427").
+/// (three characters or more: "iso4427" finds "pe_iso4427"); for a number, the known
+/// numbers within 5 % of it ("60" finds the tube "60.3").
 pub(crate) fn suggestions<'a>(
     given: &str,
     known: impl IntoIterator<Item = &'a str>,
@@ -105,6 +106,10 @@ pub(crate) fn suggestions<'a>(
             let kk = key(k);
             let kc: Vec<char> = kk.chars().collect();
             let d = distance(&g, &kc);
+            if let (Ok(a), Ok(b)) = (gs.parse::<f64>(), kk.parse::<f64>()) {
+                // Sizes and walls: numbers within 5 % of each other ("60" for "60.3").
+                return (a > 0.0 && (a - b).abs() <= 0.05 * b.abs()).then_some((d, k));
+            }
             if d <= limit && d < kc.len() {
                 Some((d, k))
             } else if g.len() >= 3 && kk.contains(&gs) {
@@ -207,6 +212,8 @@ mod tests {
         assert!(suggestions("", tables).is_empty());
         // One character is too short to guess from.
         assert!(suggestions("7", ["8", "6", "1/2"]).is_empty());
+        assert_eq!(suggestions("60", ["48.3", "60.3", "76.1"]), vec!["60.3"]);
+        assert_eq!(suggestions("2.9", ["2.6", "2.9", "3.2"]), vec!["2.9"]);
         let m = DidYouMean("colbrook", "colebrook, haaland").to_string();
         assert_eq!(m, "; did you mean \"colebrook\"?");
         assert_eq!(DidYouMean("xyz", "colebrook").to_string(), "");

@@ -247,6 +247,9 @@ fn unknown_names_suggest_the_close_ones() {
     );
     let e = lookup(PipeTable::Steel, "2", "STF").unwrap_err();
     assert!(e.to_string().contains("did you mean \"STD\"?"), "{e}");
+    // A metric tube asked for by a rounded outside diameter.
+    let e = lookup(PipeTable::SteelEn10220, "60", "2.9").unwrap_err();
+    assert!(e.to_string().contains("did you mean \"60.3\"?"), "{e}");
     // Nothing close: the list of known names only.
     let e = "cast_iron".parse::<PipeTable>().unwrap_err();
     assert!(!e.to_string().contains("did you mean"), "{e}");

@@ -47,6 +47,8 @@ def test_exact_quadratic_and_operating_point():
 
     back = pickle.loads(pickle.dumps(fit))
     assert back == fit and back.fit_info == fit.fit_info
+    view = fit._repr_html_()
+    assert "least-squares fit of degree 2" in view and "RMS" in view
 
 
 def test_degenerate_fits_are_clear_errors():
