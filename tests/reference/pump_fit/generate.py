@@ -3,7 +3,7 @@
 An invented pump (H = 42 − 500 Q − 2.0e5 Q², Q in m³/s, H in m) sampled at 9 flows with
 fixed pseudo-measurement noise of a few centimetres; numpy.polyfit (least squares by
 LAPACK's SVD solver) fits degree 2 and 3. Prints the data and the coefficients in
-ascending powers with 17 significant digits.
+ascending powers in shortest round-trip form (repr).
 
 Run: .venv/bin/python tests/reference/pump_fit/generate.py
 """
@@ -18,5 +18,5 @@ print("heads =", [repr(h) for h in heads])
 for degree in (2, 3):
     c = np.polyfit(flows, heads, degree)[::-1]
     r = np.polyval(c[::-1], flows) - np.array(heads)
-    print(f"degree {degree}: coefficients =", [f"{x:.17e}" for x in c])
-    print(f"  rms = {np.sqrt(np.mean(r * r)):.17e}, max = {np.max(np.abs(r)):.17e}")
+    print(f"degree {degree}: coefficients =", [repr(float(x)) for x in c])
+    print(f"  rms = {float(np.sqrt(np.mean(r * r)))!r}, max = {float(np.max(np.abs(r)))!r}")
