@@ -81,7 +81,7 @@ pub fn darcy_factor<'py>(
         |a: &core::Strided<'_>, b: &core::Strided<'_>, shape: &[usize], out: &mut [f64]| {
             core::darcy_factor_batch_strided(a, b, shape, &o, out)
         };
-    if let Some(out) = arrays::broadcast2(py, [re, rel_roughness], strided)? {
+    if let Some(out) = crate::broadcast::broadcast2(py, [re, rel_roughness], strided)? {
         return Ok(out);
     }
     arrays::map(
