@@ -44,13 +44,15 @@
  *  Roughness and pipe sizes
  *             hg_roughness, hg_roughness_material_name, hg_roughness_aged,
  *             hg_pipe_size, hg_pipe_size_at_least, hg_pipe_table_schedule,
- *             hg_pipe_table_nominal
+ *             hg_pipe_table_nominal, hg_pipe_tables,
+ *             hg_pipe_table_source, hg_pipe_table_wall_rule
  *  Pipes      hg_pipe_flow; hg_pipe_head_loss, hg_pipe_head_loss_batch,
  *             hg_duct_flow_state, hg_reynolds
  *  Lines      hg_line (handle), HG_ENTRANCE_*, HG_TURBULENT_DIAMETER_*, HG_LIMIT_*,
  *             hg_sizing; hg_line_new, hg_line_free, hg_line_count, hg_line_add_*,
  *             hg_line_set_*, hg_line_flow_for_head, hg_line_system_curve,
  *             hg_line_operating_point, hg_line_required_head, hg_pump_curve_head,
+ *             hg_pump_curve_fit, hg_pump_curve_fit_head, hg_line_operating_point_fit,
  *             hg_line_with_uniform_diameter, hg_line_size, hg_line_split_flow,
  *             hg_line_split_flow_bands, hg_line_blocks_reverse_flow,
  *             hg_line_set_air_column_for_liquids, hg_line_set_label,
@@ -1353,13 +1355,19 @@ int32_t hg_roughness_aged(double initial,
 
 /**
  * Dimensions of a standard pipe: `table` ("steel" ASME B36.10M, "stainless" ASME
- * B36.19M, "copper" ASTM B88, "pvc" ASTM D1785), `nominal` size as printed ("2",
- * "1-1/2", "3/4") and `schedule` or tube type ("40", "STD", "10S", "K"): outside
- * diameter, wall thickness and inside diameter, all in m.
+ * B36.19M, "copper" ASTM B88, "pvc" ASTM D1785, "steel_en10220" EN 10220 / ISO 4200,
+ * "stainless_iso1127" ISO 1127, "copper_en1057" EN 1057, "pe_iso4427" ISO 4427-2,
+ * "pvc_iso1452" ISO 1452-2, "hygienic_bpe" ASME BPE, "hygienic_din11850" DIN 11850,
+ * "hygienic_iso2037" ISO 2037; `hg_pipe_tables` lists them), `nominal` size as printed
+ * ("2", "1-1/2", "3/4"; metric tube by outside diameter "60.3", plastic pipe by dn
+ * "110") and `schedule`, tube type, SDR series or wall ("40", "STD", "10S", "K",
+ * "SDR 11", "2.9"): outside diameter, wall thickness and inside diameter, all in m. For
+ * plastic pipe the wall is the mean wall the standard's tolerance implies
+ * (`hg_pipe_table_wall_rule`), and the inside diameter follows from it.
  *
  * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` for a table, size or schedule not listed (the
- * message lists the known ones); `HG_ERR_INVALID` for a string not UTF-8;
- * `HG_ERR_NULL_POINTER`. Thread-safe.
+ * message suggests close names and lists the known ones); `HG_ERR_INVALID` for a string
+ * not UTF-8; `HG_ERR_NULL_POINTER`. Thread-safe.
  *
  * # Safety
  * The strings must be NULL or NUL-terminated; the outputs NULL or writable doubles.
@@ -1435,6 +1443,58 @@ int32_t hg_pipe_table_nominal(const char *table,
                               char *buf,
                               size_t len,
                               size_t *needed);
+
+/**
+ * Copies the name of pipe table number `index` (0-based, a fixed order: "steel",
+ * "stainless", "copper", "pvc", "steel_en10220", …) into `buf` (at most `len - 1` bytes
+ * and a NUL) and stores its full length in `*needed`. The same list as Rust's
+ * `sizes::pipe_tables()` and Python's `pipe_tables()`.
+ *
+ * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` when `index` is past the end (use it to count
+ * the tables); `HG_ERR_BUFFER_TOO_SMALL` when the name did not fit (the cut copy is
+ * still written); `HG_ERR_NULL_POINTER` for a NULL `needed`, or a NULL `buf` with
+ * `len` > 0. Thread-safe.
+ *
+ * # Safety
+ * `buf` NULL or valid for writing `len` bytes; `needed` NULL or writable.
+ */
+int32_t hg_pipe_tables(size_t index,
+                       char *buf,
+                       size_t len,
+                       size_t *needed);
+
+/**
+ * Copies the source of pipe `table` (as `hg_pipe_size`: the standard, and "from memory"
+ * or what was checked against published copies) into `buf` (at most `len - 1` bytes and
+ * a NUL) and stores its full length in `*needed`.
+ *
+ * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` for a table (the message suggests close
+ * names); `HG_ERR_BUFFER_TOO_SMALL` when the text did not fit (the cut copy is still
+ * written); `HG_ERR_INVALID` for a name not UTF-8; `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * `table` must be NULL or NUL-terminated; `buf` NULL or valid for writing `len` bytes;
+ * `needed` NULL or writable.
+ */
+int32_t hg_pipe_table_source(const char *table,
+                             char *buf,
+                             size_t len,
+                             size_t *needed);
+
+/**
+ * Copies how pipe `table` works out the wall its bore comes from (nominal wall, or for
+ * plastic pipe the mean wall e_min + tolerance/2 with the tolerance rule and its source)
+ * into `buf`, as `hg_pipe_table_source`.
+ *
+ * Returns and thread-safety as `hg_pipe_table_source`.
+ *
+ * # Safety
+ * As `hg_pipe_table_source`.
+ */
+int32_t hg_pipe_table_wall_rule(const char *table,
+                                char *buf,
+                                size_t len,
+                                size_t *needed);
 
 /**
  * Head loss `*head_loss` (m of fluid, signed with the flow) and its derivative
@@ -2115,6 +2175,73 @@ int32_t hg_pump_curve_head(const double *flows,
 int32_t hg_line_with_uniform_diameter(const struct hg_line *line,
                                       double diameter,
                                       struct hg_line **out);
+
+/**
+ * The least-squares polynomial of `degree` (2 or 3) through `n` pump points (`flows`
+ * ≥ 0 strictly increasing, m³/s; `heads`, m, which may wiggle): H(Q) = Σ c_k Q^k with
+ * `coefficients[0..4]` = c₀ … c₃ in SI units (ascending powers; c₃ = 0 for a quadratic),
+ * `*rms_residual` and `*max_residual` (m) the root mean square and largest |H(Q_i) −
+ * H_i| at the points. At least `degree + 1` points.
+ *
+ * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` for a degree other than 2 or 3, a flow or head
+ * out of range or flows not increasing; `HG_ERR_NOT_FINITE`; `HG_ERR_INVALID` for too
+ * few points or flows too close together; `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * `flows` and `heads` must be NULL or valid for `n` doubles; `coefficients` NULL or
+ * valid for writing 4 doubles; the other outputs NULL or writable.
+ */
+int32_t hg_pump_curve_fit(const double *flows,
+                          const double *heads,
+                          size_t n,
+                          int32_t degree,
+                          double *coefficients,
+                          double *rms_residual,
+                          double *max_residual);
+
+/**
+ * Head `*head` (m) and slope `*dhead_dflow` (s/m²) at `flow` (m³/s, inside the points'
+ * range) of the pump curve through `n` points: `degree` 0 the monotone cubic of
+ * `hg_pump_curve_head`, 2 or 3 the least-squares fit of `hg_pump_curve_fit`.
+ *
+ * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` for a flow outside the curve or a bad degree;
+ * the errors of `hg_pump_curve_head` and `hg_pump_curve_fit` for bad points;
+ * `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * As `hg_pump_curve_head`.
+ */
+int32_t hg_pump_curve_fit_head(const double *flows,
+                               const double *heads,
+                               size_t n,
+                               int32_t degree,
+                               double flow,
+                               double *head,
+                               double *dhead_dflow);
+
+/**
+ * As `hg_line_operating_point`, with the pump curve of `degree`: 0 the monotone cubic
+ * through the points (exactly `hg_line_operating_point`), 2 or 3 the least-squares fit
+ * of `hg_pump_curve_fit`.
+ *
+ * Returns the codes of `hg_line_operating_point`, and `HG_ERR_OUT_OF_RANGE` for a bad
+ * degree. Thread-safe (the line is only read).
+ *
+ * # Safety
+ * As `hg_line_operating_point`.
+ */
+int32_t hg_line_operating_point_fit(const struct hg_line *line,
+                                    const struct hg_fluid *fluid,
+                                    const double *pump_flows,
+                                    const double *pump_heads,
+                                    size_t n,
+                                    int32_t degree,
+                                    double *flow,
+                                    double *head,
+                                    double *flow_low,
+                                    double *flow_high,
+                                    double *head_low,
+                                    double *head_high);
 
 /**
  * Sizes the round pipes of `line` (all set to one inside diameter) for `fluid` at flow

@@ -276,7 +276,17 @@ inline std::pair<std::string, double> source(F get) {
 /// Every unit name hg_convert accepts.
 inline std::vector<std::string> unit_names() { return detail::names(hg_unit_name); }
 
-/// The schedules (or tube types) of a pipe table ("steel", "stainless", "copper", "pvc").
+/// Every pipe table name ("steel", "stainless", "copper", "pvc", "steel_en10220", …).
+inline std::vector<std::string> pipe_tables() { return detail::names(hg_pipe_tables); }
+
+/// The source of a pipe table (standard, and what was checked).
+inline std::string pipe_table_source(const std::string& table) {
+  return detail::text([&](char* buf, std::size_t len, std::size_t* need) {
+    return hg_pipe_table_source(table.c_str(), buf, len, need);
+  });
+}
+
+/// The schedules (or tube types, SDR series, walls) of a pipe table.
 inline std::vector<std::string> pipe_table_schedules(const std::string& table) {
   return detail::names([&](std::size_t i, char* buf, std::size_t len, std::size_t* need) {
     return hg_pipe_table_schedule(table.c_str(), i, buf, len, need);

@@ -5,13 +5,19 @@ use hydrograde::sizes::{self, PipeTable};
 use std::ffi::c_char;
 
 /// Dimensions of a standard pipe: `table` ("steel" ASME B36.10M, "stainless" ASME
-/// B36.19M, "copper" ASTM B88, "pvc" ASTM D1785), `nominal` size as printed ("2",
-/// "1-1/2", "3/4") and `schedule` or tube type ("40", "STD", "10S", "K"): outside
-/// diameter, wall thickness and inside diameter, all in m.
+/// B36.19M, "copper" ASTM B88, "pvc" ASTM D1785, "steel_en10220" EN 10220 / ISO 4200,
+/// "stainless_iso1127" ISO 1127, "copper_en1057" EN 1057, "pe_iso4427" ISO 4427-2,
+/// "pvc_iso1452" ISO 1452-2, "hygienic_bpe" ASME BPE, "hygienic_din11850" DIN 11850,
+/// "hygienic_iso2037" ISO 2037; `hg_pipe_tables` lists them), `nominal` size as printed
+/// ("2", "1-1/2", "3/4"; metric tube by outside diameter "60.3", plastic pipe by dn
+/// "110") and `schedule`, tube type, SDR series or wall ("40", "STD", "10S", "K",
+/// "SDR 11", "2.9"): outside diameter, wall thickness and inside diameter, all in m. For
+/// plastic pipe the wall is the mean wall the standard's tolerance implies
+/// (`hg_pipe_table_wall_rule`), and the inside diameter follows from it.
 ///
 /// Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` for a table, size or schedule not listed (the
-/// message lists the known ones); `HG_ERR_INVALID` for a string not UTF-8;
-/// `HG_ERR_NULL_POINTER`. Thread-safe.
+/// message suggests close names and lists the known ones); `HG_ERR_INVALID` for a string
+/// not UTF-8; `HG_ERR_NULL_POINTER`. Thread-safe.
 ///
 /// # Safety
 /// The strings must be NULL or NUL-terminated; the outputs NULL or writable doubles.
@@ -169,4 +175,93 @@ pub unsafe extern "C" fn hg_pipe_table_nominal(
 ) -> i32 {
     // SAFETY: forwarded contract.
     unsafe { table_item(table, PipeTable::nominal_sizes, index, buf, len, needed) }
+}
+
+/// Copies the name of pipe table number `index` (0-based, a fixed order: "steel",
+/// "stainless", "copper", "pvc", "steel_en10220", …) into `buf` (at most `len - 1` bytes
+/// and a NUL) and stores its full length in `*needed`. The same list as Rust's
+/// `sizes::pipe_tables()` and Python's `pipe_tables()`.
+///
+/// Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` when `index` is past the end (use it to count
+/// the tables); `HG_ERR_BUFFER_TOO_SMALL` when the name did not fit (the cut copy is
+/// still written); `HG_ERR_NULL_POINTER` for a NULL `needed`, or a NULL `buf` with
+/// `len` > 0. Thread-safe.
+///
+/// # Safety
+/// `buf` NULL or valid for writing `len` bytes; `needed` NULL or writable.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_pipe_tables(
+    index: usize,
+    buf: *mut c_char,
+    len: usize,
+    needed: *mut usize,
+) -> i32 {
+    guard(|| {
+        ffi::check_outs(&[out_ptr("needed", needed)])?;
+        let names: Vec<&str> = sizes::pipe_tables().iter().map(|t| t.name()).collect();
+        let name = ffi::list_item("index", &names, index)?;
+        // SAFETY: forwarded contract.
+        unsafe { ffi::copy_name(name, buf, len, needed) }
+    })
+}
+
+/// Copies the text of one property of pipe `table` into `buf`.
+///
+/// # Safety
+/// As `ffi::copy_name`; `table` NULL or a NUL-terminated string.
+unsafe fn table_text(
+    table: *const c_char,
+    text: fn(PipeTable) -> &'static str,
+    buf: *mut c_char,
+    len: usize,
+    needed: *mut usize,
+) -> i32 {
+    guard(|| {
+        ffi::check_outs(&[out_ptr("needed", needed)])?;
+        // SAFETY: forwarded contract.
+        let t = unsafe { ffi::c_str("table", table)? }.parse::<PipeTable>()?;
+        // SAFETY: forwarded contract.
+        unsafe { ffi::copy_name(text(t), buf, len, needed) }
+    })
+}
+
+/// Copies the source of pipe `table` (as `hg_pipe_size`: the standard, and "from memory"
+/// or what was checked against published copies) into `buf` (at most `len - 1` bytes and
+/// a NUL) and stores its full length in `*needed`.
+///
+/// Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` for a table (the message suggests close
+/// names); `HG_ERR_BUFFER_TOO_SMALL` when the text did not fit (the cut copy is still
+/// written); `HG_ERR_INVALID` for a name not UTF-8; `HG_ERR_NULL_POINTER`. Thread-safe.
+///
+/// # Safety
+/// `table` must be NULL or NUL-terminated; `buf` NULL or valid for writing `len` bytes;
+/// `needed` NULL or writable.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_pipe_table_source(
+    table: *const c_char,
+    buf: *mut c_char,
+    len: usize,
+    needed: *mut usize,
+) -> i32 {
+    // SAFETY: forwarded contract.
+    unsafe { table_text(table, PipeTable::source, buf, len, needed) }
+}
+
+/// Copies how pipe `table` works out the wall its bore comes from (nominal wall, or for
+/// plastic pipe the mean wall e_min + tolerance/2 with the tolerance rule and its source)
+/// into `buf`, as `hg_pipe_table_source`.
+///
+/// Returns and thread-safety as `hg_pipe_table_source`.
+///
+/// # Safety
+/// As `hg_pipe_table_source`.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_pipe_table_wall_rule(
+    table: *const c_char,
+    buf: *mut c_char,
+    len: usize,
+    needed: *mut usize,
+) -> i32 {
+    // SAFETY: forwarded contract.
+    unsafe { table_text(table, PipeTable::wall_rule, buf, len, needed) }
 }

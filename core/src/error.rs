@@ -33,7 +33,10 @@ pub enum Error {
         rule: String,
     },
     /// A name (correlation, fitting, material, pipe size, unit…) that is not known.
-    #[error("unknown {what} \"{given}\"; known: {known}")]
+    #[error(
+        "unknown {what} \"{given}\"{}; known: {known}",
+        crate::names::DidYouMean(given, known)
+    )]
     UnknownName {
         /// What kind of name it is, e.g. "correlation".
         what: &'static str,

@@ -48,8 +48,8 @@ pub use units::{STANDARD_GRAVITY, convert, convert_head};
 // Lines, pipes and bands.
 pub use band::{Band, Contribution, UncertaintyOptions};
 pub use line::{
-    Element, Equipment, Limit, Line, LineBuilder, LineOptions, LineResult, PumpCurve, Rise, Share,
-    Shares, split_flow,
+    Element, Equipment, Limit, Line, LineBuilder, LineOptions, LineResult, PumpCurve, PumpFit,
+    Rise, Share, Shares, split_flow,
 };
 pub use pipe::Pipe;
 pub use threads::{set_threads, threads};

@@ -12,7 +12,7 @@
 
 use crate::errors::CoreResult;
 use hydrograde::error::Error;
-use hydrograde::friction::PARALLEL_THRESHOLD;
+use hydrograde::friction::{PARALLEL_THRESHOLD, Strided};
 use hydrograde::units;
 use numpy::ndarray::{ArrayD, IxDyn};
 use numpy::{
@@ -326,6 +326,8 @@ enum Held<'py> {
 enum Input<'a> {
     Const(f64),
     Slice(&'a [f64]),
+    /// A broadcast view of the caller's memory (no copy), with the output's shape.
+    Strided(Strided<'a>, &'a [usize]),
     Owned(Vec<f64>),
 }
 
@@ -335,6 +337,15 @@ impl Input<'_> {
         match self {
             Input::Const(v) => *v,
             Input::Slice(s) => s[i],
+            Input::Strided(v, shape) => {
+                // Flat C-order index to the view's position, innermost axis first.
+                let (mut rest, mut pos) = (i, v.offset as isize);
+                for (&d, &st) in shape.iter().zip(v.strides).rev() {
+                    pos += (rest % d) as isize * st;
+                    rest /= d;
+                }
+                v.data[pos as usize]
+            }
             Input::Owned(v) => v[i],
         }
     }
@@ -423,11 +434,32 @@ where
             Arg::Array(arr) => arr.try_readonly().map(Held::Array),
         })
         .collect::<Result<_, _>>()?;
+    let views: Vec<Option<crate::broadcast::View<'_>>> = held
+        .iter()
+        .map(|h| match h {
+            Held::Array(ro) => crate::broadcast::view(&ro.as_array(), &shape),
+            Held::Scalar(_) => None,
+        })
+        .collect();
     let mut inputs = Vec::with_capacity(N);
-    for h in &held {
-        inputs.push(match h {
-            Held::Scalar(v) => Input::Const(*v),
-            Held::Array(ro) => {
+    for (h, v) in held.iter().zip(&views) {
+        inputs.push(match (h, v) {
+            (Held::Scalar(v), _) => Input::Const(*v),
+            (Held::Array(ro), Some((data, offset, strides))) => {
+                let view = ro.as_array();
+                match (view.shape() == shape.as_slice(), view.to_slice()) {
+                    (true, Some(s)) => Input::Slice(s),
+                    _ => Input::Strided(
+                        Strided {
+                            data,
+                            offset: *offset,
+                            strides,
+                        },
+                        &shape,
+                    ),
+                }
+            }
+            (Held::Array(ro), None) => {
                 let view = ro.as_array();
                 match (view.shape() == shape.as_slice(), view.to_slice()) {
                     (true, Some(s)) => Input::Slice(s),

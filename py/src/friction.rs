@@ -76,6 +76,14 @@ pub fn darcy_factor<'py>(
     if let Some(out) = batch_fast_path(py, re, rel_roughness, &o)? {
         return Ok(out);
     }
+    // Broadcast views (re[:, None] against rr[None, :]) in place, through the core batch.
+    let strided =
+        |a: &core::Strided<'_>, b: &core::Strided<'_>, shape: &[usize], out: &mut [f64]| {
+            core::darcy_factor_batch_strided(a, b, shape, &o, out)
+        };
+    if let Some(out) = crate::broadcast::broadcast2(py, [re, rel_roughness], strided)? {
+        return Ok(out);
+    }
     arrays::map(
         py,
         ["re", "rel_roughness"],

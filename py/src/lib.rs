@@ -6,6 +6,7 @@
 
 mod arrays;
 mod band;
+mod broadcast;
 mod errors;
 mod fitting;
 mod fluid;

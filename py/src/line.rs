@@ -465,6 +465,43 @@ impl PyPumpCurve {
             inner: PumpCurve::new(&flows, &heads).py()?,
         })
     }
+    /// The least-squares polynomial of ``degree`` (2 quadratic, 3 cubic) through
+    /// (flow m³/s, head m) points, at least ``degree + 1``; its coefficients and residual
+    /// are in ``fit_info``. Heads may wiggle; flows must increase strictly.
+    #[classmethod]
+    #[pyo3(signature = (flows, heads, degree = 2))]
+    fn fit(
+        _cls: &Bound<'_, PyType>,
+        #[pyo3(from_py_with = si::flows_vec)] flows: Vec<f64>,
+        #[pyo3(from_py_with = si::heads_vec)] heads: Vec<f64>,
+        degree: i64,
+    ) -> PyResult<Self> {
+        let d = usize::try_from(degree).map_err(|_| {
+            hydrograde::Error::out_of_range(
+                "degree",
+                degree as f64,
+                "must be 2 (quadratic) or 3 (cubic)",
+            )
+        });
+        Ok(PyPumpCurve {
+            inner: d.and_then(|d| PumpCurve::fit(&flows, &heads, d)).py()?,
+        })
+    }
+    /// The least-squares fit as a dict (``degree``; ``coefficients`` c₀… of
+    /// H = Σ c_k Q^k, ascending, SI; ``rms_residual`` and ``max_residual``, m), or None
+    /// for the monotone cubic through the points.
+    #[getter]
+    fn fit_info<'py>(&self, py: Python<'py>) -> PyResult<Option<Bound<'py, PyDict>>> {
+        let Some(f) = self.inner.fit_info() else {
+            return Ok(None);
+        };
+        let d = PyDict::new(py);
+        d.set_item("degree", f.degree)?;
+        d.set_item("coefficients", f.coefficients.clone())?;
+        d.set_item("rms_residual", f.rms_residual)?;
+        d.set_item("max_residual", f.max_residual)?;
+        Ok(Some(d))
+    }
     /// (lowest, highest) flow of the data, m³/s.
     #[getter]
     fn range(&self) -> (f64, f64) {

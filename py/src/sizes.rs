@@ -15,6 +15,7 @@ pub fn size_dict<'py>(py: Python<'py>, s: &PipeSize) -> PyResult<Bound<'py, PyDi
     d.set_item("schedule", &s.schedule)?;
     d.set_item("outside_diameter", s.outside_diameter)?;
     d.set_item("wall", s.wall)?;
+    d.set_item("minimum_wall", s.minimum_wall)?;
     d.set_item("inside_diameter", s.inside_diameter)?;
     Ok(d)
 }
@@ -23,22 +24,26 @@ fn table(name: &str) -> PyResult<PipeTable> {
     name.parse::<PipeTable>().py()
 }
 
-/// The pipe tables: one dict per table with ``name``, ``source`` and ``schedules``.
+/// The pipe tables (the order of Rust's ``sizes::pipe_tables()`` and C's
+/// ``hg_pipe_tables``): one dict per table with ``name``, ``source``, ``wall_rule`` and
+/// ``schedules``.
 #[pyfunction]
 pub fn pipe_tables(py: Python<'_>) -> PyResult<Bound<'_, PyList>> {
     let list = PyList::empty(py);
-    for t in PipeTable::ALL {
+    for &t in sizes::pipe_tables() {
         let d = PyDict::new(py);
         d.set_item("name", t.name())?;
         d.set_item("source", t.source())?;
+        d.set_item("wall_rule", t.wall_rule())?;
         d.set_item("schedules", t.schedules().to_vec())?;
         list.append(d)?;
     }
     Ok(list)
 }
 
-/// Every size of table ``table`` (``"steel"``, ``"stainless"``, ``"copper"``, ``"pvc"``)
-/// as dicts (m).
+/// Every size of table ``table`` (a name from ``pipe_tables()``: ``"steel"``,
+/// ``"pe_iso4427"``, …) as dicts (m; ``minimum_wall`` is None where the standard prints
+/// a nominal wall).
 #[pyfunction]
 pub fn pipe_sizes<'py>(py: Python<'py>, table: &str) -> PyResult<Bound<'py, PyList>> {
     let list = PyList::empty(py);

@@ -709,6 +709,34 @@ static void test_bad_pointers_others(void) {
     found += strcmp(nom, "2-1/2") == 0 && hg_pipe_size("pvc", nom, "40", &x, &y, &z) == HG_OK;
   }
   CHECK(found == 1, "pvc 2-1/2 schedule 40 listed once");
+  /* Table listing: the same twelve names in the same order as Rust's sizes::pipe_tables()
+   * and Python's pipe_tables(); metric and plastic tables through hg_pipe_size. */
+  size_t nt = 0;
+  int has_pe = 0;
+  char tname[64];
+  while (hg_pipe_tables(nt, tname, sizeof tname, &need) == HG_OK) {
+    has_pe += strcmp(tname, "pe_iso4427") == 0;
+    nt++;
+  }
+  CHECK(nt == 12 && has_pe == 1, "%zu pipe tables", nt);
+  CHECK(hg_pipe_tables(0, tname, sizeof tname, &need) == HG_OK && strcmp(tname, "steel") == 0, "first table");
+  CHECK(hg_pipe_tables(12, tname, sizeof tname, &need) == HG_ERR_OUT_OF_RANGE && msg_len() > 0, "past the last table");
+  CHECK(hg_pipe_tables(0, NULL, 0, NULL) == HG_ERR_NULL_POINTER, "tables NULL needed");
+  char text[512];
+  CHECK(hg_pipe_table_source("pe_iso4427", text, sizeof text, &need) == HG_OK && strstr(text, "ISO 4427"), "PE source");
+  CHECK(hg_pipe_table_wall_rule("pvc", text, sizeof text, &need) == HG_OK && strstr(text, "mean wall"), "PVC wall rule");
+  CHECK(hg_pipe_table_source(NULL, text, sizeof text, &need) == HG_ERR_NULL_POINTER, "source NULL table");
+  /* PE 110 SDR 11: e_min 10.0 mm, tolerance 1.1 mm (ISO 4427-2 as printed in published
+   * copies), mean wall 10.55 mm, bore 88.9 mm (exact arithmetic). */
+  CHECK(hg_pipe_size("pe_iso4427", "110", "SDR 11", &x, &y, &z) == HG_OK && fabs(z - 0.0889) < 1e-15
+        && fabs(y - 0.01055) < 1e-15, "PE 110 SDR 11: bore %.17g", z);
+  /* DIN 11850 series 2, DN 25: 29 x 1.5 mm, bore 26 mm (DIN 11850:1985 Table 1, published copy). */
+  CHECK(hg_pipe_size("hygienic_din11850", "29", "2", &x, &y, &z) == HG_OK && fabs(z - 0.026) < 1e-15, "DIN 11850 29 x 1.5");
+  CHECK(hg_pipe_size("stel", "2", "40", &x, &y, &z) == HG_ERR_UNKNOWN_NAME, "misspelt table");
+  hg_last_error(text, sizeof text);
+  CHECK(strstr(text, "did you mean \"steel\"?") != NULL, "suggestion: %s", text);
+  CHECK(hg_pipe_size_at_least("copper_en1057", "1.0", 0.0195, &z, nom, sizeof nom, &need) == HG_OK
+        && strcmp(nom, "22") == 0, "EN 1057 1.0 mm wall, 20 mm bore: %s", nom);
   hg_pipe_flow st;
   st.struct_size = 3;
   CHECK(hg_duct_flow_state(0, 0.05, 0, 1, 0, 998, 1e-3, 1e-3, &st) == HG_ERR_INVALID, "struct_size 3");

@@ -1026,6 +1026,48 @@ static void test_builder(void) {
   hg_line_free(tail);
   hg_fluid_free(w);
   hg_line_free(l);
+/* Least-squares pump curves: points on H = 40 - 20000 Q^2 (exact quadratic) give that
+ * parabola back (exact solution); the operating point with either curve meets the line's
+ * required head; degree 0 is exactly hg_line_operating_point. */
+static void test_pump_fit(void) {
+  double q[7], h[7], c[4], rms, mx, hd, dh, o[6], p[6], need, dneed;
+  for (int i = 0; i < 7; i++) {
+    q[i] = 0.005 * i;
+    h[i] = 40.0 - 20000.0 * q[i] * q[i];
+  }
+  CHECK(hg_pump_curve_fit(q, h, 7, 2, c, &rms, &mx) == HG_OK, "fit: %s", last_msg());
+  CHECK(fabs(c[0] - 40.0) < 1e-11 && fabs(c[1]) < 1e-8 && fabs(c[2] / -20000.0 - 1) < 1e-11 && c[3] == 0.0,
+        "fit coefficients %.17g %.17g %.17g %.17g", c[0], c[1], c[2], c[3]);
+  CHECK(rms < 1e-12 && mx < 1e-12, "exact data: residual %g %g", rms, mx);
+  CHECK(hg_pump_curve_fit_head(q, h, 7, 2, 0.015, &hd, &dh) == HG_OK && fabs(hd - 35.5) < 1e-11
+        && fabs(dh / -600.0 - 1) < 1e-10, "fit head %.17g slope %.17g", hd, dh);
+  hg_fluid *w = NULL;
+  hg_line *l = NULL;
+  CHECK(hg_fluid_water(293.15, 101325.0, &w) == HG_OK && hg_line_new(&l) == HG_OK, "handles");
+  CHECK(hg_line_add_pipe(l, 0.08, 150.0, 4.5e-5) == HG_OK && hg_line_add_rise(l, 12.0) == HG_OK, "line");
+  CHECK(hg_line_operating_point_fit(l, w, q, h, 7, 2, &o[0], &o[1], &o[2], &o[3], &o[4], &o[5]) == HG_OK,
+        "op fit: %s", last_msg());
+  CHECK(hg_line_required_head(l, w, o[0], &need, &dneed) == HG_OK && fabs(need / o[1] - 1) < 1e-9,
+        "op fit meets the line: %.17g vs %.17g", need, o[1]);
+  CHECK(hg_pump_curve_fit_head(q, h, 7, 2, o[0], &hd, &dh) == HG_OK && hd == o[1], "op head on the fit");
+  CHECK(hg_line_operating_point_fit(l, w, q, h, 7, 0, &o[0], &o[1], &o[2], &o[3], &o[4], &o[5]) == HG_OK
+        && hg_line_operating_point(l, w, q, h, 7, &p[0], &p[1], &p[2], &p[3], &p[4], &p[5]) == HG_OK
+        && memcmp(o, p, sizeof o) == 0, "degree 0 is the monotone cubic, bit for bit");
+  /* Bad input: degree, too few points, flows not increasing, NaN, NULL. */
+  CHECK(hg_pump_curve_fit(q, h, 7, 4, c, &rms, &mx) == HG_ERR_OUT_OF_RANGE && msg_len() > 0, "degree 4");
+  CHECK(hg_pump_curve_fit(q, h, 7, 0, c, &rms, &mx) == HG_ERR_OUT_OF_RANGE, "degree 0 is not a fit");
+  CHECK(hg_pump_curve_fit(q, h, 3, 3, c, &rms, &mx) == HG_ERR_INVALID, "3 points for a cubic");
+  CHECK(hg_line_operating_point_fit(l, w, q, h, 7, -1, &o[0], &o[1], &o[2], &o[3], &o[4], &o[5]) == HG_ERR_OUT_OF_RANGE,
+        "op degree -1");
+  double qq[4] = {0.0, 0.02, 0.01, 0.03};
+  CHECK(hg_pump_curve_fit(qq, h, 4, 2, c, &rms, &mx) == HG_ERR_OUT_OF_RANGE, "flows not increasing");
+  h[2] = NAN;
+  CHECK(hg_pump_curve_fit(q, h, 7, 2, c, &rms, &mx) == HG_ERR_NOT_FINITE, "NaN head");
+  CHECK(hg_pump_curve_fit(NULL, h, 7, 2, c, &rms, &mx) == HG_ERR_NULL_POINTER, "NULL flows");
+  CHECK(hg_pump_curve_fit(q, h, 7, 2, NULL, &rms, &mx) == HG_ERR_NULL_POINTER, "NULL coefficients");
+  CHECK(hg_pump_curve_fit_head(q, h, 7, 2, 0.01, NULL, &dh) == HG_ERR_NULL_POINTER, "NULL head");
+  hg_line_free(l);
+  hg_fluid_free(w);
 }
 
 int main(int argc, char **argv) {
@@ -1052,6 +1094,7 @@ int main(int argc, char **argv) {
   bad += for_each_record(ref_path, "line_operating_point", check_solve_record, 0);
   bad += for_each_record(ref_path, "line_s", check_solve_record, 0);
   test_solves_bad_input();
+  test_pump_fit();
   test_more_elements_bad_input();
   printf("bitwise: line records, %ld differ\n", bad);
   test_handles_and_bad_input();

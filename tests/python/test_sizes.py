@@ -26,7 +26,10 @@ def test_materials_and_aging():
 
 def test_pipe_tables():
     tables = {t["name"]: t for t in hg.pipe_tables()}
-    assert set(tables) == {"steel", "stainless", "copper", "pvc"}
+    assert list(tables) == ["steel", "stainless", "copper", "pvc", "steel_en10220", "stainless_iso1127",
+                            "copper_en1057", "pe_iso4427", "pvc_iso1452", "hygienic_bpe",
+                            "hygienic_din11850", "hygienic_iso2037"]
+    assert "mean wall" in tables["pe_iso4427"]["wall_rule"]
     two = hg.pipe_size("steel", "2", "40")
     # ASME B36.10M: NPS 2 schedule 40 has a 2.067 in bore (from memory).
     assert two["inside_diameter"] == pytest.approx(2.067 * 0.0254, rel=1e-12)
@@ -54,3 +57,38 @@ def test_sizing_meets_the_limit_exactly_at_the_minimum_bore():
         line.size(water, 0.01)
     with pytest.raises(hg.InvalidInputError, match="both table and schedule"):
         line.size(water, 0.01, max_velocity=2.0, table="steel")
+
+
+def test_metric_and_plastic_tables():
+    # ISO 4427-2 110 SDR 11: e_min 10.0 mm, e_max 11.1 mm (published copies, see
+    # core/tests/sizes_metric.rs); mean wall 10.55 mm, bore 88.9 mm (exact arithmetic).
+    pe = hg.pipe_size("pe_iso4427", "110", "sdr11")
+    assert pe["minimum_wall"] == pytest.approx(0.010, rel=1e-15)
+    assert pe["inside_diameter"] == pytest.approx(0.0889, rel=1e-14)
+    # ASTM D1785 NPS 2 sch 40: bore from the mean wall 0.154 + 0.010 in = 2.047 in.
+    assert hg.pipe_size("pvc", "2", "40")["inside_diameter"] == pytest.approx(2.047 * 0.0254, rel=1e-14)
+    assert hg.pipe_size("steel", "2", "40")["minimum_wall"] is None
+    # Every table sizes: the answer is the smallest that fits (exact by exhaustion).
+    for t in hg.pipe_tables():
+        for s in t["schedules"]:
+            try:
+                p = hg.smallest_pipe(t["name"], s, 0.04)
+            except hg.OutOfRangeError:
+                continue
+            same = [q["inside_diameter"] for q in hg.pipe_sizes(t["name"]) if q["schedule"] == s]
+            assert p["inside_diameter"] == min(d for d in same if d >= 0.04)
+    water = hg.Fluid.water(288.15)
+    line = hg.Line([hg.Pipe.of_material(0.1, 100.0, "hdpe"), hg.Fitting.exit()])
+    s = line.size(water, 0.01, max_velocity=2.0, table="pe_iso4427", schedule="SDR 17")
+    # Continuity: d_min = sqrt(4Q/(πV)) = 79.8 mm; SDR 17 dn 90 has 90 − 2·5.75 = 78.5 mm,
+    # dn 110 has 110 − 2·7.0 = 96.0 mm (mean walls; e_min 5.4 and 6.6 mm, ISO 4427-2).
+    assert s.standard["nominal"] == "110"
+
+
+def test_unknown_tables_and_sizes_suggest_close_names():
+    with pytest.raises(hg.UnknownNameError, match='did you mean "steel"'):
+        hg.pipe_size("stel", "2", "40")
+    with pytest.raises(hg.UnknownNameError, match='did you mean "pe_iso4427"'):
+        hg.smallest_pipe("iso4427", "SDR 11", 0.05)
+    with pytest.raises(hg.UnknownNameError, match='did you mean "STD"'):
+        hg.pipe_size("steel", "2", "STF")

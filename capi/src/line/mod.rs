@@ -6,6 +6,8 @@ mod builder;
 
 mod solve;
 
+mod pump;
+
 mod sizing;
 
 mod parallel;
@@ -16,6 +18,7 @@ mod uncertainty;
 
 pub use builder::*;
 pub use parallel::*;
+pub use pump::*;
 pub use result::*;
 pub use sizing::*;
 pub use solve::*;

@@ -4,7 +4,6 @@
 use crate::ffi::{self, guard, out_ptr, put};
 use crate::fluid::hg_fluid;
 use crate::line::hg_line;
-use hydrograde::line::PumpCurve;
 
 /// The flow `*flow` (m³/s, signed: negative when `head` is below the static head) at
 /// which the line's required head equals `head` (m of the flowing fluid), with the ends
@@ -106,37 +105,13 @@ pub unsafe extern "C" fn hg_line_operating_point(
     head_low: *mut f64,
     head_high: *mut f64,
 ) -> i32 {
-    guard(|| {
-        ffi::check_outs(&[
-            out_ptr("flow", flow),
-            out_ptr("head", head),
-            out_ptr("flow_low", flow_low),
-            out_ptr("flow_high", flow_high),
-            out_ptr("head_low", head_low),
-            out_ptr("head_high", head_high),
-        ])?;
-        // SAFETY: forwarded contract.
-        let (l, f, q, h) = unsafe {
-            let (l, f) = crate::line::line_and_fluid(line, fluid)?;
-            (
-                l,
-                f,
-                ffi::slice("pump_flows", pump_flows, n)?,
-                ffi::slice("pump_heads", pump_heads, n)?,
-            )
-        };
-        let pump = PumpCurve::new(q, h)?;
-        let op = l.operating_point(f, &pump)?;
-        // SAFETY: forwarded contract; checked above.
-        unsafe {
-            put("flow", flow, op.flow)?;
-            put("head", head, op.head)?;
-            put("flow_low", flow_low, op.flow_band.low)?;
-            put("flow_high", flow_high, op.flow_band.high)?;
-            put("head_low", head_low, op.head_band.low)?;
-            put("head_high", head_high, op.head_band.high)
-        }
-    })
+    // SAFETY: forwarded contract.
+    unsafe {
+        crate::line::hg_line_operating_point_fit(
+            line, fluid, pump_flows, pump_heads, n, 0, flow, head, flow_low, flow_high, head_low,
+            head_high,
+        )
+    }
 }
 
 /// Required head `*head` (m of the flowing fluid) of `line` for `fluid` at signed flow
@@ -192,22 +167,8 @@ pub unsafe extern "C" fn hg_pump_curve_head(
     head: *mut f64,
     dhead_dflow: *mut f64,
 ) -> i32 {
-    guard(|| {
-        ffi::check_outs(&[out_ptr("head", head), out_ptr("dhead_dflow", dhead_dflow)])?;
-        // SAFETY: forwarded contract.
-        let (q, h) = unsafe {
-            (
-                ffi::slice("flows", flows, n)?,
-                ffi::slice("heads", heads, n)?,
-            )
-        };
-        let (v, d) = PumpCurve::new(q, h)?.head(flow)?;
-        // SAFETY: forwarded contract; checked above.
-        unsafe {
-            put("head", head, v)?;
-            put("dhead_dflow", dhead_dflow, d)
-        }
-    })
+    // SAFETY: forwarded contract.
+    unsafe { crate::line::hg_pump_curve_fit_head(flows, heads, n, 0, flow, head, dhead_dflow) }
 }
 
 /// Makes a new line, stored in `*out`, equal to `line` with every round pipe set to

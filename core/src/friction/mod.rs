@@ -27,10 +27,12 @@
 mod colebrook;
 mod explicit;
 mod kernel;
+mod strided;
 
 #[cfg(test)]
 pub(crate) use colebrook::calls as colebrook_calls;
 pub use kernel::Isa;
+pub use strided::{Strided, darcy_factor_batch_strided};
 
 use crate::error::{Error, Result, check};
 use crate::warning::Warnings;

@@ -18,6 +18,7 @@
 mod builder;
 mod eval;
 mod path;
+mod pump;
 pub(crate) use path::{Resolved, Role};
 mod parallel;
 mod result;
@@ -30,10 +31,13 @@ pub(crate) mod uncertainty;
 use builder::LineSpec;
 pub use builder::{LineBuilder, MAX_COUNT, MAX_LABEL_CHARS, Tag, check_count, check_label};
 pub use parallel::{Split, split_flow};
+pub use pump::{
+    PUMP_CURVE_MAX_FLOW, PUMP_CURVE_MAX_HEAD, PUMP_CURVE_MAX_POINTS, PumpCurve, PumpFit,
+};
 pub use result::{ElementKind, ElementResult, LineResult, NpshCheck};
 pub use shares::{Share, Shares};
 pub use sizing::{Limit, SizeChoice, Sizing};
-pub use solve::{FlowSolution, OperatingPoint, PumpCurve};
+pub use solve::{FlowSolution, OperatingPoint};
 pub use uncertainty::CurveBand;
 
 use crate::band::UncertaintyOptions;

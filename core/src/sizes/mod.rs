@@ -1,17 +1,38 @@
 //! Real pipe sizes: outside diameter, wall and inside diameter of standard pipe and tube.
 //!
-//! | table | standard | sizes | schedules / types |
+//! | table | standard | sizes | schedules / series / walls |
 //! |---|---|---|---|
 //! | [`PipeTable::Steel`] | ASME B36.10M | NPS 1/8 … 24 | 10, 40, 80, STD, XS |
 //! | [`PipeTable::Stainless`] | ASME B36.19M | NPS 1/8 … 24 | 5S, 10S, 40S, 80S |
 //! | [`PipeTable::Copper`] | ASTM B88 | 1/4 … 12 | K, L, M |
 //! | [`PipeTable::Pvc`] | ASTM D1785 | NPS 1/8 … 24 | 40, 80 |
+//! | [`PipeTable::SteelEn10220`] | EN 10220 / ISO 4200 | OD 10.2 … 610 mm | wall 1.6 … 12.5 mm |
+//! | [`PipeTable::StainlessIso1127`] | ISO 1127 | OD 10.2 … 323.9 mm | wall 1.0 … 6.3 mm |
+//! | [`PipeTable::CopperEn1057`] | EN 1057 | OD 6 … 219 mm | wall 0.6 … 3.0 mm |
+//! | [`PipeTable::PeIso4427`] | ISO 4427-2 | dn 20 … 630 mm | SDR 33 … SDR 11 |
+//! | [`PipeTable::PvcIso1452`] | ISO 1452-2 | dn 20 … 630 mm | SDR 41 … SDR 11 |
+//! | [`PipeTable::HygienicBpe`] | ASME BPE | OD 1/4 … 6 in | wall 0.035 … 0.109 in |
+//! | [`PipeTable::HygienicDin11850`] | DIN 11850 | OD 12 … 154 mm | series 1, 2, 3 |
+//! | [`PipeTable::HygienicIso2037`] | ISO 2037 | OD 12 … 219.1 mm | wall 1.0 … 2.6 mm |
 //!
-//! The tables are typed in inches from memory of the standards (see `tables.rs`) and
-//! converted with 1 in = 0.0254 m exactly (NIST SP 811). Inside diameter = outside
-//! diameter − 2 × wall, nominal (real pipe varies within the standards' tolerances).
+//! US tables are typed in inches, metric ones in mm, as the standards print them, and
+//! converted with 1 in = 0.0254 m and 1 mm = 0.001 m exactly (NIST SP 811). Inside
+//! diameter = outside diameter − 2 × wall. For metal pipe and tube the wall is the
+//! printed nominal wall (their tolerances are symmetric, or for B36.10M/B36.19M a mill
+//! tolerance below). Plastic pipe standards print a *minimum* wall with a tolerance above
+//! it only, so there the wall is the mean wall the tolerance implies, e_min + tolerance/2
+//! ([`PipeTable::wall_rule`] states each rule and its source): a bore from the minimum
+//! wall would be the largest the standard allows, about 1 % too large, and predict about
+//! 5 % less friction than real pipe. Real pipe varies within the standards' tolerances.
+//! Metric tube is designated by outside diameter × wall, so its nominal size is the
+//! outside diameter as printed (`"60.3"`) and, where the standard has no named series,
+//! its "schedule" is the wall as printed (`"2.9"`).
 
+mod metric;
+mod plastic;
 mod tables;
+
+use plastic::WallTolerance;
 
 use crate::error::{Error, Result, check};
 use serde::{Deserialize, Serialize};
@@ -20,6 +41,8 @@ use std::str::FromStr;
 
 /// Metres per inch, exact (NIST SP 811).
 const INCH: f64 = 0.0254;
+/// Metres per millimetre, exact.
+const MM: f64 = 0.001;
 
 /// A table of standard pipe or tube dimensions.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, Serialize, Deserialize)]
@@ -32,6 +55,22 @@ pub enum PipeTable {
     Copper,
     /// PVC pressure pipe, ASTM D1785 (`"pvc"`).
     Pvc,
+    /// Steel tube, EN 10220 / ISO 4200 series 1 (`"steel_en10220"`).
+    SteelEn10220,
+    /// Stainless steel tube, ISO 1127 (`"stainless_iso1127"`).
+    StainlessIso1127,
+    /// Copper tube for water and gas, EN 1057 (`"copper_en1057"`).
+    CopperEn1057,
+    /// PE pressure pipe, ISO 4427-2 (`"pe_iso4427"`).
+    PeIso4427,
+    /// PVC-U pressure pipe, ISO 1452-2 (`"pvc_iso1452"`).
+    PvcIso1452,
+    /// Hygienic tubing, ASME BPE (`"hygienic_bpe"`).
+    HygienicBpe,
+    /// Hygienic stainless tube, DIN 11850 series 1–3 (`"hygienic_din11850"`).
+    HygienicDin11850,
+    /// Hygienic stainless tube, ISO 2037 (`"hygienic_iso2037"`).
+    HygienicIso2037,
 }
 
 /// One standard size: a nominal size in one schedule (or tube type), lengths in metres.
@@ -45,8 +84,13 @@ pub struct PipeSize {
     pub schedule: String,
     /// Outside diameter, m.
     pub outside_diameter: f64,
-    /// Wall thickness, m.
+    /// Wall thickness the bore is worked from, m: the printed wall, or for plastic pipe
+    /// the mean wall its standard's tolerance implies (see [`PipeTable::wall_rule`]).
     pub wall: f64,
+    /// The minimum wall the standard prints, m, where it prints a minimum wall (plastic
+    /// pipe); `None` where it prints a nominal wall.
+    #[serde(default)]
+    pub minimum_wall: Option<f64>,
     /// Inside diameter (outside diameter − 2 × wall), m.
     pub inside_diameter: f64,
 }
@@ -55,20 +99,67 @@ type Row = (&'static str, f64, &'static [f64]);
 
 impl PipeTable {
     /// Every table, in a fixed order.
-    pub const ALL: [PipeTable; 4] = [
+    pub const ALL: [PipeTable; 12] = [
         PipeTable::Steel,
         PipeTable::Stainless,
         PipeTable::Copper,
         PipeTable::Pvc,
+        PipeTable::SteelEn10220,
+        PipeTable::StainlessIso1127,
+        PipeTable::CopperEn1057,
+        PipeTable::PeIso4427,
+        PipeTable::PvcIso1452,
+        PipeTable::HygienicBpe,
+        PipeTable::HygienicDin11850,
+        PipeTable::HygienicIso2037,
     ];
 
-    /// The name used by every binding: `"steel"`, `"stainless"`, `"copper"`, `"pvc"`.
+    /// The name used by every binding: `"steel"`, `"stainless"`, `"copper"`, `"pvc"`,
+    /// `"steel_en10220"`, `"stainless_iso1127"`, `"copper_en1057"`, `"pe_iso4427"`,
+    /// `"pvc_iso1452"`, `"hygienic_bpe"`, `"hygienic_din11850"`, `"hygienic_iso2037"`.
     pub fn name(self) -> &'static str {
         match self {
             PipeTable::Steel => "steel",
             PipeTable::Stainless => "stainless",
             PipeTable::Copper => "copper",
             PipeTable::Pvc => "pvc",
+            PipeTable::SteelEn10220 => "steel_en10220",
+            PipeTable::StainlessIso1127 => "stainless_iso1127",
+            PipeTable::CopperEn1057 => "copper_en1057",
+            PipeTable::PeIso4427 => "pe_iso4427",
+            PipeTable::PvcIso1452 => "pvc_iso1452",
+            PipeTable::HygienicBpe => "hygienic_bpe",
+            PipeTable::HygienicDin11850 => "hygienic_din11850",
+            PipeTable::HygienicIso2037 => "hygienic_iso2037",
+        }
+    }
+
+    /// Metres per printed unit of the table (inch or mm).
+    fn unit(self) -> f64 {
+        match self {
+            PipeTable::Steel
+            | PipeTable::Stainless
+            | PipeTable::Copper
+            | PipeTable::Pvc
+            | PipeTable::HygienicBpe => INCH,
+            _ => MM,
+        }
+    }
+
+    fn tolerance(self) -> Option<WallTolerance> {
+        match self {
+            PipeTable::Pvc => Some(WallTolerance::D1785),
+            PipeTable::PeIso4427 => Some(WallTolerance::GradeV),
+            PipeTable::PvcIso1452 => Some(WallTolerance::Pvc),
+            _ => None,
+        }
+    }
+
+    /// How the table's wall (and so its bore) is worked out, with the rule's source.
+    pub fn wall_rule(self) -> &'static str {
+        match self.tolerance() {
+            Some(t) => t.rule(),
+            None => "nominal wall as printed (tolerances symmetric or below the nominal wall)",
         }
     }
 
@@ -81,6 +172,28 @@ impl PipeTable {
             PipeTable::Stainless => "ASME B36.19M, stainless steel pipe (from memory)",
             PipeTable::Copper => "ASTM B88, seamless copper water tube (from memory)",
             PipeTable::Pvc => "ASTM D1785, PVC plastic pipe, schedules 40 and 80 (from memory)",
+            PipeTable::SteelEn10220 => {
+                "EN 10220 / ISO 4200, plain end steel tubes, series 1 outside diameters with common walls (from memory)"
+            }
+            PipeTable::StainlessIso1127 => {
+                "ISO 1127, stainless steel tubes, series 1 outside diameters with common walls (from memory)"
+            }
+            PipeTable::CopperEn1057 => {
+                "EN 1057, seamless round copper tubes for water and gas (from memory, partly checked against published lists)"
+            }
+            PipeTable::PeIso4427 => {
+                "ISO 4427-2, PE pipes for water supply, minimum walls by SDR (checked against published copies)"
+            }
+            PipeTable::PvcIso1452 => {
+                "ISO 1452-2, PVC-U pipes for water supply, minimum walls by SDR (from memory)"
+            }
+            PipeTable::HygienicBpe => "ASME BPE, hygienic tubing OD sizes (from memory)",
+            PipeTable::HygienicDin11850 => {
+                "DIN 11850 (1985), stainless tubes for the food industry, series 1 to 3 (checked against a published copy)"
+            }
+            PipeTable::HygienicIso2037 => {
+                "ISO 2037, stainless tubes for the food industry (from memory)"
+            }
         }
     }
 
@@ -91,6 +204,14 @@ impl PipeTable {
             PipeTable::Stainless => &tables::STAINLESS_SCHEDULES,
             PipeTable::Copper => &tables::COPPER_SCHEDULES,
             PipeTable::Pvc => &tables::PVC_SCHEDULES,
+            PipeTable::SteelEn10220 => &metric::STEEL_EN10220_SCHEDULES,
+            PipeTable::StainlessIso1127 => &metric::STAINLESS_ISO1127_SCHEDULES,
+            PipeTable::CopperEn1057 => &metric::COPPER_EN1057_SCHEDULES,
+            PipeTable::PeIso4427 => &plastic::PE_SCHEDULES,
+            PipeTable::PvcIso1452 => &plastic::PVC_U_SCHEDULES,
+            PipeTable::HygienicBpe => &metric::HYGIENIC_BPE_SCHEDULES,
+            PipeTable::HygienicDin11850 => &metric::HYGIENIC_DIN11850_SCHEDULES,
+            PipeTable::HygienicIso2037 => &metric::HYGIENIC_ISO2037_SCHEDULES,
         }
     }
 
@@ -110,14 +231,30 @@ impl PipeTable {
             PipeTable::Stainless => boxed(&tables::STAINLESS),
             PipeTable::Copper => boxed(&tables::COPPER),
             PipeTable::Pvc => boxed(&tables::PVC),
+            PipeTable::SteelEn10220 => boxed(&metric::STEEL_EN10220),
+            PipeTable::StainlessIso1127 => boxed(&metric::STAINLESS_ISO1127),
+            PipeTable::CopperEn1057 => boxed(&metric::COPPER_EN1057),
+            PipeTable::PeIso4427 => boxed(&plastic::PE),
+            PipeTable::PvcIso1452 => boxed(&plastic::PVC_U),
+            PipeTable::HygienicBpe => boxed(&metric::HYGIENIC_BPE),
+            PipeTable::HygienicDin11850 => boxed(&metric::HYGIENIC_DIN11850),
+            PipeTable::HygienicIso2037 => boxed(&metric::HYGIENIC_ISO2037),
         }
     }
 
+    /// The column of `schedule`: matched loosely ("sdr11" is "SDR 11", "10s" is "10S"),
+    /// or by value where both are numbers ("2.90" is wall "2.9").
     fn schedule_index(self, schedule: &str) -> Result<usize> {
-        let want = schedule.trim().to_ascii_uppercase();
+        let want = crate::names::key(schedule);
+        let number = schedule.trim().parse::<f64>().ok();
         self.schedules()
             .iter()
-            .position(|s| *s == want)
+            .position(|s| {
+                let k = crate::names::key(s);
+                k == want
+                    || k == format!("sdr{want}")
+                    || (number.is_some() && s.parse::<f64>().ok() == number)
+            })
             .ok_or_else(|| Error::unknown_name(schedule_word(self), schedule, self.schedules()))
     }
 
@@ -134,25 +271,40 @@ impl PipeTable {
         out
     }
 
-    fn size(self, nominal: &str, schedule: &str, od_in: f64, wall_in: f64) -> PipeSize {
+    /// The size from a row's printed outside diameter and wall (inches or mm).
+    fn size(self, nominal: &str, schedule: &str, od: f64, printed_wall: f64) -> PipeSize {
+        let unit = self.unit();
+        let (wall, minimum_wall) = match self.tolerance() {
+            Some(t) => (t.mean_wall(printed_wall), Some(printed_wall * unit)),
+            None => (printed_wall, None),
+        };
         PipeSize {
             table: self,
             nominal: nominal.to_string(),
             schedule: schedule.to_string(),
-            outside_diameter: od_in * INCH,
-            wall: wall_in * INCH,
-            // Subtract in inches, where the printed values are exact decimals.
-            inside_diameter: (od_in - 2.0 * wall_in) * INCH,
+            outside_diameter: od * unit,
+            wall: wall * unit,
+            minimum_wall,
+            // Subtract in printed units, where the values are exact decimals.
+            inside_diameter: (od - 2.0 * wall) * unit,
         }
     }
 }
 
 fn schedule_word(table: PipeTable) -> &'static str {
-    if table == PipeTable::Copper {
-        "copper tube type"
-    } else {
-        "schedule"
+    match table {
+        PipeTable::Copper => "copper tube type",
+        PipeTable::PeIso4427 | PipeTable::PvcIso1452 => "SDR series",
+        PipeTable::HygienicDin11850 => "tube series",
+        PipeTable::Steel | PipeTable::Stainless | PipeTable::Pvc => "schedule",
+        _ => "wall",
     }
+}
+
+/// Every pipe table, in the fixed order of [`PipeTable::ALL`] (C: `hg_pipe_tables`,
+/// Python: `pipe_tables()`).
+pub fn pipe_tables() -> &'static [PipeTable] {
+    &PipeTable::ALL
 }
 
 impl fmt::Display for PipeTable {
@@ -191,8 +343,10 @@ fn parse_nominal(s: &str) -> Option<f64> {
     (v.is_finite() && v > 0.0).then_some(v)
 }
 
-/// The size `nominal` (e.g. `"2"`, `"1-1/2"`, `"1.5"`) in `schedule` (e.g. `"40"`,
-/// `"std"`, `"10S"`, `"L"`; case does not matter) of `table`.
+/// The size `nominal` (e.g. `"2"`, `"1-1/2"`, `"1.5"`; metric tube by its outside
+/// diameter, `"60.3"`, plastic pipe by dn, `"110"`) in `schedule` (e.g. `"40"`, `"std"`,
+/// `"10S"`, `"L"`, `"SDR 11"` or `"11"`, a wall `"2.9"`, a DIN 11850 series `"2"`; case
+/// and spaces do not matter) of `table`.
 ///
 /// ```
 /// use hydrograde::sizes::{lookup, PipeTable};

@@ -107,8 +107,9 @@ pub const COPPER: [(&str, f64, [f64; 3]); 18] = [
 pub const PVC_SCHEDULES: [&str; 2] = ["40", "80"];
 
 /// PVC pressure pipe, ASTM D1785, schedules 40 and 80, NPS 1/8 to 24 (from memory). The
-/// walls are the standard's minimum walls, so the inside diameter is the largest the
-/// standard allows; the outside diameters are those of steel pipe.
+/// walls are the standard's minimum walls; the bore is worked from the mean wall its
+/// tolerance implies (see `plastic::WallTolerance::D1785`). The outside diameters are
+/// those of steel pipe.
 pub const PVC: [(&str, f64, [f64; 2]); 23] = [
     ("1/8", 0.405, [0.068, 0.095]),
     ("1/4", 0.540, [0.088, 0.119]),

@@ -441,7 +441,13 @@ def _pump(obj: Any) -> str:
     body = (f"<div>data from {value_text('flow', lo)} to {value_text('flow', hi)} "
             f"{html.escape(unit_text('flow'))} (no extrapolation)</div>"
             + _table([_heading("flow"), _heading("head")], rows))
-    return _frame("PumpCurve · monotone cubic through the data", body)
+    fit = getattr(obj, "fit_info", None)
+    if not fit:
+        return _frame("PumpCurve · monotone cubic through the data", body)
+    unit = html.escape(unit_text("head"))
+    body += (f"<div>residual at the points: RMS {value_text('head', fit['rms_residual'])} {unit}, "
+             f"largest {value_text('head', fit['max_residual'])} {unit}</div>")
+    return _frame(f"PumpCurve · least-squares fit of degree {fit['degree']}", body)
 
 
 def _split(obj: Any) -> str:
