@@ -55,7 +55,7 @@ def orchard_line() -> hg.Line:
 
     named = hg.Fitting.named
     return hg.Line([
-        hg.Fitting.entrance_sharp(),
+        hg.Fitting.from_tank(),
         named("y_strainer"),
         pvc(6.0),
         named("gate_valve"),
@@ -73,7 +73,7 @@ def orchard_line() -> hg.Line:
         named("ball_valve"),
         named("globe_valve"),
         hg.Rise(38.0),
-        hg.Fitting.exit(),
+        hg.Fitting.into_tank(),
     ])
 
 
@@ -82,7 +82,7 @@ def duct_line() -> hg.Line:
     small = hg.Section.rectangle(0.30, 0.20)
     d1, d2 = big.hydraulic_diameter, small.hydraulic_diameter
     return hg.Line([
-        hg.Fitting.entrance_rounded(0.1),
+        hg.Fitting.from_tank("rounded", 0.1),
         hg.Equipment.pressure_drop("grease filter", 120.0, 0.9),
         hg.Pipe.of_material(big, 18.0, "galvanized_steel"),
         hg.Fitting.bend(90.0, 1.5),
@@ -90,7 +90,7 @@ def duct_line() -> hg.Line:
         hg.Pipe.of_material(small, 12.0, "galvanized_steel"),
         hg.Fitting.bend(45.0, 1.5),
         hg.Rise(4.5),
-        hg.Fitting.exit(),
+        hg.Fitting.into_tank(),
     ])
 
 

@@ -52,7 +52,7 @@ static void band_text(char *buf, size_t len, double low, double high) {
 static hg_line *orchard_line(void) {
   hg_line *l = NULL;
   TRY(hg_line_new(&l));
-  TRY(hg_line_add_entrance(l, HG_ENTRANCE_SHARP, 0.0));
+  TRY(hg_line_add_from_tank(l, HG_EDGE_SQUARE, 0.0));
   TRY(hg_line_add_fitting(l, "y_strainer", 0.0));
   TRY(hg_line_add_pipe_material(l, PVC_BORE, 6.0, "pvc"));
   TRY(hg_line_add_fitting(l, "gate_valve", 0.0));
@@ -70,7 +70,7 @@ static hg_line *orchard_line(void) {
   TRY(hg_line_add_fitting(l, "ball_valve", 0.0));
   TRY(hg_line_add_fitting(l, "globe_valve", 0.0));
   TRY(hg_line_add_rise(l, 38.0));
-  TRY(hg_line_add_exit(l));
+  TRY(hg_line_add_into_tank(l));
   return l;
 }
 
@@ -80,7 +80,7 @@ static hg_line *duct_line(void) {
   TRY(hg_section_properties(HG_SECTION_RECTANGLE, 0.30, 0.20, &area, &perimeter, &d2, &c));
   hg_line *l = NULL;
   TRY(hg_line_new(&l));
-  TRY(hg_line_add_entrance(l, HG_ENTRANCE_ROUNDED, 0.1));
+  TRY(hg_line_add_from_tank(l, HG_EDGE_ROUNDED, 0.1));
   TRY(hg_line_add_equipment(l, "grease filter", 120.0, 0.9));
   TRY(hg_line_add_duct_material(l, HG_SECTION_RECTANGLE, 0.40, 0.25, 18.0, "galvanized_steel"));
   TRY(hg_line_add_bend(l, 90.0, 1.5, 0.0));
@@ -88,7 +88,7 @@ static hg_line *duct_line(void) {
   TRY(hg_line_add_duct_material(l, HG_SECTION_RECTANGLE, 0.30, 0.20, 12.0, "galvanized_steel"));
   TRY(hg_line_add_bend(l, 45.0, 1.5, 0.0));
   TRY(hg_line_add_rise(l, 4.5));
-  TRY(hg_line_add_exit(l));
+  TRY(hg_line_add_into_tank(l));
   return l;
 }
 

@@ -47,7 +47,7 @@
  *             hg_pipe_table_nominal
  *  Pipes      hg_pipe_flow; hg_pipe_head_loss, hg_pipe_head_loss_batch,
  *             hg_duct_flow_state, hg_reynolds
- *  Lines      hg_line (handle), HG_ENTRANCE_*, HG_TURBULENT_DIAMETER_*, HG_LIMIT_*,
+ *  Lines      hg_line (handle), HG_EDGE_*, HG_TURBULENT_DIAMETER_*, HG_LIMIT_*,
  *             hg_sizing; hg_line_new, hg_line_free, hg_line_count, hg_line_add_*,
  *             hg_line_set_*, hg_line_flow_for_head, hg_line_system_curve,
  *             hg_line_operating_point, hg_line_required_head, hg_pump_curve_head,
@@ -58,6 +58,7 @@
  *             HG_ELEMENT_*, HG_REGIME_NONE; hg_line_evaluate, hg_line_evaluate_at,
  *             hg_line_result_totals, hg_line_result_element, hg_line_result_label,
  *             hg_line_result_band_source, hg_line_result_element_band_source,
+ *             hg_line_result_npsh_available, hg_line_result_npsh_check,
  *             hg_line_result_free
  *  Bands      hg_uncertainty_options, hg_monte_carlo, HG_MONTE_CARLO_MAX_SAMPLES;
  *             hg_line_system_curve_band,
@@ -220,19 +221,20 @@
 #define HG_SECTION_TRIANGLE 4
 
 /**
- * A sharp-edged entrance from a large space (`r_over_d` must be 0).
+ * Inlet from a tank through a square (sharp-edged) pipe end, K = 0.5 (`r_over_d` must be 0).
  */
-#define HG_ENTRANCE_SHARP 0
+#define HG_EDGE_SQUARE 0
 
 /**
- * A rounded entrance of radius `r_over_d` times the bore.
+ * Inlet from a tank through a pipe end rounded with radius `r_over_d` times the bore.
  */
-#define HG_ENTRANCE_ROUNDED 1
+#define HG_EDGE_ROUNDED 1
 
 /**
- * A pipe projecting into the space it draws from (`r_over_d` must be 0).
+ * Inlet from a tank through a pipe end projecting into it (re-entrant entrance), K = 0.78
+ * (`r_over_d` must be 0).
  */
-#define HG_ENTRANCE_PROJECTING 2
+#define HG_EDGE_REENTRANT 2
 
 /**
  * Turbulent flow in non-circular ducts on the hydraulic diameter (default).
@@ -1826,29 +1828,33 @@ int32_t hg_line_add_bend(struct hg_line *line,
                          double diameter);
 
 /**
- * Appends a pipe entrance of kind `kind` (`HG_ENTRANCE_*`); `r_over_d` is the rounding
- * radius over the bore for `HG_ENTRANCE_ROUNDED` (≥ 0) and must be 0 otherwise.
+ * Appends an inlet from a tank through a pipe end with edge `edge` (`HG_EDGE_*`):
+ * square (sharp-edged entrance, K = 0.5), rounded (K from `r_over_d`, the rounding radius
+ * over the bore, ≥ 0) or re-entrant (K = 0.78). `r_over_d` must be 0 unless the edge is
+ * rounded. A line that starts with one starts at the tank's surface; reverse flow turns
+ * it into an outlet into the tank.
  *
- * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a bad kind or radius;
- * `HG_ERR_INVALID` for a radius with another kind; `HG_ERR_NULL_POINTER`. Needs
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a bad edge or radius;
+ * `HG_ERR_INVALID` for a radius with another edge; `HG_ERR_NULL_POINTER`. Needs
  * exclusive use of `line`.
  *
  * # Safety
  * `line` must be NULL or a live handle used by no other thread.
  */
-int32_t hg_line_add_entrance(struct hg_line *line,
-                             int32_t kind,
-                             double r_over_d);
+int32_t hg_line_add_from_tank(struct hg_line *line,
+                              int32_t edge,
+                              double r_over_d);
 
 /**
- * Appends a pipe exit into a large space (K = 1 on the pipe's velocity).
+ * Appends an outlet into a large tank (K = 1 on the pipe's velocity); reverse flow turns
+ * it into a square-edged inlet from the tank.
  *
  * Returns `HG_OK` or `HG_ERR_NULL_POINTER`. Needs exclusive use of `line`.
  *
  * # Safety
  * `line` must be NULL or a live handle used by no other thread.
  */
-int32_t hg_line_add_exit(struct hg_line *line);
+int32_t hg_line_add_into_tank(struct hg_line *line);
 
 /**
  * Sets the relative half-width `spread` (0…1, e.g. 0.3 for ±30 %) of the K of the
@@ -2321,6 +2327,43 @@ int32_t hg_line_set_air_column_for_liquids(struct hg_line *line,
  */
 int32_t hg_line_blocks_reverse_flow(const struct hg_line *line,
                                     int32_t *blocks);
+
+/**
+ * Writes the NPSH available (m) at the outlet of row `index` (0-based, route order) of
+ * `result` to `*npsh`: the total pressure there over the vapour pressure in metres of
+ * the liquid, NPSHa = (p + ½ρV² − p_v)/(ρ g) (definition, e.g. ISO 9906).
+ *
+ * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` when `index` is not a row of the result;
+ * `HG_ERR_INVALID` when the line was evaluated without an inlet pressure or the fluid
+ * has no vapour pressure (a gas, or a liquid stated without one); `HG_ERR_NULL_POINTER`.
+ * Thread-safe.
+ *
+ * # Safety
+ * `result` must be NULL or a live handle; `npsh` NULL or writable.
+ */
+int32_t hg_line_result_npsh_available(const struct hg_line_result *result,
+                                      size_t index,
+                                      double *npsh);
+
+/**
+ * Checks the NPSH available at the outlet of row `index` of `result` against
+ * `required` (m, ≥ 0, the pump maker's NPSH required) plus `margin` (m, ≥ 0): writes the
+ * NPSH available (m) to `*available` and 1 to `*sufficient` when available ≥ required +
+ * margin, else 0.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE` or `HG_ERR_OUT_OF_RANGE` for a bad `required` or
+ * `margin`; otherwise as `hg_line_result_npsh_available`. Nothing is written on error.
+ * Thread-safe.
+ *
+ * # Safety
+ * `result` must be NULL or a live handle; `available` and `sufficient` NULL or writable.
+ */
+int32_t hg_line_result_npsh_check(const struct hg_line_result *result,
+                                  size_t index,
+                                  double required,
+                                  double margin,
+                                  double *available,
+                                  int32_t *sufficient);
 
 /**
  * The system curve with its 95 % band: at each of the `n` flows `flows[i]` (m³/s),

@@ -735,14 +735,14 @@ class line {
     check(hg_line_add_bend(l_, angle_deg, r_over_d, diameter));
     return *this;
   }
-  /// An entrance from a large space (HG_ENTRANCE_*; r/D for a rounded one).
-  line& add_entrance(int32_t kind, double r_over_d = 0.0) {
-    check(hg_line_add_entrance(l_, kind, r_over_d));
+  /// An inlet from a tank through a pipe end with edge HG_EDGE_* (r/D for a rounded one).
+  line& add_from_tank(int32_t edge, double r_over_d = 0.0) {
+    check(hg_line_add_from_tank(l_, edge, r_over_d));
     return *this;
   }
-  /// An exit into a large space (K = 1).
-  line& add_exit() {
-    check(hg_line_add_exit(l_));
+  /// An outlet into a tank (K = 1).
+  line& add_into_tank() {
+    check(hg_line_add_into_tank(l_));
     return *this;
   }
   /// The relative spread of fitting `index`'s K (rectangular, for the bands).

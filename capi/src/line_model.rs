@@ -1,9 +1,9 @@
 //! What a line means beyond its elements: the air around it and the direction flow may
-//! take through it.
+//! take through it, and the NPSH available along an evaluated line.
 
 use crate::ffi::{self, guard, out_ptr, put};
 use crate::fluid::hg_fluid;
-use crate::line::{hg_line, with_line};
+use crate::line::{hg_line, hg_line_result, read, with_line};
 
 /// Sets the air around `line` to `surroundings` (a gas handle, copied), or back to the
 /// default dry air at 20 °C and 101 325 Pa when `surroundings` is NULL. A rise in a gas
@@ -85,5 +85,68 @@ pub unsafe extern "C" fn hg_line_blocks_reverse_flow(
         let b = l.line()?.blocks_reverse_flow();
         // SAFETY: forwarded contract; checked above.
         unsafe { put("blocks", blocks, i32::from(b)) }
+    })
+}
+
+/// Writes the NPSH available (m) at the outlet of row `index` (0-based, route order) of
+/// `result` to `*npsh`: the total pressure there over the vapour pressure in metres of
+/// the liquid, NPSHa = (p + ½ρV² − p_v)/(ρ g) (definition, e.g. ISO 9906).
+///
+/// Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` when `index` is not a row of the result;
+/// `HG_ERR_INVALID` when the line was evaluated without an inlet pressure or the fluid
+/// has no vapour pressure (a gas, or a liquid stated without one); `HG_ERR_NULL_POINTER`.
+/// Thread-safe.
+///
+/// # Safety
+/// `result` must be NULL or a live handle; `npsh` NULL or writable.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_result_npsh_available(
+    result: *const hg_line_result,
+    index: usize,
+    npsh: *mut f64,
+) -> i32 {
+    guard(|| {
+        ffi::check_outs(&[out_ptr("npsh", npsh)])?;
+        // SAFETY: forwarded contract.
+        let r = unsafe { read(result)? };
+        let available = r.npsh_available(index)?;
+        // SAFETY: forwarded contract; checked above.
+        unsafe { put("npsh", npsh, available) }
+    })
+}
+
+/// Checks the NPSH available at the outlet of row `index` of `result` against
+/// `required` (m, ≥ 0, the pump maker's NPSH required) plus `margin` (m, ≥ 0): writes the
+/// NPSH available (m) to `*available` and 1 to `*sufficient` when available ≥ required +
+/// margin, else 0.
+///
+/// Returns `HG_OK`; `HG_ERR_NOT_FINITE` or `HG_ERR_OUT_OF_RANGE` for a bad `required` or
+/// `margin`; otherwise as `hg_line_result_npsh_available`. Nothing is written on error.
+/// Thread-safe.
+///
+/// # Safety
+/// `result` must be NULL or a live handle; `available` and `sufficient` NULL or writable.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_result_npsh_check(
+    result: *const hg_line_result,
+    index: usize,
+    required: f64,
+    margin: f64,
+    available: *mut f64,
+    sufficient: *mut i32,
+) -> i32 {
+    guard(|| {
+        ffi::check_outs(&[
+            out_ptr("available", available),
+            out_ptr("sufficient", sufficient),
+        ])?;
+        // SAFETY: forwarded contract.
+        let r = unsafe { read(result)? };
+        let c = r.npsh_check(index, required, margin)?;
+        // SAFETY: forwarded contract; checked above.
+        unsafe {
+            put("available", available, c.available)?;
+            put("sufficient", sufficient, i32::from(c.sufficient))
+        }
     })
 }

@@ -9,7 +9,7 @@
 
 use hydrograde::Result;
 use hydrograde::band::Band;
-use hydrograde::fitting::Fitting;
+use hydrograde::fitting::{Edge, Fitting};
 use hydrograde::fluid::Fluid;
 use hydrograde::line::{Element, Equipment, Limit, Line, LineResult, PumpCurve};
 use hydrograde::pipe::Pipe;
@@ -28,7 +28,7 @@ fn orchard_line() -> Result<Line> {
     };
     let named = |n: &str| Fitting::named(n).map(Element::Fitting);
     Line::new(vec![
-        Element::Fitting(Fitting::entrance_sharp()),
+        Element::Fitting(Fitting::from_tank(Edge::Square)?),
         named("y_strainer")?,
         pvc(6.0)?,
         named("gate_valve")?,
@@ -46,7 +46,7 @@ fn orchard_line() -> Result<Line> {
         named("ball_valve")?,
         named("globe_valve")?,
         Element::rise(38.0)?,
-        Element::Fitting(Fitting::exit()),
+        Element::Fitting(Fitting::into_tank()),
     ])
 }
 
@@ -55,7 +55,7 @@ fn duct_line() -> Result<Line> {
     let small = Section::rectangle(0.30, 0.20)?;
     let (d1, d2) = (big.hydraulic_diameter(), small.hydraulic_diameter());
     Line::new(vec![
-        Element::Fitting(Fitting::entrance_rounded(0.1)?),
+        Element::Fitting(Fitting::from_tank(Edge::Rounded { r_over_d: 0.1 })?),
         Element::Equipment(Equipment::pressure_drop("grease filter", 120.0, 0.9)?),
         Element::Pipe(Pipe::of_material(big, 18.0, "galvanized_steel")?),
         Element::Fitting(Fitting::bend(90.0, 1.5)?),
@@ -63,7 +63,7 @@ fn duct_line() -> Result<Line> {
         Element::Pipe(Pipe::of_material(small, 12.0, "galvanized_steel")?),
         Element::Fitting(Fitting::bend(45.0, 1.5)?),
         Element::rise(4.5)?,
-        Element::Fitting(Fitting::exit()),
+        Element::Fitting(Fitting::into_tank()),
     ])
 }
 

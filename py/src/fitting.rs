@@ -3,7 +3,7 @@
 use crate::arrays::{self, si};
 use crate::errors::CoreResult;
 use crate::state;
-use hydrograde::fitting::{Fitting, catalogue_entries};
+use hydrograde::fitting::{Edge, Fitting, catalogue_entries};
 use pyo3::prelude::*;
 use pyo3::types::{PyBytes, PyDict, PyList, PyType};
 
@@ -39,7 +39,10 @@ fn parameters<'py>(py: Python<'py>, f: &Fitting) -> PyResult<Bound<'py, PyDict>>
     // The core tags the method internally: {"method": "three_k", "k1": …, …}.
     if let Some(fields) = value.as_object() {
         for (k, v) in fields.iter().filter(|(k, _)| k.as_str() != "method") {
-            d.set_item(k, v.as_f64())?;
+            match v.as_str() {
+                Some(text) => d.set_item(k, text)?,
+                None => d.set_item(k, v.as_f64())?,
+            }
         }
     }
     Ok(d)
@@ -120,33 +123,28 @@ impl PyFitting {
     ) -> PyResult<Self> {
         wrap(Fitting::contraction(d_in, d_out), None)
     }
-    /// A sharp-edged entrance from a large vessel.
+    /// An inlet from a tank through a pipe end with edge ``edge``: ``"square"``
+    /// (sharp-edged entrance, K = 0.5), ``"rounded"`` (K from ``r_over_d``, the rounding
+    /// radius over the bore, given only for this edge) or ``"reentrant"`` (the pipe
+    /// projects into the tank, K = 0.78). Reverse flow makes it an outlet into the tank.
     #[classmethod]
-    fn entrance_sharp(_cls: &Bound<'_, PyType>) -> Self {
-        PyFitting {
-            inner: Fitting::entrance_sharp(),
-        }
-    }
-    /// A rounded entrance of rounding radius ratio ``r_over_d``.
-    #[classmethod]
-    fn entrance_rounded(
+    #[pyo3(signature = (edge = "square", r_over_d = None))]
+    fn from_tank(
         _cls: &Bound<'_, PyType>,
-        #[pyo3(from_py_with = si::r_over_d)] r_over_d: f64,
+        edge: &str,
+        #[pyo3(from_py_with = si::opt_r_over_d)] r_over_d: Option<f64>,
     ) -> PyResult<Self> {
-        wrap(Fitting::entrance_rounded(r_over_d), None)
+        wrap(
+            Edge::named(edge, r_over_d).and_then(Fitting::from_tank),
+            None,
+        )
     }
-    /// An inward-projecting (re-entrant) entrance.
+    /// An outlet into a tank (the velocity head is lost, K = 1). Reverse flow makes it a
+    /// square-edged inlet from the tank.
     #[classmethod]
-    fn entrance_projecting(_cls: &Bound<'_, PyType>) -> Self {
+    fn into_tank(_cls: &Bound<'_, PyType>) -> Self {
         PyFitting {
-            inner: Fitting::entrance_projecting(),
-        }
-    }
-    /// The exit into a large vessel (the velocity head is lost).
-    #[classmethod]
-    fn exit(_cls: &Bound<'_, PyType>) -> Self {
-        PyFitting {
-            inner: Fitting::exit(),
+            inner: Fitting::into_tank(),
         }
     }
     /// A bend of ``angle_deg`` (degrees) and bend radius ratio ``r_over_d``.

@@ -22,13 +22,13 @@ def route():
     # Invented demo route: tank → 120 m of DN100 → elbow → 8 m up → reducer → 40 m of DN80
     # → tank.
     return hg.Line([
-        hg.Fitting.entrance_sharp(),
+        hg.Fitting.from_tank(),
         hg.Pipe(0.1, 120.0, 4.5e-5),
         hg.Fitting.named(hg.Fitting.catalogue()[0]["name"]),
         hg.Rise(8.0),
         hg.Fitting.contraction(0.1, 0.08),
         hg.Pipe(hg.Section.circle(0.08), 40.0, 4.5e-5),
-        hg.Fitting.exit(),
+        hg.Fitting.into_tank(),
     ])
 
 
@@ -77,7 +77,7 @@ def test_result_fields_breakdown_and_bands(route, water):
     assert r.head_loss_band.nominal == r.head_loss
     assert r.elements[1].friction_factor_band is not None
     assert "LineResult(flow=0.012" in repr(r)
-    assert len(route) == 7 and repr(route).startswith("Line([Fitting('entrance_sharp'")
+    assert len(route) == 7 and repr(route).startswith("Line([Fitting('from_tank_square', edge='square'")
 
 
 def test_head_loss_is_odd_in_flow(route, water):

@@ -73,7 +73,7 @@ def test_suction_lift_npsh():
     w = hg.Fluid.water(333.15)
     q = 3.0 * math.pi * 0.1**2 / 4
     line = hg.Line(
-        [hg.Fitting.entrance_sharp(), hg.Fitting.k(2.0), hg.Rise(7.0), hg.Pipe(0.1, 1.0, 4.5e-5)],
+        [hg.Fitting.from_tank(), hg.Fitting.k(2.0), hg.Rise(7.0), hg.Pipe(0.1, 1.0, 4.5e-5)],
         inlet_pressure=101325.0,
     )
     r = line.evaluate(w, q)
@@ -87,3 +87,26 @@ def test_suction_lift_npsh():
     assert r.npsh_check(2, 0.2, margin=0.5)["sufficient"] is False
     with pytest.raises(hg.HydrogradeError, match="^index = 9"):
         r.npsh_available(9)
+
+
+def test_tank_inlets_and_outlet_by_edge():
+    water = hg.Fluid(998.2, 1.002e-3)
+
+    def k_of(f: hg.Fitting) -> float:
+        r = hg.Line([f, hg.Pipe(0.1, 1.0, 0.0)]).evaluate(water, 0.01)
+        return r.elements[0].k
+
+    # Crane TP-410 (1988), from memory: square (sharp-edged) 0.5, re-entrant 0.78,
+    # rounded r/d = 0.04 -> 0.24; the outlet into a tank loses the velocity head, K = 1 (exact).
+    assert k_of(hg.Fitting.from_tank()) == 0.5
+    assert k_of(hg.Fitting.from_tank("reentrant")) == 0.78
+    assert k_of(hg.Fitting.from_tank("rounded", r_over_d=0.04)) == pytest.approx(0.24, rel=1e-12)
+    assert k_of(hg.Fitting.into_tank()) == 1.0
+    with pytest.raises(hg.HydrogradeError, match="edge"):
+        hg.Fitting.from_tank("bellmouth")
+    with pytest.raises(hg.HydrogradeError, match="r_over_d"):
+        hg.Fitting.from_tank("rounded")
+    with pytest.raises(hg.HydrogradeError, match="r_over_d"):
+        hg.Fitting.from_tank("square", r_over_d=0.1)
+    with pytest.raises(hg.HydrogradeError, match="r_over_d"):
+        hg.Fitting.from_tank("rounded", r_over_d=-0.1)

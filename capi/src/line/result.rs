@@ -30,7 +30,7 @@ pub const HG_REGIME_NONE: i32 = -1;
 /// number, so it stays valid after the line and the fluid are freed. Reading it is
 /// thread-safe.
 pub struct hg_line_result {
-    result: LineResult,
+    pub(crate) result: LineResult,
 }
 
 /// The totals of a line evaluated at one flow, from `hg_line_result_totals`. Set
@@ -320,7 +320,7 @@ pub unsafe extern "C" fn hg_line_result_free(result: *mut hg_line_result) {
 ///
 /// # Safety
 /// `p` must be NULL or a live handle.
-unsafe fn read<'a>(p: *const hg_line_result) -> FfiResult<&'a LineResult> {
+pub(crate) unsafe fn read<'a>(p: *const hg_line_result) -> FfiResult<&'a LineResult> {
     // SAFETY: forwarded contract.
     Ok(&unsafe { ffi::handle("result", p)? }.result)
 }
