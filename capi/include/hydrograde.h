@@ -59,6 +59,7 @@
  *             hg_line_result_totals, hg_line_result_element, hg_line_result_label,
  *             hg_line_result_band_source, hg_line_result_element_band_source,
  *             hg_line_result_npsh_available, hg_line_result_npsh_check,
+ *             hg_line_result_message_count, hg_line_result_message,
  *             hg_line_result_free
  *  Bands      hg_uncertainty_options, hg_monte_carlo, HG_MONTE_CARLO_MAX_SAMPLES;
  *             hg_line_system_curve_band,
@@ -336,6 +337,32 @@
  * change is counted as an abrupt contraction or expansion row of its own.
  */
 #define HG_WARN_BORE_CHANGE_WITHOUT_TRANSITION 128
+
+/**
+ * A velocity above 15 m/s in a liquid or 80 m/s in a gas: likely a flow in the wrong
+ * unit (L/s or m³/h typed as m³/s).
+ */
+#define HG_WARN_IMPLAUSIBLE_VELOCITY 256
+
+/**
+ * A bore under 2 mm or over 5 m: likely millimetres typed as metres.
+ */
+#define HG_WARN_IMPLAUSIBLE_BORE 512
+
+/**
+ * A pipe longer than 200 km: likely millimetres or feet typed as metres.
+ */
+#define HG_WARN_IMPLAUSIBLE_LENGTH 1024
+
+/**
+ * A rated pressure drop under 10 Pa: likely bar or kPa typed as Pa.
+ */
+#define HG_WARN_IMPLAUSIBLE_RATED_DROP 2048
+
+/**
+ * A liquid's viscosity far above its density's kind: likely centipoise typed as Pa·s.
+ */
+#define HG_WARN_IMPLAUSIBLE_VISCOSITY 4096
 
 /**
  * Major version of the library (from Cargo.toml; the build fails if they disagree).
@@ -2364,6 +2391,38 @@ int32_t hg_line_result_npsh_check(const struct hg_line_result *result,
                                   double margin,
                                   double *available,
                                   int32_t *sufficient);
+
+/**
+ * Writes the number of messages of `result` to `*count`: each says in words what a
+ * warning found (the element, the values, and for a likely unit slip the value in the
+ * unit probably meant).
+ *
+ * Returns `HG_OK` or `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * `result` must be NULL or a live handle; `count` NULL or writable.
+ */
+int32_t hg_line_result_message_count(const struct hg_line_result *result,
+                                     size_t *count);
+
+/**
+ * Copies message `index` (0-based, see `hg_line_result_message_count`) of `result` into
+ * `buf` (at most `len - 1` bytes and a NUL, UTF-8; `buf` may be NULL when `len` is 0) and
+ * stores its full length in `*needed`.
+ *
+ * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` when `index` is not a message;
+ * `HG_ERR_BUFFER_TOO_SMALL` when the message did not fit (`*needed` and the cut copy are
+ * still written); `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * `result` must be NULL or a live handle; `buf` NULL or valid for `len` bytes; `needed`
+ * NULL or writable.
+ */
+int32_t hg_line_result_message(const struct hg_line_result *result,
+                               size_t index,
+                               char *buf,
+                               size_t len,
+                               size_t *needed);
 
 /**
  * The system curve with its 95 % band: at each of the `n` flows `flows[i]` (m³/s),

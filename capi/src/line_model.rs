@@ -4,6 +4,7 @@
 use crate::ffi::{self, guard, out_ptr, put};
 use crate::fluid::hg_fluid;
 use crate::line::{hg_line, hg_line_result, read, with_line};
+use std::ffi::c_char;
 
 /// Sets the air around `line` to `surroundings` (a gas handle, copied), or back to the
 /// default dry air at 20 °C and 101 325 Pa when `surroundings` is NULL. A rise in a gas
@@ -148,5 +149,65 @@ pub unsafe extern "C" fn hg_line_result_npsh_check(
             put("available", available, c.available)?;
             put("sufficient", sufficient, i32::from(c.sufficient))
         }
+    })
+}
+
+/// Writes the number of messages of `result` to `*count`: each says in words what a
+/// warning found (the element, the values, and for a likely unit slip the value in the
+/// unit probably meant).
+///
+/// Returns `HG_OK` or `HG_ERR_NULL_POINTER`. Thread-safe.
+///
+/// # Safety
+/// `result` must be NULL or a live handle; `count` NULL or writable.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_result_message_count(
+    result: *const hg_line_result,
+    count: *mut usize,
+) -> i32 {
+    guard(|| {
+        ffi::check_outs(&[out_ptr("count", count)])?;
+        // SAFETY: forwarded contract.
+        let r = unsafe { read(result)? };
+        // SAFETY: forwarded contract; checked above.
+        unsafe { put("count", count, r.messages.len()) }
+    })
+}
+
+/// Copies message `index` (0-based, see `hg_line_result_message_count`) of `result` into
+/// `buf` (at most `len - 1` bytes and a NUL, UTF-8; `buf` may be NULL when `len` is 0) and
+/// stores its full length in `*needed`.
+///
+/// Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` when `index` is not a message;
+/// `HG_ERR_BUFFER_TOO_SMALL` when the message did not fit (`*needed` and the cut copy are
+/// still written); `HG_ERR_NULL_POINTER`. Thread-safe.
+///
+/// # Safety
+/// `result` must be NULL or a live handle; `buf` NULL or valid for `len` bytes; `needed`
+/// NULL or writable.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_result_message(
+    result: *const hg_line_result,
+    index: usize,
+    buf: *mut c_char,
+    len: usize,
+    needed: *mut usize,
+) -> i32 {
+    guard(|| {
+        ffi::check_outs(&[out_ptr("needed", needed)])?;
+        // SAFETY: forwarded contract.
+        let r = unsafe { read(result)? };
+        let m = r.messages.get(index).ok_or_else(|| {
+            ffi::size_out_of_range(
+                "index",
+                index,
+                format!(
+                    "must be less than {} (the number of messages)",
+                    r.messages.len()
+                ),
+            )
+        })?;
+        // SAFETY: forwarded contract.
+        unsafe { ffi::copy_name(m, buf, len, needed) }
     })
 }

@@ -957,6 +957,59 @@ static void test_npsh(void) {
   hg_line_free(l);
 }
 
+/* 1 when some message of the line evaluated at q contains `text`. */
+static int says(const hg_line *l, const hg_fluid *f, double q, uint32_t bit, const char *text) {
+  hg_line_result *r = NULL;
+  hg_line_totals t;
+  memset(&t, 0, sizeof t);
+  t.struct_size = sizeof t;
+  int found = 0;
+  size_t n = 0, need = 0;
+  char buf[512];
+  if (hg_line_evaluate(l, f, q, &r) == HG_OK && hg_line_result_totals(r, &t) == HG_OK && (t.warnings & bit) &&
+      hg_line_result_message_count(r, &n) == HG_OK)
+    for (size_t i = 0; i < n && !found; i++)
+      found = hg_line_result_message(r, i, buf, sizeof buf, &need) == HG_OK && strstr(buf, text) != NULL;
+  hg_line_result_free(r);
+  return found;
+}
+
+/* Unit slips warn with the likely unit (each conversion exact by SI prefixes and NIST
+   SP 811); the same values in SI pass. */
+static void test_unit_slips(void) {
+  hg_fluid *water = NULL, *syrup = NULL;
+  CHECK(hg_fluid_liquid(998.2, 1.002e-3, &water) == HG_OK && hg_fluid_liquid(975.0, 0.377, &syrup) == HG_OK, "fluids");
+  hg_line *l = NULL;
+  /* Bore 47.5 m (meant mm): 47.5 mm = 0.0475 m. */
+  CHECK(hg_line_new(&l) == HG_OK && hg_line_add_pipe(l, 47.5, 100.0, 4.5e-5) == HG_OK, "line");
+  CHECK(says(l, water, 4.5e-3, HG_WARN_IMPLAUSIBLE_BORE, "bore 47.5 m; inputs are SI: 47.5 mm is 0.0475 m"), "bore");
+  hg_line_free(l);
+  /* 4.5 m3/s in 50 mm: V = 4Q/(pi d^2) = 2292 m/s > 15 m/s; 4.5 L/s = 0.0045 m3/s. */
+  CHECK(hg_line_new(&l) == HG_OK && hg_line_add_pipe(l, 0.05, 100.0, 4.5e-5) == HG_OK, "line");
+  CHECK(says(l, water, 4.5, HG_WARN_IMPLAUSIBLE_VELOCITY, "4.5 L/s is 0.0045 m³/s"), "flow");
+  CHECK(!says(l, water, 4.5e-3, HG_WARN_IMPLAUSIBLE_VELOCITY, "L/s"), "4.5 L/s passes");
+  /* Viscosity 0.377 Pa s at water's density (meant cP): 0.377 cP = 0.000377 Pa s. */
+  CHECK(says(l, syrup, 1e-3, HG_WARN_IMPLAUSIBLE_VISCOSITY, "0.377 cP is 0.000377 Pa·s"), "viscosity");
+  /* Rated drop 1.5 Pa (meant bar): 1.5 bar = 150000 Pa. */
+  CHECK(hg_line_add_equipment(l, "filter", 1.5, 0.005) == HG_OK, "filter");
+  CHECK(says(l, water, 0.005, HG_WARN_IMPLAUSIBLE_RATED_DROP, "1.5 bar is 150000 Pa"), "rated drop");
+  hg_line_free(l);
+  /* 250 km of pipe: 250000 mm = 250 m. */
+  CHECK(hg_line_new(&l) == HG_OK && hg_line_add_pipe(l, 0.5, 250e3, 4.5e-5) == HG_OK, "line");
+  CHECK(says(l, water, 0.3, HG_WARN_IMPLAUSIBLE_LENGTH, "250000 mm is 250 m"), "length");
+  /* Bad questions about messages. */
+  hg_line_result *r = NULL;
+  size_t n = 0, need = 0;
+  CHECK(hg_line_evaluate(l, water, 0.3, &r) == HG_OK && hg_line_result_message_count(r, &n) == HG_OK && n == 1, "one");
+  CHECK(hg_line_result_message(r, 1, NULL, 0, &need) == HG_ERR_OUT_OF_RANGE, "message index");
+  CHECK(hg_line_result_message(r, 0, NULL, 0, &need) == HG_ERR_BUFFER_TOO_SMALL && need > 20, "length only");
+  CHECK(hg_line_result_message_count(r, NULL) == HG_ERR_NULL_POINTER, "NULL count");
+  hg_line_result_free(r);
+  hg_line_free(l);
+  hg_fluid_free(water);
+  hg_fluid_free(syrup);
+}
+
 int main(int argc, char **argv) {
   if (argc < 2) {
     fprintf(stderr, "usage: %s REFERENCE_FILE\n", argv[0]);
@@ -990,6 +1043,7 @@ int main(int argc, char **argv) {
   test_curve_band();
   test_line_model();
   test_npsh();
+  test_unit_slips();
   pthread_t th[8];
   thread_arg args[8];
   for (int i = 0; i < 8; i++) {

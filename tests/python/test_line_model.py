@@ -110,3 +110,34 @@ def test_tank_inlets_and_outlet_by_edge():
         hg.Fitting.from_tank("square", r_over_d=0.1)
     with pytest.raises(hg.HydrogradeError, match="r_over_d"):
         hg.Fitting.from_tank("rounded", r_over_d=-0.1)
+
+
+def test_unit_slips_warn_with_the_likely_unit():
+    water = hg.Fluid(998.2, 1.002e-3)
+    # Bore 47.5 m (meant mm): 47.5 mm = 0.0475 m (SI prefix, exact).
+    r = hg.Line([hg.Pipe(47.5, 100.0, 4.5e-5)]).evaluate(water, 4.5e-3)
+    assert "implausible_bore" in r.warnings
+    assert any("47.5 mm is 0.0475 m" in m for m in r.messages)
+    # Flow 4.5 m3/s in 50 mm (meant L/s): V = 4Q/(pi d^2) = 2292 m/s > 15 m/s (common practice).
+    line = hg.Line([hg.Pipe(0.05, 100.0, 4.5e-5)])
+    r = line.evaluate(water, 4.5)
+    assert "implausible_velocity" in r.warnings
+    assert any("4.5 L/s is 0.0045 m³/s" in m for m in r.messages)
+    assert "implausible_velocity" not in line.evaluate(water, 4.5e-3).warnings
+    # Rated drop 1.5 Pa (meant bar): 1.5 bar = 150000 Pa (NIST SP 811, exact).
+    r = hg.Line([hg.Pipe(0.05, 10.0, 4.5e-5), hg.Equipment.pressure_drop("filter", 1.5, 0.005)]).evaluate(
+        water, 0.005
+    )
+    assert "implausible_rated_drop" in r.warnings
+    assert any("1.5 bar is 150000 Pa" in m for m in r.messages)
+    # Viscosity 0.377 Pa s at water's density (meant cP): 0.377 cP = 0.000377 Pa s.
+    r = line.evaluate(hg.Fluid(975.0, 0.377), 1e-3)
+    assert "implausible_viscosity" in r.warnings
+    assert any("0.377 cP is 0.000377 Pa·s" in m for m in r.messages)
+    # Length 250 km: 250000 mm = 250 m.
+    r = hg.Line([hg.Pipe(0.5, 250e3, 4.5e-5)]).evaluate(water, 0.3)
+    assert "implausible_length" in r.warnings
+    assert set(hg.WARNING_NAMES[-5:]) == {
+        "implausible_velocity", "implausible_bore", "implausible_length",
+        "implausible_rated_drop", "implausible_viscosity",
+    }

@@ -19,6 +19,7 @@ mod eval;
 mod path;
 pub(crate) use path::{Resolved, Role};
 mod parallel;
+pub mod plausible;
 mod result;
 pub mod rows;
 mod sizing;

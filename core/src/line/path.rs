@@ -235,6 +235,7 @@ pub(crate) fn resolve(
     let mut path = Path::default();
     let air_density = options.surroundings_fluid()?.density;
     for (i, e) in elements.iter().enumerate() {
+        path.notes.extend(super::plausible::element_notes(i, e));
         let after = pipe_after(i).map(Section::of_pipe);
         let here = sides(e, current, after);
         if let Some((inlet, outlet)) = here {

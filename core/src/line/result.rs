@@ -3,7 +3,7 @@
 
 use super::eval::State;
 use super::uncertainty::{self, Sources};
-use super::{Element, Line, Resolved, Role};
+use super::{Element, Line, Resolved, Role, plausible};
 use crate::band::Band;
 use crate::error::{Result, check};
 use crate::fluid::Fluid;
@@ -166,6 +166,12 @@ impl Line {
             warnings |= *w;
             messages.push(m.clone());
         }
+        if let Some((w, m)) = plausible::fluid_note(fluid) {
+            warnings |= w;
+            messages.push(m);
+        }
+        let v_limit = plausible::max_velocity(fluid);
+        let mut fastest: Option<(usize, f64)> = None;
         // Grade line: total pressure falls by ρg·loss and by ρg·Δz of the fluid's own
         // column (absolute pressures inside the line); static = total − ½ρV². A line that
         // starts with an inlet from a tank starts at the tank's surface, where the
@@ -199,6 +205,12 @@ impl Line {
             total = total.map(|t| t - rho_g * (s.head_loss + height));
             let pressure_out = total.map(|t| t - 0.5 * work.density * last_v * last_v);
             let mut w = s.warnings;
+            if let Some(v) = s.velocity.filter(|v| v.abs() > v_limit) {
+                w.insert(Warnings::IMPLAUSIBLE_VELOCITY);
+                if fastest.is_none_or(|(_, f)| v.abs() > f) {
+                    fastest = Some((i, v.abs()));
+                }
+            }
             // No vapour pressure compares as −∞. Written as a select rather than a match on
             // both options, so that no branch reads an absent option's payload (memcheck
             // reports such speculated comparisons).
@@ -217,6 +229,9 @@ impl Line {
             e.total_pressure_out = total;
             e.elevation_out = elevation;
             elements.push(e);
+        }
+        if let Some((i, v)) = fastest {
+            messages.push(plausible::velocity_note(self.origin[i], v, flow, v_limit));
         }
         let bands = uncertainty::line_bands(self, &sources, terms, &work, head_loss, required_head);
         Ok(LineResult {
