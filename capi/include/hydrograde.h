@@ -53,7 +53,7 @@
  *             hg_line_operating_point, hg_line_required_head, hg_pump_curve_head,
  *             hg_line_with_uniform_diameter, hg_line_size, hg_line_split_flow,
  *             hg_line_split_flow_bands, hg_line_blocks_reverse_flow,
- *             hg_line_set_air_column_for_liquids
+ *             hg_line_set_air_column_for_liquids, hg_line_add_equipment_rated
  *  Results    hg_line_result (handle), hg_line_totals, hg_element_result,
  *             HG_ELEMENT_*, HG_REGIME_NONE; hg_line_evaluate, hg_line_evaluate_at,
  *             hg_line_result_totals, hg_line_result_element, hg_line_result_label,
@@ -2423,6 +2423,25 @@ int32_t hg_line_result_message(const struct hg_line_result *result,
                                char *buf,
                                size_t len,
                                size_t *needed);
+
+/**
+ * Appends rated equipment labelled `name` with a pressure drop `drop` (Pa, > 0) at the
+ * rating flow `at_flow` (m³/s, > 0) of a fluid of density `rating_density` (kg/m³, > 0):
+ * in the line's fluid of density ρ the drop is drop · (ρ/ρ_rating) · Q|Q|/Q_rating².
+ * `hg_line_add_equipment` rates with water at 20 °C.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_INVALID` for a
+ * label not UTF-8; `HG_ERR_NULL_POINTER`. Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread; `name` NULL or a
+ * NUL-terminated string.
+ */
+int32_t hg_line_add_equipment_rated(struct hg_line *line,
+                                    const char *name,
+                                    double drop,
+                                    double at_flow,
+                                    double rating_density);
 
 /**
  * The system curve with its 95 % band: at each of the `n` flows `flows[i]` (m³/s),

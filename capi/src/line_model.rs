@@ -4,6 +4,7 @@
 use crate::ffi::{self, guard, out_ptr, put};
 use crate::fluid::hg_fluid;
 use crate::line::{hg_line, hg_line_result, read, with_line};
+use hydrograde::line::{Element, Equipment};
 use std::ffi::c_char;
 
 /// Sets the air around `line` to `surroundings` (a gas handle, copied), or back to the
@@ -210,4 +211,35 @@ pub unsafe extern "C" fn hg_line_result_message(
         // SAFETY: forwarded contract.
         unsafe { ffi::copy_name(m, buf, len, needed) }
     })
+}
+
+/// Appends rated equipment labelled `name` with a pressure drop `drop` (Pa, > 0) at the
+/// rating flow `at_flow` (m³/s, > 0) of a fluid of density `rating_density` (kg/m³, > 0):
+/// in the line's fluid of density ρ the drop is drop · (ρ/ρ_rating) · Q|Q|/Q_rating².
+/// `hg_line_add_equipment` rates with water at 20 °C.
+///
+/// Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_INVALID` for a
+/// label not UTF-8; `HG_ERR_NULL_POINTER`. Needs exclusive use of `line`.
+///
+/// # Safety
+/// `line` must be NULL or a live handle used by no other thread; `name` NULL or a
+/// NUL-terminated string.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_add_equipment_rated(
+    line: *mut hg_line,
+    name: *const c_char,
+    drop: f64,
+    at_flow: f64,
+    rating_density: f64,
+) -> i32 {
+    // SAFETY: forwarded contract.
+    unsafe {
+        with_line(line, |l| {
+            let n = ffi::c_str("name", name)?;
+            let e =
+                Equipment::pressure_drop(n, drop, at_flow)?.with_rating_density(rating_density)?;
+            l.push(Element::Equipment(e));
+            Ok(())
+        })
+    }
 }

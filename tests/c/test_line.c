@@ -1010,6 +1010,26 @@ static void test_unit_slips(void) {
   hg_fluid_free(syrup);
 }
 
+/* A strainer rated 20 kPa at 10 L/s with a fluid of 1000 kg/m3, passing 1100 kg/m3 at
+   10 L/s: fixed K, dp = drop rho/rho_rating = 22 000 Pa (definition of K). */
+static void test_rated_density(void) {
+  hg_line *l = NULL;
+  hg_fluid *glycol = NULL;
+  CHECK(hg_line_new(&l) == HG_OK && hg_fluid_liquid(1100.0, 4e-3, &glycol) == HG_OK, "handles");
+  CHECK(hg_line_add_equipment_rated(l, "strainer", 2e4, 0.01, 1000.0) == HG_OK, "rated equipment");
+  hg_line_totals t;
+  memset(&t, 0, sizeof t);
+  t.struct_size = sizeof t;
+  CHECK(totals(l, glycol, 0.01, &t) == HG_OK && fabs(t.pressure_loss - 22000.0) < 1e-9, "22 kPa: %.17g",
+        t.pressure_loss);
+  CHECK(hg_line_add_equipment_rated(l, "strainer", 2e4, 0.01, -1.0) == HG_ERR_OUT_OF_RANGE &&
+            strstr(last_msg(), "rating_density") != NULL,
+        "bad rating density: %s", last_msg());
+  CHECK(hg_line_add_equipment_rated(l, NULL, 2e4, 0.01, 1000.0) == HG_ERR_NULL_POINTER, "NULL name");
+  hg_fluid_free(glycol);
+  hg_line_free(l);
+}
+
 int main(int argc, char **argv) {
   if (argc < 2) {
     fprintf(stderr, "usage: %s REFERENCE_FILE\n", argv[0]);
@@ -1044,6 +1064,7 @@ int main(int argc, char **argv) {
   test_line_model();
   test_npsh();
   test_unit_slips();
+  test_rated_density();
   pthread_t th[8];
   thread_arg args[8];
   for (int i = 0; i < 8; i++) {

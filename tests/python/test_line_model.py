@@ -141,3 +141,14 @@ def test_unit_slips_warn_with_the_likely_unit():
         "implausible_velocity", "implausible_bore", "implausible_length",
         "implausible_rated_drop", "implausible_viscosity",
     }
+
+
+def test_rated_drop_scales_with_density():
+    # A strainer rated 20 kPa at 10 L/s with 1000 kg/m3, passing 1100 kg/m3 at 10 L/s:
+    # fixed K, dp = drop * rho / rho_rating = 22 000 Pa (definition of K, dp = K rho V^2 / 2).
+    eq = hg.Equipment.pressure_drop("strainer", 2e4, 0.01, rating_density=1000.0)
+    r = hg.Line([eq]).evaluate(hg.Fluid(1100.0, 4e-3), 0.01)
+    assert r.pressure_loss == pytest.approx(22000.0, rel=1e-14)
+    with pytest.raises(hg.HydrogradeError, match="rating_density"):
+        hg.Equipment.pressure_drop("strainer", 2e4, 0.01, rating_density=0.0)
+    assert "rating_density=" in repr(eq)
