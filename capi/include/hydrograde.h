@@ -53,7 +53,8 @@
  *             hg_line_operating_point, hg_line_required_head, hg_pump_curve_head,
  *             hg_line_with_uniform_diameter, hg_line_size, hg_line_split_flow,
  *             hg_line_split_flow_bands, hg_line_blocks_reverse_flow,
- *             hg_line_set_air_column_for_liquids, hg_line_add_equipment_rated
+ *             hg_line_set_air_column_for_liquids, hg_line_add_equipment_rated,
+ *             hg_line_set_end_pressure
  *  Results    hg_line_result (handle), hg_line_totals, hg_element_result,
  *             HG_ELEMENT_*, HG_REGIME_NONE; hg_line_evaluate, hg_line_evaluate_at,
  *             hg_line_result_totals, hg_line_result_element, hg_line_result_label,
@@ -2442,6 +2443,20 @@ int32_t hg_line_add_equipment_rated(struct hg_line *line,
                                     double drop,
                                     double at_flow,
                                     double rating_density);
+
+/**
+ * Sets the pressure the line must deliver at its end, Pa above the pressure at its start
+ * (a spray header, a burner, a process inlet), counted in the required head as
+ * p_end/(ρ g); 0 asks for none (the default).
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_NULL_POINTER`. Needs exclusive use of
+ * `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_set_end_pressure(struct hg_line *line,
+                                 double pressure);
 
 /**
  * The system curve with its 95 % band: at each of the `n` flows `flows[i]` (m³/s),

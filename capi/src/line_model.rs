@@ -243,3 +243,27 @@ pub unsafe extern "C" fn hg_line_add_equipment_rated(
         })
     }
 }
+
+/// Sets the pressure the line must deliver at its end, Pa above the pressure at its start
+/// (a spray header, a burner, a process inlet), counted in the required head as
+/// p_end/(ρ g); 0 asks for none (the default).
+///
+/// Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_NULL_POINTER`. Needs exclusive use of
+/// `line`.
+///
+/// # Safety
+/// `line` must be NULL or a live handle used by no other thread.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_set_end_pressure(line: *mut hg_line, pressure: f64) -> i32 {
+    // SAFETY: forwarded contract.
+    unsafe {
+        with_line(line, |l| {
+            let mut o = l.options.clone();
+            o.end_pressure = (pressure != 0.0).then_some(pressure);
+            o.validate()?;
+            l.options = o;
+            l.changed();
+            Ok(())
+        })
+    }
+}

@@ -1028,6 +1028,20 @@ static void test_rated_density(void) {
   CHECK(hg_line_add_equipment_rated(l, NULL, 2e4, 0.01, 1000.0) == HG_ERR_NULL_POINTER, "NULL name");
   hg_fluid_free(glycol);
   hg_line_free(l);
+  /* A header 12 m up needing 2.5 bar above the start: required head = dz + losses +
+     p_end/(rho g) (energy balance); at zero flow 12 + 2.5e5/(998.2 g). */
+  hg_fluid *water = NULL;
+  CHECK(hg_line_new(&l) == HG_OK && hg_fluid_liquid(998.2, 1.002e-3, &water) == HG_OK, "handles");
+  CHECK(hg_line_add_pipe(l, 0.05, 60.0, 4.5e-5) == HG_OK && hg_line_add_rise(l, 12.0) == HG_OK, "line");
+  CHECK(hg_line_set_end_pressure(l, 2.5e5) == HG_OK, "end pressure");
+  double h = 0, d = 0, want = 12.0 + 2.5e5 / (998.2 * 9.80665);
+  CHECK(hg_line_required_head(l, water, 0.0, &h, &d) == HG_OK && fabs(h - want) < 1e-12, "%.17g vs %.17g", h, want);
+  CHECK(hg_line_set_end_pressure(l, NAN) == HG_ERR_NOT_FINITE && strstr(last_msg(), "end_pressure") != NULL, "NaN");
+  CHECK(hg_line_set_end_pressure(l, 0.0) == HG_OK && hg_line_required_head(l, water, 0.0, &h, &d) == HG_OK && h == 12.0,
+        "0 clears it");
+  CHECK(hg_line_set_end_pressure(NULL, 1.0) == HG_ERR_NULL_POINTER, "NULL line");
+  hg_fluid_free(water);
+  hg_line_free(l);
 }
 
 int main(int argc, char **argv) {

@@ -152,3 +152,16 @@ def test_rated_drop_scales_with_density():
     with pytest.raises(hg.HydrogradeError, match="rating_density"):
         hg.Equipment.pressure_drop("strainer", 2e4, 0.01, rating_density=0.0)
     assert "rating_density=" in repr(eq)
+
+
+def test_end_pressure_counts_in_the_required_head():
+    # A header 12 m up needing 2.5 bar above the start: required head = dz + losses +
+    # p_end/(rho g) (energy balance), so at zero flow 12 + 2.5e5/(998.2 g0).
+    water = hg.Fluid(998.2, 1.002e-3)
+    els = [hg.Pipe(0.05, 60.0, 4.5e-5), hg.Rise(12.0)]
+    line = hg.Line(els, end_pressure=2.5e5)
+    assert line.evaluate(water, 0.0).required_head == pytest.approx(12.0 + 2.5e5 / (998.2 * G0), rel=1e-15)
+    a, b = hg.Line(els).evaluate(water, 4e-3), line.evaluate(water, 4e-3)
+    assert b.required_pressure - a.required_pressure == pytest.approx(2.5e5, rel=1e-12)
+    with pytest.raises(hg.HydrogradeError, match="end_pressure"):
+        hg.Line(els, end_pressure=float("nan"))

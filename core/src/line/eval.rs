@@ -338,7 +338,7 @@ impl Line {
             h += s.head_loss + s.static_head; // same order as LineResult::required_head
             d += s.dhead_dflow;
         }
-        Ok((h, d))
+        Ok((h + self.end_head(fluid), d))
     }
 
     /// The fluid to evaluate with and the flow in it: for a gas with a known inlet

@@ -244,6 +244,12 @@ pub struct LineOptions {
     /// free surfaces whose own air columns cancel it.
     #[serde(default)]
     pub air_column_for_liquids: bool,
+    /// The pressure the line must deliver at its end, Pa, above the pressure at its start
+    /// (a spray header, a burner, a process inlet fed from a tank open to the same
+    /// atmosphere: the gauge pressure it needs). Counted in the required head as
+    /// p_end/(ρ g); `None` (the default) asks for none.
+    #[serde(default)]
+    pub end_pressure: Option<f64>,
 }
 
 /// Temperature of the default surroundings, K (20 °C).
@@ -260,6 +266,7 @@ impl Default for LineOptions {
             uncertainty: UncertaintyOptions::default(),
             surroundings: None,
             air_column_for_liquids: false,
+            end_pressure: None,
         }
     }
 }
@@ -272,6 +279,9 @@ impl LineOptions {
             check::positive("inlet_pressure", p)?;
         }
         self.surroundings_fluid()?;
+        if let Some(p) = self.end_pressure {
+            check::finite("end_pressure", p)?;
+        }
         self.uncertainty.validate()
     }
 
@@ -455,7 +465,19 @@ impl Line {
     /// neglected unless [`LineOptions::air_column_for_liquids`]); Σ Δz (1 − ρ_s/ρ) for a
     /// gas, with ρ_s the surroundings' density.
     pub fn static_head_in(&self, fluid: &Fluid) -> f64 {
-        self.resolved.iter().map(|r| self.rise_head(r, fluid)).sum()
+        self.resolved
+            .iter()
+            .map(|r| self.rise_head(r, fluid))
+            .sum::<f64>()
+            + self.end_head(fluid)
+    }
+
+    /// The head (m of `fluid`) of the pressure the line must deliver at its end,
+    /// p_end/(ρ g); 0 when it states none.
+    pub fn end_head(&self, fluid: &Fluid) -> f64 {
+        self.options.end_pressure.map_or(0.0, |p| {
+            p / (fluid.density * crate::units::STANDARD_GRAVITY)
+        })
     }
 
     /// The head (m of `fluid`) of one row's rise; 0 for other rows.

@@ -158,7 +158,8 @@ impl Line {
         // Summed in route order exactly as the system curve does, so both agree bit for bit.
         let required_head: f64 = states
             .iter()
-            .fold(0.0, |acc, s| acc + (s.head_loss + s.static_head));
+            .fold(0.0, |acc, s| acc + (s.head_loss + s.static_head))
+            + self.end_head(&work);
         let slope: f64 = states.iter().map(|s| s.dhead_dflow).sum::<f64>() * dq;
         let mut warnings = gas_warn;
         let mut messages: Vec<String> = Vec::new();

@@ -508,6 +508,7 @@ class Line:
         uncertainty: Union[str, Uncertainty, None] = None,
         surroundings: Optional[Fluid] = None,
         air_column_for_liquids: bool = False,
+        end_pressure: Optional[float] = None,
     ) -> Line: ...
     @property
     def elements(self) -> List[_Element]: ...
