@@ -775,6 +775,16 @@ typedef struct hg_element_result {
    * `hg_line_result_element_band_source`); 0 for a band of zero width (a rise).
    */
   size_t band_source_count;
+  /**
+   * Elevation of the element's outlet above the line's inlet, m (a rise's geometric
+   * height is the change of this from the row before).
+   */
+  double elevation_out;
+  /**
+   * Total pressure (static + ½ρV²) at the outlet, Pa absolute; valid when
+   * `has_pressure`.
+   */
+  double total_pressure_out;
 } hg_element_result;
 
 /**

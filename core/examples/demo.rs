@@ -56,7 +56,11 @@ fn duct_line() -> Result<Line> {
     let (d1, d2) = (big.hydraulic_diameter(), small.hydraulic_diameter());
     Line::new(vec![
         Element::Fitting(Fitting::from_tank(Edge::Rounded { r_over_d: 0.1 })?),
-        Element::Equipment(Equipment::pressure_drop("grease filter", 120.0, 0.9)?),
+        // Rated by its maker with air at 20 °C and 101 325 Pa.
+        Element::Equipment(
+            Equipment::pressure_drop("grease filter", 120.0, 0.9)?
+                .with_rating_density(Fluid::air(293.15, 101_325.0)?.density)?,
+        ),
         Element::Pipe(Pipe::of_material(big, 18.0, "galvanized_steel")?),
         Element::Fitting(Fitting::bend(90.0, 1.5)?),
         Element::Fitting(Fitting::contraction(d1, d2)?),
@@ -76,7 +80,12 @@ fn print_breakdown(r: &LineResult) {
         "  {:>2}  {:<22} {:>6} {:>9} {:>8}  {:>9}  {:<17} {:<22} warnings",
         "#", "element", "V m/s", "Re", "f or K", "loss m", "band (95 %) m", "largest source"
     );
+    let mut elevation = 0.0;
     for (i, e) in r.elements.iter().enumerate() {
+        // A rise prints its geometric height; its loss column is the head the fluid
+        // feels of it (for a gas, net of the surrounding air's column).
+        let height = e.elevation_out - elevation;
+        elevation = e.elevation_out;
         let coef = match (e.friction_factor, e.k) {
             (Some(f), _) => format!("f {f:.4}"),
             (_, Some(k)) => format!("K {k:.3}"),
@@ -90,7 +99,7 @@ fn print_breakdown(r: &LineResult) {
             e.head_loss
         };
         let label = if e.static_head != 0.0 {
-            format!("rise {:+.1} m", e.static_head)
+            format!("rise {height:+.1} m")
         } else {
             e.label.clone()
         };

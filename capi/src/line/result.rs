@@ -145,6 +145,12 @@ pub struct hg_element_result {
     /// Number of sources of this element's head-loss band (through
     /// `hg_line_result_element_band_source`); 0 for a band of zero width (a rise).
     pub band_source_count: usize,
+    /// Elevation of the element's outlet above the line's inlet, m (a rise's geometric
+    /// height is the change of this from the row before).
+    pub elevation_out: f64,
+    /// Total pressure (static + ½ρV²) at the outlet, Pa absolute; valid when
+    /// `has_pressure`.
+    pub total_pressure_out: f64,
 }
 sized!(hg_element_result, band_source_count: usize);
 
@@ -227,6 +233,8 @@ pub(crate) fn element_to_c(e: &ElementResult) -> hg_element_result {
         has_k,
         reserved: 0,
         band_source_count: e.head_loss_band.contributions.len(),
+        elevation_out: e.elevation_out,
+        total_pressure_out: e.total_pressure_out.unwrap_or(0.0),
     }
 }
 

@@ -157,3 +157,20 @@ pub(crate) fn velocity_note(i: Option<usize>, v: f64, flow: f64, limit: f64) -> 
         flow / 3600.0,
     )
 }
+
+/// A note when a gas flows through equipment rated with a fluid more than 100 times
+/// denser (a liquid, usually the default water): its drop then scales by ρ/ρ_rating.
+pub(crate) fn rating_note(
+    i: Option<usize>,
+    name: &str,
+    rating_density: f64,
+    fluid: &Fluid,
+) -> Option<String> {
+    (fluid.is_gas() && rating_density > 100.0 * fluid.density).then(|| {
+        let at = i.map_or_else(String::new, |i| format!("element {i} "));
+        format!(
+            "{at}({name}) is rated with a fluid of {rating_density} kg/m³ and passes a gas of {} kg/m³: its drop is scaled by their ratio; state the rating gas's density if it was rated with a gas",
+            fluid.density
+        )
+    })
+}

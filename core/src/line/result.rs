@@ -171,6 +171,21 @@ impl Line {
             warnings |= w;
             messages.push(m);
         }
+        for (i, r) in self.resolved.iter().enumerate() {
+            if let Resolved::Drop {
+                name,
+                rating_density,
+                ..
+            } = r
+            {
+                if let Some(m) =
+                    plausible::rating_note(self.origin[i], name, *rating_density, fluid)
+                {
+                    warnings |= Warnings::IMPLAUSIBLE_RATED_DROP;
+                    messages.push(m);
+                }
+            }
+        }
         let v_limit = plausible::max_velocity(fluid);
         let mut fastest: Option<(usize, f64)> = None;
         // Grade line: total pressure falls by ρg·loss and by ρg·Δz of the fluid's own
