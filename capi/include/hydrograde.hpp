@@ -88,13 +88,20 @@ enum class warning : uint32_t {
   below_vapour_pressure = HG_WARN_BELOW_VAPOUR_PRESSURE,
   fitting_out_of_range = HG_WARN_FITTING_OUT_OF_RANGE,
   bore_change_without_transition = HG_WARN_BORE_CHANGE_WITHOUT_TRANSITION,
+  implausible_velocity = HG_WARN_IMPLAUSIBLE_VELOCITY,
+  implausible_bore = HG_WARN_IMPLAUSIBLE_BORE,
+  implausible_length = HG_WARN_IMPLAUSIBLE_LENGTH,
+  implausible_rated_drop = HG_WARN_IMPLAUSIBLE_RATED_DROP,
+  implausible_viscosity = HG_WARN_IMPLAUSIBLE_VISCOSITY,
 };
 
 /// Every warning, in bit order.
 constexpr warning all_warnings[] = {
     warning::reynolds_out_of_range, warning::roughness_out_of_range, warning::transitional_flow,
     warning::non_circular_section,  warning::gas_compressibility,    warning::below_vapour_pressure,
-    warning::fitting_out_of_range,  warning::bore_change_without_transition,
+    warning::fitting_out_of_range,  warning::bore_change_without_transition, warning::implausible_velocity,
+    warning::implausible_bore,      warning::implausible_length,     warning::implausible_rated_drop,
+    warning::implausible_viscosity,
 };
 
 /// True when the warning bits `bits` hold `w`.
