@@ -55,7 +55,7 @@ def orchard_line() -> hg.Line:
 
     named = hg.Fitting.named
     return hg.Line([
-        hg.Fitting.entrance_sharp(),
+        hg.Fitting.from_tank(),
         named("y_strainer"),
         pvc(6.0),
         named("gate_valve"),
@@ -73,7 +73,7 @@ def orchard_line() -> hg.Line:
         named("ball_valve"),
         named("globe_valve"),
         hg.Rise(38.0),
-        hg.Fitting.exit(),
+        hg.Fitting.into_tank(),
     ])
 
 
@@ -82,15 +82,16 @@ def duct_line() -> hg.Line:
     small = hg.Section.rectangle(0.30, 0.20)
     d1, d2 = big.hydraulic_diameter, small.hydraulic_diameter
     return hg.Line([
-        hg.Fitting.entrance_rounded(0.1),
-        hg.Equipment.pressure_drop("grease filter", 120.0, 0.9),
+        hg.Fitting.from_tank("rounded", 0.1),
+        # Rated by its maker with air at 20 °C and 101 325 Pa.
+        hg.Equipment.pressure_drop("grease filter", 120.0, 0.9, rating_density=hg.Fluid.air(293.15).density),
         hg.Pipe.of_material(big, 18.0, "galvanized_steel"),
         hg.Fitting.bend(90.0, 1.5),
         hg.Fitting.contraction(d1, d2),
         hg.Pipe.of_material(small, 12.0, "galvanized_steel"),
         hg.Fitting.bend(45.0, 1.5),
         hg.Rise(4.5),
-        hg.Fitting.exit(),
+        hg.Fitting.into_tank(),
     ])
 
 
@@ -124,7 +125,11 @@ def source_text(source: Optional[str], index: int, label: str) -> str:
 
 def breakdown_rows(r: hg.LineResult) -> List[Tuple[str, ...]]:
     rows: List[Tuple[str, ...]] = []
+    elevation = 0.0
     for i, e in enumerate(r.elements):
+        # A rise prints its geometric height; its loss column is the head the fluid
+        # feels of it (for a gas, net of the surrounding air's column).
+        height, elevation = e.elevation_out - elevation, e.elevation_out
         if e.friction_factor is not None:
             coef = f"f {e.friction_factor:.4f}"
         elif e.k is not None:
@@ -135,7 +140,7 @@ def breakdown_rows(r: hg.LineResult) -> List[Tuple[str, ...]]:
         rise = e.static_head != 0.0
         rows.append((
             str(i),
-            f"rise {e.static_head:+.1f} m" if rise else e.label,
+            f"rise {height:+.1f} m" if rise else e.label,
             f"{e.velocity:.2f}" if moving else "",
             f"{e.reynolds:.0f}" if moving else "",
             coef,

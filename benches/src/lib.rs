@@ -3,7 +3,7 @@
 //! their figures describe the same workload.
 
 use hydrograde::Result;
-use hydrograde::fitting::Fitting;
+use hydrograde::fitting::{Edge, Fitting};
 use hydrograde::fluid::Fluid;
 use hydrograde::line::{Element, Line};
 use hydrograde::pipe::Pipe;
@@ -61,7 +61,7 @@ pub fn line20() -> Result<Line> {
     let pipe = |d: f64, l: f64| Pipe::circular(d, l, steel).map(Element::Pipe);
     let fit = |f: Result<Fitting>| f.map(Element::Fitting);
     Line::new(vec![
-        Element::Fitting(Fitting::entrance_sharp()),
+        Element::Fitting(Fitting::from_tank(Edge::Square)?),
         pipe(big, 35.0)?,
         fit(Fitting::bend(90.0, 1.5))?,
         pipe(big, 12.0)?,
@@ -80,7 +80,7 @@ pub fn line20() -> Result<Line> {
         pipe(big, 60.0)?,
         Element::rise(-2.5)?,
         pipe(big, 8.0)?,
-        Element::Fitting(Fitting::exit()),
+        Element::Fitting(Fitting::into_tank()),
     ])
 }
 

@@ -11,7 +11,7 @@
 //!
 //! Run: `cargo run --release -p hydrograde-capi --example core_reference > FILE`.
 
-use hydrograde::fitting::Fitting;
+use hydrograde::fitting::{Edge, Fitting};
 use hydrograde::fluid::{Fluid, water_vapour_pressure};
 use hydrograde::friction::{Correlation, Options, Regime, darcy_factor};
 use hydrograde::line::{Element, Equipment, Limit, Line, LineOptions, PumpCurve, split_flow};
@@ -369,7 +369,7 @@ fn scenario(n: i64) -> hydrograde::Result<Line> {
             };
             let mut line = Line::with_options(
                 vec![
-                    Element::Fitting(Fitting::entrance_rounded(0.1)?),
+                    Element::Fitting(Fitting::from_tank(Edge::Rounded { r_over_d: 0.1 })?),
                     Element::Pipe(Pipe::of_material(
                         Section::circle(0.1)?,
                         40.0,
@@ -385,9 +385,9 @@ fn scenario(n: i64) -> hydrograde::Result<Line> {
                     Element::Pipe(Pipe::new(Section::custom(0.0177, 0.48, 62.0)?, 10.0, 1e-4)?),
                     Element::Fitting(Fitting::contraction(0.15, 0.08)?),
                     Element::Pipe(Pipe::circular(0.08, 5.0, 1.5e-6)?),
-                    Element::Fitting(Fitting::exit()),
-                    Element::Fitting(Fitting::entrance_projecting()),
-                    Element::Fitting(Fitting::entrance_sharp()),
+                    Element::Fitting(Fitting::into_tank()),
+                    Element::Fitting(Fitting::from_tank(Edge::Reentrant)?),
+                    Element::Fitting(Fitting::from_tank(Edge::Square)?),
                     Element::Pipe(Pipe::new(Section::rectangle(0.12, 0.06)?, 3.0, 5e-5)?),
                 ],
                 opts,

@@ -52,7 +52,7 @@ static void band_text(char *buf, size_t len, double low, double high) {
 static hg_line *orchard_line(void) {
   hg_line *l = NULL;
   TRY(hg_line_new(&l));
-  TRY(hg_line_add_entrance(l, HG_ENTRANCE_SHARP, 0.0));
+  TRY(hg_line_add_from_tank(l, HG_EDGE_SQUARE, 0.0));
   TRY(hg_line_add_fitting(l, "y_strainer", 0.0));
   TRY(hg_line_add_pipe_material(l, PVC_BORE, 6.0, "pvc"));
   TRY(hg_line_add_fitting(l, "gate_valve", 0.0));
@@ -70,7 +70,7 @@ static hg_line *orchard_line(void) {
   TRY(hg_line_add_fitting(l, "ball_valve", 0.0));
   TRY(hg_line_add_fitting(l, "globe_valve", 0.0));
   TRY(hg_line_add_rise(l, 38.0));
-  TRY(hg_line_add_exit(l));
+  TRY(hg_line_add_into_tank(l));
   return l;
 }
 
@@ -80,15 +80,18 @@ static hg_line *duct_line(void) {
   TRY(hg_section_properties(HG_SECTION_RECTANGLE, 0.30, 0.20, &area, &perimeter, &d2, &c));
   hg_line *l = NULL;
   TRY(hg_line_new(&l));
-  TRY(hg_line_add_entrance(l, HG_ENTRANCE_ROUNDED, 0.1));
-  TRY(hg_line_add_equipment(l, "grease filter", 120.0, 0.9));
+  TRY(hg_line_add_from_tank(l, HG_EDGE_ROUNDED, 0.1));
+  /* Rated by its maker with air at 20 °C and 101 325 Pa. */
+  double rated_air = 0.0, rated_mu = 0.0;
+  TRY(hg_air(293.15, 101325.0, &rated_air, &rated_mu));
+  TRY(hg_line_add_equipment_rated(l, "grease filter", 120.0, 0.9, rated_air));
   TRY(hg_line_add_duct_material(l, HG_SECTION_RECTANGLE, 0.40, 0.25, 18.0, "galvanized_steel"));
   TRY(hg_line_add_bend(l, 90.0, 1.5, 0.0));
   TRY(hg_line_add_contraction(l, d1, d2));
   TRY(hg_line_add_duct_material(l, HG_SECTION_RECTANGLE, 0.30, 0.20, 12.0, "galvanized_steel"));
   TRY(hg_line_add_bend(l, 45.0, 1.5, 0.0));
   TRY(hg_line_add_rise(l, 4.5));
-  TRY(hg_line_add_exit(l));
+  TRY(hg_line_add_into_tank(l));
   return l;
 }
 
@@ -114,6 +117,7 @@ static void print_breakdown(const hg_line *l, const hg_fluid *f, double q, hg_li
   printf("  %2s  %-22s %6s %9s %8s  %9s  ", "#", "element", "V m/s", "Re", "f or K", "loss m");
   padded("band (95 %) m", 17, 0);
   printf(" %-22s warnings\n", "largest source");
+  double elevation = 0.0;
   for (size_t i = 0; i < t->element_count; i++) {
     hg_element_result e;
     e.struct_size = sizeof e;
@@ -122,7 +126,9 @@ static void print_breakdown(const hg_line *l, const hg_fluid *f, double q, hg_li
     size_t need;
     TRY(hg_line_result_label(r, i, label, sizeof label, &need));
     int rise = e.static_head != 0.0;
-    if (rise) snprintf(label, sizeof label, "rise %+.1f m", e.static_head);
+    /* A rise prints its geometric height; its loss column is the head the fluid feels. */
+    if (rise) snprintf(label, sizeof label, "rise %+.1f m", e.elevation_out - elevation);
+    elevation = e.elevation_out;
     if (e.has_friction_factor) snprintf(coef, sizeof coef, "f %.4f", e.friction_factor);
     else if (e.has_k) snprintf(coef, sizeof coef, "K %.3f", e.k);
     /* Rises and rated drops have no velocity of their own. */

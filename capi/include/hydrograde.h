@@ -48,7 +48,7 @@
  *             hg_pipe_table_source, hg_pipe_table_wall_rule
  *  Pipes      hg_pipe_flow; hg_pipe_head_loss, hg_pipe_head_loss_batch,
  *             hg_duct_flow_state, hg_reynolds
- *  Lines      hg_line (handle), HG_ENTRANCE_*, HG_TURBULENT_DIAMETER_*, HG_LIMIT_*,
+ *  Lines      hg_line (handle), HG_EDGE_*, HG_TURBULENT_DIAMETER_*, HG_LIMIT_*,
  *             hg_sizing; hg_line_new, hg_line_free, hg_line_count, hg_line_add_*,
  *             hg_line_set_*, hg_line_flow_for_head, hg_line_system_curve,
  *             hg_line_operating_point, hg_line_required_head, hg_pump_curve_head,
@@ -56,11 +56,14 @@
  *             hg_line_with_uniform_diameter, hg_line_size, hg_line_split_flow,
  *             hg_line_split_flow_bands, hg_line_blocks_reverse_flow,
  *             hg_line_set_air_column_for_liquids, hg_line_set_label,
- *             hg_line_set_count, hg_line_slice, hg_line_append_line
+ *             hg_line_set_count, hg_line_slice, hg_line_append_line,
+ *             hg_line_add_equipment_rated, hg_line_set_end_pressure
  *  Results    hg_line_result (handle), hg_line_totals, hg_element_result,
  *             HG_ELEMENT_*, HG_REGIME_NONE; hg_line_evaluate, hg_line_evaluate_at,
  *             hg_line_result_totals, hg_line_result_element, hg_line_result_label,
  *             hg_line_result_band_source, hg_line_result_element_band_source,
+ *             hg_line_result_npsh_available, hg_line_result_npsh_check,
+ *             hg_line_result_message_count, hg_line_result_message,
  *             hg_line_result_free
  *  Bands      hg_uncertainty_options, hg_monte_carlo, HG_MONTE_CARLO_MAX_SAMPLES;
  *             hg_line_system_curve_band,
@@ -223,19 +226,20 @@
 #define HG_SECTION_TRIANGLE 4
 
 /**
- * A sharp-edged entrance from a large space (`r_over_d` must be 0).
+ * Inlet from a tank through a square (sharp-edged) pipe end, K = 0.5 (`r_over_d` must be 0).
  */
-#define HG_ENTRANCE_SHARP 0
+#define HG_EDGE_SQUARE 0
 
 /**
- * A rounded entrance of radius `r_over_d` times the bore.
+ * Inlet from a tank through a pipe end rounded with radius `r_over_d` times the bore.
  */
-#define HG_ENTRANCE_ROUNDED 1
+#define HG_EDGE_ROUNDED 1
 
 /**
- * A pipe projecting into the space it draws from (`r_over_d` must be 0).
+ * Inlet from a tank through a pipe end projecting into it (re-entrant entrance), K = 0.78
+ * (`r_over_d` must be 0).
  */
-#define HG_ENTRANCE_PROJECTING 2
+#define HG_EDGE_REENTRANT 2
 
 /**
  * Turbulent flow in non-circular ducts on the hydraulic diameter (default).
@@ -337,6 +341,32 @@
  * change is counted as an abrupt contraction or expansion row of its own.
  */
 #define HG_WARN_BORE_CHANGE_WITHOUT_TRANSITION 128
+
+/**
+ * A velocity above 15 m/s in a liquid or 80 m/s in a gas: likely a flow in the wrong
+ * unit (L/s or m³/h typed as m³/s).
+ */
+#define HG_WARN_IMPLAUSIBLE_VELOCITY 256
+
+/**
+ * A bore under 2 mm or over 5 m: likely millimetres typed as metres.
+ */
+#define HG_WARN_IMPLAUSIBLE_BORE 512
+
+/**
+ * A pipe longer than 200 km: likely millimetres or feet typed as metres.
+ */
+#define HG_WARN_IMPLAUSIBLE_LENGTH 1024
+
+/**
+ * A rated pressure drop under 10 Pa: likely bar or kPa typed as Pa.
+ */
+#define HG_WARN_IMPLAUSIBLE_RATED_DROP 2048
+
+/**
+ * A liquid's viscosity far above its density's kind: likely centipoise typed as Pa·s.
+ */
+#define HG_WARN_IMPLAUSIBLE_VISCOSITY 4096
 
 /**
  * Major version of the library (from Cargo.toml; the build fails if they disagree).
@@ -780,6 +810,16 @@ typedef struct hg_element_result {
    * Reserved, 0.
    */
   int32_t reserved_end;
+  /**
+   * Elevation of the element's outlet above the line's inlet, m (a rise's geometric
+   * height is the change of this from the row before).
+   */
+  double elevation_out;
+  /**
+   * Total pressure (static + ½ρV²) at the outlet, Pa absolute; valid when
+   * `has_pressure`.
+   */
+  double total_pressure_out;
 } hg_element_result;
 
 /**
@@ -1919,29 +1959,33 @@ int32_t hg_line_add_bend(struct hg_line *line,
                          double diameter);
 
 /**
- * Appends a pipe entrance of kind `kind` (`HG_ENTRANCE_*`); `r_over_d` is the rounding
- * radius over the bore for `HG_ENTRANCE_ROUNDED` (≥ 0) and must be 0 otherwise.
+ * Appends an inlet from a tank through a pipe end with edge `edge` (`HG_EDGE_*`):
+ * square (sharp-edged entrance, K = 0.5), rounded (K from `r_over_d`, the rounding radius
+ * over the bore, ≥ 0) or re-entrant (K = 0.78). `r_over_d` must be 0 unless the edge is
+ * rounded. A line that starts with one starts at the tank's surface; reverse flow turns
+ * it into an outlet into the tank.
  *
- * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a bad kind or radius;
- * `HG_ERR_INVALID` for a radius with another kind; `HG_ERR_NULL_POINTER`. Needs
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a bad edge or radius;
+ * `HG_ERR_INVALID` for a radius with another edge; `HG_ERR_NULL_POINTER`. Needs
  * exclusive use of `line`.
  *
  * # Safety
  * `line` must be NULL or a live handle used by no other thread.
  */
-int32_t hg_line_add_entrance(struct hg_line *line,
-                             int32_t kind,
-                             double r_over_d);
+int32_t hg_line_add_from_tank(struct hg_line *line,
+                              int32_t edge,
+                              double r_over_d);
 
 /**
- * Appends a pipe exit into a large space (K = 1 on the pipe's velocity).
+ * Appends an outlet into a large tank (K = 1 on the pipe's velocity); reverse flow turns
+ * it into a square-edged inlet from the tank.
  *
  * Returns `HG_OK` or `HG_ERR_NULL_POINTER`. Needs exclusive use of `line`.
  *
  * # Safety
  * `line` must be NULL or a live handle used by no other thread.
  */
-int32_t hg_line_add_exit(struct hg_line *line);
+int32_t hg_line_add_into_tank(struct hg_line *line);
 
 /**
  * Sets the relative half-width `spread` (0…1, e.g. 0.3 for ±30 %) of the K of the
@@ -2550,6 +2594,108 @@ int32_t hg_line_set_air_column_for_liquids(struct hg_line *line,
  */
 int32_t hg_line_blocks_reverse_flow(const struct hg_line *line,
                                     int32_t *blocks);
+
+/**
+ * Writes the NPSH available (m) at the outlet of row `index` (0-based, route order) of
+ * `result` to `*npsh`: the total pressure there over the vapour pressure in metres of
+ * the liquid, NPSHa = (p + ½ρV² − p_v)/(ρ g) (definition, e.g. ISO 9906).
+ *
+ * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` when `index` is not a row of the result;
+ * `HG_ERR_INVALID` when the line was evaluated without an inlet pressure or the fluid
+ * has no vapour pressure (a gas, or a liquid stated without one); `HG_ERR_NULL_POINTER`.
+ * Thread-safe.
+ *
+ * # Safety
+ * `result` must be NULL or a live handle; `npsh` NULL or writable.
+ */
+int32_t hg_line_result_npsh_available(const struct hg_line_result *result,
+                                      size_t index,
+                                      double *npsh);
+
+/**
+ * Checks the NPSH available at the outlet of row `index` of `result` against
+ * `required` (m, ≥ 0, the pump maker's NPSH required) plus `margin` (m, ≥ 0): writes the
+ * NPSH available (m) to `*available` and 1 to `*sufficient` when available ≥ required +
+ * margin, else 0.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE` or `HG_ERR_OUT_OF_RANGE` for a bad `required` or
+ * `margin`; otherwise as `hg_line_result_npsh_available`. Nothing is written on error.
+ * Thread-safe.
+ *
+ * # Safety
+ * `result` must be NULL or a live handle; `available` and `sufficient` NULL or writable.
+ */
+int32_t hg_line_result_npsh_check(const struct hg_line_result *result,
+                                  size_t index,
+                                  double required,
+                                  double margin,
+                                  double *available,
+                                  int32_t *sufficient);
+
+/**
+ * Writes the number of messages of `result` to `*count`: each says in words what a
+ * warning found (the element, the values, and for a likely unit slip the value in the
+ * unit probably meant).
+ *
+ * Returns `HG_OK` or `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * `result` must be NULL or a live handle; `count` NULL or writable.
+ */
+int32_t hg_line_result_message_count(const struct hg_line_result *result,
+                                     size_t *count);
+
+/**
+ * Copies message `index` (0-based, see `hg_line_result_message_count`) of `result` into
+ * `buf` (at most `len - 1` bytes and a NUL, UTF-8; `buf` may be NULL when `len` is 0) and
+ * stores its full length in `*needed`.
+ *
+ * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` when `index` is not a message;
+ * `HG_ERR_BUFFER_TOO_SMALL` when the message did not fit (`*needed` and the cut copy are
+ * still written); `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * `result` must be NULL or a live handle; `buf` NULL or valid for `len` bytes; `needed`
+ * NULL or writable.
+ */
+int32_t hg_line_result_message(const struct hg_line_result *result,
+                               size_t index,
+                               char *buf,
+                               size_t len,
+                               size_t *needed);
+
+/**
+ * Appends rated equipment labelled `name` with a pressure drop `drop` (Pa, > 0) at the
+ * rating flow `at_flow` (m³/s, > 0) of a fluid of density `rating_density` (kg/m³, > 0):
+ * in the line's fluid of density ρ the drop is drop · (ρ/ρ_rating) · Q|Q|/Q_rating².
+ * `hg_line_add_equipment` rates with water at 20 °C.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_INVALID` for a
+ * label not UTF-8; `HG_ERR_NULL_POINTER`. Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread; `name` NULL or a
+ * NUL-terminated string.
+ */
+int32_t hg_line_add_equipment_rated(struct hg_line *line,
+                                    const char *name,
+                                    double drop,
+                                    double at_flow,
+                                    double rating_density);
+
+/**
+ * Sets the pressure the line must deliver at its end, Pa above the pressure at its start
+ * (a spray header, a burner, a process inlet), counted in the required head as
+ * p_end/(ρ g); 0 asks for none (the default).
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_NULL_POINTER`. Needs exclusive use of
+ * `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread.
+ */
+int32_t hg_line_set_end_pressure(struct hg_line *line,
+                                 double pressure);
 
 /**
  * The system curve with its 95 % band: at each of the `n` flows `flows[i]` (m³/s),

@@ -88,13 +88,20 @@ enum class warning : uint32_t {
   below_vapour_pressure = HG_WARN_BELOW_VAPOUR_PRESSURE,
   fitting_out_of_range = HG_WARN_FITTING_OUT_OF_RANGE,
   bore_change_without_transition = HG_WARN_BORE_CHANGE_WITHOUT_TRANSITION,
+  implausible_velocity = HG_WARN_IMPLAUSIBLE_VELOCITY,
+  implausible_bore = HG_WARN_IMPLAUSIBLE_BORE,
+  implausible_length = HG_WARN_IMPLAUSIBLE_LENGTH,
+  implausible_rated_drop = HG_WARN_IMPLAUSIBLE_RATED_DROP,
+  implausible_viscosity = HG_WARN_IMPLAUSIBLE_VISCOSITY,
 };
 
 /// Every warning, in bit order.
 constexpr warning all_warnings[] = {
     warning::reynolds_out_of_range, warning::roughness_out_of_range, warning::transitional_flow,
     warning::non_circular_section,  warning::gas_compressibility,    warning::below_vapour_pressure,
-    warning::fitting_out_of_range,  warning::bore_change_without_transition,
+    warning::fitting_out_of_range,  warning::bore_change_without_transition, warning::implausible_velocity,
+    warning::implausible_bore,      warning::implausible_length,     warning::implausible_rated_drop,
+    warning::implausible_viscosity,
 };
 
 /// True when the warning bits `bits` hold `w`.
@@ -745,14 +752,14 @@ class line {
     check(hg_line_add_bend(l_, angle_deg, r_over_d, diameter));
     return *this;
   }
-  /// An entrance from a large space (HG_ENTRANCE_*; r/D for a rounded one).
-  line& add_entrance(int32_t kind, double r_over_d = 0.0) {
-    check(hg_line_add_entrance(l_, kind, r_over_d));
+  /// An inlet from a tank through a pipe end with edge HG_EDGE_* (r/D for a rounded one).
+  line& add_from_tank(int32_t edge, double r_over_d = 0.0) {
+    check(hg_line_add_from_tank(l_, edge, r_over_d));
     return *this;
   }
-  /// An exit into a large space (K = 1).
-  line& add_exit() {
-    check(hg_line_add_exit(l_));
+  /// An outlet into a tank (K = 1).
+  line& add_into_tank() {
+    check(hg_line_add_into_tank(l_));
     return *this;
   }
   /// The relative spread of fitting `index`'s K (rectangular, for the bands).

@@ -22,13 +22,24 @@ pub const HG_WARN_FITTING_OUT_OF_RANGE: u32 = 64;
 /// The bore changes between two elements with no contraction or expansion element: the
 /// change is counted as an abrupt contraction or expansion row of its own.
 pub const HG_WARN_BORE_CHANGE_WITHOUT_TRANSITION: u32 = 128;
+/// A velocity above 15 m/s in a liquid or 80 m/s in a gas: likely a flow in the wrong
+/// unit (L/s or m³/h typed as m³/s).
+pub const HG_WARN_IMPLAUSIBLE_VELOCITY: u32 = 256;
+/// A bore under 2 mm or over 5 m: likely millimetres typed as metres.
+pub const HG_WARN_IMPLAUSIBLE_BORE: u32 = 512;
+/// A pipe longer than 200 km: likely millimetres or feet typed as metres.
+pub const HG_WARN_IMPLAUSIBLE_LENGTH: u32 = 1024;
+/// A rated pressure drop under 10 Pa: likely bar or kPa typed as Pa.
+pub const HG_WARN_IMPLAUSIBLE_RATED_DROP: u32 = 2048;
+/// A liquid's viscosity far above its density's kind: likely centipoise typed as Pa·s.
+pub const HG_WARN_IMPLAUSIBLE_VISCOSITY: u32 = 4096;
 
 /// The name of one warning bit (`HG_WARN_*`) as a static string, e.g.
 /// "transitional_flow"; NULL when `bit` is not exactly one known warning bit.
 /// Thread-safe.
 #[unsafe(no_mangle)]
 pub extern "C" fn hg_warning_name(bit: u32) -> *const c_char {
-    const NAMES: [&str; 8] = [
+    const NAMES: [&str; 13] = [
         "reynolds_out_of_range\0",
         "roughness_out_of_range\0",
         "transitional_flow\0",
@@ -37,6 +48,11 @@ pub extern "C" fn hg_warning_name(bit: u32) -> *const c_char {
         "below_vapour_pressure\0",
         "fitting_out_of_range\0",
         "bore_change_without_transition\0",
+        "implausible_velocity\0",
+        "implausible_bore\0",
+        "implausible_length\0",
+        "implausible_rated_drop\0",
+        "implausible_viscosity\0",
     ];
     Warnings::ALL
         .iter()
@@ -61,6 +77,11 @@ mod tests {
             HG_WARN_BELOW_VAPOUR_PRESSURE,
             HG_WARN_FITTING_OUT_OF_RANGE,
             HG_WARN_BORE_CHANGE_WITHOUT_TRANSITION,
+            HG_WARN_IMPLAUSIBLE_VELOCITY,
+            HG_WARN_IMPLAUSIBLE_BORE,
+            HG_WARN_IMPLAUSIBLE_LENGTH,
+            HG_WARN_IMPLAUSIBLE_RATED_DROP,
+            HG_WARN_IMPLAUSIBLE_VISCOSITY,
         ];
         assert_eq!(
             ours.len(),

@@ -9,7 +9,7 @@
 
 use hydrograde::Result;
 use hydrograde::band::Band;
-use hydrograde::fitting::Fitting;
+use hydrograde::fitting::{Edge, Fitting};
 use hydrograde::fluid::Fluid;
 use hydrograde::line::{Element, Equipment, Limit, Line, LineResult, PumpCurve};
 use hydrograde::pipe::Pipe;
@@ -28,7 +28,7 @@ fn orchard_line() -> Result<Line> {
     };
     let named = |n: &str| Fitting::named(n).map(Element::Fitting);
     Line::new(vec![
-        Element::Fitting(Fitting::entrance_sharp()),
+        Element::Fitting(Fitting::from_tank(Edge::Square)?),
         named("y_strainer")?,
         pvc(6.0)?,
         named("gate_valve")?,
@@ -46,7 +46,7 @@ fn orchard_line() -> Result<Line> {
         named("ball_valve")?,
         named("globe_valve")?,
         Element::rise(38.0)?,
-        Element::Fitting(Fitting::exit()),
+        Element::Fitting(Fitting::into_tank()),
     ])
 }
 
@@ -55,15 +55,19 @@ fn duct_line() -> Result<Line> {
     let small = Section::rectangle(0.30, 0.20)?;
     let (d1, d2) = (big.hydraulic_diameter(), small.hydraulic_diameter());
     Line::new(vec![
-        Element::Fitting(Fitting::entrance_rounded(0.1)?),
-        Element::Equipment(Equipment::pressure_drop("grease filter", 120.0, 0.9)?),
+        Element::Fitting(Fitting::from_tank(Edge::Rounded { r_over_d: 0.1 })?),
+        // Rated by its maker with air at 20 °C and 101 325 Pa.
+        Element::Equipment(
+            Equipment::pressure_drop("grease filter", 120.0, 0.9)?
+                .with_rating_density(Fluid::air(293.15, 101_325.0)?.density)?,
+        ),
         Element::Pipe(Pipe::of_material(big, 18.0, "galvanized_steel")?),
         Element::Fitting(Fitting::bend(90.0, 1.5)?),
         Element::Fitting(Fitting::contraction(d1, d2)?),
         Element::Pipe(Pipe::of_material(small, 12.0, "galvanized_steel")?),
         Element::Fitting(Fitting::bend(45.0, 1.5)?),
         Element::rise(4.5)?,
-        Element::Fitting(Fitting::exit()),
+        Element::Fitting(Fitting::into_tank()),
     ])
 }
 
@@ -76,7 +80,12 @@ fn print_breakdown(r: &LineResult) {
         "  {:>2}  {:<22} {:>6} {:>9} {:>8}  {:>9}  {:<17} {:<22} warnings",
         "#", "element", "V m/s", "Re", "f or K", "loss m", "band (95 %) m", "largest source"
     );
+    let mut elevation = 0.0;
     for (i, e) in r.elements.iter().enumerate() {
+        // A rise prints its geometric height; its loss column is the head the fluid
+        // feels of it (for a gas, net of the surrounding air's column).
+        let height = e.elevation_out - elevation;
+        elevation = e.elevation_out;
         let coef = match (e.friction_factor, e.k) {
             (Some(f), _) => format!("f {f:.4}"),
             (_, Some(k)) => format!("K {k:.3}"),
@@ -90,7 +99,7 @@ fn print_breakdown(r: &LineResult) {
             e.head_loss
         };
         let label = if e.static_head != 0.0 {
-            format!("rise {:+.1} m", e.static_head)
+            format!("rise {height:+.1} m")
         } else {
             e.label.clone()
         };

@@ -692,8 +692,11 @@ mod tests {
         assert_eq!(s.name(), "branch 1: K of k (element 4)");
         assert_eq!(s.kind(), "fitting_k");
         assert_eq!(s.shape(), Shape::Rectangular);
-        assert_eq!(Source::CatalogueK("exit".into()).name(), "K of exit");
-        assert!(!Source::CatalogueK("exit".into()).is_element_scoped());
+        assert_eq!(
+            Source::CatalogueK("into_tank".into()).name(),
+            "K of into_tank"
+        );
+        assert!(!Source::CatalogueK("into_tank".into()).is_element_scoped());
         assert!(Source::PipeRoughness { element: 0 }.is_element_scoped());
         assert_eq!(Source::Density.shape(), Shape::Normal);
     }

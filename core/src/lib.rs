@@ -43,7 +43,7 @@ pub use roughness::Material;
 pub use section::{Section, Shape, TurbulentDiameter};
 pub use sizes::{PipeSize, PipeTable};
 // fitting (minor losses) and units
-pub use fitting::{Fitting, Resistance};
+pub use fitting::{Edge, Fitting, Resistance};
 pub use units::{STANDARD_GRAVITY, convert, convert_head};
 // Lines, pipes and bands.
 pub use band::{Band, Contribution, UncertaintyOptions};

@@ -35,8 +35,22 @@ impl Warnings {
     /// counted as an abrupt change of section of its own.
     pub const BORE_CHANGE_WITHOUT_TRANSITION: Warnings = Warnings(1 << 7);
 
+    /// A velocity above 15 m/s in a liquid or 80 m/s in a gas: likely a flow in the wrong
+    /// unit (L/s or m³/h typed as m³/s).
+    pub const IMPLAUSIBLE_VELOCITY: Warnings = Warnings(1 << 8);
+    /// A bore under 2 mm or over 5 m: likely millimetres typed as metres.
+    pub const IMPLAUSIBLE_BORE: Warnings = Warnings(1 << 9);
+    /// A pipe longer than 200 km: likely millimetres or feet typed as metres.
+    pub const IMPLAUSIBLE_LENGTH: Warnings = Warnings(1 << 10);
+    /// A rated pressure drop under 10 Pa: likely bar or kPa typed as Pa.
+    pub const IMPLAUSIBLE_RATED_DROP: Warnings = Warnings(1 << 11);
+    /// A liquid's viscosity far above its density's kind (over 1 Pa·s below 1100 kg/m³,
+    /// or over 0.1 Pa·s at 950…1050 kg/m³, the density of water): likely centipoise typed
+    /// as Pa·s.
+    pub const IMPLAUSIBLE_VISCOSITY: Warnings = Warnings(1 << 12);
+
     /// Every named warning with its stable snake_case name, in bit order.
-    pub const ALL: [(Warnings, &'static str); 8] = [
+    pub const ALL: [(Warnings, &'static str); 13] = [
         (Warnings::REYNOLDS_OUT_OF_RANGE, "reynolds_out_of_range"),
         (Warnings::ROUGHNESS_OUT_OF_RANGE, "roughness_out_of_range"),
         (Warnings::TRANSITIONAL_FLOW, "transitional_flow"),
@@ -48,6 +62,11 @@ impl Warnings {
             Warnings::BORE_CHANGE_WITHOUT_TRANSITION,
             "bore_change_without_transition",
         ),
+        (Warnings::IMPLAUSIBLE_VELOCITY, "implausible_velocity"),
+        (Warnings::IMPLAUSIBLE_BORE, "implausible_bore"),
+        (Warnings::IMPLAUSIBLE_LENGTH, "implausible_length"),
+        (Warnings::IMPLAUSIBLE_RATED_DROP, "implausible_rated_drop"),
+        (Warnings::IMPLAUSIBLE_VISCOSITY, "implausible_viscosity"),
     ];
 
     /// The raw bits (the C ABI's bitmask).

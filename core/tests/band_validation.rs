@@ -13,7 +13,7 @@
 //! 20 000-sample check with the 5 % tolerance.
 
 use hydrograde::band::{Coverage, Source, UncertaintyOptions, monte_carlo};
-use hydrograde::fitting::Fitting;
+use hydrograde::fitting::{Edge, Fitting};
 use hydrograde::fluid::Fluid;
 use hydrograde::line::{Element, Equipment, Line, LineOptions};
 use hydrograde::pipe::Pipe;
@@ -73,7 +73,7 @@ fn cases() -> Vec<(&'static str, Line, Fluid, f64)> {
     for i in 0..8 {
         let d = [0.025, 0.04, 0.08, 0.15][i % 4];
         let mut els = vec![
-            Element::Fitting(Fitting::entrance_sharp()),
+            Element::Fitting(Fitting::from_tank(Edge::Square).unwrap()),
             pipe(d, 3.0, "stainless_steel"),
         ];
         for _ in 0..(2 + i) {
@@ -87,7 +87,7 @@ fn cases() -> Vec<(&'static str, Line, Fluid, f64)> {
                 Fitting::k(1.2).unwrap().with_k_spread(0.25).unwrap(),
             ));
         }
-        els.push(Element::Fitting(Fitting::exit()));
+        els.push(Element::Fitting(Fitting::into_tank()));
         out.push(("fittings", line(els, None), water(293.15), q_of(2.0, d)));
     }
     // Laminar: small bores, slow flow, cold water.

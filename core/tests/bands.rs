@@ -4,7 +4,7 @@
 mod common;
 
 use hydrograde::band::{Source, UncertaintyOptions, monte_carlo};
-use hydrograde::fitting::Fitting;
+use hydrograde::fitting::{Edge, Fitting};
 use hydrograde::fluid::Fluid;
 use hydrograde::friction::Regime;
 use hydrograde::line::{Element, Equipment, Line, LineOptions};
@@ -130,7 +130,7 @@ fn varied_lines() -> Vec<(Line, Fluid, f64)> {
         let d2 = d1 * [1.0, 1.5, 0.8, 2.0][(i / 4) % 4];
         let eps = [0.0, 1.5e-6, 4.5e-5, 2.6e-4, 1e-3][i % 5];
         let mut els = vec![
-            Element::Fitting(Fitting::entrance_sharp()),
+            Element::Fitting(Fitting::from_tank(Edge::Square).unwrap()),
             Element::Pipe(Pipe::circular(d1, 20.0 + 15.0 * i as f64, eps).unwrap()),
             Element::Fitting(
                 Fitting::named(
@@ -161,7 +161,7 @@ fn varied_lines() -> Vec<(Line, Fluid, f64)> {
             ));
         }
         els.push(Element::rise(3.0 * (i as f64 - 8.0)).unwrap());
-        els.push(Element::Fitting(Fitting::exit()));
+        els.push(Element::Fitting(Fitting::into_tank()));
         let u = UncertaintyOptions {
             diameter: if i % 2 == 0 { 0.005 } else { 0.0 },
             ..UncertaintyOptions::default()

@@ -111,3 +111,26 @@ fn lines_store_no_cache_and_rebuild_on_load() {
     nan_rise["elements"][1] = serde_json::json!({"Rise": null});
     assert!(serde_json::from_value::<Line>(nan_rise).is_err());
 }
+
+#[test]
+fn tank_inlets_round_trip_and_refuse_a_negative_rounding() {
+    use hydrograde::Edge;
+    for edge in [
+        Edge::Square,
+        Edge::Rounded { r_over_d: 0.1 },
+        Edge::Reentrant,
+    ] {
+        let f = Fitting::from_tank(edge).unwrap();
+        let text = serde_json::to_string(&f).unwrap();
+        assert_eq!(serde_json::from_str::<Fitting>(&text).unwrap(), f, "{text}");
+    }
+    let text = serde_json::to_string(&Fitting::from_tank(Edge::Rounded { r_over_d: 0.1 }).unwrap())
+        .unwrap();
+    let bad = text.replace("0.1", "-0.1");
+    assert!(serde_json::from_str::<Fitting>(&bad).is_err(), "{bad}");
+    assert_eq!(
+        Edge::named("conical", None).unwrap_err().kind(),
+        ErrorKind::UnknownName
+    );
+    assert!(Edge::named("rounded", None).is_err() && Edge::named("square", Some(0.1)).is_err());
+}

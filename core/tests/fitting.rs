@@ -1,7 +1,7 @@
 //! Checks of hydrograde::fitting against exact solutions, independent unit conversions and
 //! values worked by hand from the published constants.
 
-use hydrograde::fitting::{Fitting, Method, catalogue_entries, head_loss};
+use hydrograde::fitting::{Edge, Fitting, Method, catalogue_entries, head_loss};
 use hydrograde::{ErrorKind, STANDARD_GRAVITY};
 use std::f64::consts::PI;
 
@@ -165,21 +165,25 @@ fn k_referred_to_another_bore() {
 }
 
 #[test]
-fn contraction_and_entrances_and_exit() {
+fn contraction_and_tank_inlets_and_outlet() {
     // Crane TP-410 (1988), from memory: K = 0.5 (1 − β²) on the outlet; β² = 0.25 → 0.375
     let c = Fitting::contraction(0.1, 0.05).unwrap();
     assert_eq!(c.diameter(), Some(0.05));
     assert!(rel_err(k0(&c, 0.05), 0.375) < 1e-15);
-    // Crane TP-410, from memory: sharp 0.5, inward-projecting 0.78
-    assert_eq!(k0(&Fitting::entrance_sharp(), 0.1), 0.5);
-    assert_eq!(k0(&Fitting::entrance_projecting(), 0.1), 0.78);
+    // Crane TP-410, from memory: sharp-edged entrance 0.5, re-entrant (projecting) 0.78
+    let from_tank = |edge| Fitting::from_tank(edge).unwrap();
+    assert_eq!(k0(&from_tank(Edge::Square), 0.1), 0.5);
+    assert_eq!(k0(&from_tank(Edge::Reentrant), 0.1), 0.78);
     // Crane's rounded-entrance table, from memory: r/d 0.04 → 0.24, 0.06 → 0.15; halfway 0.195
-    let k = k0(&Fitting::entrance_rounded(0.05).unwrap(), 0.1);
-    assert!(rel_err(k, 0.195) < 1e-12);
-    assert!(rel_err(k0(&Fitting::entrance_rounded(0.3).unwrap(), 0.1), 0.04) < 1e-15);
-    assert_eq!(k0(&Fitting::entrance_rounded(0.0).unwrap(), 0.1), 0.5);
-    // Exit: the velocity head is lost (exact for uniform velocity)
-    assert_eq!(k0(&Fitting::exit(), 0.1), 1.0);
+    let rounded = |r_over_d| from_tank(Edge::Rounded { r_over_d });
+    assert!(rel_err(k0(&rounded(0.05), 0.1), 0.195) < 1e-12);
+    assert!(rel_err(k0(&rounded(0.3), 0.1), 0.04) < 1e-15);
+    assert_eq!(k0(&rounded(0.0), 0.1), 0.5);
+    // A negative rounding radius names the parameter
+    let err = Fitting::from_tank(Edge::Rounded { r_over_d: -0.1 }).unwrap_err();
+    assert!(err.to_string().contains("r_over_d"), "{err}");
+    // Outlet into a tank: the velocity head is lost (exact for uniform velocity)
+    assert_eq!(k0(&Fitting::into_tank(), 0.1), 1.0);
 }
 
 #[test]
@@ -487,17 +491,29 @@ fn every_method_has_a_hand_worked_spot_value() {
             0.375,
         ),
         // Crane TP-410, from memory: 0.5; rounded r/d 0.05 halfway 0.24…0.15 = 0.195; 0.78
-        (Fitting::entrance_sharp(), 0.1, 0.0, 1e5, 0.5),
         (
-            Fitting::entrance_rounded(0.05).unwrap(),
+            Fitting::from_tank(Edge::Square).unwrap(),
+            0.1,
+            0.0,
+            1e5,
+            0.5,
+        ),
+        (
+            Fitting::from_tank(Edge::Rounded { r_over_d: 0.05 }).unwrap(),
             0.1,
             0.0,
             1e5,
             0.195,
         ),
-        (Fitting::entrance_projecting(), 0.1, 0.0, 1e5, 0.78),
+        (
+            Fitting::from_tank(Edge::Reentrant).unwrap(),
+            0.1,
+            0.0,
+            1e5,
+            0.78,
+        ),
         // exit into a tank: the velocity head (exact)
-        (Fitting::exit(), 0.1, 0.0, 1e5, 1.0),
+        (Fitting::into_tank(), 0.1, 0.0, 1e5, 1.0),
         // Rennels & Hudson (2012), from memory: 90°, r/d 1.5, f_T 0.0196355 → 0.2394591
         (
             Fitting::bend(90.0, 1.5).unwrap(),
@@ -521,10 +537,12 @@ fn every_method_has_a_hand_worked_spot_value() {
             Method::ThreeK { .. } => 3,
             Method::Expansion { .. } => 4,
             Method::Contraction { .. } => 5,
-            Method::EntranceSharp => 6,
-            Method::EntranceRounded { .. } => 7,
-            Method::EntranceProjecting => 8,
-            Method::Exit => 9,
+            Method::FromTank { edge } => match edge {
+                Edge::Square => 6,
+                Edge::Rounded { .. } => 7,
+                Edge::Reentrant => 8,
+            },
+            Method::IntoTank => 9,
             Method::Bend { .. } => 10,
             Method::Cv { .. } => 11,
             Method::Kv { .. } => 12,

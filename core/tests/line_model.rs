@@ -4,7 +4,7 @@
 mod common;
 
 use hydrograde::error::ErrorKind;
-use hydrograde::fitting::Fitting;
+use hydrograde::fitting::{Edge, Fitting};
 use hydrograde::fluid::Fluid;
 use hydrograde::line::{Element, ElementKind, Line, PumpCurve, split_flow};
 use hydrograde::pipe::Pipe;
@@ -158,9 +158,9 @@ fn reverse_flow_turns_a_tank_inlet_into_an_outlet() {
     // head is lost, K = 1 (Borda–Carnot with an infinite outlet, exact); and the outlet
     // backwards is a square-edged inlet, K = 0.5 (Crane TP-410, 1988, from memory).
     let line = Line::new(vec![
-        fitting(Fitting::entrance_sharp()),
+        fitting(Fitting::from_tank(Edge::Square).unwrap()),
         pipe(0.05),
-        fitting(Fitting::exit()),
+        fitting(Fitting::into_tank()),
     ])
     .unwrap();
     let q = 0.003;
@@ -319,7 +319,7 @@ mod pressures {
         let q = 3.0 * area;
         let line = Line::with_options(
             vec![
-                fitting(Fitting::entrance_sharp()),
+                fitting(Fitting::from_tank(Edge::Square).unwrap()),
                 fitting(Fitting::k(2.0).unwrap()),
                 Element::rise(7.0).unwrap(),
                 Element::Pipe(Pipe::circular(0.1, 1.0, 4.5e-5).unwrap()),

@@ -3,7 +3,7 @@
 use crate::arrays::{self, si};
 use crate::errors::CoreResult;
 use crate::state;
-use hydrograde::fitting::{Fitting, catalogue_entries};
+use hydrograde::fitting::{Edge, Fitting, catalogue_entries};
 use hydrograde::line::Tag;
 use pyo3::prelude::*;
 use pyo3::types::{PyBytes, PyDict, PyList, PyType};
@@ -53,7 +53,10 @@ fn parameters<'py>(py: Python<'py>, f: &Fitting) -> PyResult<Bound<'py, PyDict>>
     // The core tags the method internally: {"method": "three_k", "k1": …, …}.
     if let Some(fields) = value.as_object() {
         for (k, v) in fields.iter().filter(|(k, _)| k.as_str() != "method") {
-            d.set_item(k, v.as_f64())?;
+            match v.as_str() {
+                Some(text) => d.set_item(k, text)?,
+                None => d.set_item(k, v.as_f64())?,
+            }
         }
     }
     Ok(d)
@@ -158,42 +161,34 @@ impl PyFitting {
     ) -> PyResult<Self> {
         tagged(wrap(Fitting::contraction(d_in, d_out), None), label, count)
     }
-    /// A sharp-edged entrance from a large vessel.
+    /// An inlet from a tank through a pipe end with edge ``edge``: ``"square"``
+    /// (sharp-edged entrance, K = 0.5), ``"rounded"`` (K from ``r_over_d``, the rounding
+    /// radius over the bore, given only for this edge) or ``"reentrant"`` (the pipe
+    /// projects into the tank, K = 0.78). Reverse flow makes it an outlet into the tank.
     #[classmethod]
-    #[pyo3(signature = (*, label = None, count = 1))]
-    fn entrance_sharp(_cls: &Bound<'_, PyType>, label: Option<&str>, count: i64) -> PyResult<Self> {
-        tagged(wrap(Ok(Fitting::entrance_sharp()), None), label, count)
-    }
-    /// A rounded entrance of rounding radius ratio ``r_over_d``.
-    #[classmethod]
-    #[pyo3(signature = (r_over_d, *, label = None, count = 1))]
-    fn entrance_rounded(
+    #[pyo3(signature = (edge = "square", r_over_d = None, *, label = None, count = 1))]
+    fn from_tank(
         _cls: &Bound<'_, PyType>,
-        #[pyo3(from_py_with = si::r_over_d)] r_over_d: f64,
+        edge: &str,
+        #[pyo3(from_py_with = si::opt_r_over_d)] r_over_d: Option<f64>,
         label: Option<&str>,
         count: i64,
     ) -> PyResult<Self> {
         tagged(
-            wrap(Fitting::entrance_rounded(r_over_d), None),
+            wrap(
+                Edge::named(edge, r_over_d).and_then(Fitting::from_tank),
+                None,
+            ),
             label,
             count,
         )
     }
-    /// An inward-projecting (re-entrant) entrance.
+    /// An outlet into a tank (the velocity head is lost, K = 1). Reverse flow makes it a
+    /// square-edged inlet from the tank.
     #[classmethod]
     #[pyo3(signature = (*, label = None, count = 1))]
-    fn entrance_projecting(
-        _cls: &Bound<'_, PyType>,
-        label: Option<&str>,
-        count: i64,
-    ) -> PyResult<Self> {
-        tagged(wrap(Ok(Fitting::entrance_projecting()), None), label, count)
-    }
-    /// The exit into a large vessel (the velocity head is lost).
-    #[classmethod]
-    #[pyo3(signature = (*, label = None, count = 1))]
-    fn exit(_cls: &Bound<'_, PyType>, label: Option<&str>, count: i64) -> PyResult<Self> {
-        tagged(wrap(Ok(Fitting::exit()), None), label, count)
+    fn into_tank(_cls: &Bound<'_, PyType>, label: Option<&str>, count: i64) -> PyResult<Self> {
+        tagged(wrap(Ok(Fitting::into_tank()), None), label, count)
     }
     /// A bend of ``angle_deg`` (degrees) and bend radius ratio ``r_over_d``.
     #[classmethod]

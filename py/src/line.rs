@@ -40,7 +40,7 @@ pub struct PyLine {
 #[pymethods]
 impl PyLine {
     #[new]
-    #[pyo3(signature = (elements, *, correlation = None, transition = None, laminar_limit = None, turbulent_limit = None, turbulent_diameter = None, inlet_pressure = None, uncertainty = None, surroundings = None, air_column_for_liquids = false))]
+    #[pyo3(signature = (elements, *, correlation = None, transition = None, laminar_limit = None, turbulent_limit = None, turbulent_diameter = None, inlet_pressure = None, uncertainty = None, surroundings = None, air_column_for_liquids = false, end_pressure = None))]
     #[allow(clippy::too_many_arguments)]
     fn new(
         elements: &Bound<'_, PyAny>,
@@ -53,6 +53,7 @@ impl PyLine {
         uncertainty: Option<&Bound<'_, PyAny>>,
         surroundings: Option<PyRef<'_, PyFluid>>,
         air_column_for_liquids: bool,
+        #[pyo3(from_py_with = si::opt_end_pressure)] end_pressure: Option<f64>,
     ) -> PyResult<Self> {
         let mut b = LineBuilder::new();
         for (i, obj) in elements.try_iter()?.enumerate() {
@@ -71,6 +72,7 @@ impl PyLine {
         b.set_surroundings(surroundings.map(|f| f.inner.clone()))
             .py()?;
         b.set_air_column_for_liquids(air_column_for_liquids);
+        b.set_end_pressure(end_pressure).py()?;
         if let Some(t) = turbulent_diameter {
             b.set_turbulent_diameter(t.parse::<TurbulentDiameter>().py()?);
         }

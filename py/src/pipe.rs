@@ -225,18 +225,26 @@ pub struct PyEquipment {
 
 #[pymethods]
 impl PyEquipment {
-    /// Equipment of rated pressure ``drop`` (Pa) at flow ``at_flow`` (m³/s).
+    /// Equipment of rated pressure ``drop`` (Pa) at flow ``at_flow`` (m³/s) of a fluid
+    /// of density ``rating_density`` (kg/m³; None = water at 20 °C): in another fluid
+    /// the drop scales with ρ/ρ_rating and Q|Q|.
     #[classmethod]
-    #[pyo3(signature = (name, drop, at_flow, *, label = None))]
+    #[pyo3(signature = (name, drop, at_flow, rating_density = None, *, label = None))]
     fn pressure_drop(
         _cls: &Bound<'_, PyType>,
         name: &str,
         #[pyo3(from_py_with = si::drop)] drop: f64,
         #[pyo3(from_py_with = si::at_flow)] at_flow: f64,
+        #[pyo3(from_py_with = si::opt_rating_density)] rating_density: Option<f64>,
         label: Option<&str>,
     ) -> PyResult<Self> {
+        let e = Equipment::pressure_drop(name, drop, at_flow);
+        let e = match rating_density {
+            Some(rho) => e.and_then(|e| e.with_rating_density(rho)),
+            None => e,
+        };
         Ok(PyEquipment {
-            inner: Equipment::pressure_drop(name, drop, at_flow).py()?,
+            inner: e.py()?,
             tag: Tag::new(label, 1).py()?,
         })
     }
@@ -275,8 +283,12 @@ impl PyEquipment {
     }
     fn __repr__(&self) -> String {
         match self.inner.rating() {
-            Rating::PressureDrop { drop, at_flow } => format!(
-                "Equipment.pressure_drop('{}', drop={drop:?}, at_flow={at_flow:?}, spread={:?}{})",
+            Rating::PressureDrop {
+                drop,
+                at_flow,
+                rating_density,
+            } => format!(
+                "Equipment.pressure_drop('{}', drop={drop:?}, at_flow={at_flow:?}, rating_density={rating_density:?}, spread={:?}{})",
                 self.inner.name(),
                 self.inner.spread(),
                 state::tag_repr(&self.tag)

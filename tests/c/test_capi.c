@@ -261,6 +261,11 @@ static void test_meta(const char *expected_version) {
       {HG_WARN_BELOW_VAPOUR_PRESSURE, "below_vapour_pressure"},
       {HG_WARN_FITTING_OUT_OF_RANGE, "fitting_out_of_range"},
       {HG_WARN_BORE_CHANGE_WITHOUT_TRANSITION, "bore_change_without_transition"},
+      {HG_WARN_IMPLAUSIBLE_VELOCITY, "implausible_velocity"},
+      {HG_WARN_IMPLAUSIBLE_BORE, "implausible_bore"},
+      {HG_WARN_IMPLAUSIBLE_LENGTH, "implausible_length"},
+      {HG_WARN_IMPLAUSIBLE_RATED_DROP, "implausible_rated_drop"},
+      {HG_WARN_IMPLAUSIBLE_VISCOSITY, "implausible_viscosity"},
   };
   for (size_t i = 0; i < sizeof w / sizeof *w; i++)
     CHECK(hg_warning_name(w[i].bit) && strcmp(hg_warning_name(w[i].bit), w[i].name) == 0,

@@ -207,10 +207,10 @@ static void test_line() {
   hg_uncertainty_options uo = hg::uncertainty_options();
   uo.diameter = 0.01;
   all.set_uncertainty(uo).set_turbulent_diameter(HG_TURBULENT_DIAMETER_LAMINAR_EQUIVALENT);
-  all.add_entrance(HG_ENTRANCE_ROUNDED, 0.1).add_pipe_material(0.1, 40, "commercial_steel").add_bend(90, 1.5);
+  all.add_from_tank(HG_EDGE_ROUNDED, 0.1).add_pipe_material(0.1, 40, "commercial_steel").add_bend(90, 1.5);
   all.add_two_k(800, 0.25).add_three_k(500, 0.15, 4).add_cv(120).set_k_spread(5, 0.2).add_kv(100);
   all.add_equivalent_length(30).add_expansion(0.1, 0.15).add_custom_duct(0.0177, 0.48, 62, 10, 1e-4);
-  all.add_contraction(0.15, 0.08).add_pipe(0.08, 5, 1.5e-6).add_exit();
+  all.add_contraction(0.15, 0.08).add_pipe(0.08, 5, 1.5e-6).add_into_tank();
   all.set_roughness_range(11, 1e-6, 5e-6);
   CHECK(all.size() == 13, "every kind of element");
   auto sources = all.band_sources(water, 5e-3);

@@ -92,7 +92,7 @@ static int32_t build_scenario(int n, hg_line **out) {
     u.diameter = 0.01;
     s |= hg_line_set_uncertainty(l, &u);
     s |= hg_line_set_turbulent_diameter(l, HG_TURBULENT_DIAMETER_LAMINAR_EQUIVALENT);
-    s |= hg_line_add_entrance(l, HG_ENTRANCE_ROUNDED, 0.1);
+    s |= hg_line_add_from_tank(l, HG_EDGE_ROUNDED, 0.1);
     s |= hg_line_add_pipe_material(l, 0.1, 40.0, "commercial_steel");
     s |= hg_line_add_bend(l, 90.0, 1.5, 0.0);
     s |= hg_line_add_two_k(l, 800.0, 0.25, 0.0);
@@ -105,9 +105,9 @@ static int32_t build_scenario(int n, hg_line **out) {
     s |= hg_line_add_custom_duct(l, 0.0177, 0.48, 62.0, 10.0, 1e-4);
     s |= hg_line_add_contraction(l, 0.15, 0.08);
     s |= hg_line_add_pipe(l, 0.08, 5.0, 1.5e-6);
-    s |= hg_line_add_exit(l);
-    s |= hg_line_add_entrance(l, HG_ENTRANCE_PROJECTING, 0.0);
-    s |= hg_line_add_entrance(l, HG_ENTRANCE_SHARP, 0.0);
+    s |= hg_line_add_into_tank(l);
+    s |= hg_line_add_from_tank(l, HG_EDGE_REENTRANT, 0.0);
+    s |= hg_line_add_from_tank(l, HG_EDGE_SQUARE, 0.0);
     s |= hg_line_add_duct(l, HG_SECTION_RECTANGLE, 0.12, 0.06, 3.0, 5e-5);
     s |= hg_line_set_roughness_range(l, 11, 1e-6, 5e-6);
   } else {
@@ -340,8 +340,8 @@ static void test_more_elements_bad_input(void) {
     CHECK(hg_line_add_cv(l, v, 0) != HG_OK && hg_line_add_kv(l, v, 0) != HG_OK && msg_len() > 0, "cv kv %g", v);
     CHECK(hg_line_add_equivalent_length(l, v, 0) != HG_OK, "L/D %g", v);
     CHECK(hg_line_add_bend(l, v, 1.5, 0) != HG_OK && hg_line_add_bend(l, 90, v, 0) != HG_OK, "bend %g", v);
-    CHECK(hg_line_add_entrance(l, HG_ENTRANCE_ROUNDED, v) != HG_OK, "rounded %g", v);
-    CHECK(hg_line_add_entrance(l, HG_ENTRANCE_SHARP, v) != HG_OK, "sharp with radius %g", v);
+    CHECK(hg_line_add_from_tank(l, HG_EDGE_ROUNDED, v) != HG_OK, "rounded %g", v);
+    CHECK(hg_line_add_from_tank(l, HG_EDGE_SQUARE, v) != HG_OK, "square edge with radius %g", v);
     CHECK(hg_water_saturation_temperature(v, &a) != HG_OK && msg_len() > 0, "saturation %g", v);
     CHECK(hg_fluid_gas(v, 1.8e-5, 293, 1e5, &f) != HG_OK && f == NULL, "gas density %g", v);
     CHECK(hg_fluid_gas(1.2, 1.8e-5, v, 1e5, &f) != HG_OK && f == NULL, "gas temperature %g", v);
@@ -351,8 +351,8 @@ static void test_more_elements_bad_input(void) {
   CHECK(hg_line_add_pipe_material(l, 0.1, 10, "unobtainium") == HG_ERR_UNKNOWN_NAME, "unknown material");
   CHECK(hg_line_add_pipe_material(l, 0.1, 10, NULL) == HG_ERR_NULL_POINTER, "NULL material");
   CHECK(hg_line_add_custom_duct(l, 0.01, 0.1, 60, 10, 0) == HG_ERR_OUT_OF_RANGE, "perimeter below the circle's");
-  CHECK(hg_line_add_entrance(l, 3, 0) == HG_ERR_OUT_OF_RANGE && hg_line_add_entrance(l, -1, 0) == HG_ERR_OUT_OF_RANGE, "kind");
-  CHECK(hg_line_add_entrance(l, HG_ENTRANCE_SHARP, 0.1) == HG_ERR_INVALID, "radius on a sharp entrance");
+  CHECK(hg_line_add_from_tank(l, 3, 0) == HG_ERR_OUT_OF_RANGE && hg_line_add_from_tank(l, -1, 0) == HG_ERR_OUT_OF_RANGE, "edge");
+  CHECK(hg_line_add_from_tank(l, HG_EDGE_SQUARE, 0.1) == HG_ERR_INVALID, "radius on a square edge");
   CHECK(hg_line_add_pipe(l, 0.05, 10, 3e-6) == HG_OK && hg_line_add_cv(l, 40, 0) == HG_OK, "pipe and valve");
   CHECK(hg_line_set_k_spread(l, 1, 0.5) == HG_OK, "spread");
   CHECK(hg_line_set_k_spread(l, 0, 0.5) == HG_ERR_OUT_OF_RANGE && msg_len() > 0, "spread on a pipe");
@@ -1070,6 +1070,145 @@ static void test_pump_fit(void) {
   hg_fluid_free(w);
 }
 
+/* NPSH available along a suction line, written out by hand: an open tank (101 325 Pa on
+   its surface) feeds a square-edged inlet (K = 0.5, Crane TP-410, from memory) and a 3 m
+   lift in a 100 mm bore at 20 L/s of a liquid of 998.2 kg/m3 with a vapour pressure of
+   2339 Pa. Bernoulli with losses from the surface (V = 0) to the top of the lift:
+   p_total = p_atm - rho g 3 - 0.5 (rho V^2 / 2); NPSHa = (p_total - p_v)/(rho g)
+   (definition, e.g. ISO 9906). */
+static void test_npsh(void) {
+  hg_line *l = NULL;
+  hg_fluid *liquid = NULL, *f = NULL;
+  CHECK(hg_line_new(&l) == HG_OK && hg_fluid_liquid(998.2, 1.0e-3, &liquid) == HG_OK &&
+            hg_fluid_with_vapour_pressure(liquid, 2339.0, &f) == HG_OK, "handles");
+  CHECK(hg_line_add_from_tank(l, HG_EDGE_SQUARE, 0.0) == HG_OK && hg_line_add_rise(l, 3.0) == HG_OK &&
+            hg_line_add_pipe(l, 0.1, 1.0, 4.5e-5) == HG_OK, "suction line");
+  double q = 0.02, v = q / (3.14159265358979323846 * 0.1 * 0.1 / 4.0), rho = 998.2, g = 9.80665;
+  double total = 101325.0 - rho * g * 3.0 - 0.5 * (0.5 * rho * v * v);
+  double want = (total - 2339.0) / (rho * g);
+  hg_line_result *r = NULL;
+  double npsh = -1.0, avail = -1.0;
+  int32_t ok = -1;
+  CHECK(hg_line_evaluate_at(l, f, q, 101325.0, &r) == HG_OK, "evaluate");
+  CHECK(hg_line_result_npsh_available(r, 1, &npsh) == HG_OK && fabs(npsh - want) < 1e-12 * want,
+        "NPSHa %.17g vs %.17g", npsh, want);
+  CHECK(hg_line_result_npsh_check(r, 1, 5.0, 0.5, &avail, &ok) == HG_OK && avail == npsh && ok == 1,
+        "enough for 5 m + 0.5 m (NPSHa %.3f m)", avail);
+  CHECK(hg_line_result_npsh_check(r, 1, want, 0.5, &avail, &ok) == HG_OK && ok == 0, "not enough with the margin");
+  /* Bad questions: a row outside the line, a negative NPSH required, NULL pointers. */
+  CHECK(hg_line_result_npsh_available(r, 3, &npsh) == HG_ERR_OUT_OF_RANGE && strstr(last_msg(), "index") != NULL,
+        "index outside the line: %s", last_msg());
+  avail = -7.0;
+  CHECK(hg_line_result_npsh_check(r, 1, -1.0, 0.5, &avail, &ok) == HG_ERR_OUT_OF_RANGE &&
+            strstr(last_msg(), "required") != NULL && avail == -7.0,
+        "negative NPSH required: %s", last_msg());
+  CHECK(hg_line_result_npsh_check(r, 1, NAN, 0.5, &avail, &ok) == HG_ERR_NOT_FINITE, "NaN required");
+  CHECK(hg_line_result_npsh_available(r, 1, NULL) == HG_ERR_NULL_POINTER, "NULL out");
+  CHECK(hg_line_result_npsh_check(r, 1, 1.0, 0.5, &avail, NULL) == HG_ERR_NULL_POINTER, "NULL sufficient");
+  CHECK(hg_line_result_npsh_available(NULL, 1, &npsh) == HG_ERR_NULL_POINTER, "NULL result");
+  hg_line_result_free(r);
+  r = NULL;
+  CHECK(hg_line_evaluate(l, liquid, q, &r) == HG_OK && hg_line_result_npsh_available(r, 1, &npsh) == HG_ERR_INVALID &&
+            strstr(last_msg(), "inlet_pressure") != NULL,
+        "no inlet pressure: %s", last_msg());
+  hg_line_result_free(r);
+  r = NULL;
+  CHECK(hg_line_evaluate_at(l, liquid, q, 101325.0, &r) == HG_OK &&
+            hg_line_result_npsh_available(r, 1, &npsh) == HG_ERR_INVALID && strstr(last_msg(), "vapour") != NULL,
+        "no vapour pressure: %s", last_msg());
+  hg_line_result_free(r);
+  hg_fluid_free(liquid);
+  hg_fluid_free(f);
+  hg_line_free(l);
+}
+
+/* 1 when some message of the line evaluated at q contains `text`. */
+static int says(const hg_line *l, const hg_fluid *f, double q, uint32_t bit, const char *text) {
+  hg_line_result *r = NULL;
+  hg_line_totals t;
+  memset(&t, 0, sizeof t);
+  t.struct_size = sizeof t;
+  int found = 0;
+  size_t n = 0, need = 0;
+  char buf[512];
+  if (hg_line_evaluate(l, f, q, &r) == HG_OK && hg_line_result_totals(r, &t) == HG_OK && (t.warnings & bit) &&
+      hg_line_result_message_count(r, &n) == HG_OK)
+    for (size_t i = 0; i < n && !found; i++)
+      found = hg_line_result_message(r, i, buf, sizeof buf, &need) == HG_OK && strstr(buf, text) != NULL;
+  hg_line_result_free(r);
+  return found;
+}
+
+/* Unit slips warn with the likely unit (each conversion exact by SI prefixes and NIST
+   SP 811); the same values in SI pass. */
+static void test_unit_slips(void) {
+  hg_fluid *water = NULL, *syrup = NULL;
+  CHECK(hg_fluid_liquid(998.2, 1.002e-3, &water) == HG_OK && hg_fluid_liquid(975.0, 0.377, &syrup) == HG_OK, "fluids");
+  hg_line *l = NULL;
+  /* Bore 47.5 m (meant mm): 47.5 mm = 0.0475 m. */
+  CHECK(hg_line_new(&l) == HG_OK && hg_line_add_pipe(l, 47.5, 100.0, 4.5e-5) == HG_OK, "line");
+  CHECK(says(l, water, 4.5e-3, HG_WARN_IMPLAUSIBLE_BORE, "bore 47.5 m; inputs are SI: 47.5 mm is 0.0475 m"), "bore");
+  hg_line_free(l);
+  /* 4.5 m3/s in 50 mm: V = 4Q/(pi d^2) = 2292 m/s > 15 m/s; 4.5 L/s = 0.0045 m3/s. */
+  CHECK(hg_line_new(&l) == HG_OK && hg_line_add_pipe(l, 0.05, 100.0, 4.5e-5) == HG_OK, "line");
+  CHECK(says(l, water, 4.5, HG_WARN_IMPLAUSIBLE_VELOCITY, "4.5 L/s is 0.0045 m³/s"), "flow");
+  CHECK(!says(l, water, 4.5e-3, HG_WARN_IMPLAUSIBLE_VELOCITY, "L/s"), "4.5 L/s passes");
+  /* Viscosity 0.377 Pa s at water's density (meant cP): 0.377 cP = 0.000377 Pa s. */
+  CHECK(says(l, syrup, 1e-3, HG_WARN_IMPLAUSIBLE_VISCOSITY, "0.377 cP is 0.000377 Pa·s"), "viscosity");
+  /* Rated drop 1.5 Pa (meant bar): 1.5 bar = 150000 Pa. */
+  CHECK(hg_line_add_equipment(l, "filter", 1.5, 0.005) == HG_OK, "filter");
+  CHECK(says(l, water, 0.005, HG_WARN_IMPLAUSIBLE_RATED_DROP, "1.5 bar is 150000 Pa"), "rated drop");
+  hg_line_free(l);
+  /* 250 km of pipe: 250000 mm = 250 m. */
+  CHECK(hg_line_new(&l) == HG_OK && hg_line_add_pipe(l, 0.5, 250e3, 4.5e-5) == HG_OK, "line");
+  CHECK(says(l, water, 0.3, HG_WARN_IMPLAUSIBLE_LENGTH, "250000 mm is 250 m"), "length");
+  /* Bad questions about messages. */
+  hg_line_result *r = NULL;
+  size_t n = 0, need = 0;
+  CHECK(hg_line_evaluate(l, water, 0.3, &r) == HG_OK && hg_line_result_message_count(r, &n) == HG_OK && n == 1, "one");
+  CHECK(hg_line_result_message(r, 1, NULL, 0, &need) == HG_ERR_OUT_OF_RANGE, "message index");
+  CHECK(hg_line_result_message(r, 0, NULL, 0, &need) == HG_ERR_BUFFER_TOO_SMALL && need > 20, "length only");
+  CHECK(hg_line_result_message_count(r, NULL) == HG_ERR_NULL_POINTER, "NULL count");
+  hg_line_result_free(r);
+  hg_line_free(l);
+  hg_fluid_free(water);
+  hg_fluid_free(syrup);
+}
+
+/* A strainer rated 20 kPa at 10 L/s with a fluid of 1000 kg/m3, passing 1100 kg/m3 at
+   10 L/s: fixed K, dp = drop rho/rho_rating = 22 000 Pa (definition of K). */
+static void test_rated_density(void) {
+  hg_line *l = NULL;
+  hg_fluid *glycol = NULL;
+  CHECK(hg_line_new(&l) == HG_OK && hg_fluid_liquid(1100.0, 4e-3, &glycol) == HG_OK, "handles");
+  CHECK(hg_line_add_equipment_rated(l, "strainer", 2e4, 0.01, 1000.0) == HG_OK, "rated equipment");
+  hg_line_totals t;
+  memset(&t, 0, sizeof t);
+  t.struct_size = sizeof t;
+  CHECK(totals(l, glycol, 0.01, &t) == HG_OK && fabs(t.pressure_loss - 22000.0) < 1e-9, "22 kPa: %.17g",
+        t.pressure_loss);
+  CHECK(hg_line_add_equipment_rated(l, "strainer", 2e4, 0.01, -1.0) == HG_ERR_OUT_OF_RANGE &&
+            strstr(last_msg(), "rating_density") != NULL,
+        "bad rating density: %s", last_msg());
+  CHECK(hg_line_add_equipment_rated(l, NULL, 2e4, 0.01, 1000.0) == HG_ERR_NULL_POINTER, "NULL name");
+  hg_fluid_free(glycol);
+  hg_line_free(l);
+  /* A header 12 m up needing 2.5 bar above the start: required head = dz + losses +
+     p_end/(rho g) (energy balance); at zero flow 12 + 2.5e5/(998.2 g). */
+  hg_fluid *water = NULL;
+  CHECK(hg_line_new(&l) == HG_OK && hg_fluid_liquid(998.2, 1.002e-3, &water) == HG_OK, "handles");
+  CHECK(hg_line_add_pipe(l, 0.05, 60.0, 4.5e-5) == HG_OK && hg_line_add_rise(l, 12.0) == HG_OK, "line");
+  CHECK(hg_line_set_end_pressure(l, 2.5e5) == HG_OK, "end pressure");
+  double h = 0, d = 0, want = 12.0 + 2.5e5 / (998.2 * 9.80665);
+  CHECK(hg_line_required_head(l, water, 0.0, &h, &d) == HG_OK && fabs(h - want) < 1e-12, "%.17g vs %.17g", h, want);
+  CHECK(hg_line_set_end_pressure(l, NAN) == HG_ERR_NOT_FINITE && strstr(last_msg(), "end_pressure") != NULL, "NaN");
+  CHECK(hg_line_set_end_pressure(l, 0.0) == HG_OK && hg_line_required_head(l, water, 0.0, &h, &d) == HG_OK && h == 12.0,
+        "0 clears it");
+  CHECK(hg_line_set_end_pressure(NULL, 1.0) == HG_ERR_NULL_POINTER, "NULL line");
+  hg_fluid_free(water);
+  hg_line_free(l);
+}
+
 int main(int argc, char **argv) {
   if (argc < 2) {
     fprintf(stderr, "usage: %s REFERENCE_FILE\n", argv[0]);
@@ -1105,6 +1244,9 @@ int main(int argc, char **argv) {
   test_line_model();
   test_non_linear_flag();
   test_builder();
+  test_npsh();
+  test_unit_slips();
+  test_rated_density();
   pthread_t th[8];
   thread_arg args[8];
   for (int i = 0; i < 8; i++) {

@@ -46,7 +46,7 @@ def test_python_demo_numbers_equal_the_rust_demo_bitwise():
     assert len(rust) >= 12
     assert list(python) == list(rust)
     for name, bits in rust.items():
-        # The same core, the same inputs: the same double (DESIGN §2, one core one answer).
+        # The same core, the same inputs: the same double (every binding calls one core).
         assert python[name] == bits, (
             f"{name}: Python {struct.unpack('<d', struct.pack('<Q', python[name]))[0]!r} "
             f"≠ Rust {struct.unpack('<d', struct.pack('<Q', bits))[0]!r}"

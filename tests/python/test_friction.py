@@ -191,7 +191,7 @@ def test_physics_monotonic_in_re_and_roughness(lre, rr):
 
 @given(st.floats(min_value=2300.0, max_value=4000.0))
 def test_transition_blend_stays_between_the_limits(re):
-    # DESIGN §5: the transitional value is a C¹ blend of the laminar value and Colebrook.
+    # The transitional value is a C¹ blend of the laminar value and Colebrook, so a Newton solver sees no jump.
     lam = 64.0 / re
     tur = hg.darcy_factor(re, 1e-4, transition="turbulent")
     f = hg.darcy_factor(re, 1e-4)

@@ -22,13 +22,13 @@ def route():
     # Invented demo route: tank → 120 m of DN100 → elbow → 8 m up → reducer → 40 m of DN80
     # → tank.
     return hg.Line([
-        hg.Fitting.entrance_sharp(),
+        hg.Fitting.from_tank(),
         hg.Pipe(0.1, 120.0, 4.5e-5),
         hg.Fitting.named(hg.Fitting.catalogue()[0]["name"]),
         hg.Rise(8.0),
         hg.Fitting.contraction(0.1, 0.08),
         hg.Pipe(hg.Section.circle(0.08), 40.0, 4.5e-5),
-        hg.Fitting.exit(),
+        hg.Fitting.into_tank(),
     ])
 
 
@@ -77,7 +77,7 @@ def test_result_fields_breakdown_and_bands(route, water):
     assert r.head_loss_band.nominal == r.head_loss
     assert r.elements[1].friction_factor_band is not None
     assert "LineResult(flow=0.012" in repr(r)
-    assert len(route) == 7 and repr(route).startswith("Line([Fitting('entrance_sharp'")
+    assert len(route) == 7 and repr(route).startswith("Line([Fitting('from_tank_square', edge='square'")
 
 
 def test_head_loss_is_odd_in_flow(route, water):
@@ -152,8 +152,10 @@ def test_equipment_and_pressure_profile(water):
         inlet_pressure=3e5,
     )
     r = line.evaluate(water, 0.01)
-    # The rated drop at the rating flow, exactly (scaled with Q|Q|).
-    assert r.elements[1].head_loss * water.density * G0 == pytest.approx(20e3, rel=1e-12)
+    # The rated drop at the rating flow, scaled with the density over that of the rating
+    # fluid (water at 20 degC unless stated): fixed K, dp = K rho V^2 / 2.
+    rating = hg.Fluid.water(293.15).density
+    assert r.elements[1].head_loss * water.density * G0 == pytest.approx(20e3 * water.density / rating, rel=1e-12)
     assert r.outlet_pressure == pytest.approx(3e5 - r.pressure_loss, rel=1e-12)
     assert r.elements[-1].pressure_out == pytest.approx(r.outlet_pressure, rel=1e-12)
 

@@ -73,7 +73,7 @@ def test_suction_lift_npsh():
     w = hg.Fluid.water(333.15)
     q = 3.0 * math.pi * 0.1**2 / 4
     line = hg.Line(
-        [hg.Fitting.entrance_sharp(), hg.Fitting.k(2.0), hg.Rise(7.0), hg.Pipe(0.1, 1.0, 4.5e-5)],
+        [hg.Fitting.from_tank(), hg.Fitting.k(2.0), hg.Rise(7.0), hg.Pipe(0.1, 1.0, 4.5e-5)],
         inlet_pressure=101325.0,
     )
     r = line.evaluate(w, q)
@@ -87,3 +87,81 @@ def test_suction_lift_npsh():
     assert r.npsh_check(2, 0.2, margin=0.5)["sufficient"] is False
     with pytest.raises(hg.HydrogradeError, match="^index = 9"):
         r.npsh_available(9)
+
+
+def test_tank_inlets_and_outlet_by_edge():
+    water = hg.Fluid(998.2, 1.002e-3)
+
+    def k_of(f: hg.Fitting) -> float:
+        r = hg.Line([f, hg.Pipe(0.1, 1.0, 0.0)]).evaluate(water, 0.01)
+        return r.elements[0].k
+
+    # Crane TP-410 (1988), from memory: square (sharp-edged) 0.5, re-entrant 0.78,
+    # rounded r/d = 0.04 -> 0.24; the outlet into a tank loses the velocity head, K = 1 (exact).
+    assert k_of(hg.Fitting.from_tank()) == 0.5
+    assert k_of(hg.Fitting.from_tank("reentrant")) == 0.78
+    assert k_of(hg.Fitting.from_tank("rounded", r_over_d=0.04)) == pytest.approx(0.24, rel=1e-12)
+    assert k_of(hg.Fitting.into_tank()) == 1.0
+    with pytest.raises(hg.HydrogradeError, match="edge"):
+        hg.Fitting.from_tank("bellmouth")
+    with pytest.raises(hg.HydrogradeError, match="r_over_d"):
+        hg.Fitting.from_tank("rounded")
+    with pytest.raises(hg.HydrogradeError, match="r_over_d"):
+        hg.Fitting.from_tank("square", r_over_d=0.1)
+    with pytest.raises(hg.HydrogradeError, match="r_over_d"):
+        hg.Fitting.from_tank("rounded", r_over_d=-0.1)
+
+
+def test_unit_slips_warn_with_the_likely_unit():
+    water = hg.Fluid(998.2, 1.002e-3)
+    # Bore 47.5 m (meant mm): 47.5 mm = 0.0475 m (SI prefix, exact).
+    r = hg.Line([hg.Pipe(47.5, 100.0, 4.5e-5)]).evaluate(water, 4.5e-3)
+    assert "implausible_bore" in r.warnings
+    assert any("47.5 mm is 0.0475 m" in m for m in r.messages)
+    # Flow 4.5 m3/s in 50 mm (meant L/s): V = 4Q/(pi d^2) = 2292 m/s > 15 m/s (common practice).
+    line = hg.Line([hg.Pipe(0.05, 100.0, 4.5e-5)])
+    r = line.evaluate(water, 4.5)
+    assert "implausible_velocity" in r.warnings
+    assert any("4.5 L/s is 0.0045 m³/s" in m for m in r.messages)
+    assert "implausible_velocity" not in line.evaluate(water, 4.5e-3).warnings
+    # Rated drop 1.5 Pa (meant bar): 1.5 bar = 150000 Pa (NIST SP 811, exact).
+    r = hg.Line([hg.Pipe(0.05, 10.0, 4.5e-5), hg.Equipment.pressure_drop("filter", 1.5, 0.005)]).evaluate(
+        water, 0.005
+    )
+    assert "implausible_rated_drop" in r.warnings
+    assert any("1.5 bar is 150000 Pa" in m for m in r.messages)
+    # Viscosity 0.377 Pa s at water's density (meant cP): 0.377 cP = 0.000377 Pa s.
+    r = line.evaluate(hg.Fluid(975.0, 0.377), 1e-3)
+    assert "implausible_viscosity" in r.warnings
+    assert any("0.377 cP is 0.000377 Pa·s" in m for m in r.messages)
+    # Length 250 km: 250000 mm = 250 m.
+    r = hg.Line([hg.Pipe(0.5, 250e3, 4.5e-5)]).evaluate(water, 0.3)
+    assert "implausible_length" in r.warnings
+    assert set(hg.WARNING_NAMES[-5:]) == {
+        "implausible_velocity", "implausible_bore", "implausible_length",
+        "implausible_rated_drop", "implausible_viscosity",
+    }
+
+
+def test_rated_drop_scales_with_density():
+    # A strainer rated 20 kPa at 10 L/s with 1000 kg/m3, passing 1100 kg/m3 at 10 L/s:
+    # fixed K, dp = drop * rho / rho_rating = 22 000 Pa (definition of K, dp = K rho V^2 / 2).
+    eq = hg.Equipment.pressure_drop("strainer", 2e4, 0.01, rating_density=1000.0)
+    r = hg.Line([eq]).evaluate(hg.Fluid(1100.0, 4e-3), 0.01)
+    assert r.pressure_loss == pytest.approx(22000.0, rel=1e-14)
+    with pytest.raises(hg.HydrogradeError, match="rating_density"):
+        hg.Equipment.pressure_drop("strainer", 2e4, 0.01, rating_density=0.0)
+    assert "rating_density=" in repr(eq)
+
+
+def test_end_pressure_counts_in_the_required_head():
+    # A header 12 m up needing 2.5 bar above the start: required head = dz + losses +
+    # p_end/(rho g) (energy balance), so at zero flow 12 + 2.5e5/(998.2 g0).
+    water = hg.Fluid(998.2, 1.002e-3)
+    els = [hg.Pipe(0.05, 60.0, 4.5e-5), hg.Rise(12.0)]
+    line = hg.Line(els, end_pressure=2.5e5)
+    assert line.evaluate(water, 0.0).required_head == pytest.approx(12.0 + 2.5e5 / (998.2 * G0), rel=1e-15)
+    a, b = hg.Line(els).evaluate(water, 4e-3), line.evaluate(water, 4e-3)
+    assert b.required_pressure - a.required_pressure == pytest.approx(2.5e5, rel=1e-12)
+    with pytest.raises(hg.HydrogradeError, match="end_pressure"):
+        hg.Line(els, end_pressure=float("nan"))

@@ -26,7 +26,7 @@ def scene():
     water = hg.Fluid.water(333.15, 2.5e5)
     bore = hg.pipe_size("steel", "2", "40")["inside_diameter"]
     line = hg.Line([
-        hg.Fitting.entrance_sharp(),
+        hg.Fitting.from_tank(),
         hg.Pipe.of_material(bore, 18.0, "commercial_steel"),
         hg.Fitting.named("elbow_90_long_radius"),
         hg.Fitting.named("y_strainer"),
@@ -35,7 +35,7 @@ def scene():
         hg.Fitting.named("globe_valve"),
         hg.Rise(6.0),
         hg.Pipe.of_material(bore, 12.5, "commercial_steel"),
-        hg.Fitting.exit(),
+        hg.Fitting.into_tank(),
     ])
     pump = hg.PumpCurve([0.0, 0.002, 0.004, 0.006, 0.008], [26.0, 25.2, 23.0, 19.0, 13.0])
     return line, water, pump

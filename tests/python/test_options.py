@@ -20,13 +20,13 @@ def water():
 
 @pytest.fixture()
 def route():
-    # Invented route: entrance, 80 m of DN50 steel, a catalogue elbow, 5 m up, exit.
+    # Invented route: inlet from a tank, 80 m of DN50 steel, a catalogue elbow, 5 m up, outlet into a tank.
     return hg.Line([
-        hg.Fitting.entrance_sharp(),
+        hg.Fitting.from_tank(),
         hg.Pipe.of_material(0.0525, 80.0, "commercial_steel"),
         hg.Fitting.named("elbow_90_standard"),
         hg.Rise(5.0),
-        hg.Fitting.exit(),
+        hg.Fitting.into_tank(),
     ])
 
 
@@ -200,7 +200,7 @@ def test_pipe_head_loss_is_odd_with_an_even_derivative(water):
     flows = np.array([-5e-3, -1e-5, 0.0, 1e-5, 5e-3])
     h, dh = pipe.head_loss(water, flows)
     assert h.shape == dh.shape == flows.shape
-    # Odd head loss and even derivative (DESIGN §4, exact symmetry of Darcy–Weisbach).
+    # Odd head loss and even derivative (exact symmetry of Darcy–Weisbach in a straight pipe).
     np.testing.assert_array_equal(h, -h[::-1])
     np.testing.assert_array_equal(dh, dh[::-1])
     assert h[2] == 0.0 and dh[2] > 0.0

@@ -31,8 +31,8 @@ def objects():
 
 def _line():
     return hg.Line(
-        [hg.Fitting.entrance_sharp(), hg.Pipe(0.1, 120.0, 4.5e-5), hg.Rise(8.0),
-         hg.Equipment.pressure_drop("filter", 2e4, 0.01), hg.Fitting.exit()],
+        [hg.Fitting.from_tank(), hg.Pipe(0.1, 120.0, 4.5e-5), hg.Rise(8.0),
+         hg.Equipment.pressure_drop("filter", 2e4, 0.01), hg.Fitting.into_tank()],
         inlet_pressure=2e5,
     )
 

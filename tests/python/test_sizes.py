@@ -43,7 +43,7 @@ def test_pipe_tables():
 
 def test_sizing_meets_the_limit_exactly_at_the_minimum_bore():
     water = hg.Fluid.water(288.15)
-    line = hg.Line([hg.Pipe.of_material(0.1, 200.0, "commercial_steel"), hg.Fitting.exit()])
+    line = hg.Line([hg.Pipe.of_material(0.1, 200.0, "commercial_steel"), hg.Fitting.into_tank()])
     s = line.size(water, 0.01, max_pressure_loss=5e4, table="steel", schedule="40")
     at_min = line.with_uniform_diameter(s.min_inside_diameter).evaluate(water, 0.01)
     assert at_min.pressure_loss == pytest.approx(5e4, rel=1e-9)

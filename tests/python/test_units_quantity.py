@@ -24,7 +24,7 @@ def water():
 @pytest.fixture()
 def line():
     return hg.Line([
-        hg.Fitting.entrance_sharp(),
+        hg.Fitting.from_tank(),
         hg.Pipe(0.0525, 30.0, 4.5e-5),
         hg.Fitting.named("elbow_90_long_radius"),
         hg.Rise(3.0),

@@ -5,19 +5,19 @@
 use crate::ffi::{self, FfiResult, guard, out_ptr, put};
 use crate::line::{hg_line, refer, with_line};
 use crate::section::{HG_SECTION_CIRCLE, section_of};
-use hydrograde::Error;
-use hydrograde::fitting::Fitting;
+use hydrograde::fitting::{Edge, Fitting};
 use hydrograde::line::Element;
 use hydrograde::pipe::Pipe;
 use hydrograde::section::{Section, TurbulentDiameter};
 use std::ffi::c_char;
 
-/// A sharp-edged entrance from a large space (`r_over_d` must be 0).
-pub const HG_ENTRANCE_SHARP: i32 = 0;
-/// A rounded entrance of radius `r_over_d` times the bore.
-pub const HG_ENTRANCE_ROUNDED: i32 = 1;
-/// A pipe projecting into the space it draws from (`r_over_d` must be 0).
-pub const HG_ENTRANCE_PROJECTING: i32 = 2;
+/// Inlet from a tank through a square (sharp-edged) pipe end, K = 0.5 (`r_over_d` must be 0).
+pub const HG_EDGE_SQUARE: i32 = 0;
+/// Inlet from a tank through a pipe end rounded with radius `r_over_d` times the bore.
+pub const HG_EDGE_ROUNDED: i32 = 1;
+/// Inlet from a tank through a pipe end projecting into it (re-entrant entrance), K = 0.78
+/// (`r_over_d` must be 0).
+pub const HG_EDGE_REENTRANT: i32 = 2;
 
 /// Turbulent flow in non-circular ducts on the hydraulic diameter (default).
 pub const HG_TURBULENT_DIAMETER_HYDRAULIC: i32 = 0;
@@ -274,58 +274,51 @@ pub unsafe extern "C" fn hg_line_add_bend(
     }
 }
 
-/// Appends a pipe entrance of kind `kind` (`HG_ENTRANCE_*`); `r_over_d` is the rounding
-/// radius over the bore for `HG_ENTRANCE_ROUNDED` (≥ 0) and must be 0 otherwise.
+/// Appends an inlet from a tank through a pipe end with edge `edge` (`HG_EDGE_*`):
+/// square (sharp-edged entrance, K = 0.5), rounded (K from `r_over_d`, the rounding radius
+/// over the bore, ≥ 0) or re-entrant (K = 0.78). `r_over_d` must be 0 unless the edge is
+/// rounded. A line that starts with one starts at the tank's surface; reverse flow turns
+/// it into an outlet into the tank.
 ///
-/// Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a bad kind or radius;
-/// `HG_ERR_INVALID` for a radius with another kind; `HG_ERR_NULL_POINTER`. Needs
+/// Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a bad edge or radius;
+/// `HG_ERR_INVALID` for a radius with another edge; `HG_ERR_NULL_POINTER`. Needs
 /// exclusive use of `line`.
 ///
 /// # Safety
 /// `line` must be NULL or a live handle used by no other thread.
 #[unsafe(no_mangle)]
-pub unsafe extern "C" fn hg_line_add_entrance(line: *mut hg_line, kind: i32, r_over_d: f64) -> i32 {
+pub unsafe extern "C" fn hg_line_add_from_tank(
+    line: *mut hg_line,
+    edge: i32,
+    r_over_d: f64,
+) -> i32 {
     // SAFETY: forwarded contract.
     unsafe {
         add(line, || {
-            let unused = || -> FfiResult {
-                if r_over_d == 0.0 {
-                    Ok(())
-                } else {
-                    Err(Error::invalid(
-                        "r_over_d",
-                        format!("r_over_d = {r_over_d}: must be 0 unless the entrance is rounded"),
-                    )
-                    .into())
-                }
-            };
-            let f = match kind {
-                HG_ENTRANCE_SHARP => {
-                    unused()?;
-                    Fitting::entrance_sharp()
-                }
-                HG_ENTRANCE_ROUNDED => Fitting::entrance_rounded(r_over_d)?,
-                HG_ENTRANCE_PROJECTING => {
-                    unused()?;
-                    Fitting::entrance_projecting()
-                }
-                _ => return Err(ffi::bad_constant("kind", kind, "HG_ENTRANCE_*", 3)),
-            };
-            Ok(Element::Fitting(f))
+            let name = usize::try_from(edge)
+                .ok()
+                .and_then(|i| Edge::NAMES.get(i))
+                .ok_or_else(|| ffi::bad_constant("edge", edge, "HG_EDGE_*", Edge::NAMES.len()))?;
+            // C has no "absent": a radius of 0 stands for none except on a rounded edge.
+            let radius = (edge == HG_EDGE_ROUNDED || r_over_d != 0.0).then_some(r_over_d);
+            Ok(Element::Fitting(Fitting::from_tank(Edge::named(
+                name, radius,
+            )?)?))
         })
     }
 }
 
-/// Appends a pipe exit into a large space (K = 1 on the pipe's velocity).
+/// Appends an outlet into a large tank (K = 1 on the pipe's velocity); reverse flow turns
+/// it into a square-edged inlet from the tank.
 ///
 /// Returns `HG_OK` or `HG_ERR_NULL_POINTER`. Needs exclusive use of `line`.
 ///
 /// # Safety
 /// `line` must be NULL or a live handle used by no other thread.
 #[unsafe(no_mangle)]
-pub unsafe extern "C" fn hg_line_add_exit(line: *mut hg_line) -> i32 {
+pub unsafe extern "C" fn hg_line_add_into_tank(line: *mut hg_line) -> i32 {
     // SAFETY: forwarded contract.
-    unsafe { add(line, || Ok(Element::Fitting(Fitting::exit()))) }
+    unsafe { add(line, || Ok(Element::Fitting(Fitting::into_tank()))) }
 }
 
 /// Sets the relative half-width `spread` (0…1, e.g. 0.3 for ±30 %) of the K of the

@@ -30,7 +30,7 @@ pub const HG_REGIME_NONE: i32 = -1;
 /// number, so it stays valid after the line and the fluid are freed. Reading it is
 /// thread-safe.
 pub struct hg_line_result {
-    result: LineResult,
+    pub(crate) result: LineResult,
 }
 
 /// The totals of a line evaluated at one flow, from `hg_line_result_totals`. Set
@@ -165,6 +165,12 @@ pub struct hg_element_result {
     pub has_band_share: i32,
     /// Reserved, 0.
     pub reserved_end: i32,
+    /// Elevation of the element's outlet above the line's inlet, m (a rise's geometric
+    /// height is the change of this from the row before).
+    pub elevation_out: f64,
+    /// Total pressure (static + ½ρV²) at the outlet, Pa absolute; valid when
+    /// `has_pressure`.
+    pub total_pressure_out: f64,
 }
 sized!(hg_element_result, band_source_count: usize);
 
@@ -254,6 +260,8 @@ pub(crate) fn element_to_c(e: &ElementResult) -> hg_element_result {
         band_share,
         has_band_share,
         reserved_end: 0,
+        elevation_out: e.elevation_out,
+        total_pressure_out: e.total_pressure_out.unwrap_or(0.0),
     }
 }
 
@@ -347,7 +355,7 @@ pub unsafe extern "C" fn hg_line_result_free(result: *mut hg_line_result) {
 ///
 /// # Safety
 /// `p` must be NULL or a live handle.
-unsafe fn read<'a>(p: *const hg_line_result) -> FfiResult<&'a LineResult> {
+pub(crate) unsafe fn read<'a>(p: *const hg_line_result) -> FfiResult<&'a LineResult> {
     // SAFETY: forwarded contract.
     Ok(&unsafe { ffi::handle("result", p)? }.result)
 }

@@ -5,7 +5,7 @@
 //! refers the result to whatever bore the caller asks for.
 
 use super::Resistance;
-use crate::error::Result;
+use crate::error::{Error, Result, check};
 use crate::friction::{Correlation, Options, darcy_factor};
 use crate::math;
 use crate::units::{BAR, GPM, INCH, M3_PER_HOUR, PSI};
@@ -43,13 +43,76 @@ pub const CV_K_FACTOR: f64 = PI * PI * PSI / (8.0 * CV_REFERENCE_DENSITY * GPM *
 pub const KV_K_FACTOR: f64 =
     PI * PI * BAR / (8.0 * KV_REFERENCE_DENSITY * M3_PER_HOUR * M3_PER_HOUR);
 
-/// Sharp-edged entrance, K = 0.5 (Crane Co., TP-410, 1988, from memory; common practice).
-pub const K_ENTRANCE_SHARP: f64 = 0.5;
-/// Inward-projecting (re-entrant) entrance, K = 0.78 (Crane Co., TP-410, 1988, from memory).
-pub const K_ENTRANCE_PROJECTING: f64 = 0.78;
-/// Exit into a large reservoir, K = 1: the whole kinetic energy of a uniform stream is
+/// Inlet from a tank through a square (sharp-edged) entrance, K = 0.5 (Crane Co., TP-410,
+/// 1988, from memory; common practice).
+pub const K_FROM_TANK_SQUARE: f64 = 0.5;
+/// Inlet from a tank through a pipe end projecting into it (re-entrant entrance), K = 0.78
+/// (Crane Co., TP-410, 1988, from memory).
+pub const K_FROM_TANK_REENTRANT: f64 = 0.78;
+/// Outlet into a large tank, K = 1: the whole kinetic energy of a uniform stream is
 /// lost (Borda–Carnot with an infinite outlet; exact).
-pub const K_EXIT: f64 = 1.0;
+pub const K_INTO_TANK: f64 = 1.0;
+
+/// The edge of the pipe end where flow enters it from a tank.
+#[derive(Debug, Clone, Copy, PartialEq, Serialize, Deserialize)]
+#[serde(tag = "edge", rename_all = "snake_case")]
+pub enum Edge {
+    /// Square (sharp-edged) end flush with the tank wall, K = 0.5.
+    Square,
+    /// Rounded end of radius r = `r_over_d` · d, K from the Crane TP-410 table.
+    Rounded {
+        /// Radius of the rounding over the bore, ≥ 0.
+        r_over_d: f64,
+    },
+    /// Pipe end projecting into the tank (re-entrant entrance), K = 0.78.
+    Reentrant,
+}
+
+impl Edge {
+    /// The names of the edges in the order of the C constants `HG_EDGE_*`.
+    pub const NAMES: [&'static str; 3] = ["square", "rounded", "reentrant"];
+
+    /// The edge called `name` (one of [`Edge::NAMES`]); `r_over_d` (the rounding radius
+    /// over the bore, ≥ 0) is given for a rounded edge and only for it.
+    ///
+    /// # Errors
+    /// An unknown name; a rounded edge without `r_over_d`; `r_over_d` with another edge;
+    /// `r_over_d` negative or not finite.
+    pub fn named(name: &str, r_over_d: Option<f64>) -> Result<Edge> {
+        let edge = match (name, r_over_d) {
+            ("rounded", Some(r_over_d)) => {
+                check::non_negative("r_over_d", r_over_d)?;
+                Edge::Rounded { r_over_d }
+            }
+            ("rounded", None) => {
+                return Err(Error::invalid(
+                    "r_over_d",
+                    "a rounded edge needs its rounding radius over the bore, r_over_d",
+                ));
+            }
+            ("square" | "reentrant", Some(r_over_d)) => {
+                return Err(Error::invalid(
+                    "r_over_d",
+                    format!("r_over_d = {r_over_d} applies only to a rounded edge, not to {name}"),
+                ));
+            }
+            ("square", None) => Edge::Square,
+            ("reentrant", None) => Edge::Reentrant,
+            _ => return Err(Error::unknown_name("edge", name, &Edge::NAMES)),
+        };
+        Ok(edge)
+    }
+
+    /// The edge's name, as Python and the C constants spell it: `"square"`,
+    /// `"rounded"`, `"reentrant"`.
+    pub fn name(&self) -> &'static str {
+        match self {
+            Edge::Square => "square",
+            Edge::Rounded { .. } => "rounded",
+            Edge::Reentrant => "reentrant",
+        }
+    }
+}
 
 /// Rounded entrance: K against r/d, Crane Co., TP-410 (1988), typed from memory;
 /// interpolated linearly, K = 0.04 beyond r/d = 0.15.
@@ -109,17 +172,14 @@ pub enum Method {
         /// Outlet bore (m), < d_in.
         d_out: f64,
     },
-    /// Sharp-edged entrance from a reservoir, K = 0.5.
-    EntranceSharp,
-    /// Rounded entrance from a reservoir, K from r/d (Crane TP-410 table).
-    EntranceRounded {
-        /// Radius of the rounding over the bore, ≥ 0.
-        r_over_d: f64,
+    /// Inlet from a tank through a pipe end with the given edge.
+    FromTank {
+        /// The edge of the pipe end.
+        #[serde(flatten)]
+        edge: Edge,
     },
-    /// Inward-projecting entrance, K = 0.78.
-    EntranceProjecting,
-    /// Exit into a reservoir, K = 1.
-    Exit,
+    /// Outlet into a tank, K = 1.
+    IntoTank,
     /// Smooth bend (Rennels & Hudson, 2012).
     Bend {
         /// Bend angle in degrees, 0…180.
@@ -149,10 +209,14 @@ impl Method {
             Method::ThreeK { .. } => "three_k",
             Method::Expansion { .. } => "expansion",
             Method::Contraction { .. } => "contraction",
-            Method::EntranceSharp => "entrance_sharp",
-            Method::EntranceRounded { .. } => "entrance_rounded",
-            Method::EntranceProjecting => "entrance_projecting",
-            Method::Exit => "exit",
+            Method::FromTank { edge: Edge::Square } => "from_tank_square",
+            Method::FromTank {
+                edge: Edge::Rounded { .. },
+            } => "from_tank_rounded",
+            Method::FromTank {
+                edge: Edge::Reentrant,
+            } => "from_tank_reentrant",
+            Method::IntoTank => "into_tank",
             Method::Bend { .. } => "bend",
             Method::Cv { .. } => "cv",
             Method::Kv { .. } => "kv",
@@ -170,10 +234,8 @@ impl Method {
             Method::ThreeK { .. } => "3-K method (Darby, 1999, 2001)",
             Method::Expansion { .. } => "Borda–Carnot (exact momentum balance)",
             Method::Contraction { .. } => "Crane TP-410 (1988), sudden contraction, from memory",
-            Method::EntranceSharp | Method::EntranceRounded { .. } | Method::EntranceProjecting => {
-                "Crane TP-410 (1988) entrance data, from memory"
-            }
-            Method::Exit => "Borda–Carnot with an infinite outlet (exact)",
+            Method::FromTank { .. } => "Crane TP-410 (1988) entrance data, from memory",
+            Method::IntoTank => "Borda–Carnot with an infinite outlet (exact)",
             Method::Bend { .. } => "Rennels & Hudson (2012) bend formula, from memory",
             Method::Cv { .. } => "definition of Cv (ANSI/ISA-75.01) with exact NIST SP 811 factors",
             Method::Kv { .. } => "definition of Kv (IEC 60534) with exact NIST SP 811 factors",
@@ -187,9 +249,9 @@ impl Method {
             Method::K { .. } | Method::EquivalentLength { .. } => 0.3,
             Method::TwoK { .. } => 0.35,
             Method::ThreeK { .. } => 0.25,
-            Method::Expansion { .. } | Method::Exit => 0.1,
-            Method::Contraction { .. } | Method::EntranceSharp => 0.2,
-            Method::EntranceRounded { .. } | Method::EntranceProjecting => 0.3,
+            Method::Expansion { .. } | Method::IntoTank => 0.1,
+            Method::Contraction { .. } | Method::FromTank { edge: Edge::Square } => 0.2,
+            Method::FromTank { .. } => 0.3,
             Method::Bend { .. } => 0.3,
             Method::Cv { .. } | Method::Kv { .. } => 0.1,
         }
@@ -232,10 +294,12 @@ impl Method {
                 let area_ratio = math::powi(d_out / d_in, 2);
                 inertial(0.5 * (1.0 - area_ratio))
             }
-            Method::EntranceSharp => inertial(K_ENTRANCE_SHARP),
-            Method::EntranceRounded { r_over_d } => inertial(rounded_entrance(r_over_d)),
-            Method::EntranceProjecting => inertial(K_ENTRANCE_PROJECTING),
-            Method::Exit => inertial(K_EXIT),
+            Method::FromTank { edge } => inertial(match edge {
+                Edge::Square => K_FROM_TANK_SQUARE,
+                Edge::Rounded { r_over_d } => rounded_entrance(r_over_d),
+                Edge::Reentrant => K_FROM_TANK_REENTRANT,
+            }),
+            Method::IntoTank => inertial(K_INTO_TANK),
             Method::Bend {
                 angle_deg,
                 r_over_d,

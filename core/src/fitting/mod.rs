@@ -14,8 +14,8 @@
 //! | [`Fitting::three_k`] | Darby (1999, 2001) | K₁/Re + Kᵢ (1 + K_d / D_in^0.3) |
 //! | [`Fitting::expansion`] | Borda–Carnot (exact momentum balance) | (1 − (d₁/d₂)²)² on V₁ |
 //! | [`Fitting::contraction`] | Crane TP-410 (1988) | 0.5 (1 − (d₂/d₁)²) on V₂ |
-//! | [`Fitting::entrance_sharp`] / `_rounded` / `_projecting` | Crane TP-410 | 0.5 / table in r/d / 0.78 |
-//! | [`Fitting::exit`] | Borda–Carnot, d₂ → ∞ | 1 |
+//! | [`Fitting::from_tank`] (square-edged / rounded / re-entrant entrance) | Crane TP-410 | 0.5 / table in r/d / 0.78 |
+//! | [`Fitting::into_tank`] | Borda–Carnot, d₂ → ∞ | 1 |
 //! | [`Fitting::bend`] | Rennels & Hudson (2012) | f_T α r/d + (0.10 + 2.4 f_T) sin(α/2) + … |
 //! | [`Fitting::cv`], [`Fitting::kv`] | definition of Cv, Kv | [`method::CV_K_FACTOR`] d⁴/Cv², [`method::KV_K_FACTOR`] d⁴/Kv² |
 //! | [`Fitting::tee_run`], [`Fitting::tee_branch`] | Darby 3-K | catalogue constants |
@@ -51,7 +51,7 @@ pub mod catalogue;
 pub mod method;
 
 pub use catalogue::{CatalogueEntry, catalogue_entries, entry as catalogue_entry};
-pub use method::Method;
+pub use method::{Edge, Method};
 
 use crate::error::{Error, Result, check};
 use crate::units::STANDARD_GRAVITY;
@@ -249,30 +249,26 @@ impl Fitting {
         Ok(Fitting::from_method(Method::Contraction { d_in, d_out }))
     }
 
-    /// A sharp-edged entrance from a reservoir, K = 0.5 (Crane TP-410, from memory).
-    pub fn entrance_sharp() -> Fitting {
-        Fitting::from_method(Method::EntranceSharp)
-    }
-
-    /// An entrance rounded with radius r = `r_over_d` · d: K from the Crane TP-410 table
-    /// (0.5 at r/d = 0 down to 0.04 at r/d ≥ 0.15, linear in between; from memory).
+    /// An inlet from a tank (a large space at rest) into the pipe, through a pipe end with
+    /// the given edge: square (a sharp-edged entrance, K = 0.5), rounded with radius
+    /// r = `r_over_d` · d (K from the Crane TP-410 table, 0.5 at r/d = 0 down to 0.04 at
+    /// r/d ≥ 0.15, linear in between) or re-entrant (the pipe projects into the tank,
+    /// K = 0.78); Crane Co., TP-410 (1988), from memory. A line that starts with one
+    /// starts at the tank's surface. With reverse flow it is an outlet into the tank.
     ///
     /// # Errors
-    /// `r_over_d` not finite or negative.
-    pub fn entrance_rounded(r_over_d: f64) -> Result<Fitting> {
-        check::non_negative("r_over_d", r_over_d)?;
-        Ok(Fitting::from_method(Method::EntranceRounded { r_over_d }))
+    /// A rounded edge's `r_over_d` not finite or negative.
+    pub fn from_tank(edge: Edge) -> Result<Fitting> {
+        if let Edge::Rounded { r_over_d } = edge {
+            check::non_negative("r_over_d", r_over_d)?;
+        }
+        Ok(Fitting::from_method(Method::FromTank { edge }))
     }
 
-    /// An inward-projecting (re-entrant) entrance, K = 0.78 (Crane TP-410, from memory).
-    pub fn entrance_projecting() -> Fitting {
-        Fitting::from_method(Method::EntranceProjecting)
-    }
-
-    /// An exit into a large reservoir, K = 1 (the velocity head is lost; exact for a
-    /// uniform stream).
-    pub fn exit() -> Fitting {
-        Fitting::from_method(Method::Exit)
+    /// An outlet from the pipe into a large tank, K = 1 (the velocity head is lost; exact
+    /// for a uniform stream). With reverse flow it is a square-edged inlet from the tank.
+    pub fn into_tank() -> Fitting {
+        Fitting::from_method(Method::IntoTank)
     }
 
     /// A smooth bend of `angle_deg` degrees (0…180) with centre-line radius
@@ -479,10 +475,12 @@ impl Fitting {
             Method::Expansion { d_in, d_out } => {
                 inertial_at(0.5 * (1.0 - crate::math::powi(d_in / d_out, 2)), d_in)
             }
-            Method::EntranceSharp | Method::EntranceRounded { .. } | Method::EntranceProjecting => {
-                inertial_at(method::K_EXIT, self.diameter.unwrap_or(bore))
+            Method::FromTank { .. } => {
+                inertial_at(method::K_INTO_TANK, self.diameter.unwrap_or(bore))
             }
-            Method::Exit => inertial_at(method::K_ENTRANCE_SHARP, self.diameter.unwrap_or(bore)),
+            Method::IntoTank => {
+                inertial_at(method::K_FROM_TANK_SQUARE, self.diameter.unwrap_or(bore))
+            }
             _ => forward.k_inertial,
         };
         Ok(Resistance {
@@ -494,10 +492,7 @@ impl Fitting {
     /// True for an inlet from a tank (square-edged, rounded or re-entrant): a line that
     /// starts with one starts at the tank's surface.
     pub fn is_from_tank(&self) -> bool {
-        matches!(
-            self.method,
-            Method::EntranceSharp | Method::EntranceRounded { .. } | Method::EntranceProjecting
-        )
+        matches!(self.method, Method::FromTank { .. })
     }
 
     /// The bores (m) on the upstream and downstream side of a change of section
@@ -559,10 +554,8 @@ impl TryFrom<FittingData> for Fitting {
             Method::ThreeK { k1, k_inf, k_d } => Fitting::three_k(k1, k_inf, k_d)?,
             Method::Expansion { d_in, d_out } => Fitting::expansion(d_in, d_out)?,
             Method::Contraction { d_in, d_out } => Fitting::contraction(d_in, d_out)?,
-            Method::EntranceSharp => Fitting::entrance_sharp(),
-            Method::EntranceRounded { r_over_d } => Fitting::entrance_rounded(r_over_d)?,
-            Method::EntranceProjecting => Fitting::entrance_projecting(),
-            Method::Exit => Fitting::exit(),
+            Method::FromTank { edge } => Fitting::from_tank(edge)?,
+            Method::IntoTank => Fitting::into_tank(),
             Method::Bend {
                 angle_deg,
                 r_over_d,

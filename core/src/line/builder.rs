@@ -426,6 +426,15 @@ impl LineBuilder {
         self.with_options(|o| o.inlet_pressure = pressure)
     }
 
+    /// Sets (`Some`, Pa above the start, finite) or clears the pressure the line must
+    /// deliver at its end (see [`LineOptions::end_pressure`]).
+    ///
+    /// # Errors
+    /// A pressure not finite.
+    pub fn set_end_pressure(&mut self, pressure: Option<f64>) -> Result<()> {
+        self.with_options(|o| o.end_pressure = pressure)
+    }
+
     /// Sets the diameter turbulent flow in non-circular ducts uses.
     pub fn set_turbulent_diameter(&mut self, mode: TurbulentDiameter) {
         self.edit().options.turbulent_diameter = mode;

@@ -272,16 +272,18 @@ impl Line {
             Resolved::Drop {
                 drop,
                 at_flow,
+                rating_density,
                 spread,
                 ..
             } => {
+                // Δp = drop (ρ/ρ_rating) Q|Q|/Q_r² (fixed K): the head Δp/(ρ g) does not
+                // depend on the fluid's density.
                 let r = flow / at_flow;
-                let h = drop * r * r.abs() / (fluid.density * g) * own;
+                let h = drop * r * r.abs() / (rating_density * g) * own;
                 State {
                     head_loss: h,
-                    dhead_dflow: 2.0 * drop * r.abs() / (at_flow * fluid.density * g) * own,
+                    dhead_dflow: 2.0 * drop * r.abs() / (at_flow * rating_density * g) * own,
                     sens: Sens {
-                        density: -h,
                         own: h,
                         ..Sens::default()
                     },
@@ -338,7 +340,7 @@ impl Line {
                 "gives a required head or slope that is not a finite number (the losses overflow double precision)",
             ));
         }
-        Ok((h, d))
+        Ok((h + self.end_head(fluid), d))
     }
 
     /// The fluid to evaluate with and the flow in it: for a gas with a known inlet

@@ -21,6 +21,7 @@ mod path;
 mod pump;
 pub(crate) use path::{Resolved, Role};
 mod parallel;
+pub mod plausible;
 mod result;
 pub mod rows;
 mod shares;
@@ -72,9 +73,12 @@ impl TryFrom<EquipmentSpec> for Equipment {
     type Error = Error;
     fn try_from(s: EquipmentSpec) -> Result<Equipment> {
         match s.rating {
-            Rating::PressureDrop { drop, at_flow } => {
-                Equipment::pressure_drop(&s.name, drop, at_flow)
-            }
+            Rating::PressureDrop {
+                drop,
+                at_flow,
+                rating_density,
+            } => Equipment::pressure_drop(&s.name, drop, at_flow)?
+                .with_rating_density(rating_density),
             Rating::FixedK { k, diameter } => Equipment::fixed_k(&s.name, k, diameter),
         }?
         .with_spread(s.spread)
@@ -84,13 +88,20 @@ impl TryFrom<EquipmentSpec> for Equipment {
 /// How an equipment's loss is stated.
 #[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
 pub enum Rating {
-    /// A pressure drop `drop` (Pa) at flow `at_flow` (m³/s), scaled with Q|Q|
-    /// (turbulent, fixed K: common practice for heat exchangers, filters and meters).
+    /// A pressure drop `drop` (Pa) at flow `at_flow` (m³/s) of a fluid of density
+    /// `rating_density` (kg/m³), scaled with Q|Q| and with the density (turbulent, fixed
+    /// K: common practice for heat exchangers, filters and meters):
+    /// Δp = drop · (ρ/ρ_rating) · Q|Q|/Q_rating², so the head loss
+    /// drop/(ρ_rating g) · Q|Q|/Q_rating² does not depend on the fluid's density.
     PressureDrop {
         /// Pressure drop at the rating flow, Pa.
         drop: f64,
         /// The rating flow, m³/s.
         at_flow: f64,
+        /// Density of the fluid the drop was rated with, kg/m³ (default: water at
+        /// 20 °C and 101 325 Pa, from the core's water model).
+        #[serde(default = "default_rating_density")]
+        rating_density: f64,
     },
     /// A fixed resistance coefficient on the velocity in `diameter` (m), or in the bore of
     /// the adjoining pipe when `None`.
@@ -106,16 +117,53 @@ pub enum Rating {
 /// manufacturers' stated drops).
 pub const EQUIPMENT_DEFAULT_SPREAD: f64 = 0.1;
 
+/// Density of water at 20 °C and 101 325 Pa, kg/m³ (IAPWS-IF97 through the core's water
+/// model): the fluid a pressure drop is rated with unless stated.
+pub fn default_rating_density() -> f64 {
+    // The water model covers 20 °C at 1 atm; the fallback is the same value rounded
+    // (IAPWS-IF97, 998.21 kg/m³) and is never taken.
+    Fluid::water(293.15, 101_325.0).map_or(998.21, |w| w.density)
+}
+
 impl Equipment {
-    /// Equipment with a stated pressure drop `drop` (Pa, > 0) at `at_flow` (m³/s, > 0).
+    /// Equipment with a stated pressure drop `drop` (Pa, > 0) at `at_flow` (m³/s, > 0),
+    /// rated with water at 20 °C ([`default_rating_density`]); see
+    /// [`Equipment::with_rating_density`] for another rating fluid.
     pub fn pressure_drop(name: &str, drop: f64, at_flow: f64) -> Result<Equipment> {
         check::positive("drop", drop)?;
         check::positive("at_flow", at_flow)?;
         Ok(Equipment {
             name: name.to_string(),
-            rating: Rating::PressureDrop { drop, at_flow },
+            rating: Rating::PressureDrop {
+                drop,
+                at_flow,
+                rating_density: default_rating_density(),
+            },
             spread: EQUIPMENT_DEFAULT_SPREAD,
         })
+    }
+
+    /// The same pressure-drop equipment rated with a fluid of density `density` (kg/m³,
+    /// > 0): in another fluid its drop scales with ρ/`density`.
+    ///
+    /// # Errors
+    /// `density` not positive or not finite; equipment rated by a fixed K (its drop
+    /// already follows the fluid's density).
+    pub fn with_rating_density(mut self, density: f64) -> Result<Equipment> {
+        check::positive("rating_density", density)?;
+        match &mut self.rating {
+            Rating::PressureDrop { rating_density, .. } => *rating_density = density,
+            Rating::FixedK { .. } => {
+                return Err(Error::invalid(
+                    "rating_density",
+                    format!(
+                        "{} is rated by a fixed K, whose drop already follows the fluid's density",
+                        self.name
+                    ),
+                ));
+            }
+        }
+        Ok(self)
     }
 
     /// Equipment with a fixed K (0 … [`Fitting::MAX_K`]) on the velocity in `diameter` (m)
@@ -244,6 +292,12 @@ pub struct LineOptions {
     /// free surfaces whose own air columns cancel it.
     #[serde(default)]
     pub air_column_for_liquids: bool,
+    /// The pressure the line must deliver at its end, Pa, above the pressure at its start
+    /// (a spray header, a burner, a process inlet fed from a tank open to the same
+    /// atmosphere: the gauge pressure it needs). Counted in the required head as
+    /// p_end/(ρ g); `None` (the default) asks for none.
+    #[serde(default)]
+    pub end_pressure: Option<f64>,
 }
 
 /// Temperature of the default surroundings, K (20 °C).
@@ -260,6 +314,7 @@ impl Default for LineOptions {
             uncertainty: UncertaintyOptions::default(),
             surroundings: None,
             air_column_for_liquids: false,
+            end_pressure: None,
         }
     }
 }
@@ -272,6 +327,9 @@ impl LineOptions {
             check::positive("inlet_pressure", p)?;
         }
         self.surroundings_fluid()?;
+        if let Some(p) = self.end_pressure {
+            check::finite("end_pressure", p)?;
+        }
         self.uncertainty.validate()
     }
 
@@ -472,7 +530,19 @@ impl Line {
     /// neglected unless [`LineOptions::air_column_for_liquids`]); Σ Δz (1 − ρ_s/ρ) for a
     /// gas, with ρ_s the surroundings' density.
     pub fn static_head_in(&self, fluid: &Fluid) -> f64 {
-        self.resolved.iter().map(|r| self.rise_head(r, fluid)).sum()
+        self.resolved
+            .iter()
+            .map(|r| self.rise_head(r, fluid))
+            .sum::<f64>()
+            + self.end_head(fluid)
+    }
+
+    /// The head (m of `fluid`) of the pressure the line must deliver at its end,
+    /// p_end/(ρ g); 0 when it states none.
+    pub fn end_head(&self, fluid: &Fluid) -> f64 {
+        self.options.end_pressure.map_or(0.0, |p| {
+            p / (fluid.density * crate::units::STANDARD_GRAVITY)
+        })
     }
 
     /// The head (m of `fluid`) of one row's rise; 0 for other rows.

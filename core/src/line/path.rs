@@ -73,6 +73,8 @@ pub(crate) enum Resolved {
     Drop {
         drop: f64,
         at_flow: f64,
+        /// Density of the rating fluid, kg/m³.
+        rating_density: f64,
         spread: f64,
         name: String,
     },
@@ -235,6 +237,7 @@ pub(crate) fn resolve(
     let mut path = Path::default();
     let air_density = options.surroundings_fluid()?.density;
     for (i, e) in elements.iter().enumerate() {
+        path.notes.extend(super::plausible::element_notes(i, e));
         let after = pipe_after(i).map(Section::of_pipe);
         let here = sides(e, current, after);
         if let Some((inlet, outlet)) = here {
@@ -311,9 +314,14 @@ pub(crate) fn resolve(
                 air_density,
             },
             Element::Equipment(eq) => match eq.rating() {
-                Rating::PressureDrop { drop, at_flow } => Resolved::Drop {
+                Rating::PressureDrop {
+                    drop,
+                    at_flow,
+                    rating_density,
+                } => Resolved::Drop {
                     drop: *drop,
                     at_flow: *at_flow,
+                    rating_density: *rating_density,
                     spread: eq.spread(),
                     name: eq.name().to_string(),
                 },

@@ -3,7 +3,7 @@
 
 use super::eval::State;
 use super::uncertainty::{self, Sources};
-use super::{Element, Line, Resolved, Role};
+use super::{Element, Line, Resolved, Role, plausible};
 use crate::band::Band;
 use crate::error::{Result, check};
 use crate::fluid::Fluid;
@@ -171,7 +171,8 @@ impl Line {
         // Summed in route order exactly as the system curve does, so both agree bit for bit.
         let required_head: f64 = states
             .iter()
-            .fold(0.0, |acc, s| acc + (s.head_loss + s.static_head));
+            .fold(0.0, |acc, s| acc + (s.head_loss + s.static_head))
+            + self.end_head(&work);
         let slope: f64 = states.iter().map(|s| s.dhead_dflow).sum::<f64>() * dq;
         let mut warnings = gas_warn;
         let mut messages: Vec<String> = Vec::new();
@@ -179,6 +180,27 @@ impl Line {
             warnings |= *w;
             messages.push(m.clone());
         }
+        if let Some((w, m)) = plausible::fluid_note(fluid) {
+            warnings |= w;
+            messages.push(m);
+        }
+        for (i, r) in self.resolved.iter().enumerate() {
+            if let Resolved::Drop {
+                name,
+                rating_density,
+                ..
+            } = r
+            {
+                if let Some(m) =
+                    plausible::rating_note(self.origin[i], name, *rating_density, fluid)
+                {
+                    warnings |= Warnings::IMPLAUSIBLE_RATED_DROP;
+                    messages.push(m);
+                }
+            }
+        }
+        let v_limit = plausible::max_velocity(fluid);
+        let mut fastest: Option<(usize, f64)> = None;
         // Grade line: total pressure falls by ρg·loss and by ρg·Δz of the fluid's own
         // column (absolute pressures inside the line); static = total − ½ρV². A line that
         // starts with an inlet from a tank starts at the tank's surface, where the
@@ -213,6 +235,12 @@ impl Line {
             total = total.map(|t| t - rho_g * (s.head_loss + height));
             let pressure_out = total.map(|t| t - 0.5 * work.density * last_v * last_v);
             let mut w = s.warnings;
+            if let Some(v) = s.velocity.filter(|v| v.abs() > v_limit) {
+                w.insert(Warnings::IMPLAUSIBLE_VELOCITY);
+                if fastest.is_none_or(|(_, f)| v.abs() > f) {
+                    fastest = Some((i, v.abs()));
+                }
+            }
             // No vapour pressure compares as −∞. Written as a select rather than a match on
             // both options, so that no branch reads an absent option's payload (memcheck
             // reports such speculated comparisons).
@@ -238,6 +266,9 @@ impl Line {
             .zip(uncertainty::variance_shares(&element_terms, &terms))
         {
             e.band_share = share;
+        }
+        if let Some((i, v)) = fastest {
+            messages.push(plausible::velocity_note(self.origin[i], v, flow, v_limit));
         }
         let mut bands =
             uncertainty::line_bands(self, &sources, terms, &work, head_loss, required_head);

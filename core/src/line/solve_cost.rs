@@ -14,7 +14,7 @@ fn line20() -> Line {
     let pipe = |d: f64, l: f64| Element::Pipe(Pipe::circular(d, l, steel).unwrap());
     let fit = Element::Fitting;
     Line::new(vec![
-        fit(Fitting::entrance_sharp()),
+        fit(Fitting::from_tank(crate::fitting::Edge::Square).unwrap()),
         pipe(big, 35.0),
         fit(Fitting::bend(90.0, 1.5).unwrap()),
         pipe(big, 12.0),
@@ -33,7 +33,7 @@ fn line20() -> Line {
         pipe(big, 60.0),
         Element::rise(-2.5).unwrap(),
         pipe(big, 8.0),
-        fit(Fitting::exit()),
+        fit(Fitting::into_tank()),
     ])
     .unwrap()
 }

@@ -525,9 +525,10 @@ fn head_terms(line: &Line, sources: &Sources, fluid: &Fluid, flow: f64) -> Resul
         sources.accumulate(line, [(i, &s)], &work, &mut acc);
     }
     let dq = if flow == 0.0 { 1.0 } else { q / flow };
+    // The end pressure is a stated requirement, taken as exact (no band of its own).
     Ok(HeadTerms {
         head_loss: hl,
-        required: h,
+        required: h + line.end_head(&work),
         slope: d * dq,
         terms: acc,
     })
@@ -771,7 +772,8 @@ pub(crate) fn sample_required_head(
             let s = line.element_state(i, &fl, q, Some(&pert), true)?;
             h += s.head_loss + s.static_head;
         }
-        values.push(h);
+        // The end pressure is a stated requirement, taken as exact (as in the GUM bands).
+        values.push(h + line.end_head(&work));
     }
     Ok(values)
 }

@@ -258,13 +258,16 @@ class Fitting:
     @classmethod
     def contraction(cls, d_in: float, d_out: float, *, label: Optional[str] = None, count: int = 1) -> Fitting: ...
     @classmethod
-    def entrance_sharp(cls, *, label: Optional[str] = None, count: int = 1) -> Fitting: ...
+    def from_tank(
+        cls,
+        edge: str = "square",
+        r_over_d: Optional[float] = None,
+        *,
+        label: Optional[str] = None,
+        count: int = 1,
+    ) -> Fitting: ...
     @classmethod
-    def entrance_rounded(cls, r_over_d: float, *, label: Optional[str] = None, count: int = 1) -> Fitting: ...
-    @classmethod
-    def entrance_projecting(cls, *, label: Optional[str] = None, count: int = 1) -> Fitting: ...
-    @classmethod
-    def exit(cls, *, label: Optional[str] = None, count: int = 1) -> Fitting: ...
+    def into_tank(cls, *, label: Optional[str] = None, count: int = 1) -> Fitting: ...
     @classmethod
     def bend(cls, angle_deg: float, r_over_d: float, diameter: Optional[float] = None, *, label: Optional[str] = None, count: int = 1) -> Fitting: ...
     @classmethod
@@ -410,7 +413,13 @@ class Equipment:
 
     @classmethod
     def pressure_drop(
-        cls, name: str, drop: float, at_flow: float, *, label: Optional[str] = None
+        cls,
+        name: str,
+        drop: float,
+        at_flow: float,
+        rating_density: Optional[float] = None,
+        *,
+        label: Optional[str] = None,
     ) -> Equipment: ...
     @classmethod
     def fixed_k(
@@ -545,6 +554,7 @@ class Line:
         uncertainty: Union[str, Uncertainty, None] = None,
         surroundings: Optional[Fluid] = None,
         air_column_for_liquids: bool = False,
+        end_pressure: Optional[float] = None,
     ) -> Line: ...
     @property
     def elements(self) -> List[_Element]: ...

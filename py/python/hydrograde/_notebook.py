@@ -86,6 +86,12 @@ SHORT_WARNINGS: Dict[str, str] = {
     "gas_compressibility": "gas: large Δp",
     "below_vapour_pressure": "cavitation risk",
     "fitting_out_of_range": "fitting out of range",
+    "bore_change_without_transition": "bore change",
+    "implausible_velocity": "velocity: unit?",
+    "implausible_bore": "bore: unit?",
+    "implausible_length": "length: unit?",
+    "implausible_rated_drop": "rated drop: unit?",
+    "implausible_viscosity": "viscosity: unit?",
 }
 
 _STYLE = (
