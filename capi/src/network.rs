@@ -82,7 +82,12 @@ pub unsafe extern "C" fn hg_network_add_node(
 ) -> i32 {
     guard(|| {
         // SAFETY: forwarded contract.
-        let (n, name) = unsafe { (ffi::handle_mut("network", network)?, ffi::c_str("name", name)?) };
+        let (n, name) = unsafe {
+            (
+                ffi::handle_mut("network", network)?,
+                ffi::c_str("name", name)?,
+            )
+        };
         Ok(n.net.node(name, elevation, outflow)?)
     })
 }
@@ -106,7 +111,12 @@ pub unsafe extern "C" fn hg_network_add_fixed_head(
 ) -> i32 {
     guard(|| {
         // SAFETY: forwarded contract.
-        let (n, name) = unsafe { (ffi::handle_mut("network", network)?, ffi::c_str("name", name)?) };
+        let (n, name) = unsafe {
+            (
+                ffi::handle_mut("network", network)?,
+                ffi::c_str("name", name)?,
+            )
+        };
         // SAFETY: forwarded contract (NULL checked).
         let z = (!elevation.is_null()).then(|| unsafe { *elevation });
         Ok(n.net.fixed_head(name, head, z)?)
@@ -225,7 +235,12 @@ pub unsafe extern "C" fn hg_network_solve(
     guard(|| {
         ffi::check_outs(&[out_ptr("out", out)])?;
         // SAFETY: forwarded contract.
-        let (n, f) = unsafe { (ffi::handle("network", network)?, ffi::handle("fluid", fluid)?) };
+        let (n, f) = unsafe {
+            (
+                ffi::handle("network", network)?,
+                ffi::handle("fluid", fluid)?,
+            )
+        };
         let solution = n.net.solve(&f.fluid)?;
         let h = Box::into_raw(Box::new(hg_network_solution { solution }));
         // SAFETY: checked above.
@@ -368,7 +383,11 @@ pub unsafe extern "C" fn hg_network_solution_link(
         unsafe {
             put("flow", flow, l.flow)?;
             put("velocity", velocity, l.velocity.unwrap_or(0.0))?;
-            put("has_velocity", has_velocity, i32::from(l.velocity.is_some()))?;
+            put(
+                "has_velocity",
+                has_velocity,
+                i32::from(l.velocity.is_some()),
+            )?;
             put("head_drop", head_drop, l.head_drop)?;
             put("closed", closed, i32::from(l.closed))?;
             put("warnings", warnings, l.warnings.bits())

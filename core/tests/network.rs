@@ -489,3 +489,58 @@ fn link_breakdown_is_the_line_at_the_solved_flow() {
         ErrorKind::UnknownName
     );
 }
+
+/// An invented square grid of `n`×`n` junctions fed by one tank at a corner: 2n(n−1)
+/// links. Run with `cargo test --release --test network -- --ignored --nocapture` for the
+/// timing; the checks are continuity and energy.
+#[test]
+#[ignore = "timing of a large invented grid; run on demand in release"]
+fn grid_network_scales() {
+    let w = water();
+    for n in [23usize, 71, 224] {
+        let mut net = Network::new();
+        net.fixed_head("tank", 60.0, None).unwrap();
+        for i in 0..n {
+            for j in 0..n {
+                net.node(&format!("{i}_{j}"), 0.0, 1e-4).unwrap();
+            }
+        }
+        let l = line(vec![pipe(0.15, 100.0, 4.5e-5)]);
+        net.link("feed", "tank", "0_0", line(vec![pipe(0.5, 10.0, 4.5e-5)]))
+            .unwrap();
+        for i in 0..n {
+            for j in 0..n {
+                if i + 1 < n {
+                    net.link(
+                        &format!("v{i}_{j}"),
+                        &format!("{i}_{j}"),
+                        &format!("{}_{j}", i + 1),
+                        l.clone(),
+                    )
+                    .unwrap();
+                }
+                if j + 1 < n {
+                    net.link(
+                        &format!("h{i}_{j}"),
+                        &format!("{i}_{j}"),
+                        &format!("{i}_{}", j + 1),
+                        l.clone(),
+                    )
+                    .unwrap();
+                }
+            }
+        }
+        let t = std::time::Instant::now();
+        let s = net.solve(&w).unwrap();
+        let dt = t.elapsed().as_secs_f64();
+        println!(
+            "grid {n}x{n}: {} links, {} iterations, {:.3} s, {:.1} ms per iteration",
+            net.links().len(),
+            s.iterations,
+            dt,
+            1e3 * dt / s.iterations as f64
+        );
+        assert_continuity(&net, &s, 1e-10);
+        assert_energy(&net, &s, &w, 1e-8);
+    }
+}

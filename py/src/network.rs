@@ -60,7 +60,13 @@ impl PyNetwork {
 
     /// Adds a link ``name`` carrying ``line`` from node ``upstream`` to node
     /// ``downstream`` (positive flow runs that way).
-    fn link(&mut self, name: &str, upstream: &str, downstream: &str, line: &PyLine) -> PyResult<()> {
+    fn link(
+        &mut self,
+        name: &str,
+        upstream: &str,
+        downstream: &str,
+        line: &PyLine,
+    ) -> PyResult<()> {
         self.inner
             .link(name, upstream, downstream, line.inner.clone())
             .py()
