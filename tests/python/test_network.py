@@ -133,8 +133,9 @@ def test_bad_input_errors_name_the_node_or_link(water):
     with pytest.raises(hg.InvalidInputError, match='"p"'):
         net.link("p", "a", "b", line)
     net.fixed_head("t", head=10.0)
+    net.link("feed", "t", "a", line)
     net.node("island", elevation=0.0)
-    with pytest.raises(hg.InvalidInputError, match="island"):
+    with pytest.raises(hg.InvalidInputError, match='"island" is joined to no link'):
         net.solve(water)
     s = three_reservoirs().solve(water)
     with pytest.raises(hg.UnknownNameError):
