@@ -131,6 +131,8 @@ run "compile C line test (shared)" gcc -std=c11 "${ccflags[@]}" $cflags tests/c/
   $libs -Wl,-rpath,"$prefix/lib" -lpthread -lm
 run "compile C line test (static)" gcc -std=c11 "${ccflags[@]}" $cflags tests/c/test_line.c -o "$out/test_line_static" \
   $static_libs -lpthread -lm
+run "compile C network test (shared)" gcc -std=c11 "${ccflags[@]}" $cflags tests/c/test_network.c -o "$out/test_network" \
+  $libs -Wl,-rpath,"$prefix/lib" -lpthread -lm
 run "compile C++ test (shared)" g++ -std=c++17 "${ccflags[@]}" $cflags tests/c/test_capi.cpp -o "$out/test_cpp" \
   $libs -Wl,-rpath,"$prefix/lib"
 run "compile C++ test (static)" g++ -std=c++17 "${ccflags[@]}" $cflags tests/c/test_capi.cpp -o "$out/test_cpp_static" \
@@ -139,6 +141,7 @@ run "C test (shared)" "$out/test_c" "$out/reference.txt" "$version"
 run "C test (static)" "$out/test_c_static" "$out/reference.txt" "$version"
 run "C line test (shared)" "$out/test_line" "$out/reference.txt"
 run "C line test (static)" "$out/test_line_static" "$out/reference.txt"
+run "C network test (shared)" "$out/test_network"
 run "C++ test (shared)" "$out/test_cpp"
 run "C++ test (static)" "$out/test_cpp_static"
 grep -h -E '^(bitwise|test_)' "$log" | sort -u | sed 's/^/    /'
@@ -149,6 +152,7 @@ vg=(env HYDROGRADE_THREADS=1 valgrind --quiet --suppressions=tests/c/valgrind.su
     --show-leak-kinds=definite,indirect)
 run "valgrind: C test, zero errors and leaks" "${vg[@]}" "$out/test_c" "$out/reference.txt" "$version"
 run "valgrind: C line test, zero errors and leaks" "${vg[@]}" "$out/test_line" "$out/reference.txt"
+run "valgrind: C network test, zero errors and leaks" "${vg[@]}" "$out/test_network"
 run "valgrind: C++ test, zero errors and leaks" "${vg[@]}" "$out/test_cpp"
 
 # ---- CMake consumer ----

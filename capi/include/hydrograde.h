@@ -65,6 +65,13 @@
  *             hg_line_result_npsh_available, hg_line_result_npsh_check,
  *             hg_line_result_message_count, hg_line_result_message,
  *             hg_line_result_free
+ *  Networks   hg_network (handle), hg_network_solution (handle),
+ *             HG_NETWORK_WARNING_*; hg_network_new, hg_network_free,
+ *             hg_network_add_node, hg_network_add_fixed_head, hg_network_add_link,
+ *             hg_network_counts, hg_network_index, hg_network_solve,
+ *             hg_network_solution_free, hg_network_solution_summary,
+ *             hg_network_solution_node, hg_network_solution_link,
+ *             hg_network_solution_warning, hg_network_link_result
  *  Bands      hg_uncertainty_options, hg_monte_carlo, HG_MONTE_CARLO_MAX_SAMPLES;
  *             hg_line_system_curve_band,
  *             hg_uncertainty_options_default, hg_line_set_uncertainty,
@@ -302,6 +309,32 @@
 #define HG_MONTE_CARLO_MAX_SAMPLES 10000000
 
 /**
+ * A check or foot valve holds a link closed (`hg_network_solution_warning`).
+ */
+#define HG_NETWORK_WARNING_CHECK_VALVE_CLOSED 0
+
+/**
+ * A link's velocity is above the limit (3 m/s).
+ */
+#define HG_NETWORK_WARNING_VELOCITY_ABOVE_LIMIT 1
+
+/**
+ * A junction's pressure is below atmospheric.
+ */
+#define HG_NETWORK_WARNING_PRESSURE_BELOW_ATMOSPHERIC 2
+
+/**
+ * A junction's absolute pressure is below the liquid's vapour pressure.
+ */
+#define HG_NETWORK_WARNING_BELOW_VAPOUR_PRESSURE 3
+
+/**
+ * A link's line has warnings of its own at the solved flow (`HG_WARN_*` bits of
+ * `hg_network_solution_link`).
+ */
+#define HG_NETWORK_WARNING_LINE_WARNINGS 4
+
+/**
  * The Reynolds number lies outside the published range of the correlation.
  */
 #define HG_WARN_REYNOLDS_OUT_OF_RANGE 1
@@ -421,6 +454,20 @@ typedef struct hg_line hg_line;
  * thread-safe.
  */
 typedef struct hg_line_result hg_line_result;
+
+/**
+ * A network of nodes joined by lines: opaque. Made by `hg_network_new`, released by
+ * `hg_network_free`. Adding nodes and links needs exclusive use of the handle; solving
+ * only reads it.
+ */
+typedef struct hg_network hg_network;
+
+/**
+ * A solved network: opaque. Made by `hg_network_solve`, released by
+ * `hg_network_solution_free`. It owns every number, so reading it computes nothing and
+ * it stays valid after the network and the fluid are freed.
+ */
+typedef struct hg_network_solution hg_network_solution;
 
 /**
  * Options of `hg_darcy_factor_opts`. Fill it with `hg_friction_options_default`, then
@@ -2696,6 +2743,224 @@ int32_t hg_line_add_equipment_rated(struct hg_line *line,
  */
 int32_t hg_line_set_end_pressure(struct hg_line *line,
                                  double pressure);
+
+/**
+ * Makes an empty network and stores it in `*out`; free it with `hg_network_free`.
+ *
+ * Returns `HG_OK`; `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * `out` must be NULL or point to a writable `hg_network *`.
+ */
+int32_t hg_network_new(struct hg_network **out);
+
+/**
+ * Releases a network. NULL is accepted and ignored.
+ *
+ * # Safety
+ * `network` must be NULL or a live handle from `hg_network_new`, not used afterwards.
+ */
+void hg_network_free(struct hg_network *network);
+
+/**
+ * Adds a junction `name` at `elevation` (m, within ±10,000) where `outflow` (m³/s)
+ * leaves the system (negative for an inflow).
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_INVALID` for an
+ * empty or repeated name or text that is not UTF-8; `HG_ERR_NULL_POINTER`. Not
+ * thread-safe for one network.
+ *
+ * # Safety
+ * `network` NULL or a live handle used by no other thread; `name` NULL or a
+ * NUL-terminated string.
+ */
+int32_t hg_network_add_node(struct hg_network *network,
+                            const char *name,
+                            double elevation,
+                            double outflow);
+
+/**
+ * Adds a node `name` held at `head` (m): a tank level or a main at a known pressure.
+ * `elevation` points to the elevation (m) where its pressure is read, or is NULL for a
+ * free surface at the head.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_INVALID` for an
+ * empty or repeated name; `HG_ERR_NULL_POINTER`. Not thread-safe for one network.
+ *
+ * # Safety
+ * `network` NULL or a live handle used by no other thread; `name` NULL or a
+ * NUL-terminated string; `elevation` NULL or readable.
+ */
+int32_t hg_network_add_fixed_head(struct hg_network *network,
+                                  const char *name,
+                                  double head,
+                                  const double *elevation);
+
+/**
+ * Adds a link `name` carrying a copy of `line` from node `upstream` to node
+ * `downstream` (positive flow runs that way). Nodes must be added first.
+ *
+ * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` for a node not in the network;
+ * `HG_ERR_INVALID` for an empty or repeated name, a link from a node to itself, rises
+ * that disagree with the nodes' elevations or a line that cannot be built;
+ * `HG_ERR_NULL_POINTER`. Not thread-safe for one network.
+ *
+ * # Safety
+ * `network` NULL or a live handle used by no other thread; the strings NULL or
+ * NUL-terminated; `line` NULL or a live handle.
+ */
+int32_t hg_network_add_link(struct hg_network *network,
+                            const char *name,
+                            const char *upstream,
+                            const char *downstream,
+                            const struct hg_line *line);
+
+/**
+ * The number of nodes and links in the network.
+ *
+ * Returns `HG_OK`; `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * `network` NULL or a live handle; `nodes` and `links` NULL or writable.
+ */
+int32_t hg_network_counts(const struct hg_network *network,
+                          size_t *nodes,
+                          size_t *links);
+
+/**
+ * The index (in the order added) of node `name` (`is_link` = 0) or link `name`
+ * (`is_link` ≠ 0), for the `hg_network_solution_*` accessors.
+ *
+ * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME`; `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * `network` NULL or a live handle; `name` NULL or NUL-terminated; `index` NULL or
+ * writable.
+ */
+int32_t hg_network_index(const struct hg_network *network,
+                         const char *name,
+                         int32_t is_link,
+                         size_t *index);
+
+/**
+ * Solves `network` for `fluid` (global gradient method, Todini and Pilati 1988) and
+ * stores the solution in `*out`; free it with `hg_network_solution_free`.
+ *
+ * Returns `HG_OK`; `HG_ERR_INVALID` for no links, no fixed-head node, a part with no
+ * fixed head or a link with no loss (the message names the node or link);
+ * `HG_ERR_NO_SOLUTION` when the iteration does not converge (naming the worst link) or
+ * a node is cut off by closed check valves; `HG_ERR_NULL_POINTER`. On failure `*out`
+ * is left untouched. Thread-safe (the network is only read).
+ *
+ * # Safety
+ * `network` and `fluid` NULL or live handles; `out` NULL or a writable
+ * `hg_network_solution *`.
+ */
+int32_t hg_network_solve(const struct hg_network *network,
+                         const struct hg_fluid *fluid,
+                         struct hg_network_solution **out);
+
+/**
+ * Releases a solution. NULL is accepted and ignored.
+ *
+ * # Safety
+ * `solution` must be NULL or a live handle from `hg_network_solve`, not used
+ * afterwards.
+ */
+void hg_network_solution_free(struct hg_network_solution *solution);
+
+/**
+ * Newton iterations used, the largest flow change of the last one (m³/s), the largest
+ * energy imbalance of a link at the solution (m) and the number of warnings.
+ *
+ * Returns `HG_OK`; `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * `solution` NULL or a live handle; the outputs NULL or writable.
+ */
+int32_t hg_network_solution_summary(const struct hg_network_solution *solution,
+                                    size_t *iterations,
+                                    double *flow_change,
+                                    double *head_imbalance,
+                                    size_t *warnings);
+
+/**
+ * Node `index` (in the order added) of a solution: piezometric `head` (m), `elevation`
+ * (m), static gauge `pressure` ρg(head − elevation) (Pa) and `outflow` (m³/s leaving
+ * the system; at a fixed-head node negative when it feeds the network).
+ *
+ * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` for an index past the last node;
+ * `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * `solution` NULL or a live handle; the outputs NULL or writable.
+ */
+int32_t hg_network_solution_node(const struct hg_network_solution *solution,
+                                 size_t index,
+                                 double *head,
+                                 double *elevation,
+                                 double *pressure,
+                                 double *outflow);
+
+/**
+ * Link `index` (in the order added) of a solution: `flow` (m³/s, positive from
+ * upstream to downstream), `velocity` (m/s, the largest along the line; 0 with
+ * `*has_velocity` = 0 for a line with no bore), `head_drop` (m, upstream head minus
+ * downstream head), `closed` (1 when a check valve holds it shut) and `warnings` (the
+ * line's own `HG_WARN_*` bits at the solved flow).
+ *
+ * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` for an index past the last link;
+ * `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * `solution` NULL or a live handle; the outputs NULL or writable.
+ */
+int32_t hg_network_solution_link(const struct hg_network_solution *solution,
+                                 size_t index,
+                                 double *flow,
+                                 double *velocity,
+                                 int32_t *has_velocity,
+                                 double *head_drop,
+                                 int32_t *closed,
+                                 uint32_t *warnings);
+
+/**
+ * Warning `index` of a solution: its `kind` (`HG_NETWORK_WARNING_*`) and its message
+ * (naming the node or link and the values) copied into `buf` like `snprintf`, with the
+ * full length in `*needed`.
+ *
+ * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` for an index past the last warning;
+ * `HG_ERR_BUFFER_TOO_SMALL` (the kind, the needed length and a cut copy are stored);
+ * `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * `solution` NULL or a live handle; `kind` and `needed` NULL or writable; `buf` NULL or
+ * valid for `len` bytes.
+ */
+int32_t hg_network_solution_warning(const struct hg_network_solution *solution,
+                                    size_t index,
+                                    int32_t *kind,
+                                    char *buf,
+                                    size_t len,
+                                    size_t *needed);
+
+/**
+ * The per-element breakdown of link `index`: its line evaluated for `fluid` at the flow
+ * of `solution`, stored in `*out` as a new `hg_line_result` (free it with
+ * `hg_line_result_free`).
+ *
+ * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` for an index past the last link; the errors
+ * of `hg_line_evaluate`; `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * `network`, `solution` and `fluid` NULL or live handles; `out` NULL or a writable
+ * `hg_line_result *`.
+ */
+int32_t hg_network_link_result(const struct hg_network *network,
+                               const struct hg_network_solution *solution,
+                               const struct hg_fluid *fluid,
+                               size_t index,
+                               struct hg_line_result **out);
 
 /**
  * The system curve with its 95 % band: at each of the `n` flows `flows[i]` (m³/s),

@@ -35,6 +35,8 @@ mod pipe;
 mod line;
 mod line_model;
 
+mod network;
+
 mod band_curve;
 
 mod units;
@@ -59,6 +61,7 @@ pub use fluid::*;
 pub use friction::*;
 pub use line::*;
 pub use line_model::*;
+pub use network::*;
 pub use pipe::*;
 pub use roughness::*;
 pub use section::*;

@@ -26,6 +26,7 @@ pub mod friction;
 pub mod line;
 pub mod math;
 mod names;
+pub mod network;
 pub mod pipe;
 pub mod roughness;
 pub mod section;

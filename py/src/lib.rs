@@ -13,6 +13,7 @@ mod fluid;
 mod friction;
 mod line;
 mod line_result;
+mod network;
 mod pipe;
 mod roughness;
 mod section;
@@ -65,6 +66,12 @@ fn _native(m: &Bound<'_, PyModule>) -> PyResult<()> {
     m.add_class::<line_result::PyOperatingPoint>()?;
     m.add_class::<line_result::PySplit>()?;
     m.add_class::<line_result::PySizing>()?;
+
+    // network
+    m.add_class::<network::PyNetwork>()?;
+    m.add_class::<network::PyNetworkSolution>()?;
+    m.add_class::<network::PyNodeResult>()?;
+    m.add_class::<network::PyLinkResult>()?;
 
     // roughness and sizes
     m.add_function(wrap_pyfunction!(roughness::materials, m)?)?;

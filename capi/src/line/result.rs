@@ -269,7 +269,7 @@ pub(crate) fn element_to_c(e: &ElementResult) -> hg_element_result {
 ///
 /// # Safety
 /// `out` must be NULL or point to a writable `hg_line_result *`.
-unsafe fn give(out: *mut *mut hg_line_result, r: LineResult) -> FfiResult {
+pub(crate) unsafe fn give(out: *mut *mut hg_line_result, r: LineResult) -> FfiResult {
     let h = Box::into_raw(Box::new(hg_line_result { result: r }));
     // SAFETY: forwarded contract; `out` was checked by the caller, so this cannot fail
     // and leak `h`.

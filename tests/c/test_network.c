@@ -1,0 +1,184 @@
+/* Networks through the C ABI: an invented three-reservoir layout against an independent
+ * solve, a check valve held shut, the breakdown of a link, and every bad input. */
+#include <math.h>
+#include "check.h"
+#include "hydrograde.h"
+
+#define PI 3.14159265358979323846
+#define G 9.80665 /* standard gravity, m/s^2 (CGPM 1901, exact) */
+
+/* The calling thread's last error message. */
+static const char *last_error(void) {
+  static char buf[512];
+  hg_last_error(buf, sizeof buf);
+  return buf;
+}
+
+/* A line of one fully rough pipe: its loss is r*Q|Q| with f independent of Reynolds. */
+static hg_line *rough_pipe(double d, double l, double e) {
+  hg_line *line = NULL;
+  hg_friction_options o;
+  o.struct_size = sizeof o;
+  CHECK(hg_friction_options_default(&o) == HG_OK, "defaults");
+  o.correlation = HG_CORRELATION_FULLY_ROUGH;
+  CHECK(hg_line_new(&line) == HG_OK, "line");
+  CHECK(hg_line_add_pipe(line, d, l, e) == HG_OK, "pipe");
+  CHECK(hg_line_set_friction_options(line, &o) == HG_OK, "options");
+  return line;
+}
+
+/* r of r*Q|Q|: f = [2 log10(3.7 D/e)]^-2 (von Karman's rough-wall law), Darcy-Weisbach. */
+static double rough_r(double d, double l, double e) {
+  double f = 1.0 / pow(2.0 * log10(3.7 * d / e), 2.0);
+  return 8.0 * f * l / (G * PI * PI * pow(d, 5.0));
+}
+
+static void test_three_reservoirs(const hg_fluid *water) {
+  const double d[3] = {0.3, 0.25, 0.2}, len[3] = {1500.0, 1000.0, 2000.0}, level[3] = {100.0, 80.0, 40.0};
+  const char *tanks[3] = {"t0", "t1", "t2"}, *pipes[3] = {"p0", "p1", "p2"};
+  hg_network *net = NULL;
+  CHECK(hg_network_new(&net) == HG_OK, "new");
+  CHECK(hg_network_add_node(net, "j", 30.0, 0.02) == HG_OK, "junction");
+  for (int i = 0; i < 3; i++) {
+    hg_line *l = rough_pipe(d[i], len[i], 1e-3);
+    CHECK(hg_network_add_fixed_head(net, tanks[i], level[i], NULL) == HG_OK, "tank %d", i);
+    CHECK(hg_network_add_link(net, pipes[i], tanks[i], "j", l) == HG_OK, "link %d", i);
+    hg_line_free(l); /* the network holds its own copy */
+  }
+  size_t nn = 0, nl = 0, idx = 99;
+  CHECK(hg_network_counts(net, &nn, &nl) == HG_OK && nn == 4 && nl == 3, "counts %zu %zu", nn, nl);
+  CHECK(hg_network_index(net, "p2", 1, &idx) == HG_OK && idx == 2, "link index %zu", idx);
+  CHECK(hg_network_index(net, "j", 0, &idx) == HG_OK && idx == 0, "node index %zu", idx);
+  hg_network_solution *s = NULL;
+  CHECK(hg_network_solve(net, water, &s) == HG_OK, "solve: %s", last_error());
+  /* Independent solve: bisection on the junction head, each flow sqrt(|dH|/r). */
+  double lo = -1000.0, hi = 1000.0;
+  for (int it = 0; it < 200; it++) {
+    double mid = 0.5 * (lo + hi), in = -0.02;
+    for (int i = 0; i < 3; i++) {
+      double dh = level[i] - mid;
+      in += (dh > 0 ? 1.0 : -1.0) * sqrt(fabs(dh) / rough_r(d[i], len[i], 1e-3));
+    }
+    if (in > 0) lo = mid; else hi = mid;
+  }
+  double hj = 0.5 * (lo + hi), head, z, p, out, sum = 0.0;
+  CHECK(hg_network_solution_node(s, 0, &head, &z, &p, &out) == HG_OK, "node");
+  CHECK(fabs(head - hj) < 1e-9, "junction head %.15g, expected %.15g", head, hj);
+  CHECK(z == 30.0 && out == 0.02, "elevation %g outflow %g", z, out);
+  for (int i = 0; i < 3; i++) {
+    double q, v, drop;
+    int32_t hv, closed;
+    uint32_t w;
+    CHECK(hg_network_solution_link(s, (size_t)i, &q, &v, &hv, &drop, &closed, &w) == HG_OK, "link %d", i);
+    double dh = level[i] - hj, expect = (dh > 0 ? 1.0 : -1.0) * sqrt(fabs(dh) / rough_r(d[i], len[i], 1e-3));
+    CHECK(fabs(q - expect) <= 1e-9 * fabs(expect), "p%d flow %.15g expected %.15g", i, q, expect);
+    CHECK(hv == 1 && fabs(v - q / (PI * d[i] * d[i] / 4.0)) <= 1e-12 * fabs(v), "p%d velocity %g", i, v);
+    CHECK(closed == 0, "p%d open", i);
+    sum += q;
+  }
+  /* Continuity at the junction (exact balance up to the linear solve's rounding). */
+  CHECK(fabs(sum - 0.02) <= 1e-12 * 0.1, "continuity %.17g", sum);
+  size_t iters, nw;
+  double dq, imb;
+  CHECK(hg_network_solution_summary(s, &iters, &dq, &imb, &nw) == HG_OK && iters > 0 && iters < 50, "iterations %zu", iters);
+  CHECK(hg_network_solution_node(s, 4, &head, &z, &p, &out) == HG_ERR_OUT_OF_RANGE, "node index past the end");
+  hg_network_solution_free(s);
+  hg_network_free(net);
+}
+
+static void test_check_valve(const hg_fluid *water) {
+  hg_network *net = NULL;
+  hg_line *feed = NULL, *guarded = NULL;
+  CHECK(hg_line_new(&feed) == HG_OK && hg_line_add_pipe(feed, 0.1, 200.0, 4.5e-5) == HG_OK, "feed");
+  CHECK(hg_line_new(&guarded) == HG_OK && hg_line_add_pipe(guarded, 0.1, 150.0, 4.5e-5) == HG_OK &&
+            hg_line_add_fitting(guarded, "swing_check_valve", 0.0) == HG_OK, "guarded");
+  CHECK(hg_network_new(&net) == HG_OK, "new");
+  CHECK(hg_network_add_fixed_head(net, "A", 50.0, NULL) == HG_OK, "A");
+  CHECK(hg_network_add_node(net, "J", 5.0, 0.01) == HG_OK, "J");
+  double z_b = 55.0;
+  CHECK(hg_network_add_fixed_head(net, "B", 60.0, &z_b) == HG_OK, "B");
+  CHECK(hg_network_add_link(net, "feed", "A", "J", feed) == HG_OK, "feed link");
+  CHECK(hg_network_add_link(net, "guarded", "J", "B", guarded) == HG_OK, "guarded link");
+  hg_network_solution *s = NULL;
+  CHECK(hg_network_solve(net, water, &s) == HG_OK, "solve: %s", last_error());
+  double q, v, drop, head, z, p, out;
+  int32_t hv, closed, kind = -1;
+  uint32_t w;
+  CHECK(hg_network_solution_link(s, 1, &q, &v, &hv, &drop, &closed, &w) == HG_OK, "link");
+  CHECK(closed == 1 && q == 0.0, "valve shut: closed %d flow %g", closed, q);
+  CHECK(hg_network_solution_link(s, 0, &q, &v, &hv, &drop, &closed, &w) == HG_OK, "feed");
+  CHECK(fabs(q - 0.01) <= 1e-12 * 0.01, "all from A: %.17g", q);
+  /* B's pressure is read at its stated elevation: rho g (60 - 55). */
+  CHECK(hg_network_solution_node(s, 2, &head, &z, &p, &out) == HG_OK, "B");
+  CHECK(fabs(p - 999.1 * G * 5.0) < 1e-9, "B pressure %.17g", p);
+  /* The warning names the link; a one-byte buffer gets the needed length. */
+  size_t nw = 0, iters, needed = 0;
+  double dq, imb;
+  CHECK(hg_network_solution_summary(s, &iters, &dq, &imb, &nw) == HG_OK && nw >= 1, "warnings %zu", nw);
+  char buf[256], tiny[1];
+  int found = 0;
+  for (size_t i = 0; i < nw; i++) {
+    CHECK(hg_network_solution_warning(s, i, &kind, buf, sizeof buf, &needed) == HG_OK, "warning %zu", i);
+    if (kind == HG_NETWORK_WARNING_CHECK_VALVE_CLOSED && strstr(buf, "\"guarded\"")) found = 1;
+  }
+  CHECK(found, "a check-valve warning names the link");
+  CHECK(hg_network_solution_warning(s, 0, &kind, tiny, sizeof tiny, &needed) == HG_ERR_BUFFER_TOO_SMALL && needed > 1, "small buffer");
+  /* The breakdown of the feed is its line at the solved flow. */
+  hg_line_result *r = NULL, *direct = NULL;
+  hg_line_totals a, b;
+  a.struct_size = sizeof a;
+  b.struct_size = sizeof b;
+  CHECK(hg_network_link_result(net, s, water, 0, &r) == HG_OK, "breakdown");
+  CHECK(hg_line_evaluate(feed, water, 0.01, &direct) == HG_OK, "direct");
+  CHECK(hg_line_result_totals(r, &a) == HG_OK && hg_line_result_totals(direct, &b) == HG_OK, "totals");
+  CHECK(fabs(a.required_head - b.required_head) <= 1e-12 * b.required_head, "same line result");
+  CHECK(hg_network_link_result(net, s, water, 5, &r) == HG_ERR_OUT_OF_RANGE, "link index past the end");
+  hg_line_result_free(r);
+  hg_line_result_free(direct);
+  hg_network_solution_free(s);
+  hg_network_free(net);
+  hg_line_free(feed);
+  hg_line_free(guarded);
+}
+
+static void test_bad_input(const hg_fluid *water) {
+  hg_network *net = NULL;
+  hg_line *l = NULL;
+  hg_network_solution *s = NULL;
+  CHECK(hg_line_new(&l) == HG_OK && hg_line_add_pipe(l, 0.1, 100.0, 4.5e-5) == HG_OK, "line");
+  CHECK(hg_network_new(&net) == HG_OK, "new");
+  CHECK(hg_network_add_node(net, "a", 0.0, 0.001) == HG_OK, "a");
+  CHECK(hg_network_add_node(net, "a", 0.0, 0.0) == HG_ERR_INVALID, "duplicate node");
+  CHECK(strstr(last_error(), "\"a\"") != NULL, "message names it: %s", last_error());
+  CHECK(hg_network_add_node(net, "deep", -5e4, 0.0) == HG_ERR_OUT_OF_RANGE, "elevation");
+  CHECK(hg_network_add_node(net, "nan", 0.0, NAN) == HG_ERR_NOT_FINITE, "NaN outflow");
+  CHECK(hg_network_add_link(net, "x", "a", "nowhere", l) == HG_ERR_UNKNOWN_NAME, "unknown node");
+  CHECK(strstr(last_error(), "nowhere") != NULL, "message names it: %s", last_error());
+  CHECK(hg_network_add_link(net, "self", "a", "a", l) == HG_ERR_INVALID, "link to itself");
+  CHECK(hg_network_add_node(net, "b", 0.0, 0.0) == HG_OK, "b");
+  CHECK(hg_network_add_link(net, "p", "a", "b", l) == HG_OK, "p");
+  CHECK(hg_network_solve(net, water, &s) == HG_ERR_INVALID && s == NULL, "no fixed head");
+  CHECK(strstr(last_error(), "fixed-head") != NULL, "%s", last_error());
+  CHECK(hg_network_add_link(net, "p", "a", "b", l) == HG_ERR_INVALID, "duplicate link");
+  CHECK(hg_network_add_node(NULL, "c", 0.0, 0.0) == HG_ERR_NULL_POINTER, "NULL network");
+  CHECK(hg_network_add_node(net, NULL, 0.0, 0.0) == HG_ERR_NULL_POINTER, "NULL name");
+  CHECK(hg_network_add_link(net, "q", "a", "b", NULL) == HG_ERR_NULL_POINTER, "NULL line");
+  CHECK(hg_network_solve(net, NULL, &s) == HG_ERR_NULL_POINTER, "NULL fluid");
+  CHECK(hg_network_solve(net, water, NULL) == HG_ERR_NULL_POINTER, "NULL out");
+  size_t idx;
+  CHECK(hg_network_index(net, "zz", 0, &idx) == HG_ERR_UNKNOWN_NAME, "unknown index");
+  hg_network_free(NULL);
+  hg_network_solution_free(NULL);
+  hg_network_free(net);
+  hg_line_free(l);
+}
+
+int main(void) {
+  hg_fluid *water = NULL;
+  CHECK(hg_fluid_liquid(999.1, 1.138e-3, &water) == HG_OK, "fluid");
+  test_three_reservoirs(water);
+  test_check_valve(water);
+  test_bad_input(water);
+  hg_fluid_free(water);
+  return check_summary("test_network");
+}
