@@ -867,6 +867,23 @@ typedef struct hg_element_result {
    * `has_pressure`.
    */
   double total_pressure_out;
+  /**
+   * The bore the velocity is referred to, m (a pipe's hydraulic diameter, a fitting's
+   * bore at its position in the flow path); only when `has_bore`.
+   */
+  double bore;
+  /**
+   * Length of a pipe, m; only when `has_length`.
+   */
+  double length;
+  /**
+   * 1 when `bore` applies (not a rise nor a rated drop), else 0.
+   */
+  int32_t has_bore;
+  /**
+   * 1 when `length` applies (pipes), else 0.
+   */
+  int32_t has_length;
 } hg_element_result;
 
 /**

@@ -54,6 +54,19 @@ fn elbow_after_a_contraction_sees_the_downstream_velocity() {
         !r.warnings
             .contains(Warnings::BORE_CHANGE_WITHOUT_TRANSITION)
     );
+    // Each row names the bore its velocity refers to (the route as typed above) and a
+    // pipe its length: the elbow sits in the 50 mm outlet.
+    let bores: Vec<_> = r.elements.iter().map(|e| e.bore).collect();
+    assert_eq!(bores, [Some(0.1), Some(0.05), Some(0.05), Some(0.05)]);
+    let lengths: Vec<_> = r.elements.iter().map(|e| e.length).collect();
+    assert_eq!(lengths, [Some(10.0), None, None, Some(10.0)]);
+}
+
+#[test]
+fn rises_have_no_bore_nor_length() {
+    let line = Line::new(vec![pipe(0.1), Element::rise(3.0).unwrap()]).unwrap();
+    let r = line.evaluate(&water(), 0.004).unwrap();
+    assert_eq!((r.elements[1].bore, r.elements[1].length), (None, None));
 }
 
 #[test]

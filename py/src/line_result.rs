@@ -301,6 +301,8 @@ fn element_dict<'py>(py: Python<'py>, e: &ElementResult) -> PyResult<Bound<'py, 
     d.set_item("pressure_out", e.pressure_out)?;
     d.set_item("total_pressure_out", e.total_pressure_out)?;
     d.set_item("elevation_out", e.elevation_out)?;
+    d.set_item("bore", e.bore)?;
+    d.set_item("length", e.length)?;
     d.set_item("head_loss_low", e.head_loss_band.low)?;
     d.set_item("head_loss_high", e.head_loss_band.high)?;
     d.set_item("dominant", e.head_loss_band.dominant().map(|s| s.name()))?;
@@ -409,6 +411,16 @@ impl PyElementResult {
     #[getter]
     fn elevation_out(&self) -> f64 {
         self.inner.elevation_out
+    }
+    /// The bore the velocity is referred to, m (None for rises and rated drops).
+    #[getter]
+    fn bore(&self) -> Option<f64> {
+        self.inner.bore
+    }
+    /// Length of a pipe, m (None for every other row).
+    #[getter]
+    fn length(&self) -> Option<f64> {
+        self.inner.length
     }
     /// Names of the element's warnings.
     #[getter]

@@ -943,6 +943,21 @@ static void test_line_model(void) {
             strstr(last_msg(), "swing_check_valve (element 2)") != NULL,
         "reverse flow refused naming the valve: %s", last_msg());
   CHECK(hg_line_set_air_column_for_liquids(l, 2) == HG_ERR_OUT_OF_RANGE, "on must be 0 or 1");
+  /* Each row names the bore its velocity refers to and a pipe its length (the route as
+     typed): 300 mm pipe of 30 m, a rise with neither, the valve in the pipe's bore. */
+  hg_line_result *r = NULL;
+  CHECK(hg_line_evaluate(l, water, 1e-3, &r) == HG_OK, "evaluate");
+  hg_element_result e;
+  memset(&e, 0, sizeof e);
+  e.struct_size = sizeof e;
+  CHECK(hg_line_result_element(r, 0, &e) == HG_OK && e.has_bore == 1 && e.bore == 0.3 && e.has_length == 1 &&
+            e.length == 30.0,
+        "pipe bore %g length %g", e.bore, e.length);
+  CHECK(hg_line_result_element(r, 1, &e) == HG_OK && e.has_bore == 0 && e.bore == 0.0 && e.has_length == 0,
+        "rise has neither");
+  CHECK(hg_line_result_element(r, 2, &e) == HG_OK && e.has_bore == 1 && e.bore == 0.3 && e.has_length == 0,
+        "valve in the pipe's bore %g", e.bore);
+  hg_line_result_free(r);
   hg_fluid_free(hot);
   hg_fluid_free(water);
   hg_line_free(l);

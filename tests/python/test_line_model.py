@@ -28,6 +28,12 @@ def test_elbow_after_a_contraction_sees_the_outlet_velocity():
     r = line.evaluate(hg.Fluid(998.2, 1.002e-3), 0.004)
     # Definition of mean velocity: V = 4Q/(pi d^2) in the 50 mm bore.
     assert r.elements[2].velocity == pytest.approx(4 * 0.004 / (math.pi * 0.05**2), rel=1e-15)
+    # Each row names the bore its velocity refers to (the route as typed) and a pipe its
+    # length; the views show both.
+    assert [e.bore for e in r.elements] == [0.1, 0.05, 0.05, 0.05]
+    assert [e.length for e in r.elements] == [10.0, None, None, 10.0]
+    assert r.to_dict()["elements"][1]["bore"] == 0.05
+    assert hg.Line([hg.Rise(2.0)]).evaluate(hg.Fluid(998.2, 1.002e-3), 0.0).elements[0].bore is None
 
 
 def test_a_bore_change_without_a_transition_is_a_row_and_a_message():

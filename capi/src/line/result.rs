@@ -171,6 +171,15 @@ pub struct hg_element_result {
     /// Total pressure (static + ½ρV²) at the outlet, Pa absolute; valid when
     /// `has_pressure`.
     pub total_pressure_out: f64,
+    /// The bore the velocity is referred to, m (a pipe's hydraulic diameter, a fitting's
+    /// bore at its position in the flow path); only when `has_bore`.
+    pub bore: f64,
+    /// Length of a pipe, m; only when `has_length`.
+    pub length: f64,
+    /// 1 when `bore` applies (not a rise nor a rated drop), else 0.
+    pub has_bore: i32,
+    /// 1 when `length` applies (pipes), else 0.
+    pub has_length: i32,
 }
 sized!(hg_element_result, band_source_count: usize);
 
@@ -229,6 +238,8 @@ pub(crate) fn element_to_c(e: &ElementResult) -> hg_element_result {
     let (band_share, has_band_share) = flagged(e.band_share);
     let (k, has_k) = flagged(e.k);
     let (pressure_out, has_pressure) = flagged(e.pressure_out);
+    let (bore, has_bore) = flagged(e.bore);
+    let (length, has_length) = flagged(e.length);
     let fb = e
         .friction_factor_band
         .as_ref()
@@ -262,6 +273,10 @@ pub(crate) fn element_to_c(e: &ElementResult) -> hg_element_result {
         reserved_end: 0,
         elevation_out: e.elevation_out,
         total_pressure_out: e.total_pressure_out.unwrap_or(0.0),
+        bore,
+        length,
+        has_bore,
+        has_length,
     }
 }
 

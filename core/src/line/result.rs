@@ -58,6 +58,12 @@ pub struct ElementResult {
     pub velocity: Option<f64>,
     /// Reynolds number in that bore (`None` where there is no bore).
     pub reynolds: Option<f64>,
+    /// The bore the velocity is referred to, m: a pipe's hydraulic diameter, a fitting's
+    /// bore at its position in the flow path (the downstream bore of a transition);
+    /// `None` for rises and rated drops.
+    pub bore: Option<f64>,
+    /// Length of a pipe, m (`None` for every other row).
+    pub length: Option<f64>,
     /// Flow regime (pipes).
     pub regime: Option<Regime>,
     /// Darcy friction factor (pipes).
@@ -331,7 +337,14 @@ impl Line {
         // A row of the route shows its element's label; an implied change of section its
         // own name.
         let label = self.origin[i].and_then(|j| self.label(j)).unwrap_or(name);
+        let (bore, length) = match &self.resolved[i] {
+            Resolved::Pipe { pipe, .. } => (Some(pipe.bore()), Some(pipe.length())),
+            Resolved::Fitting { bore, .. } => (Some(*bore), None),
+            Resolved::Rise { .. } | Resolved::Drop { .. } => (None, None),
+        };
         ElementResult {
+            bore,
+            length,
             kind,
             label,
             count: self.origin[i].and_then(|j| self.count(j)).unwrap_or(1),

@@ -251,7 +251,7 @@ def _frame(title: str, body: str, warnings: Sequence[str] = ()) -> str:
 def _element_rows(elements: Sequence[Mapping[str, Any]]) -> str:
     has_pressure = any(e.get("pressure_out") is not None for e in elements)
     fields = ["velocity", "reynolds", "f_or_k", "head_loss", "band", "dominant", "static_head"]
-    head = ["#", "element", _heading("velocity"), "Re", "f / K", _heading("head_loss"),
+    head = ["#", "element", _heading("bore"), _heading("length"), _heading("velocity"), "Re", "f / K", _heading("head_loss"),
             f"band <span class='u'>[{html.escape(unit_text('head_loss'))}]</span>",
             "dominant source", _heading("static_head")]
     if has_pressure:
@@ -282,6 +282,8 @@ def _element_rows(elements: Sequence[Mapping[str, Any]]) -> str:
         if warn:
             notes.append(f"<span class='w'>{warn}</span>")
         row = [("n", str(e.get("index", i))), ("t", name),
+               ("n", value_text("bore", e.get("bore"))),
+               ("n", value_text("length", e.get("length"))),
                ("n", value_text("velocity", e.get("velocity"))),
                ("n", reynolds(e.get("reynolds"))), ("n", fk),
                ("n", value_text("head_loss", e.get("head_loss"))), ("b", rng), ("t", dominant),
