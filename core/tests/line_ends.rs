@@ -55,6 +55,32 @@ fn a_rated_drop_scales_with_density_over_the_rating_density() {
 }
 
 #[test]
+fn every_solver_sees_the_same_rated_drop() {
+    // The strainer above in the glycol mix, behind a pipe: the fast paths of
+    // required_head, the system curve and flow_for_head form the same head as evaluate,
+    // h = drop/(ρ_rating g) · (Q/Q_r)² = 2.038... m at the rating flow (definition of K).
+    let strainer = Equipment::pressure_drop("strainer", 2e4, 0.01)
+        .unwrap()
+        .with_rating_density(1000.0)
+        .unwrap();
+    let line = Line::new(vec![
+        Element::Pipe(hydrograde::pipe::Pipe::circular(0.08, 25.0, 4.5e-5).unwrap()),
+        Element::Equipment(strainer),
+    ])
+    .unwrap();
+    let glycol = Fluid::new(1100.0, 4e-3).unwrap();
+    let r = line.evaluate(&glycol, 0.01).unwrap();
+    assert!((r.elements[1].head_loss - 2e4 / (1000.0 * G)).abs() < 1e-12);
+    let (h, d) = line.required_head(&glycol, 0.01).unwrap();
+    assert_eq!(h.to_bits(), r.required_head.to_bits());
+    assert_eq!(d.to_bits(), r.drequired_head_dflow.to_bits());
+    let curve = line.system_curve(&glycol, &[0.0, 0.005, 0.01]).unwrap();
+    assert!((curve[2] - r.required_head).abs() <= 1e-12 * r.required_head);
+    let q = line.flow_for_head(&glycol, r.required_head).unwrap().flow;
+    assert!((q - 0.01).abs() < 1e-12, "{q}");
+}
+
+#[test]
 fn a_line_that_must_deliver_a_pressure_counts_it_in_the_required_head() {
     // A spray header 12 m above an open tank needs 2.5 bar above the tank's pressure at
     // the end of 60 m of 50 mm pipe. Energy balance (Bernoulli with losses):

@@ -1041,6 +1041,8 @@ static void test_builder(void) {
   hg_line_free(tail);
   hg_fluid_free(w);
   hg_line_free(l);
+}
+
 /* Least-squares pump curves: points on H = 40 - 20000 Q^2 (exact quadratic) give that
  * parabola back (exact solution); the operating point with either curve meets the line's
  * required head; degree 0 is exactly hg_line_operating_point. */

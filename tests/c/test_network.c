@@ -101,6 +101,16 @@ static void test_check_valve(const hg_fluid *water) {
   CHECK(hg_network_add_link(net, "guarded", "J", "B", guarded) == HG_OK, "guarded link");
   hg_network_solution *s = NULL;
   CHECK(hg_network_solve(net, water, &s) == HG_OK, "solve: %s", last_error());
+  /* A junction fed only through a check valve laid the wrong way round is cut off: the
+     solve has no solution and says so (continuity cannot hold at J2). */
+  hg_network *cut = NULL;
+  hg_network_solution *none = NULL;
+  CHECK(hg_network_new(&cut) == HG_OK && hg_network_add_fixed_head(cut, "T", 30.0, NULL) == HG_OK &&
+            hg_network_add_node(cut, "J2", 0.0, 0.002) == HG_OK &&
+            hg_network_add_link(cut, "backwards", "J2", "T", guarded) == HG_OK,
+        "cut-off network");
+  CHECK(hg_network_solve(cut, water, &none) == HG_ERR_NO_SOLUTION && none == NULL, "cut off: %s", last_error());
+  hg_network_free(cut);
   double q, v, drop, head, z, p, out;
   int32_t hv, closed, kind = -1;
   uint32_t w;

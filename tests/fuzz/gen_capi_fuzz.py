@@ -82,6 +82,8 @@ static const char *pick_str(void) {
 static hg_line *lines[3];   /* empty, a route of every kind, a scratch line that grows */
 static hg_fluid *fluids[3]; /* water, air, a liquid with uncertainty */
 static hg_line_result *results[2];
+static hg_network *networks[3]; /* empty, a tank feeding one junction, a scratch one */
+static hg_network_solution *solutions[1];
 
 static void make_scratch(void) {
   hg_line_free(lines[2]);
@@ -105,10 +107,22 @@ static void setup(void) {
   hg_fluid_free(g);
   if (hg_line_evaluate(lines[1], fluids[0], 2e-3, &results[0]) || hg_line_evaluate(lines[1], fluids[0], 0.0, &results[1]))
     abort();
+  hg_line *main_line = NULL;
+  for (int i = 0; i < 3; i++)
+    if (hg_network_new(&networks[i]) != HG_OK) abort();
+  if (hg_line_new(&main_line) || hg_line_add_pipe(main_line, 0.05, 50.0, 4.5e-5) ||
+      hg_network_add_fixed_head(networks[1], "tank", 30.0, NULL) ||
+      hg_network_add_node(networks[1], "a", 0.0, 1e-3) ||
+      hg_network_add_link(networks[1], "pipe", "tank", "a", main_line) ||
+      hg_network_solve(networks[1], fluids[0], &solutions[0]))
+    abort();
+  hg_line_free(main_line);
 }
 static void teardown(void) {
   for (int i = 0; i < 3; i++) hg_line_free(lines[i]), hg_fluid_free(fluids[i]);
   for (int i = 0; i < 2; i++) hg_line_result_free(results[i]);
+  for (int i = 0; i < 3; i++) hg_network_free(networks[i]);
+  hg_network_solution_free(solutions[0]);
 }
 
 static const hg_line *pick_line(void) { return one_in(8) ? NULL : lines[next() % 3]; }
@@ -120,6 +134,17 @@ static hg_line *pick_line_mut(void) {
 }
 static const hg_fluid *pick_fluid(void) { return one_in(8) ? NULL : fluids[next() % 3]; }
 static const hg_line_result *pick_result(void) { return one_in(8) ? NULL : results[next() % 2]; }
+static const hg_network *pick_network(void) { return one_in(8) ? NULL : networks[next() % 3]; }
+static hg_network *pick_network_mut(void) {
+  size_t n = 0, m = 0;
+  hg_network_counts(networks[2], &n, &m);
+  if (n + m > 40) {
+    hg_network_free(networks[2]);
+    if (hg_network_new(&networks[2]) != HG_OK) abort();
+  }
+  return one_in(8) ? NULL : networks[2];
+}
+static const hg_network_solution *pick_solution(void) { return one_in(8) ? NULL : solutions[0]; }
 
 /* A text or array buffer that is NULL one time in eight. */
 static void *maybe(void *p) { return one_in(8) ? NULL : p; }
@@ -274,7 +299,14 @@ def case(index, ret, name, params, structs):
             pre.append(f"const hg_fluid *{v} = pick_fluid();")
         elif t == "const struct hg_line_result *":
             pre.append(f"const hg_line_result *{v} = pick_result();")
-        elif t in ("struct hg_fluid *", "struct hg_line_result *") and name.endswith("_free"):
+        elif t == "const struct hg_network *":
+            pre.append(f"const hg_network *{v} = pick_network();")
+        elif t == "struct hg_network *" and not name.endswith("_free"):
+            pre.append(f"hg_network *{v} = pick_network_mut();")
+        elif t == "const struct hg_network_solution *":
+            pre.append(f"const hg_network_solution *{v} = pick_solution();")
+        elif t in ("struct hg_fluid *", "struct hg_line_result *", "struct hg_network *",
+                   "struct hg_network_solution *") and name.endswith("_free"):
             pre.append(f"{t} {v} = NULL;")
         elif t == "const struct hg_line *const *":
             pre.append(

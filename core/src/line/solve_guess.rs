@@ -55,8 +55,13 @@ pub(super) fn start(line: &Line, fluid: &Fluid, loss: f64, sign: f64) -> f64 {
                     a += k.k_viscous * nu / (bore * g2 * area);
                     b += k.k_inertial / (g2 * area * area);
                 }
-                Resolved::Drop { drop, at_flow, .. } => {
-                    b += drop / (at_flow * at_flow * fluid.density * STANDARD_GRAVITY);
+                Resolved::Drop {
+                    drop,
+                    at_flow,
+                    rating_density,
+                    ..
+                } => {
+                    b += drop / (at_flow * at_flow * rating_density * STANDARD_GRAVITY);
                 }
                 _ => {}
             }

@@ -43,10 +43,17 @@ impl Line {
                         * 1.0;
                     Some((hv + hi, slope, 0.0))
                 }
-                Resolved::Drop { drop, at_flow, .. } => {
+                Resolved::Drop {
+                    drop,
+                    at_flow,
+                    rating_density,
+                    ..
+                } => {
+                    // As `element_state`: Δp scales with ρ/ρ_rating, so the head is
+                    // drop/(ρ_rating g) · Q|Q|/Q_r².
                     let r = flow / at_flow;
-                    let loss = drop * r * r.abs() / (fluid.density * g) * 1.0;
-                    let slope = 2.0 * drop * r.abs() / (at_flow * fluid.density * g) * 1.0;
+                    let loss = drop * r * r.abs() / (rating_density * g) * 1.0;
+                    let slope = 2.0 * drop * r.abs() / (at_flow * rating_density * g) * 1.0;
                     Some((loss, slope, 0.0))
                 }
                 _ => None,
