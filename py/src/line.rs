@@ -342,8 +342,13 @@ impl PyLine {
         };
         let s = py
             .detach(|| {
-                self.inner
-                    .size_in(&fluid.inner, flow, limit, table, &Resize { section, material })
+                self.inner.size_in(
+                    &fluid.inner,
+                    flow,
+                    limit,
+                    table,
+                    &Resize { section, material },
+                )
             })
             .py()?;
         Ok(PySizing { inner: s })
