@@ -43,14 +43,19 @@ fn bores(line: &Line) -> Vec<String> {
         .collect()
 }
 
-#[test]
-fn a_line_sized_uniformly_has_no_phantom_reducer() {
-    let line = Line::new(vec![
+/// 100 mm, a contraction to 50 mm, 50 mm: 10 m each.
+fn reduced() -> Line {
+    Line::new(vec![
         pipe(0.1, 10.0),
         Element::Fitting(Fitting::contraction(0.1, 0.05).unwrap()),
         pipe(0.05, 10.0),
     ])
-    .unwrap();
+    .unwrap()
+}
+
+#[test]
+fn a_line_sized_uniformly_has_no_phantom_reducer() {
+    let line = reduced();
     let sized = line.with_uniform_diameter(0.03).unwrap();
     assert_eq!(bores(&sized), ["pipe 0.03", "pipe 0.03"]);
     let r = sized.evaluate(&oil(), Q).unwrap();
@@ -72,12 +77,7 @@ fn a_line_sized_uniformly_has_no_phantom_reducer() {
 #[test]
 fn sizing_the_line_removes_the_reducer_and_finds_the_closed_form_bore() {
     // Laminar: Δp(D) = 128 μ (20 m) Q / (π D⁴) = limit ⇒ D = (128 μ 20 Q / (π limit))^¼.
-    let line = Line::new(vec![
-        pipe(0.1, 10.0),
-        Element::Fitting(Fitting::contraction(0.1, 0.05).unwrap()),
-        pipe(0.05, 10.0),
-    ])
-    .unwrap();
+    let line = reduced();
     let limit = 2.0e4;
     let s = line
         .size(&oil(), Q, Limit::PressureLoss(limit), None)
