@@ -200,9 +200,9 @@ def orchard() -> None:
         f"  run backwards by gravity from the tank (pump bypassed): {-back.flow * 1e3:.2f} L/s "
         f"({-back.flow_band.high * 1e3:.2f} … {-back.flow_band.low * 1e3:.2f} L/s)"
     )
-    s = line.size(w, DESIGN_FLOW, max_velocity=2.0, table="pvc", schedule="40")
+    s = line.size(w, DESIGN_FLOW, max_velocity=2.0, table="pvc", schedule="40", material="pvc")
     print(
-        f"  one size for the whole main, velocity ≤ 2 m/s at {DESIGN_FLOW * 1e3:.0f} L/s: "
+        f"  one size for the whole main in PVC, velocity ≤ 2 m/s at {DESIGN_FLOW * 1e3:.0f} L/s: "
         f"inside diameter ≥ {s.min_inside_diameter * 1e3:.1f} mm"
     )
     c = s.standard
@@ -259,7 +259,7 @@ def numbers() -> None:
     r = line.evaluate(w, DESIGN_FLOW)
     op = line.operating_point(w, pump_curve())
     back = line.flow_for_head(w, 0.0)
-    s = line.size(w, DESIGN_FLOW, max_velocity=2.0, table="pvc", schedule="40")
+    s = line.size(w, DESIGN_FLOW, max_velocity=2.0, table="pvc", schedule="40", material="pvc")
     d = duct_line().evaluate(air(), DUCT_FLOW)
     rows = [
         ("orchard_required_head", r.required_head),

@@ -207,8 +207,10 @@ static void orchard(void) {
 
   hg_sizing z;
   z.struct_size = sizeof z;
-  TRY(hg_line_size(line, water, 6.0e-3, HG_LIMIT_VELOCITY, 2.0, "pvc", "40", &z));
-  printf("  one size for the whole main, velocity ≤ 2 m/s at 6 L/s: inside diameter ≥ %.1f mm\n",
+  size_t n_el = 0; /* sized in PVC: the new pipes take PVC's roughness, the reducer goes */
+  TRY(hg_line_count(line, &n_el));
+  TRY(hg_line_size_in(line, water, 6.0e-3, HG_LIMIT_VELOCITY, 2.0, "pvc", "40", 0, n_el, "pvc", &z));
+  printf("  one size for the whole main in PVC, velocity ≤ 2 m/s at 6 L/s: inside diameter ≥ %.1f mm\n",
          z.min_inside_diameter * 1e3);
   if (z.standard.found)
     printf("  smallest PVC schedule 40: NPS %s (ID %.1f mm, %.2f m/s, loss %.1f kPa)\n", z.standard.nominal,
@@ -250,7 +252,9 @@ static void numbers(void) {
   TRY(hg_line_flow_for_head(line, water, 0.0, &back, &back_lo, &back_hi));
   hg_sizing z;
   z.struct_size = sizeof z;
-  TRY(hg_line_size(line, water, 6.0e-3, HG_LIMIT_VELOCITY, 2.0, "pvc", "40", &z));
+  size_t n_el = 0; /* sized in PVC: the new pipes take PVC's roughness, the reducer goes */
+  TRY(hg_line_count(line, &n_el));
+  TRY(hg_line_size_in(line, water, 6.0e-3, HG_LIMIT_VELOCITY, 2.0, "pvc", "40", 0, n_el, "pvc", &z));
   TRY(hg_line_evaluate(dl, air, 0.9, &res));
   TRY(hg_line_result_totals(res, &d));
   hg_line_result_free(res);

@@ -57,7 +57,8 @@
  *             hg_line_split_flow_bands, hg_line_blocks_reverse_flow,
  *             hg_line_set_air_column_for_liquids, hg_line_set_label,
  *             hg_line_set_count, hg_line_slice, hg_line_append_line,
- *             hg_line_add_equipment_rated, hg_line_set_end_pressure
+ *             hg_line_add_equipment_rated, hg_line_set_end_pressure,
+ *             hg_line_size_in, hg_line_with_diameter_in
  *  Results    hg_line_result (handle), hg_line_totals, hg_element_result,
  *             HG_ELEMENT_*, HG_REGIME_NONE; hg_line_evaluate, hg_line_evaluate_at,
  *             hg_line_result_totals, hg_line_result_element, hg_line_result_label,
@@ -2271,11 +2272,13 @@ int32_t hg_pump_curve_head(const double *flows,
 
 /**
  * Makes a new line, stored in `*out`, equal to `line` with every round pipe set to
- * inside `diameter` (m, > 0); fittings that follow their pipe's bore follow it too.
- * Free it with `hg_line_free`; `line` is unchanged.
+ * inside `diameter` (m, > 0), by the rule of `hg_line_with_diameter_in` over the whole
+ * line: fittings take the new bore, contractions and expansions left between equal
+ * bores are removed. Free it with `hg_line_free`; `line` is unchanged.
  *
  * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_INVALID` for a
- * line that cannot be built; `HG_ERR_NULL_POINTER`. Thread-safe (`line` is only read).
+ * line without a round pipe, with equipment of a fixed bore (the message names it) or
+ * that cannot be built; `HG_ERR_NULL_POINTER`. Thread-safe (`line` is only read).
  *
  * # Safety
  * `line` must be NULL or a live handle; `out` NULL or a writable `hg_line *`.
@@ -2356,13 +2359,15 @@ int32_t hg_line_operating_point_fit(const struct hg_line *line,
  * `flow` (m³/s, ≠ 0) under the limit `limit` (`HG_LIMIT_*`) of value `limit_value`
  * (Pa or m/s, > 0); with `table` and `schedule` (as `hg_pipe_size`; both NULL for none)
  * it also picks the smallest standard size that meets the limit, at the nominal values
- * and at the band's unfavourable end. The result goes to `*out`.
+ * and at the band's unfavourable end. The result goes to `*out`. Every trial resizes as
+ * `hg_line_with_uniform_diameter` does (reducers between equal bores removed, fittings
+ * with a stated bore following, equipment with a fixed bore refused).
  *
  * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for a zero flow, a limit
  * ≤ 0 or an unknown `limit`; `HG_ERR_UNKNOWN_NAME` for a table or schedule;
- * `HG_ERR_INVALID` for a line without round pipes or a `struct_size` too small;
- * `HG_ERR_NO_SOLUTION` when no bore up to 20 m or no standard size meets the limit;
- * `HG_ERR_NULL_POINTER`. Thread-safe (the line is only read).
+ * `HG_ERR_INVALID` for a line without round pipes, equipment with a fixed bore or a
+ * `struct_size` too small; `HG_ERR_NO_SOLUTION` when no bore up to 20 m or no standard
+ * size meets the limit; `HG_ERR_NULL_POINTER`. Thread-safe (the line is only read).
  *
  * # Safety
  * `line` and `fluid` must be NULL or live handles; `table` and `schedule` NULL or
@@ -2376,6 +2381,60 @@ int32_t hg_line_size(const struct hg_line *line,
                      const char *table,
                      const char *schedule,
                      struct hg_sizing *out);
+
+/**
+ * As `hg_line_size`, resizing only the elements `start` … `end − 1` of `line` (indices as
+ * `hg_line_count` counts them, `end` excluded); with `material` (a catalogue name as
+ * `hg_line_add_pipe_material`, or NULL to keep each pipe's own roughness) the resized
+ * pipes are of that material, with its roughness. The limit applies to the whole line.
+ * Transitions at the section's borders are rebuilt from the bores that meet there (see
+ * `hg_line_with_diameter_in`).
+ *
+ * Returns as `hg_line_size`; also `HG_ERR_OUT_OF_RANGE` for a section past the line's
+ * end or empty, `HG_ERR_INVALID` for a section without a round pipe,
+ * `HG_ERR_UNKNOWN_NAME` for `material`. Thread-safe (the line is only read).
+ *
+ * # Safety
+ * As `hg_line_size`; `material` NULL or NUL-terminated.
+ */
+int32_t hg_line_size_in(const struct hg_line *line,
+                        const struct hg_fluid *fluid,
+                        double flow,
+                        int32_t limit,
+                        double limit_value,
+                        const char *table,
+                        const char *schedule,
+                        size_t start,
+                        size_t end,
+                        const char *material,
+                        struct hg_sizing *out);
+
+/**
+ * Makes a new line, stored in `*out`, equal to `line` with the round pipes of elements
+ * `start` … `end − 1` set to inside `diameter` (m, > 0), of `material` when not NULL (a
+ * catalogue name; NULL keeps each pipe's roughness). Fittings in the section with a
+ * stated bore take the new bore; a contraction or expansion next to a resized pipe is
+ * rebuilt from the bores that now meet there and removed when they are equal (the new
+ * line then has fewer elements); a section border where the new bore meets another with
+ * no transition element is counted as an abrupt change with its warning. Equipment with
+ * a fixed bore in the section refuses, the message naming its index and label. Free the
+ * line with `hg_line_free`; `line` is unchanged.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE` for `diameter` ≤ 0 or a
+ * section past the end or empty; `HG_ERR_INVALID` for a section without a round pipe or
+ * with fixed-bore equipment; `HG_ERR_UNKNOWN_NAME` for `material`;
+ * `HG_ERR_NULL_POINTER`. Thread-safe (`line` is only read).
+ *
+ * # Safety
+ * `line` must be NULL or a live handle; `material` NULL or NUL-terminated; `out` NULL or
+ * a writable `hg_line *`.
+ */
+int32_t hg_line_with_diameter_in(const struct hg_line *line,
+                                 double diameter,
+                                 size_t start,
+                                 size_t end,
+                                 const char *material,
+                                 struct hg_line **out);
 
 /**
  * Splits a total flow `total` (m³/s) between `n` lines in parallel so that all need the

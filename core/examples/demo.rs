@@ -11,7 +11,7 @@ use hydrograde::Result;
 use hydrograde::band::Band;
 use hydrograde::fitting::{Edge, Fitting};
 use hydrograde::fluid::Fluid;
-use hydrograde::line::{Element, Equipment, Limit, Line, LineResult, PumpCurve};
+use hydrograde::line::{Element, Equipment, Limit, Line, LineResult, PumpCurve, Resize};
 use hydrograde::pipe::Pipe;
 use hydrograde::section::Section;
 use hydrograde::sizes::PipeTable;
@@ -183,14 +183,16 @@ fn orchard() -> Result<()> {
         -back.flow_band.low * 1e3
     );
 
-    let s = line.size(
+    // Sized in PVC: the new pipes take PVC's roughness, the reducer goes.
+    let s = line.size_in(
         &water,
         6.0e-3,
         Limit::Velocity(2.0),
         Some((PipeTable::Pvc, "40")),
+        &Resize::default().in_material("pvc"),
     )?;
     println!(
-        "  one size for the whole main, velocity ≤ 2 m/s at 6 L/s: inside diameter ≥ {:.1} mm",
+        "  one size for the whole main in PVC, velocity ≤ 2 m/s at 6 L/s: inside diameter ≥ {:.1} mm",
         s.min_inside_diameter * 1e3
     );
     if let Some(c) = &s.standard {
@@ -235,11 +237,13 @@ fn numbers() -> Result<()> {
     let pump = PumpCurve::new(&pump_q, &[78.0, 77.0, 74.0, 68.5, 60.0, 47.0])?;
     let op = line.operating_point(&water, &pump)?;
     let back = line.flow_for_head(&water, 0.0)?;
-    let s = line.size(
+    // Sized in PVC: the new pipes take PVC's roughness, the reducer goes.
+    let s = line.size_in(
         &water,
         6.0e-3,
         Limit::Velocity(2.0),
         Some((PipeTable::Pvc, "40")),
+        &Resize::default().in_material("pvc"),
     )?;
     let air = Fluid::air(303.15, 101_325.0)?;
     let d = duct_line()?.evaluate(&air, 0.9)?;

@@ -8,7 +8,7 @@ use crate::line_result::{PyFlowSolution, PyLineResult, PyOperatingPoint, PySizin
 use crate::pipe::{element, element_object};
 use crate::state;
 use hydrograde::error::Error;
-use hydrograde::line::{Limit, Line, LineBuilder, PumpCurve, split_flow as core_split};
+use hydrograde::line::{Limit, Line, LineBuilder, PumpCurve, Resize, split_flow as core_split};
 use hydrograde::section::TurbulentDiameter;
 use hydrograde::sizes::PipeTable;
 use pyo3::prelude::*;
@@ -300,8 +300,11 @@ impl PyLine {
     /// under exactly one limit: ``max_pressure_loss`` (Pa, friction + minor) or
     /// ``max_velocity`` (m/s); with ``table`` (``"steel"``, ``"stainless"``, ``"copper"``,
     /// ``"pvc"``) and ``schedule`` also picks the smallest standard size, at the nominal
-    /// values and at the unfavourable end of the band.
-    #[pyo3(signature = (fluid, flow, *, max_pressure_loss = None, max_velocity = None, table = None, schedule = None))]
+    /// values and at the unfavourable end of the band. ``section=(start, end)`` sizes only
+    /// the elements ``start`` … ``end - 1`` (the limit stays the whole line's);
+    /// ``material`` (a roughness catalogue name, e.g. ``"pvc"``) makes the sized pipes of
+    /// that material. Each trial resizes as :meth:`with_uniform_diameter` does.
+    #[pyo3(signature = (fluid, flow, *, max_pressure_loss = None, max_velocity = None, table = None, schedule = None, section = None, material = None))]
     #[allow(clippy::too_many_arguments)]
     fn size(
         &self,
@@ -312,6 +315,8 @@ impl PyLine {
         #[pyo3(from_py_with = si::opt_max_velocity)] max_velocity: Option<f64>,
         table: Option<&str>,
         schedule: Option<&str>,
+        section: Option<(usize, usize)>,
+        material: Option<String>,
     ) -> PyResult<PySizing> {
         let limit = match (max_pressure_loss, max_velocity) {
             (Some(p), None) => Limit::PressureLoss(p),
@@ -336,7 +341,15 @@ impl PyLine {
             }
         };
         let s = py
-            .detach(|| self.inner.size(&fluid.inner, flow, limit, table))
+            .detach(|| {
+                self.inner.size_in(
+                    &fluid.inner,
+                    flow,
+                    limit,
+                    table,
+                    &Resize { section, material },
+                )
+            })
             .py()?;
         Ok(PySizing { inner: s })
     }
@@ -352,13 +365,25 @@ impl PyLine {
         l.set_roughness_range(index, low, high).py()?;
         Ok(PyLine { inner: l })
     }
-    /// The same line with every round pipe of inside ``diameter`` (m).
+    /// The same line with every round pipe (of ``section=(start, end)``, the elements
+    /// ``start`` … ``end - 1``, when given) of inside ``diameter`` (m), of ``material``
+    /// when named. Fittings with a stated bore take the new bore; a contraction or
+    /// expansion next to a resized pipe is rebuilt from the bores that meet there and
+    /// removed when they are equal (the line then has fewer elements); a section border
+    /// with no transition element is counted as an abrupt change with its warning;
+    /// equipment with a fixed bore refuses, the error naming it.
+    #[pyo3(signature = (diameter, *, section = None, material = None))]
     fn with_uniform_diameter(
         &self,
         #[pyo3(from_py_with = si::diameter)] diameter: f64,
+        section: Option<(usize, usize)>,
+        material: Option<String>,
     ) -> PyResult<Self> {
         Ok(PyLine {
-            inner: self.inner.with_uniform_diameter(diameter).py()?,
+            inner: self
+                .inner
+                .with_diameter_in(diameter, &Resize { section, material })
+                .py()?,
         })
     }
     /// The elements and options as a dict.

@@ -1226,6 +1226,77 @@ static void test_rated_density(void) {
   hg_line_free(l);
 }
 
+/* Sizing resizes what it should (laminar oil, Hagen-Poiseuille, exact:
+   dp = 128 mu L Q / (pi D^4)). */
+static void test_resize(void) {
+  const double mu = 0.1, q = 1e-4, pi = 3.14159265358979323846;
+  hg_line *l = NULL, *u = NULL;
+  hg_fluid *oil = NULL, *water = NULL;
+  CHECK(hg_line_new(&l) == HG_OK && hg_fluid_liquid(900.0, mu, &oil) == HG_OK &&
+            hg_fluid_liquid(998.2, 1.002e-3, &water) == HG_OK,
+        "handles");
+  CHECK(hg_line_add_pipe(l, 0.1, 10.0, 4.5e-5) == HG_OK && hg_line_add_contraction(l, 0.1, 0.05) == HG_OK &&
+            hg_line_add_pipe(l, 0.05, 10.0, 4.5e-5) == HG_OK,
+        "line with a reducer");
+  size_t n = 0;
+  hg_line_totals t;
+  memset(&t, 0, sizeof t);
+  t.struct_size = sizeof t;
+  /* The whole line at 30 mm: the reducer goes; the loss is 20 m of 30 mm pipe. */
+  double want = 128.0 * mu * 20.0 * q / (pi * pow(0.03, 4));
+  CHECK(hg_line_with_uniform_diameter(l, 0.03, &u) == HG_OK && hg_line_count(u, &n) == HG_OK && n == 2,
+        "no phantom reducer: %zu elements", n);
+  CHECK(totals(u, oil, q, &t) == HG_OK && fabs(t.pressure_loss - want) <= 1e-12 * want, "%.17g vs %.17g",
+        t.pressure_loss, want);
+  hg_line_free(u), u = NULL;
+  /* The downstream pipe alone to 100 mm: the reducer joins equal bores and goes. */
+  CHECK(hg_line_with_diameter_in(l, 0.1, 2, 3, NULL, &u) == HG_OK && hg_line_count(u, &n) == HG_OK && n == 2,
+        "section: %zu elements", n);
+  hg_line_free(u), u = NULL;
+  /* In PVC: the same numbers as the line built of PVC pipes of 30 mm. */
+  hg_line *pvc = NULL;
+  hg_line_totals w;
+  memset(&w, 0, sizeof w);
+  w.struct_size = sizeof w;
+  CHECK(hg_line_new(&pvc) == HG_OK && hg_line_add_pipe_material(pvc, 0.03, 10.0, "pvc") == HG_OK &&
+            hg_line_add_pipe_material(pvc, 0.03, 10.0, "pvc") == HG_OK,
+        "pvc line");
+  CHECK(hg_line_with_diameter_in(l, 0.03, 0, 3, "pvc", &u) == HG_OK && totals(u, water, 2e-3, &t) == HG_OK &&
+            totals(pvc, water, 2e-3, &w) == HG_OK && t.pressure_loss == w.pressure_loss,
+        "pvc roughness: %.17g vs %.17g", t.pressure_loss, w.pressure_loss);
+  hg_line_free(u), u = NULL;
+  hg_line_free(pvc);
+  /* Bad sections and materials name what is wrong. */
+  CHECK(hg_line_with_diameter_in(l, 0.03, 2, 2, NULL, &u) == HG_ERR_OUT_OF_RANGE && u == NULL &&
+            strstr(last_msg(), "start") != NULL,
+        "empty section: %s", last_msg());
+  CHECK(hg_line_with_diameter_in(l, 0.03, 0, 4, NULL, &u) == HG_ERR_OUT_OF_RANGE && strstr(last_msg(), "end") != NULL,
+        "past the end: %s", last_msg());
+  CHECK(hg_line_with_diameter_in(l, 0.03, 1, 2, NULL, &u) == HG_ERR_INVALID && strstr(last_msg(), "round pipe") != NULL,
+        "no pipe: %s", last_msg());
+  CHECK(hg_line_with_diameter_in(l, 0.03, 0, 3, "cheese", &u) == HG_ERR_UNKNOWN_NAME && u == NULL, "material");
+  CHECK(hg_line_with_diameter_in(NULL, 0.03, 0, 3, NULL, &u) == HG_ERR_NULL_POINTER, "NULL line");
+  CHECK(hg_line_with_diameter_in(l, 0.03, 0, 3, NULL, NULL) == HG_ERR_NULL_POINTER, "NULL out");
+  /* A section sized to a velocity: D = sqrt(4Q/(pi v)), exact. */
+  hg_sizing z;
+  memset(&z, 0, sizeof z);
+  z.struct_size = sizeof z;
+  want = sqrt(4.0 * q / (pi * 1.0));
+  CHECK(hg_line_size_in(l, oil, q, HG_LIMIT_VELOCITY, 1.0, NULL, NULL, 2, 3, NULL, &z) == HG_OK &&
+            fabs(z.min_inside_diameter - want) <= 1e-15 * want,
+        "%.17g vs %.17g", z.min_inside_diameter, want);
+  CHECK(hg_line_size_in(l, oil, q, HG_LIMIT_VELOCITY, 1.0, "pvc", "40", 0, 1, "pvc", &z) == HG_OK &&
+            z.standard.found == 1 && z.standard.inside_diameter >= want,
+        "pvc table section");
+  CHECK(hg_line_size_in(l, oil, q, HG_LIMIT_VELOCITY, 1.0, NULL, NULL, 0, 9, NULL, &z) == HG_ERR_OUT_OF_RANGE,
+        "size past the end");
+  CHECK(hg_line_size_in(l, oil, q, HG_LIMIT_VELOCITY, 1.0, NULL, NULL, 0, 3, NULL, NULL) == HG_ERR_NULL_POINTER,
+        "size NULL out");
+  hg_fluid_free(oil);
+  hg_fluid_free(water);
+  hg_line_free(l);
+}
+
 int main(int argc, char **argv) {
   if (argc < 2) {
     fprintf(stderr, "usage: %s REFERENCE_FILE\n", argv[0]);
@@ -1264,6 +1335,7 @@ int main(int argc, char **argv) {
   test_npsh();
   test_unit_slips();
   test_rated_density();
+  test_resize();
   pthread_t th[8];
   thread_arg args[8];
   for (int i = 0; i < 8; i++) {

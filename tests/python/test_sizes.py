@@ -78,7 +78,7 @@ def test_metric_and_plastic_tables():
             same = [q["inside_diameter"] for q in hg.pipe_sizes(t["name"]) if q["schedule"] == s]
             assert p["inside_diameter"] == min(d for d in same if d >= 0.04)
     water = hg.Fluid.water(288.15)
-    line = hg.Line([hg.Pipe.of_material(0.1, 100.0, "hdpe"), hg.Fitting.exit()])
+    line = hg.Line([hg.Pipe.of_material(0.1, 100.0, "hdpe"), hg.Fitting.into_tank()])
     s = line.size(water, 0.01, max_velocity=2.0, table="pe_iso4427", schedule="SDR 17")
     # Continuity: d_min = sqrt(4Q/(πV)) = 79.8 mm; SDR 17 dn 90 has 90 − 2·5.75 = 78.5 mm,
     # dn 110 has 110 − 2·7.0 = 96.0 mm (mean walls; e_min 5.4 and 6.6 mm, ISO 4427-2).

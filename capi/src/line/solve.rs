@@ -172,11 +172,13 @@ pub unsafe extern "C" fn hg_pump_curve_head(
 }
 
 /// Makes a new line, stored in `*out`, equal to `line` with every round pipe set to
-/// inside `diameter` (m, > 0); fittings that follow their pipe's bore follow it too.
-/// Free it with `hg_line_free`; `line` is unchanged.
+/// inside `diameter` (m, > 0), by the rule of `hg_line_with_diameter_in` over the whole
+/// line: fittings take the new bore, contractions and expansions left between equal
+/// bores are removed. Free it with `hg_line_free`; `line` is unchanged.
 ///
 /// Returns `HG_OK`; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_INVALID` for a
-/// line that cannot be built; `HG_ERR_NULL_POINTER`. Thread-safe (`line` is only read).
+/// line without a round pipe, with equipment of a fixed bore (the message names it) or
+/// that cannot be built; `HG_ERR_NULL_POINTER`. Thread-safe (`line` is only read).
 ///
 /// # Safety
 /// `line` must be NULL or a live handle; `out` NULL or a writable `hg_line *`.

@@ -19,6 +19,7 @@ mod builder;
 mod eval;
 mod path;
 mod pump;
+mod resize;
 pub(crate) use path::{Resolved, Role};
 mod parallel;
 pub mod plausible;
@@ -35,6 +36,7 @@ pub use parallel::{Split, split_flow};
 pub use pump::{
     PUMP_CURVE_MAX_FLOW, PUMP_CURVE_MAX_HEAD, PUMP_CURVE_MAX_POINTS, PumpCurve, PumpFit,
 };
+pub use resize::Resize;
 pub use result::{ElementKind, ElementResult, LineResult, NpshCheck};
 pub use shares::{Share, Shares};
 pub use sizing::{Limit, SizeChoice, Sizing};
@@ -464,14 +466,6 @@ impl Line {
         })
     }
 
-    /// The same line with other elements (one per element of this line, in order).
-    fn with_elements(&self, elements: Vec<Element>) -> Result<Line> {
-        Line::from_spec(LineSpec {
-            elements,
-            ..self.spec()
-        })
-    }
-
     /// The elements in route order.
     pub fn elements(&self) -> &[Element] {
         &self.elements
@@ -578,19 +572,14 @@ impl Line {
         })
     }
 
-    /// The same line with every round pipe set to inside diameter `diameter` (m); fittings
-    /// that follow their pipe's bore follow it too.
+    /// The same line with every round pipe set to inside diameter `diameter` (m): fittings
+    /// with a stated bore take the new one, transitions left between equal bores are
+    /// removed, equipment with a fixed bore refuses (see [`Line::with_diameter_in`] and the
+    /// rule in [`Resize`]'s module).
+    ///
+    /// # Errors
+    /// As [`Line::with_diameter_in`].
     pub fn with_uniform_diameter(&self, diameter: f64) -> Result<Line> {
-        let elements = self
-            .elements
-            .iter()
-            .map(|e| match e {
-                Element::Pipe(p) if p.section().is_circular() => {
-                    Ok(Element::Pipe(p.with_diameter(diameter)?))
-                }
-                other => Ok(other.clone()),
-            })
-            .collect::<Result<Vec<_>>>()?;
-        self.with_elements(elements)
+        self.with_diameter_in(diameter, &Resize::default())
     }
 }

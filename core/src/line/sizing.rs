@@ -1,13 +1,15 @@
 //! Sizing: the smallest bore that keeps a line within a limit at a given flow.
 //!
-//! Every round pipe of the line takes the same trial inside diameter (fittings that
-//! follow their pipe's bore follow it); the pressure loss falls strictly as the bore
+//! Every round pipe of the line, or of a chosen section, takes the same trial inside
+//! diameter, with fittings and transitions following by the rule of [`Resize`] (a
+//! reducer left between equal bores is removed, fittings with a stated bore take the
+//! new one, equipment with a fixed bore refuses); the pressure loss falls strictly as the bore
 //! grows, so the smallest admissible bore is a bracketed root. The standard-size answer
 //! walks up the chosen pipe table from there, and also names the size that still meets
 //! the limit at the unfavourable end of the uncertainty band.
 
-use super::Line;
 use super::solve::safeguarded_newton;
+use super::{Line, Resize};
 use crate::band::Band;
 use crate::error::{Error, Result, check};
 use crate::fluid::Fluid;
@@ -60,13 +62,31 @@ impl Line {
     ///
     /// # Errors
     /// Zero or non-finite flow; a non-positive limit; a line without round pipes; a limit
-    /// no bore up to 20 m meets; no standard size large enough.
+    /// no bore up to 20 m meets; no standard size large enough; equipment with a fixed
+    /// bore (see [`Line::with_diameter_in`]).
     pub fn size(
         &self,
         fluid: &Fluid,
         flow: f64,
         limit: Limit,
         table: Option<(PipeTable, &str)>,
+    ) -> Result<Sizing> {
+        self.size_in(fluid, flow, limit, table, &Resize::default())
+    }
+
+    /// Sizes the round pipes of the section and material `scope` names (see [`Resize`]):
+    /// as [`Line::size`], every trial resizes only that section (its pipes made of the
+    /// named material, with its roughness), and the loss limit applies to the whole line.
+    ///
+    /// # Errors
+    /// As [`Line::size`]; the errors of [`Line::with_diameter_in`] for the scope.
+    pub fn size_in(
+        &self,
+        fluid: &Fluid,
+        flow: f64,
+        limit: Limit,
+        table: Option<(PipeTable, &str)>,
+        scope: &Resize,
     ) -> Result<Sizing> {
         check::finite("flow", flow)?;
         if flow == 0.0 {
@@ -76,13 +96,7 @@ impl Line {
                 "must not be zero for sizing",
             ));
         }
-        if !self
-            .elements
-            .iter()
-            .any(|e| matches!(e, super::Element::Pipe(p) if p.section().is_circular()))
-        {
-            return Err(Error::invalid("line", "has no round pipe to size"));
-        }
+        self.resize_range(scope)?;
         let q = flow.abs();
         let min_d = match limit {
             Limit::Velocity(v) => {
@@ -93,7 +107,7 @@ impl Line {
                 check::positive("pressure_loss", dp)?;
                 let excess = |ln_d: f64| -> Result<(f64, f64)> {
                     let d = math::exp(ln_d);
-                    let r = self.with_uniform_diameter(d)?.evaluate(fluid, q)?;
+                    let r = self.with_diameter_in(d, scope)?.evaluate(fluid, q)?;
                     // Decreasing in d: negate so the solver sees an increasing function.
                     Ok((dp - r.pressure_loss, f64::NAN))
                 };
@@ -113,16 +127,11 @@ impl Line {
         let (standard, standard_at_band) = match table {
             None => (None, None),
             Some((t, schedule)) => {
-                let nominal = self.walk_table(fluid, q, limit, t, schedule, min_d, false)?;
-                let banded = self.walk_table(
-                    fluid,
-                    q,
-                    limit,
-                    t,
-                    schedule,
-                    nominal.size.inside_diameter,
-                    true,
-                )?;
+                let walk = |from, banded| {
+                    self.walk_table(fluid, q, limit, (t, schedule), scope, from, banded)
+                };
+                let nominal = walk(min_d, false)?;
+                let banded = walk(nominal.size.inside_diameter, true)?;
                 (Some(nominal), Some(banded))
             }
         };
@@ -141,8 +150,8 @@ impl Line {
         fluid: &Fluid,
         q: f64,
         limit: Limit,
-        table: PipeTable,
-        schedule: &str,
+        (table, schedule): (PipeTable, &str),
+        scope: &Resize,
         from: f64,
         banded: bool,
     ) -> Result<SizeChoice> {
@@ -150,7 +159,7 @@ impl Line {
         loop {
             let size = sizes::smallest_at_least(table, schedule, want)?;
             let d = size.inside_diameter;
-            let r = self.with_uniform_diameter(d)?.evaluate(fluid, q)?;
+            let r = self.with_diameter_in(d, scope)?.evaluate(fluid, q)?;
             let velocity = q / (0.25 * std::f64::consts::PI * d * d);
             let tol = self.options.uncertainty.diameter;
             let ok = match limit {
