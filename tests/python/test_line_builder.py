@@ -53,10 +53,10 @@ def test_labels_on_every_element_reach_the_rows(water):
         hg.Rise(3.0, label="up to the roof"),
         hg.Equipment.pressure_drop("strainer", 2000.0, 0.003, label="Y-strainer"),
         hg.Pipe.of_material(D, 20.0, "commercial_steel"),
-        hg.Fitting.exit(),
+        hg.Fitting.into_tank(),
     ])
     assert line.labels == [
-        "suction", "isolation", "up to the roof", "Y-strainer", "pipe 4", "exit 5"
+        "suction", "isolation", "up to the roof", "Y-strainer", "pipe 4", "into_tank 5"
     ]
     rows = [e.label for e in line.evaluate(water, 0.003).elements]
     assert rows == line.labels
