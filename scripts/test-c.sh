@@ -54,7 +54,8 @@ command -v valgrind >/dev/null || apt_missing+=(valgrind)
 command -v pkg-config >/dev/null || apt_missing+=(pkg-config)
 if [ "${#apt_missing[@]}" -gt 0 ]; then
   echo "installing ${apt_missing[*]} with apt"
-  (apt-get update -qq && DEBIAN_FRONTEND=noninteractive apt-get install -y -qq "${apt_missing[@]}") \
+  (flock /tmp/hydrograde-apt.lock apt-get update -qq &&
+    flock /tmp/hydrograde-apt.lock env DEBIAN_FRONTEND=noninteractive apt-get install -y -qq "${apt_missing[@]}") \
     >> "$log" 2>&1 || die "apt-get install ${apt_missing[*]} failed (see $log)"
 fi
 if ! command -v cbindgen >/dev/null; then
