@@ -219,8 +219,8 @@ impl Geometry {
                 return None;
             }
             let o = self.friction_options(opts);
-            let (f, df_dre) = friction::factor_slope(k.re_t, self.rel_roughness, &o).ok()?;
-            self.loss(f, df_dre, &k)
+            let fr = friction::factor_remembered(k.re_t, self.rel_roughness, &o).ok()?;
+            self.loss(fr.f, fr.df_dre, &k)
         };
         (loss.is_finite() && slope.is_finite()).then_some((loss, slope))
     }
@@ -454,7 +454,7 @@ impl Pipe {
         // One combined check of the friction inputs; the full checks (and their message)
         // run only when it fails.
         let fr: Friction = if friction::inputs_ok(re_t, rr) && friction::options_ok(&o) {
-            friction::factor_checked(re_t, rr, &o)?
+            friction::factor_remembered(re_t, rr, &o)?
         } else {
             friction::darcy_factor(re_t, rr, &o)?
         };

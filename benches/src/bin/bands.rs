@@ -12,37 +12,10 @@
 //! each target is met.
 
 use hydrograde::band::UncertaintyOptions;
-use hydrograde::fitting::Fitting;
 use hydrograde::fluid::Fluid;
-use hydrograde::line::{Element, Equipment, Line, LineOptions, PumpCurve, split_flow};
-use hydrograde::pipe::Pipe;
-use hydrograde::section::Section;
+use hydrograde::line::{LineOptions, PumpCurve, split_flow};
+use hydrograde_benches::long_line;
 use std::time::Instant;
-
-/// A line of about `n` elements.
-fn main_line(n: usize, bore: f64) -> Line {
-    let steel = Pipe::of_material(Section::circle(bore).unwrap(), 2.0, "commercial_steel").unwrap();
-    let iron = Pipe::of_material(Section::circle(bore).unwrap(), 3.0, "cast_iron").unwrap();
-    let elbow = Fitting::named("elbow_90_standard").unwrap();
-    let valve = Fitting::named("gate_valve").unwrap();
-    let own = Fitting::k(0.4).unwrap();
-    let strainer = Equipment::pressure_drop("strainer", 2e3, 0.02).unwrap();
-    let mut els = Vec::with_capacity(n);
-    let mut g = 0;
-    while els.len() < n {
-        els.push(Element::Pipe(steel.clone()));
-        els.push(Element::Fitting(elbow.clone()));
-        els.push(Element::Fitting(own.clone()));
-        els.push(Element::Pipe(iron.clone()));
-        els.push(Element::Fitting(valve.clone()));
-        if g % 10 == 0 {
-            els.push(Element::Equipment(strainer.clone()));
-        }
-        g += 1;
-    }
-    els.truncate(n);
-    Line::new(els).unwrap()
-}
 
 /// Best of `reps` runs of `f`, seconds.
 fn best(reps: usize, mut f: impl FnMut()) -> f64 {
@@ -68,8 +41,8 @@ fn main() {
     let mut eval_100k = f64::NAN;
     let mut split_100k = f64::NAN;
     for n in [1_000usize, 10_000, 100_000] {
-        let line = main_line(n, 0.25);
-        let branches = [line.clone(), main_line(n, 0.2)];
+        let line = long_line(n, 0.25).unwrap();
+        let branches = [line.clone(), long_line(n, 0.2).unwrap()];
         let h = line.evaluate(&water, q).unwrap().required_head;
         let pump = PumpCurve::new(&[0.0, 0.02, 0.04], &[2.0 * h, 1.2 * h, 0.1 * h]).unwrap();
         let flows: Vec<f64> = (1..=10).map(|i| 0.004 * i as f64).collect();

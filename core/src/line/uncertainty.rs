@@ -18,6 +18,7 @@ use super::{Element, Line, LineOptions, Resolved, Role};
 use crate::band::{Band, Source, Term, log_uniform};
 use crate::error::{Error, Result, check};
 use crate::fluid::Fluid;
+use crate::friction;
 use crate::math;
 use crate::pipe::Pipe;
 use crate::units::STANDARD_GRAVITY;
@@ -277,16 +278,18 @@ impl Sources {
         if s.sens.roughness == 0.0 || s.roughness_u == 0.0 || f0 == 0.0 {
             return tangent;
         }
-        let scale = geometry.dt / geometry.dh;
-        let o = crate::friction::Options {
-            laminar_constant: geometry.c * scale,
-            ..line.options.friction
-        };
+        let scale = geometry.scale;
+        let o = geometry.friction_options(&line.options.friction);
         let re_t = re * scale;
         let half = P95_RECT * 3f64.sqrt() * s.roughness_u;
         let f_at = |dl: f64| {
-            crate::friction::darcy_factor(re_t, pipe.roughness() * math::exp(dl) / geometry.dt, &o)
-                .map(|r| r.f)
+            let rr = pipe.roughness() * math::exp(dl) / geometry.dt;
+            // Pipes of one material and bore share these two solves (the memo).
+            if friction::inputs_ok(re_t, rr) && friction::options_ok(&o) {
+                friction::factor_remembered(re_t, rr, &o).map(|r| r.f)
+            } else {
+                friction::darcy_factor(re_t, rr, &o).map(|r| r.f)
+            }
         };
         match (f_at(shift - half), f_at(shift + half)) {
             (Ok(lo), Ok(hi)) => {
