@@ -110,8 +110,13 @@ impl Sources {
             Source::Viscosity,
         ];
         let (mut rough, mut own, mut shift) = (vec![NONE; n], vec![NONE; n], vec![0.0; n]);
-        let mut materials: HashMap<&str, u32> = HashMap::new();
-        let mut entries: HashMap<&str, u32> = HashMap::new();
+        // A route has a few materials and catalogue entries (both lists are bounded by the
+        // catalogues): a search of a short list is cheaper than hashing every element.
+        let mut materials: Vec<(&str, u32)> = Vec::new();
+        let mut entries: Vec<(&str, u32)> = Vec::new();
+        let find = |list: &[(&str, u32)], name: &str| {
+            list.iter().find(|(n, _)| *n == name).map(|&(_, id)| id)
+        };
         let push = |list: &mut Vec<Source>, s: Source| {
             list.push(s);
             (list.len() - 1) as u32
@@ -138,14 +143,14 @@ impl Sources {
                         .material()
                         .filter(|m| !own_range && !uo.independent_materials.iter().any(|x| x == m));
                     rough[i] = match shared {
-                        Some(m) => match materials.get(m) {
-                            Some(&id) => id,
+                        Some(m) => match find(&materials, m) {
+                            Some(id) => id,
                             None => {
                                 let id = push(
                                     &mut list,
                                     Source::Material(static_name(m, &crate::roughness::names())),
                                 );
-                                materials.insert(m, id);
+                                materials.push((m, id));
                                 id
                             }
                         },
@@ -176,8 +181,8 @@ impl Sources {
                     Some(Element::Fitting(f)),
                 ) if uo.fittings => {
                     own[i] = match f.catalogue_name() {
-                        Some(name) => match entries.get(name) {
-                            Some(&id) => id,
+                        Some(name) => match find(&entries, name) {
+                            Some(id) => id,
                             None => {
                                 let id = push(
                                     &mut list,
@@ -186,7 +191,7 @@ impl Sources {
                                         &crate::fitting::Fitting::catalogue(),
                                     )),
                                 );
-                                entries.insert(name, id);
+                                entries.push((name, id));
                                 id
                             }
                         },
