@@ -75,7 +75,7 @@ profile() {
 
 bands() {
   say "band timings against line length (one thread)"
-  cargo run -q --release -p hydrograde-benches --bin bands
+  cargo run -q --release -p hydrograde-benches --bin bands | tee "$out/bands.md"
 }
 
 readme() {
@@ -95,6 +95,10 @@ for name, title in (("ratios", "Rust, one process"), ("compare", "Python, one pr
         start = min((i for i in (text.find("hydrograde speed"), text.find("Python comparison"),
                                  text.find("| workload")) if i >= 0), default=0)
         parts.append(f"**{title}** (`scripts/bench.sh {name}`)\n\n" + text[start:].strip())
+bands = out / "bands.md"
+if bands.exists():
+    parts.append("**band timings against line length** (`scripts/bench.sh bands`)\n\n```text\n"
+                 + bands.read_text().strip() + "\n```")
 readme = Path("README.md")
 s = readme.read_text()
 begin, end = "<!-- bench-table:begin -->", "<!-- bench-table:end -->"

@@ -5,8 +5,9 @@
 use hydrograde::Result;
 use hydrograde::fitting::{Edge, Fitting};
 use hydrograde::fluid::Fluid;
-use hydrograde::line::{Element, Line};
+use hydrograde::line::{Element, Equipment, Line};
 use hydrograde::pipe::Pipe;
+use hydrograde::section::Section;
 
 /// Smallest Reynolds number of the turbulent benchmark range (common-practice turbulent
 /// limit).
@@ -82,6 +83,34 @@ pub fn line20() -> Result<Line> {
         pipe(big, 8.0)?,
         Element::Fitting(Fitting::into_tank()),
     ])
+}
+
+/// An invented long distribution main of `n` elements in bore `bore` (m), the workload of
+/// the band timings: repeating groups of a commercial-steel pipe, a catalogue elbow, a
+/// user fitting with its own K, a cast-iron pipe, a gate valve and, every tenth group, a
+/// rated strainer.
+pub fn long_line(n: usize, bore: f64) -> Result<Line> {
+    let steel = Pipe::of_material(Section::circle(bore)?, 2.0, "commercial_steel")?;
+    let iron = Pipe::of_material(Section::circle(bore)?, 3.0, "cast_iron")?;
+    let elbow = Fitting::named("elbow_90_standard")?;
+    let valve = Fitting::named("gate_valve")?;
+    let own = Fitting::k(0.4)?;
+    let strainer = Equipment::pressure_drop("strainer", 2e3, 0.02)?; // Pa at m³/s
+    let mut els = Vec::with_capacity(n + 5);
+    let mut g = 0;
+    while els.len() < n {
+        els.push(Element::Pipe(steel.clone()));
+        els.push(Element::Fitting(elbow.clone()));
+        els.push(Element::Fitting(own.clone()));
+        els.push(Element::Pipe(iron.clone()));
+        els.push(Element::Fitting(valve.clone()));
+        if g % 10 == 0 {
+            els.push(Element::Equipment(strainer.clone()));
+        }
+        g += 1;
+    }
+    els.truncate(n);
+    Line::new(els)
 }
 
 /// Water at 20 °C and atmospheric pressure, the fluid of the line benchmarks.

@@ -233,6 +233,9 @@ pub struct Band {
     pub non_linear: bool,
 }
 
+/// Contributions up to which a band sorts them by insertion.
+const SMALL_BAND: usize = 12;
+
 /// The relative half-width (of the nominal value) above which a band is flagged
 /// non-linear. Losses are products of uncertain factors (f·L/D·V², K·V², D⁻⁵…), so the
 /// result is closer to log-normal than normal once the band is wide: for a log-normal
@@ -325,11 +328,25 @@ impl Band {
         if var == 0.0 {
             return Band::exact(nominal);
         }
-        kept.sort_by(|a, b| {
+        let order = |a: &Contribution, b: &Contribution| {
             b.share
                 .total_cmp(&a.share)
                 .then_with(|| a.source.cmp(&b.source))
-        });
+        };
+        if kept.len() <= SMALL_BAND {
+            // An element's band has a handful of sources: insertion sort, far cheaper than
+            // the general sort there. No two contributions share a source, so the order is
+            // total and both sorts give the same one.
+            for i in 1..kept.len() {
+                let mut j = i;
+                while j > 0 && order(&kept[j], &kept[j - 1]).is_lt() {
+                    kept.swap(j, j - 1);
+                    j -= 1;
+                }
+            }
+        } else {
+            kept.sort_by(order);
+        }
         for c in &mut kept {
             c.share /= var;
         }

@@ -106,8 +106,9 @@ fn check_range(roughness: f64, lo: f64, hi: f64) -> Result<()> {
 /// that its head loss stays a finite number).
 pub const MAX_LENGTH: f64 = 1e7;
 
-/// A section's geometry, worked out once: area (m²), hydraulic and turbulent diameters
-/// (m), laminar constant and the section's warnings.
+/// What a pipe's head loss needs that depends on neither the fluid nor the flow, worked
+/// out once (when a line is built): the section's area (m²), hydraulic and turbulent
+/// diameters (m), laminar constant and warnings, and the pipe's own constants below.
 #[derive(Debug, Clone, Copy, PartialEq, Serialize, Deserialize)]
 pub(crate) struct Geometry {
     pub area: f64,
@@ -115,6 +116,114 @@ pub(crate) struct Geometry {
     pub dt: f64,
     pub c: f64,
     pub warnings: Warnings,
+    /// D_t/D_h: Reynolds numbers and the laminar constant on the turbulent diameter.
+    pub scale: f64,
+    /// L/(D_h·2g), s²/m: the head loss is f times this times V|V|.
+    pub length_head: f64,
+    /// ε/D_t, the relative roughness the friction factor takes.
+    pub rel_roughness: f64,
+}
+
+/// The flow-dependent numbers of a pipe at one flow, before its friction factor.
+#[derive(Debug, Clone, Copy)]
+pub(crate) struct Kinematics {
+    /// Q/A, m/s (signed).
+    pub velocity: f64,
+    /// |V|, m/s.
+    pub speed: f64,
+    /// Reynolds number on the hydraulic diameter.
+    pub re_h: f64,
+    /// Reynolds number on the turbulent diameter (what the friction factor takes).
+    pub re_t: f64,
+}
+
+impl Geometry {
+    /// The velocity and Reynolds numbers at signed flow `flow` (m³/s) for kinematic
+    /// viscosity `nu` (m²/s).
+    #[inline(always)]
+    pub(crate) fn kinematics(&self, nu: f64, flow: f64) -> Kinematics {
+        let velocity = flow / self.area;
+        let speed = velocity.abs();
+        let re_h = speed * self.dh / nu;
+        Kinematics {
+            velocity,
+            speed,
+            re_h,
+            re_t: re_h * self.scale,
+        }
+    }
+
+    /// True where the loss is the exact laminar law without a friction factor: laminar
+    /// flow (except for Churchill, which covers every regime itself), or a Reynolds
+    /// number below the smallest one a friction factor is defined for.
+    #[inline(always)]
+    pub(crate) fn direct_laminar(re_t: f64, opts: &Options) -> bool {
+        let defined = re_t >= friction::MIN_REYNOLDS;
+        (re_t < opts.laminar_limit && opts.correlation != Correlation::Churchill) || !defined
+    }
+
+    /// Head loss (m) and slope (s/m²) of the exact laminar law, f = C/Re_h, written so
+    /// that zero flow is regular: linear in V.
+    #[inline(always)]
+    pub(crate) fn laminar_loss(&self, nu: f64, k: &Kinematics) -> (f64, f64) {
+        let per_speed = self.c * nu / self.dh * self.length_head; // h / V
+        (per_speed * k.velocity, per_speed / self.area)
+    }
+
+    /// The friction options on this section: the section's laminar constant on the
+    /// turbulent diameter.
+    #[inline(always)]
+    pub(crate) fn friction_options(&self, opts: &Options) -> Options {
+        Options {
+            laminar_constant: self.c * self.scale,
+            ..*opts
+        }
+    }
+
+    /// Head loss (m) at friction factor `f`.
+    #[inline(always)]
+    pub(crate) fn head(&self, f: f64, k: &Kinematics) -> f64 {
+        f * self.length_head * k.velocity * k.speed
+    }
+
+    /// Head loss (m) and slope (s/m²) at friction factor `f` with ∂f/∂Re_t `df_dre`:
+    /// dh/dQ = L |V| (Re_t ∂f/∂Re_t + 2 f) / (2 g D_h A) (module docs).
+    #[inline(always)]
+    pub(crate) fn loss(&self, f: f64, df_dre: f64, k: &Kinematics) -> (f64, f64) {
+        (
+            self.head(f, k),
+            self.length_head * k.speed * (k.re_t * df_dre + 2.0 * f) / self.area,
+        )
+    }
+
+    /// Head loss (m) and slope (s/m²) at signed flow `flow` (m³/s) alone, the solvers'
+    /// hot path: the numbers of [`Pipe::flow_state_in`], formed by the same functions,
+    /// without warnings or sensitivities. `None` where `flow_state_in` would fail or its
+    /// checks must speak (non-finite flow, Reynolds number or relative roughness out of
+    /// range, a non-finite result); `opts` were checked when the line was built.
+    #[inline(always)]
+    pub(crate) fn lean_loss(&self, nu: f64, flow: f64, opts: &Options) -> Option<(f64, f64)> {
+        if !flow.is_finite() {
+            return None;
+        }
+        let k = self.kinematics(nu, flow);
+        if k.re_t > friction::MAX_REYNOLDS {
+            return None;
+        }
+        let (loss, slope) = if Geometry::direct_laminar(k.re_t, opts) {
+            self.laminar_loss(nu, &k)
+        } else {
+            // Re is inside its range here (checked above); the laminar constant is the
+            // section's (or 64, Jones): only ε/D on the turbulent diameter is left.
+            if !(0.0..=friction::MAX_REL_ROUGHNESS).contains(&self.rel_roughness) {
+                return None;
+            }
+            let o = self.friction_options(opts);
+            let fr = friction::factor_remembered(k.re_t, self.rel_roughness, &o).ok()?;
+            self.loss(fr.f, fr.df_dre, &k)
+        };
+        (loss.is_finite() && slope.is_finite()).then_some((loss, slope))
+    }
 }
 
 /// The state of flow in a pipe at one flow rate.
@@ -271,15 +380,21 @@ impl Pipe {
         self.flow_state_in(&self.geometry(diameter_mode), fluid, flow, opts)
     }
 
-    /// The section's geometry for a turbulent-diameter mode, worked out once (the
-    /// rectangle's laminar constant is a series) so that repeated evaluations skip it.
+    /// The section's geometry and the pipe's constants for a turbulent-diameter mode,
+    /// worked out once (the rectangle's laminar constant is a series) so that repeated
+    /// evaluations skip them.
     pub(crate) fn geometry(&self, diameter_mode: TurbulentDiameter) -> Geometry {
+        let dh = self.section.hydraulic_diameter();
+        let dt = self.section.turbulent_diameter(diameter_mode);
         Geometry {
             area: self.section.area(),
-            dh: self.section.hydraulic_diameter(),
-            dt: self.section.turbulent_diameter(diameter_mode),
+            dh,
+            dt,
             c: self.section.laminar_constant(),
             warnings: self.section.warnings(),
+            scale: dt / dh,
+            length_head: self.length / (dh * (2.0 * STANDARD_GRAVITY)),
+            rel_roughness: self.roughness / dt,
         }
     }
 
@@ -292,16 +407,9 @@ impl Pipe {
         opts: &Options,
     ) -> Result<PipeFlow> {
         check::finite("flow", flow)?;
-        let (area, dh, dt, c) = (g.area, g.dh, g.dt, g.c);
-        let scale = dt / dh;
         let nu = fluid.viscosity / fluid.density;
-        let velocity = flow / area;
-        let speed = velocity.abs();
-        let re_h = speed * dh / nu;
-        let re_t = re_h * scale;
-        // h = f L/D_h V|V|/2g; with f = C/Re_h in laminar flow this is linear in V.
-        let g2 = 2.0 * STANDARD_GRAVITY;
-        let geom = self.length / (dh * g2);
+        let k = g.kinematics(nu, flow);
+        let re_t = k.re_t;
         let mut warnings = g.warnings;
         if re_t > friction::MAX_REYNOLDS {
             return Err(crate::Error::out_of_range(
@@ -313,63 +421,56 @@ impl Pipe {
                 ),
             ));
         }
-        let laminar_direct =
-            re_t < opts.laminar_limit && opts.correlation != Correlation::Churchill;
+        // ∂h/∂f at fixed flow, for the bands.
+        let dhead_dfactor = g.head(1.0, &k);
         // Below the smallest Reynolds number a friction factor is defined for, the flow is
         // treated as zero flow is: the exact laminar loss, no friction factor.
-        let defined = re_t >= friction::MIN_REYNOLDS;
-        if laminar_direct || !defined {
-            // Exact laminar law, written so that zero flow is regular.
-            let lam_head_per_speed = c * nu / dh * geom; // h / V
-            let (head_loss, dhead_dflow) =
-                (lam_head_per_speed * velocity, lam_head_per_speed / area);
+        if Geometry::direct_laminar(re_t, opts) {
+            let defined = re_t >= friction::MIN_REYNOLDS;
+            let (head_loss, dhead_dflow) = g.laminar_loss(nu, &k);
             if !(head_loss.is_finite() && dhead_dflow.is_finite()) {
                 return Err(not_finite_loss(flow));
             }
+            let (c, re_h) = (g.c, k.re_h);
             return Ok(PipeFlow {
-                velocity,
+                velocity: k.velocity,
                 reynolds: re_h,
                 friction_factor: if defined { c / re_h } else { f64::NAN },
                 regime: Regime::Laminar,
                 head_loss,
                 dhead_dflow,
-                dhead_dfactor: geom * velocity * speed,
+                dhead_dfactor,
                 df_drel_roughness: 0.0,
                 df_dre: if defined {
-                    -c / (re_h * re_h) / scale
+                    -c / (re_h * re_h) / g.scale
                 } else {
                     0.0
                 },
                 warnings,
             });
         }
-        let o = Options {
-            laminar_constant: c * scale,
-            ..*opts
-        };
-        let rr = self.roughness / dt;
+        let o = g.friction_options(opts);
+        let rr = g.rel_roughness;
         // One combined check of the friction inputs; the full checks (and their message)
         // run only when it fails.
         let fr: Friction = if friction::inputs_ok(re_t, rr) && friction::options_ok(&o) {
-            friction::factor_checked(re_t, rr, &o)?
+            friction::factor_remembered(re_t, rr, &o)?
         } else {
             friction::darcy_factor(re_t, rr, &o)?
         };
         warnings |= fr.warnings;
-        let head_loss = fr.f * geom * velocity * speed;
-        // dh/dQ = geom |V| (Re df/dRe + 2f) / A (derivation in the module docs).
-        let dhead_dflow = geom * speed * (re_t * fr.df_dre + 2.0 * fr.f) / area;
+        let (head_loss, dhead_dflow) = g.loss(fr.f, fr.df_dre, &k);
         if !(head_loss.is_finite() && dhead_dflow.is_finite()) {
             return Err(not_finite_loss(flow));
         }
         Ok(PipeFlow {
-            velocity,
-            reynolds: re_h,
+            velocity: k.velocity,
+            reynolds: k.re_h,
             friction_factor: fr.f,
             regime: fr.regime,
             head_loss,
             dhead_dflow,
-            dhead_dfactor: geom * velocity * speed,
+            dhead_dfactor,
             df_drel_roughness: fr.df_drel_roughness,
             df_dre: fr.df_dre,
             warnings,

@@ -6,17 +6,22 @@
 //! not; the per-point count is the difference between two runs of different sizes, which
 //! cancels start-up and point generation.
 
+use hydrograde::band::UncertaintyOptions;
+use hydrograde::fluid::Fluid;
 use hydrograde::friction::{
     Correlation, Isa, Options, darcy_factor, darcy_factor_batch, darcy_factor_batch_on,
 };
-use hydrograde_benches::{flows, line20, turbulent_points, water};
+use hydrograde::line::{LineOptions, split_flow};
+use hydrograde_benches::{flows, line20, long_line, turbulent_points, water};
 use std::hint::black_box;
 use std::process::ExitCode;
 
 fn main() -> ExitCode {
     let args: Vec<String> = std::env::args().collect();
     let (Some(what), Some(n)) = (args.get(1), args.get(2).and_then(|s| s.parse().ok())) else {
-        eprintln!("usage: profile <none|ln|batch|line|CORRELATION> <points>");
+        eprintln!(
+            "usage: profile <none|ln|batch|line|flow_for_head|bands|bands:plain|bands:split|CORRELATION> <points>"
+        );
         return ExitCode::from(2);
     };
     let (re, rr) = turbulent_points(n, 2026);
@@ -39,6 +44,53 @@ fn main() -> ExitCode {
                     .required_head(&w, black_box(q))
                     .map_or(f64::NAN, |h| h.0);
             }
+        }
+        "flow_for_head" => {
+            // One flow for a head per point through the 20-element line (band included),
+            // heads spread over 4…60 m.
+            let (Ok(line), Ok(w)) = (line20(), water()) else {
+                return ExitCode::FAILURE;
+            };
+            for (k, o) in out.iter_mut().enumerate() {
+                let head = 4.0 + 56.0 * (k % 97) as f64 / 96.0;
+                *o = line
+                    .flow_for_head(&w, black_box(head))
+                    .map_or(f64::NAN, |s| s.flow);
+            }
+        }
+        band if band.starts_with("bands") => {
+            // `bands`, `bands:plain`, `bands:split`: one evaluation of a line of `n`
+            // elements (with its bands; without any source; a two-branch split of two such
+            // lines), so the count per point is the cost per element. Only `measured` is
+            // counted (scripts/profile.sh turns callgrind on there): building the line is
+            // not the workload.
+            let Ok(w) = Fluid::water(288.15, 3e5) else {
+                return ExitCode::FAILURE;
+            };
+            let (Ok(line), Ok(other)) = (long_line(n, 0.25), long_line(n, 0.2)) else {
+                return ExitCode::FAILURE;
+            };
+            let bare = line.set_options(LineOptions {
+                uncertainty: UncertaintyOptions::none(),
+                ..line.options().clone()
+            });
+            let branches = [line.clone(), other];
+            let r = match (band, bare) {
+                ("bands", _) => {
+                    measured(|| line.evaluate(&w, black_box(0.02)).map(|r| r.required_head))
+                }
+                ("bands:plain", Ok(bare)) => {
+                    measured(|| bare.evaluate(&w, black_box(0.02)).map(|r| r.required_head))
+                }
+                ("bands:split", _) => {
+                    measured(|| split_flow(&branches, &w, black_box(0.04)).map(|s| s.head))
+                }
+                _ => {
+                    eprintln!("unknown workload {band}");
+                    return ExitCode::from(2);
+                }
+            };
+            out[0] = r.unwrap_or(f64::NAN);
         }
         "batch" => {
             if let Err(e) = darcy_factor_batch(&re, &rr, &Options::default(), &mut out) {
@@ -77,4 +129,10 @@ fn main() -> ExitCode {
     }
     println!("{}", black_box(out.iter().sum::<f64>()));
     ExitCode::SUCCESS
+}
+
+/// The part of a workload callgrind counts when asked to (`--toggle-collect`).
+#[inline(never)]
+fn measured<T>(f: impl FnOnce() -> T) -> T {
+    f()
 }

@@ -27,11 +27,13 @@
 mod colebrook;
 mod explicit;
 mod kernel;
+mod memo;
 mod strided;
 
 #[cfg(test)]
 pub(crate) use colebrook::calls as colebrook_calls;
 pub use kernel::Isa;
+pub(crate) use memo::factor_remembered;
 pub use strided::{Strided, darcy_factor_batch_strided};
 
 use crate::error::{Error, Result, check};
@@ -415,13 +417,6 @@ pub(crate) fn factor_checked(re: f64, rel_roughness: f64, opts: &Options) -> Res
     Ok(finish(s, regime, warnings))
 }
 
-/// The factor and its slope ∂f/∂Re alone, for checked inputs (as [`factor_checked`]):
-/// the solvers' hot path, which needs no warnings. Same bits as [`darcy_factor`].
-#[inline]
-pub(crate) fn factor_slope(re: f64, rel_roughness: f64, opts: &Options) -> Result<(f64, f64)> {
-    solution(re, rel_roughness, opts).map(|(s, _)| (s.f, s.df_dre))
-}
-
 /// The factor with its sensitivities and the regime, for checked inputs.
 #[inline(always)]
 fn solution(re: f64, rel_roughness: f64, opts: &Options) -> Result<(colebrook::Solution, Regime)> {
@@ -484,8 +479,20 @@ fn laminar(re: f64, c: f64) -> colebrook::Solution {
     }
 }
 
-#[inline]
+/// The turbulent correlation. The exact Colebrook solve, the default and the hot one, is
+/// inlined into each caller (it needs few registers, so a caller's loop keeps its own
+/// values in registers instead of saving them around a call); the rest are one call.
+#[inline(always)]
 fn turbulent(corr: Correlation, re: f64, rr: f64) -> colebrook::Solution {
+    if corr == Correlation::Colebrook {
+        colebrook::solve(re, rr)
+    } else {
+        other_turbulent(corr, re, rr)
+    }
+}
+
+#[inline(never)]
+fn other_turbulent(corr: Correlation, re: f64, rr: f64) -> colebrook::Solution {
     match corr {
         Correlation::Colebrook => colebrook::solve(re, rr),
         Correlation::Haaland => explicit::haaland(re, rr),

@@ -1,7 +1,7 @@
 //! Evaluation of a line's elements at one flow, with optional perturbations of the
 //! uncertain inputs (used by the Monte Carlo check; the nominal evaluation has none).
 
-use super::{Line, Resolved};
+use super::{Line, Resolved, row};
 use crate::error::{Error, Result, check};
 use crate::fluid::Fluid;
 use crate::friction::{self, Correlation, Regime};
@@ -156,7 +156,6 @@ impl Line {
         pert: Option<&Perturbation>,
         bands: bool,
     ) -> Result<State> {
-        let g = STANDARD_GRAVITY;
         let own = pert.map_or(1.0, |p| p.own[i]);
         let dk = pert.map_or(1.0, |p| p.diameter);
         let nu = fluid.viscosity / fluid.density;
@@ -188,10 +187,9 @@ impl Line {
                     }
                 };
                 let ps = pipe.flow_state_in(&geometry, fluid, flow, &self.options.friction)?;
-                let (dh, dt) = (geometry.dh, geometry.dt);
-                let scale = dt / dh;
+                let scale = geometry.scale;
                 let re_t = ps.reynolds * scale;
-                let rr_t = pipe.roughness() / dt;
+                let rr_t = geometry.rel_roughness;
                 let model_u = if bands || pert.is_some() {
                     self.model_u(pipe, ps.regime, re_t, rr_t, ps.friction_factor, scale)
                 } else {
@@ -244,25 +242,19 @@ impl Line {
                 // an expansion); the viscous part is common, so the slope is continuous.
                 let resistance = if flow < 0.0 { reverse } else { resistance };
                 let (bore, area) = (bore * dk, area * dk * dk);
-                let v = flow / area;
-                let re = v.abs() * bore / nu;
-                let hv = resistance.k_viscous * nu * v / (bore * 2.0 * g) * own;
-                let hi = resistance.k_inertial * v * v.abs() / (2.0 * g) * own;
-                let h = hv + hi;
+                let l = row::fitting_loss(resistance, bore, area, nu, flow, own);
+                let (hv, hi, re) = (l.viscous, l.inertial, l.reynolds);
                 State {
-                    head_loss: h,
-                    dhead_dflow: (resistance.k_viscous * nu / bore
-                        + 2.0 * resistance.k_inertial * v.abs())
-                        / (2.0 * g * area)
-                        * own,
-                    velocity: Some(v),
+                    head_loss: l.head(),
+                    dhead_dflow: l.slope,
+                    velocity: Some(l.velocity),
                     reynolds: Some(re),
                     k: (re > 0.0).then(|| resistance.k(re) * own),
                     sens: Sens {
                         diameter: -3.0 * hv - 4.0 * hi,
                         density: -hv,
                         viscosity: hv,
-                        own: h,
+                        own: l.head(),
                         ..Sens::default()
                     },
                     own_u: crate::band::rectangular(*spread),
@@ -276,13 +268,10 @@ impl Line {
                 spread,
                 ..
             } => {
-                // Δp = drop (ρ/ρ_rating) Q|Q|/Q_r² (fixed K): the head Δp/(ρ g) does not
-                // depend on the fluid's density.
-                let r = flow / at_flow;
-                let h = drop * r * r.abs() / (rating_density * g) * own;
+                let (h, slope) = row::rated_loss(*drop, *at_flow, *rating_density, flow, own);
                 State {
                     head_loss: h,
-                    dhead_dflow: 2.0 * drop * r.abs() / (at_flow * rating_density * g) * own,
+                    dhead_dflow: slope,
                     sens: Sens {
                         own: h,
                         ..Sens::default()
@@ -331,7 +320,7 @@ impl Line {
     /// Required head (m) and its derivative (s/m²) at one flow, for a liquid or a gas at
     /// a fixed density. No allocation: this is the hot path of solvers and curves.
     pub(crate) fn head_and_slope(&self, fluid: &Fluid, flow: f64) -> Result<(f64, f64)> {
-        // element_state's numbers without the rest (solve_hot.rs), same bits.
+        // element_state's numbers without the rest (row.rs, solve_hot.rs), same bits.
         let (h, d) = self.hot_head_and_slope(fluid, flow)?;
         if !(h.is_finite() && d.is_finite()) {
             return Err(Error::out_of_range(

@@ -24,6 +24,7 @@ pub(crate) use path::{Resolved, Role};
 mod parallel;
 pub mod plausible;
 mod result;
+mod row;
 pub mod rows;
 mod shares;
 mod sizing;

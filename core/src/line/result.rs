@@ -167,9 +167,11 @@ impl Line {
         }
         let (work, q, gas_warn) = self.working_fluid(fluid, flow, inlet_pressure)?;
         let inlet = inlet_pressure.or(if fluid.is_gas() { fluid.pressure } else { None });
-        let states = (0..self.resolved.len())
-            .map(|i| self.element_state(i, &work, q, None, true))
-            .collect::<Result<Vec<State>>>()?;
+        // Sized once: collecting through a `Result` would grow it by copies.
+        let mut states: Vec<State> = Vec::with_capacity(self.resolved.len());
+        for i in 0..self.resolved.len() {
+            states.push(self.element_state(i, &work, q, None, true)?);
+        }
         let rho_g = work.density * STANDARD_GRAVITY;
         let dq = if flow == 0.0 { 1.0 } else { q / flow };
         let head_loss: f64 = states.iter().map(|s| s.head_loss).sum();

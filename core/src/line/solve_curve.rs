@@ -9,9 +9,8 @@
 
 use crate::error::Result;
 use crate::fluid::Fluid;
-use crate::friction::{self, Options};
+use crate::friction;
 use crate::line::{Line, Resolved};
-use crate::units::STANDARD_GRAVITY;
 
 /// Flows per block: the per-pipe buffers of a block stay in the first-level cache.
 pub(super) const BLOCK: usize = 512;
@@ -29,25 +28,24 @@ pub(super) fn block(line: &Line, fluid: &Fluid, flows: &[f64], out: &mut [f64]) 
     out.iter_mut().for_each(|h| *h = 0.0);
     for (i, r) in line.resolved.iter().enumerate() {
         let Resolved::Pipe { pipe, geometry, .. } = r else {
+            // Every other row as the hot path forms it (row.rs), same bits.
             for (k, &q) in flows.iter().enumerate() {
-                let s = line.element_state(i, fluid, q, None, false)?;
-                out[k] += s.head_loss + s.static_head;
+                let (loss, rise) = match line.lean_row(r, fluid, nu, q) {
+                    Some((loss, _, rise)) => (loss, rise),
+                    None => {
+                        let s = line.element_state(i, fluid, q, None, false)?;
+                        (s.head_loss, s.static_head)
+                    }
+                };
+                out[k] += loss + rise;
             }
             continue;
         };
-        // As Pipe::flow_state_in, operation for operation.
-        let (area, dh, dt, c) = (geometry.area, geometry.dh, geometry.dt, geometry.c);
-        let scale = dt / dh;
-        let o = Options {
-            laminar_constant: c * scale,
-            ..*opts
-        };
-        let geom = pipe.length() / (dh * (2.0 * STANDARD_GRAVITY));
-        let rel = pipe.roughness() / dt;
+        // The Reynolds numbers and losses of Pipe::flow_state_in (pipe::Geometry).
+        let o = geometry.friction_options(opts);
         for (k, &q) in flows.iter().enumerate() {
-            let speed = (q / area).abs();
-            re[k] = speed * dh / nu * scale;
-            rr[k] = rel;
+            re[k] = geometry.kinematics(nu, q).re_t;
+            rr[k] = geometry.rel_roughness;
         }
         let mut scalar = |k: usize, slot: &mut f64| -> Result<()> {
             other[k] = pipe
@@ -58,14 +56,13 @@ pub(super) fn block(line: &Line, fluid: &Fluid, flows: &[f64], out: &mut [f64]) 
         };
         friction::factors_with(&re, &rr, &o, &mut f, &mut scalar)?;
         for k in 0..n {
-            let velocity = flows[k] / area;
             let loss = if f[k].is_nan() {
                 other[k]
             } else {
-                f[k] * geom * velocity * velocity.abs()
+                geometry.head(f[k], &geometry.kinematics(nu, flows[k]))
             };
-            // element_state scales by the model factor 1 and adds a zero static head.
-            out[k] += loss * 1.0 + 0.0;
+            // element_state adds a zero static head.
+            out[k] += loss + 0.0;
         }
     }
     // Far from overflow the slope is finite too (the loop's check covers both).

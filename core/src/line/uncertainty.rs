@@ -18,6 +18,7 @@ use super::{Element, Line, LineOptions, Resolved, Role};
 use crate::band::{Band, Source, Term, log_uniform};
 use crate::error::{Error, Result, check};
 use crate::fluid::Fluid;
+use crate::friction;
 use crate::math;
 use crate::pipe::Pipe;
 use crate::units::STANDARD_GRAVITY;
@@ -109,8 +110,13 @@ impl Sources {
             Source::Viscosity,
         ];
         let (mut rough, mut own, mut shift) = (vec![NONE; n], vec![NONE; n], vec![0.0; n]);
-        let mut materials: HashMap<&str, u32> = HashMap::new();
-        let mut entries: HashMap<&str, u32> = HashMap::new();
+        // A route has a few materials and catalogue entries (both lists are bounded by the
+        // catalogues): a search of a short list is cheaper than hashing every element.
+        let mut materials: Vec<(&str, u32)> = Vec::new();
+        let mut entries: Vec<(&str, u32)> = Vec::new();
+        let find = |list: &[(&str, u32)], name: &str| {
+            list.iter().find(|(n, _)| *n == name).map(|&(_, id)| id)
+        };
         let push = |list: &mut Vec<Source>, s: Source| {
             list.push(s);
             (list.len() - 1) as u32
@@ -137,14 +143,14 @@ impl Sources {
                         .material()
                         .filter(|m| !own_range && !uo.independent_materials.iter().any(|x| x == m));
                     rough[i] = match shared {
-                        Some(m) => match materials.get(m) {
-                            Some(&id) => id,
+                        Some(m) => match find(&materials, m) {
+                            Some(id) => id,
                             None => {
                                 let id = push(
                                     &mut list,
                                     Source::Material(static_name(m, &crate::roughness::names())),
                                 );
-                                materials.insert(m, id);
+                                materials.push((m, id));
                                 id
                             }
                         },
@@ -175,8 +181,8 @@ impl Sources {
                     Some(Element::Fitting(f)),
                 ) if uo.fittings => {
                     own[i] = match f.catalogue_name() {
-                        Some(name) => match entries.get(name) {
-                            Some(&id) => id,
+                        Some(name) => match find(&entries, name) {
+                            Some(id) => id,
                             None => {
                                 let id = push(
                                     &mut list,
@@ -185,7 +191,7 @@ impl Sources {
                                         &crate::fitting::Fitting::catalogue(),
                                     )),
                                 );
-                                entries.insert(name, id);
+                                entries.push((name, id));
                                 id
                             }
                         },
@@ -277,16 +283,18 @@ impl Sources {
         if s.sens.roughness == 0.0 || s.roughness_u == 0.0 || f0 == 0.0 {
             return tangent;
         }
-        let scale = geometry.dt / geometry.dh;
-        let o = crate::friction::Options {
-            laminar_constant: geometry.c * scale,
-            ..line.options.friction
-        };
+        let scale = geometry.scale;
+        let o = geometry.friction_options(&line.options.friction);
         let re_t = re * scale;
         let half = P95_RECT * 3f64.sqrt() * s.roughness_u;
         let f_at = |dl: f64| {
-            crate::friction::darcy_factor(re_t, pipe.roughness() * math::exp(dl) / geometry.dt, &o)
-                .map(|r| r.f)
+            let rr = pipe.roughness() * math::exp(dl) / geometry.dt;
+            // Pipes of one material and bore share these two solves (the memo).
+            if friction::inputs_ok(re_t, rr) && friction::options_ok(&o) {
+                friction::factor_remembered(re_t, rr, &o).map(|r| r.f)
+            } else {
+                friction::darcy_factor(re_t, rr, &o).map(|r| r.f)
+            }
         };
         match (f_at(shift - half), f_at(shift + half)) {
             (Ok(lo), Ok(hi)) => {
