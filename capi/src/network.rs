@@ -217,7 +217,11 @@ pub unsafe extern "C" fn hg_network_node_position(
         unsafe {
             put("x", x, px)?;
             put("y", y, py)?;
-            put("has_position", has_position, i32::from(node.position.is_some()))
+            put(
+                "has_position",
+                has_position,
+                i32::from(node.position.is_some()),
+            )
         }
     })
 }
