@@ -78,8 +78,12 @@ def _axes(ax: Any) -> Any:
     return ax
 
 
-def _note(ax: Any) -> None:
-    ax.annotate(SAFETY, xy=(0.0, 0.0), xycoords="figure fraction", xytext=(4, 3),
+NETWORK_SAFETY = ("estimate, no band yet; to be checked by a competent engineer (licensed or "
+                  "registered where required) against the codes that apply (fire codes for mains)")
+
+
+def _note(ax: Any, text: str = SAFETY) -> None:
+    ax.annotate(text, xy=(0.0, 0.0), xycoords="figure fraction", xytext=(4, 3),
                 textcoords="offset points", fontsize=6.5, color="#8a949c", style="italic")
 
 
@@ -290,12 +294,12 @@ def network_plot(solution: Any, ax: Any = None) -> Any:
         ax.annotate(n["name"], xy=at[n["name"]], xytext=(5, -10), textcoords="offset points",
                     fontsize=7.5, color="#1d3b53")
     ax.set_aspect("equal", adjustable="datalim")
-    ax.margins(0.1)
+    ax.margins(x=0.15, y=0.12)  # room for the node names beside the outer nodes
     engine = ax.figure.get_layout_engine()
     if engine is not None and "rect" in engine.get():
         engine.set(rect=(0.0, 0.035, 1.0, 0.965))  # room for the caution below the x label
     ax.set_xlabel("plan x")
     ax.set_ylabel("plan y")
     ax.set_title(f"Network: link labels give |flow| [{_unit('flow')}]")
-    _note(ax)
+    _note(ax, NETWORK_SAFETY)
     return ax
