@@ -138,6 +138,8 @@ run "compile C++ test (shared)" g++ -std=c++17 "${ccflags[@]}" $cflags tests/c/t
   $libs -Wl,-rpath,"$prefix/lib"
 run "compile C++ test (static)" g++ -std=c++17 "${ccflags[@]}" $cflags tests/c/test_capi.cpp -o "$out/test_cpp_static" \
   $static_libs
+run "compile C++ network test (shared)" g++ -std=c++17 "${ccflags[@]}" $cflags tests/c/test_network.cpp -o "$out/test_network_cpp" \
+  $libs -Wl,-rpath,"$prefix/lib"
 run "C test (shared)" "$out/test_c" "$out/reference.txt" "$version"
 run "C test (static)" "$out/test_c_static" "$out/reference.txt" "$version"
 run "C line test (shared)" "$out/test_line" "$out/reference.txt"
@@ -145,6 +147,7 @@ run "C line test (static)" "$out/test_line_static" "$out/reference.txt"
 run "C network test (shared)" "$out/test_network"
 run "C++ test (shared)" "$out/test_cpp"
 run "C++ test (static)" "$out/test_cpp_static"
+run "C++ network test (shared)" "$out/test_network_cpp"
 grep -h -E '^(bitwise|test_)' "$log" | sort -u | sed 's/^/    /'
 
 # One thread: the library then starts no worker pool, whose threads' storage valgrind
@@ -155,6 +158,7 @@ run "valgrind: C test, zero errors and leaks" "${vg[@]}" "$out/test_c" "$out/ref
 run "valgrind: C line test, zero errors and leaks" "${vg[@]}" "$out/test_line" "$out/reference.txt"
 run "valgrind: C network test, zero errors and leaks" "${vg[@]}" "$out/test_network"
 run "valgrind: C++ test, zero errors and leaks" "${vg[@]}" "$out/test_cpp"
+run "valgrind: C++ network test, zero errors and leaks" "${vg[@]}" "$out/test_network_cpp"
 
 # ---- CMake consumer ----
 ref_hex="$(awk '$1 == "darcy" && $2 == 0 && $3 == "40f86a0000000000" && $4 == "3f1a36e2eb1c432d" {print $5}' "$out/reference.txt")"

@@ -69,10 +69,12 @@
  *  Networks   hg_network (handle), hg_network_solution (handle),
  *             HG_NETWORK_WARNING_*; hg_network_new, hg_network_free,
  *             hg_network_add_node, hg_network_add_fixed_head, hg_network_add_link,
+ *             hg_network_place_node, hg_network_node_position,
  *             hg_network_counts, hg_network_index, hg_network_solve,
  *             hg_network_solution_free, hg_network_solution_summary,
  *             hg_network_solution_node, hg_network_solution_link,
- *             hg_network_solution_warning, hg_network_link_result
+ *             hg_network_solution_warning, hg_network_link_result,
+ *             hg_network_available_flow
  *  Bands      hg_uncertainty_options, hg_monte_carlo, HG_MONTE_CARLO_MAX_SAMPLES;
  *             hg_line_system_curve_band,
  *             hg_uncertainty_options_default, hg_line_set_uncertainty,
@@ -2890,6 +2892,72 @@ int32_t hg_network_add_link(struct hg_network *network,
                             const char *upstream,
                             const char *downstream,
                             const struct hg_line *line);
+
+/**
+ * Places node `name` at plan position (`x`, `y`) (m, or any plan unit used
+ * consistently; within ±1e8), for drawing the network; the hydraulics do not use it.
+ *
+ * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` for a node not in the network;
+ * `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`. Not thread-safe for
+ * one network.
+ *
+ * # Safety
+ * `network` NULL or a live handle used by no other thread; `name` NULL or a
+ * NUL-terminated string.
+ */
+int32_t hg_network_place_node(struct hg_network *network,
+                              const char *name,
+                              double x,
+                              double y);
+
+/**
+ * The plan position of node `index` (in the order added): `x`, `y` and `*has_position`
+ * (1 when placed by `hg_network_place_node`; 0 with `x` = `y` = 0 otherwise).
+ *
+ * Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` for an index past the last node;
+ * `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * `network` NULL or a live handle; the outputs NULL or writable.
+ */
+int32_t hg_network_node_position(const struct hg_network *network,
+                                 size_t index,
+                                 double *x,
+                                 double *y,
+                                 int32_t *has_position);
+
+/**
+ * The flow available at junction `node` at a minimum residual pressure: the largest
+ * extra outflow (m³/s, on top of the node's own demand) with which the static gauge
+ * pressure stays at or above `min_pressure` (Pa, −101,325…1e8) at the node
+ * (`every_junction` = 0) or at every junction (≠ 0). Stores the flow, the node's
+ * pressure at that flow (Pa), the index of the junction where the minimum binds and,
+ * when `solution` is not NULL, the network solved with that flow drawn (a new
+ * `hg_network_solution`; free it with `hg_network_solution_free`). Each trial is a full
+ * solve (bracket, then Illinois regula falsi to 1e-10 of the flow); a draw the network
+ * cannot be solved at counts as beyond the available flow.
+ *
+ * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` for a node not in the network;
+ * `HG_ERR_INVALID` for a fixed-head node and the errors of `hg_network_solve` at the
+ * given demands; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NO_SOLUTION` when
+ * the pressure is below the minimum already at the given demands (the message names
+ * the junction); `HG_ERR_NULL_POINTER`. On failure the outputs are left untouched.
+ * Thread-safe (the network is only read).
+ *
+ * # Safety
+ * `network` and `fluid` NULL or live handles; `node` NULL or NUL-terminated; `flow`,
+ * `pressure` and `critical` NULL or writable; `solution` NULL or a writable
+ * `hg_network_solution *`.
+ */
+int32_t hg_network_available_flow(const struct hg_network *network,
+                                  const struct hg_fluid *fluid,
+                                  const char *node,
+                                  double min_pressure,
+                                  int32_t every_junction,
+                                  double *flow,
+                                  double *pressure,
+                                  size_t *critical,
+                                  struct hg_network_solution **solution);
 
 /**
  * The number of nodes and links in the network.

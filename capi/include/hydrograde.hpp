@@ -647,6 +647,7 @@ class line_result {
 
  private:
   friend class line;
+  friend class network;
   explicit line_result(hg_line_result* r) : r_(r) {}
   hg_line_result* r_;
 };
@@ -951,6 +952,229 @@ inline split_bands split_flow_bands(const std::vector<const line*>& branches, co
   for (size_t i = 0; i < b.size(); i++) out.flows.emplace_back(lo[i], hi[i]);
   return out;
 }
+
+
+/// One node of a solved network (SI units).
+struct network_node {
+  double head;       ///< piezometric head, m
+  double elevation;  ///< m
+  double pressure;   ///< static gauge pressure rho*g*(head - elevation), Pa
+  double outflow;    ///< m³/s leaving the system (at a fixed head: negative when it feeds)
+};
+
+/// One link of a solved network (SI units).
+struct network_link {
+  double flow;        ///< m³/s, positive from upstream to downstream
+  double velocity;    ///< largest along the line, m/s; meaningful when has_velocity
+  bool has_velocity;  ///< false for a line with no bore
+  double head_drop;   ///< upstream head minus downstream head, m
+  bool closed;        ///< a check valve holds the link shut
+  uint32_t warnings;  ///< the line's own HG_WARN_* bits at the solved flow
+};
+
+/// Iterations, last flow change (m³/s), largest energy imbalance (m), warning count.
+struct network_summary {
+  std::size_t iterations;
+  double flow_change;
+  double head_imbalance;
+  std::size_t warnings;
+};
+
+/// A solved network (owns an hg_network_solution; movable, not copyable). Every accessor
+/// reads the stored solution; nothing is solved again. It stays valid after the network
+/// and fluid it came from are gone.
+class network_solution {
+ public:
+  network_solution(network_solution&& o) noexcept : s_(o.s_) { o.s_ = nullptr; }
+  network_solution& operator=(network_solution&& o) noexcept {
+    std::swap(s_, o.s_);
+    return *this;
+  }
+  network_solution(const network_solution&) = delete;
+  network_solution& operator=(const network_solution&) = delete;
+  ~network_solution() { hg_network_solution_free(s_); }
+
+  /// Iterations, convergence measures and the number of warnings.
+  network_summary summary() const {
+    network_summary m{};
+    check(hg_network_solution_summary(s_, &m.iterations, &m.flow_change, &m.head_imbalance,
+                                      &m.warnings));
+    return m;
+  }
+  /// Node `index` (in the order added).
+  network_node node(std::size_t index) const {
+    network_node n{};
+    check(hg_network_solution_node(s_, index, &n.head, &n.elevation, &n.pressure, &n.outflow));
+    return n;
+  }
+  /// Node `index` without exceptions.
+  status_or<network_node> try_node(std::size_t index) const noexcept {
+    status_or<network_node> r{HG_OK, {}};
+    r.status = hg_network_solution_node(s_, index, &r.value.head, &r.value.elevation,
+                                        &r.value.pressure, &r.value.outflow);
+    return r;
+  }
+  /// Link `index` (in the order added).
+  network_link link(std::size_t index) const {
+    status_or<network_link> r = try_link(index);
+    check(r.status);
+    return r.value;
+  }
+  /// Link `index` without exceptions.
+  status_or<network_link> try_link(std::size_t index) const noexcept {
+    status_or<network_link> r{HG_OK, {}};
+    int32_t has_v = 0, closed = 0;
+    r.status = hg_network_solution_link(s_, index, &r.value.flow, &r.value.velocity, &has_v,
+                                        &r.value.head_drop, &closed, &r.value.warnings);
+    r.value.has_velocity = has_v != 0;
+    r.value.closed = closed != 0;
+    return r;
+  }
+  /// Warning `index`: its HG_NETWORK_WARNING_* kind and message.
+  std::pair<int32_t, std::string> warning(std::size_t index) const {
+    int32_t kind = -1;
+    std::string text = detail::text([&](char* buf, std::size_t len, std::size_t* need) {
+      return hg_network_solution_warning(s_, index, &kind, buf, len, need);
+    });
+    return {kind, text};
+  }
+  /// The C handle (still owned by this object).
+  const hg_network_solution* get() const noexcept { return s_; }
+
+ private:
+  friend class network;
+  explicit network_solution(hg_network_solution* s) : s_(s) {}
+  hg_network_solution* s_;
+};
+
+/// The flow available at a junction at a minimum residual pressure.
+struct available_flow_result {
+  double flow;               ///< extra outflow beyond the node's demand, m³/s
+  double pressure;           ///< the node's static gauge pressure with it drawn, Pa
+  std::size_t critical;      ///< index of the junction where the minimum binds
+  network_solution solution; ///< the network solved with the flow drawn
+};
+
+/// Nodes joined by lines, solved for heads and flows together (owns an hg_network;
+/// movable, not copyable). Add nodes first, then the links; the add_* methods return
+/// *this for chaining.
+class network {
+ public:
+  network() { check(hg_network_new(&n_)); }
+  network(network&& o) noexcept : n_(o.n_) { o.n_ = nullptr; }
+  network& operator=(network&& o) noexcept {
+    std::swap(n_, o.n_);
+    return *this;
+  }
+  network(const network&) = delete;
+  network& operator=(const network&) = delete;
+  ~network() { hg_network_free(n_); }
+
+  /// A junction at elevation (m) where outflow (m³/s) leaves the system.
+  network& add_node(const std::string& name, double elevation, double outflow = 0.0) {
+    check(hg_network_add_node(n_, name.c_str(), elevation, outflow));
+    return *this;
+  }
+  /// A node held at head (m), with its pressure read at the head (a free surface).
+  network& add_fixed_head(const std::string& name, double head) {
+    check(hg_network_add_fixed_head(n_, name.c_str(), head, nullptr));
+    return *this;
+  }
+  /// A node held at head (m), with its pressure read at elevation (m).
+  network& add_fixed_head(const std::string& name, double head, double elevation) {
+    check(hg_network_add_fixed_head(n_, name.c_str(), head, &elevation));
+    return *this;
+  }
+  /// A link carrying a copy of `route` from upstream to downstream.
+  network& add_link(const std::string& name, const std::string& upstream,
+                    const std::string& downstream, const line& route) {
+    check(hg_network_add_link(n_, name.c_str(), upstream.c_str(), downstream.c_str(),
+                              route.get()));
+    return *this;
+  }
+  /// Places node `name` at plan position (x, y) for drawing.
+  network& place(const std::string& name, double x, double y) {
+    check(hg_network_place_node(n_, name.c_str(), x, y));
+    return *this;
+  }
+  /// The plan position of node `index`; has_position false when never placed.
+  struct position {
+    double x, y;
+    bool has_position;
+  };
+  position node_position(std::size_t index) const {
+    position p{};
+    int32_t has = 0;
+    check(hg_network_node_position(n_, index, &p.x, &p.y, &has));
+    p.has_position = has != 0;
+    return p;
+  }
+  /// Number of nodes and links.
+  std::pair<std::size_t, std::size_t> counts() const {
+    std::size_t nodes = 0, links = 0;
+    check(hg_network_counts(n_, &nodes, &links));
+    return {nodes, links};
+  }
+  /// Index of node `name` (in the order added).
+  std::size_t node_index(const std::string& name) const {
+    std::size_t i = 0;
+    check(hg_network_index(n_, name.c_str(), 0, &i));
+    return i;
+  }
+  /// Index of link `name` (in the order added).
+  std::size_t link_index(const std::string& name) const {
+    std::size_t i = 0;
+    check(hg_network_index(n_, name.c_str(), 1, &i));
+    return i;
+  }
+  /// Solves for fluid f (global gradient method).
+  network_solution solve(const fluid& f) const {
+    hg_network_solution* s = nullptr;
+    check(hg_network_solve(n_, f.get(), &s));
+    return network_solution(s);
+  }
+  /// Solves without exceptions: the status, and the solution when it is HG_OK.
+  status_or<network_solution> try_solve(const fluid& f) const noexcept {
+    hg_network_solution* s = nullptr;
+    int32_t status = hg_network_solve(n_, f.get(), &s);
+    return {status, network_solution(s)};
+  }
+  /// The per-element breakdown of link `index` at the flow of `s`.
+  line_result link_result(const network_solution& s, const fluid& f, std::size_t index) const {
+    hg_line_result* r = nullptr;
+    check(hg_network_link_result(n_, s.get(), f.get(), index, &r));
+    return line_result(r);
+  }
+  /// The largest extra outflow at junction `node` keeping the static pressure at or above
+  /// min_pressure (Pa) at the node, or at every junction when every_junction is true.
+  available_flow_result available_flow(const fluid& f, const std::string& node,
+                                       double min_pressure, bool every_junction = false) const {
+    double flow = 0.0, pressure = 0.0;
+    std::size_t critical = 0;
+    hg_network_solution* s = nullptr;
+    check(hg_network_available_flow(n_, f.get(), node.c_str(), min_pressure,
+                                    every_junction ? 1 : 0, &flow, &pressure, &critical, &s));
+    return {flow, pressure, critical, network_solution(s)};
+  }
+  /// The available flow (m³/s) alone, without exceptions.
+  status_or<double> try_available_flow(const fluid& f, const std::string& node,
+                                       double min_pressure, bool every_junction = false) const noexcept {
+    status_or<double> r{HG_OK, 0.0};
+    double pressure = 0.0;
+    std::size_t critical = 0;
+    r.status = hg_network_available_flow(n_, f.get(), node.c_str(), min_pressure,
+                                          every_junction ? 1 : 0, &r.value, &pressure, &critical,
+                                          nullptr);
+    return r;
+  }
+  /// The C handle (still owned by this object).
+  hg_network* get() noexcept { return n_; }
+  /// The C handle (still owned by this object).
+  const hg_network* get() const noexcept { return n_; }
+
+ private:
+  hg_network* n_ = nullptr;
+};
 
 }  // namespace hydrograde
 

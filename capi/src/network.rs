@@ -4,7 +4,7 @@ use crate::ffi::{self, FfiResult, guard, out_ptr, put};
 use crate::fluid::hg_fluid;
 use crate::line::{give, hg_line, hg_line_result};
 use hydrograde::Error;
-use hydrograde::network::{Network, NetworkSolution, NetworkWarningKind};
+use hydrograde::network::{LimitAt, Network, NetworkSolution, NetworkWarningKind};
 use std::ffi::c_char;
 
 /// A check or foot valve holds a link closed (`hg_network_solution_warning`).
@@ -155,6 +155,145 @@ pub unsafe extern "C" fn hg_network_add_link(
         };
         let line = l.line()?.clone();
         Ok(n.net.link(name, up, down, line)?)
+    })
+}
+
+/// Places node `name` at plan position (`x`, `y`) (m, or any plan unit used
+/// consistently; within ±1e8), for drawing the network; the hydraulics do not use it.
+///
+/// Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` for a node not in the network;
+/// `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NULL_POINTER`. Not thread-safe for
+/// one network.
+///
+/// # Safety
+/// `network` NULL or a live handle used by no other thread; `name` NULL or a
+/// NUL-terminated string.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_network_place_node(
+    network: *mut hg_network,
+    name: *const c_char,
+    x: f64,
+    y: f64,
+) -> i32 {
+    guard(|| {
+        // SAFETY: forwarded contract.
+        let (n, name) = unsafe {
+            (
+                ffi::handle_mut("network", network)?,
+                ffi::c_str("name", name)?,
+            )
+        };
+        Ok(n.net.place(name, x, y)?)
+    })
+}
+
+/// The plan position of node `index` (in the order added): `x`, `y` and `*has_position`
+/// (1 when placed by `hg_network_place_node`; 0 with `x` = `y` = 0 otherwise).
+///
+/// Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` for an index past the last node;
+/// `HG_ERR_NULL_POINTER`. Thread-safe.
+///
+/// # Safety
+/// `network` NULL or a live handle; the outputs NULL or writable.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_network_node_position(
+    network: *const hg_network,
+    index: usize,
+    x: *mut f64,
+    y: *mut f64,
+    has_position: *mut i32,
+) -> i32 {
+    guard(|| {
+        ffi::check_outs(&[
+            out_ptr("x", x),
+            out_ptr("y", y),
+            out_ptr("has_position", has_position),
+        ])?;
+        // SAFETY: forwarded contract.
+        let n = unsafe { ffi::handle("network", network)? };
+        let node = at(n.net.nodes(), index, "nodes")?;
+        let [px, py] = node.position.unwrap_or([0.0, 0.0]);
+        // SAFETY: checked above.
+        unsafe {
+            put("x", x, px)?;
+            put("y", y, py)?;
+            put(
+                "has_position",
+                has_position,
+                i32::from(node.position.is_some()),
+            )
+        }
+    })
+}
+
+/// The flow available at junction `node` at a minimum residual pressure: the largest
+/// extra outflow (m³/s, on top of the node's own demand) with which the static gauge
+/// pressure stays at or above `min_pressure` (Pa, −101,325…1e8) at the node
+/// (`every_junction` = 0) or at every junction (≠ 0). Stores the flow, the node's
+/// pressure at that flow (Pa), the index of the junction where the minimum binds and,
+/// when `solution` is not NULL, the network solved with that flow drawn (a new
+/// `hg_network_solution`; free it with `hg_network_solution_free`). Each trial is a full
+/// solve (bracket, then Illinois regula falsi to 1e-10 of the flow); a draw the network
+/// cannot be solved at counts as beyond the available flow.
+///
+/// Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` for a node not in the network;
+/// `HG_ERR_INVALID` for a fixed-head node and the errors of `hg_network_solve` at the
+/// given demands; `HG_ERR_NOT_FINITE`; `HG_ERR_OUT_OF_RANGE`; `HG_ERR_NO_SOLUTION` when
+/// the pressure is below the minimum already at the given demands (the message names
+/// the junction); `HG_ERR_NULL_POINTER`. On failure the outputs are left untouched.
+/// Thread-safe (the network is only read).
+///
+/// # Safety
+/// `network` and `fluid` NULL or live handles; `node` NULL or NUL-terminated; `flow`,
+/// `pressure` and `critical` NULL or writable; `solution` NULL or a writable
+/// `hg_network_solution *`.
+#[unsafe(no_mangle)]
+#[allow(clippy::too_many_arguments)]
+pub unsafe extern "C" fn hg_network_available_flow(
+    network: *const hg_network,
+    fluid: *const hg_fluid,
+    node: *const c_char,
+    min_pressure: f64,
+    every_junction: i32,
+    flow: *mut f64,
+    pressure: *mut f64,
+    critical: *mut usize,
+    solution: *mut *mut hg_network_solution,
+) -> i32 {
+    guard(|| {
+        ffi::check_outs(&[
+            out_ptr("flow", flow),
+            out_ptr("pressure", pressure),
+            out_ptr("critical", critical),
+        ])?;
+        // SAFETY: forwarded contract.
+        let (n, f, name) = unsafe {
+            (
+                ffi::handle("network", network)?,
+                ffi::handle("fluid", fluid)?,
+                ffi::c_str("node", node)?,
+            )
+        };
+        let at = if every_junction != 0 {
+            LimitAt::EveryJunction
+        } else {
+            LimitAt::Node
+        };
+        let a = n.net.available_flow(&f.fluid, name, min_pressure, at)?;
+        let index = n.net.node_index(&a.critical).unwrap_or(0);
+        // SAFETY: checked above; `solution` is written only when not NULL.
+        unsafe {
+            put("flow", flow, a.flow)?;
+            put("pressure", pressure, a.pressure)?;
+            put("critical", critical, index)?;
+            if !solution.is_null() {
+                let h = Box::into_raw(Box::new(hg_network_solution {
+                    solution: a.solution,
+                }));
+                put("solution", solution, h)?;
+            }
+        }
+        Ok(())
     })
 }
 

@@ -4,6 +4,9 @@
 //!    about 400 m of PVC and steel pipe, fifteen fittings and valves and 38 m of rise to a
 //!    header tank.
 //! 2. A workshop's rectangular exhaust duct: air at 30 °C through two duct sizes.
+//! 3. A small industrial estate's looped fire-and-service main fed by an elevated tank
+//!    and a booster station: node pressures, and the flow available at one hydrant at a
+//!    minimum residual pressure.
 //!
 //! All data are invented for the demonstration.
 
@@ -12,6 +15,7 @@ use hydrograde::band::Band;
 use hydrograde::fitting::{Edge, Fitting};
 use hydrograde::fluid::Fluid;
 use hydrograde::line::{Element, Equipment, Limit, Line, LineResult, PumpCurve, Resize};
+use hydrograde::network::{AvailableFlow, LimitAt, Network, NetworkSolution};
 use hydrograde::pipe::Pipe;
 use hydrograde::section::Section;
 use hydrograde::sizes::PipeTable;
@@ -226,6 +230,144 @@ fn duct() -> Result<()> {
     Ok(())
 }
 
+/// The estate's junctions: name, elevation m, service demand L/s (invented).
+const ESTATE_NODES: [(&str, f64, f64); 6] = [
+    ("gate", 18.0, 2.0),
+    ("unit_1", 19.0, 1.5),
+    ("unit_2", 21.0, 2.5),
+    ("hydrant_h3", 23.0, 0.0),
+    ("unit_3", 22.0, 1.0),
+    ("yard", 20.0, 0.5),
+];
+/// The estate's pipes: name, upstream, downstream, inside diameter m, length m
+/// (cement-lined ductile iron, each with a gate valve; the booster main also a check valve).
+const ESTATE_LINKS: [(&str, &str, &str, f64, f64); 9] = [
+    ("tank_main", "tower_tank", "gate", 0.200, 350.0),
+    ("booster_main", "booster", "unit_3", 0.150, 250.0),
+    ("north_1", "gate", "unit_1", 0.150, 220.0),
+    ("north_2", "unit_1", "unit_2", 0.150, 200.0),
+    ("east_1", "unit_2", "hydrant_h3", 0.150, 120.0),
+    ("east_2", "hydrant_h3", "unit_3", 0.150, 120.0),
+    ("south", "unit_3", "yard", 0.100, 180.0),
+    ("west", "yard", "gate", 0.150, 260.0),
+    ("cross", "unit_1", "yard", 0.100, 150.0),
+];
+/// Water level in the elevated tank, m above the datum.
+const TOWER_LEVEL: f64 = 62.0;
+/// The booster's discharge head, m above the datum (held fixed: see `estate_network`).
+const BOOSTER_HEAD: f64 = 66.0;
+/// The hydrant whose available flow is asked, and the minimum residual pressure, Pa
+/// (an invented illustration, not a code value).
+const HYDRANT: &str = "hydrant_h3";
+const RESIDUAL_PRESSURE: f64 = 140e3;
+
+/// The estate's main. The booster station is modelled as a node whose discharge is held
+/// at `BOOSTER_HEAD` (its controller holds a set discharge pressure) rather than by its
+/// pump curve.
+fn estate_network() -> Result<Network> {
+    let mut net = Network::new();
+    net.fixed_head("tower_tank", TOWER_LEVEL, None)?;
+    net.fixed_head("booster", BOOSTER_HEAD, Some(17.0))?;
+    for (name, z, q) in ESTATE_NODES {
+        net.node(name, z, q * 1e-3)?;
+    }
+    for (name, up, down, d, len) in ESTATE_LINKS {
+        let mut elements = vec![
+            Element::Pipe(Pipe::of_material(
+                Section::circle(d)?,
+                len,
+                "cement_lined_ductile_iron",
+            )?),
+            Element::Fitting(Fitting::named("gate_valve")?),
+        ];
+        if name == "booster_main" {
+            // The booster station's non-return valve.
+            elements.push(Element::Fitting(Fitting::named("swing_check_valve")?));
+        }
+        let line = Line::new(elements)?;
+        net.link(name, up, down, line)?;
+    }
+    Ok(net)
+}
+
+fn print_network(s: &NetworkSolution) {
+    println!(
+        "  {:<12} {:>7} {:>8} {:>10} {:>9}",
+        "node", "z m", "head m", "p kPa", "out L/s"
+    );
+    for n in &s.nodes {
+        println!(
+            "  {:<12} {:>7.1} {:>8.2} {:>10.1} {:>9.2}",
+            n.name,
+            n.elevation,
+            n.head,
+            n.pressure / 1e3,
+            n.outflow * 1e3
+        );
+    }
+    println!("  {:<13} {:>9} {:>8}", "link", "Q L/s", "V m/s");
+    for l in &s.links {
+        println!(
+            "  {:<13} {:>9.2} {:>8.2}",
+            l.name,
+            l.flow * 1e3,
+            l.velocity.unwrap_or(0.0)
+        );
+    }
+}
+
+fn estate_available(net: &Network, water: &Fluid) -> Result<(AvailableFlow, AvailableFlow)> {
+    let at_node = net.available_flow(water, HYDRANT, RESIDUAL_PRESSURE, LimitAt::Node)?;
+    let everywhere =
+        net.available_flow(water, HYDRANT, RESIDUAL_PRESSURE, LimitAt::EveryJunction)?;
+    Ok((at_node, everywhere))
+}
+
+fn estate() -> Result<()> {
+    println!(
+        "\n3. Industrial estate fire-and-service main (water 10 °C, looped, tower tank and booster)\n"
+    );
+    println!(
+        "  tower tank level {TOWER_LEVEL:.1} m; booster discharge held at {BOOSTER_HEAD:.1} m (a fixed head standing in for the pump's controlled discharge)"
+    );
+    let water = Fluid::water(283.15, 101_325.0)?;
+    let net = estate_network()?;
+    let s = net.solve(&water)?;
+    println!(
+        "  service demands only ({} Newton iterations):",
+        s.iterations
+    );
+    print_network(&s);
+    let (at_node, everywhere) = estate_available(&net, &water)?;
+    println!(
+        "\n  flow available at {HYDRANT} with {:.0} kPa residual there: {:.1} L/s on top of the service demands",
+        RESIDUAL_PRESSURE / 1e3,
+        at_node.flow * 1e3
+    );
+    println!(
+        "  with {:.0} kPa kept at every junction: {:.1} L/s (the limit binds at {})",
+        RESIDUAL_PRESSURE / 1e3,
+        everywhere.flow * 1e3,
+        everywhere.critical
+    );
+    for n in everywhere.solution.nodes.iter().filter(|n| n.fixed) {
+        println!("  {} supplies {:.1} L/s", n.name, -n.outflow * 1e3);
+    }
+    for w in everywhere
+        .solution
+        .warnings
+        .iter()
+        .filter(|w| w.kind != hydrograde::network::NetworkWarningKind::LineWarnings)
+    {
+        println!("  warning: {}", w.message);
+    }
+    println!(
+        "  Fire flow: the fire-protection codes that apply, and the authority that enforces them, set the\n  required flow, duration and residual pressure; the {:.0} kPa here is an invented figure. These\n  are estimates (friction ±10 %, roughness of a main in service uncertain), to be confirmed by\n  a competent engineer and by a flow test on the real main.",
+        RESIDUAL_PRESSURE / 1e3
+    );
+    Ok(())
+}
+
 /// The demo's key results, one `name value` line each with every digit (`{:?}` prints
 /// the shortest string that reads back to the same double), for the cross-language test
 /// that the Python and C demos give the same numbers.
@@ -264,6 +406,19 @@ fn numbers() -> Result<()> {
         ("duct_pressure_loss_low", d.pressure_loss_band.low),
         ("duct_pressure_loss_high", d.pressure_loss_band.high),
     ];
+    let water10 = Fluid::water(283.15, 101_325.0)?;
+    let net = estate_network()?;
+    let e = net.solve(&water10)?;
+    let (at_node, everywhere) = estate_available(&net, &water10)?;
+    let hydrant = net.node_index(HYDRANT).unwrap_or(0);
+    let rows = rows.into_iter().chain([
+        ("estate_hydrant_pressure", e.nodes[hydrant].pressure),
+        ("estate_tank_main_flow", e.links[0].flow),
+        ("estate_booster_main_flow", e.links[1].flow),
+        ("estate_available_at_hydrant", at_node.flow),
+        ("estate_available_everywhere", everywhere.flow),
+        ("estate_available_pressure", everywhere.pressure),
+    ]);
     for (name, v) in rows {
         println!("{name} {v:?}");
     }
@@ -282,7 +437,7 @@ fn main() {
         "hydrograde {} demo: invented scenarios, engineering estimates with 95 % bands.",
         hydrograde::VERSION
     );
-    if let Err(e) = orchard().and_then(|_| duct()) {
+    if let Err(e) = orchard().and_then(|_| duct()).and_then(|_| estate()) {
         eprintln!("error: {e}");
         std::process::exit(1);
     }

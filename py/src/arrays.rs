@@ -114,6 +114,7 @@ const ARGUMENTS: &[(&str, &str, &str)] = &[
     ("angle_deg", "degree", "an angle"),
     ("elevation", "m", "a length"),
     ("outflow", "m**3/s", "a volume flow"),
+    ("min_pressure", "Pa", "a pressure"),
 ];
 
 /// Dimensionless arguments: a pint quantity must be dimensionless.
@@ -311,7 +312,7 @@ pub mod si {
         k_spread opt_k_spread, spread opt_spread, laminar_limit opt_laminar_limit,
         turbulent_limit opt_turbulent_limit, laminar_constant opt_laminar_constant,
         re opt_re, rel_roughness opt_rel_roughness, pipe_rel_roughness opt_pipe_rel_roughness,
-        elevation opt_elevation, outflow opt_outflow,
+        elevation opt_elevation, outflow opt_outflow, min_pressure opt_min_pressure,
     );
 }
 

@@ -72,6 +72,7 @@ fn _native(m: &Bound<'_, PyModule>) -> PyResult<()> {
     m.add_class::<network::PyNetworkSolution>()?;
     m.add_class::<network::PyNodeResult>()?;
     m.add_class::<network::PyLinkResult>()?;
+    m.add_class::<network::PyAvailableFlow>()?;
 
     // roughness and sizes
     m.add_function(wrap_pyfunction!(roughness::materials, m)?)?;

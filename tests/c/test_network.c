@@ -183,12 +183,78 @@ static void test_bad_input(const hg_fluid *water) {
   hg_line_free(l);
 }
 
+/* The flow of a pipe with friction head h over it, exactly: Colebrook (1939) with
+ * Darcy-Weisbach gives Re*sqrt(f) = D*sqrt(2 g D S)/nu (S = h/L), so
+ * V = -2 sqrt(2 g D S) log10(e/(3.7 D) + 2.51 nu/(D sqrt(2 g D S))) without iteration. */
+static double colebrook_flow(double rho, double mu, double d, double l, double e, double h) {
+  double root = sqrt(2.0 * G * d * h / l), nu = mu / rho;
+  double v = -2.0 * root * log10(e / (3.7 * d) + 2.51 * nu / (d * root));
+  return v * PI * d * d / 4.0;
+}
+
+static void test_available_flow(const hg_fluid *water) {
+  const double rho = 999.1, mu = 1.138e-3, d = 0.15, len = 400.0, e = 4.5e-5;
+  const double tank = 45.0, z = 2.0, base = 0.01, p_min = 1.4e5;
+  hg_network *net = NULL;
+  hg_line *l = NULL;
+  CHECK(hg_line_new(&l) == HG_OK && hg_line_add_pipe(l, d, len, e) == HG_OK, "line");
+  CHECK(hg_network_new(&net) == HG_OK, "new");
+  CHECK(hg_network_add_fixed_head(net, "tank", tank, NULL) == HG_OK, "tank");
+  CHECK(hg_network_add_node(net, "hydrant", z, base) == HG_OK, "hydrant");
+  CHECK(hg_network_add_link(net, "main", "tank", "hydrant", l) == HG_OK, "main");
+  double flow = 0.0, pressure = 0.0, x = -1.0, y = -1.0;
+  size_t critical = 99;
+  int32_t placed = -1;
+  hg_network_solution *s = NULL;
+  CHECK(hg_network_available_flow(net, water, "hydrant", p_min, 0, &flow, &pressure, &critical, &s) == HG_OK,
+        "available: %s", last_error());
+  /* Energy: tank - (z + p_min/(rho g)) is the friction head at the total flow. */
+  double expected = colebrook_flow(rho, mu, d, len, e, tank - z - p_min / (rho * G)) - base;
+  CHECK(fabs(flow - expected) < 1e-8 * expected, "flow %.17g vs %.17g", flow, expected);
+  CHECK(fabs(pressure - p_min) < 1e-3 && critical == 1, "pressure %.17g at %zu", pressure, critical);
+  double head, elev, p, out;
+  CHECK(hg_network_solution_node(s, 1, &head, &elev, &p, &out) == HG_OK && out == base + flow, "drawn %g", out);
+  hg_network_solution_free(s);
+  /* Without a solution wanted, the same flow. */
+  double again = 0.0;
+  CHECK(hg_network_available_flow(net, water, "hydrant", p_min, 1, &again, &pressure, &critical, NULL) == HG_OK &&
+            again == flow, "every junction, no solution out");
+  CHECK(hg_network_available_flow(net, water, "tank", p_min, 0, &flow, &pressure, &critical, NULL) == HG_ERR_INVALID,
+        "fixed head");
+  CHECK(hg_network_available_flow(net, water, "nowhere", p_min, 0, &flow, &pressure, &critical, NULL) ==
+            HG_ERR_UNKNOWN_NAME, "unknown");
+  CHECK(hg_network_available_flow(net, water, "hydrant", NAN, 0, &flow, &pressure, &critical, NULL) ==
+            HG_ERR_NOT_FINITE, "NaN");
+  CHECK(hg_network_available_flow(net, water, "hydrant", -2e5, 0, &flow, &pressure, &critical, NULL) ==
+            HG_ERR_OUT_OF_RANGE, "below vacuum");
+  /* 45 m of water is about 441 kPa (rho g h): 500 kPa cannot be met even at no draw. */
+  CHECK(hg_network_available_flow(net, water, "hydrant", 5e5, 0, &flow, &pressure, &critical, NULL) ==
+            HG_ERR_NO_SOLUTION, "too high");
+  CHECK(strstr(last_error(), "hydrant") != NULL, "names it: %s", last_error());
+  CHECK(hg_network_available_flow(net, water, "hydrant", p_min, 0, NULL, &pressure, &critical, NULL) ==
+            HG_ERR_NULL_POINTER, "NULL flow");
+  /* Plan positions. */
+  CHECK(hg_network_node_position(net, 1, &x, &y, &placed) == HG_OK && placed == 0 && x == 0.0, "unplaced");
+  CHECK(hg_network_place_node(net, "hydrant", 250.0, -40.5) == HG_OK, "place");
+  CHECK(hg_network_node_position(net, 1, &x, &y, &placed) == HG_OK && placed == 1 && x == 250.0 && y == -40.5,
+        "placed %g %g", x, y);
+  CHECK(hg_network_node_position(net, 2, &x, &y, &placed) == HG_ERR_OUT_OF_RANGE, "index");
+  CHECK(hg_network_node_position(net, 0, NULL, &y, &placed) == HG_ERR_NULL_POINTER, "NULL x");
+  CHECK(hg_network_place_node(net, "nowhere", 0.0, 0.0) == HG_ERR_UNKNOWN_NAME, "unknown");
+  CHECK(hg_network_place_node(net, "hydrant", INFINITY, 0.0) == HG_ERR_NOT_FINITE, "inf");
+  CHECK(hg_network_place_node(net, "hydrant", 0.0, 1e9) == HG_ERR_OUT_OF_RANGE, "far");
+  CHECK(hg_network_place_node(net, NULL, 0.0, 0.0) == HG_ERR_NULL_POINTER, "NULL name");
+  hg_network_free(net);
+  hg_line_free(l);
+}
+
 int main(void) {
   hg_fluid *water = NULL;
   CHECK(hg_fluid_liquid(999.1, 1.138e-3, &water) == HG_OK, "fluid");
   test_three_reservoirs(water);
   test_check_valve(water);
   test_bad_input(water);
+  test_available_flow(water);
   hg_fluid_free(water);
   return check_summary("test_network");
 }

@@ -48,6 +48,18 @@ def scenario() -> dict:
     ], inlet_pressure=2.5e5)
     pump = hg.PumpCurve([0.0, 0.002, 0.004, 0.006, 0.008], [26.0, 25.2, 23.0, 19.0, 13.0])
     result = line.evaluate(water, 0.0045)
+    # The heating circuit's header tank feeds a small loop of three radiator branches.
+    network = hg.Network()
+    network.fixed_head("header_tank", head=24.0, x=0.0, y=0.0)
+    for name, z, q, x in [("riser_foot", 0.0, 0.0, 10.0), ("east_branch", 3.0, 0.0015, 30.0),
+                          ("west_branch", 3.0, 0.0012, 30.0), ("far_end", 6.0, 0.001, 50.0)]:
+        network.node(name, elevation=z, outflow=q, x=x, y=-10.0 if name == "west_branch" else 0.0)
+    for name, u, v, d, length in [("riser", "header_tank", "riser_foot", bore, 12.0),
+                                  ("east", "riser_foot", "east_branch", 0.0409, 20.0),
+                                  ("west", "riser_foot", "west_branch", 0.0409, 22.0),
+                                  ("east_far", "east_branch", "far_end", 0.0266, 20.0),
+                                  ("west_far", "west_branch", "far_end", 0.0266, 24.0)]:
+        network.link(name, u, v, hg.Line([hg.Pipe.of_material(d, length, "commercial_steel")]))
     branch_b = hg.Line([hg.Pipe.of_material(0.0409, 30.0, "commercial_steel"),
                         hg.Fitting.named("ball_valve"), hg.Rise(6.0)])
     return {
@@ -67,6 +79,8 @@ def scenario() -> dict:
         "Friction": hg.friction(3000.0, 1e-4),
         "MonteCarlo": hg.monte_carlo(line, water, 0.0045, samples=2000, seed=7),
         "Uncertainty": line.uncertainty,
+        "Network": network,
+        "NetworkSolution": network.solve(water),
     }
 
 

@@ -88,9 +88,11 @@
 //! requires it — against the codes and standards that apply where it is built (for fire
 //! mains, the fire-protection codes).
 
+mod available;
 mod result;
 mod solve;
 
+pub use available::{AvailableFlow, LimitAt};
 pub use result::{LinkResult, NetworkSolution, NetworkWarning, NetworkWarningKind, NodeResult};
 
 use crate::error::{Error, Result, check};
@@ -105,6 +107,9 @@ use std::collections::HashMap;
 pub const ELEVATION_LIMIT: f64 = 10_000.0;
 /// Largest fixed head (in magnitude) a node accepts, m (the rise limit of a line).
 pub const HEAD_LIMIT: f64 = 1e6;
+/// Largest plan coordinate (in magnitude) a node accepts: about the Earth's
+/// circumference in metres, so projected map coordinates fit.
+pub const POSITION_LIMIT: f64 = 1e8;
 /// Largest outflow (in magnitude) a node accepts, m³/s (the flow limit of the solvers).
 pub const OUTFLOW_LIMIT: f64 = 1e6;
 
@@ -135,6 +140,10 @@ pub struct Node {
     pub elevation_given: bool,
     /// Junction or fixed head.
     pub kind: NodeKind,
+    /// Plan position `[x, y]` for drawing the network (m, or any plan unit used
+    /// consistently); `None` when not given. It plays no part in the hydraulics.
+    #[serde(default)]
+    pub position: Option<[f64; 2]>,
 }
 
 /// A link of a network: a line from an upstream node to a downstream node.
@@ -301,6 +310,7 @@ impl Network {
             elevation,
             elevation_given: true,
             kind: NodeKind::Junction { outflow },
+            position: None,
         })
     }
 
@@ -321,7 +331,23 @@ impl Network {
             elevation: elevation.unwrap_or(head),
             elevation_given: elevation.is_some(),
             kind: NodeKind::FixedHead { head },
+            position: None,
         })
+    }
+
+    /// Places node `name` at plan position (`x`, `y`) (m, or any plan unit used
+    /// consistently), for drawing the network; the hydraulics do not use it.
+    ///
+    /// # Errors
+    /// An unknown node; a coordinate not finite or beyond ±[`POSITION_LIMIT`].
+    pub fn place(&mut self, name: &str, x: f64, y: f64) -> Result<()> {
+        check::within("x", x, -POSITION_LIMIT, POSITION_LIMIT, "")?;
+        check::within("y", y, -POSITION_LIMIT, POSITION_LIMIT, "")?;
+        let i = self
+            .node_index(name)
+            .ok_or_else(|| unknown_node(name, &self.nodes))?;
+        self.nodes[i].position = Some([x, y]);
+        Ok(())
     }
 
     /// Adds a link `name` carrying `line` from node `upstream` to node `downstream`

@@ -24,6 +24,7 @@ from hydrograde._errors import (
 from hydrograde._native import (
     __version__,
     aged_roughness,
+    AvailableFlow,
     Band,
     convert,
     convert_head,
@@ -74,6 +75,7 @@ from hydrograde.plotting import friction_chart as plot_friction_chart
 __all__ = [
     "__version__",
     "aged_roughness",
+    "AvailableFlow",
     "Band",
     "convert",
     "convert_head",

@@ -379,6 +379,81 @@ def _generic(title: str, data: Mapping[str, Any]) -> str:
     return _frame(title, _table(head, rows), data.get("warnings") or [])
 
 
+NETWORK_NOTE = ("Fire mains: the flow available at a hydrant is an estimate; the fire-protection "
+                "codes that apply set the required flows, residual pressures and tests.")
+
+
+def _network_solution(data: Mapping[str, Any]) -> str:
+    nodes = data.get("nodes") or []
+    links = data.get("links") or []
+    node_rows = []
+    for n in nodes:
+        node_rows.append([
+            ("t", _breakable(str(n["name"]))),
+            ("t", "fixed head" if n["fixed"] else "junction"),
+            ("n", value_text("elevation", n["elevation"])),
+            ("n", value_text("head", n["head"])),
+            ("n", value_text("pressure_head", n["pressure_head"])),
+            ("n", value_text("pressure", n["pressure"])),
+            ("n", value_text("outflow", n["outflow"])),
+        ])
+    link_rows = []
+    for k in links:
+        notes = ["closed (check valve)"] if k["closed"] else []
+        warn = _warnings_text(k.get("warnings") or [])
+        if warn:
+            notes.append(f"<span class='w'>{warn}</span>")
+        link_rows.append([
+            ("t", _breakable(str(k["name"]))),
+            ("t", f"{_breakable(str(k['upstream']))} → {_breakable(str(k['downstream']))}"),
+            ("n", value_text("flow", k["flow"])),
+            ("n", value_text("velocity", k.get("velocity"))),
+            ("n", value_text("head_drop", k["head_drop"])),
+            ("t", ", ".join(notes) or DASH),
+        ])
+    body = (f"<div>{len(nodes)} nodes, {len(links)} links; {data.get('iterations')} Newton "
+            f"iterations, largest energy imbalance {number(data.get('head_imbalance'), 2)} m</div>"
+            + _table(["node", "kind", _heading("elevation"), _heading("head"),
+                      f"pressure head <span class='u'>[{html.escape(unit_text('pressure_head'))}]</span>",
+                      _heading("pressure"), f"outflow <span class='u'>[{html.escape(unit_text('outflow'))}]</span>"],
+                     node_rows)
+            + _table(["link", "from → to", _heading("flow"), _heading("velocity"),
+                      f"head drop <span class='u'>[{html.escape(unit_text('head_drop'))}]</span>", "notes"],
+                     link_rows))
+    messages = [w[2] if isinstance(w, (list, tuple)) else str(w) for w in data.get("warnings") or []]
+    if messages:
+        body += "".join(f"<div class='w'>⚠ {html.escape(m)}</div>" for m in messages)
+    body += f"<div class='note'>{html.escape(NETWORK_NOTE)}</div>"
+    return _frame("NetworkSolution · heads and flows of the network", body)
+
+
+def _network(obj: Any) -> str:
+    data = obj.to_dict()
+    node_rows = []
+    for n in data["nodes"]:
+        fixed = n["kind"] == "fixed_head"
+        where = DASH
+        if n.get("x") is not None:
+            where = f"{number(n['x'])}, {number(n['y'])}"
+        node_rows.append([
+            ("t", _breakable(str(n["name"]))),
+            ("t", "fixed head" if fixed else "junction"),
+            ("n", value_text("elevation", n["elevation"])),
+            ("n", value_text("head", n["head"]) if fixed else DASH),
+            ("n", DASH if fixed else value_text("outflow", n["outflow"])),
+            ("n", where),
+        ])
+    link_rows = [[("t", _breakable(str(k["name"]))), ("t", _breakable(str(k["upstream"]))),
+                  ("t", _breakable(str(k["downstream"]))), ("n", str(k["elements"]))]
+                 for k in data["links"]]
+    body = (_table(["node", "kind", _heading("elevation"), _heading("head"),
+                    f"outflow <span class='u'>[{html.escape(unit_text('outflow'))}]</span>",
+                    "plan x, y"], node_rows)
+            + _table(["link", "upstream", "downstream", "elements"], link_rows))
+    body += f"<div class='note'>{html.escape(NETWORK_NOTE)}</div>"
+    return _frame(f"Network · {len(node_rows)} nodes, {len(link_rows)} links", body)
+
+
 _TITLES = {"FlowSolution": "FlowSolution · the flow a head drives",
            "OperatingPoint": "OperatingPoint · pump curve meets system curve",
            "MonteCarlo": "MonteCarlo · sampling check, JCGM 101",
@@ -393,6 +468,8 @@ def render_html(title: str, data: Mapping[str, Any]) -> str:
         return _band(data)
     if title == "Sizing":
         return _sizing(data)
+    if title == "NetworkSolution":
+        return _network_solution(data)
     if title == "ElementResult":
         body = _element_rows([data])
         return _frame("ElementResult", body, data.get("warnings") or [])
@@ -470,7 +547,8 @@ def _split(obj: Any) -> str:
     return _frame("Split · parallel branches at one head", body)
 
 
-_OBJECTS: Dict[str, Callable[[Any], str]] = {"Line": _line, "PumpCurve": _pump, "Split": _split}
+_OBJECTS: Dict[str, Callable[[Any], str]] = {"Line": _line, "PumpCurve": _pump, "Split": _split,
+                                             "Network": _network}
 
 
 def render_object(title: str, obj: Any) -> str:

@@ -63,6 +63,10 @@ FIELDS: Dict[str, str] = {
     "d_out": "length",
     "viscosity": "viscosity",
     "temperature": "temperature",
+    "elevation": "distance",
+    "pressure_head": "head",
+    "head_drop": "head",
+    "outflow": "flow",
 }
 
 # Units shown with their usual typography.

@@ -78,8 +78,12 @@ def _axes(ax: Any) -> Any:
     return ax
 
 
-def _note(ax: Any) -> None:
-    ax.annotate(SAFETY, xy=(0.0, 0.0), xycoords="figure fraction", xytext=(4, 3),
+NETWORK_SAFETY = ("estimate, no band yet; to be checked by a competent engineer (licensed or "
+                  "registered where required) against the codes that apply (fire codes for mains)")
+
+
+def _note(ax: Any, text: str = SAFETY) -> None:
+    ax.annotate(text, xy=(0.0, 0.0), xycoords="figure fraction", xytext=(4, 3),
                 textcoords="offset points", fontsize=6.5, color="#8a949c", style="italic")
 
 
@@ -227,4 +231,75 @@ def result_plot(result: Any, ax: Any = None) -> Any:
     ax = _grade(result.elements, xs, ax, "element boundary (route order)", labels)
     ax.set_xticks(xs)
     ax.set_title(f"Grade line at Q = {float(_shown('flow', result.flow)):.4g} {_unit('flow')}")
+    return ax
+
+
+def network_plot(solution: Any, ax: Any = None) -> Any:
+    """A solved network drawn from its nodes' plan positions (every node must be
+    placed: ``net.node(..., x=, y=)`` or ``net.place``). Links are drawn in a shade and
+    width that grow with the magnitude of their flow, with an arrow in the flow direction
+    (none on a link closed by a check valve, drawn dashed); junctions are coloured by
+    their static pressure (colour bar in the display unit of pressure); fixed-head nodes
+    are squares. Plan coordinates are shown as given, with equal scales.
+    """
+    from hydrograde._errors import InvalidInputError
+
+    data = solution.to_dict()
+    nodes, links = data["nodes"], data["links"]
+    missing = [n["name"] for n in nodes if n.get("x") is None]
+    if missing:
+        shown = ", ".join(repr(m) for m in missing[:8]) + (" …" if len(missing) > 8 else "")
+        raise InvalidInputError(
+            f"x: nodes {shown} have no plan position; give x= and y= when adding them, "
+            "or call Network.place(name, x, y), to draw the network", parameter="x")
+    import matplotlib as mpl
+
+    at = {n["name"]: (float(n["x"]), float(n["y"])) for n in nodes}
+    ax = _axes(ax)
+    ax.grid(False, which="both")
+    flows = np.abs(np.array([k["flow"] for k in links], dtype=float))
+    top = float(flows.max()) if flows.size and flows.max() > 0.0 else 1.0
+    blues = mpl.colormaps["Blues"]
+    for k, q in zip(links, flows):
+        (x0, y0), (x1, y1) = at[k["upstream"]], at[k["downstream"]]
+        share = q / top
+        style = "--" if k["closed"] else "-"
+        ax.plot([x0, x1], [y0, y1], style, color=blues(0.35 + 0.6 * share),
+                linewidth=1.0 + 4.0 * share, solid_capstyle="round", zorder=1)
+        if not k["closed"] and k["flow"] != 0.0:
+            a, b = ((x0, y0), (x1, y1)) if k["flow"] > 0.0 else ((x1, y1), (x0, y0))
+            mid = (0.5 * (a[0] + b[0]), 0.5 * (a[1] + b[1]))
+            tip = (mid[0] + 0.08 * (b[0] - a[0]), mid[1] + 0.08 * (b[1] - a[1]))
+            ax.annotate("", xy=tip, xytext=mid, zorder=2,
+                        arrowprops=dict(arrowstyle="-|>", color=PALETTE[5], lw=1.0))
+        flow_text = f"{float(_shown('flow', abs(k['flow']))):.3g}"
+        ax.annotate(f"{k['name']}\n{flow_text}", xy=(0.5 * (x0 + x1), 0.5 * (y0 + y1)),
+                    xytext=(4, 4), textcoords="offset points", fontsize=6.5, color="#5b6770")
+    junctions = [n for n in nodes if not n["fixed"]]
+    fixed = [n for n in nodes if n["fixed"]]
+    if junctions:
+        pressures = _shown("pressure", [n["pressure"] for n in junctions])
+        dots = ax.scatter([at[n["name"]][0] for n in junctions], [at[n["name"]][1] for n in junctions],
+                          c=pressures, cmap="viridis", s=46, edgecolors="#1d3b53", linewidths=0.6,
+                          zorder=3)
+        # An inset colour bar stays beside the plan whatever the equal aspect does.
+        bar = ax.figure.colorbar(dots, cax=ax.inset_axes((1.03, 0.1, 0.03, 0.8)))
+        bar.set_label(f"static pressure [{_unit('pressure')}]")
+    if fixed:
+        ax.scatter([at[n["name"]][0] for n in fixed], [at[n["name"]][1] for n in fixed], marker="s",
+                   s=70, color=PALETTE[1], edgecolors="#1d3b53", linewidths=0.6, zorder=3,
+                   label="fixed head")
+        ax.legend(loc="best")
+    for n in nodes:
+        ax.annotate(n["name"], xy=at[n["name"]], xytext=(5, -10), textcoords="offset points",
+                    fontsize=7.5, color="#1d3b53")
+    ax.set_aspect("equal", adjustable="datalim")
+    ax.margins(x=0.15, y=0.12)  # room for the node names beside the outer nodes
+    engine = ax.figure.get_layout_engine()
+    if engine is not None and "rect" in engine.get():
+        engine.set(rect=(0.0, 0.035, 1.0, 0.965))  # room for the caution below the x label
+    ax.set_xlabel("plan x")
+    ax.set_ylabel("plan y")
+    ax.set_title(f"Network: link labels give |flow| [{_unit('flow')}]")
+    _note(ax, NETWORK_SAFETY)
     return ax
