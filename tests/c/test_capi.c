@@ -772,6 +772,8 @@ static void test_bad_pointers_others(void) {
   CHECK(hg_transition_limits(NAN, 0, 0, &x, &y) == HG_ERR_NOT_FINITE && msg_len() > 0, "limits NaN");
   CHECK(hg_transition_limits(3000, 0, 9, &x, &y) == HG_ERR_OUT_OF_RANGE, "limits correlation 9");
   const double pq[3] = {0.0, 1e-3, 2e-3}, ph[3] = {30.0, 25.0, 15.0};
+  /* exact: the monotone cubic passes through its own points */
+  CHECK(hg_pump_curve_head(pq, ph, 3, 1e-3, &x, &y) == HG_OK && x == 25.0, "pump head at a point");
   CHECK(hg_pump_curve_head(NULL, ph, 3, 1e-3, &x, &y) == HG_ERR_NULL_POINTER, "pump NULL flows");
   CHECK(hg_pump_curve_head(pq, NULL, 3, 1e-3, &x, &y) == HG_ERR_NULL_POINTER, "pump NULL heads");
   CHECK(hg_pump_curve_head(pq, ph, 3, 1e-3, NULL, &y) == HG_ERR_NULL_POINTER, "pump NULL out");
