@@ -81,6 +81,7 @@ fn _native(m: &Bound<'_, PyModule>) -> PyResult<()> {
     m.add_function(wrap_pyfunction!(sizes::pipe_sizes, m)?)?;
     m.add_function(wrap_pyfunction!(sizes::pipe_size, m)?)?;
     m.add_function(wrap_pyfunction!(sizes::smallest_pipe, m)?)?;
+    m.add_function(wrap_pyfunction!(sizes::pipe_size_dn, m)?)?;
 
     // band
     m.add_class::<band::PyBand>()?;
