@@ -88,6 +88,7 @@ fn _native(m: &Bound<'_, PyModule>) -> PyResult<()> {
     m.add_class::<band::PyUncertainty>()?;
     m.add_class::<band::PyMonteCarlo>()?;
     m.add_function(wrap_pyfunction!(band::monte_carlo, m)?)?;
+    m.add_function(wrap_pyfunction!(band::band_monte_carlo, m)?)?;
 
     // threads
     m.add_function(wrap_pyfunction!(threads::set_threads, m)?)?;

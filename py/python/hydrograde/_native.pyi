@@ -11,6 +11,7 @@ __all__ = [
     "__version__",
     "aged_roughness",
     "Band",
+    "band_monte_carlo",
     "convert",
     "convert_head",
     "correlation_validity",
@@ -541,6 +542,8 @@ def threads() -> int:
 def monte_carlo(
     line: Line, fluid: Fluid, flow: float, samples: Optional[int] = None, seed: int = 0
 ) -> MonteCarlo: ...
+
+def band_monte_carlo(line: Line, fluid: Fluid, flow: float) -> Optional[MonteCarlo]: ...
 
 @final
 class Line:
