@@ -43,7 +43,7 @@
  *  Fittings   hg_fitting_k, hg_fitting_catalogue_name
  *  Roughness and pipe sizes
  *             hg_roughness, hg_roughness_material_name, hg_roughness_aged,
- *             hg_pipe_size, hg_pipe_size_at_least, hg_pipe_table_schedule,
+ *             hg_pipe_size, hg_pipe_size_at_least, hg_pipe_size_dn, hg_pipe_table_schedule,
  *             hg_pipe_table_nominal, hg_pipe_tables,
  *             hg_pipe_table_source, hg_pipe_table_wall_rule
  *  Pipes      hg_pipe_flow; hg_pipe_head_loss, hg_pipe_head_loss_batch,
@@ -76,7 +76,7 @@
  *  Bands      hg_uncertainty_options, hg_monte_carlo, HG_MONTE_CARLO_MAX_SAMPLES;
  *             hg_line_system_curve_band,
  *             hg_uncertainty_options_default, hg_line_set_uncertainty,
- *             hg_line_monte_carlo
+ *             hg_line_monte_carlo, hg_line_band_monte_carlo
  *  Units      hg_convert, hg_convert_head, hg_unit_name
  *  Warnings   HG_WARN_*; hg_warning_name
  *  Version    HG_VERSION_*, HG_ABI_VERSION; hg_version, hg_abi_version
@@ -3091,7 +3091,8 @@ int32_t hg_line_system_curve_band(const struct hg_line *line,
  * a pipe whose Reynolds number reaches into the laminar–turbulent transition), sets
  * `*offered` = 1 and writes into `*out` the `hg_line_monte_carlo` run with 20,000
  * samples from seed 101 (the same bits in every binding), whose `low` and `high` are the
- * 95 % interval to use; otherwise sets `*offered` = 0 and leaves `*out` unchanged.
+ * 95 % interval to use; otherwise sets `*offered` = 0 and writes zeros (`samples` 0)
+ * into `*out`, which then holds no interval.
  * Costs one evaluation when not flagged, 20,000 when flagged.
  *
  * Returns `HG_OK`; `HG_ERR_NOT_FINITE` for the flow; the codes of `hg_line_evaluate` for

@@ -53,7 +53,8 @@ pub unsafe extern "C" fn hg_line_system_curve_band(
 /// a pipe whose Reynolds number reaches into the laminar–turbulent transition), sets
 /// `*offered` = 1 and writes into `*out` the `hg_line_monte_carlo` run with 20,000
 /// samples from seed 101 (the same bits in every binding), whose `low` and `high` are the
-/// 95 % interval to use; otherwise sets `*offered` = 0 and leaves `*out` unchanged.
+/// 95 % interval to use; otherwise sets `*offered` = 0 and writes zeros (`samples` 0)
+/// into `*out`, which then holds no interval.
 /// Costs one evaluation when not flagged, 20,000 when flagged.
 ///
 /// Returns `HG_OK`; `HG_ERR_NOT_FINITE` for the flow; the codes of `hg_line_evaluate` for
@@ -77,22 +78,19 @@ pub unsafe extern "C" fn hg_line_band_monte_carlo(
         unsafe { ffi::check_sized_out("out", out)? };
         // SAFETY: forwarded contract.
         let (l, f) = unsafe { crate::line::line_and_fluid(line, fluid)? };
-        let Some(m) = hydrograde::band::band_monte_carlo(l, f, flow)? else {
-            // SAFETY: forwarded contract; checked above.
-            return unsafe { ffi::put("offered", offered, 0) };
-        };
+        let m = hydrograde::band::band_monte_carlo(l, f, flow)?;
         let c = crate::line::hg_monte_carlo {
             struct_size: std::mem::size_of::<crate::line::hg_monte_carlo>(),
-            mean: m.mean,
-            std_dev: m.std_dev,
-            low: m.low,
-            high: m.high,
-            samples: m.samples,
+            mean: m.as_ref().map_or(0.0, |m| m.mean),
+            std_dev: m.as_ref().map_or(0.0, |m| m.std_dev),
+            low: m.as_ref().map_or(0.0, |m| m.low),
+            high: m.as_ref().map_or(0.0, |m| m.high),
+            samples: m.as_ref().map_or(0, |m| m.samples),
         };
         // SAFETY: forwarded contract; checked above.
         unsafe {
             ffi::write_sized("out", out, &c)?;
-            ffi::put("offered", offered, 1)
+            ffi::put("offered", offered, i32::from(m.is_some()))
         }
     })
 }

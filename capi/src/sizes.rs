@@ -30,21 +30,37 @@ pub unsafe extern "C" fn hg_pipe_size(
     wall: *mut f64,
     inside_diameter: *mut f64,
 ) -> i32 {
+    // SAFETY: forwarded contract.
+    unsafe {
+        dimensions(outside_diameter, wall, inside_diameter, || {
+            let (t, n, s) = (
+                ffi::c_str("table", table)?,
+                ffi::c_str("nominal", nominal)?,
+                ffi::c_str("schedule", schedule)?,
+            );
+            Ok(sizes::lookup(t.parse::<PipeTable>()?, n, s)?)
+        })
+    }
+}
+
+/// Checks the three outputs, finds the size and writes its dimensions: the body of
+/// `hg_pipe_size` and `hg_pipe_size_dn`.
+///
+/// # Safety
+/// The outputs NULL or writable doubles; `find` may read the caller's strings.
+unsafe fn dimensions(
+    outside_diameter: *mut f64,
+    wall: *mut f64,
+    inside_diameter: *mut f64,
+    find: impl FnOnce() -> ffi::FfiResult<sizes::PipeSize>,
+) -> i32 {
     guard(|| {
         ffi::check_outs(&[
             out_ptr("outside_diameter", outside_diameter),
             out_ptr("wall", wall),
             out_ptr("inside_diameter", inside_diameter),
         ])?;
-        // SAFETY: forwarded contract.
-        let (t, n, s) = unsafe {
-            (
-                ffi::c_str("table", table)?,
-                ffi::c_str("nominal", nominal)?,
-                ffi::c_str("schedule", schedule)?,
-            )
-        };
-        let p = sizes::lookup(t.parse::<PipeTable>()?, n, s)?;
+        let p = find()?;
         // SAFETY: forwarded contract; checked above.
         unsafe {
             put("outside_diameter", outside_diameter, p.outside_diameter)?;
@@ -77,27 +93,16 @@ pub unsafe extern "C" fn hg_pipe_size_dn(
     wall: *mut f64,
     inside_diameter: *mut f64,
 ) -> i32 {
-    guard(|| {
-        ffi::check_outs(&[
-            out_ptr("outside_diameter", outside_diameter),
-            out_ptr("wall", wall),
-            out_ptr("inside_diameter", inside_diameter),
-        ])?;
-        // SAFETY: forwarded contract.
-        let (t, s) = unsafe {
-            (
+    // SAFETY: forwarded contract.
+    unsafe {
+        dimensions(outside_diameter, wall, inside_diameter, || {
+            let (t, s) = (
                 ffi::c_str("table", table)?,
                 ffi::c_str("schedule", schedule)?,
-            )
-        };
-        let p = sizes::lookup_dn(t.parse::<PipeTable>()?, dn, s)?;
-        // SAFETY: forwarded contract; checked above.
-        unsafe {
-            put("outside_diameter", outside_diameter, p.outside_diameter)?;
-            put("wall", wall, p.wall)?;
-            put("inside_diameter", inside_diameter, p.inside_diameter)
-        }
-    })
+            );
+            Ok(sizes::lookup_dn(t.parse::<PipeTable>()?, dn, s)?)
+        })
+    }
 }
 
 /// The smallest standard pipe of `table` in `schedule` (as `hg_pipe_size`) whose inside

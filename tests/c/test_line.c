@@ -482,6 +482,8 @@ static void test_checks(void) {
     CHECK(hg_line_monte_carlo(t, w, q, 20000, 101, &b) == HG_OK && memcmp(&a, &b, sizeof a) == 0,
           "the documented run, bit for bit");
     CHECK(a.low < a.mean && a.mean < a.high && a.samples == 20000, "an interval");
+    CHECK(hg_line_band_monte_carlo(t, w, 1e-3, &offered, &a) == HG_OK && offered == 0 && a.samples == 0
+          && a.low == 0.0 && a.high == 0.0, "turbulent: nothing offered, zeros written");
     CHECK(hg_line_band_monte_carlo(t, w, NAN, &offered, &a) == HG_ERR_NOT_FINITE && msg_len() > 0, "offer NaN flow");
     CHECK(hg_line_band_monte_carlo(NULL, w, q, &offered, &a) == HG_ERR_NULL_POINTER, "offer NULL line");
     CHECK(hg_line_band_monte_carlo(t, w, q, NULL, &a) == HG_ERR_NULL_POINTER, "offer NULL flag");

@@ -27,6 +27,9 @@
 //! Metric tube is designated by outside diameter × wall, so its nominal size is the
 //! outside diameter as printed (`"60.3"`) and, where the standard has no named series,
 //! its "schedule" is the wall as printed (`"2.9"`).
+//!
+//! Tables whose standard assigns a nominal size DN to each outside diameter (EN 10220 and
+//! ISO 1127 series 1, DIN 11850) are also looked up by DN: [`lookup_dn`].
 
 mod metric;
 mod plastic;
@@ -187,7 +190,9 @@ impl PipeTable {
             PipeTable::PvcIso1452 => {
                 "ISO 1452-2, PVC-U pipes for water supply, minimum walls by SDR (from memory)"
             }
-            PipeTable::HygienicBpe => "ASME BPE, hygienic tubing OD sizes (from memory)",
+            PipeTable::HygienicBpe => {
+                "ASME BPE, hygienic tubing OD sizes (checked against a published ASTM A270 table; 3/8 in from memory)"
+            }
             PipeTable::HygienicDin11850 => {
                 "DIN 11850 (1985), stainless tubes for the food industry, series 1 to 3 (checked against a published copy)"
             }
