@@ -505,6 +505,27 @@ fn lines(out: &mut impl Write) -> io::Result<()> {
                 .system_curve(&fluid, &flows)
                 .map(|h| h.into_iter().map(D).collect());
             emit(out, "line_system_curve", &[I(sc), I(fi as i64)], r)?;
+            // The system curve's band: low, nominal and high at 20 flows through zero.
+            let flows: Vec<f64> = (0..20).map(|i| -5e-3 + 5e-4 * i as f64).collect();
+            let r = line.system_curve_band(&fluid, &flows).map(|c| {
+                c.low
+                    .iter()
+                    .chain(&c.nominal)
+                    .chain(&c.high)
+                    .map(|v| D(*v))
+                    .collect()
+            });
+            emit(out, "line_curve_band", &[I(sc), I(fi as i64)], r)?;
+            {
+                // The offered Monte Carlo interval: flagged or not, and the run when flagged.
+                for q in [2e-3, 2e-4, 2e-5, f64::NAN] {
+                    let r = hydrograde::band::band_monte_carlo(&line, &fluid, q).map(|m| match m {
+                        Some(m) => vec![I(1), D(m.mean), D(m.std_dev), D(m.low), D(m.high)],
+                        None => vec![I(0)],
+                    });
+                    emit(out, "line_band_mc", &[I(sc), I(fi as i64), D(q)], r)?;
+                }
+            }
         }
     }
     Ok(())

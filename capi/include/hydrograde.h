@@ -43,7 +43,7 @@
  *  Fittings   hg_fitting_k, hg_fitting_catalogue_name
  *  Roughness and pipe sizes
  *             hg_roughness, hg_roughness_material_name, hg_roughness_aged,
- *             hg_pipe_size, hg_pipe_size_at_least, hg_pipe_table_schedule,
+ *             hg_pipe_size, hg_pipe_size_at_least, hg_pipe_size_dn, hg_pipe_table_schedule,
  *             hg_pipe_table_nominal, hg_pipe_tables,
  *             hg_pipe_table_source, hg_pipe_table_wall_rule
  *  Pipes      hg_pipe_flow; hg_pipe_head_loss, hg_pipe_head_loss_batch,
@@ -78,7 +78,7 @@
  *  Bands      hg_uncertainty_options, hg_monte_carlo, HG_MONTE_CARLO_MAX_SAMPLES;
  *             hg_line_system_curve_band,
  *             hg_uncertainty_options_default, hg_line_set_uncertainty,
- *             hg_line_monte_carlo
+ *             hg_line_monte_carlo, hg_line_band_monte_carlo
  *  Units      hg_convert, hg_convert_head, hg_unit_name
  *  Warnings   HG_WARN_*; hg_warning_name
  *  Version    HG_VERSION_*, HG_ABI_VERSION; hg_version, hg_abi_version
@@ -1485,6 +1485,29 @@ int32_t hg_pipe_size(const char *table,
                      double *outside_diameter,
                      double *wall,
                      double *inside_diameter);
+
+/**
+ * Dimensions of a metric tube by its nominal size `dn` (DN): `table` "steel_en10220" or
+ * "stainless_iso1127" (series 1 outside diameters: DN 50 is 60.3 mm) or
+ * "hygienic_din11850" (the series picks the outside diameter: DN 25 in series "2" is
+ * 29 × 1.5 mm), `schedule` as `hg_pipe_size` (a wall "2.9", a series "2"): outside
+ * diameter, wall thickness and inside diameter, all in m, the same as `hg_pipe_size`
+ * with the row's outside diameter.
+ *
+ * Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` for a table that assigns no DN (the message
+ * names those that do), a DN the table does not list (the message lists them) or a
+ * schedule not made at that DN; `HG_ERR_INVALID` for a string not UTF-8;
+ * `HG_ERR_NULL_POINTER`. Thread-safe.
+ *
+ * # Safety
+ * The strings must be NULL or NUL-terminated; the outputs NULL or writable doubles.
+ */
+int32_t hg_pipe_size_dn(const char *table,
+                        uint32_t dn,
+                        const char *schedule,
+                        double *outside_diameter,
+                        double *wall,
+                        double *inside_diameter);
 
 /**
  * The smallest standard pipe of `table` in `schedule` (as `hg_pipe_size`) whose inside
@@ -3128,6 +3151,31 @@ int32_t hg_line_system_curve_band(const struct hg_line *line,
                                   double *low,
                                   double *nominal,
                                   double *high);
+
+/**
+ * The Monte Carlo interval offered with a band that flags itself non-linear: evaluates
+ * `line` at `flow` (m³/s) and, when its required-head band is flagged
+ * (`hg_line_totals.band_non_linear`: a band wider than ±20 % of its value, or
+ * a pipe whose Reynolds number reaches into the laminar–turbulent transition), sets
+ * `*offered` = 1 and writes into `*out` the `hg_line_monte_carlo` run with 20,000
+ * samples from seed 101 (the same bits in every binding), whose `low` and `high` are the
+ * 95 % interval to use; otherwise sets `*offered` = 0 and writes zeros (`samples` 0)
+ * into `*out`, which then holds no interval.
+ * Costs one evaluation when not flagged, 20,000 when flagged.
+ *
+ * Returns `HG_OK`; `HG_ERR_NOT_FINITE` for the flow; the codes of `hg_line_evaluate` for
+ * the line; `HG_ERR_INVALID` for a `struct_size` too small; `HG_ERR_NULL_POINTER`.
+ * Thread-safe (the line is only read).
+ *
+ * # Safety
+ * `line` and `fluid` must be NULL or live handles; `offered` NULL or writable; `out` NULL
+ * or a writable `hg_monte_carlo` of `out->struct_size` bytes.
+ */
+int32_t hg_line_band_monte_carlo(const struct hg_line *line,
+                                 const struct hg_fluid *fluid,
+                                 double flow,
+                                 int32_t *offered,
+                                 struct hg_monte_carlo *out);
 
 /**
  * Treats the pipes of catalogue material `material` as independent in the bands (each

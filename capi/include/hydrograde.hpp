@@ -12,6 +12,7 @@
 
 #include "hydrograde.h"
 
+#include <array>
 #include <cstddef>
 #include <cstdint>
 #include <stdexcept>
@@ -439,6 +440,36 @@ inline std::pair<double, double> pump_curve_head(const std::vector<double>& flow
   return {h, d};
 }
 
+/// A least-squares pump curve H(Q) = c0 + c1 Q + c2 Q² + c3 Q³ (SI units; c3 = 0 for a
+/// quadratic) with its residuals at the points (m).
+struct pump_fit {
+  std::array<double, 4> coefficients;
+  double rms_residual;
+  double max_residual;
+};
+
+/// The least-squares polynomial of degree 2 or 3 through pump points (flows increasing,
+/// m³/s; heads, m).
+inline pump_fit pump_curve_fit(const std::vector<double>& flows, const std::vector<double>& heads,
+                               int32_t degree = 2) {
+  if (flows.size() != heads.size()) throw error(HG_ERR_INVALID, "heads: length differs from flows'");
+  pump_fit f{};
+  check(hg_pump_curve_fit(flows.data(), heads.data(), flows.size(), degree, f.coefficients.data(),
+                          &f.rms_residual, &f.max_residual));
+  return f;
+}
+
+/// Head (m) and slope (s/m²) at a flow (m³/s) of the pump curve of `degree` through the
+/// points: 0 the monotone cubic (as pump_curve_head), 2 or 3 the least-squares fit.
+inline std::pair<double, double> pump_curve_fit_head(const std::vector<double>& flows,
+                                                     const std::vector<double>& heads,
+                                                     int32_t degree, double flow) {
+  if (flows.size() != heads.size()) throw error(HG_ERR_INVALID, "heads: length differs from flows'");
+  double h = 0.0, d = 0.0;
+  check(hg_pump_curve_fit_head(flows.data(), heads.data(), flows.size(), degree, flow, &h, &d));
+  return {h, d};
+}
+
 /// Saturation temperature of water (K) at absolute pressure (Pa).
 inline double water_saturation_temperature(double pressure) {
   double t = 0.0;
@@ -493,6 +524,16 @@ inline pipe_dimensions pipe_size(const std::string& table, const std::string& no
   pipe_dimensions d{};
   check(hg_pipe_size(table.c_str(), nominal.c_str(), schedule.c_str(), &d.outside_diameter,
                      &d.wall, &d.inside_diameter));
+  return d;
+}
+
+/// A metric tube by nominal size DN ("steel_en10220", "stainless_iso1127",
+/// "hygienic_din11850") and schedule, wall or series as printed.
+inline pipe_dimensions pipe_size_dn(const std::string& table, uint32_t dn,
+                                    const std::string& schedule) {
+  pipe_dimensions d{};
+  check(hg_pipe_size_dn(table.c_str(), dn, schedule.c_str(), &d.outside_diameter, &d.wall,
+                        &d.inside_diameter));
   return d;
 }
 
@@ -898,6 +939,20 @@ class line {
     check(hg_line_operating_point(l_, f.get(), pump_flows.data(), pump_heads.data(),
                                   pump_flows.size(), &p.flow, &p.head, &p.flow_low, &p.flow_high,
                                   &p.head_low, &p.head_high));
+    return p;
+  }
+  /// The operating point with the pump curve of `degree`: 0 the monotone cubic through
+  /// the points (as operating_point), 2 or 3 the least-squares fit (pump_curve_fit).
+  hydrograde::operating_point operating_point_fit(const fluid& f,
+                                                  const std::vector<double>& pump_flows,
+                                                  const std::vector<double>& pump_heads,
+                                                  int32_t degree) const {
+    if (pump_flows.size() != pump_heads.size())
+      throw error(HG_ERR_INVALID, "pump_heads: length differs from pump_flows'");
+    hydrograde::operating_point p{};
+    check(hg_line_operating_point_fit(l_, f.get(), pump_flows.data(), pump_heads.data(),
+                                      pump_flows.size(), degree, &p.flow, &p.head, &p.flow_low,
+                                      &p.flow_high, &p.head_low, &p.head_high));
     return p;
   }
   /// Sizes the round pipes for flow under a limit (HG_LIMIT_*), optionally to a standard

@@ -47,6 +47,54 @@ pub unsafe extern "C" fn hg_line_system_curve_band(
     })
 }
 
+/// The Monte Carlo interval offered with a band that flags itself non-linear: evaluates
+/// `line` at `flow` (m³/s) and, when its required-head band is flagged
+/// (`hg_line_totals.band_non_linear`: a band wider than ±20 % of its value, or
+/// a pipe whose Reynolds number reaches into the laminar–turbulent transition), sets
+/// `*offered` = 1 and writes into `*out` the `hg_line_monte_carlo` run with 20,000
+/// samples from seed 101 (the same bits in every binding), whose `low` and `high` are the
+/// 95 % interval to use; otherwise sets `*offered` = 0 and writes zeros (`samples` 0)
+/// into `*out`, which then holds no interval.
+/// Costs one evaluation when not flagged, 20,000 when flagged.
+///
+/// Returns `HG_OK`; `HG_ERR_NOT_FINITE` for the flow; the codes of `hg_line_evaluate` for
+/// the line; `HG_ERR_INVALID` for a `struct_size` too small; `HG_ERR_NULL_POINTER`.
+/// Thread-safe (the line is only read).
+///
+/// # Safety
+/// `line` and `fluid` must be NULL or live handles; `offered` NULL or writable; `out` NULL
+/// or a writable `hg_monte_carlo` of `out->struct_size` bytes.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_band_monte_carlo(
+    line: *const hg_line,
+    fluid: *const hg_fluid,
+    flow: f64,
+    offered: *mut i32,
+    out: *mut crate::line::hg_monte_carlo,
+) -> i32 {
+    guard(|| {
+        ffi::check_outs(&[ffi::out_ptr("offered", offered)])?;
+        // SAFETY: forwarded contract.
+        unsafe { ffi::check_sized_out("out", out)? };
+        // SAFETY: forwarded contract.
+        let (l, f) = unsafe { crate::line::line_and_fluid(line, fluid)? };
+        let m = hydrograde::band::band_monte_carlo(l, f, flow)?;
+        let c = crate::line::hg_monte_carlo {
+            struct_size: std::mem::size_of::<crate::line::hg_monte_carlo>(),
+            mean: m.as_ref().map_or(0.0, |m| m.mean),
+            std_dev: m.as_ref().map_or(0.0, |m| m.std_dev),
+            low: m.as_ref().map_or(0.0, |m| m.low),
+            high: m.as_ref().map_or(0.0, |m| m.high),
+            samples: m.as_ref().map_or(0, |m| m.samples),
+        };
+        // SAFETY: forwarded contract; checked above.
+        unsafe {
+            ffi::write_sized("out", out, &c)?;
+            ffi::put("offered", offered, i32::from(m.is_some()))
+        }
+    })
+}
+
 /// Treats the pipes of catalogue material `material` as independent in the bands (each
 /// pipe its own roughness error, as for pipes from different supplies) when `independent`
 /// is 1, or as sharing one error (the default) when 0.

@@ -30,21 +30,37 @@ pub unsafe extern "C" fn hg_pipe_size(
     wall: *mut f64,
     inside_diameter: *mut f64,
 ) -> i32 {
+    // SAFETY: forwarded contract.
+    unsafe {
+        dimensions(outside_diameter, wall, inside_diameter, || {
+            let (t, n, s) = (
+                ffi::c_str("table", table)?,
+                ffi::c_str("nominal", nominal)?,
+                ffi::c_str("schedule", schedule)?,
+            );
+            Ok(sizes::lookup(t.parse::<PipeTable>()?, n, s)?)
+        })
+    }
+}
+
+/// Checks the three outputs, finds the size and writes its dimensions: the body of
+/// `hg_pipe_size` and `hg_pipe_size_dn`.
+///
+/// # Safety
+/// The outputs NULL or writable doubles; `find` may read the caller's strings.
+unsafe fn dimensions(
+    outside_diameter: *mut f64,
+    wall: *mut f64,
+    inside_diameter: *mut f64,
+    find: impl FnOnce() -> ffi::FfiResult<sizes::PipeSize>,
+) -> i32 {
     guard(|| {
         ffi::check_outs(&[
             out_ptr("outside_diameter", outside_diameter),
             out_ptr("wall", wall),
             out_ptr("inside_diameter", inside_diameter),
         ])?;
-        // SAFETY: forwarded contract.
-        let (t, n, s) = unsafe {
-            (
-                ffi::c_str("table", table)?,
-                ffi::c_str("nominal", nominal)?,
-                ffi::c_str("schedule", schedule)?,
-            )
-        };
-        let p = sizes::lookup(t.parse::<PipeTable>()?, n, s)?;
+        let p = find()?;
         // SAFETY: forwarded contract; checked above.
         unsafe {
             put("outside_diameter", outside_diameter, p.outside_diameter)?;
@@ -52,6 +68,41 @@ pub unsafe extern "C" fn hg_pipe_size(
             put("inside_diameter", inside_diameter, p.inside_diameter)
         }
     })
+}
+
+/// Dimensions of a metric tube by its nominal size `dn` (DN): `table` "steel_en10220" or
+/// "stainless_iso1127" (series 1 outside diameters: DN 50 is 60.3 mm) or
+/// "hygienic_din11850" (the series picks the outside diameter: DN 25 in series "2" is
+/// 29 × 1.5 mm), `schedule` as `hg_pipe_size` (a wall "2.9", a series "2"): outside
+/// diameter, wall thickness and inside diameter, all in m, the same as `hg_pipe_size`
+/// with the row's outside diameter.
+///
+/// Returns `HG_OK`; `HG_ERR_UNKNOWN_NAME` for a table that assigns no DN (the message
+/// names those that do), a DN the table does not list (the message lists them) or a
+/// schedule not made at that DN; `HG_ERR_INVALID` for a string not UTF-8;
+/// `HG_ERR_NULL_POINTER`. Thread-safe.
+///
+/// # Safety
+/// The strings must be NULL or NUL-terminated; the outputs NULL or writable doubles.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_pipe_size_dn(
+    table: *const c_char,
+    dn: u32,
+    schedule: *const c_char,
+    outside_diameter: *mut f64,
+    wall: *mut f64,
+    inside_diameter: *mut f64,
+) -> i32 {
+    // SAFETY: forwarded contract.
+    unsafe {
+        dimensions(outside_diameter, wall, inside_diameter, || {
+            let (t, s) = (
+                ffi::c_str("table", table)?,
+                ffi::c_str("schedule", schedule)?,
+            );
+            Ok(sizes::lookup_dn(t.parse::<PipeTable>()?, dn, s)?)
+        })
+    }
 }
 
 /// The smallest standard pipe of `table` in `schedule` (as `hg_pipe_size`) whose inside

@@ -228,7 +228,9 @@ pub struct Band {
     /// number of some pipe reaches into the laminar–turbulent transition within its own
     /// 95 % range ([`reaches_transition`]). The Monte Carlo interval
     /// ([`monte_carlo`]; C `hg_line_monte_carlo`, Python `hydrograde.monte_carlo`) is then
-    /// the one to use.
+    /// the one to use: [`band_monte_carlo`] (C `hg_line_band_monte_carlo`, Python
+    /// `hydrograde.band_monte_carlo`) offers it with a fixed seed and sample count
+    /// whenever a line's required-head band carries this flag.
     #[serde(default)]
     pub non_linear: bool,
 }
@@ -620,7 +622,9 @@ pub fn log_uniform(nominal: f64, low: f64, high: f64) -> (f64, f64) {
 pub const MONTE_CARLO_SAMPLES: usize = 20_000;
 
 mod monte;
-pub use monte::{MAX_SAMPLES, MIN_SAMPLES, MonteCarlo, monte_carlo};
+pub use monte::{
+    BAND_MONTE_CARLO_SEED, MAX_SAMPLES, MIN_SAMPLES, MonteCarlo, band_monte_carlo, monte_carlo,
+};
 
 #[cfg(test)]
 mod tests {

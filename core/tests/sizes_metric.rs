@@ -11,16 +11,28 @@
 //! - EN 1057: UK maker's list (Lawton Tubes: 6–219 mm, walls of tables X and Y) and a
 //!   Greek maker's list (Halcor TALOS: 10–54 mm, with printed inside diameters).
 //! - ASME BPE / ASTM A270 sanitary tube: 1/2, 3/4, 1, 1-1/2 in OD with 0.065 in wall
-//!   (a maker's A269/A270 sanitary tubing list).
+//!   (a maker's A269/A270 sanitary tubing list); every row but 3/8 in (1/4 × 0.035,
+//!   1/2 to 3 × 0.065, 4 × 0.083, 6 × 0.109) against the ASTM A270 dimension table of
+//!   https://www.yaolongmetal.com/product/sanitary-tubing/astm-a270-sanitary-tube/
+//!   (a maker's page; 3/8 in is not on it and stays from memory).
+//! - DN of ISO 4200 series 1 outside diameters: DN 15/20/25/32 = 21.3/26.9/33.7/42.4 mm
+//!   (EN 10253-4 reducer table,
+//!   https://officineorsi.com/eng/pagina/products/fittings/reducers/reducers-en-10253-4-dimension-tolerances);
+//!   DN 40/50/80/100/150/200/250/300/350/400 = 48.3/60.3/88.9/114.3/168.3/219.1/273/
+//!   323.9/355.6/406.4 mm (metric column of https://www.epco-plastics.com/calculator).
+//! - DN of DIN 11850 rows: DIN 11850:1985 Table 1 (the published copy above).
 //! - ISO 1127 wall tolerance classes T1–T4 symmetric, ±15 % to ±7.5 % (schenk-stahl.de
 //!   technical tables): the nominal wall is the mean wall.
 //! - ASTM D1785 wall tolerance: the min/max walls of a published metric copy of
 //!   D1785-88 (checked in core/src/sizes/plastic.rs).
 //!
-//! Everything else is from memory and says so.
+//! Not found in any published copy searched (the stored pages held the standards'
+//! title pages, not their tables): the walls of EN 10220 and ISO 1127, the ISO 2037 rows
+//! and the ISO 1452-2 walls and tolerance. Those stay "from memory" in the module and
+//! here. Everything else is from memory and says so.
 
 use hydrograde::ErrorKind;
-use hydrograde::sizes::{PipeTable, lookup, pipe_tables, smallest_at_least};
+use hydrograde::sizes::{PipeTable, lookup, lookup_dn, pipe_tables, smallest_at_least};
 
 const MM: f64 = 1e-3;
 
@@ -254,4 +266,121 @@ fn unknown_names_suggest_the_close_ones() {
     let e = "cast_iron".parse::<PipeTable>().unwrap_err();
     assert!(!e.to_string().contains("did you mean"), "{e}");
     assert!(e.to_string().contains("hygienic_din11850"), "{e}");
+}
+
+#[test]
+fn asme_bpe_rows_match_a_published_a270_table() {
+    use PipeTable::HygienicBpe as BPE;
+    // (OD in, wall in): ASTM A270 dimension table, yaolongmetal.com (URL in the header).
+    let checked = [
+        ("1/4", "0.035"),
+        ("1/2", "0.065"),
+        ("3/4", "0.065"),
+        ("1", "0.065"),
+        ("1-1/2", "0.065"),
+        ("2", "0.065"),
+        ("2-1/2", "0.065"),
+        ("3", "0.065"),
+        ("4", "0.083"),
+        ("6", "0.109"),
+    ];
+    for (od, w) in checked {
+        let p = lookup(BPE, od, w).unwrap();
+        let (od_in, w_in): (f64, f64) = (hydrograde_parse(od), w.parse().unwrap());
+        assert!((p.outside_diameter - od_in * 0.0254).abs() < 1e-15, "{od}");
+        assert!((p.wall - w_in * 0.0254).abs() < 1e-15, "{od}");
+        // The same OD in the other walls is not a BPE size on that table.
+        assert_eq!(
+            BPE.sizes().iter().filter(|q| q.nominal == od).count(),
+            1,
+            "{od}"
+        );
+    }
+}
+
+/// "1-1/2" → 1.5 (the test's own reading of a printed size).
+fn hydrograde_parse(s: &str) -> f64 {
+    let frac = |t: &str| match t.split_once('/') {
+        Some((a, b)) => a.parse::<f64>().unwrap() / b.parse::<f64>().unwrap(),
+        None => t.parse().unwrap(),
+    };
+    match s.split_once('-') {
+        Some((w, f)) => w.parse::<f64>().unwrap() + frac(f),
+        None => frac(s),
+    }
+}
+
+#[test]
+fn dn_lookup_finds_the_published_outside_diameters() {
+    // ISO 4200 series 1: EN 10253-4 reducer table and the epco metric column (header).
+    let published = [
+        (15, 21.3),
+        (20, 26.9),
+        (25, 33.7),
+        (32, 42.4),
+        (40, 48.3),
+        (50, 60.3),
+        (80, 88.9),
+        (100, 114.3),
+        (150, 168.3),
+        (200, 219.1),
+        (250, 273.0),
+        (300, 323.9),
+        (350, 355.6),
+        (400, 406.4),
+    ];
+    for (dn, od) in published {
+        // 6.3 mm from DN 65 up, 2.9 mm below (walls made at every one of those sizes).
+        let wall = if dn >= 65 { "6.3" } else { "2.9" };
+        let p = lookup_dn(PipeTable::SteelEn10220, dn, wall).unwrap();
+        assert!((p.outside_diameter - od * MM).abs() < 1e-15, "DN {dn}");
+        assert_eq!(
+            p,
+            lookup(PipeTable::SteelEn10220, &p.nominal, wall).unwrap()
+        );
+    }
+    // ISO 1127 shares the series: DN 50 is 60.3 mm (same sources); 60.3 × 2.0 bore 56.3.
+    let p = lookup_dn(PipeTable::StainlessIso1127, 50, "2.0").unwrap();
+    assert!((p.inside_diameter - 56.3 * MM).abs() < 1e-15);
+    // DIN 11850:1985 Table 1: the series picks the outside diameter at one DN.
+    for (dn, series, od) in [
+        (25, "1", "28"),
+        (25, "2", "29"),
+        (25, "3", "30"),
+        (50, "1", "52"),
+        (50, "3", "54"),
+        (65, "2", "70"),
+        (150, "1", "154"),
+    ] {
+        assert_eq!(
+            lookup_dn(PipeTable::HygienicDin11850, dn, series)
+                .unwrap()
+                .nominal,
+            od,
+            "DN {dn} series {series}"
+        );
+    }
+    assert_eq!(
+        PipeTable::HygienicDin11850.dn_sizes(),
+        vec![10, 15, 20, 25, 32, 40, 50, 65, 80, 100, 125, 150]
+    );
+    // ISO 1127 stops at 323.9 mm: DN 300 is its last DN.
+    assert_eq!(PipeTable::StainlessIso1127.dn_sizes().last(), Some(&300));
+}
+
+#[test]
+fn dn_lookup_errors_name_the_input_and_suggest() {
+    let e = lookup_dn(PipeTable::SteelEn10220, 55, "2.9").unwrap_err();
+    assert_eq!(e.kind(), ErrorKind::UnknownName);
+    let m = e.to_string();
+    assert!(m.contains("\"55\"") && m.contains("50, 65"), "{m}");
+    let e = lookup_dn(PipeTable::Copper, 50, "L").unwrap_err();
+    let m = e.to_string();
+    assert!(m.contains("copper") && m.contains("steel_en10220"), "{m}");
+    // DN 10 (17.2 mm) is not made with a 4.0 mm wall in this table: the walls that are.
+    let e = lookup_dn(PipeTable::SteelEn10220, 10, "4.0").unwrap_err();
+    let m = e.to_string();
+    assert!(m.contains("DN 10") && m.contains("3.2"), "{m}");
+    let e = lookup_dn(PipeTable::HygienicDin11850, 25, "4").unwrap_err();
+    assert_eq!(e.kind(), ErrorKind::UnknownName);
 }

@@ -6,7 +6,8 @@ use crate::fluid::PyFluid;
 use crate::line::PyLine;
 use crate::state;
 use hydrograde::band::{
-    Band, MONTE_CARLO_SAMPLES, MonteCarlo, UncertaintyOptions, monte_carlo as core_monte_carlo,
+    Band, MONTE_CARLO_SAMPLES, MonteCarlo, UncertaintyOptions,
+    band_monte_carlo as core_band_monte_carlo, monte_carlo as core_monte_carlo,
 };
 use pyo3::exceptions::PyTypeError;
 use pyo3::prelude::*;
@@ -526,4 +527,23 @@ pub fn monte_carlo(
         .detach(|| core_monte_carlo(&line.inner, &fluid.inner, flow, samples, seed))
         .py()?;
     Ok(PyMonteCarlo { inner: m })
+}
+
+/// The Monte Carlo interval offered when ``line``'s required-head band at ``flow`` (m³/s)
+/// flags itself non-linear (``Band.non_linear``: wider than ±20 % of its value, or a pipe
+/// whose Reynolds number reaches into the laminar–turbulent transition): a ``MonteCarlo``
+/// of 20,000 samples from seed 101 (the same bits as Rust and C), whose ``low`` and
+/// ``high`` are the 95 % interval to use; ``None`` when the first-order band stands.
+/// Runs with the GIL released.
+#[pyfunction]
+pub fn band_monte_carlo(
+    py: Python<'_>,
+    line: &PyLine,
+    fluid: &PyFluid,
+    #[pyo3(from_py_with = crate::arrays::si::flow)] flow: f64,
+) -> PyResult<Option<PyMonteCarlo>> {
+    let m = py
+        .detach(|| core_band_monte_carlo(&line.inner, &fluid.inner, flow))
+        .py()?;
+    Ok(m.map(|inner| PyMonteCarlo { inner }))
 }

@@ -82,12 +82,14 @@ fn _native(m: &Bound<'_, PyModule>) -> PyResult<()> {
     m.add_function(wrap_pyfunction!(sizes::pipe_sizes, m)?)?;
     m.add_function(wrap_pyfunction!(sizes::pipe_size, m)?)?;
     m.add_function(wrap_pyfunction!(sizes::smallest_pipe, m)?)?;
+    m.add_function(wrap_pyfunction!(sizes::pipe_size_dn, m)?)?;
 
     // band
     m.add_class::<band::PyBand>()?;
     m.add_class::<band::PyUncertainty>()?;
     m.add_class::<band::PyMonteCarlo>()?;
     m.add_function(wrap_pyfunction!(band::monte_carlo, m)?)?;
+    m.add_function(wrap_pyfunction!(band::band_monte_carlo, m)?)?;
 
     // threads
     m.add_function(wrap_pyfunction!(threads::set_threads, m)?)?;

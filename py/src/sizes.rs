@@ -1,5 +1,5 @@
 //! Standard pipe tables (`hydrograde.pipe_tables`, `pipe_sizes`, `pipe_size`,
-//! `smallest_pipe`).
+//! `pipe_size_dn`, `smallest_pipe`).
 
 use crate::arrays::si;
 use crate::errors::CoreResult;
@@ -65,6 +65,22 @@ pub fn pipe_size<'py>(
     size_dict(
         py,
         &sizes::lookup(self::table(table)?, nominal, schedule).py()?,
+    )
+}
+
+/// The metric tube of nominal size ``dn`` (DN) in ``schedule`` of ``table``
+/// (``"steel_en10220"``, ``"stainless_iso1127"``: DN 50 is 60.3 mm; ``"hygienic_din11850"``:
+/// the series picks the outside diameter), as a dict (m).
+#[pyfunction]
+pub fn pipe_size_dn<'py>(
+    py: Python<'py>,
+    table: &str,
+    dn: u32,
+    schedule: &str,
+) -> PyResult<Bound<'py, PyDict>> {
+    size_dict(
+        py,
+        &sizes::lookup_dn(self::table(table)?, dn, schedule).py()?,
     )
 }
 

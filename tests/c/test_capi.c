@@ -737,6 +737,18 @@ static void test_bad_pointers_others(void) {
         && fabs(y - 0.01055) < 1e-15, "PE 110 SDR 11: bore %.17g", z);
   /* DIN 11850 series 2, DN 25: 29 x 1.5 mm, bore 26 mm (DIN 11850:1985 Table 1, published copy). */
   CHECK(hg_pipe_size("hygienic_din11850", "29", "2", &x, &y, &z) == HG_OK && fabs(z - 0.026) < 1e-15, "DIN 11850 29 x 1.5");
+  /* By DN: DIN 11850 DN 25 series 2 is 29 x 1.5 (DIN 11850:1985 Table 1, published copy);
+   * EN 10220 DN 50 is 60.3 mm (published copies, see core/tests/sizes_metric.rs). */
+  CHECK(hg_pipe_size_dn("hygienic_din11850", 25, "2", &x, &y, &z) == HG_OK && fabs(x - 0.029) < 1e-15
+        && fabs(z - 0.026) < 1e-15, "DIN 11850 DN 25 series 2");
+  CHECK(hg_pipe_size_dn("steel_en10220", 50, "2.9", &x, &y, &z) == HG_OK && fabs(x - 0.0603) < 1e-15, "DN 50");
+  CHECK(hg_pipe_size_dn("steel_en10220", 55, "2.9", &x, &y, &z) == HG_ERR_UNKNOWN_NAME, "DN 55");
+  hg_last_error(text, sizeof text);
+  CHECK(strstr(text, "50, 65") != NULL, "DN list: %s", text);
+  CHECK(hg_pipe_size_dn("pe_iso4427", 100, "SDR 11", &x, &y, &z) == HG_ERR_UNKNOWN_NAME, "PE has no DN");
+  CHECK(hg_pipe_size_dn("steel_en10220", 50, "\xff", &x, &y, &z) == HG_ERR_INVALID, "DN schedule not UTF-8");
+  CHECK(hg_pipe_size_dn("steel_en10220", 50, "2.9", NULL, &y, &z) == HG_ERR_NULL_POINTER, "DN NULL output");
+  CHECK(hg_pipe_size_dn(NULL, 50, "2.9", &x, &y, &z) == HG_ERR_NULL_POINTER, "DN NULL table");
   CHECK(hg_pipe_size("stel", "2", "40", &x, &y, &z) == HG_ERR_UNKNOWN_NAME, "misspelt table");
   hg_last_error(text, sizeof text);
   CHECK(strstr(text, "did you mean \"steel\"?") != NULL, "suggestion: %s", text);

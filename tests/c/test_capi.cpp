@@ -249,6 +249,47 @@ static void test_line() {
   CHECK(lim.first == 64.0 / 3000.0 && lim.second > 0.0, "laminar limit 64/Re");  // exact: Hagen–Poiseuille
   auto ph = hg::pump_curve_head({0.0, 1e-3, 2e-3}, {30.0, 25.0, 15.0}, 1e-3);
   CHECK(ph.first == 25.0 && ph.second < 0.0, "pump curve through its points");
+  {
+    // Points on H = 40 - 20000 Q² (an exact quadratic) give that parabola back (exact
+    // solution); the wrapper's numbers equal the C calls' bit for bit.
+    std::vector<double> q, h;
+    for (int i = 0; i < 7; i++) {
+      q.push_back(0.005 * i);
+      h.push_back(40.0 - 20000.0 * q.back() * q.back());
+    }
+    hg::pump_fit pf = hg::pump_curve_fit(q, h);
+    double c[4], rms, mx;
+    CHECK(hg_pump_curve_fit(q.data(), h.data(), q.size(), 2, c, &rms, &mx) == HG_OK, "C fit");
+    CHECK(std::memcmp(c, pf.coefficients.data(), sizeof c) == 0 && same_bits(rms, pf.rms_residual) &&
+              same_bits(mx, pf.max_residual),
+          "fit equals the C call bit for bit");
+    CHECK(std::fabs(pf.coefficients[0] - 40.0) < 1e-11 && std::fabs(pf.coefficients[2] / -20000.0 - 1) < 1e-11 &&
+              pf.coefficients[3] == 0.0 && pf.rms_residual < 1e-12,
+          "quadratic recovered");
+    CHECK(hg::pump_curve_fit(q, h, 3).max_residual < 1e-11, "cubic through a quadratic");
+    auto fh = hg::pump_curve_fit_head(q, h, 2, 0.015);
+    CHECK(std::fabs(fh.first - 35.5) < 1e-11 && std::fabs(fh.second / -600.0 - 1) < 1e-10, "fit head and slope");
+    hg::line pl;
+    pl.add_pipe(0.08, 150.0, 4.5e-5).add_rise(12.0);
+    hg::operating_point o2 = pl.operating_point_fit(water, q, h, 2);
+    CHECK(std::fabs(pl.required_head(water, o2.flow).head_loss / o2.head - 1) < 1e-9, "fit op on the line");
+    CHECK(same_bits(hg::pump_curve_fit_head(q, h, 2, o2.flow).first, o2.head), "fit op on the fit");
+    hg::operating_point o0 = pl.operating_point_fit(water, q, h, 0);
+    hg::operating_point oc = pl.operating_point(water, q, h);
+    CHECK(std::memcmp(&o0, &oc, sizeof o0) == 0, "degree 0 is the monotone cubic, bit for bit");
+    auto fe = thrown([&] { hg::pump_curve_fit(q, h, 4); });
+    CHECK(fe.first == HG_ERR_OUT_OF_RANGE && fe.second.find("degree") != std::string::npos, fe.second.c_str());
+    CHECK(thrown([&] { pl.operating_point_fit(water, q, h, -1); }).first == HG_ERR_OUT_OF_RANGE, "op degree");
+    CHECK(thrown([&] { hg::pump_curve_fit(q, {1.0}); }).first == HG_ERR_INVALID, "lengths differ");
+    // EN 10220 DN 50 is 60.3 mm (published copies, see core/tests/sizes_metric.rs);
+    // 60.3 x 2.9 bore 54.5 mm (exact arithmetic).
+    hg::pipe_dimensions dn = hg::pipe_size_dn("steel_en10220", 50, "2.9");
+    hg::pipe_dimensions od = hg::pipe_size("steel_en10220", "60.3", "2.9");
+    CHECK(same_bits(dn.inside_diameter, od.inside_diameter) && std::fabs(dn.inside_diameter - 0.0545) < 1e-15,
+          "DN 50 is 60.3 x 2.9");
+    auto de = thrown([] { hg::pipe_size_dn("copper", 50, "L"); });
+    CHECK(de.first == HG_ERR_UNKNOWN_NAME && de.second.find("steel_en10220") != std::string::npos, de.second.c_str());
+  }
   hg::head_loss_result rh = all.required_head(wet, 5e-3);
   CHECK(rh.dhead_dflow > 0.0 && std::fabs(rh.head_loss - all.evaluate(wet, 5e-3).totals().required_head) <= 1e-12 * rh.head_loss,
         "required head");

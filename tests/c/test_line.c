@@ -196,6 +196,22 @@ static long check_line_record(const record *r, int quiet) {
     s = hg_line_monte_carlo(l, f, r->in[2].d, (size_t)r->in[3].i, (uint64_t)r->in[4].i, &m);
     double g[] = {m.mean, m.std_dev, m.low, m.high, (double)m.samples};
     memcpy(got, g, sizeof g), ngot = 5;
+  } else if (strcmp(r->tag, "line_curve_band") == 0) {
+    /* Low, nominal and high along the system curve, 20 flows through zero. */
+    double q[20];
+    for (int i = 0; i < 20; i++) q[i] = -5e-3 + 5e-4 * i;
+    s = hg_line_system_curve_band(l, f, q, 20, got, got + 20, got + 40), ngot = 60;
+  } else if (strcmp(r->tag, "line_band_mc") == 0) {
+    hg_monte_carlo m;
+    memset(&m, 0, sizeof m);
+    m.struct_size = sizeof m;
+    int32_t offered = -1;
+    s = hg_line_band_monte_carlo(l, f, r->in[2].d, &offered, &m);
+    got[0] = offered, ngot = 1;
+    if (offered == 1) {
+      double g[] = {m.mean, m.std_dev, m.low, m.high};
+      memcpy(got + 1, g, sizeof g), ngot = 5;
+    }
   } else if (strcmp(r->tag, "line_system_curve") == 0) {
     double q[50];
     for (int i = 0; i < 50; i++) q[i] = -5e-3 + 2.5e-4 * i;
@@ -448,6 +464,35 @@ static void test_checks(void) {
   CHECK(hg_line_monte_carlo(NULL, f, 2e-3, 200, 1, &m) == HG_ERR_NULL_POINTER, "monte carlo NULL line");
   CHECK(hg_line_monte_carlo(l, NULL, 2e-3, 200, 1, &m) == HG_ERR_NULL_POINTER, "monte carlo NULL fluid");
   CHECK(hg_line_monte_carlo(l, f, 2e-3, 200, 1, NULL) == HG_ERR_NULL_POINTER, "monte carlo NULL out");
+  {
+    /* The offered interval: 20 m of smooth 20 mm tube at Re = 3000, inside the transition
+     * 2300...4000 (common practice), flags its band; the offer is hg_line_monte_carlo with
+     * 20,000 samples from seed 101, bit for bit. At 2 L/s in lines[0] nothing is offered
+     * when the band is not flagged. */
+    hg_line *t = NULL;
+    hg_fluid *w = NULL;
+    CHECK(hg_fluid_liquid(998.2, 1.002e-3, &w) == HG_OK && hg_line_new(&t) == HG_OK
+          && hg_line_add_pipe(t, 0.02, 20.0, 0.0) == HG_OK, "transitional tube");
+    double q = 3000.0 * (1.002e-3 / 998.2) * 3.14159265358979323846 * 0.02 / 4.0;
+    hg_monte_carlo a, b;
+    memset(&a, 0, sizeof a), memset(&b, 0, sizeof b);
+    a.struct_size = sizeof a, b.struct_size = sizeof b;
+    int32_t offered = -1;
+    CHECK(hg_line_band_monte_carlo(t, w, q, &offered, &a) == HG_OK && offered == 1, "offered: %s", last_msg());
+    CHECK(hg_line_monte_carlo(t, w, q, 20000, 101, &b) == HG_OK && memcmp(&a, &b, sizeof a) == 0,
+          "the documented run, bit for bit");
+    CHECK(a.low < a.mean && a.mean < a.high && a.samples == 20000, "an interval");
+    CHECK(hg_line_band_monte_carlo(t, w, 1e-3, &offered, &a) == HG_OK && offered == 0 && a.samples == 0
+          && a.low == 0.0 && a.high == 0.0, "turbulent: nothing offered, zeros written");
+    CHECK(hg_line_band_monte_carlo(t, w, NAN, &offered, &a) == HG_ERR_NOT_FINITE && msg_len() > 0, "offer NaN flow");
+    CHECK(hg_line_band_monte_carlo(NULL, w, q, &offered, &a) == HG_ERR_NULL_POINTER, "offer NULL line");
+    CHECK(hg_line_band_monte_carlo(t, w, q, NULL, &a) == HG_ERR_NULL_POINTER, "offer NULL flag");
+    CHECK(hg_line_band_monte_carlo(t, w, q, &offered, NULL) == HG_ERR_NULL_POINTER, "offer NULL out");
+    a.struct_size = 0;
+    CHECK(hg_line_band_monte_carlo(t, w, q, &offered, &a) == HG_ERR_INVALID, "offer struct_size 0");
+    hg_line_free(t);
+    hg_fluid_free(w);
+  }
   CHECK(hg_line_monte_carlo(l, f, 2e-3, 0, 1, &m) == HG_ERR_OUT_OF_RANGE && msg_len() > 0, "0 samples");
   CHECK(hg_line_monte_carlo(l, f, 2e-3, 99, 1, &m) == HG_ERR_OUT_OF_RANGE, "99 samples");
   /* Far more samples than memory holds must be refused, not attempted. */
@@ -1312,7 +1357,8 @@ int main(int argc, char **argv) {
   hg_fluid_free(gas);
   const char *tags[] = {"line_eval", "line_element", "line_band_source", "line_required_head", "line_uniform",
                         "line_flow_for_head", "line_system_curve", "line_operating_point", "line_split_flow", "line_split_bands",
-                        "line_size", "line_elem_source", "line_eval_at", "line_monte_carlo"};
+                        "line_size", "line_elem_source", "line_eval_at", "line_monte_carlo", "line_curve_band",
+                        "line_band_mc"};
   for (size_t i = 0; i < sizeof tags / sizeof *tags; i++) {
     for_each_record(ref_path, tags[i], check_line_record, 1);
     CHECK(records_seen > 0, "no reference record for %s", tags[i]);

@@ -92,3 +92,21 @@ def test_unknown_tables_and_sizes_suggest_close_names():
         hg.smallest_pipe("iso4427", "SDR 11", 0.05)
     with pytest.raises(hg.UnknownNameError, match='did you mean "STD"'):
         hg.pipe_size("steel", "2", "STF")
+
+
+def test_pipe_size_by_dn():
+    # DIN 11850:1985 Table 1 (published copy): DN 25 is 28, 29 or 30 mm in series 1, 2, 3.
+    for series, od in [("1", 0.028), ("2", 0.029), ("3", 0.030)]:
+        p = hg.pipe_size_dn("hygienic_din11850", 25, series)
+        assert p["outside_diameter"] == pytest.approx(od, rel=1e-15)
+        assert p == hg.pipe_size("hygienic_din11850", p["nominal"], series)
+    # EN 10220 / ISO 4200 series 1: DN 50 is 60.3 mm (published copies, see
+    # core/tests/sizes_metric.rs); 60.3 x 2.9 bore 54.5 mm (exact arithmetic).
+    p = hg.pipe_size_dn("steel_en10220", 50, "2.9")
+    assert p["nominal"] == "60.3" and p["inside_diameter"] == pytest.approx(0.0545, rel=1e-14)
+    with pytest.raises(hg.UnknownNameError, match="50, 65"):
+        hg.pipe_size_dn("steel_en10220", 55, "2.9")
+    with pytest.raises(hg.UnknownNameError, match="steel_en10220"):
+        hg.pipe_size_dn("copper", 50, "L")
+    with pytest.raises(hg.UnknownNameError, match='did you mean "stainless_iso1127"'):
+        hg.pipe_size_dn("stainless_iso112", 50, "2.0")

@@ -87,6 +87,38 @@ pub fn monte_carlo(
     Ok(mc)
 }
 
+/// Generator seed of the Monte Carlo interval [`band_monte_carlo`] offers: fixed, so the
+/// offered interval is the same bits in every binding and on every run.
+pub const BAND_MONTE_CARLO_SEED: u64 = 101;
+
+/// The Monte Carlo interval offered with a first-order band that flags itself non-linear
+/// ([`crate::band::Band::non_linear`]): evaluates `line` at `flow` (m³/s) and, when its
+/// required-head band is flagged (a band wider than ±20 % of its value, or a pipe whose
+/// Reynolds number reaches into the laminar–turbulent transition within its own 95 %
+/// range), returns [`monte_carlo`] of the required head with
+/// [`super::MONTE_CARLO_SAMPLES`] samples from seed [`BAND_MONTE_CARLO_SEED`]; `None`
+/// when the first-order band stands. Its `low` and `high` are then the 95 % interval to
+/// use in place of the band's (JCGM 101:2008 §7.7, probabilistically symmetric).
+///
+/// Kept apart from [`Line::evaluate`], whose cost stays linear in the line's length: this
+/// call costs up to 20,000 evaluations when the band is flagged and one when it is not.
+///
+/// # Errors
+/// The errors of [`Line::evaluate`] and [`monte_carlo`] at `flow`.
+pub fn band_monte_carlo(line: &Line, fluid: &Fluid, flow: f64) -> Result<Option<MonteCarlo>> {
+    if !line.evaluate(fluid, flow)?.required_head_band.non_linear {
+        return Ok(None);
+    }
+    monte_carlo(
+        line,
+        fluid,
+        flow,
+        super::MONTE_CARLO_SAMPLES,
+        BAND_MONTE_CARLO_SEED,
+    )
+    .map(Some)
+}
+
 #[cfg(test)]
 mod tests {
     use super::*;

@@ -164,7 +164,8 @@ pub const COPPER_EN1057: [(&str, f64, [f64; 10]); 18] = [
 pub const HYGIENIC_BPE_SCHEDULES: [&str; 4] = ["0.035", "0.065", "0.083", "0.109"];
 
 /// Hygienic tubing, ASME BPE (the tube OD sizes of ASTM A270 sanitary tube), in inches:
-/// the nominal size is the outside diameter (from memory).
+/// the nominal size is the outside diameter. Every row but 3/8 in checked against a
+/// published A270 table (core/tests/sizes_metric.rs); 3/8 in from memory.
 pub const HYGIENIC_BPE: [(&str, f64, [f64; 4]); 11] = [
     ("1/4", 0.250, [0.035, 0.0, 0.0, 0.0]),
     ("3/8", 0.375, [0.035, 0.0, 0.0, 0.0]),
@@ -243,4 +244,64 @@ pub const HYGIENIC_ISO2037: [(&str, f64, [f64; 5]); 18] = [
     ("139.7", 139.7, iso(2.0)),
     ("168.3", 168.3, iso(2.6)),
     ("219.1", 219.1, iso(2.6)),
+];
+
+/// Nominal size DN of each ISO 4200 / EN 10220 series 1 outside diameter (shared by
+/// [`STEEL_EN10220`] and [`STAINLESS_ISO1127`], whose rows are the same series): DN 15
+/// to DN 32 and DN 40 to DN 400 as in published copies (see core/tests/sizes_metric.rs),
+/// DN 6 to DN 10, 65, 125 and 450 to 600 from memory.
+pub const SERIES1_DN: [(u32, &str); 22] = [
+    (6, "10.2"),
+    (8, "13.5"),
+    (10, "17.2"),
+    (15, "21.3"),
+    (20, "26.9"),
+    (25, "33.7"),
+    (32, "42.4"),
+    (40, "48.3"),
+    (50, "60.3"),
+    (65, "76.1"),
+    (80, "88.9"),
+    (100, "114.3"),
+    (125, "139.7"),
+    (150, "168.3"),
+    (200, "219.1"),
+    (250, "273"),
+    (300, "323.9"),
+    (350, "355.6"),
+    (400, "406.4"),
+    (450, "457"),
+    (500, "508"),
+    (600, "610"),
+];
+
+/// Nominal size DN of each [`HYGIENIC_DIN11850`] row, as DIN 11850:1985 Table 1 prints it
+/// (one outside diameter per series up to DN 50, one for all three from DN 65).
+pub const DIN11850_DN: [(u32, &str); 26] = [
+    (10, "12"),
+    (10, "13"),
+    (10, "14"),
+    (15, "18"),
+    (15, "19"),
+    (15, "20"),
+    (20, "22"),
+    (20, "23"),
+    (20, "24"),
+    (25, "28"),
+    (25, "29"),
+    (25, "30"),
+    (32, "34"),
+    (32, "35"),
+    (32, "36"),
+    (40, "40"),
+    (40, "41"),
+    (40, "42"),
+    (50, "52"),
+    (50, "53"),
+    (50, "54"),
+    (65, "70"),
+    (80, "85"),
+    (100, "104"),
+    (125, "129"),
+    (150, "154"),
 ];

@@ -27,6 +27,9 @@
 //! Metric tube is designated by outside diameter × wall, so its nominal size is the
 //! outside diameter as printed (`"60.3"`) and, where the standard has no named series,
 //! its "schedule" is the wall as printed (`"2.9"`).
+//!
+//! Tables whose standard assigns a nominal size DN to each outside diameter (EN 10220 and
+//! ISO 1127 series 1, DIN 11850) are also looked up by DN: [`lookup_dn`].
 
 mod metric;
 mod plastic;
@@ -187,7 +190,9 @@ impl PipeTable {
             PipeTable::PvcIso1452 => {
                 "ISO 1452-2, PVC-U pipes for water supply, minimum walls by SDR (from memory)"
             }
-            PipeTable::HygienicBpe => "ASME BPE, hygienic tubing OD sizes (from memory)",
+            PipeTable::HygienicBpe => {
+                "ASME BPE, hygienic tubing OD sizes (checked against a published ASTM A270 table; 3/8 in from memory)"
+            }
             PipeTable::HygienicDin11850 => {
                 "DIN 11850 (1985), stainless tubes for the food industry, series 1 to 3 (checked against a published copy)"
             }
@@ -381,6 +386,102 @@ pub fn lookup(table: PipeTable, nominal: &str, schedule: &str) -> Result<PipeSiz
             &format!("{schedule} at nominal size {}", row.0),
             &defined,
         ))
+    }
+}
+
+impl PipeTable {
+    /// Nominal size DN → row nominal size, for tables whose standard assigns a DN to each
+    /// outside diameter (empty for the others).
+    fn dn_rows(self) -> &'static [(u32, &'static str)] {
+        match self {
+            PipeTable::SteelEn10220 | PipeTable::StainlessIso1127 => &metric::SERIES1_DN,
+            PipeTable::HygienicDin11850 => &metric::DIN11850_DN,
+            _ => &[],
+        }
+    }
+
+    /// The nominal sizes DN the table can be looked up by ([`lookup_dn`]), smallest
+    /// first; empty for tables whose standard assigns no DN (US, copper, plastic pipe by
+    /// dn, ASME BPE, ISO 2037).
+    pub fn dn_sizes(self) -> Vec<u32> {
+        let rows = self.nominal_sizes();
+        let mut out: Vec<u32> = self
+            .dn_rows()
+            .iter()
+            .filter(|(_, n)| rows.contains(n))
+            .map(|(dn, _)| *dn)
+            .collect();
+        out.dedup();
+        out
+    }
+}
+
+/// The size of nominal size `dn` (DN, ISO 6708) in `schedule` of a metric `table` that
+/// assigns DNs: `"steel_en10220"` and `"stainless_iso1127"` (series 1 outside diameters,
+/// e.g. DN 50 is 60.3 mm) and `"hygienic_din11850"` (where the series picks the outside
+/// diameter: DN 25 is 28 × 1.0, 29 × 1.5 or 30 × 2.0 in series 1, 2, 3). Same result as
+/// [`lookup`] with the row's outside diameter.
+///
+/// ```
+/// use hydrograde::sizes::{lookup_dn, PipeTable};
+/// let p = lookup_dn(PipeTable::HygienicDin11850, 25, "2")?;
+/// assert_eq!(p.nominal, "29"); // DIN 11850:1985 Table 1
+/// # Ok::<(), hydrograde::Error>(())
+/// ```
+///
+/// # Errors
+/// [`Error::UnknownName`] for a table that assigns no DN (naming those that do), a DN the
+/// table does not list (suggesting close ones), or a schedule not made at that DN.
+pub fn lookup_dn(table: PipeTable, dn: u32, schedule: &str) -> Result<PipeSize> {
+    let known = table.dn_sizes();
+    if known.is_empty() {
+        let with: Vec<&str> = PipeTable::ALL
+            .iter()
+            .filter(|t| !t.dn_sizes().is_empty())
+            .map(|t| t.name())
+            .collect();
+        return Err(Error::unknown_name(
+            "pipe table with DN sizes",
+            table.name(),
+            &with,
+        ));
+    }
+    let col = table.schedule_index(schedule)?;
+    if !known.contains(&dn) {
+        let names: Vec<String> = known.iter().map(|d| d.to_string()).collect();
+        let names: Vec<&str> = names.iter().map(String::as_str).collect();
+        return Err(Error::unknown_name("DN", &dn.to_string(), &names));
+    }
+    let rows: Vec<&str> = table
+        .dn_rows()
+        .iter()
+        .filter(|(d, _)| *d == dn)
+        .map(|(_, n)| *n)
+        .collect();
+    let found = table.rows().find(|r| rows.contains(&r.0) && r.2[col] > 0.0);
+    match found {
+        Some(r) => Ok(table.size(r.0, table.schedules()[col], r.1, r.2[col])),
+        None => {
+            // Not made in that schedule at this DN: the schedules that are.
+            let defined: Vec<&str> = table
+                .rows()
+                .filter(|r| rows.contains(&r.0))
+                .flat_map(|r| {
+                    table
+                        .schedules()
+                        .iter()
+                        .zip(r.2)
+                        .filter(|(_, w)| **w > 0.0)
+                        .map(|(s, _)| *s)
+                        .collect::<Vec<_>>()
+                })
+                .collect();
+            Err(Error::unknown_name(
+                schedule_word(table),
+                &format!("{schedule} at DN {dn}"),
+                &defined,
+            ))
+        }
     }
 }
 

@@ -11,6 +11,7 @@ __all__ = [
     "__version__",
     "aged_roughness",
     "Band",
+    "band_monte_carlo",
     "convert",
     "convert_head",
     "correlation_validity",
@@ -38,6 +39,7 @@ __all__ = [
     "OperatingPoint",
     "Pipe",
     "pipe_size",
+    "pipe_size_dn",
     "pipe_sizes",
     "pipe_tables",
     "PumpCurve",
@@ -542,6 +544,8 @@ def monte_carlo(
     line: Line, fluid: Fluid, flow: float, samples: Optional[int] = None, seed: int = 0
 ) -> MonteCarlo: ...
 
+def band_monte_carlo(line: Line, fluid: Fluid, flow: float) -> Optional[MonteCarlo]: ...
+
 @final
 class Line:
     """A route of elements in series."""
@@ -846,6 +850,7 @@ def aged_roughness(initial: ArrayLike, rate: ArrayLike, years: ArrayLike) -> _Ar
 def pipe_tables() -> List[Dict[str, Any]]: ...
 def pipe_sizes(table: str) -> List[Dict[str, Any]]: ...
 def pipe_size(table: str, nominal: str, schedule: str) -> Dict[str, Any]: ...
+def pipe_size_dn(table: str, dn: int, schedule: str) -> Dict[str, Any]: ...
 def smallest_pipe(table: str, schedule: str, min_inside_diameter: float) -> Dict[str, Any]: ...
 
 @final
