@@ -296,6 +296,13 @@ static void test_solves_bad_input(void) {
   }
   CHECK(hg_line_operating_point(l, f, q, h, 0, &o[0], &o[1], &o[2], &o[3], &o[4], &o[5]) == HG_ERR_INVALID, "op n 0");
   CHECK(hg_line_operating_point(l, f, q, h, 2, &o[0], &o[1], &o[2], &o[3], &o[4], &o[5]) != HG_OK && msg_len() > 0, "op 2 points");
+  {
+    /* a pump whose shut-off head (2 m) is below the line's 3 m rise cannot meet it at any
+       flow (exact: required head >= static head for every forward flow) */
+    const double weak[3] = {2.0, 1.5, 1.0};
+    CHECK(hg_line_operating_point(l, f, q, weak, 3, &o[0], &o[1], &o[2], &o[3], &o[4], &o[5]) == HG_ERR_NO_SOLUTION && msg_len() > 0,
+          "op pump below the rise");
+  }
   h[1] = NAN;
   CHECK(hg_line_operating_point(l, f, q, h, 3, &o[0], &o[1], &o[2], &o[3], &o[4], &o[5]) == HG_ERR_NOT_FINITE, "op NaN head");
   const hg_line *pair[2] = {lines[0], NULL};
@@ -321,6 +328,8 @@ static void test_solves_bad_input(void) {
   }
   hg_sizing z;
   z.struct_size = sizeof z;
+  CHECK(hg_line_size(l, f, 3e-3, HG_LIMIT_PRESSURE_LOSS, 5e4, NULL, NULL, &z) == HG_OK && z.min_inside_diameter > 0.0,
+        "size a 50 kPa limit");
   CHECK(hg_line_size(NULL, f, 1e-3, 0, 5e4, NULL, NULL, &z) == HG_ERR_NULL_POINTER, "size NULL line");
   CHECK(hg_line_size(l, NULL, 1e-3, 0, 5e4, NULL, NULL, &z) == HG_ERR_NULL_POINTER, "size NULL fluid");
   CHECK(hg_line_size(l, f, 1e-3, 0, 5e4, NULL, NULL, NULL) == HG_ERR_NULL_POINTER, "size NULL out");
