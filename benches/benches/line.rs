@@ -25,10 +25,9 @@ fn line(c: &mut Criterion) {
         eprintln!("cannot build the benchmark line");
         return;
     };
-    let no_bands = LineOptions {
-        uncertainty: UncertaintyOptions::none(),
-        ..LineOptions::default()
-    };
+    let no_bands = LineOptions::default()
+        .with_uncertainty(UncertaintyOptions::none())
+        .unwrap();
     let Ok(bare) = Line::with_options(line.elements().to_vec(), no_bands) else {
         eprintln!("cannot build the band-free line");
         return;

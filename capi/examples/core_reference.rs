@@ -142,7 +142,7 @@ fn others(out: &mut impl Write) -> io::Result<()> {
         bad[0],
     ] {
         for p in [101_325.0, 1e5, 1e6, 1e7, 1e8, 2e8, 500.0, 0.0, -1.0, bad[1]] {
-            let w = Fluid::water(t, p).map(|f| vec![D(f.density), D(f.viscosity)]);
+            let w = Fluid::water(t, p).map(|f| vec![D(f.density()), D(f.viscosity())]);
             emit(out, "water", &[D(t), D(p)], w)?;
         }
         emit(
@@ -156,7 +156,7 @@ fn others(out: &mut impl Write) -> io::Result<()> {
         200.0, 250.0, 288.15, 300.0, 500.0, 1000.0, 150.0, 1100.0, bad[1],
     ] {
         for p in [1e3, 101_325.0, 1e6, 2e6, 3e6, 0.0, -5.0, bad[0]] {
-            let a = Fluid::air(t, p).map(|f| vec![D(f.density), D(f.viscosity)]);
+            let a = Fluid::air(t, p).map(|f| vec![D(f.density()), D(f.viscosity())]);
             emit(out, "air", &[D(t), D(p)], a)?;
         }
     }
@@ -323,10 +323,7 @@ fn scenario(n: i64) -> hydrograde::Result<Line> {
         0 => {
             // A pump discharge: pipe, elbow, check valve, rise, fixed K, smaller pipe,
             // strainer rated by its drop.
-            let opts = LineOptions {
-                inlet_pressure: Some(3e5),
-                ..LineOptions::default()
-            };
+            let opts = LineOptions::default().with_inlet_pressure(Some(3e5))?;
             Line::with_options(
                 vec![
                     Element::Pipe(Pipe::circular(0.05, 30.0, 4.5e-5)?),
@@ -342,10 +339,8 @@ fn scenario(n: i64) -> hydrograde::Result<Line> {
         }
         1 => {
             // A rectangular duct falling 2 m with a fixed-K fitting at its own bore.
-            let opts = LineOptions {
-                friction: Options::with_correlation(Correlation::Haaland),
-                ..LineOptions::default()
-            };
+            let opts = LineOptions::default()
+                .with_friction(Options::with_correlation(Correlation::Haaland))?;
             Line::with_options(
                 vec![
                     Element::Fitting(Fitting::k(1.5)?.with_diameter(0.15)?),
@@ -359,14 +354,11 @@ fn scenario(n: i64) -> hydrograde::Result<Line> {
             // A cooling-water run through every kind of fitting, with a catalogue
             // material, a custom duct, the laminar-equivalent diameter, a bore tolerance,
             // a widened valve spread and a stated roughness range.
-            let opts = LineOptions {
-                turbulent_diameter: TurbulentDiameter::LaminarEquivalent,
-                uncertainty: hydrograde::band::UncertaintyOptions {
-                    diameter: 0.01,
-                    ..Default::default()
-                },
-                ..LineOptions::default()
-            };
+            let opts = LineOptions::default()
+                .with_turbulent_diameter(TurbulentDiameter::LaminarEquivalent)
+                .with_uncertainty(
+                    hydrograde::band::UncertaintyOptions::default().with_diameter(0.01)?,
+                )?;
             let mut line = Line::with_options(
                 vec![
                     Element::Fitting(Fitting::from_tank(Edge::Rounded { r_over_d: 0.1 })?),

@@ -123,11 +123,13 @@ pub unsafe extern "C" fn hg_line_set_material_independent(
                 )
                 .into());
             }
-            let mut u = l.builder.options().uncertainty.clone();
-            u.independent_materials.retain(|m| m != name);
+            let u = l.builder.options().uncertainty();
+            let mut materials = u.independent_materials().to_vec();
+            materials.retain(|m| m != name);
             if independent == 1 {
-                u.independent_materials.push(name.to_string());
+                materials.push(name.to_string());
             }
+            let u = u.clone().with_independent_materials(materials)?;
             Ok(l.builder.set_uncertainty(u)?)
         })
     }

@@ -57,8 +57,8 @@ unsafe fn state(
     let f = make(t, p)?;
     // SAFETY: the caller's contract; both pointers were checked.
     unsafe {
-        put("density", density, f.density)?;
-        put("viscosity", viscosity, f.viscosity)
+        put("density", density, f.density())?;
+        put("viscosity", viscosity, f.viscosity())
     }
 }
 
@@ -177,8 +177,8 @@ pub unsafe extern "C" fn hg_fluid_properties(
         let f = unsafe { ffi::handle("fluid", fluid)? };
         // SAFETY: forwarded contract; checked above.
         unsafe {
-            put("density", density, f.fluid.density)?;
-            put("viscosity", viscosity, f.fluid.viscosity)
+            put("density", density, f.fluid.density())?;
+            put("viscosity", viscosity, f.fluid.viscosity())
         }
     })
 }

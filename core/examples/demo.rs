@@ -63,7 +63,7 @@ fn duct_line() -> Result<Line> {
         // Rated by its maker with air at 20 °C and 101 325 Pa.
         Element::Equipment(
             Equipment::pressure_drop("grease filter", 120.0, 0.9)?
-                .with_rating_density(Fluid::air(293.15, 101_325.0)?.density)?,
+                .with_rating_density(Fluid::air(293.15, 101_325.0)?.density())?,
         ),
         Element::Pipe(Pipe::of_material(big, 18.0, "galvanized_steel")?),
         Element::Fitting(Fitting::bend(90.0, 1.5)?),

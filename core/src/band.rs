@@ -492,116 +492,6 @@ pub fn coverage_factor(share: f64) -> f64 {
     t[i] + f * (t[i + 1] - t[i])
 }
 
-/// Which sources enter a band, and user values that replace the defaults. Every value
-/// is a relative standard uncertainty (k = 1) unless its name says otherwise.
-#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
-pub struct UncertaintyOptions {
-    /// Include the friction correlation's model uncertainty.
-    pub friction_model: bool,
-    /// Replace the turbulent round-pipe model uncertainty (default 0.05).
-    pub turbulent_model: f64,
-    /// Replace the laminar model uncertainty (default 0.005).
-    pub laminar_model: f64,
-    /// Replace the non-circular turbulent model uncertainty (default 0.075).
-    pub non_circular_model: f64,
-    /// Include wall roughness.
-    pub roughness: bool,
-    /// Standard uncertainty of ln ε for a pipe with no stated roughness range (default: a
-    /// factor of 2 either way, log-uniform: ln 4/√12 ≈ 0.400).
-    pub roughness_default: f64,
-    /// Catalogue materials whose pipes each get their own roughness error (pipes from
-    /// different supplies); every other material's pipes share one error.
-    #[serde(default)]
-    pub independent_materials: Vec<String>,
-    /// Relative standard uncertainty of every bore (manufacturing tolerance); default 0.
-    pub diameter: f64,
-    /// Include the fluid's density and viscosity uncertainties.
-    pub fluid: bool,
-    /// Include fitting K spreads.
-    pub fittings: bool,
-    /// Include equipment spreads.
-    pub equipment: bool,
-}
-
-impl Default for UncertaintyOptions {
-    fn default() -> Self {
-        UncertaintyOptions {
-            friction_model: true,
-            turbulent_model: 0.05,
-            laminar_model: 0.005,
-            non_circular_model: 0.075,
-            roughness: true,
-            roughness_default: math::ln(4.0) / 12f64.sqrt(),
-            independent_materials: Vec::new(),
-            diameter: 0.0,
-            fluid: true,
-            fittings: true,
-            equipment: true,
-        }
-    }
-}
-
-impl UncertaintyOptions {
-    /// No source at all (every band has zero width).
-    pub fn none() -> Self {
-        UncertaintyOptions {
-            friction_model: false,
-            roughness: false,
-            diameter: 0.0,
-            fluid: false,
-            fittings: false,
-            equipment: false,
-            ..UncertaintyOptions::default()
-        }
-    }
-
-    /// Only the friction model (for checking the ±10 % statement).
-    pub fn model_only() -> Self {
-        UncertaintyOptions {
-            friction_model: true,
-            ..UncertaintyOptions::none()
-        }
-    }
-
-    /// The names of the presets of [`UncertaintyOptions::preset`], in a fixed order.
-    pub const PRESETS: [&'static str; 3] = ["default", "none", "model_only"];
-
-    /// A preset by the name every binding uses: `"default"` ([`Default`]), `"none"`
-    /// ([`UncertaintyOptions::none`]) or `"model_only"` ([`UncertaintyOptions::model_only`]).
-    ///
-    /// # Errors
-    /// [`crate::Error::UnknownName`] for any other name.
-    pub fn preset(name: &str) -> crate::Result<Self> {
-        match name {
-            "default" => Ok(UncertaintyOptions::default()),
-            "none" => Ok(UncertaintyOptions::none()),
-            "model_only" => Ok(UncertaintyOptions::model_only()),
-            _ => Err(crate::Error::unknown_name(
-                "uncertainty",
-                name,
-                &UncertaintyOptions::PRESETS,
-            )),
-        }
-    }
-
-    /// Checks every value is finite and non-negative and every material named is in the
-    /// catalogue.
-    pub fn validate(&self) -> crate::Result<()> {
-        use crate::error::check::non_negative;
-        for m in &self.independent_materials {
-            crate::roughness::material(m).map_err(|_| {
-                crate::Error::unknown_name("independent_materials", m, &crate::roughness::names())
-            })?;
-        }
-        non_negative("turbulent_model", self.turbulent_model)?;
-        non_negative("laminar_model", self.laminar_model)?;
-        non_negative("non_circular_model", self.non_circular_model)?;
-        non_negative("roughness_default", self.roughness_default)?;
-        non_negative("diameter", self.diameter)?;
-        Ok(())
-    }
-}
-
 /// Relative standard uncertainty of a rectangular distribution of relative half-width
 /// `spread` (JCGM 100:2008 §4.3.7: a/√3).
 pub fn rectangular(spread: f64) -> f64 {
@@ -622,9 +512,11 @@ pub fn log_uniform(nominal: f64, low: f64, high: f64) -> (f64, f64) {
 pub const MONTE_CARLO_SAMPLES: usize = 20_000;
 
 mod monte;
+mod options;
 pub use monte::{
     BAND_MONTE_CARLO_SEED, MAX_SAMPLES, MIN_SAMPLES, MonteCarlo, band_monte_carlo, monte_carlo,
 };
+pub use options::UncertaintyOptions;
 
 #[cfg(test)]
 mod tests {

@@ -2,7 +2,9 @@
 //! (`band::band_monte_carlo`): present exactly when the first-order band is flagged,
 //! reproducible to the bit, and equal to `monte_carlo` with the documented seed and count.
 
-use hydrograde::band::{BAND_MONTE_CARLO_SEED, MONTE_CARLO_SAMPLES, band_monte_carlo, monte_carlo};
+use hydrograde::band::{
+    BAND_MONTE_CARLO_SEED, MONTE_CARLO_SAMPLES, UncertaintyOptions, band_monte_carlo, monte_carlo,
+};
 use hydrograde::line::LineOptions;
 use hydrograde::{Element, Fluid, Line, Pipe, Section};
 
@@ -22,8 +24,9 @@ fn a_transitional_line_is_offered_the_monte_carlo_interval() {
     let nu = 1.002e-3 / 998.2;
     let d = 0.02;
     let flow = 3000.0 * nu * std::f64::consts::PI * d / 4.0; // Re = 4Q/(π d ν), exact
-    let mut options = LineOptions::default();
-    options.uncertainty.diameter = 0.03;
+    let options = LineOptions::default()
+        .with_uncertainty(UncertaintyOptions::default().with_diameter(0.03).unwrap())
+        .unwrap();
     let line = Line::with_options(
         vec![Element::Pipe(Pipe::circular(d, 20.0, 0.0).unwrap())],
         options,

@@ -26,10 +26,7 @@ fn water(t: f64) -> Fluid {
 fn line(elements: Vec<Element>, inlet: Option<f64>) -> Line {
     Line::with_options(
         elements,
-        LineOptions {
-            inlet_pressure: inlet,
-            ..LineOptions::default()
-        },
+        LineOptions::default().with_inlet_pressure(inlet).unwrap(),
     )
     .unwrap()
 }
@@ -100,7 +97,7 @@ fn cases() -> Vec<(&'static str, Line, Fluid, f64)> {
         ];
         let w = water(278.15);
         let re = 300.0 + 250.0 * i as f64;
-        let q = re * w.viscosity / w.density * std::f64::consts::PI * d / 4.0;
+        let q = re * w.viscosity() / w.density() * std::f64::consts::PI * d / 4.0;
         out.push(("laminar", line(els, None), w, q));
     }
     // Transitional: Reynolds numbers between the regime limits.
@@ -109,7 +106,7 @@ fn cases() -> Vec<(&'static str, Line, Fluid, f64)> {
         let els = vec![pipe(d, 10.0, "copper"), named("ball_valve")];
         let w = water(293.15);
         let re = [2500.0, 2900.0, 3300.0, 3800.0][i];
-        let q = re * w.viscosity / w.density * std::f64::consts::PI * d / 4.0;
+        let q = re * w.viscosity() / w.density() * std::f64::consts::PI * d / 4.0;
         out.push(("transitional", line(els, None), w, q));
     }
     // Non-circular ducts.
@@ -236,17 +233,11 @@ fn single_steel_pipe_matches_the_stated_range() {
     // must agree with Monte Carlo over the stated range (ε log-uniform on 0.02…0.09 mm)
     // within 2 % of its width at both ends (100 000 samples: quantile error ≈ 0.2 %).
     let w = Fluid::water(293.15, 101_325.0).unwrap();
-    let only_roughness = UncertaintyOptions {
-        roughness: true,
-        ..UncertaintyOptions::none()
-    };
+    let only_roughness = UncertaintyOptions::none().with_roughness(true);
     for uo in [only_roughness, UncertaintyOptions::default()] {
         let l = Line::with_options(
             vec![pipe(0.05, 100.0, "commercial_steel")],
-            LineOptions {
-                uncertainty: uo,
-                ..LineOptions::default()
-            },
+            LineOptions::default().with_uncertainty(uo).unwrap(),
         )
         .unwrap();
         let b = l.evaluate(&w, 0.003).unwrap().required_head_band;
@@ -266,18 +257,14 @@ fn ten_catalogue_fittings_share_one_error() {
     // One catalogue K error for all instances: ten identical elbows give ten times one
     // elbow's half-width (full correlation, exact arithmetic of the GUM sum), not √10.
     let w = water(293.15);
-    let only_k = UncertaintyOptions {
-        fittings: true,
-        ..UncertaintyOptions::none()
-    };
+    let only_k = UncertaintyOptions::none().with_fittings(true);
     // A short smooth pipe followed by `n` copies of `fitting`: its required-head band.
     let band = |n: usize, fitting: &Element| {
         let mut els = vec![Element::Pipe(Pipe::circular(0.05, 1.0, 0.0).unwrap())];
         els.extend((0..n).map(|_| fitting.clone()));
-        let options = LineOptions {
-            uncertainty: only_k.clone(),
-            ..LineOptions::default()
-        };
+        let options = LineOptions::default()
+            .with_uncertainty(only_k.clone())
+            .unwrap();
         let l = Line::with_options(els, options).unwrap();
         l.evaluate(&w, 0.004).unwrap().required_head_band
     };
@@ -341,27 +328,19 @@ fn materials_are_shared_unless_declared_independent() {
         ]
     };
     let with = |uo: UncertaintyOptions| {
-        Line::with_options(
-            els(),
-            LineOptions {
-                uncertainty: uo,
-                ..LineOptions::default()
-            },
-        )
-        .unwrap()
-        .evaluate(&w, 0.01)
-        .unwrap()
-        .required_head_band
+        Line::with_options(els(), LineOptions::default().with_uncertainty(uo).unwrap())
+            .unwrap()
+            .evaluate(&w, 0.01)
+            .unwrap()
+            .required_head_band
     };
-    let rough = UncertaintyOptions {
-        roughness: true,
-        ..UncertaintyOptions::none()
-    };
+    let rough = UncertaintyOptions::none().with_roughness(true);
     let shared = with(rough.clone());
-    let indep = with(UncertaintyOptions {
-        independent_materials: vec!["cast_iron".into()],
-        ..rough
-    });
+    let indep = with(
+        rough
+            .with_independent_materials(vec!["cast_iron".into()])
+            .unwrap(),
+    );
     assert_eq!(
         shared.dominant(),
         Some(&Source::Material("cast_iron".into()))

@@ -18,10 +18,7 @@ fn water() -> Fluid {
 fn with_uncertainty(elements: Vec<Element>, u: UncertaintyOptions) -> Line {
     Line::with_options(
         elements,
-        LineOptions {
-            uncertainty: u,
-            ..LineOptions::default()
-        },
+        LineOptions::default().with_uncertainty(u).unwrap(),
     )
     .unwrap()
 }
@@ -75,7 +72,7 @@ fn transitional_band_spans_both_regimes() {
     let pipe = Pipe::circular(d, 20.0, 4.5e-5).unwrap();
     let line = with_uncertainty(vec![Element::Pipe(pipe)], UncertaintyOptions::model_only());
     let w = water();
-    let q = 3000.0 * w.viscosity / w.density * std::f64::consts::PI * d / 4.0; // Re = 3000
+    let q = 3000.0 * w.viscosity() / w.density() * std::f64::consts::PI * d / 4.0; // Re = 3000
     let r = line.evaluate(&w, q).unwrap();
     let e = &r.elements[0];
     assert_eq!(e.regime, Some(Regime::Transitional));
@@ -162,18 +159,11 @@ fn varied_lines() -> Vec<(Line, Fluid, f64)> {
         }
         els.push(Element::rise(3.0 * (i as f64 - 8.0)).unwrap());
         els.push(Element::Fitting(Fitting::into_tank()));
-        let u = UncertaintyOptions {
-            diameter: if i % 2 == 0 { 0.005 } else { 0.0 },
-            ..UncertaintyOptions::default()
-        };
-        let line = Line::with_options(
-            els,
-            LineOptions {
-                uncertainty: u,
-                ..LineOptions::default()
-            },
-        )
-        .unwrap();
+        let u = UncertaintyOptions::default()
+            .with_diameter(if i % 2 == 0 { 0.005 } else { 0.0 })
+            .unwrap();
+        let line =
+            Line::with_options(els, LineOptions::default().with_uncertainty(u).unwrap()).unwrap();
         // Velocities from 0.05 to 3 m/s in the first pipe.
         let v = [0.05, 0.3, 1.0, 2.0, 3.0][(i * 3) % 5];
         let q = v * std::f64::consts::PI * d1 * d1 / 4.0;

@@ -134,3 +134,136 @@ fn tank_inlets_round_trip_and_refuse_a_negative_rounding() {
     );
     assert!(Edge::named("rounded", None).is_err() && Edge::named("square", Some(0.1)).is_err());
 }
+
+#[test]
+fn fluids_deserialise_through_the_checks() {
+    use hydrograde::fluid::{Origin, Phase};
+    let oil = Fluid::new(870.0, 0.03)
+        .unwrap()
+        .with_uncertainty(0.01, 0.05)
+        .unwrap();
+    let gas = Fluid::gas(2.0, 1.8e-5, 300.0, 2e5).unwrap();
+    let water = Fluid::water(333.15, 3e5)
+        .unwrap()
+        .with_vapour_pressure(2e4)
+        .unwrap();
+    let air = Fluid::air(300.0, 1e5).unwrap().at_pressure(3e5).unwrap();
+    for f in [&oil, &gas, &water, &air] {
+        let text = serde_json::to_string(f).unwrap();
+        assert_eq!(&serde_json::from_str::<Fluid>(&text).unwrap(), f, "{text}");
+    }
+    assert_eq!(
+        (water.phase(), water.origin(), water.vapour_pressure()),
+        (Phase::Liquid, Origin::Water, Some(2e4))
+    );
+    let tampered = |f: &Fluid, field: &str, value: serde_json::Value| {
+        let mut v = serde_json::to_value(f).unwrap();
+        v[field] = value;
+        serde_json::from_value::<Fluid>(v)
+    };
+    for (f, field, value) in [
+        (&oil, "density", serde_json::json!(-870.0)),
+        (&oil, "viscosity", serde_json::json!(0.0)),
+        (&oil, "density", serde_json::Value::Null),
+        (&oil, "density_rel_uncertainty", serde_json::json!(1.5)),
+        (&oil, "temperature", serde_json::json!(300.0)),
+        (&gas, "pressure", serde_json::Value::Null),
+        (&gas, "temperature", serde_json::json!(-1.0)),
+        (&water, "vapour_pressure", serde_json::json!(-5.0)),
+        // A stored water or air must be its model at its own state.
+        (&water, "density", serde_json::json!(1500.0)),
+        (&water, "temperature", serde_json::json!(700.0)),
+        (&air, "viscosity", serde_json::json!(1e-3)),
+        (&air, "phase", serde_json::json!("Liquid")),
+    ] {
+        let e = tampered(f, field, value.clone()).unwrap_err();
+        assert!(!e.to_string().is_empty(), "{field} = {value}");
+    }
+    let e = tampered(&water, "density", serde_json::json!(1500.0)).unwrap_err();
+    assert!(e.to_string().starts_with("density = 1500"), "{e}");
+}
+
+#[test]
+fn options_are_private_checked_and_deserialise_through_the_checks() {
+    use hydrograde::band::UncertaintyOptions;
+    use hydrograde::line::LineOptions;
+    let o = LineOptions::default()
+        .with_inlet_pressure(Some(2e5))
+        .unwrap()
+        .with_end_pressure(Some(5e4))
+        .unwrap()
+        .with_uncertainty(UncertaintyOptions::default().with_diameter(0.01).unwrap())
+        .unwrap()
+        .with_surroundings(Some(Fluid::air(280.0, 101_325.0).unwrap()))
+        .unwrap()
+        .with_air_column_for_liquids(true);
+    assert_eq!(
+        (
+            o.inlet_pressure(),
+            o.end_pressure(),
+            o.uncertainty().diameter()
+        ),
+        (Some(2e5), Some(5e4), 0.01)
+    );
+    assert!(o.air_column_for_liquids() && o.surroundings().is_some());
+    let text = serde_json::to_string(&o).unwrap();
+    assert_eq!(serde_json::from_str::<LineOptions>(&text).unwrap(), o);
+    // The setters refuse what validate refuses, naming the parameter.
+    for (e, name) in [
+        (
+            LineOptions::default().with_inlet_pressure(Some(-1.0)),
+            "inlet_pressure",
+        ),
+        (
+            LineOptions::default().with_end_pressure(Some(f64::INFINITY)),
+            "end_pressure",
+        ),
+        (
+            LineOptions::default().with_surroundings(Some(water())),
+            "surroundings",
+        ),
+    ] {
+        let e = e.unwrap_err();
+        assert!(e.to_string().starts_with(name), "{e}");
+    }
+    let u = UncertaintyOptions::default();
+    assert!(u.clone().with_turbulent_model(-0.1).is_err());
+    assert!(u.clone().with_diameter(f64::NAN).is_err());
+    assert_eq!(
+        u.clone()
+            .with_independent_materials(vec!["unobtainium".into()])
+            .unwrap_err()
+            .kind(),
+        ErrorKind::UnknownName
+    );
+    // Tampered stored options are refused, alone and inside a stored line.
+    let good = serde_json::to_value(&o).unwrap();
+    for (path, value) in [
+        (&["inlet_pressure"][..], serde_json::json!(-2e5)),
+        (&["end_pressure"][..], serde_json::json!(null)),
+        (&["uncertainty", "diameter"][..], serde_json::json!(-0.01)),
+        (
+            &["uncertainty", "independent_materials"][..],
+            serde_json::json!(["unobtainium"]),
+        ),
+        (&["surroundings", "phase"][..], serde_json::json!("Liquid")),
+    ] {
+        let mut v = good.clone();
+        let mut slot = &mut v;
+        for key in path {
+            slot = &mut slot[*key];
+        }
+        *slot = value;
+        // A JSON null for end_pressure is a valid "none"; every other edit breaks a rule.
+        let back = serde_json::from_value::<LineOptions>(v);
+        assert_eq!(back.is_ok(), path == ["end_pressure"], "{path:?}");
+    }
+    let line = Line::with_options(
+        vec![Element::Pipe(Pipe::circular(0.05, 30.0, 4.5e-5).unwrap())],
+        o,
+    )
+    .unwrap();
+    let mut v = serde_json::to_value(&line).unwrap();
+    v["options"]["inlet_pressure"] = serde_json::json!(f64::MIN);
+    assert!(serde_json::from_value::<Line>(v).is_err());
+}

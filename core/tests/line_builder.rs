@@ -140,7 +140,7 @@ fn bad_builder_input_names_the_parameter() {
         ErrorKind::OutOfRange
     );
     assert_eq!(
-        b.options().inlet_pressure,
+        b.options().inlet_pressure(),
         None,
         "a refused option changes nothing"
     );
@@ -214,10 +214,9 @@ fn slices_and_joins_rebuild_the_same_route() {
 
     let other = Line::with_options(
         vec![pipe(0.05, 1.0)],
-        LineOptions {
-            uncertainty: UncertaintyOptions::none(),
-            ..LineOptions::default()
-        },
+        LineOptions::default()
+            .with_uncertainty(UncertaintyOptions::none())
+            .unwrap(),
     )
     .unwrap();
     let e = line.join(&other).unwrap_err();

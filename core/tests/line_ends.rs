@@ -94,10 +94,9 @@ fn a_line_that_must_deliver_a_pressure_counts_it_in_the_required_head() {
     let open = Line::new(elements.clone()).unwrap();
     let header = Line::with_options(
         elements,
-        LineOptions {
-            end_pressure: Some(2.5e5),
-            ..LineOptions::default()
-        },
+        LineOptions::default()
+            .with_end_pressure(Some(2.5e5))
+            .unwrap(),
     )
     .unwrap();
     let q = 4e-3;
@@ -119,13 +118,8 @@ fn a_line_that_must_deliver_a_pressure_counts_it_in_the_required_head() {
     let z = header.evaluate(&water, 0.0).unwrap();
     assert!((z.required_head - (12.0 + end_head)).abs() < 1e-12);
     // A non-finite end pressure is refused naming it.
-    let e = Line::with_options(
-        vec![Element::rise(1.0).unwrap()],
-        LineOptions {
-            end_pressure: Some(f64::NAN),
-            ..LineOptions::default()
-        },
-    )
-    .unwrap_err();
+    let e = LineOptions::default()
+        .with_end_pressure(Some(f64::NAN))
+        .unwrap_err();
     assert!(e.to_string().contains("end_pressure"), "{e}");
 }

@@ -290,10 +290,7 @@ mod surroundings {
         let plain = duct(10.0);
         assert_eq!(plain.evaluate(&w, 0.0).unwrap().static_head, 10.0);
         let with_air = plain
-            .set_options(LineOptions {
-                air_column_for_liquids: true,
-                ..LineOptions::default()
-            })
+            .set_options(LineOptions::default().with_air_column_for_liquids(true))
             .unwrap();
         let want = 10.0 * (1.0 - air_density(293.15, 101_325.0) / 998.2);
         let got = with_air.evaluate(&w, 0.0).unwrap().static_head;
@@ -302,11 +299,8 @@ mod surroundings {
 
     #[test]
     fn surroundings_must_be_a_gas() {
-        let e = duct(1.0)
-            .set_options(LineOptions {
-                surroundings: Some(water()),
-                ..LineOptions::default()
-            })
+        let e = LineOptions::default()
+            .with_surroundings(Some(water()))
             .unwrap_err();
         assert_eq!(e.kind(), ErrorKind::Invalid);
         assert!(e.to_string().starts_with("surroundings:"), "{e}");
@@ -326,7 +320,7 @@ mod pressures {
         //   NPSHa = (p_total − p_v)/(ρ g)          (definition).
         // ρ and p_v are the fluid's (inputs); V = 3 m/s is the scenario.
         let w = Fluid::water(333.15, 101_325.0).unwrap();
-        let (rho, pv) = (w.density, w.vapour_pressure.unwrap());
+        let (rho, pv) = (w.density(), w.vapour_pressure().unwrap());
         assert!((pv - 19_946.0).abs() < 10.0); // IAPWS-IF97 saturation at 60 °C, from memory
         let area = PI * 0.1 * 0.1 / 4.0;
         let q = 3.0 * area;
@@ -337,10 +331,9 @@ mod pressures {
                 Element::rise(7.0).unwrap(),
                 Element::Pipe(Pipe::circular(0.1, 1.0, 4.5e-5).unwrap()),
             ],
-            LineOptions {
-                inlet_pressure: Some(101_325.0),
-                ..LineOptions::default()
-            },
+            LineOptions::default()
+                .with_inlet_pressure(Some(101_325.0))
+                .unwrap(),
         )
         .unwrap();
         let r = line.evaluate(&w, q).unwrap();
@@ -374,10 +367,9 @@ mod pressures {
         let w = water();
         let line = Line::with_options(
             vec![pipe(0.05)],
-            LineOptions {
-                inlet_pressure: Some(2e5),
-                ..LineOptions::default()
-            },
+            LineOptions::default()
+                .with_inlet_pressure(Some(2e5))
+                .unwrap(),
         )
         .unwrap();
         let q = 2e-3;

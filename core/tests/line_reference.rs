@@ -366,10 +366,9 @@ fn split_bands_conserve_the_total_flow() {
     let (w0, w1) = (s.flow_bands[0].half_width(), s.flow_bands[1].half_width());
     assert!(w0 > 0.0 && common::rel_err(w0, w1) < 1e-9, "{w0} vs {w1}");
     assert!(s.head_band.low < s.head && s.head < s.head_band.high);
-    let model = LineOptions {
-        uncertainty: UncertaintyOptions::model_only(),
-        ..LineOptions::default()
-    };
+    let model = LineOptions::default()
+        .with_uncertainty(UncertaintyOptions::model_only())
+        .unwrap();
     let twin = a.set_options(model).unwrap();
     let s = split_flow(&[twin.clone(), twin], &f, 6e-3).unwrap();
     assert!(common::rel_err(s.flows[0], s.flows[1]) < 1e-12);

@@ -25,13 +25,12 @@ fn line(elements: Vec<Element>) -> Line {
 /// A line of one pipe with the fully rough friction factor (von Kármán's rough-wall law,
 /// f independent of Reynolds number): its loss is r·Q|Q| exactly.
 fn rough_line(d: f64, l: f64, e: f64) -> Line {
-    let options = LineOptions {
-        friction: FrictionOptions {
+    let options = LineOptions::default()
+        .with_friction(FrictionOptions {
             correlation: Correlation::FullyRough,
             ..FrictionOptions::default()
-        },
-        ..LineOptions::default()
-    };
+        })
+        .unwrap();
     Line::with_options(vec![pipe(d, l, e)], options).unwrap()
 }
 
@@ -202,7 +201,7 @@ fn three_reservoirs_with_constant_friction_match_an_independent_solve() {
     // The lowest tank receives flow (the junction head lies above 40 m).
     assert!(hj > 40.0 && s.links[2].flow < 0.0);
     // Pressure at the junction: ρ g (H − z).
-    assert!(rel(node.pressure, w.density * STANDARD_GRAVITY * (hj - 30.0)) < 1e-9);
+    assert!(rel(node.pressure, w.density() * STANDARD_GRAVITY * (hj - 30.0)) < 1e-9);
     assert_continuity(&net, &s, 1e-12);
     assert_energy(&net, &s, &w, 1e-9);
 }
@@ -263,7 +262,8 @@ fn two_loop_laminar_network_matches_the_linear_closed_form() {
     // linear system: Σ_links (H_n − H_m)/R = −outflow_n (exact solution).
     let oil = Fluid::new(900.0, 0.5).unwrap();
     let d: f64 = 0.05;
-    let r = |l: f64| 128.0 * oil.viscosity * l / (PI * oil.density * STANDARD_GRAVITY * d.powi(4));
+    let r =
+        |l: f64| 128.0 * oil.viscosity() * l / (PI * oil.density() * STANDARD_GRAVITY * d.powi(4));
     // Nodes: 0 = tank (20 m), 1..=4 junctions; links (from, to, length).
     let links = [
         (0, 1, 50.0),

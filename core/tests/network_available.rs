@@ -24,7 +24,7 @@ fn pipe_line(d: f64, l: f64, e: f64) -> Line {
 /// V = √(2 g D h / (f L)) (Darcy–Weisbach) gives Re √f = D √(2 g D S)/ν (S = h/L), so
 /// V = −2 √(2 g D S) log10(ε/(3.7 D) + 2.51 ν/(D √(2 g D S))) without iteration.
 fn colebrook_flow(fluid: &Fluid, d: f64, l: f64, e: f64, h: f64) -> f64 {
-    let nu = fluid.viscosity / fluid.density;
+    let nu = fluid.viscosity() / fluid.density();
     let root = (2.0 * STANDARD_GRAVITY * d * h / l).sqrt();
     let v = -2.0 * root * (e / (3.7 * d) + 2.51 * nu / (d * root)).log10();
     let re = v * d / nu;
@@ -49,7 +49,7 @@ fn a_single_pipe_from_a_tank_delivers_the_closed_form_flow() {
         .available_flow(&w, "hydrant", p_min, LimitAt::Node)
         .unwrap();
     // Energy: tank − (z + p_min/(ρ g)) is the friction head at the total flow.
-    let h = tank - z - p_min / (w.density * STANDARD_GRAVITY);
+    let h = tank - z - p_min / (w.density() * STANDARD_GRAVITY);
     let expected = colebrook_flow(&w, d, l, e, h) - base;
     assert!(rel_err(a.flow, expected) < 1e-8, "{} vs {expected}", a.flow);
     assert!((a.pressure - p_min).abs() < 1e-3, "{}", a.pressure);
@@ -81,7 +81,7 @@ fn every_junction_binds_at_the_highest_node() {
     let everywhere = net
         .available_flow(&w, "hydrant", p_min, LimitAt::EveryJunction)
         .unwrap();
-    let rho_g = w.density * STANDARD_GRAVITY;
+    let rho_g = w.density() * STANDARD_GRAVITY;
     let expected_node = colebrook_flow(&w, d, l, e, tank - z_hydrant - p_min / rho_g);
     let expected_all = colebrook_flow(&w, d, l, e, tank - z_hill - p_min / rho_g);
     assert!(rel_err(at_node.flow, expected_node) < 1e-8);

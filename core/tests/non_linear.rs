@@ -4,7 +4,9 @@
 
 mod common;
 
-use hydrograde::band::{NON_LINEAR_HALF_WIDTH, monte_carlo, reaches_transition};
+use hydrograde::band::{
+    NON_LINEAR_HALF_WIDTH, UncertaintyOptions, monte_carlo, reaches_transition,
+};
 use hydrograde::line::LineOptions;
 use hydrograde::{Band, Element, Fluid, Line, Pipe};
 
@@ -65,8 +67,9 @@ fn a_pipe_at_the_edge_of_the_transition_is_flagged_and_monte_carlo_differs() {
     let nu = 1.002e-3 / 998.2;
     let d = 0.02;
     let flow = 2200.0 * nu * std::f64::consts::PI * d / 4.0; // Re = 4Q/(π d ν)
-    let mut options = LineOptions::default();
-    options.uncertainty.diameter = 0.03;
+    let options = LineOptions::default()
+        .with_uncertainty(UncertaintyOptions::default().with_diameter(0.03).unwrap())
+        .unwrap();
     let line = Line::with_options(
         vec![Element::Pipe(Pipe::circular(d, 20.0, 0.0).unwrap())],
         options,

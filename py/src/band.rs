@@ -197,31 +197,30 @@ struct Fields {
 }
 
 impl Fields {
-    fn apply(self, mut o: UncertaintyOptions) -> PyResult<PyUncertainty> {
-        let set_b = |v: Option<bool>, t: &mut bool| {
-            if let Some(v) = v {
-                *t = v;
-            }
+    fn apply(self, o: UncertaintyOptions) -> PyResult<PyUncertainty> {
+        type U = UncertaintyOptions;
+        let b = |o: U, v: Option<bool>, set: fn(U, bool) -> U| match v {
+            Some(v) => set(o, v),
+            None => o,
         };
-        let set_f = |v: Option<f64>, t: &mut f64| {
-            if let Some(v) = v {
-                *t = v;
-            }
+        let f = |o: U, v: Option<f64>, set: fn(U, f64) -> hydrograde::Result<U>| match v {
+            Some(v) => set(o, v).py(),
+            None => Ok(o),
         };
-        set_b(self.friction_model, &mut o.friction_model);
-        set_f(self.turbulent_model, &mut o.turbulent_model);
-        set_f(self.laminar_model, &mut o.laminar_model);
-        set_f(self.non_circular_model, &mut o.non_circular_model);
-        set_b(self.roughness, &mut o.roughness);
-        set_f(self.roughness_default, &mut o.roughness_default);
-        set_f(self.diameter, &mut o.diameter);
-        set_b(self.fluid, &mut o.fluid);
-        set_b(self.fittings, &mut o.fittings);
-        set_b(self.equipment, &mut o.equipment);
-        if let Some(m) = self.independent_materials {
-            o.independent_materials = m;
-        }
-        o.validate().py()?;
+        let o = match self.independent_materials {
+            Some(m) => o.with_independent_materials(m).py()?,
+            None => o,
+        };
+        let o = f(o, self.turbulent_model, U::with_turbulent_model)?;
+        let o = f(o, self.laminar_model, U::with_laminar_model)?;
+        let o = f(o, self.non_circular_model, U::with_non_circular_model)?;
+        let o = f(o, self.roughness_default, U::with_roughness_default)?;
+        let o = f(o, self.diameter, U::with_diameter)?;
+        let o = b(o, self.friction_model, U::with_friction_model);
+        let o = b(o, self.roughness, U::with_roughness);
+        let o = b(o, self.fluid, U::with_fluid);
+        let o = b(o, self.fittings, U::with_fittings);
+        let o = b(o, self.equipment, U::with_equipment);
         Ok(PyUncertainty { inner: o })
     }
 }
@@ -324,58 +323,58 @@ impl PyUncertainty {
     /// Include the friction correlation's model uncertainty.
     #[getter]
     fn friction_model(&self) -> bool {
-        self.inner.friction_model
+        self.inner.friction_model()
     }
     /// Model uncertainty of turbulent round-pipe friction (relative, k = 1).
     #[getter]
     fn turbulent_model(&self) -> f64 {
-        self.inner.turbulent_model
+        self.inner.turbulent_model()
     }
     /// Model uncertainty of laminar friction (relative, k = 1).
     #[getter]
     fn laminar_model(&self) -> f64 {
-        self.inner.laminar_model
+        self.inner.laminar_model()
     }
     /// Model uncertainty of non-circular turbulent friction (relative, k = 1).
     #[getter]
     fn non_circular_model(&self) -> f64 {
-        self.inner.non_circular_model
+        self.inner.non_circular_model()
     }
     /// Include wall roughness.
     #[getter]
     fn roughness(&self) -> bool {
-        self.inner.roughness
+        self.inner.roughness()
     }
     /// Roughness uncertainty of pipes with no material range (relative, k = 1).
     #[getter]
     fn roughness_default(&self) -> f64 {
-        self.inner.roughness_default
+        self.inner.roughness_default()
     }
     /// Uncertainty of every bore (relative, k = 1).
     #[getter]
     fn diameter(&self) -> f64 {
-        self.inner.diameter
+        self.inner.diameter()
     }
     /// Include the fluid's density and viscosity uncertainties.
     #[getter]
     fn fluid(&self) -> bool {
-        self.inner.fluid
+        self.inner.fluid()
     }
     /// Include fitting K spreads.
     #[getter]
     fn fittings(&self) -> bool {
-        self.inner.fittings
+        self.inner.fittings()
     }
     /// Include equipment spreads.
     #[getter]
     fn equipment(&self) -> bool {
-        self.inner.equipment
+        self.inner.equipment()
     }
     /// Catalogue materials whose pipes each get their own roughness error (every other
     /// material's pipes share one).
     #[getter]
     fn independent_materials(&self) -> Vec<String> {
-        self.inner.independent_materials.clone()
+        self.inner.independent_materials().to_vec()
     }
     /// The fields as a dict.
     fn to_dict<'py>(&self, py: Python<'py>) -> PyResult<Bound<'py, PyDict>> {
@@ -391,17 +390,17 @@ impl PyUncertainty {
             "Uncertainty(friction_model={}, turbulent_model={:?}, laminar_model={:?}, \
              non_circular_model={:?}, roughness={}, roughness_default={:?}, diameter={:?}, \
              fluid={}, fittings={}, equipment={}, independent_materials={:?})",
-            b(o.friction_model),
-            o.turbulent_model,
-            o.laminar_model,
-            o.non_circular_model,
-            b(o.roughness),
-            o.roughness_default,
-            o.diameter,
-            b(o.fluid),
-            b(o.fittings),
-            b(o.equipment),
-            o.independent_materials
+            b(o.friction_model()),
+            o.turbulent_model(),
+            o.laminar_model(),
+            o.non_circular_model(),
+            b(o.roughness()),
+            o.roughness_default(),
+            o.diameter(),
+            b(o.fluid()),
+            b(o.fittings()),
+            b(o.equipment()),
+            o.independent_materials()
         )
     }
     fn __reduce__<'py>(
@@ -423,17 +422,17 @@ pub fn uncertainty_dict<'py>(
     o: &UncertaintyOptions,
 ) -> PyResult<Bound<'py, PyDict>> {
     let d = PyDict::new(py);
-    d.set_item("friction_model", o.friction_model)?;
-    d.set_item("turbulent_model", o.turbulent_model)?;
-    d.set_item("laminar_model", o.laminar_model)?;
-    d.set_item("non_circular_model", o.non_circular_model)?;
-    d.set_item("roughness", o.roughness)?;
-    d.set_item("roughness_default", o.roughness_default)?;
-    d.set_item("diameter", o.diameter)?;
-    d.set_item("fluid", o.fluid)?;
-    d.set_item("fittings", o.fittings)?;
-    d.set_item("equipment", o.equipment)?;
-    d.set_item("independent_materials", o.independent_materials.clone())?;
+    d.set_item("friction_model", o.friction_model())?;
+    d.set_item("turbulent_model", o.turbulent_model())?;
+    d.set_item("laminar_model", o.laminar_model())?;
+    d.set_item("non_circular_model", o.non_circular_model())?;
+    d.set_item("roughness", o.roughness())?;
+    d.set_item("roughness_default", o.roughness_default())?;
+    d.set_item("diameter", o.diameter())?;
+    d.set_item("fluid", o.fluid())?;
+    d.set_item("fittings", o.fittings())?;
+    d.set_item("equipment", o.equipment())?;
+    d.set_item("independent_materials", o.independent_materials().to_vec())?;
     Ok(d)
 }
 

@@ -129,12 +129,12 @@ impl PyFluid {
     /// Density ρ, kg/m³.
     #[getter]
     fn density(&self) -> f64 {
-        self.inner.density
+        self.inner.density()
     }
     /// Dynamic viscosity μ, Pa·s.
     #[getter]
     fn viscosity(&self) -> f64 {
-        self.inner.viscosity
+        self.inner.viscosity()
     }
     /// Kinematic viscosity ν = μ/ρ, m²/s.
     #[getter]
@@ -144,56 +144,56 @@ impl PyFluid {
     /// "liquid" or "gas".
     #[getter]
     fn phase(&self) -> &'static str {
-        self.inner.phase.name()
+        self.inner.phase().name()
     }
     /// Vapour pressure, Pa, where known (else None).
     #[getter]
     fn vapour_pressure(&self) -> Option<f64> {
-        self.inner.vapour_pressure
+        self.inner.vapour_pressure()
     }
     /// Temperature, K, where known (else None).
     #[getter]
     fn temperature(&self) -> Option<f64> {
-        self.inner.temperature
+        self.inner.temperature()
     }
     /// Pressure at which the properties were evaluated, Pa, where known (else None).
     #[getter]
     fn pressure(&self) -> Option<f64> {
-        self.inner.pressure
+        self.inner.pressure()
     }
     /// Relative standard uncertainty (k = 1) of the density.
     #[getter]
     fn density_rel_uncertainty(&self) -> f64 {
-        self.inner.density_rel_uncertainty
+        self.inner.density_rel_uncertainty()
     }
     /// Relative standard uncertainty (k = 1) of the viscosity.
     #[getter]
     fn viscosity_rel_uncertainty(&self) -> f64 {
-        self.inner.viscosity_rel_uncertainty
+        self.inner.viscosity_rel_uncertainty()
     }
     /// Where the properties came from: "user", "water" or "air".
     #[getter]
     fn origin(&self) -> &'static str {
-        self.inner.origin.name()
+        self.inner.origin().name()
     }
     /// The fields as a dict of plain Python values.
     fn to_dict<'py>(&self, py: Python<'py>) -> PyResult<Bound<'py, PyDict>> {
         let d = PyDict::new(py);
         d.set_item("origin", self.origin())?;
         d.set_item("phase", self.phase())?;
-        d.set_item("density", self.inner.density)?;
-        d.set_item("viscosity", self.inner.viscosity)?;
+        d.set_item("density", self.inner.density())?;
+        d.set_item("viscosity", self.inner.viscosity())?;
         d.set_item("kinematic_viscosity", self.kinematic_viscosity())?;
-        d.set_item("temperature", self.inner.temperature)?;
-        d.set_item("pressure", self.inner.pressure)?;
-        d.set_item("vapour_pressure", self.inner.vapour_pressure)?;
+        d.set_item("temperature", self.inner.temperature())?;
+        d.set_item("pressure", self.inner.pressure())?;
+        d.set_item("vapour_pressure", self.inner.vapour_pressure())?;
         d.set_item(
             "density_rel_uncertainty",
-            self.inner.density_rel_uncertainty,
+            self.inner.density_rel_uncertainty(),
         )?;
         d.set_item(
             "viscosity_rel_uncertainty",
-            self.inner.viscosity_rel_uncertainty,
+            self.inner.viscosity_rel_uncertainty(),
         )?;
         Ok(d)
     }
@@ -209,13 +209,13 @@ impl PyFluid {
         let mut s = format!(
             "Fluid.{}(density={:?}, viscosity={:?}",
             self.origin(),
-            f.density,
-            f.viscosity
+            f.density(),
+            f.viscosity()
         );
-        if let Some(t) = f.temperature {
+        if let Some(t) = f.temperature() {
             s += &format!(", temperature={t:?}");
         }
-        if let Some(p) = f.pressure {
+        if let Some(p) = f.pressure() {
             s += &format!(", pressure={p:?}");
         }
         s += &format!(", phase='{}')", self.phase());
@@ -243,7 +243,7 @@ pub fn water_density<'py>(
     temperature: &Bound<'py, PyAny>,
     pressure: Option<&Bound<'py, PyAny>>,
 ) -> PyResult<Bound<'py, PyAny>> {
-    water_property(py, temperature, pressure, |f| f.density)
+    water_property(py, temperature, pressure, |f| f.density())
 }
 
 /// Dynamic viscosity of liquid water, Pa·s, at ``temperature`` (K) and absolute
@@ -255,7 +255,7 @@ pub fn water_viscosity<'py>(
     temperature: &Bound<'py, PyAny>,
     pressure: Option<&Bound<'py, PyAny>>,
 ) -> PyResult<Bound<'py, PyAny>> {
-    water_property(py, temperature, pressure, |f| f.viscosity)
+    water_property(py, temperature, pressure, |f| f.viscosity())
 }
 
 fn water_property<'py>(

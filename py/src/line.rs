@@ -164,7 +164,7 @@ impl PyLine {
     /// Inlet static pressure of the options, Pa absolute (None when not given).
     #[getter]
     fn inlet_pressure(&self) -> Option<f64> {
-        self.inner.options().inlet_pressure
+        self.inner.options().inlet_pressure()
     }
     /// True when some element has a loss (otherwise no flow can be solved for).
     #[getter]
@@ -179,33 +179,33 @@ impl PyLine {
     /// The turbulent friction correlation of every pipe.
     #[getter]
     fn correlation(&self) -> &'static str {
-        self.inner.options().friction.correlation.name()
+        self.inner.options().friction().correlation.name()
     }
     /// The treatment of the transitional band.
     #[getter]
     fn transition(&self) -> &'static str {
-        self.inner.options().friction.transition.name()
+        self.inner.options().friction().transition.name()
     }
     /// Reynolds number below which flow is laminar.
     #[getter]
     fn laminar_limit(&self) -> f64 {
-        self.inner.options().friction.laminar_limit
+        self.inner.options().friction().laminar_limit
     }
     /// Reynolds number above which flow is turbulent.
     #[getter]
     fn turbulent_limit(&self) -> f64 {
-        self.inner.options().friction.turbulent_limit
+        self.inner.options().friction().turbulent_limit
     }
     /// The diameter used for turbulent flow in non-circular sections.
     #[getter]
     fn turbulent_diameter(&self) -> &'static str {
-        self.inner.options().turbulent_diameter.name()
+        self.inner.options().turbulent_diameter().name()
     }
     /// The uncertainty sources of the bands.
     #[getter]
     fn uncertainty(&self) -> PyUncertainty {
         PyUncertainty {
-            inner: self.inner.options().uncertainty.clone(),
+            inner: self.inner.options().uncertainty().clone(),
         }
     }
     /// The line at signed ``flow`` (m³/s): head loss, pressure loss, required head, the
@@ -398,7 +398,7 @@ impl PyLine {
         d.set_item("turbulent_diameter", self.turbulent_diameter())?;
         d.set_item(
             "uncertainty",
-            uncertainty_dict(py, &self.inner.options().uncertainty)?,
+            uncertainty_dict(py, self.inner.options().uncertainty())?,
         )?;
         let rows = PyList::empty(py);
         for i in 0..self.inner.len() {

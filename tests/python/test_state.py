@@ -111,3 +111,31 @@ def test_overflowing_sizes_are_refused():
         hg.Section.circle(1e300)
     with pytest.raises(hg.OutOfRangeError, match=r"^height = "):
         hg.Rise(1e300)
+
+
+def _swap_f64(state: bytes, old: float, new: float) -> bytes:
+    import struct
+
+    before = b"\xcb" + struct.pack(">d", old)
+    assert state.count(before) == 1, "the value to tamper with appears once"
+    return state.replace(before, b"\xcb" + struct.pack(">d", new))
+
+
+def test_tampered_fluid_and_option_states_are_refused():
+    # Each state is a real pickle with one number edited: the constructors' own checks
+    # refuse it as a HydrogradeError, never a panic or a fluid that breaks a rule.
+    oil = hg.Fluid(870.0, 0.03)
+    with pytest.raises(hg.HydrogradeError, match=r"density = -870"):
+        hg.Fluid._from_state(_swap_f64(_state(oil), 870.0, -870.0))
+    water = hg.Fluid.water(333.15, 3e5)
+    with pytest.raises(hg.HydrogradeError, match=r"density = 1500: differs from the water model"):
+        hg.Fluid._from_state(_swap_f64(_state(water), water.density, 1500.0))
+    assert hg.Fluid._from_state(_state(water)) == water
+    u = hg.Uncertainty(turbulent_model=0.07)
+    with pytest.raises(hg.HydrogradeError, match=r"turbulent_model = -0.07"):
+        hg.Uncertainty._from_state(_swap_f64(_state(u), 0.07, -0.07))
+    line = hg.Line([hg.Pipe(0.05, 30.0, 4.5e-5)], inlet_pressure=2.5e5)
+    with pytest.raises(hg.HydrogradeError, match=r"inlet_pressure = -250000"):
+        hg.Line._from_state(_swap_f64(_state(line), 2.5e5, -2.5e5))
+    with pytest.raises(hg.HydrogradeError, match="not a valid hydrograde state"):
+        hg.Fluid._from_state(_state(water)[:-3])

@@ -13,7 +13,7 @@
 
 use hydrograde::band::UncertaintyOptions;
 use hydrograde::fluid::Fluid;
-use hydrograde::line::{LineOptions, PumpCurve, split_flow};
+use hydrograde::line::{PumpCurve, split_flow};
 use hydrograde_benches::long_line;
 use std::time::Instant;
 
@@ -71,10 +71,12 @@ fn main() {
         let pump = PumpCurve::new(&[0.0, 0.02, 0.04], &[2.0 * h, 1.2 * h, 0.1 * h]).unwrap();
         let flows: Vec<f64> = (1..=10).map(|i| 0.004 * i as f64).collect();
         let bare = line
-            .set_options(LineOptions {
-                uncertainty: UncertaintyOptions::none(),
-                ..line.options().clone()
-            })
+            .set_options(
+                line.options()
+                    .clone()
+                    .with_uncertainty(UncertaintyOptions::none())
+                    .unwrap(),
+            )
             .unwrap();
         let rows: [(&str, (f64, f64)); 7] = [
             (

@@ -11,7 +11,7 @@ use hydrograde::fluid::Fluid;
 use hydrograde::friction::{
     Correlation, Isa, Options, darcy_factor, darcy_factor_batch, darcy_factor_batch_on,
 };
-use hydrograde::line::{LineOptions, split_flow};
+use hydrograde::line::split_flow;
 use hydrograde_benches::{flows, line20, long_line, turbulent_points, water};
 use std::hint::black_box;
 use std::process::ExitCode;
@@ -70,10 +70,11 @@ fn main() -> ExitCode {
             let (Ok(line), Ok(other)) = (long_line(n, 0.25), long_line(n, 0.2)) else {
                 return ExitCode::FAILURE;
             };
-            let bare = line.set_options(LineOptions {
-                uncertainty: UncertaintyOptions::none(),
-                ..line.options().clone()
-            });
+            let bare = line
+                .options()
+                .clone()
+                .with_uncertainty(UncertaintyOptions::none());
+            let bare = bare.and_then(|o| line.set_options(o));
             let branches = [line.clone(), other];
             let r = match (band, bare) {
                 ("bands", _) => {

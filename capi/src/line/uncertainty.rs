@@ -41,16 +41,16 @@ sized!(hg_uncertainty_options, diameter: f64);
 fn uncertainty_to_c(u: &UncertaintyOptions) -> hg_uncertainty_options {
     hg_uncertainty_options {
         struct_size: std::mem::size_of::<hg_uncertainty_options>(),
-        friction_model: i32::from(u.friction_model),
-        roughness: i32::from(u.roughness),
-        fluid: i32::from(u.fluid),
-        fittings: i32::from(u.fittings),
-        equipment: i32::from(u.equipment),
-        turbulent_model: u.turbulent_model,
-        laminar_model: u.laminar_model,
-        non_circular_model: u.non_circular_model,
-        roughness_default: u.roughness_default,
-        diameter: u.diameter,
+        friction_model: i32::from(u.friction_model()),
+        roughness: i32::from(u.roughness()),
+        fluid: i32::from(u.fluid()),
+        fittings: i32::from(u.fittings()),
+        equipment: i32::from(u.equipment()),
+        turbulent_model: u.turbulent_model(),
+        laminar_model: u.laminar_model(),
+        non_circular_model: u.non_circular_model(),
+        roughness_default: u.roughness_default(),
+        diameter: u.diameter(),
     }
 }
 
@@ -100,24 +100,21 @@ pub unsafe extern "C" fn hg_line_set_uncertainty(
         with_line(line, |l| {
             let d = uncertainty_to_c(&UncertaintyOptions::default());
             let c = ffi::read_sized("opts", opts, d)?;
-            let u = UncertaintyOptions {
-                friction_model: flag("friction_model", c.friction_model)?,
-                roughness: flag("roughness", c.roughness)?,
-                fluid: flag("fluid", c.fluid)?,
-                fittings: flag("fittings", c.fittings)?,
-                equipment: flag("equipment", c.equipment)?,
-                turbulent_model: c.turbulent_model,
-                laminar_model: c.laminar_model,
-                non_circular_model: c.non_circular_model,
-                roughness_default: c.roughness_default,
-                diameter: c.diameter,
-                independent_materials: l
-                    .builder
-                    .options()
-                    .uncertainty
-                    .independent_materials
-                    .clone(),
-            };
+            let u = l
+                .builder
+                .options()
+                .uncertainty()
+                .clone()
+                .with_friction_model(flag("friction_model", c.friction_model)?)
+                .with_roughness(flag("roughness", c.roughness)?)
+                .with_fluid(flag("fluid", c.fluid)?)
+                .with_fittings(flag("fittings", c.fittings)?)
+                .with_equipment(flag("equipment", c.equipment)?)
+                .with_turbulent_model(c.turbulent_model)?
+                .with_laminar_model(c.laminar_model)?
+                .with_non_circular_model(c.non_circular_model)?
+                .with_roughness_default(c.roughness_default)?
+                .with_diameter(c.diameter)?;
             Ok(l.builder.set_uncertainty(u)?)
         })
     }

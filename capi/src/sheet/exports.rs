@@ -100,8 +100,8 @@ pub unsafe extern "system" fn hydro_water(
                 pressure,
                 pressure_unit,
             )?;
-            put("density", density, w.density)?;
-            put("viscosity", viscosity, w.viscosity)
+            put("density", density, w.density())?;
+            put("viscosity", viscosity, w.viscosity())
         }
     })
 }
@@ -125,8 +125,8 @@ pub unsafe extern "system" fn hydro_air(
         // SAFETY: forwarded contract.
         unsafe {
             let a = fluid_at(true, temperature, temperature_unit, pressure, pressure_unit)?;
-            put("density", density, a.density)?;
-            put("viscosity", viscosity, a.viscosity)
+            put("density", density, a.density())?;
+            put("viscosity", viscosity, a.viscosity())
         }
     })
 }

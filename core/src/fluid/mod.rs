@@ -74,28 +74,105 @@ impl Origin {
 }
 
 /// A fluid: its density, dynamic viscosity and what the flow calculations need besides.
+///
+/// Built only through the checking constructors ([`Fluid::new`], [`Fluid::gas`],
+/// [`Fluid::water`], [`Fluid::air`]) and setters ([`Fluid::with_uncertainty`],
+/// [`Fluid::with_vapour_pressure`]); the accessors read it. Deserialising runs the same
+/// checks, and a stored water or air must match its model at its own state.
 #[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+#[serde(try_from = "FluidSpec", into = "FluidSpec")]
 pub struct Fluid {
-    /// Density ρ, kg/m³.
-    pub density: f64,
-    /// Dynamic viscosity μ, Pa·s.
-    pub viscosity: f64,
-    /// Liquid or gas.
-    pub phase: Phase,
-    /// Vapour (saturation) pressure at the fluid's temperature, Pa, for liquids where it
-    /// is known; used to warn of cavitation.
-    pub vapour_pressure: Option<f64>,
-    /// Temperature, K, where known (always for water, air and user gases).
-    pub temperature: Option<f64>,
-    /// Pressure at which the properties were evaluated, Pa, where known (always for
-    /// water, air and user gases).
-    pub pressure: Option<f64>,
-    /// Relative standard uncertainty (k = 1) of the density, dimensionless.
-    pub density_rel_uncertainty: f64,
-    /// Relative standard uncertainty (k = 1) of the viscosity, dimensionless.
-    pub viscosity_rel_uncertainty: f64,
-    /// Where the properties came from.
-    pub origin: Origin,
+    pub(crate) density: f64,
+    pub(crate) viscosity: f64,
+    pub(crate) phase: Phase,
+    pub(crate) vapour_pressure: Option<f64>,
+    pub(crate) temperature: Option<f64>,
+    pub(crate) pressure: Option<f64>,
+    pub(crate) density_rel_uncertainty: f64,
+    pub(crate) viscosity_rel_uncertainty: f64,
+    pub(crate) origin: Origin,
+}
+
+/// The stored form of a [`Fluid`]: the same fields, checked on the way in.
+#[derive(Serialize, Deserialize)]
+struct FluidSpec {
+    density: f64,
+    viscosity: f64,
+    phase: Phase,
+    vapour_pressure: Option<f64>,
+    temperature: Option<f64>,
+    pressure: Option<f64>,
+    density_rel_uncertainty: f64,
+    viscosity_rel_uncertainty: f64,
+    origin: Origin,
+}
+
+impl TryFrom<FluidSpec> for Fluid {
+    type Error = Error;
+    fn try_from(s: FluidSpec) -> Result<Fluid> {
+        let base = match (s.origin, s.phase, s.temperature, s.pressure) {
+            (Origin::User, Phase::Liquid, None, None) => Fluid::new(s.density, s.viscosity)?,
+            (Origin::User, Phase::Gas, Some(t), Some(p)) => {
+                Fluid::gas(s.density, s.viscosity, t, p)?
+            }
+            (Origin::Water, Phase::Liquid, Some(t), Some(p)) => Fluid::water(t, p)?,
+            (Origin::Air, Phase::Gas, Some(t), Some(p)) => Fluid::air(t, p)?,
+            (origin, phase, _, _) => {
+                return Err(Error::invalid(
+                    "fluid",
+                    format!(
+                        "a stored {} fluid that is a {} needs {}",
+                        origin.name(),
+                        phase.name(),
+                        if origin == Origin::User && phase == Phase::Liquid {
+                            "no temperature and no pressure"
+                        } else {
+                            "its temperature and pressure"
+                        }
+                    ),
+                ));
+            }
+        };
+        // A model fluid is rebuilt from its state; its stored properties must agree.
+        for (name, stored, model) in [
+            ("density", s.density, base.density),
+            ("viscosity", s.viscosity, base.viscosity),
+        ] {
+            if stored.to_bits() != model.to_bits() {
+                return Err(Error::out_of_range(
+                    name,
+                    stored,
+                    format!(
+                        "differs from the {} model at its state ({model})",
+                        base.origin.name()
+                    ),
+                ));
+            }
+        }
+        let mut f =
+            base.with_uncertainty(s.density_rel_uncertainty, s.viscosity_rel_uncertainty)?;
+        f.vapour_pressure = match s.vapour_pressure {
+            Some(v) => Some(check::non_negative("vapour_pressure", v)?),
+            None => None,
+        };
+        Ok(f)
+    }
+}
+
+impl From<Fluid> for FluidSpec {
+    fn from(f: Fluid) -> FluidSpec {
+        FluidSpec {
+            density: f.density,
+            viscosity: f.viscosity,
+            phase: f.phase,
+            vapour_pressure: f.vapour_pressure,
+            temperature: f.temperature,
+            pressure: f.pressure,
+            density_rel_uncertainty: f.density_rel_uncertainty,
+            viscosity_rel_uncertainty: f.viscosity_rel_uncertainty,
+            origin: f.origin,
+        }
+    }
 }
 
 impl Fluid {
@@ -148,7 +225,7 @@ impl Fluid {
     ///
     /// ```
     /// let w = hydrograde::fluid::Fluid::water(293.15, 101_325.0)?;
-    /// assert!((w.density - 998.2).abs() < 0.1); // common practice: 998.2 kg/m³ at 20 °C
+    /// assert!((w.density() - 998.2).abs() < 0.1); // common practice: 998.2 kg/m³ at 20 °C
     /// # Ok::<(), hydrograde::Error>(())
     /// ```
     ///
@@ -177,7 +254,7 @@ impl Fluid {
     ///
     /// ```
     /// let a = hydrograde::fluid::Fluid::air(288.15, 101_325.0)?;
-    /// assert!((a.density - 1.225).abs() < 1e-3); // U.S. Standard Atmosphere 1976, from memory
+    /// assert!((a.density() - 1.225).abs() < 1e-3); // U.S. Standard Atmosphere 1976, from memory
     /// assert!(a.is_gas());
     /// # Ok::<(), hydrograde::Error>(())
     /// ```
@@ -248,6 +325,62 @@ impl Fluid {
                 "a gas needs its pressure to be re-evaluated at another pressure",
             )),
         }
+    }
+
+    /// Density ρ, kg/m³.
+    #[inline]
+    pub fn density(&self) -> f64 {
+        self.density
+    }
+
+    /// Dynamic viscosity μ, Pa·s.
+    #[inline]
+    pub fn viscosity(&self) -> f64 {
+        self.viscosity
+    }
+
+    /// Liquid or gas.
+    #[inline]
+    pub fn phase(&self) -> Phase {
+        self.phase
+    }
+
+    /// Vapour (saturation) pressure at the fluid's temperature, Pa, for liquids where it
+    /// is known; used to warn of cavitation.
+    #[inline]
+    pub fn vapour_pressure(&self) -> Option<f64> {
+        self.vapour_pressure
+    }
+
+    /// Temperature, K, where known (always for water, air and user gases).
+    #[inline]
+    pub fn temperature(&self) -> Option<f64> {
+        self.temperature
+    }
+
+    /// Pressure at which the properties were evaluated, Pa, where known (always for
+    /// water, air and user gases).
+    #[inline]
+    pub fn pressure(&self) -> Option<f64> {
+        self.pressure
+    }
+
+    /// Relative standard uncertainty (k = 1) of the density, dimensionless.
+    #[inline]
+    pub fn density_rel_uncertainty(&self) -> f64 {
+        self.density_rel_uncertainty
+    }
+
+    /// Relative standard uncertainty (k = 1) of the viscosity, dimensionless.
+    #[inline]
+    pub fn viscosity_rel_uncertainty(&self) -> f64 {
+        self.viscosity_rel_uncertainty
+    }
+
+    /// Where the properties came from.
+    #[inline]
+    pub fn origin(&self) -> Origin {
+        self.origin
     }
 
     /// Kinematic viscosity ν = μ/ρ, m²/s.

@@ -21,6 +21,7 @@ mod path;
 mod pump;
 mod resize;
 pub(crate) use path::{Resolved, Role};
+mod options;
 mod parallel;
 pub mod plausible;
 mod result;
@@ -33,6 +34,7 @@ pub(crate) mod uncertainty;
 
 use builder::LineSpec;
 pub use builder::{LineBuilder, MAX_COUNT, MAX_LABEL_CHARS, Tag, check_count, check_label};
+pub use options::{LineOptions, SURROUNDINGS_PRESSURE, SURROUNDINGS_TEMPERATURE};
 pub use parallel::{Split, split_flow};
 pub use pump::{
     PUMP_CURVE_MAX_FLOW, PUMP_CURVE_MAX_HEAD, PUMP_CURVE_MAX_POINTS, PumpCurve, PumpFit,
@@ -44,13 +46,10 @@ pub use sizing::{Limit, SizeChoice, Sizing};
 pub use solve::{FlowSolution, OperatingPoint};
 pub use uncertainty::CurveBand;
 
-use crate::band::UncertaintyOptions;
 use crate::error::{Error, Result, check};
 use crate::fitting::Fitting;
 use crate::fluid::Fluid;
-use crate::friction;
 use crate::pipe::Pipe;
-use crate::section::TurbulentDiameter;
 use serde::{Deserialize, Serialize};
 
 /// Equipment in a line: a component known by its rating rather than its geometry. Built
@@ -268,90 +267,6 @@ impl Element {
     /// The errors of [`Rise::new`].
     pub fn rise(height: f64) -> Result<Element> {
         Rise::new(height).map(Element::Rise)
-    }
-}
-
-/// Options of a line.
-#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
-pub struct LineOptions {
-    /// Correlation, regime limits and transition treatment for every pipe.
-    pub friction: friction::Options,
-    /// Diameter used for turbulent flow in non-circular sections.
-    pub turbulent_diameter: TurbulentDiameter,
-    /// Static pressure at the inlet, Pa absolute (enables the grade line, cavitation and
-    /// gas checks). For a gas without it, the gas's own stated pressure is used.
-    pub inlet_pressure: Option<f64>,
-    /// Uncertainty sources of the bands.
-    pub uncertainty: UncertaintyOptions,
-    /// The air around the line, a gas: `None` for dry air at
-    /// [`SURROUNDINGS_TEMPERATURE`] and [`SURROUNDINGS_PRESSURE`]. A line open to it at
-    /// both ends feels, over a rise Δz, only the difference between the column inside and
-    /// the column outside: (ρ − ρ_surroundings)·g·Δz of pressure (the stack effect of a
-    /// chimney; hydrostatics, exact for uniform densities).
-    #[serde(default)]
-    pub surroundings: Option<Fluid>,
-    /// Count the surrounding air column for a liquid line too. Off by default: for water
-    /// it changes a rise's head by ρ_air/ρ ≈ 0.12 %, and a liquid line usually runs between
-    /// free surfaces whose own air columns cancel it.
-    #[serde(default)]
-    pub air_column_for_liquids: bool,
-    /// The pressure the line must deliver at its end, Pa, above the pressure at its start
-    /// (a spray header, a burner, a process inlet fed from a tank open to the same
-    /// atmosphere: the gauge pressure it needs). Counted in the required head as
-    /// p_end/(ρ g); `None` (the default) asks for none.
-    #[serde(default)]
-    pub end_pressure: Option<f64>,
-}
-
-/// Temperature of the default surroundings, K (20 °C).
-pub const SURROUNDINGS_TEMPERATURE: f64 = 293.15;
-/// Pressure of the default surroundings, Pa (one standard atmosphere).
-pub const SURROUNDINGS_PRESSURE: f64 = 101_325.0;
-
-impl Default for LineOptions {
-    fn default() -> Self {
-        LineOptions {
-            friction: friction::Options::default(),
-            turbulent_diameter: TurbulentDiameter::Hydraulic,
-            inlet_pressure: None,
-            uncertainty: UncertaintyOptions::default(),
-            surroundings: None,
-            air_column_for_liquids: false,
-            end_pressure: None,
-        }
-    }
-}
-
-impl LineOptions {
-    /// Checks the options.
-    pub fn validate(&self) -> Result<()> {
-        self.friction.validate()?;
-        if let Some(p) = self.inlet_pressure {
-            check::positive("inlet_pressure", p)?;
-        }
-        self.surroundings_fluid()?;
-        if let Some(p) = self.end_pressure {
-            check::finite("end_pressure", p)?;
-        }
-        self.uncertainty.validate()
-    }
-
-    /// The surrounding air: the stated one, or dry air at 20 °C and 101 325 Pa.
-    ///
-    /// # Errors
-    /// [`Error::Invalid`] naming `surroundings` when the stated fluid is a liquid.
-    pub fn surroundings_fluid(&self) -> Result<Fluid> {
-        match &self.surroundings {
-            Some(f) if f.is_gas() => Ok(f.clone()),
-            Some(f) => Err(Error::invalid(
-                "surroundings",
-                format!(
-                    "a liquid (density {} kg/m³): the surroundings of a line must be a gas (the air around it)",
-                    f.density
-                ),
-            )),
-            None => Fluid::air(SURROUNDINGS_TEMPERATURE, SURROUNDINGS_PRESSURE),
-        }
     }
 }
 
