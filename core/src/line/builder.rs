@@ -537,6 +537,7 @@ impl Line {
                 None => format!("{} {index}", f.method().name()),
             },
             Element::Equipment(q) => q.name().to_string(),
+            Element::Pump(_) => format!("pump {index}"),
         });
         Some(match self.counts[index] {
             1 => own,
