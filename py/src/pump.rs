@@ -68,3 +68,68 @@ impl PyPump {
         Ok(PyPump { inner, tag })
     }
 }
+
+/// Where a line with its own pump runs by itself (:meth:`Line.pumped_flow`): ``flow``
+/// (m³/s) at which its required head is zero, ``pump_head`` (m) the pumps' head there,
+/// ``npsh_available`` (m) at the first pump's suction (None without an inlet pressure or
+/// a vapour pressure), ``pump_row`` (the row of ``result.elements`` holding it),
+/// ``flow_band`` (m³/s), ``result`` (the line evaluated there) and ``iterations``.
+#[pyclass(name = "PumpedFlow", module = "hydrograde._native", frozen)]
+pub struct PyPumpedFlow {
+    /// The core value.
+    pub inner: hydrograde::line::PumpedFlow,
+}
+
+#[pymethods]
+impl PyPumpedFlow {
+    /// Flow, m³/s.
+    #[getter]
+    fn flow(&self) -> f64 {
+        self.inner.flow
+    }
+    /// The pumps' head at the flow, m.
+    #[getter]
+    fn pump_head(&self) -> f64 {
+        self.inner.pump_head
+    }
+    /// d(required head)/dQ at the flow, s/m².
+    #[getter]
+    fn drequired_head_dflow(&self) -> f64 {
+        self.inner.drequired_head_dflow
+    }
+    /// NPSH available at the first pump's suction, m (None when it does not apply).
+    #[getter]
+    fn npsh_available(&self) -> Option<f64> {
+        self.inner.npsh_available
+    }
+    /// The row of ``result.elements`` holding the first pump.
+    #[getter]
+    fn pump_row(&self) -> usize {
+        self.inner.pump_row
+    }
+    /// Band of the flow, m³/s (the pump curve taken as stated).
+    #[getter]
+    fn flow_band(&self, py: Python<'_>) -> PyResult<Py<crate::band::PyBand>> {
+        crate::band::PyBand::object(py, &self.inner.flow_band)
+    }
+    /// The line evaluated at the flow.
+    #[getter]
+    fn result(&self, py: Python<'_>) -> PyResult<crate::line_result::PyLineResult> {
+        crate::line_result::PyLineResult::new(py, self.inner.result.clone())
+    }
+    /// Solver iterations used.
+    #[getter]
+    fn iterations(&self) -> usize {
+        self.inner.iterations
+    }
+    fn __repr__(&self) -> String {
+        let npsh = self
+            .inner
+            .npsh_available
+            .map_or(String::new(), |n| format!(", npsh_available={n:?}"));
+        format!(
+            "PumpedFlow(flow={:?}, pump_head={:?}{npsh})",
+            self.inner.flow, self.inner.pump_head
+        )
+    }
+}
