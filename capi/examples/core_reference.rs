@@ -131,6 +131,7 @@ fn main() -> io::Result<()> {
     others(&mut out)?;
     materials(&mut out)?;
     lines(&mut out)?;
+    pumps(&mut out)?;
     out.flush()
 }
 
@@ -857,6 +858,50 @@ fn line_solves(out: &mut impl Write, fluid: &Fluid, fi: i64) -> io::Result<()> {
                 ],
                 r,
             )?;
+        }
+    }
+    Ok(())
+}
+
+/// The pump line of the C, C++ and Python pump tests: a pump on H = 40 − 1.5e5 Q²
+/// (11 points from 0 to 15 L/s, quadratic fit), a strainer K = 2.5 and a K = 12 on 50 mm,
+/// a 15 m lift, 101 325 Pa at the inlet; its own flow with the pump's head and NPSH, and
+/// the required head inside, beyond and reverse through the curve.
+fn pumps(out: &mut impl Write) -> io::Result<()> {
+    use Tok::{D, I};
+    let q: Vec<f64> = (0..=10).map(|i| 0.015 * f64::from(i) / 10.0).collect();
+    let h: Vec<f64> = q.iter().map(|q| 40.0 - 1.5e5 * q * q).collect();
+    let build = || -> hydrograde::Result<Line> {
+        let line = Line::new(vec![
+            Element::Fitting(Fitting::k(2.5)?.with_diameter(0.05)?),
+            Element::Pump(PumpCurve::fit(&q, &h, 2)?),
+            Element::Fitting(Fitting::k(12.0)?.with_diameter(0.05)?),
+            Element::rise(15.0)?,
+        ])?;
+        let o = line
+            .options()
+            .clone()
+            .with_inlet_pressure(Some(101_325.0))?;
+        line.set_options(o)
+    };
+    let line = build().map_err(io::Error::other)?;
+    let fluids = [Fluid::new(998.2, 1.002e-3), Fluid::water(293.15, 2e5)];
+    for (fi, fluid) in fluids.iter().enumerate() {
+        let fluid = fluid.clone().map_err(io::Error::other)?;
+        let r = line.pumped_flow(&fluid).map(|p| {
+            vec![
+                D(p.flow),
+                D(p.pump_head),
+                D(p.npsh_available.unwrap_or(0.0)),
+                I(i64::from(p.npsh_available.is_some())),
+            ]
+        });
+        emit(out, "pump_flow", &[I(fi as i64)], r)?;
+        for flow in [0.005, 0.02, -0.001] {
+            let r = line
+                .required_head(&fluid, flow)
+                .map(|(h, d)| vec![D(h), D(d)]);
+            emit(out, "pump_eval", &[I(fi as i64), D(flow)], r)?;
         }
     }
     Ok(())

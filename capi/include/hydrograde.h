@@ -53,6 +53,7 @@
  *             hg_line_set_*, hg_line_flow_for_head, hg_line_system_curve,
  *             hg_line_operating_point, hg_line_required_head, hg_pump_curve_head,
  *             hg_pump_curve_fit, hg_pump_curve_fit_head, hg_line_operating_point_fit,
+ *             hg_line_pumped_flow,
  *             hg_line_with_uniform_diameter, hg_line_size, hg_line_split_flow,
  *             hg_line_split_flow_bands, hg_line_blocks_reverse_flow,
  *             hg_line_set_air_column_for_liquids, hg_line_set_label,
@@ -298,6 +299,11 @@
  * line), with `HG_WARN_BORE_CHANGE_WITHOUT_TRANSITION`.
  */
 #define HG_ELEMENT_SECTION_CHANGE 4
+
+/**
+ * A pump (`hg_line_add_pump`): its head loss is the negative of the head it adds.
+ */
+#define HG_ELEMENT_PUMP 5
 
 /**
  * The `regime` of an element that has none (every element but a pipe).
@@ -2378,6 +2384,56 @@ int32_t hg_line_operating_point_fit(const struct hg_line *line,
                                     double *flow_high,
                                     double *head_low,
                                     double *head_high);
+
+/**
+ * Appends a pump to `line`: its curve through `n` points (`flows` ≥ 0 strictly
+ * increasing, m³/s; `heads`, m), `degree` 0 the monotone cubic through the points (heads
+ * must not rise with flow), 2 or 3 the least-squares fit of `hg_pump_curve_fit`. In
+ * every evaluation the pump is the negative loss −H(Q) (its row's head loss, kind
+ * `HG_ELEMENT_PUMP`) with slope −dH/dQ, inside the curve's flow range only: a flow
+ * outside it (no extrapolation) or reverse through it (a pump run backwards is not
+ * modelled) is `HG_ERR_OUT_OF_RANGE` naming the pump and its range.
+ *
+ * Returns `HG_OK`; `HG_ERR_INVALID` for too few points (a pump needs a curve);
+ * `HG_ERR_OUT_OF_RANGE` for a bad degree, flows not increasing or heads rising (degree
+ * 0); `HG_ERR_NOT_FINITE`; `HG_ERR_NULL_POINTER`. Needs exclusive use of `line`.
+ *
+ * # Safety
+ * `line` must be NULL or a live handle used by no other thread; `flows` and `heads` NULL
+ * or valid for `n` doubles.
+ */
+int32_t hg_line_add_pump(struct hg_line *line,
+                         const double *flows,
+                         const double *heads,
+                         size_t n,
+                         int32_t degree);
+
+/**
+ * Where a line with its own pumps runs by itself: the flow `*flow` (m³/s) at which its
+ * required head (static head + losses + end pressure head − the pumps' head) is zero,
+ * solved in a kept bracket over the flow range the pumps' curves share; `*pump_head`
+ * (m) the pumps' head there. `*npsh_available` (m) is the NPSH available at the first
+ * pump's suction (the boundary just upstream of it) and `*has_npsh` 1, or 0 and 0 when
+ * the line has no inlet pressure or the fluid no vapour pressure. When `result` is not
+ * NULL, `*result` receives the line evaluated at the flow (free it with
+ * `hg_line_result_free`).
+ *
+ * Returns `HG_OK`; `HG_ERR_INVALID` for a line without a pump or one that cannot be
+ * built; `HG_ERR_NO_SOLUTION` when the pumps' curves share no flow or the required head
+ * does not change sign over their range (the curves are not extrapolated);
+ * `HG_ERR_NULL_POINTER`. Nothing is written on error. Thread-safe (the line is only read).
+ *
+ * # Safety
+ * `line` and `fluid` must be NULL or live handles; the outputs NULL or writable
+ * (`result` may be NULL).
+ */
+int32_t hg_line_pumped_flow(const struct hg_line *line,
+                            const struct hg_fluid *fluid,
+                            double *flow,
+                            double *pump_head,
+                            double *npsh_available,
+                            int32_t *has_npsh,
+                            struct hg_line_result **result);
 
 /**
  * Sizes the round pipes of `line` (all set to one inside diameter) for `fluid` at flow

@@ -626,6 +626,7 @@ struct operating_point {
   double flow, head, flow_low, flow_high, head_low, head_high;
 };
 
+
 /// A line evaluated at one flow (owns an hg_line_result; movable, not copyable). Every
 /// accessor reads the stored result; nothing is evaluated again. It stays valid after
 /// the line and fluid it came from are gone.
@@ -680,6 +681,32 @@ class line_result {
     for (std::size_t k = 0; k < n; ++k)
       out.push_back(detail::source([&](char* buf, std::size_t len, std::size_t* need, double* share) {
         return hg_line_result_element_band_source(r_, index, k, buf, len, need, share);
+      }));
+    return out;
+  }
+  /// NPSH available (m) at the outlet of row `index` (needs an inlet pressure and a
+  /// vapour pressure).
+  double npsh_available(std::size_t index) const {
+    double v = 0.0;
+    check(hg_line_result_npsh_available(r_, index, &v));
+    return v;
+  }
+  /// NPSH available (m) at the outlet of row `index` against `required` + `margin` (m):
+  /// (available, sufficient).
+  std::pair<double, bool> npsh_check(std::size_t index, double required, double margin) const {
+    double v = 0.0;
+    int32_t ok = 0;
+    check(hg_line_result_npsh_check(r_, index, required, margin, &v, &ok));
+    return {v, ok != 0};
+  }
+  /// What each warning found, in words.
+  std::vector<std::string> messages() const {
+    std::size_t n = 0;
+    check(hg_line_result_message_count(r_, &n));
+    std::vector<std::string> out;
+    for (std::size_t i = 0; i < n; ++i)
+      out.push_back(detail::text([&](char* buf, std::size_t len, std::size_t* need) {
+        return hg_line_result_message(r_, i, buf, len, need);
       }));
     return out;
   }
@@ -739,6 +766,29 @@ class line {
     return *this;
   }
   /// Friction options of every pipe (correlation, regime limits, transition).
+  /// Rated equipment: `drop` (Pa) at `at_flow` (m³/s) with a fluid of `rating_density`
+  /// (kg/m³).
+  line& add_equipment_rated(const std::string& name, double drop, double at_flow, double rating_density) {
+    check(hg_line_add_equipment_rated(l_, name.c_str(), drop, at_flow, rating_density));
+    return *this;
+  }
+  /// A pump whose curve passes through (flow m³/s, head m) points: `degree` 0 the
+  /// monotone cubic through them, 2 or 3 a least-squares fit. Its head is the negative
+  /// loss −H(Q), inside the curve's flow range only.
+  line& add_pump(const std::vector<double>& flows, const std::vector<double>& heads, int32_t degree = 0) {
+    if (flows.size() != heads.size()) throw error(HG_ERR_INVALID, "heads: length differs from flows'");
+    // An empty vector's data() may be null: pass a valid pointer so that the core says
+    // what is wrong with the curve (too few points), not that a pointer is NULL.
+    static const double none = 0.0;
+    check(hg_line_add_pump(l_, flows.empty() ? &none : flows.data(), heads.empty() ? &none : heads.data(),
+                           flows.size(), degree));
+    return *this;
+  }
+  /// The pressure (Pa) the line must deliver at its end, counted in the required head.
+  line& set_end_pressure(double pressure) {
+    check(hg_line_set_end_pressure(l_, pressure));
+    return *this;
+  }
   line& set_friction_options(const hg_friction_options& o) {
     check(hg_line_set_friction_options(l_, &o));
     return *this;
@@ -966,6 +1016,31 @@ class line {
                        none ? nullptr : schedule.c_str(), &z));
     return z;
   }
+  /// Sizes the round pipes of elements [start, end) only (optionally of `material`;
+  /// empty for each pipe's own).
+  hg_sizing size_in(const fluid& f, double flow, int32_t limit, double limit_value, std::size_t start,
+                    std::size_t end, const std::string& table = "", const std::string& schedule = "",
+                    const std::string& material = "") const {
+    hg_sizing z{};
+    z.struct_size = sizeof z;
+    bool none = table.empty() && schedule.empty();
+    check(hg_line_size_in(l_, f.get(), flow, limit, limit_value, none ? nullptr : table.c_str(),
+                          none ? nullptr : schedule.c_str(), start, end,
+                          material.empty() ? nullptr : material.c_str(), &z));
+    return z;
+  }
+  /// A new line with the round pipes of elements [start, end) set to `diameter` (m),
+  /// optionally of `material` (empty for each pipe's own).
+  line with_diameter_in(double diameter, std::size_t start, std::size_t end,
+                        const std::string& material = "") const {
+    hg_line* out = nullptr;
+    check(hg_line_with_diameter_in(l_, diameter, start, end, material.empty() ? nullptr : material.c_str(), &out));
+    return line(out);
+  }
+  /// Where a line with its own pump runs by itself (its required head zero), with the
+  /// pump's head, the NPSH available at its suction (when known) and the line there.
+  struct pumped_flow_result;
+  pumped_flow_result pumped_flow(const fluid& f) const;
   /// The C handle (still owned by this object).
   hg_line* get() noexcept { return l_; }
   /// The C handle (still owned by this object).
@@ -975,6 +1050,23 @@ class line {
   explicit line(hg_line* l) : l_(l) {}
   hg_line* l_ = nullptr;
 };
+
+/// The flow a line with its own pump runs at (m³/s), the pump's head there (m), the NPSH
+/// available at its suction (m; `has_npsh` false without an inlet or vapour pressure),
+/// and the line evaluated there.
+struct line::pumped_flow_result {
+  double flow, pump_head, npsh_available;
+  bool has_npsh;
+  line_result result;
+};
+
+inline line::pumped_flow_result line::pumped_flow(const fluid& f) const {
+  double q = 0.0, h = 0.0, npsh = 0.0;
+  int32_t has = 0;
+  hg_line_result* r = nullptr;
+  check(hg_line_pumped_flow(l_, f.get(), &q, &h, &npsh, &has, &r));
+  return pumped_flow_result{q, h, npsh, has != 0, line_result(r)};
+}
 
 /// Splits total (m³/s) between parallel lines so that all need the same head: the flow
 /// of each branch and the common head (m).

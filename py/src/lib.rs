@@ -15,6 +15,7 @@ mod line;
 mod line_result;
 mod network;
 mod pipe;
+mod pump;
 mod roughness;
 mod section;
 mod sizes;
@@ -57,6 +58,8 @@ fn _native(m: &Bound<'_, PyModule>) -> PyResult<()> {
     m.add_class::<pipe::PyPipe>()?;
     m.add_class::<pipe::PyRise>()?;
     m.add_class::<pipe::PyEquipment>()?;
+    m.add_class::<pump::PyPump>()?;
+    m.add_class::<pump::PyPumpedFlow>()?;
     m.add_class::<line::PyLine>()?;
     m.add_class::<line::PyPumpCurve>()?;
     m.add_function(wrap_pyfunction!(line::split_flow, m)?)?;

@@ -296,6 +296,14 @@ impl PyLine {
             .py()?;
         Ok(PyOperatingPoint { inner: p })
     }
+    /// Where this line, holding its own :class:`Pump`, runs by itself: the flow at which
+    /// its required head (static head + losses + end pressure head − the pumps' head) is
+    /// zero, solved in a kept bracket over the pumps' flow range (no extrapolation), with
+    /// the NPSH available at the first pump's suction.
+    fn pumped_flow(&self, py: Python<'_>, fluid: &PyFluid) -> PyResult<crate::pump::PyPumpedFlow> {
+        let p = py.detach(|| self.inner.pumped_flow(&fluid.inner)).py()?;
+        Ok(crate::pump::PyPumpedFlow { inner: p })
+    }
     /// Sizes the line's round pipes (all take one trial bore) for ``flow`` (m³/s, ≠ 0)
     /// under exactly one limit: ``max_pressure_loss`` (Pa, friction + minor) or
     /// ``max_velocity`` (m/s); with ``table`` (``"steel"``, ``"stainless"``, ``"copper"``,
@@ -315,9 +323,10 @@ impl PyLine {
         #[pyo3(from_py_with = si::opt_max_velocity)] max_velocity: Option<f64>,
         table: Option<&str>,
         schedule: Option<&str>,
-        section: Option<(usize, usize)>,
+        section: Option<(i64, i64)>,
         material: Option<String>,
     ) -> PyResult<PySizing> {
+        let section = section_arg(section)?;
         let limit = match (max_pressure_loss, max_velocity) {
             (Some(p), None) => Limit::PressureLoss(p),
             (None, Some(v)) => Limit::Velocity(v),
@@ -376,9 +385,10 @@ impl PyLine {
     fn with_uniform_diameter(
         &self,
         #[pyo3(from_py_with = si::diameter)] diameter: f64,
-        section: Option<(usize, usize)>,
+        section: Option<(i64, i64)>,
         material: Option<String>,
     ) -> PyResult<Self> {
+        let section = section_arg(section)?;
         Ok(PyLine {
             inner: self
                 .inner
@@ -469,6 +479,25 @@ impl PyLine {
         let e = &self.inner.elements()[i];
         element_object(py, e, self.inner.tag(i).unwrap_or_default())
     }
+}
+
+/// A ``section=(start, end)`` argument as element indices: negative indices are refused
+/// with an error naming ``section`` (a section counts elements from 0, as
+/// :meth:`Line.__len__` does; no counting from the end).
+fn section_arg(section: Option<(i64, i64)>) -> PyResult<Option<(usize, usize)>> {
+    let Some((start, end)) = section else {
+        return Ok(None);
+    };
+    let index = |v: i64| {
+        usize::try_from(v).map_err(|_| {
+            Error::out_of_range(
+                "section",
+                v as f64,
+                "element indices of a section count from 0 (start, end with 0 ≤ start < end ≤ the number of elements); negative indices are not accepted",
+            )
+        })
+    };
+    Ok(Some((index(start).py()?, index(end).py()?)))
 }
 
 /// A pump curve through (flow m³/s, head m) points: at least 3, flows ≥ 0 strictly

@@ -319,7 +319,7 @@ impl PyEquipment {
     }
 }
 
-/// A core element from a Python Pipe, Fitting, Rise or Equipment.
+/// A core element from a Python Pipe, Fitting, Rise, Equipment or Pump.
 pub fn element(obj: &Bound<'_, PyAny>, index: usize) -> PyResult<(Element, Tag)> {
     if let Ok(p) = obj.cast::<PyPipe>() {
         let p = p.get();
@@ -337,8 +337,12 @@ pub fn element(obj: &Bound<'_, PyAny>, index: usize) -> PyResult<(Element, Tag)>
         let e = e.get();
         return Ok((Element::Equipment(e.inner.clone()), e.tag.clone()));
     }
+    if let Ok(p) = obj.cast::<crate::pump::PyPump>() {
+        let p = p.get();
+        return Ok((Element::Pump(p.inner.clone()), p.tag.clone()));
+    }
     Err(PyTypeError::new_err(format!(
-        "elements[{index}]: expected Pipe, Fitting, Rise or Equipment, got {}",
+        "elements[{index}]: expected Pipe, Fitting, Rise, Equipment or Pump, got {}",
         obj.get_type().name()?
     )))
 }
@@ -366,6 +370,14 @@ pub fn element_object(py: Python<'_>, e: &Element, tag: Tag) -> PyResult<Py<PyAn
             py,
             PyEquipment {
                 inner: q.clone(),
+                tag,
+            },
+        )?
+        .into_any(),
+        Element::Pump(c) => Py::new(
+            py,
+            crate::pump::PyPump {
+                inner: c.clone(),
                 tag,
             },
         )?

@@ -365,11 +365,74 @@ static void test_spans_enums_and_try() {
         "regime enum class");
 }
 
+// A pump in a line through the wrapper: the same bits as the C calls, the closed form of
+// its operating point, NPSH at its suction, and the wrappers of the NPSH, message, rated
+// equipment, end pressure and sectioned sizing calls.
+static void test_pump_line() {
+  namespace hg = hydrograde;
+  std::vector<double> q(11), h(11);
+  for (int i = 0; i < 11; ++i) q[i] = 0.015 * i / 10.0, h[i] = 40.0 - 1.5e5 * q[i] * q[i];
+  hg::line l;
+  l.add_fitting_k(2.5, 0.05).add_pump(q, h, 2).add_fitting_k(12.0, 0.05).add_rise(15.0).set_inlet_pressure(101325.0);
+  hg::fluid water = hg::fluid::water(293.15, 2e5);
+  hg::line::pumped_flow_result p = l.pumped_flow(water);
+  // Closed form (energy balance, definition of K): Q = sqrt(25/(1.5e5 + 14.5/(2 g A²))).
+  const double g = 9.80665, a = 3.14159265358979323846 * 0.05 * 0.05 / 4.0;
+  const double want = std::sqrt(25.0 / (1.5e5 + 14.5 / (2.0 * g * a * a)));
+  CHECK(std::fabs(p.flow - want) < 1e-12 * want, "pumped flow");
+  double cq, ch, cn;
+  int32_t has;
+  CHECK(hg_line_pumped_flow(l.get(), water.get(), &cq, &ch, &cn, &has, nullptr) == HG_OK, "C call");
+  CHECK(same_bits(p.flow, cq) && same_bits(p.pump_head, ch) && same_bits(p.npsh_available, cn) && p.has_npsh,
+        "C++ equals C");
+  CHECK(same_bits(p.result.npsh_available(0), p.npsh_available), "NPSH at the suction");
+  std::pair<double, bool> c = p.result.npsh_check(0, 2.0, 0.5);
+  CHECK(same_bits(c.first, p.npsh_available) && c.second == (c.first >= 2.5), "NPSH check");
+  CHECK(p.result.element(1).kind == HG_ELEMENT_PUMP && p.result.element(1).head_loss == -p.pump_head, "pump row");
+  std::pair<int32_t, std::string> e = thrown([&] { l.required_head(water, 0.02); });
+  CHECK(e.first == HG_ERR_OUT_OF_RANGE && e.second.find("pump") != std::string::npos, e.second.c_str());
+  e = thrown([&] { l.required_head(water, -1e-3); });
+  CHECK(e.first == HG_ERR_OUT_OF_RANGE && e.second.find("reverse") != std::string::npos, e.second.c_str());
+  e = thrown([&] { hg::line().add_pump({}, {}); });
+  CHECK(e.first == HG_ERR_INVALID, e.second.c_str());
+  e = thrown([&] { hg::line().add_pump({0.0, 0.01}, {30.0}); });
+  CHECK(e.first == HG_ERR_INVALID, e.second.c_str());
+  e = thrown([&] { hg::line().add_fitting_k(1.0, 0.05).pumped_flow(water); });
+  CHECK(e.first == HG_ERR_INVALID && e.second.find("no pump") != std::string::npos, e.second.c_str());
+  // Rated equipment, an end pressure and the result's messages: a filter rated 1.5 Pa (a
+  // unit slip, common practice: under 10 Pa) is counted and warned about.
+  hg::line r;
+  r.add_pipe(0.05, 10.0, 4.5e-5).add_equipment_rated("filter", 1.5, 1e-3, 1000.0).set_end_pressure(2e5);
+  hg::line_result rr = r.evaluate(water, 2e-3);
+  std::vector<std::string> m = rr.messages();
+  size_t n = 0;
+  CHECK(hg_line_result_message_count(rr.get(), &n) == HG_OK && n == m.size() && !m.empty(), "messages");
+  CHECK(std::any_of(m.begin(), m.end(), [](const std::string& s) { return s.find("filter") != std::string::npos; }),
+        "the slip names the filter");
+  e = thrown([&] { r.set_end_pressure(NAN); });
+  CHECK(e.first == HG_ERR_NOT_FINITE, e.second.c_str());
+  // Sectioned sizing and resizing: the same as the C calls.
+  hg::line two;
+  two.add_pipe(0.05, 20.0, 4.5e-5).add_pipe(0.08, 20.0, 4.5e-5);
+  hg_sizing z = two.size_in(water, 3e-3, HG_LIMIT_VELOCITY, 2.0, 0, 1);
+  hg_sizing zc{};
+  zc.struct_size = sizeof zc;
+  CHECK(hg_line_size_in(two.get(), water.get(), 3e-3, HG_LIMIT_VELOCITY, 2.0, nullptr, nullptr, 0, 1, nullptr, &zc) ==
+                HG_OK &&
+            same_bits(z.min_inside_diameter, zc.min_inside_diameter),
+        "size_in");
+  hg::line wider = two.with_diameter_in(0.06, 0, 1);
+  CHECK(wider.evaluate(water, 3e-3).element(0).bore == 0.06, "with_diameter_in");
+  e = thrown([&] { two.with_diameter_in(0.06, 1, 5); });
+  CHECK(e.first != HG_OK && !e.second.empty(), e.second.c_str());
+}
+
 int main() {
   test_spans_enums_and_try();
   test_friction();
   test_others();
   test_line();
+  test_pump_line();
   std::printf("test_capi_cpp: %ld checks, %ld failed\n", run, failed);
   return failed == 0 ? 0 : 1;
 }

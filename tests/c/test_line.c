@@ -1351,6 +1351,121 @@ static void test_resize(void) {
   hg_line_free(l);
 }
 
+/* A pump as an element of a line (hg_line_add_pump) and the flow the line runs at by
+ * itself (hg_line_pumped_flow): the pump line of core_reference.rs's pumps(), built here
+ * the same way, against the Rust core bit for bit and against the closed form. */
+static hg_line *pump_line;
+
+static int32_t build_pump_line(hg_line **out) {
+  double q[11], h[11];
+  for (int i = 0; i < 11; i++) q[i] = 0.015 * (double)i / 10.0, h[i] = 40.0 - 1.5e5 * q[i] * q[i];
+  int32_t s = hg_line_new(out);
+  if (s == HG_OK) s = hg_line_add_fitting_k(*out, 2.5, 0.05);
+  if (s == HG_OK) s = hg_line_add_pump(*out, q, h, 11, 2);
+  if (s == HG_OK) s = hg_line_add_fitting_k(*out, 12.0, 0.05);
+  if (s == HG_OK) s = hg_line_add_rise(*out, 15.0);
+  if (s == HG_OK) s = hg_line_set_inlet_pressure(*out, 101325.0);
+  return s;
+}
+
+static long check_pump_record(const record *r, int quiet) {
+  const hg_fluid *f = fluids[r->in[0].i];
+  tok got[4];
+  int n = 0;
+  int32_t s;
+  if (strcmp(r->tag, "pump_flow") == 0) {
+    double q, h, npsh;
+    int32_t has;
+    s = hg_line_pumped_flow(pump_line, f, &q, &h, &npsh, &has, NULL);
+    got[n++] = tok_d(q), got[n++] = tok_d(h), got[n++] = tok_d(npsh), got[n++] = tok_d((double)has);
+  } else {
+    double h, d;
+    s = hg_line_required_head(pump_line, f, r->in[1].d, &h, &d);
+    got[n++] = tok_d(h), got[n++] = tok_d(d);
+  }
+  int same = r->err ? s == code_of_kind(r->kind) && msg_len() > 0 : s == HG_OK && same_tokens(r, got, n);
+  if (!quiet) CHECK(same, "%s fluid %lld: status %d (want %s)", r->tag, r->in[0].i, s, r->err ? r->kind : "HG_OK");
+  return !same;
+}
+
+static void test_pump_element(void) {
+  CHECK(build_pump_line(&pump_line) == HG_OK, "pump line");
+  long bad = for_each_record(ref_path, "pump_flow", check_pump_record, 0);
+  CHECK(records_seen == 2, "pump_flow records: %ld", records_seen);
+  bad += for_each_record(ref_path, "pump_eval", check_pump_record, 0);
+  CHECK(records_seen == 6, "pump_eval records: %ld", records_seen);
+  printf("bitwise: pump records, %ld differ\n", bad);
+  /* Closed form (energy balance, definition of K): 40 - 1.5e5 Q^2 = 15 + (2.5 + 12) Q^2/(2 g A^2)
+   * => Q = sqrt(25/(1.5e5 + 14.5/(2 g A^2))), A = pi 0.05^2/4. */
+  const double g = 9.80665, a = 3.14159265358979323846 * 0.05 * 0.05 / 4.0;
+  const double want = sqrt(25.0 / (1.5e5 + 14.5 / (2.0 * g * a * a)));
+  double q = -1, h = -1, npsh = -1;
+  int32_t has = -1;
+  hg_line_result *r = NULL;
+  CHECK(hg_line_pumped_flow(pump_line, fluids[1], &q, &h, &npsh, &has, &r) == HG_OK, "pumped flow: %s", last_msg());
+  CHECK(fabs(q - want) < 1e-12 * want, "pumped flow %.17g vs %.17g", q, want);
+  CHECK(fabs(h - (40.0 - 1.5e5 * want * want)) < 1e-9, "pump head %.17g", h);
+  /* NPSH at the suction is the NPSH at the outlet of the strainer before the pump. */
+  double before = -2;
+  CHECK(has == 1 && hg_line_result_npsh_available(r, 0, &before) == HG_OK && before == npsh, "NPSH %g vs %g", npsh,
+        before);
+  hg_element_result e;
+  memset(&e, 0, sizeof e);
+  e.struct_size = sizeof e;
+  CHECK(hg_line_result_element(r, 1, &e) == HG_OK && e.kind == HG_ELEMENT_PUMP && e.head_loss == -h,
+        "pump row: kind %d, head loss %g", e.kind, e.head_loss);
+  hg_line_result_free(r);
+  /* Liquid without a vapour pressure: no NPSH, and no result asked for. */
+  CHECK(hg_line_pumped_flow(pump_line, fluids[0], &q, &h, &npsh, &has, NULL) == HG_OK && has == 0 && npsh == 0.0,
+        "no vapour pressure");
+  /* Off the curve, reverse through the pump: errors naming the pump and its range. */
+  double hh, dd;
+  CHECK(hg_line_required_head(pump_line, fluids[0], 0.02, &hh, &dd) == HG_ERR_OUT_OF_RANGE &&
+            strstr(last_msg(), "pump") != NULL && strstr(last_msg(), "0.015") != NULL,
+        "beyond the curve: %s", last_msg());
+  CHECK(hg_line_required_head(pump_line, fluids[0], -1e-3, &hh, &dd) == HG_ERR_OUT_OF_RANGE &&
+            strstr(last_msg(), "reverse") != NULL,
+        "reverse: %s", last_msg());
+  /* Bad pumps: no curve, too few points, a rising monotone curve, a bad degree. */
+  double pq[3] = {0.0, 0.01, 0.02}, ph[3] = {30.0, 32.0, 20.0};
+  hg_line *l = NULL;
+  CHECK(hg_line_new(&l) == HG_OK, "line");
+  CHECK(hg_line_add_pump(NULL, pq, ph, 3, 0) == HG_ERR_NULL_POINTER, "NULL line");
+  CHECK(hg_line_add_pump(l, NULL, ph, 3, 0) == HG_ERR_NULL_POINTER, "NULL flows");
+  CHECK(hg_line_add_pump(l, pq, NULL, 3, 0) == HG_ERR_NULL_POINTER, "NULL heads");
+  CHECK(hg_line_add_pump(l, pq, ph, 0, 0) == HG_ERR_INVALID && msg_len() > 0, "empty curve: %s", last_msg());
+  CHECK(hg_line_add_pump(l, pq, ph, 3, 0) == HG_ERR_OUT_OF_RANGE && strstr(last_msg(), "heads") != NULL,
+        "rising heads: %s", last_msg());
+  CHECK(hg_line_add_pump(l, pq, ph, 3, 4) == HG_ERR_OUT_OF_RANGE && strstr(last_msg(), "degree") != NULL,
+        "degree 4: %s", last_msg());
+  ph[2] = NAN;
+  CHECK(hg_line_add_pump(l, pq, ph, 3, 2) == HG_ERR_NOT_FINITE, "NaN head");
+  /* No pump, or a lift the pump cannot reach: no flow of its own. */
+  CHECK(hg_line_add_fitting_k(l, 1.0, 0.05) == HG_OK, "fitting");
+  CHECK(hg_line_pumped_flow(l, fluids[0], &q, &h, &npsh, &has, NULL) == HG_ERR_INVALID &&
+            strstr(last_msg(), "no pump") != NULL,
+        "no pump: %s", last_msg());
+  ph[1] = 25.0, ph[2] = 20.0;
+  CHECK(hg_line_add_pump(l, pq, ph, 3, 0) == HG_OK && hg_line_add_rise(l, 50.0) == HG_OK, "weak pump");
+  CHECK(hg_line_pumped_flow(l, fluids[0], &q, &h, &npsh, &has, NULL) == HG_ERR_NO_SOLUTION, "too weak: %s",
+        last_msg());
+  CHECK(hg_line_pumped_flow(NULL, fluids[0], &q, &h, &npsh, &has, NULL) == HG_ERR_NULL_POINTER, "NULL line");
+  CHECK(hg_line_pumped_flow(l, NULL, &q, &h, &npsh, &has, NULL) == HG_ERR_NULL_POINTER, "NULL fluid");
+  CHECK(hg_line_pumped_flow(l, fluids[0], NULL, &h, &npsh, &has, NULL) == HG_ERR_NULL_POINTER, "NULL flow");
+  CHECK(hg_line_pumped_flow(l, fluids[0], &q, NULL, &npsh, &has, NULL) == HG_ERR_NULL_POINTER, "NULL head");
+  CHECK(hg_line_pumped_flow(l, fluids[0], &q, &h, NULL, &has, NULL) == HG_ERR_NULL_POINTER, "NULL npsh");
+  CHECK(hg_line_pumped_flow(l, fluids[0], &q, &h, &npsh, NULL, NULL) == HG_ERR_NULL_POINTER, "NULL has_npsh");
+  hg_line_free(l);
+  hg_line_free(pump_line);
+  /* An outside pump too weak for scenario 0 (shut-off head 2 m, as its reference record):
+   * the curves do not cross. */
+  double oq[5] = {0.0, 1e-3, 2e-3, 3e-3, 4e-3}, oh[5], o[6];
+  for (int i = 0; i < 5; i++) oh[i] = 2.0 * (1.0 - (oq[i] / 5e-3) * (oq[i] / 5e-3));
+  CHECK(hg_line_operating_point(lines[0], fluids[0], oq, oh, 5, &o[0], &o[1], &o[2], &o[3], &o[4], &o[5]) ==
+            HG_ERR_NO_SOLUTION,
+        "weak outside pump: %s", last_msg());
+}
+
 int main(int argc, char **argv) {
   if (argc < 2) {
     fprintf(stderr, "usage: %s REFERENCE_FILE\n", argv[0]);
@@ -1391,6 +1506,7 @@ int main(int argc, char **argv) {
   test_unit_slips();
   test_rated_density();
   test_resize();
+  test_pump_element();
   pthread_t th[8];
   thread_arg args[8];
   for (int i = 0; i < 8; i++) {

@@ -134,7 +134,7 @@ def test_line_options_and_errors(water):
     assert none.low == none.nominal == none.high
     with pytest.raises(hg.InvalidInputError, match="at least one element"):
         hg.Line([])
-    with pytest.raises(TypeError, match=r"elements\[1\]: expected Pipe, Fitting, Rise or Equipment"):
+    with pytest.raises(TypeError, match=r"elements\[1\]: expected Pipe, Fitting, Rise, Equipment or Pump"):
         hg.Line([pipe, "elbow"])
     with pytest.raises(hg.UnknownNameError):
         hg.Line([pipe], uncertainty="some")

@@ -172,3 +172,94 @@ pub unsafe extern "C" fn hg_line_operating_point_fit(
         }
     })
 }
+
+/// Appends a pump to `line`: its curve through `n` points (`flows` ≥ 0 strictly
+/// increasing, m³/s; `heads`, m), `degree` 0 the monotone cubic through the points (heads
+/// must not rise with flow), 2 or 3 the least-squares fit of `hg_pump_curve_fit`. In
+/// every evaluation the pump is the negative loss −H(Q) (its row's head loss, kind
+/// `HG_ELEMENT_PUMP`) with slope −dH/dQ, inside the curve's flow range only: a flow
+/// outside it (no extrapolation) or reverse through it (a pump run backwards is not
+/// modelled) is `HG_ERR_OUT_OF_RANGE` naming the pump and its range.
+///
+/// Returns `HG_OK`; `HG_ERR_INVALID` for too few points (a pump needs a curve);
+/// `HG_ERR_OUT_OF_RANGE` for a bad degree, flows not increasing or heads rising (degree
+/// 0); `HG_ERR_NOT_FINITE`; `HG_ERR_NULL_POINTER`. Needs exclusive use of `line`.
+///
+/// # Safety
+/// `line` must be NULL or a live handle used by no other thread; `flows` and `heads` NULL
+/// or valid for `n` doubles.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_add_pump(
+    line: *mut hg_line,
+    flows: *const f64,
+    heads: *const f64,
+    n: usize,
+    degree: i32,
+) -> i32 {
+    // SAFETY: forwarded contract.
+    unsafe {
+        crate::line::with_line(line, |l| {
+            let (q, h) = (
+                ffi::slice("flows", flows, n)?,
+                ffi::slice("heads", heads, n)?,
+            );
+            l.push(hydrograde::line::Element::Pump(curve(q, h, degree)?));
+            Ok(())
+        })
+    }
+}
+
+/// Where a line with its own pumps runs by itself: the flow `*flow` (m³/s) at which its
+/// required head (static head + losses + end pressure head − the pumps' head) is zero,
+/// solved in a kept bracket over the flow range the pumps' curves share; `*pump_head`
+/// (m) the pumps' head there. `*npsh_available` (m) is the NPSH available at the first
+/// pump's suction (the boundary just upstream of it) and `*has_npsh` 1, or 0 and 0 when
+/// the line has no inlet pressure or the fluid no vapour pressure. When `result` is not
+/// NULL, `*result` receives the line evaluated at the flow (free it with
+/// `hg_line_result_free`).
+///
+/// Returns `HG_OK`; `HG_ERR_INVALID` for a line without a pump or one that cannot be
+/// built; `HG_ERR_NO_SOLUTION` when the pumps' curves share no flow or the required head
+/// does not change sign over their range (the curves are not extrapolated);
+/// `HG_ERR_NULL_POINTER`. Nothing is written on error. Thread-safe (the line is only read).
+///
+/// # Safety
+/// `line` and `fluid` must be NULL or live handles; the outputs NULL or writable
+/// (`result` may be NULL).
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_line_pumped_flow(
+    line: *const hg_line,
+    fluid: *const hg_fluid,
+    flow: *mut f64,
+    pump_head: *mut f64,
+    npsh_available: *mut f64,
+    has_npsh: *mut i32,
+    result: *mut *mut crate::line::hg_line_result,
+) -> i32 {
+    guard(|| {
+        ffi::check_outs(&[
+            out_ptr("flow", flow),
+            out_ptr("pump_head", pump_head),
+            out_ptr("npsh_available", npsh_available),
+            out_ptr("has_npsh", has_npsh),
+        ])?;
+        // SAFETY: forwarded contract.
+        let (l, f) = unsafe { crate::line::line_and_fluid(line, fluid)? };
+        let p = l.pumped_flow(f)?;
+        // SAFETY: forwarded contract; checked above.
+        unsafe {
+            put("flow", flow, p.flow)?;
+            put("pump_head", pump_head, p.pump_head)?;
+            put(
+                "npsh_available",
+                npsh_available,
+                p.npsh_available.unwrap_or(0.0),
+            )?;
+            put("has_npsh", has_npsh, i32::from(p.npsh_available.is_some()))?;
+            if !result.is_null() {
+                crate::line::give(result, p.result)?;
+            }
+        }
+        Ok(())
+    })
+}

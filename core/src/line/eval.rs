@@ -280,7 +280,42 @@ impl Line {
                     ..State::passive(0.0)
                 }
             }
+            Resolved::Pump { curve } => {
+                let (lo, hi) = curve.range();
+                if !(lo..=hi).contains(&flow) {
+                    return Err(self.pump_out_of_range(i, flow));
+                }
+                // The head it adds is a negative loss; the curve gives H and dH/dQ.
+                let (head, slope) = curve.head(flow)?;
+                State {
+                    head_loss: -head,
+                    dhead_dflow: -slope,
+                    ..State::passive(0.0)
+                }
+            }
         })
+    }
+
+    /// The error for flow `flow` (m³/s) outside the curve of the pump at row `i`: the
+    /// curve is not extrapolated, and a pump run backwards is not modelled.
+    pub(crate) fn pump_out_of_range(&self, i: usize, flow: f64) -> Error {
+        let (lo, hi) = match &self.resolved[i] {
+            Resolved::Pump { curve } => curve.range(),
+            _ => (0.0, 0.0),
+        };
+        let at = self.origin[i].map_or(String::new(), |e| {
+            format!(" '{}' (element {e})", self.label(e).unwrap_or_default())
+        });
+        let why = if flow < 0.0 {
+            "is reverse through the pump: a pump run backwards (no check valve) is not modelled"
+        } else {
+            "is outside the pump's curve: the curve is not extrapolated"
+        };
+        Error::out_of_range(
+            "flow",
+            flow,
+            format!("{why}; pump{at} has a curve from {lo} to {hi} m³/s"),
+        )
     }
 
     /// The error for reverse flow `flow` (m³/s) through row `i`, which stops it. Every

@@ -19,6 +19,7 @@ mod builder;
 mod eval;
 mod path;
 mod pump;
+mod pumped;
 mod resize;
 pub(crate) use path::{Resolved, Role};
 mod options;
@@ -39,6 +40,7 @@ pub use parallel::{Split, split_flow};
 pub use pump::{
     PUMP_CURVE_MAX_FLOW, PUMP_CURVE_MAX_HEAD, PUMP_CURVE_MAX_POINTS, PumpCurve, PumpFit,
 };
+pub use pumped::PumpedFlow;
 pub use resize::Resize;
 pub use result::{ElementKind, ElementResult, LineResult, NpshCheck};
 pub use shares::{Share, Shares};
@@ -219,6 +221,11 @@ pub enum Element {
     Rise(Rise),
     /// Rated equipment.
     Equipment(Equipment),
+    /// A pump adding head H(Q) (m) from its curve: evaluated as the negative loss −H(Q)
+    /// with slope −dH/dQ, inside the curve's flow range only (no extrapolation; reverse
+    /// flow, a pump running backwards, is not modelled and is an error naming it). See
+    /// [`Line::pumped_flow`] for where a line with its own pump runs.
+    Pump(PumpCurve),
 }
 
 /// An elevation change of `height` m: positive up in the flow direction, negative for a

@@ -78,6 +78,8 @@ pub(crate) enum Resolved {
         spread: f64,
         name: String,
     },
+    /// A pump: its head is a negative loss, inside the curve's flow range only.
+    Pump { curve: super::PumpCurve },
 }
 
 /// The resolved rows of a line with, per row, the index of the element it comes from
@@ -342,6 +344,9 @@ pub(crate) fn resolve(
                         blocks_reverse: false,
                     }
                 }
+            },
+            Element::Pump(curve) => Resolved::Pump {
+                curve: curve.clone(),
             },
         });
         path.origin.push(Some(i));

@@ -26,10 +26,12 @@ pub enum ElementKind {
     /// An abrupt change of section the route implies between two elements of different
     /// bore with no contraction or expansion element of its own.
     SectionChange,
+    /// A pump (its head is the row's negative head loss).
+    Pump,
 }
 
 impl ElementKind {
-    /// `"pipe"`, `"fitting"`, `"rise"`, `"equipment"` or `"section_change"`.
+    /// `"pipe"`, `"fitting"`, `"rise"`, `"equipment"`, `"section_change"` or `"pump"`.
     pub fn name(self) -> &'static str {
         match self {
             ElementKind::Pipe => "pipe",
@@ -37,6 +39,7 @@ impl ElementKind {
             ElementKind::Rise => "rise",
             ElementKind::Equipment => "equipment",
             ElementKind::SectionChange => "section_change",
+            ElementKind::Pump => "pump",
         }
     }
 }
@@ -70,7 +73,8 @@ pub struct ElementResult {
     pub friction_factor: Option<f64>,
     /// Resistance coefficient K at this Reynolds number (fittings and fixed-K equipment).
     pub k: Option<f64>,
-    /// Head loss, m of the flowing fluid (signed with the flow; 0 for rises).
+    /// Head loss, m of the flowing fluid (signed with the flow; 0 for rises; for a pump
+    /// the negative of the head it adds, −H(Q)).
     pub head_loss: f64,
     /// d(head loss)/dQ, s/m².
     pub dhead_dflow: f64,
@@ -107,7 +111,8 @@ fn one() -> u32 {
 pub struct LineResult {
     /// The flow, m³/s (signed; at inlet conditions for a gas).
     pub flow: f64,
-    /// Friction plus minor losses, m of the flowing fluid.
+    /// Friction plus minor losses, m of the flowing fluid, less the head of the line's
+    /// pumps (a pump row's head loss is −H(Q)).
     pub head_loss: f64,
     /// ρ·g·head_loss, Pa.
     pub pressure_loss: f64,
@@ -330,6 +335,7 @@ impl Line {
             ),
             Resolved::Rise { .. } => (ElementKind::Rise, "rise".to_string()),
             Resolved::Drop { name, .. } => (ElementKind::Equipment, name.clone()),
+            Resolved::Pump { .. } => (ElementKind::Pump, "pump".to_string()),
         };
         let warnings = if self.origin[i].is_none() {
             warnings | Warnings::BORE_CHANGE_WITHOUT_TRANSITION
@@ -342,7 +348,7 @@ impl Line {
         let (bore, length) = match &self.resolved[i] {
             Resolved::Pipe { pipe, .. } => (Some(pipe.bore()), Some(pipe.length())),
             Resolved::Fitting { bore, .. } => (Some(*bore), None),
-            Resolved::Rise { .. } | Resolved::Drop { .. } => (None, None),
+            Resolved::Rise { .. } | Resolved::Drop { .. } | Resolved::Pump { .. } => (None, None),
         };
         ElementResult {
             bore,

@@ -124,7 +124,9 @@ impl Line {
                 let (loss, slope) = rated_loss(*drop, *at_flow, *rating_density, flow, 1.0);
                 Some((loss, slope, 0.0))
             }
-            Resolved::Fitting { .. } => None,
+            // A blocked reverse flow (the error) and a pump (its curve, with the range
+            // check) go through element_state.
+            Resolved::Fitting { .. } | Resolved::Pump { .. } => None,
         }
     }
 }

@@ -94,15 +94,52 @@ pub(crate) fn safeguarded_newton(
     )))
 }
 
+/// The root of `g` (value, slope; increasing) in `[lo, hi]`, bracketed: `g` at both ends
+/// first, then [`safeguarded_newton`]. Returns (x, iterations).
+///
+/// # Errors
+/// [`Error::NoSolution`] with `above(g(lo))` when g(lo) > 0, `below(g(hi))` when
+/// g(hi) < 0; the errors of `g` and of [`safeguarded_newton`].
+pub(crate) fn root_in_range(
+    mut g: impl FnMut(f64) -> Result<(f64, f64)>,
+    (lo, hi): (f64, f64),
+    above: impl FnOnce(f64) -> String,
+    below: impl FnOnce(f64) -> String,
+) -> Result<(f64, usize)> {
+    let (g_lo, _) = g(lo)?;
+    let (g_hi, _) = g(hi)?;
+    if g_lo > 0.0 {
+        return Err(Error::no_solution(above(g_lo)));
+    }
+    if g_hi < 0.0 {
+        return Err(Error::no_solution(below(g_hi)));
+    }
+    if g_lo == 0.0 {
+        return Ok((lo, 0));
+    }
+    if g_hi == 0.0 {
+        return Ok((hi, 0));
+    }
+    safeguarded_newton(g, lo, hi)
+}
+
 impl Line {
     /// The signed flow (m³/s) for which the required head equals `head` (m): gravity
     /// feed, tank to tank. A head below the static head gives reverse flow.
     ///
+    /// On a line with pumps the flow is looked for inside the range their curves share
+    /// (see [`Line::pumped_flow`]).
+    ///
     /// # Errors
     /// A line without any loss; a head that needs reverse flow through a check or foot
-    /// valve; a head no flow up to 1e6 m³/s reaches.
+    /// valve; a head no flow up to 1e6 m³/s reaches; on a line with pumps, a head no flow
+    /// inside their range reaches.
     pub fn flow_for_head(&self, fluid: &Fluid, head: f64) -> Result<FlowSolution> {
         check::finite("head", head)?;
+        // With pumps, the flow lies inside their curves' common range (pumped.rs).
+        if let Some(range) = self.pump_flow_range()? {
+            return self.flow_for_head_pumped(fluid, head, range);
+        }
         if !self.has_resistance() {
             return Err(Error::invalid(
                 "line",
@@ -199,25 +236,21 @@ impl Line {
             let (hp, dp) = pump.head(q)?;
             Ok((hs - hp, ds - dp))
         };
-        let (g_lo, _) = gap(lo)?;
-        let (g_hi, _) = gap(hi)?;
-        if g_lo > 0.0 {
-            return Err(Error::no_solution(format!(
-                "the curves do not cross: at the pump curve's smallest flow ({lo} m³/s) the line needs {:.4} m more head than the pump gives",
-                g_lo
-            )));
-        }
-        if g_hi < 0.0 {
-            return Err(Error::no_solution(format!(
-                "the curves do not cross: at the pump curve's largest flow ({hi} m³/s) the pump still gives {:.4} m more head than the line needs",
-                -g_hi
-            )));
-        }
-        let (flow, _) = if g_lo == 0.0 {
-            (lo, 0)
-        } else {
-            safeguarded_newton(gap, lo, hi)?
-        };
+        let (flow, _) = root_in_range(
+            gap,
+            (lo, hi),
+            |g_lo| {
+                format!(
+                    "the curves do not cross: at the pump curve's smallest flow ({lo} m³/s) the line needs {g_lo:.4} m more head than the pump gives"
+                )
+            },
+            |g_hi| {
+                format!(
+                    "the curves do not cross: at the pump curve's largest flow ({hi} m³/s) the pump still gives {:.4} m more head than the line needs",
+                    -g_hi
+                )
+            },
+        )?;
         let (head, dpump) = pump.head(flow)?;
         let (_, slope) = self.required_head(fluid, flow)?;
         let (flow_band, head_band) =

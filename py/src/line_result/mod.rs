@@ -312,7 +312,7 @@ fn element_dict<'py>(py: Python<'py>, e: &ElementResult) -> PyResult<Bound<'py, 
 }
 
 /// One element's share of a :class:`LineResult`: ``kind`` ("pipe", "fitting", "rise",
-/// "equipment", "section_change"), ``label``, ``element`` (index in the line, None for an
+/// "equipment", "section_change", "pump"), ``label``, ``element`` (index in the line, None for an
 /// implied change of section), ``velocity`` (m/s, None without a bore), ``reynolds``, ``regime`` and
 /// ``friction_factor`` (pipes), ``k`` (fittings), ``head_loss`` (m), ``dhead_dflow``
 /// (s/m²), ``static_head`` (m), ``pressure_out`` (Pa), ``warnings`` and the bands
@@ -326,7 +326,7 @@ pub struct PyElementResult {
 
 #[pymethods]
 impl PyElementResult {
-    /// "pipe", "fitting", "rise", "equipment" or "section_change".
+    /// "pipe", "fitting", "rise", "equipment", "section_change" or "pump".
     #[getter]
     fn kind(&self) -> &'static str {
         self.inner.kind.name()

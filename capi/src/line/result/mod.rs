@@ -20,6 +20,8 @@ pub const HG_ELEMENT_EQUIPMENT: i32 = 3;
 /// with no contraction or expansion element: a row of its own (not an element of the
 /// line), with `HG_WARN_BORE_CHANGE_WITHOUT_TRANSITION`.
 pub const HG_ELEMENT_SECTION_CHANGE: i32 = 4;
+/// A pump (`hg_line_add_pump`): its head loss is the negative of the head it adds.
+pub const HG_ELEMENT_PUMP: i32 = 5;
 
 /// The `regime` of an element that has none (every element but a pipe).
 pub const HG_REGIME_NONE: i32 = -1;
@@ -226,6 +228,7 @@ pub(crate) fn element_to_c(e: &ElementResult) -> hg_element_result {
         ElementKind::Rise => HG_ELEMENT_RISE,
         ElementKind::Equipment => HG_ELEMENT_EQUIPMENT,
         ElementKind::SectionChange => HG_ELEMENT_SECTION_CHANGE,
+        ElementKind::Pump => HG_ELEMENT_PUMP,
     };
     let (velocity, has_velocity) = flagged(e.velocity);
     let reynolds = if has_velocity == 1 {

@@ -106,9 +106,17 @@ fn element_kinds_follow_the_core() {
         (ElementKind::Rise, HG_ELEMENT_RISE),
         (ElementKind::Equipment, HG_ELEMENT_EQUIPMENT),
         (ElementKind::SectionChange, HG_ELEMENT_SECTION_CHANGE),
+        (ElementKind::Pump, HG_ELEMENT_PUMP),
     ] {
         assert_eq!(
-            ["pipe", "fitting", "rise", "equipment", "section_change"][c as usize],
+            [
+                "pipe",
+                "fitting",
+                "rise",
+                "equipment",
+                "section_change",
+                "pump"
+            ][c as usize],
             k.name()
         );
     }

@@ -51,6 +51,7 @@ impl Line {
                 None => numbered(f.method().name(), index),
             },
             Element::Equipment(q) => q.name().to_string(),
+            Element::Pump(_) => numbered("pump", index),
         });
         Some(match self.counts[index] {
             1 => own,
