@@ -90,6 +90,7 @@
 
 mod result;
 mod solve;
+mod system;
 
 pub use result::{LinkResult, NetworkSolution, NetworkWarning, NetworkWarningKind, NodeResult};
 
