@@ -90,11 +90,13 @@
 //! mains, the fire-protection codes).
 
 mod bands;
+mod json;
 mod result;
 mod solve;
 mod system;
 
 pub use bands::{MAX_BAND_WORK, NetworkBands};
+pub use json::NETWORK_JSON_VERSION;
 pub use result::{LinkResult, NetworkSolution, NetworkWarning, NetworkWarningKind, NodeResult};
 
 use crate::error::{Error, Result, check};
