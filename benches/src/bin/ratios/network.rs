@@ -44,10 +44,12 @@ pub fn network_rows(t: &mut Table) {
         };
         let n = net.links().len();
         let reps = if n > 50_000 { 3 } else { 7 };
-        for threads in [1, threads_before] {
-            if threads == threads_before && threads == 1 {
-                continue;
-            }
+        let counts = if threads_before > 1 {
+            vec![1, threads_before]
+        } else {
+            vec![1]
+        };
+        for threads in counts {
             if hydrograde::set_threads(threads).is_err() {
                 continue;
             }
