@@ -141,11 +141,12 @@ fn check(tank: f64, nodes: &[(&str, f64)], links: &[Spec], seed: u64) {
             viscosity: VISCOSITY * (1.0 + VISCOSITY_U * normal(&mut rng)),
         };
         let sol = build(tank, nodes, links, d).solve(&fluid(&d)).unwrap();
-        for i in 0..nodes.len() {
-            samples[i].push(sol.nodes[i + 1].head);
-        }
-        for k in 0..links.len() {
-            samples[nodes.len() + k].push(sol.links[k].flow);
+        let values = sol.nodes[1..]
+            .iter()
+            .map(|n| n.head)
+            .chain(sol.links.iter().map(|l| l.flow));
+        for (v, x) in samples.iter_mut().zip(values) {
+            v.push(x);
         }
     }
     for (o, v) in samples.into_iter().enumerate() {

@@ -183,13 +183,13 @@ impl Network {
                 Slot::Free(r) => x[r],
                 Slot::Fixed(_) => 0.0,
             };
-            for i in 0..nn {
+            for (i, terms) in node_terms.iter_mut().enumerate() {
                 let t = Term {
                     u: head(i, &du),
                     shift: if shifted { head(i, &ds) } else { 0.0 },
                 };
                 if t.u != 0.0 || t.shift != 0.0 {
-                    node_terms[i].push((s, t));
+                    terms.push((s, t));
                 }
             }
             let own: HashMap<usize, Term> = on.iter().copied().collect();
