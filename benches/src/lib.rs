@@ -6,6 +6,7 @@ use hydrograde::Result;
 use hydrograde::fitting::{Edge, Fitting};
 use hydrograde::fluid::Fluid;
 use hydrograde::line::{Element, Equipment, Line};
+use hydrograde::network::Network;
 use hydrograde::pipe::Pipe;
 use hydrograde::section::Section;
 
@@ -127,6 +128,53 @@ pub fn flows(n: usize) -> Vec<f64> {
         .collect()
 }
 
+/// An invented square grid of `side`×`side` junctions (at 0 m, each drawing 0.1 L/s) fed
+/// by one tank (60 m) at a corner through a 0.5 m main: 2·side·(side − 1) + 1 links of
+/// 100 m of 150 mm steel. `side` 23, 71 and 224 give about 1,000, 10,000 and 100,000
+/// links, the network benchmark's sizes.
+pub fn grid_network(side: usize) -> Result<Network> {
+    let mut net = Network::new();
+    net.fixed_head("tank", 60.0, None)?;
+    let name = |i: usize, j: usize| format!("{i}_{j}");
+    for i in 0..side {
+        for j in 0..side {
+            net.node(&name(i, j), 0.0, 1e-4)?;
+        }
+    }
+    let pipe = |d: f64, l: f64| -> Result<Line> {
+        Line::new(vec![Element::Pipe(Pipe::circular(d, l, 4.5e-5)?)])
+    };
+    net.link("feed", "tank", &name(0, 0), pipe(0.5, 10.0)?)?;
+    let l = pipe(0.15, 100.0)?;
+    for i in 0..side {
+        for j in 0..side {
+            if i + 1 < side {
+                net.link(
+                    &format!("v{i}_{j}"),
+                    &name(i, j),
+                    &name(i + 1, j),
+                    l.clone(),
+                )?;
+            }
+            if j + 1 < side {
+                net.link(
+                    &format!("h{i}_{j}"),
+                    &name(i, j),
+                    &name(i, j + 1),
+                    l.clone(),
+                )?;
+            }
+        }
+    }
+    Ok(net)
+}
+
+/// The side of the grid of [`grid_network`] with about `links` links.
+pub fn grid_side(links: usize) -> usize {
+    // 2·s·(s − 1) + 1 ≈ links.
+    ((1.0 + (1.0 + 2.0 * links as f64).sqrt()) / 2.0).round() as usize
+}
+
 #[cfg(test)]
 mod tests {
     use super::*;
@@ -156,5 +204,16 @@ mod tests {
         assert_eq!(f.len(), 100);
         assert_eq!(f[0], 1e-4);
         assert!((f[99] - 0.02).abs() < 1e-15);
+    }
+
+    #[test]
+    fn the_grid_has_the_links_it_states() {
+        // Exact count: 2·s·(s − 1) grid links plus the feed.
+        for (links, side) in [(1_000, 23), (10_000, 71), (100_000, 224)] {
+            assert_eq!(grid_side(links), side);
+        }
+        let net = grid_network(5).unwrap();
+        assert_eq!(net.links().len(), 2 * 5 * 4 + 1);
+        assert_eq!(net.nodes().len(), 26);
     }
 }

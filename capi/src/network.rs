@@ -4,7 +4,7 @@ use crate::ffi::{self, FfiResult, guard, out_ptr, put};
 use crate::fluid::hg_fluid;
 use crate::line::{give, hg_line, hg_line_result};
 use hydrograde::Error;
-use hydrograde::network::{LimitAt, Network, NetworkSolution, NetworkWarningKind};
+use hydrograde::network::{LimitAt, Network, NetworkBands, NetworkSolution, NetworkWarningKind};
 use std::ffi::c_char;
 
 /// A check or foot valve holds a link closed (`hg_network_solution_warning`).
@@ -31,6 +31,12 @@ pub struct hg_network {
 /// it stays valid after the network and the fluid are freed.
 pub struct hg_network_solution {
     solution: NetworkSolution,
+}
+
+/// The 95 % bands of a solved network: opaque. Made by `hg_network_bands_new`, released
+/// by `hg_network_bands_free`. It owns every number, so reading it computes nothing.
+pub struct hg_network_bands {
+    bands: NetworkBands,
 }
 
 /// Makes an empty network and stores it in `*out`; free it with `hg_network_free`.
@@ -603,6 +609,166 @@ pub unsafe extern "C" fn hg_network_link_result(
         let r = n.net.link_result(&f.fluid, &s.solution, &link.name)?;
         // SAFETY: checked above.
         unsafe { give(out, r) }
+    })
+}
+
+/// Reads a network from a JSON document of hydrograde's own schema (version 1: a
+/// `"hydrograde_network": 1` field, `"nodes"`, `"links"` with each link's line, optional
+/// `"options"`) and stores it in `*out`; free it with `hg_network_free`. The document goes
+/// through the same checks as building in code.
+///
+/// Returns `HG_OK`; `HG_ERR_INVALID` for text that is not such a document, another
+/// version, or any bad node, link or option (the message names it);
+/// `HG_ERR_NULL_POINTER`. On failure `*out` is left untouched. Thread-safe.
+///
+/// # Safety
+/// `text` NULL or a NUL-terminated UTF-8 string; `out` NULL or a writable `hg_network *`.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_network_from_json(
+    text: *const c_char,
+    out: *mut *mut hg_network,
+) -> i32 {
+    guard(|| {
+        ffi::check_outs(&[out_ptr("out", out)])?;
+        // SAFETY: forwarded contract.
+        let text = unsafe { ffi::c_str("text", text)? };
+        let net = Network::from_json(text)?;
+        let h = Box::into_raw(Box::new(hg_network { net }));
+        // SAFETY: checked above.
+        unsafe { put("out", out, h) }
+    })
+}
+
+/// Computes the 95 % bands of every node head and pressure and every link flow of
+/// `solution` (a solve of `network` with `fluid`): first order from the converged
+/// system, one solve per uncertainty source. Stores them in `*out`; free with
+/// `hg_network_bands_free`.
+///
+/// Returns `HG_OK`; `HG_ERR_INVALID` for a solution of another network or a network
+/// whose bands would exceed the work limit (the message gives the counts);
+/// `HG_ERR_NULL_POINTER`. On failure `*out` is left untouched. Thread-safe.
+///
+/// # Safety
+/// `network`, `fluid` and `solution` NULL or live handles; `out` NULL or a writable
+/// `hg_network_bands *`.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_network_bands_new(
+    network: *const hg_network,
+    fluid: *const hg_fluid,
+    solution: *const hg_network_solution,
+    out: *mut *mut hg_network_bands,
+) -> i32 {
+    guard(|| {
+        ffi::check_outs(&[out_ptr("out", out)])?;
+        // SAFETY: forwarded contract.
+        let (n, f, s) = unsafe {
+            (
+                ffi::handle("network", network)?,
+                ffi::handle("fluid", fluid)?,
+                ffi::handle("solution", solution)?,
+            )
+        };
+        let bands = n.net.bands(&f.fluid, &s.solution)?;
+        let h = Box::into_raw(Box::new(hg_network_bands { bands }));
+        // SAFETY: checked above.
+        unsafe { put("out", out, h) }
+    })
+}
+
+/// Releases network bands. NULL is accepted and ignored.
+///
+/// # Safety
+/// `bands` must be NULL or a live handle from `hg_network_bands_new`, not used
+/// afterwards.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_network_bands_free(bands: *mut hg_network_bands) {
+    if !bands.is_null() {
+        // SAFETY: the handle came from Box::into_raw in `hg_network_bands_new`.
+        ffi::guard_value((), || drop(unsafe { Box::from_raw(bands) }));
+    }
+}
+
+/// Writes one band's low, nominal and high ends.
+fn band_out(
+    band: &hydrograde::Band,
+    low: *mut f64,
+    nominal: *mut f64,
+    high: *mut f64,
+) -> FfiResult {
+    // SAFETY: the callers checked the pointers.
+    unsafe {
+        put("low", low, band.low)?;
+        put("nominal", nominal, band.nominal)?;
+        put("high", high, band.high)
+    }
+}
+
+/// The band of node `index`'s head (m) and of its static gauge pressure (Pa): the
+/// 95 % interval `low` … `high` around the `nominal` value, for head and pressure.
+///
+/// Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` for an index beyond the nodes;
+/// `HG_ERR_NULL_POINTER`. Thread-safe.
+///
+/// # Safety
+/// `bands` NULL or a live handle; the outputs NULL or writable.
+#[unsafe(no_mangle)]
+#[allow(clippy::too_many_arguments)]
+pub unsafe extern "C" fn hg_network_bands_node(
+    bands: *const hg_network_bands,
+    index: usize,
+    head_low: *mut f64,
+    head: *mut f64,
+    head_high: *mut f64,
+    pressure_low: *mut f64,
+    pressure: *mut f64,
+    pressure_high: *mut f64,
+) -> i32 {
+    guard(|| {
+        ffi::check_outs(&[
+            out_ptr("head_low", head_low),
+            out_ptr("head", head),
+            out_ptr("head_high", head_high),
+            out_ptr("pressure_low", pressure_low),
+            out_ptr("pressure", pressure),
+            out_ptr("pressure_high", pressure_high),
+        ])?;
+        // SAFETY: forwarded contract.
+        let b = unsafe { &ffi::handle("bands", bands)?.bands };
+        band_out(at(&b.heads, index, "nodes")?, head_low, head, head_high)?;
+        band_out(
+            at(&b.pressures, index, "nodes")?,
+            pressure_low,
+            pressure,
+            pressure_high,
+        )
+    })
+}
+
+/// The band of link `index`'s flow (m³/s): the 95 % interval `low` … `high` around the
+/// `nominal` flow.
+///
+/// Returns `HG_OK`; `HG_ERR_OUT_OF_RANGE` for an index beyond the links;
+/// `HG_ERR_NULL_POINTER`. Thread-safe.
+///
+/// # Safety
+/// `bands` NULL or a live handle; the outputs NULL or writable.
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn hg_network_bands_flow(
+    bands: *const hg_network_bands,
+    index: usize,
+    low: *mut f64,
+    nominal: *mut f64,
+    high: *mut f64,
+) -> i32 {
+    guard(|| {
+        ffi::check_outs(&[
+            out_ptr("low", low),
+            out_ptr("nominal", nominal),
+            out_ptr("high", high),
+        ])?;
+        // SAFETY: forwarded contract.
+        let b = unsafe { &ffi::handle("bands", bands)?.bands };
+        band_out(at(&b.flows, index, "links")?, low, nominal, high)
     })
 }
 

@@ -99,6 +99,13 @@ pub enum Source {
         /// The source within that branch.
         source: Box<Source>,
     },
+    /// A source that belongs to one link of a network (an element's own).
+    Link {
+        /// The link's name.
+        link: String,
+        /// The source within that link's line.
+        source: Box<Source>,
+    },
 }
 
 impl Source {
@@ -117,12 +124,13 @@ impl Source {
             Source::FittingK { element, name } => format!("K of {name} (element {element})"),
             Source::Equipment { element, name } => format!("{name} (element {element})"),
             Source::Branch { branch, source } => format!("branch {branch}: {}", source.name()),
+            Source::Link { link, source } => format!("link {link}: {}", source.name()),
         }
     }
 
     /// What kind of cause it is: `"friction_model"`, `"material_roughness"`,
     /// `"pipe_roughness"`, `"diameter"`, `"density"`, `"viscosity"`, `"catalogue_k"`,
-    /// `"fitting_k"` or `"equipment"` (a branch's source gives its inner kind).
+    /// `"fitting_k"` or `"equipment"` (a branch's or a link's source gives its inner kind).
     pub fn kind(&self) -> &'static str {
         match self {
             Source::FrictionModel => "friction_model",
@@ -134,7 +142,7 @@ impl Source {
             Source::CatalogueK(_) => "catalogue_k",
             Source::FittingK { .. } => "fitting_k",
             Source::Equipment { .. } => "equipment",
-            Source::Branch { source, .. } => source.kind(),
+            Source::Branch { source, .. } | Source::Link { source, .. } => source.kind(),
         }
     }
 
@@ -144,7 +152,7 @@ impl Source {
             Source::FrictionModel | Source::Diameter | Source::Density | Source::Viscosity => {
                 Shape::Normal
             }
-            Source::Branch { source, .. } => source.shape(),
+            Source::Branch { source, .. } | Source::Link { source, .. } => source.shape(),
             _ => Shape::Rectangular,
         }
     }

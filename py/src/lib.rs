@@ -73,6 +73,7 @@ fn _native(m: &Bound<'_, PyModule>) -> PyResult<()> {
     // network
     m.add_class::<network::PyNetwork>()?;
     m.add_class::<network::PyNetworkSolution>()?;
+    m.add_class::<network::PyNetworkBands>()?;
     m.add_class::<network::PyNodeResult>()?;
     m.add_class::<network::PyLinkResult>()?;
     m.add_class::<network::PyAvailableFlow>()?;

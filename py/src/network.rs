@@ -1,13 +1,15 @@
 //! `hydrograde.Network` and its solution.
 
 use crate::arrays::si;
+use crate::band::PyBand;
 use crate::errors::CoreResult;
 use crate::fluid::PyFluid;
 use crate::line::PyLine;
 use crate::line_result::PyLineResult;
 use crate::state;
 use hydrograde::network::{
-    AvailableFlow, LimitAt, LinkResult, Network, NetworkSolution, NodeKind, NodeResult,
+    AvailableFlow, LimitAt, LinkResult, Network, NetworkBands, NetworkSolution, NodeKind,
+    NodeResult,
 };
 use pyo3::prelude::*;
 use pyo3::types::{PyDict, PyList};
@@ -197,6 +199,36 @@ impl PyNetwork {
             .link_result(&fluid.inner, &solution.inner, name)
             .py()?;
         PyLineResult::new(py, r)
+    }
+
+    /// The 95 % bands of every node head and pressure and every link flow of
+    /// ``solution`` (a solve of this network with ``fluid``): first order from the
+    /// converged system, one solve per uncertainty source (a :class:`NetworkBands`).
+    fn bands(
+        &self,
+        py: Python<'_>,
+        fluid: &PyFluid,
+        solution: &PyNetworkSolution,
+    ) -> PyResult<PyNetworkBands> {
+        let net = &self.inner;
+        let b = py
+            .detach(|| net.bands(&fluid.inner, &solution.inner))
+            .py()?;
+        Ok(PyNetworkBands { inner: b })
+    }
+
+    /// The network as a JSON document of hydrograde's own schema (version 1).
+    fn to_json(&self) -> PyResult<String> {
+        self.inner.to_json().py()
+    }
+
+    /// A network read from a JSON document of hydrograde's own schema (version 1),
+    /// through the same checks as building it in code.
+    #[staticmethod]
+    fn from_json(text: &str) -> PyResult<Self> {
+        Ok(PyNetwork {
+            inner: Network::from_json(text).py()?,
+        })
     }
 
     fn __repr__(&self) -> String {
@@ -583,6 +615,45 @@ impl PyLinkResult {
         format!(
             "LinkResult({:?}, flow={} m³/s, closed={})",
             self.inner.name, self.inner.flow, self.inner.closed
+        )
+    }
+}
+
+/// The 95 % bands of a solved network, in the order of its nodes and links.
+#[pyclass(name = "NetworkBands", module = "hydrograde._native", frozen)]
+pub struct PyNetworkBands {
+    inner: NetworkBands,
+}
+
+fn bands_of(py: Python<'_>, b: &[hydrograde::Band]) -> PyResult<Vec<Py<PyBand>>> {
+    b.iter().map(|x| PyBand::object(py, x)).collect()
+}
+
+#[pymethods]
+impl PyNetworkBands {
+    /// Band of each node's head, m (exact at fixed-head nodes).
+    #[getter]
+    fn heads(&self, py: Python<'_>) -> PyResult<Vec<Py<PyBand>>> {
+        bands_of(py, &self.inner.heads)
+    }
+
+    /// Band of each node's static gauge pressure, Pa.
+    #[getter]
+    fn pressures(&self, py: Python<'_>) -> PyResult<Vec<Py<PyBand>>> {
+        bands_of(py, &self.inner.pressures)
+    }
+
+    /// Band of each link's flow, m³/s.
+    #[getter]
+    fn flows(&self, py: Python<'_>) -> PyResult<Vec<Py<PyBand>>> {
+        bands_of(py, &self.inner.flows)
+    }
+
+    fn __repr__(&self) -> String {
+        format!(
+            "NetworkBands({} nodes, {} links)",
+            self.inner.heads.len(),
+            self.inner.flows.len()
         )
     }
 }

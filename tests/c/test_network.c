@@ -33,6 +33,51 @@ static double rough_r(double d, double l, double e) {
   return 8.0 * f * l / (G * PI * PI * pow(d, 5.0));
 }
 
+/* Bands of a solved network: each interval holds its nominal value, which is the
+ * solution's own number; a fixed head is exact; bad indices and a solution of another
+ * network are refused. */
+static void test_bands(const hg_network *net, const hg_network_solution *s, const hg_fluid *water) {
+  hg_network_bands *b = NULL;
+  CHECK(hg_network_bands_new(net, water, s, &b) == HG_OK, "bands: %s", last_error());
+  double hl, h, hh, pl, p, ph, z, out, ql, q, qh;
+  CHECK(hg_network_bands_node(b, 0, &hl, &h, &hh, &pl, &p, &ph) == HG_OK, "node band");
+  double head, sp;
+  CHECK(hg_network_solution_node(s, 0, &head, &z, &sp, &out) == HG_OK, "node");
+  CHECK(h == head && p == sp, "nominal is the solution's head %g %g", h, head);
+  CHECK(hl < h && h < hh && pl < p && p < ph, "junction band %g %g %g", hl, h, hh);
+  CHECK(hg_network_bands_node(b, 1, &hl, &h, &hh, &pl, &p, &ph) == HG_OK && hl == hh, "fixed head exact");
+  CHECK(hg_network_bands_flow(b, 0, &ql, &q, &qh) == HG_OK && ql < q && q < qh, "flow band %g %g %g", ql, q, qh);
+  CHECK(hg_network_bands_flow(b, 3, &ql, &q, &qh) == HG_ERR_OUT_OF_RANGE, "link index past the end");
+  CHECK(hg_network_bands_node(b, 9, &hl, &h, &hh, &pl, &p, &ph) == HG_ERR_OUT_OF_RANGE, "node index past the end");
+  CHECK(hg_network_bands_flow(b, 0, NULL, &q, &qh) == HG_ERR_NULL_POINTER, "NULL out");
+  hg_network_bands_free(b);
+  hg_network_bands_free(NULL);
+  /* A solution of another network. */
+  hg_network *other = NULL;
+  hg_network_bands *none = NULL;
+  CHECK(hg_network_new(&other) == HG_OK, "other");
+  CHECK(hg_network_bands_new(other, water, s, &none) == HG_ERR_INVALID && none == NULL, "another network's solution");
+  CHECK(strstr(last_error(), "solution") != NULL, "%s", last_error());
+  hg_network_free(other);
+}
+
+/* JSON documents: refused with HG_ERR_INVALID and a message naming the fault. */
+static void test_json(void) {
+  hg_network *net = NULL;
+  CHECK(hg_network_from_json("not json", &net) == HG_ERR_INVALID && net == NULL, "not JSON");
+  CHECK(hg_network_from_json("{\"hydrograde_network\": 2, \"nodes\": [], \"links\": []}", &net) == HG_ERR_INVALID, "version 2");
+  CHECK(strstr(last_error(), "version 2") != NULL, "%s", last_error());
+  CHECK(hg_network_from_json("{\"hydrograde_network\": 1, \"nodes\": [{\"name\": \"t\", \"head\": 10.0}, {\"name\": \"a\", \"elevation\": 0.0, \"outflow\": 0.001}], \"links\": []}", &net) == HG_OK && net != NULL, "nodes only: %s", last_error());
+  size_t nn = 0, nl = 9;
+  CHECK(hg_network_counts(net, &nn, &nl) == HG_OK && nn == 2 && nl == 0, "counts %zu %zu", nn, nl);
+  hg_network_free(net);
+  net = NULL;
+  CHECK(hg_network_from_json("{\"hydrograde_network\": 1, \"nodes\": [{\"name\": \"a\"}], \"links\": []}", &net) == HG_ERR_INVALID, "junction without elevation");
+  CHECK(strstr(last_error(), "node 0 (\"a\")") != NULL, "%s", last_error());
+  CHECK(hg_network_from_json(NULL, &net) == HG_ERR_NULL_POINTER, "NULL text");
+  CHECK(hg_network_from_json("{}", NULL) == HG_ERR_NULL_POINTER, "NULL out");
+}
+
 static void test_three_reservoirs(const hg_fluid *water) {
   const double d[3] = {0.3, 0.25, 0.2}, len[3] = {1500.0, 1000.0, 2000.0}, level[3] = {100.0, 80.0, 40.0};
   const char *tanks[3] = {"t0", "t1", "t2"}, *pipes[3] = {"p0", "p1", "p2"};
@@ -82,6 +127,7 @@ static void test_three_reservoirs(const hg_fluid *water) {
   double dq, imb;
   CHECK(hg_network_solution_summary(s, &iters, &dq, &imb, &nw) == HG_OK && iters > 0 && iters < 50, "iterations %zu", iters);
   CHECK(hg_network_solution_node(s, 4, &head, &z, &p, &out) == HG_ERR_OUT_OF_RANGE, "node index past the end");
+  test_bands(net, s, water);
   hg_network_solution_free(s);
   hg_network_free(net);
 }
@@ -255,6 +301,7 @@ int main(void) {
   test_check_valve(water);
   test_bad_input(water);
   test_available_flow(water);
+  test_json();
   hg_fluid_free(water);
   return check_summary("test_network");
 }

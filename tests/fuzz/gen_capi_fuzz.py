@@ -84,6 +84,7 @@ static hg_fluid *fluids[3]; /* water, air, a liquid with uncertainty */
 static hg_line_result *results[2];
 static hg_network *networks[3]; /* empty, a tank feeding one junction, a scratch one */
 static hg_network_solution *solutions[1];
+static hg_network_bands *bands[1];
 
 static void make_scratch(void) {
   hg_line_free(lines[2]);
@@ -114,7 +115,8 @@ static void setup(void) {
       hg_network_add_fixed_head(networks[1], "tank", 30.0, NULL) ||
       hg_network_add_node(networks[1], "a", 0.0, 1e-3) ||
       hg_network_add_link(networks[1], "pipe", "tank", "a", main_line) ||
-      hg_network_solve(networks[1], fluids[0], &solutions[0]))
+      hg_network_solve(networks[1], fluids[0], &solutions[0]) ||
+      hg_network_bands_new(networks[1], fluids[0], solutions[0], &bands[0]))
     abort();
   hg_line_free(main_line);
 }
@@ -123,6 +125,7 @@ static void teardown(void) {
   for (int i = 0; i < 2; i++) hg_line_result_free(results[i]);
   for (int i = 0; i < 3; i++) hg_network_free(networks[i]);
   hg_network_solution_free(solutions[0]);
+  hg_network_bands_free(bands[0]);
 }
 
 static const hg_line *pick_line(void) { return one_in(8) ? NULL : lines[next() % 3]; }
@@ -145,6 +148,7 @@ static hg_network *pick_network_mut(void) {
   return one_in(8) ? NULL : networks[2];
 }
 static const hg_network_solution *pick_solution(void) { return one_in(8) ? NULL : solutions[0]; }
+static const hg_network_bands *pick_bands(void) { return one_in(8) ? NULL : bands[0]; }
 
 /* A text or array buffer that is NULL one time in eight. */
 static void *maybe(void *p) { return one_in(8) ? NULL : p; }
@@ -305,8 +309,10 @@ def case(index, ret, name, params, structs):
             pre.append(f"hg_network *{v} = pick_network_mut();")
         elif t == "const struct hg_network_solution *":
             pre.append(f"const hg_network_solution *{v} = pick_solution();")
+        elif t == "const struct hg_network_bands *":
+            pre.append(f"const hg_network_bands *{v} = pick_bands();")
         elif t in ("struct hg_fluid *", "struct hg_line_result *", "struct hg_network *",
-                   "struct hg_network_solution *") and name.endswith("_free"):
+                   "struct hg_network_solution *", "struct hg_network_bands *") and name.endswith("_free"):
             pre.append(f"{t} {v} = NULL;")
         elif t == "const struct hg_line *const *":
             pre.append(

@@ -205,3 +205,37 @@ def test_same_bits_as_the_c_abi(water):
     so.hg_network_solution_free(cs)
     so.hg_network_free(cn)
     so.hg_fluid_free(fl)
+
+
+def test_bands_hold_the_solution_and_name_their_sources(water):
+    net = three_reservoirs()
+    s = net.solve(water)
+    b = net.bands(water, s)
+    assert isinstance(b, hg.NetworkBands)
+    assert len(b.heads) == len(s.nodes) and len(b.flows) == len(s.links)
+    # The nominal values are the solution's own numbers, bit for bit (same core).
+    j = b.heads[0]
+    assert j.nominal == s.nodes[0].head and j.low < j.nominal < j.high
+    assert b.pressures[0].nominal == s.nodes[0].pressure
+    for band, link in zip(b.flows, s.links):
+        assert band.nominal == link.flow and band.low < band.high
+    # Tank heads are given: exact.
+    assert b.heads[1].low == b.heads[1].high
+    # A solution of another network is refused, naming the argument.
+    other = hg.Network()
+    other.fixed_head("t", head=10.0)
+    with pytest.raises(hg.HydrogradeError, match="solution"):
+        other.bands(water, s)
+
+
+def test_json_round_trip_and_bad_versions(water):
+    net = three_reservoirs()
+    text = net.to_json()
+    back = hg.Network.from_json(text)
+    # Same document back, and the same solution bit for bit (exact: the text keeps every bit).
+    assert back.to_json() == text
+    assert back.solve(water).nodes[0].head == net.solve(water).nodes[0].head
+    with pytest.raises(hg.HydrogradeError, match="version 7"):
+        hg.Network.from_json(text.replace('"hydrograde_network": 1', '"hydrograde_network": 7'))
+    with pytest.raises(hg.HydrogradeError, match="not a network document"):
+        hg.Network.from_json("[]")

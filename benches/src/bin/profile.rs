@@ -93,6 +93,26 @@ fn main() -> ExitCode {
             };
             out[0] = r.unwrap_or(f64::NAN);
         }
+        name if name.starts_with("network:") => {
+            // `network:<links>`: solve the invented grid of about that many links
+            // `points` times (building it is counted too: subtract a run with 0 solves).
+            let Some(side) = name[8..].parse().ok().map(hydrograde_benches::grid_side) else {
+                eprintln!("unknown workload {name}");
+                return ExitCode::from(2);
+            };
+            let (Ok(net), Ok(w)) = (hydrograde_benches::grid_network(side), water()) else {
+                return ExitCode::FAILURE;
+            };
+            for o in out.iter_mut() {
+                match net.solve(&w) {
+                    Ok(s) => *o = s.iterations as f64,
+                    Err(e) => {
+                        eprintln!("{e}");
+                        return ExitCode::FAILURE;
+                    }
+                }
+            }
+        }
         "batch" => {
             if let Err(e) = darcy_factor_batch(&re, &rr, &Options::default(), &mut out) {
                 eprintln!("{e}");

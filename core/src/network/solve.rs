@@ -1,87 +1,100 @@
 //! The global gradient solver (module docs of [`super`]).
 
 use super::result::{LinkResult, NetworkSolution, NetworkWarning, NetworkWarningKind, NodeResult};
+use super::system::{HeadSystem, Slot};
 use super::{Network, NodeKind};
 use crate::error::{Error, Result};
 use crate::fluid::Fluid;
 use crate::line::{Line, Resolved, SURROUNDINGS_PRESSURE};
 use crate::units::STANDARD_GRAVITY;
 use crate::warning::Warnings;
-use faer::linalg::solvers::Solve;
-use faer::sparse::linalg::solvers::{Llt, SymbolicLlt};
-use faer::sparse::{Pair, SparseColMat, SymbolicSparseColMat};
-use faer::{Mat, Side};
-use std::collections::HashMap;
 
 /// Smallest link slope dΔh/dQ the linearisation uses, s/m². A line of fittings with
 /// purely inertial K has zero slope at zero flow; the floor keeps the system definite
 /// (it is far below the laminar slope of any real pipe, so it never acts on one).
-const MIN_SLOPE: f64 = 1e-8;
+pub(super) const MIN_SLOPE: f64 = 1e-8;
 
-/// Where a node sits in the linear system.
-#[derive(Clone, Copy)]
-enum Slot {
-    /// A junction: its row.
-    Free(usize),
-    /// A fixed-head node: its head, m.
-    Fixed(f64),
+/// Links evaluated on the calling thread below this count; above it on the threads
+/// [`crate::threads::set_threads`] allows (the result is the same either way).
+const PARALLEL_LINKS: usize = 2048;
+
+/// The factorised head system is kept (a chord step of Newton's method) while no open
+/// link's slope differs from the one it was factorised with by more than this share. The
+/// step then contracts the error by about that share per iteration instead of squaring
+/// it, at a fraction of the cost of a new factorisation; flows, heads and the update all
+/// use the kept slopes, so continuity holds at every step as in a full Newton step.
+const KEEP_FACTOR_SLOPE_CHANGE: f64 = 0.01;
+
+/// What the iteration needs of a link, worked out once per solve.
+pub(super) struct LinkPlan {
+    /// The line's rises, m (the nodes' heads already hold the elevation change).
+    rise: f64,
+    /// True when the fluid's properties do not change along the line (a liquid, or a
+    /// gas with no inlet pressure): the hot path is then called directly.
+    plain: bool,
 }
 
-/// The sparsity pattern of the head system, fixed for the whole solve: a diagonal entry
-/// per junction and one lower-triangle entry per pair of junctions joined by a link.
-struct Pattern {
-    symbolic: SymbolicSparseColMat<usize>,
-    argsort: faer::sparse::Argsort<usize>,
-    llt: SymbolicLlt<usize>,
-    /// Number of distinct entries.
-    len: usize,
-    /// Value slot of each junction's diagonal.
-    diag: Vec<usize>,
-    /// Value slot of each link's off-diagonal entry (both ends junctions).
-    off: Vec<Option<usize>>,
-}
-
-impl Pattern {
-    fn new(n: usize, slots: &[Slot], ends: &[(usize, usize)]) -> Result<Pattern> {
-        let mut pairs: Vec<Pair<usize, usize>> = (0..n).map(|i| Pair::new(i, i)).collect();
-        let mut seen: HashMap<(usize, usize), usize> = HashMap::new();
-        let mut off = Vec::with_capacity(ends.len());
-        for &(u, d) in ends {
-            off.push(match (slots[u], slots[d]) {
-                (Slot::Free(a), Slot::Free(b)) => {
-                    let key = (a.max(b), a.min(b));
-                    Some(*seen.entry(key).or_insert_with(|| {
-                        pairs.push(Pair::new(key.0, key.1));
-                        pairs.len() - 1
-                    }))
-                }
-                _ => None,
-            });
+impl LinkPlan {
+    pub(super) fn of(line: &Line, fluid: &Fluid) -> LinkPlan {
+        LinkPlan {
+            rise: line.static_head(),
+            plain: !fluid.is_gas() || line.options().inlet_pressure.or(fluid.pressure).is_none(),
         }
-        let internal = |what: &str| {
-            Error::no_solution(format!(
-                "the sparse solver could not {what} the network's head system"
-            ))
+    }
+
+    /// Δh(Q) = required head − the line's rises (m) and its slope (s/m²): the numbers of
+    /// [`Line::required_head`], bit for bit, without its copy of the fluid where the
+    /// fluid does not change along the line.
+    pub(super) fn loss(&self, line: &Line, fluid: &Fluid, flow: f64) -> Result<(f64, f64)> {
+        let (h, d) = if self.plain {
+            crate::error::check::finite("flow", flow)?;
+            line.head_and_slope(fluid, flow)?
+        } else {
+            line.required_head(fluid, flow)?
         };
-        let (symbolic, argsort) = SymbolicSparseColMat::try_new_from_indices(n, n, &pairs)
-            .map_err(|_| internal("build"))?;
-        let llt = SymbolicLlt::try_new(symbolic.as_ref(), Side::Lower)
-            .map_err(|_| internal("analyse"))?;
-        Ok(Pattern {
-            symbolic,
-            argsort,
-            llt,
-            len: pairs.len(),
-            diag: (0..n).collect(),
-            off,
-        })
+        Ok((h - self.rise, d))
     }
 }
 
-/// Δh(Q) = required head − the line's rises (m) and its slope (s/m²), for a link.
-fn loss(line: &Line, fluid: &Fluid, flow: f64) -> Result<(f64, f64)> {
-    let (h, d) = line.required_head(fluid, flow)?;
-    Ok((h - line.static_head(), d))
+/// Evaluates every open link at its flow into `dh` (m) and `g` (s/m², floored at
+/// [`MIN_SLOPE`]), in parallel when there are many links and more than one thread is
+/// allowed. On an error, the first failing link in order gives it.
+fn evaluate_links(
+    net: &Network,
+    plans: &[LinkPlan],
+    fluid: &Fluid,
+    q: &[f64],
+    closed: &[bool],
+    dh: &mut [f64],
+    g: &mut [f64],
+) -> Result<()> {
+    let one = |k: usize| -> Result<(f64, f64)> {
+        if closed[k] {
+            return Ok((0.0, MIN_SLOPE));
+        }
+        let (h, d) = plans[k].loss(&net.links[k].line, fluid, q[k])?;
+        Ok((h, d.max(MIN_SLOPE)))
+    };
+    if q.len() >= PARALLEL_LINKS && crate::threads::threads() > 1 {
+        use rayon::prelude::*;
+        let done = crate::threads::in_pool(|| {
+            dh.par_iter_mut()
+                .zip(g.par_iter_mut())
+                .enumerate()
+                .try_for_each(|(k, (h, s))| {
+                    let (a, b) = one(k)?;
+                    (*h, *s) = (a, b);
+                    Ok::<(), Error>(())
+                })
+        });
+        if let Some(Ok(())) = done {
+            return Ok(());
+        }
+    }
+    for k in 0..q.len() {
+        (dh[k], g[k]) = one(k)?;
+    }
+    Ok(())
 }
 
 /// A first flow for a link: 1 m/s in its narrowest bore (common practice as a start for
@@ -172,7 +185,9 @@ fn cut_off(net: &Network, closed: &[bool]) -> Option<usize> {
     (0..n).find(|&i| !seen[i])
 }
 
-pub(super) fn solve(net: &Network, fluid: &Fluid) -> Result<NetworkSolution> {
+/// Checks a network can be solved at all: links, a fixed head in every part, a loss in
+/// every link.
+fn check_solvable(net: &Network) -> Result<()> {
     if net.links.is_empty() {
         return Err(Error::invalid("network", "has no links to solve for"));
     }
@@ -196,32 +211,64 @@ pub(super) fn solve(net: &Network, fluid: &Fluid) -> Result<NetworkSolution> {
             ),
         ));
     }
-    let opts = &net.options;
-    let mut slots = Vec::with_capacity(net.nodes.len());
-    let mut rows = 0;
-    for node in &net.nodes {
-        slots.push(match node.kind {
-            NodeKind::Junction { .. } => {
-                rows += 1;
-                Slot::Free(rows - 1)
-            }
-            NodeKind::FixedHead { head } => Slot::Fixed(head),
-        });
+    Ok(())
+}
+
+/// The layout of a network's linear system: each node's slot, each junction's outflow
+/// and each link's ends.
+pub(super) struct Layout {
+    pub(super) slots: Vec<Slot>,
+    pub(super) rows: usize,
+    pub(super) outflow: Vec<f64>,
+    pub(super) ends: Vec<(usize, usize)>,
+}
+
+impl Layout {
+    pub(super) fn of(net: &Network) -> Layout {
+        let mut slots = Vec::with_capacity(net.nodes.len());
+        let mut outflow = Vec::new();
+        for node in &net.nodes {
+            slots.push(match node.kind {
+                NodeKind::Junction { outflow: o } => {
+                    outflow.push(o);
+                    Slot::Free(outflow.len() - 1)
+                }
+                NodeKind::FixedHead { head } => Slot::Fixed(head),
+            });
+        }
+        Layout {
+            rows: outflow.len(),
+            slots,
+            outflow,
+            ends: net
+                .links
+                .iter()
+                .map(|l| (l.upstream, l.downstream))
+                .collect(),
+        }
     }
-    let outflow: Vec<f64> = net
-        .nodes
-        .iter()
-        .filter_map(|n| match n.kind {
-            NodeKind::Junction { outflow } => Some(outflow),
-            NodeKind::FixedHead { .. } => None,
-        })
-        .collect();
-    let ends: Vec<(usize, usize)> = net
+
+    /// The head of node `i` with junction heads `heads`, m.
+    pub(super) fn head(&self, i: usize, heads: &[f64]) -> f64 {
+        match self.slots[i] {
+            Slot::Free(r) => heads[r],
+            Slot::Fixed(h) => h,
+        }
+    }
+}
+
+pub(super) fn solve(net: &Network, fluid: &Fluid) -> Result<NetworkSolution> {
+    check_solvable(net)?;
+    let opts = &net.options;
+    let layout = Layout::of(net);
+    let (slots, ends) = (&layout.slots, &layout.ends);
+    let rows = layout.rows;
+    let mut system = HeadSystem::new(rows, slots, ends)?;
+    let plans: Vec<LinkPlan> = net
         .links
         .iter()
-        .map(|l| (l.upstream, l.downstream))
+        .map(|l| LinkPlan::of(&l.line, fluid))
         .collect();
-    let pattern = Pattern::new(rows, &slots, &ends)?;
     let valve: Vec<bool> = net
         .links
         .iter()
@@ -230,28 +277,25 @@ pub(super) fn solve(net: &Network, fluid: &Fluid) -> Result<NetworkSolution> {
     let mut closed = vec![false; net.links.len()];
     let mut q: Vec<f64> = net.links.iter().map(|l| first_flow(&l.line)).collect();
     let mut heads = vec![0.0; rows];
-    let head_of = |slot: Slot, heads: &[f64]| match slot {
-        Slot::Free(r) => heads[r],
-        Slot::Fixed(h) => h,
-    };
     let nl = net.links.len();
     let mut dh = vec![0.0; nl];
     let mut g = vec![0.0; nl];
+    // The slopes the factorisation holds (0: none yet).
+    let mut g_used = vec![0.0; nl];
+    let mut x = vec![0.0; rows];
     let mut last = (f64::INFINITY, 0usize); // (largest flow change, its link)
     let mut changed = true;
     for it in 1..=opts.max_iterations {
         // Evaluate every open link at the current flows, and the energy balance of the
         // heads from the last solve against them.
+        evaluate_links(net, &plans, fluid, &q, &closed, &mut dh, &mut g)?;
         let mut worst = (0.0f64, 0usize);
         for k in 0..nl {
             if closed[k] {
                 continue;
             }
-            let (h, d) = loss(&net.links[k].line, fluid, q[k])?;
-            dh[k] = h;
-            g[k] = d.max(MIN_SLOPE);
             let (u, dn) = ends[k];
-            let e = (head_of(slots[u], &heads) - head_of(slots[dn], &heads) - h).abs();
+            let e = (layout.head(u, &heads) - layout.head(dn, &heads) - dh[k]).abs();
             if e > worst.0 || e.is_nan() {
                 worst = (e, k);
             }
@@ -265,7 +309,7 @@ pub(super) fn solve(net: &Network, fluid: &Fluid) -> Result<NetworkSolution> {
             return finish(
                 net,
                 fluid,
-                &slots,
+                &layout,
                 &heads,
                 &q,
                 &closed,
@@ -288,63 +332,68 @@ pub(super) fn solve(net: &Network, fluid: &Fluid) -> Result<NetworkSolution> {
                 net.links[last.1].name
             )));
         }
-        if let Some(i) = cut_off(net, &closed) {
-            let shut: Vec<&str> = (0..nl)
-                .filter(|&k| closed[k])
-                .map(|k| net.links[k].name.as_str())
-                .collect();
-            return Err(Error::no_solution(format!(
-                "node \"{}\" is cut off from every fixed head by closed check valves (links {}): no flow can reach it",
-                net.nodes[i].name,
-                shut.join(", ")
-            )));
+        // Only a change of valve states can cut a node off.
+        if changed && closed.iter().any(|&c| c) {
+            if let Some(i) = cut_off(net, &closed) {
+                let shut: Vec<&str> = (0..nl)
+                    .filter(|&k| closed[k])
+                    .map(|k| net.links[k].name.as_str())
+                    .collect();
+                return Err(Error::no_solution(format!(
+                    "node \"{}\" is cut off from every fixed head by closed check valves (links {}): no flow can reach it",
+                    net.nodes[i].name,
+                    shut.join(", ")
+                )));
+            }
+        }
+        // Keep the factorisation while the slopes barely moved and no valve changed.
+        let keep = !changed
+            && (0..nl).all(|k| {
+                closed[k] || (g[k] - g_used[k]).abs() <= KEEP_FACTOR_SLOPE_CHANGE * g_used[k]
+            });
+        if !keep {
+            g_used.copy_from_slice(&g);
         }
         // Assemble Σ (H_n − H_m)/g_k = rhs over the junctions.
-        let mut vals = vec![0.0; pattern.len];
-        let mut rhs: Vec<f64> = outflow.iter().map(|o| -o).collect();
+        if !keep {
+            system.clear();
+        }
+        for (r, o) in x.iter_mut().zip(&layout.outflow) {
+            *r = -o;
+        }
         for k in 0..nl {
             if closed[k] {
                 continue;
             }
             let (u, d) = ends[k];
-            let w = 1.0 / g[k];
+            let w = 1.0 / g_used[k];
             let c = q[k] - dh[k] * w;
             if let Slot::Free(r) = slots[d] {
-                vals[pattern.diag[r]] += w;
-                rhs[r] += c;
+                x[r] += c;
                 if let Slot::Fixed(h) = slots[u] {
-                    rhs[r] += h * w;
+                    x[r] += h * w;
                 }
             }
             if let Slot::Free(r) = slots[u] {
-                vals[pattern.diag[r]] += w;
-                rhs[r] -= c;
+                x[r] -= c;
                 if let Slot::Fixed(h) = slots[d] {
-                    rhs[r] += h * w;
+                    x[r] += h * w;
                 }
             }
-            if let Some(s) = pattern.off[k] {
-                vals[s] -= w;
+            if !keep {
+                system.add_link(k, slots[u], slots[d], w);
             }
         }
-        let mat = SparseColMat::new_from_argsort(pattern.symbolic.clone(), &pattern.argsort, &vals)
-            .map_err(|_| Error::no_solution("the network's head system could not be assembled"))?;
-        let llt = Llt::try_new_with_symbolic(pattern.llt.clone(), mat.as_ref(), Side::Lower)
-            .map_err(|_| {
-                Error::no_solution(
-                    "the network's head system is not positive definite (a link's loss falls with flow)",
-                )
-            })?;
-        let mut x = Mat::<f64>::from_fn(rows, 1, |i, _| rhs[i]);
-        llt.solve_in_place(x.as_mut());
-        for (r, h) in heads.iter_mut().enumerate() {
-            *h = x[(r, 0)];
+        if !keep {
+            system.factorise()?;
         }
+        system.solve(&mut x);
+        heads.copy_from_slice(&x);
         if let Some(r) = heads.iter().position(|h| !h.is_finite()) {
             let name = net
                 .nodes
                 .iter()
-                .zip(&slots)
+                .zip(slots)
                 .find(|(_, s)| matches!(s, Slot::Free(j) if *j == r))
                 .map_or("?", |(n, _)| n.name.as_str());
             return Err(Error::no_solution(format!(
@@ -356,17 +405,17 @@ pub(super) fn solve(net: &Network, fluid: &Fluid) -> Result<NetworkSolution> {
         last = (0.0, 0);
         for k in 0..nl {
             let (u, d) = ends[k];
-            let drop = head_of(slots[u], &heads) - head_of(slots[d], &heads);
+            let drop = layout.head(u, &heads) - layout.head(d, &heads);
             let new = if closed[k] {
                 // Re-open when the head difference exceeds what forward flow needs.
-                let (h0, _) = loss(&net.links[k].line, fluid, 0.0)?;
+                let (h0, _) = plans[k].loss(&net.links[k].line, fluid, 0.0)?;
                 if drop > h0 {
                     closed[k] = false;
                     changed = true;
                 }
                 0.0
             } else {
-                let new = q[k] + (drop - dh[k]) / g[k];
+                let new = q[k] + (drop - dh[k]) / g_used[k];
                 if valve[k] && new < 0.0 {
                     closed[k] = true;
                     changed = true;
@@ -395,7 +444,7 @@ pub(super) fn solve(net: &Network, fluid: &Fluid) -> Result<NetworkSolution> {
 fn finish(
     net: &Network,
     fluid: &Fluid,
-    slots: &[Slot],
+    layout: &Layout,
     heads: &[f64],
     q: &[f64],
     closed: &[bool],
@@ -404,10 +453,7 @@ fn finish(
     head_imbalance: f64,
 ) -> Result<NetworkSolution> {
     let rho_g = fluid.density * STANDARD_GRAVITY;
-    let head_of = |i: usize| match slots[i] {
-        Slot::Free(r) => heads[r],
-        Slot::Fixed(h) => h,
-    };
+    let head_of = |i: usize| layout.head(i, heads);
     let mut warnings = Vec::new();
     let mut nodes = Vec::with_capacity(net.nodes.len());
     for (i, node) in net.nodes.iter().enumerate() {

@@ -4,9 +4,11 @@
 //! (1e6 turbulent points from `hydrograde_benches::turbulent_points`), so the ratios
 //! compare like with like on whatever the machine is doing at the time. Run with
 //! `cargo run --release -p hydrograde-benches --bin ratios` (or `./run.sh bench`).
-//! Pass `--capi <path to libhydrograde.so>` to time the C batch entry point too.
+//! Pass `--capi <path to libhydrograde.so>` to time the C batch entry point too, and
+//! `--network` to print only the network rows.
 
 mod capi;
+mod network;
 mod table;
 
 use hydrograde::friction::{
@@ -263,6 +265,13 @@ fn load_average() -> String {
 }
 
 fn main() {
+    if std::env::args().any(|a| a == "--network") {
+        let mut t = Table::new();
+        network::network_rows(&mut t);
+        println!("hydrograde network rows; load average {}", load_average());
+        t.print();
+        return;
+    }
     let capi = capi::path_from_args().and_then(|p| {
         capi::Batch::open(&p)
             .map_err(|e| eprintln!("C ABI not timed: {e}"))
@@ -343,6 +352,7 @@ fn main() {
     correlation_rows(&mut t, &single, &re, &rr);
 
     line_rows(&mut t, &single, &multi);
+    network::network_rows(&mut t);
 
     println!(
         "hydrograde speed ratios: {N} turbulent points (Re 4e3..1e8, eps/D 1e-6..0.05, \

@@ -12,15 +12,15 @@ use serde::{Deserialize, Serialize};
 use std::collections::HashMap;
 
 /// A line's head-loss terms at one flow.
-struct HeadTerms {
+pub(crate) struct HeadTerms {
     /// Friction plus minor losses, m.
     head_loss: f64,
     /// Required head, m.
     required: f64,
     /// d(required head)/dQ, s/m².
-    slope: f64,
+    pub(crate) slope: f64,
     /// Terms of the head loss, indexed by source.
-    terms: Vec<Term>,
+    pub(crate) terms: Vec<Term>,
 }
 
 impl HeadTerms {
@@ -34,7 +34,12 @@ impl HeadTerms {
 
 /// Head-loss terms of `line` at signed `flow` (m³/s, at inlet conditions for a gas) with
 /// the line's inlet pressure, in one pass over the elements.
-fn head_terms(line: &Line, sources: &Sources, fluid: &Fluid, flow: f64) -> Result<HeadTerms> {
+pub(crate) fn head_terms(
+    line: &Line,
+    sources: &Sources,
+    fluid: &Fluid,
+    flow: f64,
+) -> Result<HeadTerms> {
     let (work, q, _) = line.working_fluid(fluid, flow, line.options.inlet_pressure)?;
     let mut acc = vec![Term::default(); sources.len()];
     let (mut hl, mut h, mut d) = (0.0, 0.0, 0.0);

@@ -27,7 +27,7 @@ use std::borrow::Cow;
 mod derived;
 mod sample;
 pub use derived::CurveBand;
-pub(crate) use derived::{flow_for_head_band, operating_point_bands, split_bands};
+pub(crate) use derived::{flow_for_head_band, head_terms, operating_point_bands, split_bands};
 pub(crate) use sample::sample_required_head;
 
 /// Source numbers shared by every line.
