@@ -268,7 +268,7 @@ ESTATE_NODES = [
 # (cement-lined ductile iron, each with a gate valve; the booster main also a check valve).
 ESTATE_LINKS = [
     ("tank_main", "tower_tank", "gate", 0.200, 350.0),
-    ("booster_main", "booster", "unit_3", 0.150, 250.0),
+    ("booster_main", "break_tank", "unit_3", 0.150, 250.0),
     ("north_1", "gate", "unit_1", 0.150, 220.0),
     ("north_2", "unit_1", "unit_2", 0.150, 200.0),
     ("east_1", "unit_2", "hydrant_h3", 0.150, 120.0),
@@ -278,7 +278,10 @@ ESTATE_LINKS = [
     ("cross", "unit_1", "yard", 0.100, 150.0),
 ]
 TOWER_LEVEL = 62.0  # m above the datum
-BOOSTER_HEAD = 66.0  # m: held fixed, a stand-in for the pump's controlled discharge
+BREAK_TANK_LEVEL = 19.0  # m above the datum: the booster station's break tank
+# The booster pump's curve (invented): flow L/s, head m.
+BOOSTER_FLOWS = [0.0, 40.0, 80.0, 120.0, 160.0, 200.0]
+BOOSTER_HEADS = [42.0, 41.0, 38.5, 34.0, 27.5, 19.0]
 HYDRANT = "hydrant_h3"
 RESIDUAL_PRESSURE = 140e3  # Pa: an invented illustration, not a code value
 ESTATE_PLOT = REPO / "target" / "demo" / "estate_network.png"
@@ -287,16 +290,18 @@ ESTATE_PLOT = REPO / "target" / "demo" / "estate_network.png"
 def estate_network() -> hg.Network:
     net = hg.Network()
     net.fixed_head("tower_tank", head=TOWER_LEVEL, x=-250.0, y=-120.0)
-    net.fixed_head("booster", head=BOOSTER_HEAD, elevation=17.0, x=420.0, y=-120.0)
+    net.fixed_head("break_tank", head=BREAK_TANK_LEVEL, elevation=17.0, x=420.0, y=-120.0)
     for name, z, q, x, y in ESTATE_NODES:
         net.node(name, elevation=z, outflow=q * 1e-3, x=x, y=y)
     for name, up, down, d, length in ESTATE_LINKS:
-        elements = [
+        elements = []
+        if name == "booster_main":  # the booster station: its pump and non-return valve
+            curve = hg.PumpCurve([q * 1e-3 for q in BOOSTER_FLOWS], BOOSTER_HEADS)
+            elements += [hg.Pump(curve, label="booster pump"), hg.Fitting.named("swing_check_valve")]
+        elements += [
             hg.Pipe.of_material(hg.Section.circle(d), length, "cement_lined_ductile_iron"),
             hg.Fitting.named("gate_valve"),
         ]
-        if name == "booster_main":
-            elements.append(hg.Fitting.named("swing_check_valve"))  # the non-return valve
         net.link(name, up, down, hg.Line(elements))
     return net
 
@@ -304,8 +309,8 @@ def estate_network() -> hg.Network:
 def estate() -> None:
     print("\n3. Industrial estate fire-and-service main (water 10 °C, looped, tower tank and "
           "booster)\n")
-    print(f"  tower tank level {TOWER_LEVEL:.1f} m; booster discharge held at {BOOSTER_HEAD:.1f} m "
-          "(a fixed head standing in for the pump's controlled discharge)")
+    print(f"  tower tank level {TOWER_LEVEL:.1f} m; booster pump (shut-off head {BOOSTER_HEADS[0]:.0f} m) "
+          f"from a break tank at {BREAK_TANK_LEVEL:.1f} m")
     w = hg.Fluid.water(283.15, ATMOSPHERE)
     net = estate_network()
     s = net.solve(w)

@@ -250,30 +250,38 @@ static const struct {
   const char *name, *up, *down;
   double d, len;
 } estate_links[9] = {
-    {"tank_main", "tower_tank", "gate", 0.200, 350.0}, {"booster_main", "booster", "unit_3", 0.150, 250.0},
+    {"tank_main", "tower_tank", "gate", 0.200, 350.0}, {"booster_main", "break_tank", "unit_3", 0.150, 250.0},
     {"north_1", "gate", "unit_1", 0.150, 220.0},       {"north_2", "unit_1", "unit_2", 0.150, 200.0},
     {"east_1", "unit_2", "hydrant_h3", 0.150, 120.0},  {"east_2", "hydrant_h3", "unit_3", 0.150, 120.0},
     {"south", "unit_3", "yard", 0.100, 180.0},         {"west", "yard", "gate", 0.150, 260.0},
     {"cross", "unit_1", "yard", 0.100, 150.0},
 };
 #define TOWER_LEVEL 62.0
-#define BOOSTER_HEAD 66.0 /* held fixed: a stand-in for the pump's controlled discharge */
+#define BREAK_TANK_LEVEL 19.0 /* the booster station's break tank, m above the datum */
+/* The booster pump's curve (invented): flow L/s, head m. */
+static const double booster_flows[6] = {0.0, 40.0, 80.0, 120.0, 160.0, 200.0};
+static const double booster_heads[6] = {42.0, 41.0, 38.5, 34.0, 27.5, 19.0};
 #define HYDRANT "hydrant_h3"
 #define RESIDUAL_PRESSURE 140e3 /* Pa: an invented illustration, not a code value */
 
 static hg_network *estate_network(void) {
   hg_network *net = NULL;
-  double booster_z = 17.0;
+  double break_z = 17.0;
   TRY(hg_network_new(&net));
   TRY(hg_network_add_fixed_head(net, "tower_tank", TOWER_LEVEL, NULL));
-  TRY(hg_network_add_fixed_head(net, "booster", BOOSTER_HEAD, &booster_z));
+  TRY(hg_network_add_fixed_head(net, "break_tank", BREAK_TANK_LEVEL, &break_z));
   for (int i = 0; i < 6; i++) TRY(hg_network_add_node(net, estate_nodes[i].name, estate_nodes[i].z, estate_nodes[i].q * 1e-3));
   for (int i = 0; i < 9; i++) {
     hg_line *l = NULL;
     TRY(hg_line_new(&l));
+    if (i == 1) { /* the booster station: its pump and its non-return valve */
+      double q[6];
+      for (int k = 0; k < 6; k++) q[k] = booster_flows[k] * 1e-3;
+      TRY(hg_line_add_pump(l, q, booster_heads, 6, 0));
+      TRY(hg_line_add_fitting(l, "swing_check_valve", 0.0));
+    }
     TRY(hg_line_add_pipe_material(l, estate_links[i].d, estate_links[i].len, "cement_lined_ductile_iron"));
     TRY(hg_line_add_fitting(l, "gate_valve", 0.0));
-    if (i == 1) TRY(hg_line_add_fitting(l, "swing_check_valve", 0.0)); /* the booster's non-return valve */
     TRY(hg_network_add_link(net, estate_links[i].name, estate_links[i].up, estate_links[i].down, l));
     hg_line_free(l);
   }
@@ -282,7 +290,7 @@ static hg_network *estate_network(void) {
 
 static void print_network(const hg_network_solution *s) {
   printf("  %-12s %7s %8s %10s %9s\n", "node", "z m", "head m", "p kPa", "out L/s");
-  const char *names[8] = {"tower_tank", "booster"};
+  const char *names[8] = {"tower_tank", "break_tank"};
   for (int i = 0; i < 6; i++) names[i + 2] = estate_nodes[i].name;
   for (size_t i = 0; i < 8; i++) {
     double h, z, p, q;
@@ -301,9 +309,8 @@ static void print_network(const hg_network_solution *s) {
 
 static void estate(void) {
   printf("\n3. Industrial estate fire-and-service main (water 10 °C, looped, tower tank and booster)\n\n");
-  printf("  tower tank level %.1f m; booster discharge held at %.1f m (a fixed head standing in for the pump's "
-         "controlled discharge)\n",
-         TOWER_LEVEL, BOOSTER_HEAD);
+  printf("  tower tank level %.1f m; booster pump (shut-off head %.0f m) from a break tank at %.1f m\n", TOWER_LEVEL,
+         booster_heads[0], BREAK_TANK_LEVEL);
   hg_fluid *water = NULL;
   TRY(hg_fluid_water(283.15, 101325.0, &water));
   hg_network *net = estate_network();
@@ -322,7 +329,7 @@ static void estate(void) {
          RESIDUAL_PRESSURE / 1e3, at_node * 1e3);
   printf("  with %.0f kPa kept at every junction: %.1f L/s (the limit binds at %s)\n", RESIDUAL_PRESSURE / 1e3,
          everywhere * 1e3, critical >= 2 ? estate_nodes[critical - 2].name : "a fixed head");
-  const char *fixed[2] = {"tower_tank", "booster"};
+  const char *fixed[2] = {"tower_tank", "break_tank"};
   for (size_t i = 0; i < 2; i++) {
     double h, z, q;
     TRY(hg_network_solution_node(all, i, &h, &z, &p, &q));

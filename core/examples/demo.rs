@@ -243,7 +243,7 @@ const ESTATE_NODES: [(&str, f64, f64); 6] = [
 /// (cement-lined ductile iron, each with a gate valve; the booster main also a check valve).
 const ESTATE_LINKS: [(&str, &str, &str, f64, f64); 9] = [
     ("tank_main", "tower_tank", "gate", 0.200, 350.0),
-    ("booster_main", "booster", "unit_3", 0.150, 250.0),
+    ("booster_main", "break_tank", "unit_3", 0.150, 250.0),
     ("north_1", "gate", "unit_1", 0.150, 220.0),
     ("north_2", "unit_1", "unit_2", 0.150, 200.0),
     ("east_1", "unit_2", "hydrant_h3", 0.150, 120.0),
@@ -254,36 +254,39 @@ const ESTATE_LINKS: [(&str, &str, &str, f64, f64); 9] = [
 ];
 /// Water level in the elevated tank, m above the datum.
 const TOWER_LEVEL: f64 = 62.0;
-/// The booster's discharge head, m above the datum (held fixed: see `estate_network`).
-const BOOSTER_HEAD: f64 = 66.0;
+/// Water level in the booster station's break tank, m above the datum.
+const BREAK_TANK_LEVEL: f64 = 19.0;
+/// The booster pump's curve (invented): flow L/s, head m.
+const BOOSTER_FLOWS: [f64; 6] = [0.0, 40.0, 80.0, 120.0, 160.0, 200.0];
+const BOOSTER_HEADS: [f64; 6] = [42.0, 41.0, 38.5, 34.0, 27.5, 19.0];
 /// The hydrant whose available flow is asked, and the minimum residual pressure, Pa
 /// (an invented illustration, not a code value).
 const HYDRANT: &str = "hydrant_h3";
 const RESIDUAL_PRESSURE: f64 = 140e3;
 
-/// The estate's main. The booster station is modelled as a node whose discharge is held
-/// at `BOOSTER_HEAD` (its controller holds a set discharge pressure) rather than by its
-/// pump curve.
+/// The estate's main. The booster station draws from its break tank through its pump
+/// (on its curve, no speed control) and a non-return valve into the booster main.
 fn estate_network() -> Result<Network> {
     let mut net = Network::new();
     net.fixed_head("tower_tank", TOWER_LEVEL, None)?;
-    net.fixed_head("booster", BOOSTER_HEAD, Some(17.0))?;
+    net.fixed_head("break_tank", BREAK_TANK_LEVEL, Some(17.0))?;
     for (name, z, q) in ESTATE_NODES {
         net.node(name, z, q * 1e-3)?;
     }
     for (name, up, down, d, len) in ESTATE_LINKS {
-        let mut elements = vec![
-            Element::Pipe(Pipe::of_material(
-                Section::circle(d)?,
-                len,
-                "cement_lined_ductile_iron",
-            )?),
-            Element::Fitting(Fitting::named("gate_valve")?),
-        ];
+        let mut elements = Vec::new();
         if name == "booster_main" {
-            // The booster station's non-return valve.
+            // The booster station: its pump and its non-return valve.
+            let q = BOOSTER_FLOWS.map(|q| q * 1e-3);
+            elements.push(Element::Pump(PumpCurve::new(&q, &BOOSTER_HEADS)?));
             elements.push(Element::Fitting(Fitting::named("swing_check_valve")?));
         }
+        elements.push(Element::Pipe(Pipe::of_material(
+            Section::circle(d)?,
+            len,
+            "cement_lined_ductile_iron",
+        )?));
+        elements.push(Element::Fitting(Fitting::named("gate_valve")?));
         let line = Line::new(elements)?;
         net.link(name, up, down, line)?;
     }
@@ -328,7 +331,8 @@ fn estate() -> Result<()> {
         "\n3. Industrial estate fire-and-service main (water 10 °C, looped, tower tank and booster)\n"
     );
     println!(
-        "  tower tank level {TOWER_LEVEL:.1} m; booster discharge held at {BOOSTER_HEAD:.1} m (a fixed head standing in for the pump's controlled discharge)"
+        "  tower tank level {TOWER_LEVEL:.1} m; booster pump (shut-off head {:.0} m) from a break tank at {BREAK_TANK_LEVEL:.1} m",
+        BOOSTER_HEADS[0]
     );
     let water = Fluid::water(283.15, 101_325.0)?;
     let net = estate_network()?;
