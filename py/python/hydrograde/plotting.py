@@ -78,8 +78,9 @@ def _axes(ax: Any) -> Any:
     return ax
 
 
-NETWORK_SAFETY = ("estimate, no band yet; to be checked by a competent engineer (licensed or "
-                  "registered where required) against the codes that apply (fire codes for mains)")
+NETWORK_SAFETY = ("estimate; its 95 % bands come from Network.bands, not drawn here.\n"
+                  "To be checked by a competent engineer (licensed or registered where the law "
+                  "requires) against the codes that apply, fire codes for mains")
 
 
 def _note(ax: Any, text: str = SAFETY) -> None:
@@ -290,14 +291,19 @@ def network_plot(solution: Any, ax: Any = None) -> Any:
                    s=70, color=PALETTE[1], edgecolors="#1d3b53", linewidths=0.6, zorder=3,
                    label="fixed head")
         ax.legend(loc="best")
+    x_low, x_high = min(x for x, _ in at.values()), max(x for x, _ in at.values())
     for n in nodes:
-        ax.annotate(n["name"], xy=at[n["name"]], xytext=(5, -10), textcoords="offset points",
-                    fontsize=7.5, color="#1d3b53")
+        # Names to the right of the node, but to the left for the nodes in the right-hand
+        # quarter of the plan, so that the outer nodes' names stay inside the axes.
+        right = at[n["name"]][0] > x_high - 0.25 * (x_high - x_low)
+        ax.annotate(n["name"], xy=at[n["name"]], xytext=(-5 if right else 5, -10),
+                    textcoords="offset points", ha="right" if right else "left", fontsize=7.5,
+                    color="#1d3b53")
     ax.set_aspect("equal", adjustable="datalim")
     ax.margins(x=0.15, y=0.12)  # room for the node names beside the outer nodes
     engine = ax.figure.get_layout_engine()
     if engine is not None and "rect" in engine.get():
-        engine.set(rect=(0.0, 0.035, 1.0, 0.965))  # room for the caution below the x label
+        engine.set(rect=(0.0, 0.06, 1.0, 0.94))  # room for the caution below the x label
     ax.set_xlabel("plan x")
     ax.set_ylabel("plan y")
     ax.set_title(f"Network: link labels give |flow| [{_unit('flow')}]")
