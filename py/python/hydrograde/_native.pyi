@@ -34,6 +34,7 @@ __all__ = [
     "MonteCarlo",
     "AvailableFlow",
     "Network",
+    "NetworkBands",
     "NetworkSolution",
     "NodeResult",
     "OperatingPoint",
